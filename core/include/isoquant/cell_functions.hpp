@@ -1,0 +1,44 @@
+// The cell functions' logic on plain cells: argument reading, fitting and evaluation.
+// The add-in converts Calc's arguments to cells, calls these, and maps results and errors back.
+// Every function throws InputError with a message that names the argument (and row) at fault.
+#pragma once
+
+#include "isoquant/cells.hpp"
+#include "isoquant/production_fit.hpp"
+
+#include <string>
+
+namespace isoquant {
+
+// The arguments of PRODFIT (and the fit part of PRODSTAT), as the user gave them. A fit depends
+// on nothing else, so equal arguments give the same fit (the cache relies on that).
+struct FitArguments {
+    CellTable output;
+    CellTable inputs;
+    CellTable controls; // empty when omitted
+    Cell form;
+    Cell constantReturns;
+    Cell errors;
+    Cell level;
+
+    bool operator==(const FitArguments& other) const
+    {
+        return output == other.output && inputs == other.inputs && controls == other.controls &&
+               form == other.form && constantReturns == other.constantReturns && errors == other.errors &&
+               level == other.level;
+    }
+};
+
+ProductionFit fitFromArguments(const FitArguments& arguments);
+
+// Evaluators. `inputs` holds one row of input values per bundle (an optional header row of text
+// is skipped), as many columns as the model has inputs; each returns a column, one value per row.
+CellTable outputColumn(const CellTable& model, const CellTable& inputs);
+CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
+CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
+// ν; a column of ν per row when `inputs` is not empty.
+CellTable scaleColumn(const CellTable& model, const CellTable& inputs);
+// The returns-to-scale verdict at confidence level `level` (empty: 0.95).
+std::string returnsVerdictCell(const CellTable& model, const Cell& level);
+
+} // namespace isoquant

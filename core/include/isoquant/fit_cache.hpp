@@ -1,0 +1,46 @@
+// Remembers recent fits by the full content of their arguments, so that a fit referenced from
+// many cells (PRODSTAT down a column, say) is computed once. Safe to call from several threads.
+#pragma once
+
+#include "isoquant/cell_functions.hpp"
+
+#include <cstddef>
+#include <functional>
+#include <list>
+#include <memory>
+#include <mutex>
+
+namespace isoquant {
+
+class FitCache {
+public:
+    using Fitter = std::function<ProductionFit(const FitArguments&)>;
+
+    explicit FitCache(std::size_t capacity = 8, Fitter fitter = fitFromArguments)
+        : capacity_(capacity), fitter_(std::move(fitter)) {}
+
+    // The fit for these arguments: from the cache when equal arguments were fitted recently.
+    // Errors (InputError) are not cached: they are cheap to find again.
+    std::shared_ptr<const ProductionFit> fit(const FitArguments& arguments);
+
+    std::size_t fitsComputed() const;
+    void clear();
+
+private:
+    struct Entry {
+        std::size_t hash;
+        FitArguments arguments;
+        std::shared_ptr<const ProductionFit> fit;
+    };
+
+    std::size_t capacity_;
+    Fitter fitter_;
+    mutable std::mutex mutex_;
+    std::list<Entry> entries_; // most recently used first
+    std::size_t fitsComputed_ = 0;
+};
+
+// Hash of every cell and option; equal arguments hash equal.
+std::size_t hashArguments(const FitArguments& arguments);
+
+} // namespace isoquant

@@ -1,0 +1,106 @@
+// General linear least squares with classical or heteroskedasticity-robust inference.
+//
+// This is the numerical engine under every log-linear production fit, and the entry point the
+// NIST StRD linear checks call directly (any design matrix, with or without a constant column).
+#pragma once
+
+#include <Eigen/Dense>
+
+#include <optional>
+#include <stdexcept>
+#include <vector>
+
+namespace isoquant {
+
+enum class CovarianceKind {
+    classical, // σ²·(XᵀX)⁻¹ with σ² = RSS/(n−p)
+    hc1,       // White's sandwich scaled by n/(n−p)
+    hc3        // sandwich with squared residuals divided by (1−hᵢᵢ)²
+};
+
+struct LeastSquaresOptions {
+    CovarianceKind covariance = CovarianceKind::classical;
+    // Bounds are b ∓ t_{(1+level)/2}(n−p)·se.
+    double confidenceLevel = 0.95;
+    // The design counts as rank deficient when the smallest singular value of the column-scaled
+    // design (every column scaled to unit Euclidean norm) is at most this fraction of the largest.
+    double rankTolerance = 1e-13;
+    // Above this 2-norm condition number of the column-scaled design the status becomes
+    // illConditioned; the numbers are still returned.
+    double conditionWarning = 1e10;
+    // The fit counts as perfect when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
+    double perfectFitTolerance = 1e-12;
+};
+
+enum class FitStatus {
+    ok,
+    illConditioned, // full rank, but the scaled condition number exceeds conditionWarning
+    perfectFit      // every residual is zero: standard errors are zero and tests are undefined
+};
+
+struct LeastSquaresResult {
+    Eigen::VectorXd coefficients;
+    Eigen::VectorXd standardErrors;
+    Eigen::VectorXd tStatistics;
+    Eigen::VectorXd pValues; // two-sided, Student t with n−p degrees of freedom
+    Eigen::VectorXd lowerBounds;
+    Eigen::VectorXd upperBounds;
+    Eigen::MatrixXd covariance;
+    Eigen::VectorXd residuals;
+
+    Eigen::Index observations = 0;
+    Eigen::Index parameters = 0;
+    double residualDegreesOfFreedom = 0; // n − p
+    double residualSumOfSquares = 0;
+    // Centred about the mean of y when the design has a constant column, uncentred otherwise.
+    double totalSumOfSquares = 0;
+    double rSquared = 0;          // 1 − RSS/TSS
+    double adjustedRSquared = 0;  // 1 − (1 − R²)·(n − c)/(n − p), c = 1 with a constant, else 0
+    double residualStandardDeviation = 0; // √(RSS/(n−p))
+    // Wald F of all coefficients but the constant being zero, on F(q, n−p) with the chosen
+    // covariance; NaN when there is nothing to test.
+    double fStatistic = 0;
+    double fPValue = 0;
+    // Gaussian: −n/2·(ln 2π + ln(RSS/n) + 1); AIC = −2LL + 2p; BIC = −2LL + p·ln n (p excludes σ²).
+    double logLikelihood = 0;
+    double aic = 0;
+    double bic = 0;
+    double conditionNumber = 0; // of the column-scaled design
+    std::optional<Eigen::Index> interceptColumn;
+    CovarianceKind covarianceKind = CovarianceKind::classical;
+    double confidenceLevel = 0.95;
+    FitStatus status = FitStatus::ok;
+};
+
+// Thrown when the design is numerically rank deficient. `columns` lists the design columns with a
+// non-negligible weight in the (near) null-space direction: those that are collinear together.
+class CollinearColumns : public std::runtime_error {
+public:
+    explicit CollinearColumns(std::vector<Eigen::Index> columns);
+    const std::vector<Eigen::Index>& columns() const { return columns_; }
+
+private:
+    std::vector<Eigen::Index> columns_;
+};
+
+// Fits y = X·b by column-pivoting Householder QR on the column-scaled design, with one step of
+// iterative refinement. `interceptColumn` names the constant column, if any: it decides how TSS,
+// R² and the overall F are formed. Requires rows(X) > cols(X) ≥ 1 and finite data
+// (std::invalid_argument otherwise); throws CollinearColumns at numerical rank deficiency.
+LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
+                                   std::optional<Eigen::Index> interceptColumn,
+                                   const LeastSquaresOptions& options = {});
+
+struct WaldTest {
+    double fStatistic = 0;
+    double numeratorDegreesOfFreedom = 0;
+    double denominatorDegreesOfFreedom = 0;
+    double pValue = 0; // upper tail of F(q, n−p)
+};
+
+// Wald F test of the q linear restrictions R·b = r with the fit's own covariance:
+// F = (Rb − r)ᵀ (R V Rᵀ)⁻¹ (Rb − r) / q.
+WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::MatrixXd& restrictions,
+                                const Eigen::VectorXd& values);
+
+} // namespace isoquant

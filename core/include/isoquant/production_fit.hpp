@@ -1,0 +1,80 @@
+// Fitting a production function to observed output and inputs.
+//
+// Cobb-Douglas: Y = A·Πᵢ xᵢ^bᵢ·exp(Σⱼ cⱼ·zⱼ + u), fitted by least squares on logs:
+//   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ + u,
+// with controls zⱼ (an unemployment rate, a 0/1 dummy) entered as they are, not logged.
+//
+// Conventions (the same for every covariance kind):
+// - p counts the regression parameters actually estimated; inference uses t(n−p) and F(q, n−p).
+// - R² = 1 − RSS/TSS of ln Y, also when constant returns are imposed.
+// - Log-likelihood is Gaussian on ln Y; AIC = −2LL + 2p and BIC = −2LL + p·ln n (σ² not counted).
+// - With constant returns imposed the regression run is ln(Y/x_k) on ln(xᵢ/x_k), i < k, and the
+//   controls; its F tests that all of its slopes are zero.
+// - The returns-to-scale verdict tests ν = Σ bᵢ = 1 at α = 1 − confidence level.
+#pragma once
+
+#include "isoquant/least_squares.hpp"
+#include "isoquant/production_form.hpp"
+
+#include <Eigen/Dense>
+
+#include <string>
+#include <vector>
+
+namespace isoquant {
+
+struct ProductionData {
+    Eigen::VectorXd output;          // n values, positive
+    Eigen::MatrixXd inputs;          // n × k, positive
+    Eigen::MatrixXd controls;        // n × m, finite (m may be 0)
+    std::vector<std::string> inputLabels;
+    std::vector<std::string> controlLabels;
+};
+
+struct ProductionFitOptions {
+    ProductionForm form = ProductionForm::cobbDouglas;
+    bool constantReturns = false;
+    CovarianceKind covariance = CovarianceKind::classical;
+    double confidenceLevel = 0.95;
+};
+
+struct ReturnsToScale {
+    double estimate = 0;       // ν = Σ bᵢ
+    double standardError = 0;  // √(1ᵀ V 1) over the exponents' covariance block
+    double fStatistic = 0;     // Wald F of ν = 1 (NaN when imposed or undefined)
+    double pValue = 0;
+    bool imposed = false;
+    std::string verdict;       // "increasing", "constant", "decreasing" or "constant (imposed)"
+};
+
+struct ProductionFit {
+    ProductionForm form = ProductionForm::cobbDouglas;
+    std::vector<std::string> inputLabels;
+    std::vector<std::string> controlLabels;
+    // Parameters in the order ln A, the k exponents, the m control coefficients.
+    Eigen::VectorXd estimates;
+    Eigen::VectorXd standardErrors;
+    Eigen::VectorXd tStatistics;
+    Eigen::VectorXd pValues;
+    Eigen::VectorXd lowerBounds;
+    Eigen::VectorXd upperBounds;
+    Eigen::MatrixXd covariance;
+    // The regression actually run: n, p, RSS, F, log-likelihood, AIC, BIC, condition number.
+    LeastSquaresResult regression;
+    double rSquared = 0;         // on ln Y
+    double adjustedRSquared = 0; // 1 − (1 − R²)(n − 1)/(n − p)
+    ReturnsToScale returns;
+    // ln A + Σⱼ cⱼ·mean(zⱼ): the evaluators' ln A when there are controls.
+    double logScaleAtControlMeans = 0;
+    FitStatus status = FitStatus::ok;
+};
+
+// The returns-to-scale verdict: "constant (imposed)" when imposed; else "constant" when the test
+// of ν = 1 has p ≥ α = 1 − level, otherwise "increasing" or "decreasing" by ν. With no test
+// (pValue NaN: a hand-typed model, an exact fit) the verdict follows ν alone.
+std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed);
+
+// Throws InputError for too few rows and for collinear inputs (naming them).
+ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptions& options);
+
+} // namespace isoquant

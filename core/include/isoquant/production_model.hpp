@@ -1,0 +1,47 @@
+// A fitted or hand-typed technology, read back from cells for the evaluators.
+//
+// `model` is either a PRODFIT table or a small table the user types: two or more columns, labels
+// in the first and values in the second, with a row "form" (e.g. cobb-douglas), a row "ln A" (or
+// "A") and one exponent row per input, in input order. Rows up to the first empty row are
+// parameters; rows after it must be statistic rows of a PRODFIT table. A row labelled
+// "<label> (control)" is a control's coefficient; with controls the evaluators use the row
+// "ln A at control means" as ln A.
+#pragma once
+
+#include "isoquant/cells.hpp"
+#include "isoquant/cobb_douglas.hpp"
+#include "isoquant/production_form.hpp"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace isoquant {
+
+struct ScaleTest {
+    double estimate = 0;
+    double standardError = 0;
+    double fStatistic = 0;
+    double pValue = 0;
+    bool imposed = false;
+};
+
+struct ProductionModel {
+    ProductionForm form = ProductionForm::cobbDouglas;
+    std::vector<std::string> inputLabels;
+    CobbDouglas technology; // ln A as the evaluators use it
+    // The test of ν = 1 from a PRODFIT table; absent for a hand-typed model.
+    std::optional<ScaleTest> scaleTest;
+};
+
+// Throws InputError naming "model" and the row of the range.
+ProductionModel readProductionModel(const CellTable& range);
+
+// Position (0-based) of the input a user named by 1-based number or by label.
+Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& model, const std::string& argument);
+
+// "increasing", "constant", "decreasing" or "constant (imposed)": by the Wald test at
+// α = 1 − level when the model carries one, else by ν alone.
+std::string returnsVerdict(const ProductionModel& model, double level);
+
+} // namespace isoquant

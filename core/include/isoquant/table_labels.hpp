@@ -1,0 +1,34 @@
+// The fixed words of the PRODFIT table, shared by the writer and the model reader.
+#pragma once
+
+#include <array>
+
+namespace isoquant {
+
+inline constexpr std::array<const char*, 7> headerLabels{"term", "estimate", "std. error", "t",
+                                                         "p-value", "low", "high"};
+inline constexpr const char* logScaleLabel = "ln A";
+inline constexpr const char* scaleLabel = "A"; // a hand-typed model may give A instead of ln A
+inline constexpr const char* controlSuffix = " (control)";
+inline constexpr const char* observationsLabel = "observations";
+inline constexpr const char* rSquaredLabel = "R2";
+inline constexpr const char* adjustedRSquaredLabel = "adjusted R2";
+inline constexpr const char* residualSdLabel = "residual SD";
+inline constexpr const char* overallTestLabel = "F (slopes = 0)";
+inline constexpr const char* logLikelihoodLabel = "log-likelihood";
+inline constexpr const char* aicLabel = "AIC";
+inline constexpr const char* bicLabel = "BIC";
+inline constexpr const char* returnsLabel = "returns to scale";
+inline constexpr const char* verdictLabel = "verdict";
+inline constexpr const char* formLabel = "form";
+inline constexpr const char* controlMeansLabel = "ln A at control means";
+inline constexpr const char* notAvailableText = "n/a";
+inline constexpr const char* imposedText = "imposed";
+
+// Labels of the statistic rows, which are never inputs.
+inline constexpr std::array<const char*, 12> statisticLabels{
+    observationsLabel, rSquaredLabel,  adjustedRSquaredLabel, residualSdLabel,
+    overallTestLabel,  logLikelihoodLabel, aicLabel,           bicLabel,
+    returnsLabel,      verdictLabel,   formLabel,             controlMeansLabel};
+
+} // namespace isoquant

@@ -1,0 +1,19 @@
+// Small text helpers shared by the option, label and table code.
+#pragma once
+
+#include <string>
+#include <string_view>
+
+namespace isoquant {
+
+// ASCII lower case; labels and option words compare case-insensitively.
+std::string lowerCase(std::string_view text);
+bool equalsIgnoringCase(std::string_view left, std::string_view right);
+
+// Shortest text that reads back as the same double ("0", "17", "0.25", "1e-300").
+std::string formatNumber(double value);
+
+// 'text' in single quotes, cut to a readable length.
+std::string quoted(std::string_view text);
+
+} // namespace isoquant

@@ -1,0 +1,120 @@
+#include "isoquant/cell_functions.hpp"
+
+#include "isoquant/input_error.hpp"
+#include "isoquant/numeric_range.hpp"
+#include "isoquant/option_arguments.hpp"
+#include "isoquant/production_model.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+std::string dataRowsText(Eigen::Index rows) { return std::to_string(rows) + (rows == 1 ? " row" : " rows"); }
+
+void requireSameRows(const NumericColumns& output, const NumericColumns& other, const std::string& name)
+{
+    if (other.values.rows() == output.values.rows()) return;
+    std::string hint;
+    if (output.hasHeader != other.hasHeader)
+        hint = " (a header row of text was found in " + std::string(output.hasHeader ? "output" : name) + " only)";
+    throw InputError("output has " + dataRowsText(output.values.rows()) + " of data but " + name + " has " +
+                     dataRowsText(other.values.rows()) + hint);
+}
+
+NumericColumns readBundles(const CellTable& inputs, const ProductionModel& model)
+{
+    const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
+    const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
+    if (bundles.values.cols() != k)
+        throw InputError("inputs: has " + std::to_string(bundles.values.cols()) + " columns but the model has " +
+                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
+    return bundles;
+}
+
+// Applies `value(bundle)` to every row; a result too large for a double is reported, not shown as inf.
+template <typename Evaluate>
+CellTable columnOf(const NumericColumns& bundles, Evaluate value)
+{
+    CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
+        const double result = value(Eigen::VectorXd(bundles.values.row(row).transpose()));
+        if (!std::isfinite(result))
+            throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
+                             " gives a result too large to represent");
+        column.at(static_cast<std::size_t>(row), 0) = result;
+    }
+    return column;
+}
+
+} // namespace
+
+ProductionFit fitFromArguments(const FitArguments& arguments)
+{
+    ProductionFitOptions options;
+    options.form = readFormArgument(arguments.form);
+    options.constantReturns = readSwitchArgument(arguments.constantReturns, "constant returns");
+    options.covariance = readErrorsArgument(arguments.errors);
+    options.confidenceLevel = readLevelArgument(arguments.level, "level");
+
+    const NumericColumns output = readNumericColumns(arguments.output, "output", ValueRule::positive, "output");
+    if (output.values.cols() != 1)
+        throw InputError("output: must be one column; it has " + std::to_string(output.values.cols()));
+    const NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input");
+    requireSameRows(output, inputs, "inputs");
+
+    ProductionData data;
+    data.output = output.values.col(0);
+    data.inputs = inputs.values;
+    data.inputLabels = inputs.labels;
+    if (!arguments.controls.empty()) {
+        const NumericColumns controls = readNumericColumns(arguments.controls, "controls", ValueRule::finite, "control");
+        requireSameRows(output, controls, "controls");
+        data.controls = controls.values;
+        data.controlLabels = controls.labels;
+    } else {
+        data.controls.resize(data.output.size(), 0);
+    }
+    return fitProduction(data, options);
+}
+
+CellTable outputColumn(const CellTable& model, const CellTable& inputs)
+{
+    const ProductionModel technology = readProductionModel(model);
+    return columnOf(readBundles(inputs, technology),
+                    [&](const Eigen::VectorXd& bundle) { return technology.technology.output(bundle); });
+}
+
+CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+{
+    const ProductionModel technology = readProductionModel(model);
+    const Eigen::Index chosen = readInputSelector(input, technology, "input");
+    return columnOf(readBundles(inputs, technology), [&](const Eigen::VectorXd& bundle) {
+        return technology.technology.marginalProduct(bundle, chosen);
+    });
+}
+
+CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+{
+    const ProductionModel technology = readProductionModel(model);
+    const Eigen::Index chosen = readInputSelector(input, technology, "input");
+    return columnOf(readBundles(inputs, technology),
+                    [&](const Eigen::VectorXd&) { return technology.technology.elasticity(chosen); });
+}
+
+CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
+{
+    const ProductionModel technology = readProductionModel(model);
+    if (inputs.empty()) return singleCell(technology.technology.scaleElasticity());
+    return columnOf(readBundles(inputs, technology),
+                    [&](const Eigen::VectorXd&) { return technology.technology.scaleElasticity(); });
+}
+
+std::string returnsVerdictCell(const CellTable& model, const Cell& level)
+{
+    const double confidence = readLevelArgument(level, "level");
+    return returnsVerdict(readProductionModel(model), confidence);
+}
+
+} // namespace isoquant

@@ -1,0 +1,81 @@
+#include "isoquant/fit_cache.hpp"
+
+#include <cstring>
+
+namespace isoquant {
+
+namespace {
+
+void combine(std::size_t& seed, std::size_t value)
+{
+    // The boost::hash_combine mixing step.
+    seed ^= value + 0x9e3779b97f4a7c15ULL + (seed << 6) + (seed >> 2);
+}
+
+void hashCell(std::size_t& seed, const Cell& cell)
+{
+    combine(seed, cell.index());
+    if (isNumber(cell)) {
+        const double value = std::get<double>(cell) == 0 ? 0.0 : std::get<double>(cell); // -0 == 0
+        std::uint64_t bits = 0;
+        std::memcpy(&bits, &value, sizeof bits);
+        combine(seed, std::hash<std::uint64_t>{}(bits));
+    } else if (isText(cell)) {
+        combine(seed, std::hash<std::string>{}(std::get<std::string>(cell)));
+    }
+}
+
+void hashTable(std::size_t& seed, const CellTable& table)
+{
+    combine(seed, table.rows());
+    combine(seed, table.columns());
+    for (std::size_t row = 0; row < table.rows(); ++row)
+        for (std::size_t column = 0; column < table.columns(); ++column) hashCell(seed, table.at(row, column));
+}
+
+} // namespace
+
+std::size_t hashArguments(const FitArguments& arguments)
+{
+    std::size_t seed = 0;
+    hashTable(seed, arguments.output);
+    hashTable(seed, arguments.inputs);
+    hashTable(seed, arguments.controls);
+    for (const Cell* option : {&arguments.form, &arguments.constantReturns, &arguments.errors, &arguments.level})
+        hashCell(seed, *option);
+    return seed;
+}
+
+std::shared_ptr<const ProductionFit> FitCache::fit(const FitArguments& arguments)
+{
+    const std::size_t hash = hashArguments(arguments);
+    {
+        const std::lock_guard<std::mutex> lock(mutex_);
+        for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
+            if (entry->hash == hash && entry->arguments == arguments) {
+                entries_.splice(entries_.begin(), entries_, entry);
+                return entries_.front().fit;
+            }
+        }
+    }
+    auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
+    const std::lock_guard<std::mutex> lock(mutex_);
+    ++fitsComputed_;
+    entries_.push_front(Entry{hash, arguments, computed});
+    if (entries_.size() > capacity_) entries_.pop_back();
+    return computed;
+}
+
+std::size_t FitCache::fitsComputed() const
+{
+    const std::lock_guard<std::mutex> lock(mutex_);
+    return fitsComputed_;
+}
+
+void FitCache::clear()
+{
+    const std::lock_guard<std::mutex> lock(mutex_);
+    entries_.clear();
+}
+
+} // namespace isoquant

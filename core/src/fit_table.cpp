@@ -1,0 +1,144 @@
+#include "isoquant/fit_table.hpp"
+
+#include "isoquant/input_error.hpp"
+#include "isoquant/text.hpp"
+#include "isoquant/table_labels.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+Cell numberCell(double value)
+{
+    if (std::isfinite(value)) return value;
+    return std::string(notAvailableText);
+}
+
+class TableWriter {
+public:
+    explicit TableWriter(std::size_t rows) : table_(rows, headerLabels.size()) {}
+
+    void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
+    {
+        put(label, {fit.estimates(index), fit.standardErrors(index), fit.tStatistics(index), fit.pValues(index),
+                    fit.lowerBounds(index), fit.upperBounds(index)});
+    }
+    void valueRow(const char* label, double value) { put(label, {value}); }
+    void textRow(const char* label, std::initializer_list<std::string> texts)
+    {
+        table_.at(row_, 0) = std::string(label);
+        std::size_t column = 1;
+        for (const auto& text : texts) {
+            if (!text.empty()) table_.at(row_, column) = text;
+            ++column;
+        }
+        ++row_;
+    }
+    void put(const std::string& label, std::initializer_list<Cell> values)
+    {
+        table_.at(row_, 0) = label;
+        std::size_t column = 1;
+        for (const auto& value : values) {
+            table_.at(row_, column) = isNumber(value) ? numberCell(std::get<double>(value)) : value;
+            ++column;
+        }
+        ++row_;
+    }
+    void skipRow() { ++row_; }
+    CellTable finish() { return std::move(table_); }
+
+private:
+    CellTable table_;
+    std::size_t row_ = 0;
+};
+
+std::string statusNote(const ProductionFit& fit)
+{
+    switch (fit.status) {
+    case FitStatus::ok: return "";
+    case FitStatus::illConditioned:
+        return "note: inputs nearly collinear (scaled condition number " +
+               formatNumber(std::round(fit.regression.conditionNumber / 1e9) * 1e9) + "); estimates are fragile";
+    case FitStatus::perfectFit: return "note: the fit is exact; standard errors and tests are undefined";
+    }
+    return "";
+}
+
+std::size_t findRow(const CellTable& table, const std::string& wanted)
+{
+    for (std::size_t row = 0; row < table.rows(); ++row) {
+        const Cell& cell = table.at(row, 0);
+        if (!isText(cell)) continue;
+        const std::string& label = std::get<std::string>(cell);
+        if (equalsIgnoringCase(label, wanted) || equalsIgnoringCase(label, wanted + controlSuffix)) return row;
+    }
+    if (equalsIgnoringCase(wanted, "F")) return findRow(table, overallTestLabel);
+    throw InputError("row label: " + quoted(wanted) + " is not a row of the table");
+}
+
+} // namespace
+
+std::size_t fitTableRows(std::size_t inputs, std::size_t controls)
+{
+    return inputs + controls + 14 + (controls > 0 ? 1 : 0);
+}
+
+CellTable fitTable(const ProductionFit& fit)
+{
+    const std::size_t k = fit.inputLabels.size();
+    const std::size_t m = fit.controlLabels.size();
+    TableWriter writer(fitTableRows(k, m));
+    writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
+                                     headerLabels[5], headerLabels[6]});
+    writer.parameterRow(logScaleLabel, fit, 0);
+    for (std::size_t i = 0; i < k; ++i) writer.parameterRow(fit.inputLabels[i], fit, static_cast<Eigen::Index>(1 + i));
+    for (std::size_t j = 0; j < m; ++j)
+        writer.parameterRow(fit.controlLabels[j] + controlSuffix, fit, static_cast<Eigen::Index>(1 + k + j));
+    writer.skipRow();
+
+    const LeastSquaresResult& regression = fit.regression;
+    writer.valueRow(observationsLabel, static_cast<double>(regression.observations));
+    writer.valueRow(rSquaredLabel, fit.rSquared);
+    writer.valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
+    writer.valueRow(residualSdLabel, regression.residualStandardDeviation);
+    writer.put(overallTestLabel, {Cell{}, Cell{}, regression.fStatistic, regression.fPValue});
+    writer.valueRow(logLikelihoodLabel, regression.logLikelihood);
+    writer.valueRow(aicLabel, regression.aic);
+    writer.valueRow(bicLabel, regression.bic);
+    const ReturnsToScale& returns = fit.returns;
+    if (returns.imposed)
+        writer.put(returnsLabel, {returns.estimate, std::string(imposedText)});
+    else
+        writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.fStatistic, returns.pValue});
+    writer.textRow(verdictLabel, {returns.verdict});
+    writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});
+    if (m > 0) writer.valueRow(controlMeansLabel, fit.logScaleAtControlMeans);
+    return writer.finish();
+}
+
+Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel)
+{
+    if (!isText(rowLabel) || std::get<std::string>(rowLabel).empty())
+        throw InputError("row label: give the label of a row of the table, such as \"R2\" or an input's label");
+    const std::size_t row = findRow(table, std::get<std::string>(rowLabel));
+
+    std::size_t column = 1;
+    if (isText(columnLabel) && !std::get<std::string>(columnLabel).empty()) {
+        const std::string& wanted = std::get<std::string>(columnLabel);
+        column = headerLabels.size();
+        for (std::size_t c = 1; c < headerLabels.size(); ++c)
+            if (equalsIgnoringCase(wanted, headerLabels[c])) column = c;
+        if (column == headerLabels.size())
+            throw InputError("column label: " + quoted(wanted) +
+                             " is not a column; use estimate, std. error, t, p-value, low or high");
+    } else if (!isEmpty(columnLabel) && !isText(columnLabel)) {
+        throw InputError("column label: give a column's label, such as \"p-value\"");
+    } else if (isEmpty(table.at(row, 1))) {
+        column = 3; // rows that hold only a test statistic
+    }
+    return table.at(row, column);
+}
+
+} // namespace isoquant

@@ -1,0 +1,180 @@
+#include "isoquant/production_model.hpp"
+
+#include "isoquant/input_error.hpp"
+#include "isoquant/option_arguments.hpp"
+#include "isoquant/production_fit.hpp"
+#include "isoquant/table_labels.hpp"
+#include "isoquant/text.hpp"
+
+#include <cmath>
+#include <limits>
+
+namespace isoquant {
+
+namespace {
+
+constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
+
+std::string rowPlace(std::size_t row) { return "model: row " + std::to_string(row + 1); }
+
+bool rowIsEmpty(const CellTable& range, std::size_t row)
+{
+    for (std::size_t column = 0; column < range.columns(); ++column) {
+        const Cell& cell = range.at(row, column);
+        if (!isEmpty(cell) && !(isText(cell) && std::get<std::string>(cell).empty())) return false;
+    }
+    return true;
+}
+
+bool endsWith(const std::string& text, const std::string& ending)
+{
+    return text.size() >= ending.size() && equalsIgnoringCase(text.substr(text.size() - ending.size()), ending);
+}
+
+bool isStatisticLabel(const std::string& label)
+{
+    for (const char* statistic : statisticLabels)
+        if (equalsIgnoringCase(label, statistic)) return true;
+    return false;
+}
+
+double requiredNumber(const CellTable& range, std::size_t row, const std::string& label)
+{
+    const Cell& cell = range.at(row, 1);
+    if (!isNumber(cell) || !std::isfinite(std::get<double>(cell)))
+        throw InputError(rowPlace(row) + " (" + quoted(label) + ") has no number in its second column");
+    return std::get<double>(cell);
+}
+
+// A number in `column` of the row, or NaN where the cell holds none (an "n/a", say).
+double optionalNumber(const CellTable& range, std::size_t row, std::size_t column)
+{
+    if (column >= range.columns() || !isNumber(range.at(row, column))) return notANumber;
+    return std::get<double>(range.at(row, column));
+}
+
+struct ModelRows {
+    std::optional<ProductionForm> form;
+    std::optional<double> logScale;
+    std::optional<double> logScaleAtControlMeans;
+    std::optional<ScaleTest> scaleTest;
+    std::vector<std::string> inputLabels;
+    std::vector<double> exponents;
+};
+
+void readStatisticRow(const CellTable& range, std::size_t row, const std::string& label, ModelRows& rows)
+{
+    if (equalsIgnoringCase(label, controlMeansLabel)) {
+        rows.logScaleAtControlMeans = requiredNumber(range, row, label);
+    } else if (equalsIgnoringCase(label, returnsLabel)) {
+        ScaleTest test;
+        test.estimate = requiredNumber(range, row, label);
+        test.imposed = range.columns() > 2 && isText(range.at(row, 2)) &&
+                       equalsIgnoringCase(std::get<std::string>(range.at(row, 2)), imposedText);
+        test.standardError = optionalNumber(range, row, 2);
+        test.fStatistic = optionalNumber(range, row, 3);
+        test.pValue = optionalNumber(range, row, 4);
+        rows.scaleTest = test;
+    }
+}
+
+void readFormRow(const CellTable& range, std::size_t row, ModelRows& rows)
+{
+    try {
+        rows.form = readFormArgument(range.at(row, 1));
+    } catch (const InputError&) {
+        throw InputError(rowPlace(row) + " (form) must hold \"cobb-douglas\", \"ces\" or \"translog\"");
+    }
+}
+
+ModelRows readRows(const CellTable& range)
+{
+    ModelRows rows;
+    bool inParameters = true; // until the first empty row
+    for (std::size_t row = 0; row < range.rows(); ++row) {
+        if (rowIsEmpty(range, row)) {
+            inParameters = false;
+            continue;
+        }
+        const Cell& labelCell = range.at(row, 0);
+        if (!isText(labelCell) || std::get<std::string>(labelCell).empty())
+            throw InputError(rowPlace(row) + " has no label in its first column");
+        const std::string& label = std::get<std::string>(labelCell);
+        if (equalsIgnoringCase(label, headerLabels[0])) continue;
+        if (equalsIgnoringCase(label, formLabel)) {
+            readFormRow(range, row, rows);
+        } else if (equalsIgnoringCase(label, logScaleLabel)) {
+            rows.logScale = requiredNumber(range, row, label);
+        } else if (equalsIgnoringCase(label, scaleLabel)) {
+            const double scale = requiredNumber(range, row, label);
+            if (scale <= 0) throw InputError(rowPlace(row) + " (A) must be positive");
+            rows.logScale = std::log(scale);
+        } else if (isStatisticLabel(label)) {
+            readStatisticRow(range, row, label, rows);
+        } else if (!inParameters) {
+            throw InputError(rowPlace(row) + ": " + quoted(label) + " is not a row of a model table");
+        } else if (!endsWith(label, controlSuffix)) {
+            rows.inputLabels.push_back(label);
+            rows.exponents.push_back(requiredNumber(range, row, label));
+        }
+    }
+    return rows;
+}
+
+} // namespace
+
+ProductionModel readProductionModel(const CellTable& range)
+{
+    if (range.columns() < 2)
+        throw InputError("model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
+    const ModelRows rows = readRows(range);
+    if (!rows.form) throw InputError("model: has no \"form\" row (for example: form | cobb-douglas)");
+    if (*rows.form != ProductionForm::cobbDouglas)
+        throw InputError("model: form \"" + formWord(*rows.form) + "\" is not available yet");
+    if (!rows.logScale) throw InputError("model: has no \"ln A\" (or \"A\") row");
+    if (rows.inputLabels.empty()) throw InputError("model: has no exponent rows, one per input after \"ln A\"");
+
+    ProductionModel model;
+    model.form = *rows.form;
+    model.inputLabels = rows.inputLabels;
+    model.technology.logScale = rows.logScaleAtControlMeans.value_or(*rows.logScale);
+    model.technology.exponents =
+        Eigen::Map<const Eigen::VectorXd>(rows.exponents.data(), static_cast<Eigen::Index>(rows.exponents.size()));
+    model.scaleTest = rows.scaleTest;
+    if (model.scaleTest) {
+        const double sum = model.technology.scaleElasticity();
+        if (std::fabs(model.scaleTest->estimate - sum) > 1e-9 * std::max(1.0, std::fabs(sum)))
+            throw InputError("model: returns to scale (" + formatNumber(model.scaleTest->estimate) +
+                             ") is not the sum of the exponents (" + formatNumber(sum) + ")");
+    }
+    return model;
+}
+
+Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& model, const std::string& argument)
+{
+    const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
+    if (isNumber(selector)) {
+        const double position = std::get<double>(selector);
+        if (position >= 1 && position <= static_cast<double>(k) && position == std::floor(position))
+            return static_cast<Eigen::Index>(position) - 1;
+        throw InputError(argument + ": " + formatNumber(position) + " is not an input number; the model has " +
+                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
+    }
+    if (isText(selector)) {
+        const std::string& wanted = std::get<std::string>(selector);
+        for (Eigen::Index i = 0; i < k; ++i)
+            if (equalsIgnoringCase(wanted, model.inputLabels[static_cast<std::size_t>(i)])) return i;
+        std::string known;
+        for (const auto& label : model.inputLabels) known += (known.empty() ? "" : ", ") + quoted(label);
+        throw InputError(argument + ": " + quoted(wanted) + " is not an input of the model; its inputs are " + known);
+    }
+    throw InputError(argument + ": give the input's number (1 for the first) or its label");
+}
+
+std::string returnsVerdict(const ProductionModel& model, double level)
+{
+    if (!model.scaleTest) return classifyReturnsToScale(model.technology.scaleElasticity(), notANumber, level, false);
+    return classifyReturnsToScale(model.scaleTest->estimate, model.scaleTest->pValue, level, model.scaleTest->imposed);
+}
+
+} // namespace isoquant

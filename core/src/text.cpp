@@ -1,0 +1,39 @@
+#include "isoquant/text.hpp"
+
+#include <cctype>
+#include <cstdio>
+#include <cstdlib>
+
+namespace isoquant {
+
+std::string lowerCase(std::string_view text)
+{
+    std::string lowered(text);
+    for (char& character : lowered)
+        character = static_cast<char>(std::tolower(static_cast<unsigned char>(character)));
+    return lowered;
+}
+
+bool equalsIgnoringCase(std::string_view left, std::string_view right)
+{
+    return lowerCase(left) == lowerCase(right);
+}
+
+std::string formatNumber(double value)
+{
+    char buffer[32];
+    for (int digits = 1; digits <= 17; ++digits) {
+        std::snprintf(buffer, sizeof buffer, "%.*g", digits, value);
+        if (std::strtod(buffer, nullptr) == value) break;
+    }
+    return buffer;
+}
+
+std::string quoted(std::string_view text)
+{
+    constexpr std::size_t longest = 40;
+    if (text.size() > longest) return "'" + std::string(text.substr(0, longest)) + "…'";
+    return "'" + std::string(text) + "'";
+}
+
+} // namespace isoquant
