@@ -1,0 +1,95 @@
+#include "cell_conversion.hxx"
+
+#include "isoquant/input_error.hpp"
+
+#include <rtl/string.hxx>
+
+namespace isoquant::addin {
+
+namespace {
+
+Cell scalarCell(const css::uno::Any& value, const std::string& argument)
+{
+    switch (value.getValueTypeClass()) {
+    case css::uno::TypeClass_VOID: return Cell{};
+    case css::uno::TypeClass_STRING: {
+        const std::string text = toUtf8(value.get<OUString>());
+        if (text.empty()) return Cell{};
+        return text;
+    }
+    case css::uno::TypeClass_BOOLEAN: return value.get<bool>() ? 1.0 : 0.0;
+    default: {
+        double number = 0;
+        if (value >>= number) return number;
+        throw InputError(argument + ": holds a value of a kind Isoquant cannot read");
+    }
+    }
+}
+
+} // namespace
+
+std::string toUtf8(const OUString& text)
+{
+    const OString encoded = OUStringToOString(text, RTL_TEXTENCODING_UTF8);
+    return std::string(encoded.getStr(), static_cast<std::size_t>(encoded.getLength()));
+}
+
+OUString fromUtf8(std::string_view text)
+{
+    return OUString(text.data(), static_cast<sal_Int32>(text.size()), RTL_TEXTENCODING_UTF8);
+}
+
+CellTable toCellTable(const AnyTable& range, const std::string& argument)
+{
+    const auto rows = static_cast<std::size_t>(range.getLength());
+    std::size_t columns = 0;
+    for (const auto& row : range) columns = std::max(columns, static_cast<std::size_t>(row.getLength()));
+    CellTable table(rows, columns);
+    for (std::size_t r = 0; r < rows; ++r) {
+        const auto& row = range[static_cast<sal_Int32>(r)];
+        for (sal_Int32 c = 0; c < row.getLength(); ++c)
+            table.at(r, static_cast<std::size_t>(c)) = scalarCell(row[c], argument);
+    }
+    return table;
+}
+
+Cell toSingleCell(const css::uno::Any& value, const std::string& argument)
+{
+    AnyTable range;
+    if (value >>= range) {
+        if (range.getLength() == 1 && range[0].getLength() == 1) return scalarCell(range[0][0], argument);
+        throw InputError(argument + ": give a single value, not a range");
+    }
+    return scalarCell(value, argument);
+}
+
+CellTable toOptionalTable(const css::uno::Any& value, const std::string& argument)
+{
+    AnyTable range;
+    if (value >>= range) return toCellTable(range, argument);
+    const Cell cell = scalarCell(value, argument);
+    if (isEmpty(cell)) return CellTable{};
+    return singleCell(cell);
+}
+
+css::uno::Any toAny(const Cell& cell)
+{
+    if (isNumber(cell)) return css::uno::Any(std::get<double>(cell));
+    if (isText(cell)) return css::uno::Any(fromUtf8(std::get<std::string>(cell)));
+    return css::uno::Any(OUString());
+}
+
+AnyTable toAnyTable(const CellTable& table)
+{
+    AnyTable result(static_cast<sal_Int32>(table.rows()));
+    auto* rows = result.getArray();
+    for (std::size_t r = 0; r < table.rows(); ++r) {
+        css::uno::Sequence<css::uno::Any> row(static_cast<sal_Int32>(table.columns()));
+        auto* cells = row.getArray();
+        for (std::size_t c = 0; c < table.columns(); ++c) cells[c] = toAny(table.at(r, c));
+        rows[r] = row;
+    }
+    return result;
+}
+
+} // namespace isoquant::addin

@@ -1,0 +1,35 @@
+// Converts Calc's arguments to the core's cells and the core's results back to Calc's values.
+#pragma once
+
+#include "isoquant/cells.hpp"
+
+#include <com/sun/star/uno/Any.hxx>
+#include <com/sun/star/uno/Sequence.hxx>
+#include <rtl/ustring.hxx>
+
+#include <string>
+
+namespace isoquant::addin {
+
+using rtl::OString;
+using rtl::OUString;
+using AnyTable = css::uno::Sequence<css::uno::Sequence<css::uno::Any>>;
+
+std::string toUtf8(const OUString& text);
+OUString fromUtf8(std::string_view text);
+
+// A range argument. Calc passes an empty cell as an empty string; it becomes an empty cell.
+CellTable toCellTable(const AnyTable& range, const std::string& argument);
+
+// An optional single-value argument: void (omitted) becomes an empty cell; a one-cell range is
+// read as that cell; a larger range is an InputError naming `argument`.
+Cell toSingleCell(const css::uno::Any& value, const std::string& argument);
+
+// An optional range argument: void becomes an empty table; a single value a one-cell table.
+CellTable toOptionalTable(const css::uno::Any& value, const std::string& argument);
+
+// Results: an empty cell is returned as an empty text, which Calc shows as a blank cell.
+css::uno::Any toAny(const Cell& cell);
+AnyTable toAnyTable(const CellTable& table);
+
+} // namespace isoquant::addin

@@ -1,0 +1,192 @@
+#include "production_functions.hxx"
+
+#include "cell_conversion.hxx"
+#include "function_table.hxx"
+
+#include "isoquant/cell_functions.hpp"
+#include "isoquant/fit_table.hpp"
+#include "isoquant/input_error.hpp"
+
+#include <new>
+
+namespace isoquant::addin {
+
+namespace {
+
+using css::uno::Any;
+
+// Every cell function runs through here: the message of any failure becomes the cell's text.
+template <typename Compute>
+std::string failureMessage(Compute&& compute)
+{
+    try {
+        compute();
+        return {};
+    } catch (const InputError& error) {
+        return std::string("Error: ") + error.what();
+    } catch (const std::bad_alloc&) {
+        return "Error: not enough memory for a range this large";
+    } catch (const std::exception& error) {
+        return std::string("Error: internal problem (") + error.what() + "); please report it";
+    } catch (const css::uno::Exception& error) {
+        return "Error: internal problem (" + toUtf8(error.Message) + "); please report it";
+    } catch (...) {
+        return "Error: internal problem; please report it";
+    }
+}
+
+template <typename Compute>
+AnyTable guardedTable(Compute&& compute)
+{
+    AnyTable result;
+    const std::string message = failureMessage([&] { result = toAnyTable(compute()); });
+    if (!message.empty()) return toAnyTable(singleCell(message));
+    return result;
+}
+
+template <typename Compute>
+Any guardedValue(Compute&& compute)
+{
+    Any result;
+    const std::string message = failureMessage([&] { result = toAny(compute()); });
+    if (!message.empty()) return toAny(Cell(message));
+    return result;
+}
+
+const ArgumentInfo* argumentInfo(const OUString& programmaticName, sal_Int32 argument)
+{
+    const FunctionInfo* function = findByProgrammaticName(toUtf8(programmaticName));
+    if (!function || argument < 0 || static_cast<std::size_t>(argument) >= function->arguments.size()) return nullptr;
+    return &function->arguments[static_cast<std::size_t>(argument)];
+}
+
+} // namespace
+
+css::uno::Sequence<OUString> supportedServiceNames()
+{
+    css::uno::Sequence<OUString> names(2);
+    names[0] = OUString::createFromAscii(serviceName);
+    names[1] = "com.sun.star.sheet.AddIn";
+    return names;
+}
+
+FitArguments ProductionFunctions::fitArguments(const AnyTable& output, const AnyTable& inputs, const Any& form,
+                                               const Any& constantReturns, const Any& errors, const Any& level,
+                                               const Any& controls) const
+{
+    FitArguments arguments;
+    arguments.output = toCellTable(output, "output");
+    arguments.inputs = toCellTable(inputs, "inputs");
+    arguments.controls = toOptionalTable(controls, "controls");
+    arguments.form = toSingleCell(form, "form");
+    arguments.constantReturns = toSingleCell(constantReturns, "constant returns");
+    arguments.errors = toSingleCell(errors, "errors");
+    arguments.level = toSingleCell(level, "level");
+    return arguments;
+}
+
+AnyTable ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
+                                      const Any& constantReturns, const Any& errors, const Any& level,
+                                      const Any& controls)
+{
+    return guardedTable([&] {
+        return fitTable(*fits_.fit(fitArguments(output, inputs, form, constantReturns, errors, level, controls)));
+    });
+}
+
+Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs, const Any& rowLabel,
+                                  const Any& columnLabel, const Any& form, const Any& constantReturns,
+                                  const Any& errors, const Any& level, const Any& controls)
+{
+    return guardedValue([&] {
+        const auto fit = fits_.fit(fitArguments(output, inputs, form, constantReturns, errors, level, controls));
+        return lookUpFitTable(fitTable(*fit), toSingleCell(rowLabel, "row label"),
+                              toSingleCell(columnLabel, "column label"));
+    });
+}
+
+AnyTable ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs)
+{
+    return guardedTable([&] { return outputColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs")); });
+}
+
+AnyTable ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const Any& input)
+{
+    return guardedTable([&] {
+        return marginalProductColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+                                     toSingleCell(input, "input"));
+    });
+}
+
+AnyTable ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const Any& input)
+{
+    return guardedTable([&] {
+        return elasticityColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+                                toSingleCell(input, "input"));
+    });
+}
+
+AnyTable ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
+{
+    return guardedTable(
+        [&] { return scaleColumn(toCellTable(model, "model"), toOptionalTable(inputs, "inputs")); });
+}
+
+Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
+{
+    return guardedValue(
+        [&] { return Cell(returnsVerdictCell(toCellTable(model, "model"), toSingleCell(level, "level"))); });
+}
+
+OUString ProductionFunctions::getProgrammaticFuntionName(const OUString& displayName)
+{
+    const FunctionInfo* function = findByDisplayName(toUtf8(displayName));
+    return function ? fromUtf8(function->programmaticName) : OUString();
+}
+
+OUString ProductionFunctions::getDisplayFunctionName(const OUString& programmaticName)
+{
+    const FunctionInfo* function = findByProgrammaticName(toUtf8(programmaticName));
+    return function ? fromUtf8(function->displayName) : OUString();
+}
+
+OUString ProductionFunctions::getFunctionDescription(const OUString& programmaticName)
+{
+    const FunctionInfo* function = findByProgrammaticName(toUtf8(programmaticName));
+    return function ? fromUtf8(function->description) : OUString();
+}
+
+OUString ProductionFunctions::getDisplayArgumentName(const OUString& programmaticName, sal_Int32 argument)
+{
+    const ArgumentInfo* info = argumentInfo(programmaticName, argument);
+    return info ? fromUtf8(info->name) : OUString();
+}
+
+OUString ProductionFunctions::getArgumentDescription(const OUString& programmaticName, sal_Int32 argument)
+{
+    const ArgumentInfo* info = argumentInfo(programmaticName, argument);
+    return info ? fromUtf8(info->description) : OUString();
+}
+
+OUString ProductionFunctions::getProgrammaticCategoryName(const OUString&) { return fromUtf8(categoryName); }
+
+OUString ProductionFunctions::getDisplayCategoryName(const OUString&) { return fromUtf8(categoryName); }
+
+void ProductionFunctions::setLocale(const css::lang::Locale& locale) { locale_ = locale; }
+
+css::lang::Locale ProductionFunctions::getLocale() { return locale_; }
+
+OUString ProductionFunctions::getServiceName() { return OUString::createFromAscii(serviceName); }
+
+OUString ProductionFunctions::getImplementationName() { return OUString::createFromAscii(implementationName); }
+
+sal_Bool ProductionFunctions::supportsService(const OUString& name)
+{
+    for (const auto& supported : supportedServiceNames())
+        if (supported == name) return true;
+    return false;
+}
+
+css::uno::Sequence<OUString> ProductionFunctions::getSupportedServiceNames() { return supportedServiceNames(); }
+
+} // namespace isoquant::addin

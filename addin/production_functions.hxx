@@ -1,0 +1,72 @@
+// The UNO component behind the cell functions: converts arguments, calls the core, and turns
+// every failure into a message in the cell. Nothing may escape to Calc: an exception thrown here
+// shows only "Err:502" or "#VALUE!", and a crash would take the user's unsaved work with it.
+#pragma once
+
+#include "isoquant/fit_cache.hpp"
+
+#include <org/isoquant/calc/XProductionFunctions.hpp>
+
+#include <com/sun/star/lang/Locale.hpp>
+#include <com/sun/star/lang/XServiceInfo.hpp>
+#include <com/sun/star/lang/XServiceName.hpp>
+#include <com/sun/star/sheet/XAddIn.hpp>
+#include <cppuhelper/implbase4.hxx>
+
+namespace isoquant::addin {
+
+using rtl::OUString;
+
+inline constexpr const char* implementationName = "org.isoquant.calc.ProductionFunctionsImpl";
+inline constexpr const char* serviceName = "org.isoquant.calc.ProductionFunctions";
+css::uno::Sequence<OUString> supportedServiceNames();
+
+class ProductionFunctions
+    : public cppu::WeakImplHelper4<org::isoquant::calc::XProductionFunctions, css::sheet::XAddIn,
+                                   css::lang::XServiceName, css::lang::XServiceInfo> {
+public:
+    using AnyTable = css::uno::Sequence<css::uno::Sequence<css::uno::Any>>;
+
+    // XProductionFunctions
+    AnyTable SAL_CALL prodFit(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
+                              const css::uno::Any& constantReturns, const css::uno::Any& errors,
+                              const css::uno::Any& level, const css::uno::Any& controls) override;
+    css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& rowLabel,
+                                    const css::uno::Any& columnLabel, const css::uno::Any& form,
+                                    const css::uno::Any& constantReturns, const css::uno::Any& errors,
+                                    const css::uno::Any& level, const css::uno::Any& controls) override;
+    AnyTable SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs) override;
+    AnyTable SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
+    AnyTable SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
+    AnyTable SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
+    css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
+
+    // XAddIn
+    OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;
+    OUString SAL_CALL getDisplayFunctionName(const OUString& programmaticName) override;
+    OUString SAL_CALL getFunctionDescription(const OUString& programmaticName) override;
+    OUString SAL_CALL getDisplayArgumentName(const OUString& programmaticName, sal_Int32 argument) override;
+    OUString SAL_CALL getArgumentDescription(const OUString& programmaticName, sal_Int32 argument) override;
+    OUString SAL_CALL getProgrammaticCategoryName(const OUString& programmaticName) override;
+    OUString SAL_CALL getDisplayCategoryName(const OUString& programmaticName) override;
+
+    // XLocalizable (through XAddIn): the texts are English whatever the locale.
+    void SAL_CALL setLocale(const css::lang::Locale& locale) override;
+    css::lang::Locale SAL_CALL getLocale() override;
+
+    // XServiceName, XServiceInfo
+    OUString SAL_CALL getServiceName() override;
+    OUString SAL_CALL getImplementationName() override;
+    sal_Bool SAL_CALL supportsService(const OUString& name) override;
+    css::uno::Sequence<OUString> SAL_CALL getSupportedServiceNames() override;
+
+private:
+    FitArguments fitArguments(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
+                              const css::uno::Any& constantReturns, const css::uno::Any& errors,
+                              const css::uno::Any& level, const css::uno::Any& controls) const;
+
+    FitCache fits_;
+    css::lang::Locale locale_;
+};
+
+} // namespace isoquant::addin
