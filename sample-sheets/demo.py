@@ -1,0 +1,73 @@
+#!/usr/bin/python3
+"""The main job on the bundled sample data: open each sample workbook in a headless Calc with the
+extension installed, recalculate, print what the fit says, and export the workbook to PDF.
+
+    /usr/bin/python3 sample-sheets/demo.py --extension build/isoquant.oxt --output build/demo
+"""
+import argparse
+import glob
+import os
+import sys
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+sys.path.insert(0, os.path.join(HERE, "..", "tests", "integration"))
+
+from office import HeadlessOffice, recalc  # noqa: E402
+from workbook_checks import formula_problems, named_range  # noqa: E402
+
+
+def show(value):
+    if isinstance(value, float) and value.is_integer() and abs(value) < 1e9:
+        return "%d" % value
+    if isinstance(value, float):
+        return "%.4f" % value if abs(value) < 1e5 else "%.4g" % value
+    return str(value)
+
+
+def print_table(rows):
+    widths = [max(len(show(row[c])) for row in rows) for c in range(len(rows[0]))]
+    for row in rows:
+        print("  " + "  ".join(show(value).rjust(widths[c]) if c else show(value).ljust(widths[c])
+                               for c, value in enumerate(row)).rstrip())
+
+
+def summarise(doc, name):
+    table = [list(row) for row in named_range(doc, "fitted_technology").getDataArray()]
+    print("\n%s: fitted technology" % name)
+    print_table(table)
+    by_label = {row[0]: row for row in table}
+    returns = by_label["returns to scale"]
+    print("  -> returns to scale %.3f (SE %.3f, p-value of = 1: %.3f): %s" % (
+        returns[1], returns[2], returns[4], by_label["verdict"][1]))
+
+
+def main():
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--extension", required=True, help="path to isoquant.oxt")
+    parser.add_argument("--output", required=True, help="folder for the PDF exports")
+    arguments = parser.parse_args()
+    os.makedirs(arguments.output, exist_ok=True)
+    workbooks = sorted(glob.glob(os.path.join(HERE, "*.fods")))
+    failures = 0
+    with HeadlessOffice(extension_path=arguments.extension) as office:
+        for path in workbooks:
+            name = os.path.basename(path)
+            doc = office.open(path)
+            recalc(doc)
+            problems = formula_problems(doc)
+            if problems:
+                failures += 1
+                print("%s: %d formula cells show problems, first: %s" % (name, len(problems), problems[:5]))
+            summarise(doc, name)
+            pdf = os.path.join(arguments.output, os.path.splitext(name)[0] + ".pdf")
+            office.export_pdf(doc, pdf)
+            print("  PDF: %s" % os.path.abspath(pdf))
+            doc.close(True)
+    print("\nTo use these workbooks yourself: in LibreOffice Calc choose Tools > Extension Manager > Add,")
+    print("pick %s, restart LibreOffice, then open the .fods files in %s." % (
+        os.path.abspath(arguments.extension), HERE))
+    return 1 if failures else 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())

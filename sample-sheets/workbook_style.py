@@ -1,0 +1,69 @@
+"""Formatting for the sample workbooks: one look for all of them."""
+import uno
+from com.sun.star.awt import Rectangle
+from com.sun.star.table import CellRangeAddress
+
+DATA_FILL = 0xFFF6D5   # pale yellow: cells the reader may change
+HEADER_FILL = 0xDDE8F0  # pale blue-grey
+BOLD = 150.0            # com.sun.star.awt.FontWeight.BOLD
+
+
+def title(cell_range):
+    cell_range.CharWeight = BOLD
+    cell_range.CharHeight = 14.0
+
+
+def header(cell_range):
+    cell_range.CharWeight = BOLD
+    cell_range.CellBackColor = HEADER_FILL
+
+
+def input_cells(cell_range):
+    cell_range.CellBackColor = DATA_FILL
+
+
+def wrapped_column(sheet, column, width_mm):
+    columns = sheet.Columns.getByIndex(column)
+    columns.Width = width_mm * 100
+    columns.IsTextWrapped = True
+
+
+def column_widths(sheet, widths_mm):
+    for letter, width in widths_mm.items():
+        sheet.Columns.getByName(letter).Width = width * 100
+
+
+def number_format(doc, cell_range, code):
+    formats = doc.NumberFormats
+    locale = uno.createUnoStruct("com.sun.star.lang.Locale")
+    key = formats.queryKey(code, locale, False)
+    if key == -1:
+        key = formats.addNew(code, locale)
+    cell_range.NumberFormat = key
+
+
+def _address(sheet, name):
+    address = sheet.getCellRangeByName(name).getRangeAddress()
+    return CellRangeAddress(address.Sheet, address.StartColumn, address.StartRow, address.EndColumn,
+                            address.EndRow)
+
+
+def scatter_chart(sheet, name, heading, x_range, y_range, anchor, size_mm):
+    """An XY chart of y_range against x_range (both with a header cell), placed at anchor."""
+    position = sheet.getCellRangeByName(anchor).Position
+    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
+    charts = sheet.Charts
+    charts.addNewByName(name, rectangle, (_address(sheet, x_range), _address(sheet, y_range)), True, False)
+    chart = charts.getByName(name).EmbeddedObject
+    chart.setDiagram(chart.createInstance("com.sun.star.chart.XYDiagram"))
+    chart.HasMainTitle = True
+    chart.Title.String = heading
+    chart.HasLegend = False
+    diagram = chart.Diagram
+    diagram.HasXAxisTitle = True
+    diagram.XAxisTitle.String = "fitted"
+    diagram.HasYAxisTitle = True
+    diagram.YAxisTitle.String = "actual"
+    series = diagram.getDataRowProperties(0)
+    series.Lines = False
+    return chart
