@@ -88,7 +88,10 @@ def furniture_workshops(office, path):
     style.number_format(doc, sheet.getCellRangeByName("D2:D%d" % last), "0")
     style.number_format(doc, sheet.getCellRangeByName("E2:G%d" % last), "0.00")
     style.number_format(doc, sheet.getCellRangeByName("J2:O16"), "0.0000")
+    style.number_format(doc, sheet.getCellRangeByName("J6"), "0")
     style.number_format(doc, sheet.getCellRangeByName("J19"), "0.000")
+    style.align_right(sheet.getCellRangeByName("B1:G1"))
+    style.align_right(sheet.getCellRangeByName("J1:O1"))
     style.column_widths(sheet, {"A": 28, "B": 18, "C": 18, "D": 18, "E": 24, "F": 22, "G": 22, "H": 6,
                                 "I": 42, "J": 24, "K": 22, "L": 18, "M": 22, "N": 20, "O": 20})
     style.scatter_chart(sheet, "actual_vs_fitted", "Actual against fitted output (thousand EUR)",

@@ -2,6 +2,7 @@
 import uno
 from com.sun.star.awt import Rectangle
 from com.sun.star.table import CellRangeAddress
+from com.sun.star.table.CellHoriJustify import RIGHT
 
 DATA_FILL = 0xFFF6D5   # pale yellow: cells the reader may change
 HEADER_FILL = 0xDDE8F0  # pale blue-grey
@@ -16,6 +17,10 @@ def title(cell_range):
 def header(cell_range):
     cell_range.CharWeight = BOLD
     cell_range.CellBackColor = HEADER_FILL
+
+
+def align_right(cell_range):
+    cell_range.HoriJustify = RIGHT
 
 
 def input_cells(cell_range):
