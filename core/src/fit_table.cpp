@@ -5,10 +5,13 @@
 #include "isoquant/table_labels.hpp"
 
 #include <cmath>
+#include <limits>
 
 namespace isoquant {
 
 namespace {
+
+constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 Cell numberCell(double value)
 {
@@ -16,14 +19,17 @@ Cell numberCell(double value)
     return std::string(notAvailableText);
 }
 
+// Under an exact fit (zero residuals) standard errors, tests, bounds and the likelihood are
+// undefined; they show "n/a" rather than the meaningless numbers rounding leaves.
 class TableWriter {
 public:
-    explicit TableWriter(std::size_t rows) : table_(rows, headerLabels.size()) {}
+    TableWriter(std::size_t rows, bool exactFit) : table_(rows, headerLabels.size()), exactFit_(exactFit) {}
 
     void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
     {
-        put(label, {fit.estimates(index), fit.standardErrors(index), fit.tStatistics(index), fit.pValues(index),
-                    fit.lowerBounds(index), fit.upperBounds(index)});
+        put(label, {fit.estimates(index), undefinedIfExact(fit.standardErrors(index)),
+                    undefinedIfExact(fit.tStatistics(index)), undefinedIfExact(fit.pValues(index)),
+                    undefinedIfExact(fit.lowerBounds(index)), undefinedIfExact(fit.upperBounds(index))});
     }
     void valueRow(const char* label, double value) { put(label, {value}); }
     void textRow(const char* label, std::initializer_list<std::string> texts)
@@ -46,11 +52,13 @@ public:
         }
         ++row_;
     }
+    double undefinedIfExact(double value) const { return exactFit_ ? notANumber : value; }
     void skipRow() { ++row_; }
     CellTable finish() { return std::move(table_); }
 
 private:
     CellTable table_;
+    bool exactFit_;
     std::size_t row_ = 0;
 };
 
@@ -89,7 +97,7 @@ CellTable fitTable(const ProductionFit& fit)
 {
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
-    TableWriter writer(fitTableRows(k, m));
+    TableWriter writer(fitTableRows(k, m), fit.status == FitStatus::perfectFit);
     writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
                                      headerLabels[5], headerLabels[6]});
     writer.parameterRow(logScaleLabel, fit, 0);
@@ -103,15 +111,17 @@ CellTable fitTable(const ProductionFit& fit)
     writer.valueRow(rSquaredLabel, fit.rSquared);
     writer.valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
     writer.valueRow(residualSdLabel, regression.residualStandardDeviation);
-    writer.put(overallTestLabel, {Cell{}, Cell{}, regression.fStatistic, regression.fPValue});
-    writer.valueRow(logLikelihoodLabel, regression.logLikelihood);
-    writer.valueRow(aicLabel, regression.aic);
-    writer.valueRow(bicLabel, regression.bic);
+    writer.put(overallTestLabel, {Cell{}, Cell{}, writer.undefinedIfExact(regression.fStatistic),
+                                  writer.undefinedIfExact(regression.fPValue)});
+    writer.valueRow(logLikelihoodLabel, writer.undefinedIfExact(regression.logLikelihood));
+    writer.valueRow(aicLabel, writer.undefinedIfExact(regression.aic));
+    writer.valueRow(bicLabel, writer.undefinedIfExact(regression.bic));
     const ReturnsToScale& returns = fit.returns;
     if (returns.imposed)
         writer.put(returnsLabel, {returns.estimate, std::string(imposedText)});
     else
-        writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.fStatistic, returns.pValue});
+        writer.put(returnsLabel, {returns.estimate, writer.undefinedIfExact(returns.standardError),
+                                  writer.undefinedIfExact(returns.fStatistic), writer.undefinedIfExact(returns.pValue)});
     writer.textRow(verdictLabel, {returns.verdict});
     writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});
     if (m > 0) writer.valueRow(controlMeansLabel, fit.logScaleAtControlMeans);

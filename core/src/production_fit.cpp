@@ -105,8 +105,10 @@ ReturnsToScale returnsToScale(const ProductionFit& fit, const LeastSquaresResult
     Eigen::MatrixXd restriction = Eigen::MatrixXd::Zero(1, regression.parameters);
     restriction.block(0, 1, 1, k).setOnes();
     const WaldTest test = testLinearRestrictions(regression, restriction, Eigen::VectorXd::Ones(1));
-    returns.fStatistic = test.fStatistic;
-    returns.pValue = test.pValue;
+    // An exact fit leaves nothing to test: the verdict then follows ν alone.
+    const bool testable = regression.status != FitStatus::perfectFit;
+    returns.fStatistic = testable ? test.fStatistic : notANumber;
+    returns.pValue = testable ? test.pValue : notANumber;
     returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, confidenceLevel, false);
     return returns;
 }
@@ -116,7 +118,12 @@ ReturnsToScale returnsToScale(const ProductionFit& fit, const LeastSquaresResult
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed)
 {
     if (imposed) return "constant (imposed)";
-    if (std::isnan(pValue)) return estimate > 1 ? "increasing" : estimate < 1 ? "decreasing" : "constant";
+    // Without a test, ν within this distance of 1 counts as 1: typed or exact-fit exponents carry rounding.
+    constexpr double untestedTolerance = 1e-9;
+    if (std::isnan(pValue)) {
+        if (std::fabs(estimate - 1.0) <= untestedTolerance) return "constant";
+        return estimate > 1 ? "increasing" : "decreasing";
+    }
     if (pValue >= 1.0 - level) return "constant";
     return estimate > 1 ? "increasing" : "decreasing";
 }

@@ -71,7 +71,8 @@ struct ProductionFit {
 
 // The returns-to-scale verdict: "constant (imposed)" when imposed; else "constant" when the test
 // of ν = 1 has p ≥ α = 1 − level, otherwise "increasing" or "decreasing" by ν. With no test
-// (pValue NaN: a hand-typed model, an exact fit) the verdict follows ν alone.
+// (pValue NaN: a hand-typed model, an exact fit) the verdict follows ν alone, ν within 1e-9
+// of 1 counting as constant.
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed);
 
 // Throws InputError for too few rows and for collinear inputs (naming them).
