@@ -4,6 +4,8 @@
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/production_model.hpp"
+#include "isoquant/table_labels.hpp"
+#include "isoquant/text.hpp"
 
 #include <cmath>
 
@@ -19,8 +21,19 @@ void requireSameRows(const NumericColumns& output, const NumericColumns& other, 
     std::string hint;
     if (output.hasHeader != other.hasHeader)
         hint = " (a header row of text was found in " + std::string(output.hasHeader ? "output" : name) + " only)";
-    throw InputError("output has " + dataRowsText(output.values.rows()) + " of data but " + name + " has " +
-                     dataRowsText(other.values.rows()) + hint);
+    throw InputError(name + ": has " + dataRowsText(other.values.rows()) + " of data but output has " +
+                     dataRowsText(output.values.rows()) + hint);
+}
+
+// The fitted table marks a control's row by this ending; an input so labelled would read back as one.
+void refuseControlLabels(const NumericColumns& inputs)
+{
+    for (std::size_t column = 0; column < inputs.labels.size(); ++column) {
+        const std::string& label = inputs.labels[column];
+        if (endsWithIgnoringCase(label, controlSuffix))
+            throw InputError("inputs: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+                             "; the ending \"(control)\" marks controls in the table, so rename it");
+    }
 }
 
 NumericColumns readBundles(const CellTable& inputs, const ProductionModel& model)
@@ -63,6 +76,7 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
         throw InputError("output: must be one column; it has " + std::to_string(output.values.cols()));
     const NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input");
     requireSameRows(output, inputs, "inputs");
+    refuseControlLabels(inputs);
 
     ProductionData data;
     data.output = output.values.col(0);

@@ -4,20 +4,51 @@
 
 namespace isoquant {
 
+namespace {
+
+// Sums of logs and their exponentials are formed in extended precision: exp(L) carries a relative
+// error of about |L|·ε, which for bundles near 1e±300 (|L| ≈ 700) would cost three digits in double.
+long double extendedLogOutput(const CobbDouglas& technology, const Eigen::VectorXd& inputs)
+{
+    long double sum = technology.logScale;
+    for (Eigen::Index i = 0; i < inputs.size(); ++i)
+        sum += static_cast<long double>(technology.exponents(i)) * std::log(static_cast<long double>(inputs(i)));
+    return sum;
+}
+
+// c·exp(L) formed in logs, so that it overflows or underflows only when the result does.
+double scaledExponential(double coefficient, long double logMagnitude)
+{
+    if (coefficient == 0) return 0.0;
+    const long double magnitude = std::exp(std::log(std::fabs(static_cast<long double>(coefficient))) + logMagnitude);
+    return std::copysign(static_cast<double>(magnitude), coefficient);
+}
+
+} // namespace
+
+double CobbDouglas::logOutput(const Eigen::VectorXd& inputs) const
+{
+    return static_cast<double>(extendedLogOutput(*this, inputs));
+}
+
 double CobbDouglas::output(const Eigen::VectorXd& inputs) const
 {
-    return std::exp(logScale + exponents.dot(inputs.array().log().matrix()));
+    return static_cast<double>(std::exp(extendedLogOutput(*this, inputs)));
 }
 
 double CobbDouglas::marginalProduct(const Eigen::VectorXd& inputs, Eigen::Index input) const
 {
-    return exponents(input) * output(inputs) / inputs(input);
+    return scaledExponential(exponents(input),
+                             extendedLogOutput(*this, inputs) - std::log(static_cast<long double>(inputs(input))));
 }
 
 double CobbDouglas::secondPartial(const Eigen::VectorXd& inputs, Eigen::Index first, Eigen::Index second) const
 {
     const double own = first == second ? 1.0 : 0.0;
-    return exponents(first) * (exponents(second) - own) * output(inputs) / (inputs(first) * inputs(second));
+    const long double logDenominator =
+        std::log(static_cast<long double>(inputs(first))) + std::log(static_cast<long double>(inputs(second)));
+    return scaledExponential(exponents(first) * (exponents(second) - own),
+                             extendedLogOutput(*this, inputs) - logDenominator);
 }
 
 Eigen::MatrixXd CobbDouglas::hessian(const Eigen::VectorXd& inputs) const

@@ -49,17 +49,16 @@ std::size_t hashArguments(const FitArguments& arguments)
 std::shared_ptr<const ProductionFit> FitCache::fit(const FitArguments& arguments)
 {
     const std::size_t hash = hashArguments(arguments);
-    {
-        const std::lock_guard<std::mutex> lock(mutex_);
-        for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-            if (entry->hash == hash && entry->arguments == arguments) {
-                entries_.splice(entries_.begin(), entries_, entry);
-                return entries_.front().fit;
-            }
+    // Held while fitting, so that equal arguments arriving together are fitted once (Calc
+    // serialises its calls anyway, so nothing is lost).
+    const std::lock_guard<std::mutex> lock(mutex_);
+    for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
+        if (entry->hash == hash && entry->arguments == arguments) {
+            entries_.splice(entries_.begin(), entries_, entry);
+            return entries_.front().fit;
         }
     }
     auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
-    const std::lock_guard<std::mutex> lock(mutex_);
     ++fitsComputed_;
     entries_.push_front(Entry{hash, arguments, computed});
     if (entries_.size() > capacity_) entries_.pop_back();

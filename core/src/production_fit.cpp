@@ -62,7 +62,7 @@ std::string listOfNames(const std::vector<std::string>& names)
     std::string text;
     for (std::size_t i = 0; i < names.size(); ++i) {
         if (i > 0) text += i + 1 == names.size() ? " and " : ", ";
-        text += quoted(names[i]);
+        text += names[i];
     }
     return text;
 }
@@ -75,17 +75,27 @@ std::string collinearityMessage(const ProductionData& data, bool constantReturns
     const Eigen::Index slopes = constantReturns ? k - 1 : k;
     bool withConstant = false;
     std::vector<std::string> names;
+    std::size_t inputs = 0;
+    std::size_t controls = 0;
     for (const Eigen::Index column : columns) {
-        if (column == 0) withConstant = true;
-        else if (column <= slopes) names.push_back(data.inputLabels[static_cast<std::size_t>(column - 1)]);
-        else names.push_back(data.controlLabels[static_cast<std::size_t>(column - 1 - slopes)]);
+        if (column == 0) {
+            withConstant = true;
+        } else if (column <= slopes) {
+            names.push_back(quoted(data.inputLabels[static_cast<std::size_t>(column - 1)]));
+            ++inputs;
+        } else {
+            names.push_back("control " + quoted(data.controlLabels[static_cast<std::size_t>(column - 1 - slopes)]));
+            ++controls;
+        }
     }
-    const std::string note = constantReturns ? " (in ratios to " + quoted(data.inputLabels.back()) + ", as constant returns are imposed)" : "";
-    if (names.empty()) return "the data cannot identify ln A" + note;
+    const std::string argument = controls == 0 ? "inputs" : inputs == 0 ? "controls" : "inputs and controls";
+    const std::string note =
+        constantReturns ? " (as ratios to " + quoted(data.inputLabels.back()) + ", since constant returns are imposed)" : "";
+    if (names.empty()) return "inputs: the data cannot identify ln A" + note;
     if (withConstant && names.size() == 1)
-        return "collinear inputs: " + listOfNames(names) + " does not vary" + note + ", so it cannot be told apart from ln A";
-    return "collinear inputs: " + listOfNames(names) + (withConstant ? " together with ln A" : "") + note +
-           " are linearly related in logs; drop one of them";
+        return argument + ": " + names.front() + note + " does not vary, so it cannot be told apart from ln A";
+    return argument + ": " + listOfNames(names) + (withConstant ? " together with ln A" : "") + note +
+           " are collinear (inputs taken in logs); drop one of them";
 }
 
 ReturnsToScale returnsToScale(const ProductionFit& fit, const LeastSquaresResult& regression, Eigen::Index k,
@@ -139,13 +149,15 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
 
     const Eigen::VectorXd logOutput = data.output.array().log().matrix();
     const double totalSumOfSquares = (logOutput.array() - logOutput.mean()).matrix().squaredNorm();
-    if (totalSumOfSquares == 0) throw InputError("output: every row holds the same value; there is no variation to explain");
+    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
+    if (data.output.maxCoeff() == data.output.minCoeff())
+        throw InputError("output: every row holds the same value; there is no variation to explain");
 
     const LogLinearDesign built = buildDesign(data, options.constantReturns);
     const Eigen::Index p = built.design.cols();
     if (n < p + 1)
-        throw InputError("too few rows: " + std::to_string(n) + " rows of data for " + std::to_string(p) +
-                         " parameters; need at least " + std::to_string(p + 1));
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
+                         std::to_string(p) + " parameters to estimate; need at least " + std::to_string(p + 1));
 
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;

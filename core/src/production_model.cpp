@@ -26,11 +26,6 @@ bool rowIsEmpty(const CellTable& range, std::size_t row)
     return true;
 }
 
-bool endsWith(const std::string& text, const std::string& ending)
-{
-    return text.size() >= ending.size() && equalsIgnoringCase(text.substr(text.size() - ending.size()), ending);
-}
-
 bool isStatisticLabel(const std::string& label)
 {
     for (const char* statistic : statisticLabels)
@@ -87,35 +82,56 @@ void readFormRow(const CellTable& range, std::size_t row, ModelRows& rows)
     }
 }
 
+// Where a row stands decides what it is: before the "ln A" (or "A") row only the header and the
+// form may come; from there to the first empty row every row is an input's exponent, whatever its
+// label (an input may well be called "A" or "R2"), but for a control's row and a form row holding
+// text; after the empty row come the statistic rows of a PRODFIT table.
 ModelRows readRows(const CellTable& range)
 {
+    enum class Section { beforeScale, parameters, statistics };
     ModelRows rows;
-    bool inParameters = true; // until the first empty row
+    Section section = Section::beforeScale;
     for (std::size_t row = 0; row < range.rows(); ++row) {
         if (rowIsEmpty(range, row)) {
-            inParameters = false;
+            if (section == Section::parameters) section = Section::statistics;
             continue;
         }
         const Cell& labelCell = range.at(row, 0);
         if (!isText(labelCell) || std::get<std::string>(labelCell).empty())
             throw InputError(rowPlace(row) + " has no label in its first column");
         const std::string& label = std::get<std::string>(labelCell);
+        const bool isFormRow = equalsIgnoringCase(label, formLabel) && isText(range.at(row, 1));
         if (equalsIgnoringCase(label, headerLabels[0])) continue;
-        if (equalsIgnoringCase(label, formLabel)) {
+        if (isFormRow) {
             readFormRow(range, row, rows);
-        } else if (equalsIgnoringCase(label, logScaleLabel)) {
-            rows.logScale = requiredNumber(range, row, label);
-        } else if (equalsIgnoringCase(label, scaleLabel)) {
-            const double scale = requiredNumber(range, row, label);
-            if (scale <= 0) throw InputError(rowPlace(row) + " (A) must be positive");
-            rows.logScale = std::log(scale);
-        } else if (isStatisticLabel(label)) {
+            continue;
+        }
+        switch (section) {
+        case Section::beforeScale:
+            if (equalsIgnoringCase(label, logScaleLabel)) {
+                rows.logScale = requiredNumber(range, row, label);
+            } else if (equalsIgnoringCase(label, scaleLabel)) {
+                const double scale = requiredNumber(range, row, label);
+                if (scale <= 0) throw InputError(rowPlace(row) + " (A) must be positive");
+                rows.logScale = std::log(scale);
+            } else {
+                throw InputError(rowPlace(row) + ": " + quoted(label) +
+                                 " comes before the \"ln A\" (or \"A\") row; give ln A first, then one exponent "
+                                 "row per input");
+            }
+            section = Section::parameters;
+            break;
+        case Section::parameters:
+            if (!endsWithIgnoringCase(label, controlSuffix)) {
+                rows.inputLabels.push_back(label);
+                rows.exponents.push_back(requiredNumber(range, row, label));
+            }
+            break;
+        case Section::statistics:
+            if (!isStatisticLabel(label))
+                throw InputError(rowPlace(row) + ": " + quoted(label) + " is not a row of a model table");
             readStatisticRow(range, row, label, rows);
-        } else if (!inParameters) {
-            throw InputError(rowPlace(row) + ": " + quoted(label) + " is not a row of a model table");
-        } else if (!endsWith(label, controlSuffix)) {
-            rows.inputLabels.push_back(label);
-            rows.exponents.push_back(requiredNumber(range, row, label));
+            break;
         }
     }
     return rows;

@@ -19,6 +19,11 @@ bool equalsIgnoringCase(std::string_view left, std::string_view right)
     return lowerCase(left) == lowerCase(right);
 }
 
+bool endsWithIgnoringCase(std::string_view text, std::string_view ending)
+{
+    return text.size() >= ending.size() && equalsIgnoringCase(text.substr(text.size() - ending.size()), ending);
+}
+
 std::string formatNumber(double value)
 {
     char buffer[32];

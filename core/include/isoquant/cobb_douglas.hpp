@@ -9,7 +9,9 @@ struct CobbDouglas {
     double logScale = 0;      // ln A
     Eigen::VectorXd exponents; // bᵢ, the output elasticities
 
-    // Y = exp(ln A + Σ bᵢ ln xᵢ), formed in logs so that large bundles do not overflow early.
+    // ln Y = ln A + Σ bᵢ ln xᵢ; every quantity below is formed from it in logs, so that it
+    // overflows or underflows only when its own value does.
+    double logOutput(const Eigen::VectorXd& inputs) const;
     double output(const Eigen::VectorXd& inputs) const;
     // ∂Y/∂xᵢ = bᵢ·Y/xᵢ
     double marginalProduct(const Eigen::VectorXd& inputs, Eigen::Index input) const;

@@ -23,6 +23,7 @@ public:
     // Errors (InputError) are not cached: they are cheap to find again.
     std::shared_ptr<const ProductionFit> fit(const FitArguments& arguments);
 
+    // Fits computed since construction (clear() empties the cache, not this count).
     std::size_t fitsComputed() const;
     void clear();
 

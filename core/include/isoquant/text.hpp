@@ -9,6 +9,7 @@ namespace isoquant {
 // ASCII lower case; labels and option words compare case-insensitively.
 std::string lowerCase(std::string_view text);
 bool equalsIgnoringCase(std::string_view left, std::string_view right);
+bool endsWithIgnoringCase(std::string_view text, std::string_view ending);
 
 // Shortest text that reads back as the same double ("0", "17", "0.25", "1e-300").
 std::string formatNumber(double value);

@@ -1,0 +1,45 @@
+#include "reference_data.hpp"
+
+#include "cell_tables.hpp"
+#include "csv_table.hpp"
+#include "test_data.hpp"
+
+namespace isoquant::testing {
+
+namespace {
+
+CellTable columnsOf(const CsvTable& table, const std::vector<std::string>& names)
+{
+    Eigen::MatrixXd values(static_cast<Eigen::Index>(table.rows()), static_cast<Eigen::Index>(names.size()));
+    for (std::size_t column = 0; column < names.size(); ++column) {
+        const auto numbers = table.numbers(names[column]);
+        for (std::size_t row = 0; row < numbers.size(); ++row)
+            values(static_cast<Eigen::Index>(row), static_cast<Eigen::Index>(column)) = numbers[row];
+    }
+    return numberRange(values, names);
+}
+
+FitArguments argumentsFrom(const std::string& file, const std::string& output,
+                           const std::vector<std::string>& inputs, const std::vector<std::string>& controls)
+{
+    const CsvTable table = CsvTable::read(dataPath(file));
+    FitArguments arguments;
+    arguments.output = columnsOf(table, {output});
+    arguments.inputs = columnsOf(table, inputs);
+    if (!controls.empty()) arguments.controls = columnsOf(table, controls);
+    return arguments;
+}
+
+} // namespace
+
+FitArguments cobbDouglas1928Arguments()
+{
+    return argumentsFrom("cobb_douglas_1928.csv", "P", {"L", "C"}, {});
+}
+
+FitArguments statePanelArguments()
+{
+    return argumentsFrom("us_states_produc_1970_1986.csv", "gsp", {"pcap", "pc", "emp"}, {"unemp"});
+}
+
+} // namespace isoquant::testing

@@ -1,0 +1,309 @@
+// Bad input through the cell functions gets an InputError whose message names the argument and,
+// where there is one, the row (and column) of the user's selection, counted from 1 with the
+// header row included (numeric_range.hpp). The data are the Cobb & Douglas (1928) ranges
+// (tests/data/cobb_douglas_1928.csv) with one cell or option spoiled.
+#include "isoquant/cell_functions.hpp"
+#include "cell_tables.hpp"
+#include "input_error_message.hpp"
+#include "reference_data.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+#include <cmath>
+#include <limits>
+
+using isoquant::Cell;
+using isoquant::CellTable;
+using isoquant::FitArguments;
+using isoquant::testing::messageOf;
+
+namespace {
+
+std::string fitMessage(const FitArguments& arguments)
+{
+    return messageOf([&] { isoquant::fitFromArguments(arguments); });
+}
+
+FitArguments goodArguments() { return isoquant::testing::cobbDouglas1928Arguments(); }
+
+// The first `rows` rows of a range.
+CellTable firstRows(const CellTable& range, std::size_t rows)
+{
+    CellTable kept(rows, range.columns());
+    for (std::size_t row = 0; row < rows; ++row)
+        for (std::size_t column = 0; column < range.columns(); ++column) kept.at(row, column) = range.at(row, column);
+    return kept;
+}
+
+Cell text(const char* value) { return std::string(value); }
+
+// The published 1928 function, typed by hand.
+CellTable typedModel()
+{
+    return isoquant::testing::typedRange(
+        {{text("form"), text("cobb-douglas")}, {text("A"), 1.01}, {text("labour"), 0.75}, {text("capital"), 0.25}});
+}
+
+const double notANumber = std::numeric_limits<double>::quiet_NaN();
+const double infinity = std::numeric_limits<double>::infinity();
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(bad_input)
+
+BOOST_AUTO_TEST_CASE(the_unspoiled_arguments_fit)
+{
+    BOOST_TEST(isoquant::fitFromArguments(goodArguments()).estimates.size() == 3);
+}
+
+BOOST_AUTO_TEST_CASE(text_and_empty_cells_are_named_by_row_and_column)
+{
+    auto arguments = goodArguments();
+    arguments.inputs.at(5, 1) = text("n.a.");
+    BOOST_TEST(fitMessage(arguments) == "inputs: row 6, column 2 holds text 'n.a.'; every cell must hold a number");
+
+    arguments = goodArguments();
+    arguments.inputs.at(9, 0) = Cell{};
+    BOOST_TEST(fitMessage(arguments) == "inputs: row 10, column 1 is empty; every cell must hold a number");
+
+    // A one-column range names the row only.
+    arguments = goodArguments();
+    arguments.output.at(3, 0) = Cell{};
+    BOOST_TEST(fitMessage(arguments) == "output: row 4 is empty; every cell must hold a number");
+}
+
+BOOST_AUTO_TEST_CASE(values_whose_log_is_taken_must_be_positive)
+{
+    auto arguments = goodArguments();
+    arguments.inputs.at(2, 0) = 0.0;
+    BOOST_TEST(fitMessage(arguments) == "inputs: row 3, column 1 is 0; logs need positive values");
+
+    arguments = goodArguments();
+    arguments.output.at(7, 0) = -5.0;
+    BOOST_TEST(fitMessage(arguments) == "output: row 8 is -5; logs need positive values");
+
+    // Controls are entered as they are, so a negative control is fine.
+    arguments = goodArguments();
+    Eigen::MatrixXd trend(24, 1);
+    for (int row = 0; row < 24; ++row) trend(row, 0) = row - 12.0;
+    arguments.controls = isoquant::testing::numberRange(trend, {"trend"});
+    BOOST_TEST(isoquant::fitFromArguments(arguments).controlLabels.size() == 1u);
+}
+
+BOOST_AUTO_TEST_CASE(values_that_are_not_finite_are_named)
+{
+    auto arguments = goodArguments();
+    arguments.inputs.at(4, 0) = notANumber;
+    BOOST_TEST(fitMessage(arguments) == "inputs: row 5, column 1 is not a finite number");
+
+    arguments = goodArguments();
+    arguments.output.at(12, 0) = infinity;
+    BOOST_TEST(fitMessage(arguments) == "output: row 13 is not a finite number");
+
+    arguments = goodArguments();
+    Eigen::MatrixXd control = Eigen::MatrixXd::Ones(24, 1);
+    control(20, 0) = -infinity;
+    control(0, 0) = 2.0;
+    arguments.controls = isoquant::testing::numberRange(control, {"z"});
+    BOOST_TEST(fitMessage(arguments) == "controls: row 22 is not a finite number");
+
+    CellTable bundles = isoquant::testing::typedRange({{1.0, notANumber}});
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(typedModel(), bundles); }) ==
+               "inputs: row 1, column 2 is not a finite number");
+}
+
+BOOST_AUTO_TEST_CASE(ranges_of_the_wrong_shape)
+{
+    auto arguments = goodArguments();
+    arguments.output = arguments.inputs;
+    BOOST_TEST(fitMessage(arguments) == "output: must be one column; it has 2");
+
+    arguments = goodArguments();
+    arguments.inputs = firstRows(arguments.inputs, 24); // header and 23 data rows
+    BOOST_TEST(fitMessage(arguments) == "inputs: has 23 rows of data but output has 24 rows");
+
+    // Both selections are 25 rows tall, but only the output's first row is text: the hint says so.
+    arguments = goodArguments();
+    arguments.inputs.at(0, 0) = 100.0;
+    arguments.inputs.at(0, 1) = 100.0;
+    BOOST_TEST(fitMessage(arguments) ==
+               "inputs: has 25 rows of data but output has 24 rows (a header row of text was found in output only)");
+
+    arguments = goodArguments();
+    arguments.inputs = CellTable();
+    BOOST_TEST(fitMessage(arguments) == "inputs: the range is empty");
+
+    arguments = goodArguments();
+    arguments.inputs = firstRows(arguments.inputs, 1);
+    BOOST_TEST(fitMessage(arguments) == "inputs: holds a header row but no data");
+}
+
+// Three data rows for three parameters: the core refuses, needing at least one more row than
+// parameters.
+BOOST_AUTO_TEST_CASE(too_few_rows)
+{
+    auto arguments = goodArguments();
+    arguments.output = firstRows(arguments.output, 4);
+    arguments.inputs = firstRows(arguments.inputs, 4);
+    BOOST_TEST(fitMessage(arguments) ==
+               "too few rows: output and inputs have 3 rows of data for 3 parameters to estimate; need at least 4");
+}
+
+BOOST_AUTO_TEST_CASE(collinear_inputs_are_named)
+{
+    // C = 2·L: ln C = ln 2 + ln L, collinear with the constant.
+    auto arguments = goodArguments();
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
+        arguments.inputs.at(row, 1) = 2.0 * std::get<double>(arguments.inputs.at(row, 0));
+    BOOST_TEST(fitMessage(arguments) ==
+               "inputs: 'L' and 'C' together with ln A are collinear (inputs taken in logs); drop one of them");
+
+    // A constant column cannot be told apart from ln A.
+    arguments = goodArguments();
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row) arguments.inputs.at(row, 1) = 100.0;
+    BOOST_TEST(fitMessage(arguments) == "inputs: 'C' does not vary, so it cannot be told apart from ln A");
+}
+
+// The same output in every row leaves nothing to explain, whatever the value (the mean of 24
+// equal logarithms need not round back to the logarithm itself).
+BOOST_AUTO_TEST_CASE(output_without_variation_is_refused)
+{
+    for (const double value : {100.0, 50.0}) {
+        auto arguments = goodArguments();
+        for (std::size_t row = 1; row < arguments.output.rows(); ++row) arguments.output.at(row, 0) = value;
+        BOOST_TEST_INFO("every output " << value);
+        BOOST_TEST(fitMessage(arguments) == "output: every row holds the same value; there is no variation to explain");
+    }
+}
+
+// A control that does not vary is named as a control; one collinear with an input names both.
+BOOST_AUTO_TEST_CASE(collinear_controls_are_named)
+{
+    auto arguments = goodArguments();
+    arguments.controls = isoquant::testing::numberRange(Eigen::MatrixXd::Constant(24, 1, 5.0), {"unemp"});
+    BOOST_TEST(fitMessage(arguments) == "controls: control 'unemp' does not vary, so it cannot be told apart from ln A");
+
+    arguments = goodArguments();
+    Eigen::MatrixXd logLabour(24, 1);
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
+        logLabour(static_cast<Eigen::Index>(row - 1), 0) = 3.0 * std::log(std::get<double>(arguments.inputs.at(row, 0)));
+    arguments.controls = isoquant::testing::numberRange(logLabour, {"log hours"});
+    BOOST_TEST(fitMessage(arguments) ==
+               "inputs and controls: 'L' and control 'log hours' are collinear (inputs taken in logs); drop one of them");
+}
+
+BOOST_AUTO_TEST_CASE(option_words_and_numbers)
+{
+    auto arguments = goodArguments();
+    arguments.form = text("cobb");
+    BOOST_TEST(fitMessage(arguments) == "form: 'cobb' is not a form; use \"cobb-douglas\", \"ces\" or \"translog\"");
+    arguments.form = text("CES");
+    BOOST_TEST(fitMessage(arguments) == "form: \"ces\" is not available yet; use \"cobb-douglas\"");
+    arguments.form = text("translog");
+    BOOST_TEST(fitMessage(arguments) == "form: \"translog\" is not available yet; use \"cobb-douglas\"");
+
+    arguments = goodArguments();
+    arguments.errors = text("hc");
+    BOOST_TEST(fitMessage(arguments) ==
+               "errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\" or \"hc3\"");
+
+    arguments = goodArguments();
+    arguments.level = 1.5;
+    BOOST_TEST(fitMessage(arguments) ==
+               "level: 1.5 is not a confidence level; give a number between 0 and 1, such as 0.95");
+    arguments.level = 0.0;
+    BOOST_TEST(fitMessage(arguments) ==
+               "level: 0 is not a confidence level; give a number between 0 and 1, such as 0.95");
+
+    arguments = goodArguments();
+    arguments.constantReturns = text("yes");
+    BOOST_TEST(fitMessage(arguments) == "constant returns: 'yes' is not TRUE or FALSE (1 or 0)");
+    arguments.constantReturns = 2.0;
+    BOOST_TEST(fitMessage(arguments) == "constant returns: 2 is not TRUE or FALSE (1 or 0)");
+
+    BOOST_TEST(messageOf([&] { isoquant::returnsVerdictCell(typedModel(), 1.0); }) ==
+               "level: 1 is not a confidence level; give a number between 0 and 1, such as 0.95");
+}
+
+BOOST_AUTO_TEST_CASE(input_selectors)
+{
+    const CellTable bundles = isoquant::testing::typedRange({{100.0, 120.0}});
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(typedModel(), bundles, 3.0); }) ==
+               "input: 3 is not an input number; the model has 2 inputs");
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(typedModel(), bundles, 0.0); }) ==
+               "input: 0 is not an input number; the model has 2 inputs");
+    BOOST_TEST(messageOf([&] { isoquant::elasticityColumn(typedModel(), bundles, 1.5); }) ==
+               "input: 1.5 is not an input number; the model has 2 inputs");
+    BOOST_TEST(messageOf([&] { isoquant::elasticityColumn(typedModel(), bundles, text("land")); }) ==
+               "input: 'land' is not an input of the model; its inputs are 'labour', 'capital'");
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(typedModel(), bundles, Cell{}); }) ==
+               "input: give the input's number (1 for the first) or its label");
+}
+
+BOOST_AUTO_TEST_CASE(malformed_models)
+{
+    const CellTable bundles = isoquant::testing::typedRange({{100.0, 120.0}});
+    const auto outputMessage = [&](const CellTable& model) {
+        return messageOf([&] { isoquant::outputColumn(model, bundles); });
+    };
+    using isoquant::testing::typedRange;
+    BOOST_TEST(outputMessage(typedRange({{text("A"), 1.01}, {text("labour"), 0.75}, {text("capital"), 0.25}})) ==
+               "model: has no \"form\" row (for example: form | cobb-douglas)");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")},
+                                         {text("A"), 1.01},
+                                         {text("labour"), text("0.75x")},
+                                         {text("capital"), 0.25}})) ==
+               "model: row 3 ('labour') has no number in its second column");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")},
+                                         {text("A"), 1.01},
+                                         {0.75, 0.75},
+                                         {text("capital"), 0.25}})) == "model: row 3 has no label in its first column");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")},
+                                         {text("A"), -1.01},
+                                         {text("labour"), 0.75}})) == "model: row 2 (A) must be positive");
+    BOOST_TEST(outputMessage(typedRange(
+                   {{text("form"), text("douglas")}, {text("A"), 1.01}, {text("labour"), 0.75}})) ==
+               "model: row 1 (form) must hold \"cobb-douglas\", \"ces\" or \"translog\"");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("ces")}, {text("A"), 1.01}, {text("labour"), 0.75}})) ==
+               "model: form \"ces\" is not available yet");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")}, {text("labour"), 0.75}})) ==
+               "model: row 2: 'labour' comes before the \"ln A\" (or \"A\") row; give ln A first, then one exponent "
+               "row per input");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")}})) == "model: has no \"ln A\" (or \"A\") row");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")}, {text("ln A"), 0.01}})) ==
+               "model: has no exponent rows, one per input after \"ln A\"");
+    BOOST_TEST(outputMessage(typedRange({{text("form")}, {text("cobb-douglas")}})) ==
+               "model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
+    BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")},
+                                         {text("A"), 1.01},
+                                         {text("labour"), 0.75},
+                                         {Cell{}, Cell{}},
+                                         {text("note"), 1.0}})) ==
+               "model: row 5: 'note' is not a row of a model table");
+}
+
+BOOST_AUTO_TEST_CASE(bundles_for_a_model)
+{
+    // Three columns for a two-input model.
+    const CellTable bundles = isoquant::testing::typedRange({{100.0, 120.0, 5.0}});
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(typedModel(), bundles); }) ==
+               "inputs: has 3 columns but the model has 2 inputs");
+    const CellTable withText =
+        isoquant::testing::typedRange({{text("L"), text("C")}, {100.0, 120.0}, {100.0, text("-")}});
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(typedModel(), withText); }) ==
+               "inputs: row 3, column 2 holds text '-'; every cell must hold a number");
+}
+
+// exp(400·ln 1e300) overflows a double: the evaluators say so rather than return inf.
+BOOST_AUTO_TEST_CASE(results_too_large_to_represent)
+{
+    const CellTable model = isoquant::testing::typedRange(
+        {{text("form"), text("cobb-douglas")}, {text("ln A"), 0.0}, {text("x"), 400.0}});
+    const CellTable bundles = isoquant::testing::typedRange({{text("x")}, {2.0}, {1e300}});
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(model, bundles); }) ==
+               "inputs: row 3 gives a result too large to represent");
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(model, bundles, 1.0); }) ==
+               "inputs: row 3 gives a result too large to represent");
+}
+
+BOOST_AUTO_TEST_SUITE_END()

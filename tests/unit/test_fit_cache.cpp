@@ -1,0 +1,104 @@
+// FitCache: a fit is computed once for equal arguments, again for different ones; the least
+// recently used fit is evicted beyond the capacity; errors are not cached.
+// Arguments are the Cobb & Douglas (1928) ranges (tests/data/cobb_douglas_1928.csv).
+#include "isoquant/fit_cache.hpp"
+#include "isoquant/input_error.hpp"
+#include "reference_data.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+using isoquant::FitArguments;
+using isoquant::FitCache;
+
+namespace {
+
+FitArguments withLevel(double level)
+{
+    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
+    arguments.level = level;
+    return arguments;
+}
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(fit_cache)
+
+BOOST_AUTO_TEST_CASE(equal_arguments_fit_once)
+{
+    FitCache cache;
+    const auto first = cache.fit(withLevel(0.95));
+    for (int call = 0; call < 1000; ++call) {
+        // A fresh but equal copy each time: equality is by content, not identity.
+        const auto again = cache.fit(withLevel(0.95));
+        BOOST_TEST_REQUIRE(again == first);
+    }
+    BOOST_TEST(cache.fitsComputed() == 1u);
+    // -0 and 0 are equal cells, so they must hash alike (fit_cache.hpp: equal arguments hash equal).
+    auto negativeZero = withLevel(0.95);
+    negativeZero.constantReturns = -0.0;
+    auto zero = withLevel(0.95);
+    zero.constantReturns = 0.0;
+    BOOST_TEST(isoquant::hashArguments(negativeZero) == isoquant::hashArguments(zero));
+}
+
+BOOST_AUTO_TEST_CASE(different_arguments_fit_again)
+{
+    FitCache cache;
+    const auto classical = cache.fit(withLevel(0.95));
+    auto robust = withLevel(0.95);
+    robust.errors = std::string("hc1");
+    const auto hc1 = cache.fit(robust);
+    BOOST_TEST(cache.fitsComputed() == 2u);
+    BOOST_TEST(hc1->standardErrors(1) != classical->standardErrors(1));
+
+    // One data cell changed is a different fit too.
+    auto changed = withLevel(0.95);
+    changed.output.at(24, 0) = 230.0;
+    cache.fit(changed);
+    BOOST_TEST(cache.fitsComputed() == 3u);
+    // Both earlier fits are still there.
+    BOOST_TEST(cache.fit(withLevel(0.95)) == classical);
+    BOOST_TEST(cache.fit(robust) == hc1);
+    BOOST_TEST(cache.fitsComputed() == 3u);
+}
+
+BOOST_AUTO_TEST_CASE(least_recently_used_fit_is_evicted_beyond_capacity)
+{
+    FitCache cache(2);
+    cache.fit(withLevel(0.90)); // A
+    cache.fit(withLevel(0.95)); // B
+    cache.fit(withLevel(0.90)); // A again: a hit, now the most recent
+    BOOST_TEST(cache.fitsComputed() == 2u);
+    cache.fit(withLevel(0.99)); // C evicts B, the least recently used
+    BOOST_TEST(cache.fitsComputed() == 3u);
+    cache.fit(withLevel(0.90)); // A is kept
+    BOOST_TEST(cache.fitsComputed() == 3u);
+    cache.fit(withLevel(0.95)); // B was evicted: fitted again
+    BOOST_TEST(cache.fitsComputed() == 4u);
+
+    cache.clear();
+    cache.fit(withLevel(0.90));
+    BOOST_TEST(cache.fitsComputed() == 5u);
+}
+
+BOOST_AUTO_TEST_CASE(errors_are_not_cached)
+{
+    int calls = 0;
+    FitCache cache(8, [&](const FitArguments& arguments) {
+        ++calls;
+        return isoquant::fitFromArguments(arguments);
+    });
+    auto bad = withLevel(0.95);
+    bad.inputs.at(3, 1) = std::string("n.a.");
+    BOOST_CHECK_THROW(cache.fit(bad), isoquant::InputError);
+    BOOST_CHECK_THROW(cache.fit(bad), isoquant::InputError);
+    BOOST_TEST(calls == 2);
+    BOOST_TEST(cache.fitsComputed() == 0u);
+    // A good fit after the errors is computed and then cached as usual.
+    cache.fit(withLevel(0.95));
+    cache.fit(withLevel(0.95));
+    BOOST_TEST(calls == 3);
+    BOOST_TEST(cache.fitsComputed() == 1u);
+}
+
+BOOST_AUTO_TEST_SUITE_END()
