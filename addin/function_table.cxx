@@ -40,7 +40,7 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodFit", "PRODFIT",
          "Fits a production function to output and inputs by least squares on logs. Returns a table (enter as an "
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
-         "returns to scale with its test of = 1, and a verdict.",
+         "returns to scale with the test that it equals 1, and a verdict.",
          {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
           controlsArgument}},
         {"prodStat", "PRODSTAT",

@@ -13,7 +13,10 @@ namespace isoquant {
 
 namespace {
 
-std::string dataRowsText(Eigen::Index rows) { return std::to_string(rows) + (rows == 1 ? " row" : " rows"); }
+std::string countOf(Eigen::Index count, const std::string& noun)
+{
+    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
+}
 
 void requireSameRows(const NumericColumns& output, const NumericColumns& other, const std::string& name)
 {
@@ -21,8 +24,8 @@ void requireSameRows(const NumericColumns& output, const NumericColumns& other, 
     std::string hint;
     if (output.hasHeader != other.hasHeader)
         hint = " (a header row of text was found in " + std::string(output.hasHeader ? "output" : name) + " only)";
-    throw InputError(name + ": has " + dataRowsText(other.values.rows()) + " of data but output has " +
-                     dataRowsText(output.values.rows()) + hint);
+    throw InputError(name + ": has " + countOf(other.values.rows(), "row") + " of data but output has " +
+                     countOf(output.values.rows(), "row") + hint);
 }
 
 // The fitted table marks a control's row by this ending; an input so labelled would read back as one.
@@ -41,8 +44,8 @@ NumericColumns readBundles(const CellTable& inputs, const ProductionModel& model
     const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     if (bundles.values.cols() != k)
-        throw InputError("inputs: has " + std::to_string(bundles.values.cols()) + " columns but the model has " +
-                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
+        throw InputError("inputs: has " + countOf(bundles.values.cols(), "column") + " but the model has " +
+                         countOf(k, "input"));
     return bundles;
 }
 
