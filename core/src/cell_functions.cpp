@@ -100,7 +100,7 @@ CellTable outputColumn(const CellTable& model, const CellTable& inputs)
 {
     const ProductionModel technology = readProductionModel(model);
     return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd& bundle) { return technology.technology.output(bundle); });
+                    [&](const Eigen::VectorXd& bundle) { return technology.technology->output(bundle); });
 }
 
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
@@ -108,7 +108,7 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
     const ProductionModel technology = readProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology), [&](const Eigen::VectorXd& bundle) {
-        return technology.technology.marginalProduct(bundle, chosen);
+        return technology.technology->marginalProduct(bundle, chosen);
     });
 }
 
@@ -117,15 +117,19 @@ CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, cons
     const ProductionModel technology = readProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd&) { return technology.technology.elasticity(chosen); });
+                    [&](const Eigen::VectorXd& bundle) { return technology.technology->elasticity(bundle, chosen); });
 }
 
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 {
     const ProductionModel technology = readProductionModel(model);
-    if (inputs.empty()) return singleCell(technology.technology.scaleElasticity());
+    if (inputs.empty()) {
+        const auto scale = technology.technology->constantScaleElasticity();
+        if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
+        return singleCell(*scale);
+    }
     return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd&) { return technology.technology.scaleElasticity(); });
+                    [&](const Eigen::VectorXd& bundle) { return technology.technology->scaleElasticity(bundle); });
 }
 
 std::string returnsVerdictCell(const CellTable& model, const Cell& level)

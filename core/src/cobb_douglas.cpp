@@ -51,13 +51,4 @@ double CobbDouglas::secondPartial(const Eigen::VectorXd& inputs, Eigen::Index fi
                              extendedLogOutput(*this, inputs) - logDenominator);
 }
 
-Eigen::MatrixXd CobbDouglas::hessian(const Eigen::VectorXd& inputs) const
-{
-    const Eigen::Index k = exponents.size();
-    Eigen::MatrixXd second(k, k);
-    for (Eigen::Index i = 0; i < k; ++i)
-        for (Eigen::Index j = 0; j < k; ++j) second(i, j) = secondPartial(inputs, i, j);
-    return second;
-}
-
 } // namespace isoquant

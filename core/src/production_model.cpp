@@ -1,5 +1,6 @@
 #include "isoquant/production_model.hpp"
 
+#include "isoquant/cobb_douglas.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/production_fit.hpp"
@@ -153,12 +154,13 @@ ProductionModel readProductionModel(const CellTable& range)
     ProductionModel model;
     model.form = *rows.form;
     model.inputLabels = rows.inputLabels;
-    model.technology.logScale = rows.logScaleAtControlMeans.value_or(*rows.logScale);
-    model.technology.exponents =
-        Eigen::Map<const Eigen::VectorXd>(rows.exponents.data(), static_cast<Eigen::Index>(rows.exponents.size()));
+    const auto cobbDouglas = std::make_shared<CobbDouglas>(
+        rows.logScaleAtControlMeans.value_or(*rows.logScale),
+        Eigen::Map<const Eigen::VectorXd>(rows.exponents.data(), static_cast<Eigen::Index>(rows.exponents.size())));
+    model.technology = cobbDouglas;
     model.scaleTest = rows.scaleTest;
     if (model.scaleTest) {
-        const double sum = model.technology.scaleElasticity();
+        const double sum = cobbDouglas->scaleElasticity();
         if (std::fabs(model.scaleTest->estimate - sum) > 1e-9 * std::max(1.0, std::fabs(sum)))
             throw InputError("model: returns to scale (" + formatNumber(model.scaleTest->estimate) +
                              ") is not the sum of the exponents (" + formatNumber(sum) + ")");
@@ -189,7 +191,11 @@ Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& mode
 
 std::string returnsVerdict(const ProductionModel& model, double level)
 {
-    if (!model.scaleTest) return classifyReturnsToScale(model.technology.scaleElasticity(), notANumber, level, false);
+    if (!model.scaleTest) {
+        const auto scale = model.technology->constantScaleElasticity();
+        if (!scale) throw InputError("model: its returns to scale vary with the inputs, and it carries no test of them");
+        return classifyReturnsToScale(*scale, notANumber, level, false);
+    }
     return classifyReturnsToScale(model.scaleTest->estimate, model.scaleTest->pValue, level, model.scaleTest->imposed);
 }
 

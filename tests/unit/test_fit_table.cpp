@@ -1,6 +1,7 @@
 // The PRODFIT table's layout, reading it back as a model, hand-typed models, and PRODSTAT lookups.
 // Fits are of the published data sets (sources in tests/data/README.md); what is checked here is
 // the layout fit_table.hpp and production_model.hpp document, not the figures themselves.
+#include "model_access.hpp"
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/production_model.hpp"
@@ -15,6 +16,8 @@
 
 #include <cmath>
 #include <numeric>
+
+using isoquant::testing::cobbDouglasOf;
 
 using isoquant::testing::closeTo;
 using isoquant::Cell;
@@ -124,9 +127,9 @@ BOOST_AUTO_TEST_CASE(model_read_from_table_has_the_fitted_technology)
     BOOST_TEST((model.form == isoquant::ProductionForm::cobbDouglas));
     BOOST_TEST(model.inputLabels == (std::vector<std::string>{"L", "C"}), boost::test_tools::per_element());
     // Cells carry the doubles unchanged, so the round trip is exact.
-    BOOST_TEST(model.technology.logScale == fit.estimates(0));
-    BOOST_TEST(model.technology.exponents(0) == fit.estimates(1));
-    BOOST_TEST(model.technology.exponents(1) == fit.estimates(2));
+    BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
+    BOOST_TEST(cobbDouglasOf(model).exponents(0) == fit.estimates(1));
+    BOOST_TEST(cobbDouglasOf(model).exponents(1) == fit.estimates(2));
     BOOST_TEST_REQUIRE(model.scaleTest.has_value());
     BOOST_TEST(model.scaleTest->fStatistic == fit.returns.fStatistic);
     BOOST_TEST(model.scaleTest->pValue == fit.returns.pValue);
@@ -145,14 +148,14 @@ BOOST_AUTO_TEST_CASE(model_with_controls_uses_ln_a_at_control_means)
     const auto fit = statePanelFit();
     const auto model = isoquant::readProductionModel(isoquant::fitTable(fit));
     BOOST_TEST(model.inputLabels == (std::vector<std::string>{"pcap", "pc", "emp"}), boost::test_tools::per_element());
-    BOOST_TEST(model.technology.exponents.size() == 3);
-    for (Eigen::Index i = 0; i < 3; ++i) BOOST_TEST(model.technology.exponents(i) == fit.estimates(1 + i));
-    BOOST_TEST(model.technology.logScale == fit.logScaleAtControlMeans);
+    BOOST_TEST(cobbDouglasOf(model).exponents.size() == 3);
+    for (Eigen::Index i = 0; i < 3; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.estimates(1 + i));
+    BOOST_TEST(cobbDouglasOf(model).logScale == fit.logScaleAtControlMeans);
 
     const auto unemp = isoquant::testing::CsvTable::read(isoquant::testing::dataPath("us_states_produc_1970_1986.csv"))
                            .numbers("unemp");
     const double meanUnemp = std::accumulate(unemp.begin(), unemp.end(), 0.0) / static_cast<double>(unemp.size());
-    BOOST_TEST(closeTo(model.technology.logScale, fit.estimates(0) + fit.estimates(4) * meanUnemp, 1e-12));
+    BOOST_TEST(closeTo(cobbDouglasOf(model).logScale, fit.estimates(0) + fit.estimates(4) * meanUnemp, 1e-12));
 }
 
 // form | cobb-douglas; A | 1.01; labour | 0.75; capital | 0.25 — the published 1928 function typed
@@ -166,7 +169,7 @@ BOOST_AUTO_TEST_CASE(hand_typed_model_works)
                                                           {std::string("capital"), 0.25}});
     const auto read = isoquant::readProductionModel(model);
     BOOST_TEST(read.inputLabels == (std::vector<std::string>{"labour", "capital"}), boost::test_tools::per_element());
-    BOOST_TEST(read.technology.logScale == std::log(1.01));
+    BOOST_TEST(cobbDouglasOf(read).logScale == std::log(1.01));
     BOOST_TEST(!read.scaleTest.has_value());
 
     const CellTable inputs = isoquant::testing::cobbDouglas1928Arguments().inputs; // header L, C skipped
@@ -213,8 +216,8 @@ BOOST_AUTO_TEST_CASE(round_trip_holds_whatever_the_input_labels)
             const std::string message = messageOf([&] {
                 const auto model = isoquant::readProductionModel(isoquant::fitTable(fit));
                 BOOST_TEST(model.inputLabels.size() == 2u);
-                BOOST_TEST(model.technology.logScale == fit.estimates(0));
-                BOOST_TEST(model.technology.exponents == fit.estimates.tail(2), boost::test_tools::per_element());
+                BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
+                BOOST_TEST(cobbDouglasOf(model).exponents == fit.estimates.tail(2), boost::test_tools::per_element());
             });
             BOOST_TEST(message == "<no InputError>");
         }

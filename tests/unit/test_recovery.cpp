@@ -1,5 +1,6 @@
 // Fits to data generated from a known Cobb-Douglas technology with small seeded noise, for every
 // number of inputs from 1 to 20, through the PRODFIT argument path (ranges without a header).
+#include "model_access.hpp"
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/production_model.hpp"
@@ -10,6 +11,8 @@
 
 #include <cmath>
 #include <random>
+
+using isoquant::testing::cobbDouglasOf;
 
 using isoquant::testing::closeTo;
 
@@ -120,9 +123,9 @@ BOOST_AUTO_TEST_CASE(twenty_inputs_round_trip_through_the_table)
     BOOST_TEST(table.rows() == 34u);
     BOOST_TEST(table.rows() == isoquant::fitTableRows(20, 0));
     const auto model = isoquant::readProductionModel(table);
-    BOOST_TEST_REQUIRE(model.technology.exponents.size() == 20);
-    BOOST_TEST(model.technology.logScale == fit.estimates(0));
-    for (int i = 0; i < 20; ++i) BOOST_TEST(model.technology.exponents(i) == fit.estimates(1 + i));
+    BOOST_TEST_REQUIRE(cobbDouglasOf(model).exponents.size() == 20);
+    BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
+    for (int i = 0; i < 20; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.estimates(1 + i));
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -9,9 +9,10 @@
 #pragma once
 
 #include "isoquant/cells.hpp"
-#include "isoquant/cobb_douglas.hpp"
+#include "isoquant/technology.hpp"
 #include "isoquant/production_form.hpp"
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -29,7 +30,8 @@ struct ScaleTest {
 struct ProductionModel {
     ProductionForm form = ProductionForm::cobbDouglas;
     std::vector<std::string> inputLabels;
-    CobbDouglas technology; // ln A as the evaluators use it
+    // Cobb-Douglas: ln A as the evaluators use it (at the controls' means when the fit had any).
+    std::shared_ptr<const Technology> technology;
     // The test of ν = 1 from a PRODFIT table; absent for a hand-typed model.
     std::optional<ScaleTest> scaleTest;
 };
