@@ -37,7 +37,7 @@ def summarise(doc, name):
     print_table(table)
     by_label = {row[0]: row for row in table}
     returns = by_label["returns to scale"]
-    print("  -> returns to scale %.3f (SE %.3f, p-value of = 1: %.3f): %s" % (
+    print("  -> returns to scale %.3f (SE %.3f; p-value of the test that it equals 1: %.3f): %s" % (
         returns[1], returns[2], returns[4], by_label["verdict"][1]))
 
 
@@ -63,6 +63,8 @@ def main():
             office.export_pdf(doc, pdf)
             print("  PDF: %s" % os.path.abspath(pdf))
             doc.close(True)
+    print("\nThese figures are statistical estimates (here from invented data), not professional advice;")
+    print("see the caution in README.md before such figures steer a costly decision.")
     print("\nTo use these workbooks yourself: in LibreOffice Calc choose Tools > Extension Manager > Add,")
     print("pick %s, restart LibreOffice, then open the .fods files in %s." % (
         os.path.abspath(arguments.extension), HERE))
