@@ -126,6 +126,7 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
     if (inputs.empty()) {
         const auto scale = technology.technology->constantScaleElasticity();
         if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
+        if (!std::isfinite(*scale)) throw InputError("model: its returns to scale are too large to represent");
         return singleCell(*scale);
     }
     return columnOf(readBundles(inputs, technology),

@@ -1,8 +1,7 @@
 #include "isoquant/text.hpp"
 
 #include <cctype>
-#include <cstdio>
-#include <cstdlib>
+#include <charconv>
 
 namespace isoquant {
 
@@ -26,12 +25,11 @@ bool endsWithIgnoringCase(std::string_view text, std::string_view ending)
 
 std::string formatNumber(double value)
 {
+    // The shortest text that reads back as the same double, in plain notation where that is the
+    // shorter ("100", "0.25", "1e-300").
     char buffer[32];
-    for (int digits = 1; digits <= 17; ++digits) {
-        std::snprintf(buffer, sizeof buffer, "%.*g", digits, value);
-        if (std::strtod(buffer, nullptr) == value) break;
-    }
-    return buffer;
+    const auto written = std::to_chars(buffer, buffer + sizeof buffer, value);
+    return std::string(buffer, written.ptr);
 }
 
 std::string quoted(std::string_view text)

@@ -304,6 +304,12 @@ BOOST_AUTO_TEST_CASE(results_too_large_to_represent)
                "inputs: row 3 gives a result too large to represent");
     BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(model, bundles, 1.0); }) ==
                "inputs: row 3 gives a result too large to represent");
+
+    // Found by the fuzz target fuzz_evaluators: exponents summing past the largest double.
+    const CellTable hugeExponents = isoquant::testing::typedRange(
+        {{text("form"), text("cobb-douglas")}, {text("ln A"), 0.0}, {text("x"), 1e308}, {text("y"), 1e308}});
+    BOOST_TEST(messageOf([&] { isoquant::scaleColumn(hugeExponents, CellTable()); }) ==
+               "model: its returns to scale are too large to represent");
 }
 
 BOOST_AUTO_TEST_SUITE_END()
