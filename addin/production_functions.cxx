@@ -5,6 +5,7 @@
 
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
+#include "isoquant/growth_cell_functions.hpp"
 #include "isoquant/input_error.hpp"
 
 #include <new>
@@ -136,6 +137,32 @@ Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 {
     return guardedValue(
         [&] { return Cell(returnsVerdictCell(toCellTable(model, "model"), toSingleCell(level, "level"))); });
+}
+
+AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs)
+{
+    return guardedTable([&] {
+        return productivityColumn(toCellTable(model, "model"), toCellTable(output, "output"),
+                                  toCellTable(inputs, "inputs"));
+    });
+}
+
+AnyTable ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
+                                         const Any& method)
+{
+    return guardedTable([&] {
+        return growthAccountTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
+                                  toCellTable(weights, "weights"), toSingleCell(method, "method"));
+    });
+}
+
+AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& shares, const Any& method,
+                                        const Any& base)
+{
+    return guardedTable([&] {
+        return quantityIndexColumn(toCellTable(quantities, "quantities"), toCellTable(shares, "shares"),
+                                   toSingleCell(method, "method"), toSingleCell(base, "base"));
+    });
 }
 
 OUString ProductionFunctions::getProgrammaticFuntionName(const OUString& displayName)

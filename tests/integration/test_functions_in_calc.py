@@ -1017,6 +1017,9 @@ ARGUMENT_COUNTS = {"PRODFIT": 7, "PRODSTAT": 9, "PRODOUTPUT": 2, "PRODMARGINAL":
 # Arguments declared `any` in idl/ (all but the leading ranges); Calc marks those optional.
 REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 2, "PRODOUTPUT": 2, "PRODMARGINAL": 2, "PRODELASTICITY": 2,
                       "PRODSCALE": 1, "PRODRETURNS": 1}
+# Productivity and growth (their own checks: test_growth_in_calc.py).
+ARGUMENT_COUNTS.update({"PRODTFP": 3, "PRODGROWTH": 4, "PRODINDEX": 4})
+REQUIRED_ARGUMENTS.update({"PRODTFP": 3, "PRODGROWTH": 3, "PRODINDEX": 2})
 FUNCTION_CATEGORY_NAMES = ["DATABASE", "DATETIME", "FINANCIAL", "INFORMATION", "LOGICAL", "MATHEMATICAL",
                            "MATRIX", "STATISTICAL", "TEXT", "SPREADSHEET", "ADDIN"]
 

@@ -1,0 +1,30 @@
+// The cell functions of productivity and growth on plain cells: PRODTFP, PRODGROWTH, PRODINDEX.
+// Every function throws InputError with a message that names the argument, and the period (or
+// row) at fault. Ranges whose rows are periods list them in time order, first period first.
+#pragma once
+
+#include "isoquant/cells.hpp"
+
+namespace isoquant {
+
+// PRODTFP: total factor productivity Y / f(x) of each row (growth_accounting.hpp), a column.
+// `model` as for the evaluators (a PRODFIT table or a typed model); `output` one column;
+// `inputs` one column per model input, as many rows as output.
+CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs);
+
+// PRODGROWTH: the growth account of every period (layout in growth_table.hpp).
+// `weights` is read as a model when every cell of its first column below the first row holds a
+// label or is empty (a PRODFIT table or a typed model: its elasticities at each period's inputs);
+// otherwise as cost shares, one column per input and one row per period (an optional header row).
+// `method`: "tornqvist" (default; each interval weighs by the mean of its two periods' weights)
+// or "fixed" (the constant elasticities of a Cobb-Douglas model).
+CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, const CellTable& weights,
+                             const Cell& method);
+
+// PRODINDEX: the chained quantity index of every period (index_numbers.hpp), a column.
+// `method`: "tornqvist" (default), "laspeyres", "paasche" or "fisher"; `base`: the first period's
+// value, a positive number (default 1).
+CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shares, const Cell& method,
+                              const Cell& base);
+
+} // namespace isoquant

@@ -1,0 +1,39 @@
+// Reads ranges whose data rows are periods 1…n, in time order (output, input quantities, cost
+// shares of PRODGROWTH and PRODINDEX). An optional first row of text names the columns, as in
+// readNumericColumns. Messages name the period and the row of the selection, for example
+// "inputs: period 4 (row 5), column 2 is 0; quantities must be positive".
+#pragma once
+
+#include "isoquant/cells.hpp"
+#include "isoquant/numeric_range.hpp"
+
+#include <string>
+
+namespace isoquant {
+
+enum class PeriodValueRule {
+    positive,   // quantities and output: their logarithms are taken
+    nonNegative // cost shares
+};
+
+// Throws InputError naming `argument`, the period and the row (and column when there are several).
+NumericColumns readPeriodColumns(const CellTable& range, const std::string& argument, PeriodValueRule rule,
+                                 const std::string& defaultLabelPrefix);
+
+// "period 4 (row 5)" for the data row at 0-based `index` of `columns`.
+std::string periodPlace(const NumericColumns& columns, Eigen::Index index);
+
+// How far a period's shares may stray from summing to 1: |Σᵢ sᵢ − 1| ≤ 0.01. Shares are used as
+// given (never rescaled); the check only catches columns that are not shares at all, or shares
+// of a different set of inputs.
+inline constexpr double shareSumTolerance = 0.01;
+
+// Throws InputError naming `argument` and the first period whose shares miss 1 by more than
+// shareSumTolerance.
+void requireSharesSumToOne(const NumericColumns& shares, const std::string& argument);
+
+// Throws InputError when `other` has a different number of periods than `reference`.
+void requireSamePeriods(const NumericColumns& reference, const std::string& referenceArgument,
+                        const NumericColumns& other, const std::string& otherArgument);
+
+} // namespace isoquant

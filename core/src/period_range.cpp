@@ -1,0 +1,100 @@
+#include "isoquant/period_range.hpp"
+
+#include "isoquant/input_error.hpp"
+#include "isoquant/text.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+bool firstRowIsAllText(const CellTable& range)
+{
+    for (std::size_t column = 0; column < range.columns(); ++column)
+        if (!isText(range.at(0, column)) || std::get<std::string>(range.at(0, column)).empty()) return false;
+    return true;
+}
+
+std::string cellPlace(const std::string& argument, std::size_t period, std::size_t row, std::size_t column,
+                      std::size_t columns)
+{
+    std::string text = argument + ": period " + std::to_string(period) + " (row " + std::to_string(row + 1) + ")";
+    if (columns > 1) text += ", column " + std::to_string(column + 1);
+    return text;
+}
+
+std::string plural(Eigen::Index count, const std::string& noun)
+{
+    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
+}
+
+} // namespace
+
+NumericColumns readPeriodColumns(const CellTable& range, const std::string& argument, PeriodValueRule rule,
+                                 const std::string& defaultLabelPrefix)
+{
+    if (range.empty()) throw InputError(argument + ": the range is empty");
+
+    NumericColumns result;
+    result.hasHeader = firstRowIsAllText(range);
+    const std::size_t firstRow = result.hasHeader ? 1 : 0;
+    const std::size_t columns = range.columns();
+    for (std::size_t column = 0; column < columns; ++column)
+        result.labels.push_back(result.hasHeader ? std::get<std::string>(range.at(0, column))
+                                                 : defaultLabelPrefix + " " + std::to_string(column + 1));
+    if (range.rows() == firstRow) throw InputError(argument + ": holds a header row but no periods");
+
+    result.values.resize(static_cast<Eigen::Index>(range.rows() - firstRow), static_cast<Eigen::Index>(columns));
+    for (std::size_t row = firstRow; row < range.rows(); ++row) {
+        const std::size_t period = row - firstRow + 1;
+        for (std::size_t column = 0; column < columns; ++column) {
+            const Cell& cell = range.at(row, column);
+            const auto place = [&] { return cellPlace(argument, period, row, column, columns); };
+            if (isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()))
+                throw InputError(place() + " is empty; every period needs a number");
+            if (isText(cell))
+                throw InputError(place() + " holds text " + quoted(std::get<std::string>(cell)) +
+                                 "; every period needs a number");
+            const double value = std::get<double>(cell);
+            if (!std::isfinite(value)) throw InputError(place() + " is not a finite number");
+            if (rule == PeriodValueRule::positive && value <= 0)
+                throw InputError(place() + " is " + formatNumber(value) + "; quantities must be positive (growth is a "
+                                 "difference of logs)");
+            if (rule == PeriodValueRule::nonNegative && value < 0)
+                throw InputError(place() + " is " + formatNumber(value) + "; cost shares cannot be negative");
+            result.values(static_cast<Eigen::Index>(period - 1), static_cast<Eigen::Index>(column)) = value;
+        }
+    }
+    return result;
+}
+
+std::string periodPlace(const NumericColumns& columns, Eigen::Index index)
+{
+    return "period " + std::to_string(index + 1) + " (row " +
+           std::to_string(static_cast<std::size_t>(index) + columns.firstDataRow()) + ")";
+}
+
+void requireSharesSumToOne(const NumericColumns& shares, const std::string& argument)
+{
+    for (Eigen::Index period = 0; period < shares.values.rows(); ++period) {
+        const double sum = shares.values.row(period).sum();
+        if (std::fabs(sum - 1) > shareSumTolerance)
+            throw InputError(argument + ": " + periodPlace(shares, period) + ": the shares sum to " +
+                             formatNumber(sum) + "; the cost shares of a period must sum to 1 (within 0.01)");
+    }
+}
+
+void requireSamePeriods(const NumericColumns& reference, const std::string& referenceArgument,
+                        const NumericColumns& other, const std::string& otherArgument)
+{
+    if (other.values.rows() == reference.values.rows()) return;
+    std::string hint;
+    if (reference.hasHeader != other.hasHeader)
+        hint = " (a header row of text was found in " + (reference.hasHeader ? referenceArgument : otherArgument) +
+               " only)";
+    throw InputError(otherArgument + ": has " + plural(other.values.rows(), "period") + " but " + referenceArgument +
+                     " has " + plural(reference.values.rows(), "period") + hint);
+}
+
+} // namespace isoquant
