@@ -918,7 +918,7 @@ ERROR_CASES = [
     ('"ces" not available yet', None, 'PRODFIT({out};{inp};"ces")', TABLE,
      error('form: "ces" is not available yet; use "cobb-douglas"')),
     ('errors "hc" (abbreviated)', None, 'PRODFIT({out};{inp};;;"hc")', TABLE,
-     error("errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\" or \"hc3\"")),
+     error("errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"")),
     ("level 1.5", None, "PRODFIT({out};{inp};;;;1.5)", TABLE, error("level: 1.5 " + LEVEL_HINT)),
     # Calc passes a reference to one empty cell as the number 0 to an `any` argument.
     ("level from an empty cell", None, "PRODFIT({out};{inp};;;;{empty})", TABLE, error("level: 0 " + LEVEL_HINT)),
