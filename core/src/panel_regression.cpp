@@ -12,6 +12,12 @@ namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
+// A column that is constant within every group is zero after demeaning, up to the rounding of the
+// group means (about n·ε of the column's size); what is left below this fraction of the column's
+// norm is that rounding, not variation, and the column counts as absorbed by the group effects.
+// Real within variation, however small against the levels (years 2015–2022: 1e-3), is far above.
+constexpr double withinVariationTolerance = 1e-11;
+
 // Means of the columns of `values` within each group: row g holds group g's means.
 Eigen::MatrixXd groupMeans(const Eigen::MatrixXd& values, const std::vector<Eigen::Index>& groupOfRow,
                            Eigen::Index groups)
@@ -133,6 +139,9 @@ PanelRegression fitPanelRegression(const Eigen::MatrixXd& design, const Eigen::V
         responseMeans = groupMeans(response, panel.groupOfRow, groups).col(0);
         runDesign = withinGroups(slopes, columnMeans, panel.groupOfRow);
         runResponse = withinGroups(response, responseMeans, panel.groupOfRow).col(0);
+        for (Eigen::Index j = 0; j < runDesign.cols(); ++j)
+            if (runDesign.col(j).norm() <= withinVariationTolerance * slopes.col(j).norm())
+                throw CollinearPanelColumns({0, j + 1});
         options.absorbedParameters = groups;
         Eigen::VectorXd groupSizes = Eigen::VectorXd::Zero(groups);
         for (const Eigen::Index g : panel.groupOfRow) groupSizes(g) += 1.0;
