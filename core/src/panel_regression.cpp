@@ -96,6 +96,15 @@ std::string effectsWord(EffectsKind effects)
     return "none";
 }
 
+Eigen::Index panelParameterCount(const PanelColumns& panel, EffectsKind effects)
+{
+    Eigen::Index count = 0;
+    if (panel.hasPeriods() && effects != EffectsKind::twoWay) count += 1;
+    if (effects == EffectsKind::twoWay) count += static_cast<Eigen::Index>(distinctPeriods(panel.periods).size()) - 1;
+    if (effects != EffectsKind::none) count += static_cast<Eigen::Index>(panel.groupLabels.size()) - 1;
+    return count;
+}
+
 PanelRegression fitPanelRegression(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
                                    const PanelColumns& panel, EffectsKind effects, LeastSquaresOptions options)
 {

@@ -162,21 +162,6 @@ void requirePanelColumns(const ProductionData& data, const ProductionFitOptions&
     }
 }
 
-// Parameters the panel adds to the form's design: the trend, T − 1 period effects, and the
-// G − 1 group effects beyond the constant they replace.
-Eigen::Index panelParameters(const PanelColumns& panel, EffectsKind effects)
-{
-    Eigen::Index count = 0;
-    if (panel.hasPeriods() && effects != EffectsKind::twoWay) count += 1;
-    if (effects == EffectsKind::twoWay) {
-        std::vector<double> periods(panel.periods.data(), panel.periods.data() + panel.periods.size());
-        std::sort(periods.begin(), periods.end());
-        count += static_cast<Eigen::Index>(std::unique(periods.begin(), periods.end()) - periods.begin()) - 1;
-    }
-    if (effects != EffectsKind::none) count += static_cast<Eigen::Index>(panel.groupLabels.size()) - 1;
-    return count;
-}
-
 ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index column)
 {
     return {regression.coefficients(column), regression.standardErrors(column), regression.tStatistics(column),
@@ -239,7 +224,7 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
 
     const LogLinearDesign built = buildDesign(data, options.constantReturns);
     const Eigen::Index baseColumns = built.design.cols();
-    const Eigen::Index p = baseColumns + panelParameters(data.panel, options.effects);
+    const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
     if (n < p + 1) {
         const std::string groupNote = options.effects == EffectsKind::none
                                           ? ""

@@ -80,6 +80,10 @@ public:
     using CollinearColumns::CollinearColumns;
 };
 
+// Parameters the panel adds to a form's design: 1 for a trend, T − 1 period effects under
+// two-way effects, and under effects the G − 1 group effects beyond the constant they replace.
+Eigen::Index panelParameterCount(const PanelColumns& panel, EffectsKind effects);
+
 // `design` has the constant in column 0. options.covariance = cluster clusters by the groups;
 // the caller has checked that the panel columns needed are there (groups for effects and
 // clusters, periods for a trend and two-way effects) and have one entry per row. Throws
