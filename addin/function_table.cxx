@@ -18,12 +18,27 @@ constexpr ArgumentInfo constantReturnsArgument{
     "constant returns", "TRUE to impose constant returns to scale (exponents summing to 1); FALSE or empty to "
                         "estimate them freely."};
 constexpr ArgumentInfo errorsArgument{
-    "errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."};
+    "errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity), or "
+              "\"cluster\" (robust within each group of the groups argument; tests then use G - 1 degrees of "
+              "freedom for G groups)."};
 constexpr ArgumentInfo levelArgument{
     "level", "Confidence level of the bounds and of the returns-to-scale verdict, between 0 and 1 (default 0.95)."};
 constexpr ArgumentInfo controlsArgument{
     "controls", "Optional extra columns entered as they are, not logged (a rate, a 0/1 dummy), as many rows as "
                 "output."};
+constexpr ArgumentInfo groupsArgument{
+    "groups", "Optional column naming the plant or firm of each row (numbers or texts), as many rows as output, "
+              "a header row allowed. Needed for effects and for \"cluster\" errors."};
+constexpr ArgumentInfo effectsArgument{
+    "effects", "\"none\" (default: groups only define clusters), \"fixed\" (one effect per group, within "
+               "estimator) or \"two-way\" (group and period effects; the periods come from trend)."};
+constexpr ArgumentInfo trendArgument{
+    "trend", "Optional column of periods (years), as many rows as output: adds a time trend, reported as the "
+             "rate of technical change per period. With \"two-way\" effects it gives the periods instead."};
+constexpr ArgumentInfo incompleteRowsArgument{
+    "incomplete rows", "TRUE to leave out rows with a blank or text cell (the table counts them); FALSE or empty: "
+                       "such a cell is an error. A cell with an error value (#N/A) stops Calc before the call "
+                       "(Err:504)."};
 constexpr ArgumentInfo modelArgument{
     "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas), ln A (or A) "
              "and one exponent row per input."};
@@ -42,15 +57,20 @@ const std::vector<FunctionInfo>& functionTable()
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
          "returns to scale with the test that it equals 1, and a verdict.",
          {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-          controlsArgument}},
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
         {"prodStat", "PRODSTAT",
          "One value of the PRODFIT table, looked up by row and column label, without an array formula.",
          {outputArgument, inputsArgument,
           {"row label", "A row of the table: ln A, an input's label, R2, adjusted R2, residual SD, F, "
-                        "log-likelihood, AIC, BIC, returns to scale, verdict, observations…"},
+                        "log-likelihood, AIC, BIC, returns to scale, verdict, observations, smearing factor…; "
+                        "with effects also \"effect of group <label>\" (and \"effect of period <year>\")."},
           {"column label", "estimate (default), std. error, t, p-value, low or high."},
-          formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument}},
-        {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.", {modelArgument, bundlesArgument}},
+          formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
+          effectsArgument, trendArgument, incompleteRowsArgument}},
+        {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
+         {modelArgument, bundlesArgument,
+          {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "
+                   "for the median prediction, exp of the fitted log."}}},
         {"prodMarginal", "PRODMARGINAL",
          "Marginal product of one input for each row of inputs: the extra output from one more unit of it.",
          {modelArgument, bundlesArgument, inputArgument}},

@@ -86,29 +86,46 @@ FitArguments ProductionFunctions::fitArguments(const AnyTable& output, const Any
     return arguments;
 }
 
+FitArguments ProductionFunctions::withPanelArguments(FitArguments arguments, const Any& groups, const Any& effects,
+                                                     const Any& trend, const Any& incompleteRows)
+{
+    arguments.groups = toOptionalTable(groups, "groups");
+    arguments.effects = toSingleCell(effects, "effects");
+    arguments.trend = toOptionalTable(trend, "trend");
+    arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
+    return arguments;
+}
+
 AnyTable ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                       const Any& constantReturns, const Any& errors, const Any& level,
-                                      const Any& controls)
+                                      const Any& controls, const Any& groups, const Any& effects, const Any& trend,
+                                      const Any& incompleteRows)
 {
     return guardedTable([&] {
-        return fitTable(*fits_.fit(fitArguments(output, inputs, form, constantReturns, errors, level, controls)));
+        return fitTable(*fits_.fit(withPanelArguments(
+            fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
+            incompleteRows)));
     });
 }
 
 Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs, const Any& rowLabel,
                                   const Any& columnLabel, const Any& form, const Any& constantReturns,
-                                  const Any& errors, const Any& level, const Any& controls)
+                                  const Any& errors, const Any& level, const Any& controls, const Any& groups,
+                                  const Any& effects, const Any& trend, const Any& incompleteRows)
 {
     return guardedValue([&] {
-        const auto fit = fits_.fit(fitArguments(output, inputs, form, constantReturns, errors, level, controls));
-        return lookUpFitTable(fitTable(*fit), toSingleCell(rowLabel, "row label"),
-                              toSingleCell(columnLabel, "column label"));
+        const auto fit = fits_.fit(withPanelArguments(
+            fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
+            incompleteRows));
+        return lookUpFit(*fit, toSingleCell(rowLabel, "row label"), toSingleCell(columnLabel, "column label"));
     });
 }
 
-AnyTable ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs)
+AnyTable ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
 {
-    return guardedTable([&] { return outputColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs")); });
+    return guardedTable([&] {
+        return outputColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
+    });
 }
 
 AnyTable ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const Any& input)

@@ -30,12 +30,16 @@ public:
     // XProductionFunctions
     AnyTable SAL_CALL prodFit(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
-                              const css::uno::Any& level, const css::uno::Any& controls) override;
+                              const css::uno::Any& level, const css::uno::Any& controls,
+                              const css::uno::Any& groups, const css::uno::Any& effects, const css::uno::Any& trend,
+                              const css::uno::Any& incompleteRows) override;
     css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& rowLabel,
                                     const css::uno::Any& columnLabel, const css::uno::Any& form,
                                     const css::uno::Any& constantReturns, const css::uno::Any& errors,
-                                    const css::uno::Any& level, const css::uno::Any& controls) override;
-    AnyTable SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs) override;
+                                    const css::uno::Any& level, const css::uno::Any& controls,
+                                    const css::uno::Any& groups, const css::uno::Any& effects,
+                                    const css::uno::Any& trend, const css::uno::Any& incompleteRows) override;
+    AnyTable SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& mean) override;
     AnyTable SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
     AnyTable SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
     AnyTable SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
@@ -69,6 +73,10 @@ private:
     FitArguments fitArguments(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
                               const css::uno::Any& level, const css::uno::Any& controls) const;
+    // The panel arguments (groups, effects, trend, incomplete rows) added to `arguments`.
+    static FitArguments withPanelArguments(FitArguments arguments, const css::uno::Any& groups,
+                                           const css::uno::Any& effects, const css::uno::Any& trend,
+                                           const css::uno::Any& incompleteRows);
 
     FitCache fits_;
     css::lang::Locale locale_;

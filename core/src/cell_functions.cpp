@@ -3,10 +3,12 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
+#include "isoquant/panel_arguments.hpp"
 #include "isoquant/production_model.hpp"
 #include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 namespace isoquant {
@@ -73,11 +75,22 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     options.constantReturns = readSwitchArgument(arguments.constantReturns, "constant returns");
     options.covariance = readErrorsArgument(arguments.errors);
     options.confidenceLevel = readLevelArgument(arguments.level, "level");
+    options.effects = readEffectsArgument(arguments.effects);
+    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
 
-    const NumericColumns output = readNumericColumns(arguments.output, "output", ValueRule::positive, "output");
+    // Empty ranges are left to the readers below, which say so.
+    std::vector<bool> incomplete;
+    const bool filtering = dropIncomplete && !arguments.output.empty() && !arguments.inputs.empty();
+    if (filtering)
+        incomplete = findIncompleteRows(
+            {arguments.output, arguments.inputs, arguments.controls, arguments.groups, arguments.trend});
+    const std::vector<bool>* skipped = filtering ? &incomplete : nullptr;
+
+    const NumericColumns output =
+        readNumericColumns(arguments.output, "output", ValueRule::positive, "output", skipped);
     if (output.values.cols() != 1)
         throw InputError("output: must be one column; it has " + std::to_string(output.values.cols()));
-    const NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input");
+    const NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
     requireSameRows(output, inputs, "inputs");
     refuseControlLabels(inputs);
 
@@ -86,21 +99,43 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     data.inputs = inputs.values;
     data.inputLabels = inputs.labels;
     if (!arguments.controls.empty()) {
-        const NumericColumns controls = readNumericColumns(arguments.controls, "controls", ValueRule::finite, "control");
+        const NumericColumns controls =
+            readNumericColumns(arguments.controls, "controls", ValueRule::finite, "control", skipped);
         requireSameRows(output, controls, "controls");
         data.controls = controls.values;
         data.controlLabels = controls.labels;
     } else {
         data.controls.resize(data.output.size(), 0);
     }
-    return fitProduction(data, options);
+    const std::size_t dataRows = arguments.output.rows() - (output.hasHeader ? 1 : 0);
+    if (!arguments.groups.empty()) readGroups(arguments.groups, dataRows, skipped, data.panel);
+    if (!arguments.trend.empty()) {
+        const NumericColumns trend = readNumericColumns(arguments.trend, "trend", ValueRule::finite, "trend", skipped);
+        if (trend.values.cols() != 1)
+            throw InputError("trend: must be one column of periods; it has " + std::to_string(trend.values.cols()));
+        requireSameRows(output, trend, "trend");
+        data.panel.periods = trend.values.col(0);
+    }
+
+    ProductionFit fit = fitProduction(data, options);
+    fit.panel.dropsIncompleteRows = dropIncomplete;
+    fit.panel.incompleteRowsDropped =
+        static_cast<Eigen::Index>(std::count(incomplete.begin(), incomplete.end(), true));
+    return fit;
 }
 
-CellTable outputColumn(const CellTable& model, const CellTable& inputs)
+CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean)
 {
     const ProductionModel technology = readProductionModel(model);
+    double factor = 1.0;
+    if (readSwitchArgument(mean, "mean")) {
+        if (!technology.smearingFactor)
+            throw InputError("mean: the model has no \"smearing factor\" row; use a PRODFIT table, or add the row "
+                             "(the mean of exp(residual) of ln Y)");
+        factor = *technology.smearingFactor;
+    }
     return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd& bundle) { return technology.technology->output(bundle); });
+                    [&](const Eigen::VectorXd& bundle) { return factor * technology.technology->output(bundle); });
 }
 
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)

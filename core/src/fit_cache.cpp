@@ -43,6 +43,9 @@ std::size_t hashArguments(const FitArguments& arguments)
     hashTable(seed, arguments.controls);
     for (const Cell* option : {&arguments.form, &arguments.constantReturns, &arguments.errors, &arguments.level})
         hashCell(seed, *option);
+    hashTable(seed, arguments.groups);
+    hashTable(seed, arguments.trend);
+    for (const Cell* option : {&arguments.effects, &arguments.incompleteRows}) hashCell(seed, *option);
     return seed;
 }
 

@@ -86,18 +86,50 @@ std::size_t findRow(const CellTable& table, const std::string& wanted)
     throw InputError("row label: " + quoted(wanted) + " is not a row of the table");
 }
 
+// Rows of the estimation options (groups, effects, trend, incomplete rows), in table order.
+std::size_t optionRows(const PanelSummary& panel)
+{
+    const bool effects = panel.effects != EffectsKind::none;
+    return (panel.groups > 0 ? 2 : 0) + (effects ? 1 : 0) + (panel.effects == EffectsKind::twoWay ? 1 : 0) +
+           (panel.technicalChange ? 1 : 0) + (panel.shiftsLogScale ? 1 : 0) + (panel.dropsIncompleteRows ? 1 : 0);
+}
+
+void writeOptionRows(TableWriter& writer, const PanelSummary& panel)
+{
+    if (panel.groups > 0) {
+        writer.valueRow(groupsLabel, static_cast<double>(panel.groups));
+        writer.textRow(effectsLabel, {effectsWord(panel.effects)});
+    }
+    if (panel.effects != EffectsKind::none) writer.valueRow(withinRSquaredLabel, panel.withinRSquared);
+    if (panel.effects == EffectsKind::twoWay) writer.valueRow(periodsLabel, static_cast<double>(panel.periods.size()));
+    if (panel.technicalChange) {
+        const ParameterEstimate& change = *panel.technicalChange;
+        writer.put(technicalChangeLabel,
+                   {change.estimate, writer.undefinedIfExact(change.standardError),
+                    writer.undefinedIfExact(change.tStatistic), writer.undefinedIfExact(change.pValue),
+                    writer.undefinedIfExact(change.lowerBound), writer.undefinedIfExact(change.upperBound)});
+    }
+    if (panel.shiftsLogScale) writer.valueRow(predictionScaleLabel, panel.logScaleForPredictions);
+    if (panel.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(panel.incompleteRowsDropped));
+}
+
 } // namespace
 
 std::size_t fitTableRows(std::size_t inputs, std::size_t controls)
 {
-    return inputs + controls + 14 + (controls > 0 ? 1 : 0);
+    return inputs + controls + 15 + (controls > 0 ? 1 : 0);
+}
+
+std::size_t fitTableRows(const ProductionFit& fit)
+{
+    return fitTableRows(fit.inputLabels.size(), fit.controlLabels.size()) + optionRows(fit.panel);
 }
 
 CellTable fitTable(const ProductionFit& fit)
 {
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
-    TableWriter writer(fitTableRows(k, m), fit.status == FitStatus::perfectFit);
+    TableWriter writer(fitTableRows(fit), fit.status == FitStatus::perfectFit);
     writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
                                      headerLabels[5], headerLabels[6]});
     writer.parameterRow(logScaleLabel, fit, 0);
@@ -125,6 +157,8 @@ CellTable fitTable(const ProductionFit& fit)
     writer.textRow(verdictLabel, {returns.verdict});
     writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});
     if (m > 0) writer.valueRow(controlMeansLabel, fit.logScaleAtControlMeans);
+    writer.valueRow(smearingLabel, fit.smearingFactor);
+    writeOptionRows(writer, fit.panel);
     return writer.finish();
 }
 

@@ -45,19 +45,49 @@ void validateShapes(const Eigen::MatrixXd& design, const Eigen::VectorXd& respon
 // Sandwich "meat" Aᵀ·diag(ω)·A, where A = X·(XᵀX)^{-1/2}-like factor with orthonormal columns,
 // so that hᵢᵢ = ‖Aᵢ‖² are the leverages and the sandwich is H·meat·Hᵀ.
 Eigen::MatrixXd robustMeat(const Eigen::MatrixXd& orthonormalFactor, const Eigen::VectorXd& residuals,
-                           CovarianceKind kind, double residualDegreesOfFreedom)
+                           CovarianceKind kind, double residualDegreesOfFreedom,
+                           const Eigen::VectorXd& absorbedLeverage)
 {
     const Eigen::Index n = residuals.size();
     Eigen::VectorXd weights = residuals.array().square();
     if (kind == CovarianceKind::hc1) {
         weights *= static_cast<double>(n) / residualDegreesOfFreedom;
     } else {
-        const Eigen::VectorXd leverage = orthonormalFactor.rowwise().squaredNorm();
+        Eigen::VectorXd leverage = orthonormalFactor.rowwise().squaredNorm();
+        if (absorbedLeverage.size() == n) leverage += absorbedLeverage;
         // hᵢᵢ = 1 makes the HC3 weight infinite: the covariance is undefined, not huge.
         weights = (leverage.array() < 1.0)
                       .select(weights.array() / (1.0 - leverage.array()).square(), notANumber);
     }
     return orthonormalFactor.transpose() * weights.asDiagonal() * orthonormalFactor;
+}
+
+// CR1 meat: Σ_g s_g s_gᵀ with s_g = A_gᵀ e_g the score of cluster g, times
+// G/(G−1)·(n−1)/(n−p), p counting the absorbed parameters too.
+Eigen::MatrixXd clusterMeat(const Eigen::MatrixXd& orthonormalFactor, const Eigen::VectorXd& residuals,
+                            const std::vector<Eigen::Index>& clusters, Eigen::Index clusterCount,
+                            double residualDegreesOfFreedom)
+{
+    Eigen::MatrixXd scores = Eigen::MatrixXd::Zero(orthonormalFactor.cols(), clusterCount);
+    for (Eigen::Index i = 0; i < residuals.size(); ++i)
+        scores.col(clusters[static_cast<std::size_t>(i)]) += residuals(i) * orthonormalFactor.row(i).transpose();
+    const double n = static_cast<double>(residuals.size());
+    const double g = static_cast<double>(clusterCount);
+    return (g / (g - 1.0)) * ((n - 1.0) / residualDegreesOfFreedom) * (scores * scores.transpose());
+}
+
+// G, after checking that every row has a cluster in 0 … G−1 and that G ≥ 2.
+Eigen::Index countClusters(const std::vector<Eigen::Index>& clusters, Eigen::Index rows)
+{
+    if (static_cast<Eigen::Index>(clusters.size()) != rows)
+        throw std::invalid_argument("clusters: one cluster per row is needed");
+    Eigen::Index count = 0;
+    for (const Eigen::Index cluster : clusters) {
+        if (cluster < 0) throw std::invalid_argument("clusters: negative cluster index");
+        count = std::max(count, cluster + 1);
+    }
+    if (count < 2) throw std::invalid_argument("clusters: at least 2 clusters are needed");
+    return count;
 }
 
 } // namespace
@@ -74,9 +104,14 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     validateShapes(design, response, interceptColumn);
     if (!(options.confidenceLevel > 0 && options.confidenceLevel < 1))
         throw std::invalid_argument("confidenceLevel: must lie strictly between 0 and 1");
+    if (options.absorbedParameters < 0 || design.rows() <= design.cols() + options.absorbedParameters)
+        throw std::invalid_argument("design: needs more rows than parameters, absorbed ones included");
+    const bool clustered = options.covariance == CovarianceKind::cluster;
+    const Eigen::Index clusterCount = clustered ? countClusters(options.clusters, design.rows()) : 0;
 
     const Eigen::Index n = design.rows();
     const Eigen::Index p = design.cols();
+    const Eigen::Index allParameters = p + options.absorbedParameters;
 
     // Equilibrate: columns of about unit norm make the rank decision and the condition number
     // independent of the units the user's data come in. The scale factors are powers of two, so
@@ -108,6 +143,8 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     LeastSquaresResult result;
     result.observations = n;
     result.parameters = p;
+    result.absorbedParameters = options.absorbedParameters;
+    result.clusterCount = clusterCount;
     result.interceptColumn = interceptColumn;
     result.covarianceKind = options.covariance;
     result.confidenceLevel = options.confidenceLevel;
@@ -117,8 +154,11 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     result.coefficients = inverseNorms.cwiseProduct(scaledCoefficients.cast<double>());
     result.residuals = (extendedResponse - extendedDesign * scaledCoefficients).cast<double>();
 
-    const double df = static_cast<double>(n - p);
+    const double df = static_cast<double>(n - allParameters);
     result.residualDegreesOfFreedom = df;
+    // Cluster errors rest on G cluster scores, so inference uses t(G−1) and F(q, G−1).
+    const double inferenceDf = clustered ? static_cast<double>(clusterCount - 1) : df;
+    result.inferenceDegreesOfFreedom = inferenceDf;
     result.residualSumOfSquares = result.residuals.squaredNorm();
     result.totalSumOfSquares = interceptColumn
                                    ? (response.array() - response.mean()).matrix().squaredNorm()
@@ -137,15 +177,19 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
         result.covariance = (result.residualSumOfSquares / df) * (bread * bread.transpose());
     } else {
         const Eigen::MatrixXd orthonormalFactor = scaledDesign * pivotedInverse;
-        result.covariance = bread * robustMeat(orthonormalFactor, result.residuals, options.covariance, df) *
-                            bread.transpose();
+        const Eigen::MatrixXd meat =
+            clustered ? clusterMeat(orthonormalFactor, result.residuals, options.clusters, clusterCount, df)
+                      : robustMeat(orthonormalFactor, result.residuals, options.covariance, df,
+                                         options.absorbedLeverage);
+        result.covariance = bread * meat * bread.transpose();
     }
 
     result.standardErrors = result.covariance.diagonal().cwiseSqrt();
     result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
     result.pValues.resize(p);
-    for (Eigen::Index j = 0; j < p; ++j) result.pValues(j) = studentTwoSidedPValue(result.tStatistics(j), df);
-    const double critical = studentCriticalValue(options.confidenceLevel, df);
+    for (Eigen::Index j = 0; j < p; ++j)
+        result.pValues(j) = studentTwoSidedPValue(result.tStatistics(j), inferenceDf);
+    const double critical = studentCriticalValue(options.confidenceLevel, inferenceDf);
     result.lowerBounds = result.coefficients - critical * result.standardErrors;
     result.upperBounds = result.coefficients + critical * result.standardErrors;
 
@@ -165,8 +209,8 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     const double nd = static_cast<double>(n);
     const double pi = 3.14159265358979323846;
     result.logLikelihood = -nd / 2.0 * (std::log(2.0 * pi) + std::log(result.residualSumOfSquares / nd) + 1.0);
-    result.aic = -2.0 * result.logLikelihood + 2.0 * static_cast<double>(p);
-    result.bic = -2.0 * result.logLikelihood + static_cast<double>(p) * std::log(nd);
+    result.aic = -2.0 * result.logLikelihood + 2.0 * static_cast<double>(allParameters);
+    result.bic = -2.0 * result.logLikelihood + static_cast<double>(allParameters) * std::log(nd);
 
     if (std::sqrt(result.residualSumOfSquares) <= options.perfectFitTolerance * response.norm())
         result.status = FitStatus::perfectFit;
@@ -184,7 +228,7 @@ WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::Matr
     const Eigen::MatrixXd middle = restrictions * fit.covariance * restrictions.transpose();
     WaldTest test;
     test.numeratorDegreesOfFreedom = static_cast<double>(values.size());
-    test.denominatorDegreesOfFreedom = fit.residualDegreesOfFreedom;
+    test.denominatorDegreesOfFreedom = fit.inferenceDegreesOfFreedom;
     const Eigen::LDLT<Eigen::MatrixXd> factor(middle);
     const bool singular = factor.info() != Eigen::Success || !middle.allFinite() ||
                           (factor.vectorD().array() <= 0).any();

@@ -4,6 +4,7 @@
 #include "isoquant/text.hpp"
 
 #include <cmath>
+#include <stdexcept>
 
 namespace isoquant {
 
@@ -25,8 +26,10 @@ std::string place(const std::string& argument, std::size_t row, std::size_t colu
 
 } // namespace
 
+bool hasHeaderRow(const CellTable& range) { return !range.empty() && rowIsAllText(range, 0); }
+
 NumericColumns readNumericColumns(const CellTable& range, const std::string& argument, ValueRule rule,
-                                  const std::string& defaultLabelPrefix)
+                                  const std::string& defaultLabelPrefix, const std::vector<bool>* skippedRows)
 {
     if (range.empty()) throw InputError(argument + ": the range is empty");
 
@@ -39,8 +42,15 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
                                                  : defaultLabelPrefix + " " + std::to_string(column + 1));
     if (range.rows() == firstRow) throw InputError(argument + ": holds a header row but no data");
 
-    result.values.resize(static_cast<Eigen::Index>(range.rows() - firstRow), static_cast<Eigen::Index>(columns));
+    if (skippedRows && skippedRows->size() != range.rows() - firstRow)
+        throw std::invalid_argument("skippedRows: one flag per data row is needed");
+    auto skipped = [&](std::size_t row) { return skippedRows && (*skippedRows)[row - firstRow]; };
+    Eigen::Index kept = 0;
+    for (std::size_t row = firstRow; row < range.rows(); ++row) kept += skipped(row) ? 0 : 1;
+    result.values.resize(kept, static_cast<Eigen::Index>(columns));
+    Eigen::Index target = 0;
     for (std::size_t row = firstRow; row < range.rows(); ++row) {
+        if (skipped(row)) continue;
         for (std::size_t column = 0; column < columns; ++column) {
             const Cell& cell = range.at(row, column);
             if (isEmpty(cell))
@@ -54,8 +64,9 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
             if (rule == ValueRule::positive && value <= 0)
                 throw InputError(place(argument, row, column, columns) + " is " + formatNumber(value) +
                                  "; logs need positive values");
-            result.values(static_cast<Eigen::Index>(row - firstRow), static_cast<Eigen::Index>(column)) = value;
+            result.values(target, static_cast<Eigen::Index>(column)) = value;
         }
+        ++target;
     }
     return result;
 }

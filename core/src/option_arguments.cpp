@@ -60,8 +60,10 @@ CovarianceKind readErrorsArgument(const Cell& cell)
         if (equalsIgnoringCase(word, "classical")) return CovarianceKind::classical;
         if (equalsIgnoringCase(word, "hc1")) return CovarianceKind::hc1;
         if (equalsIgnoringCase(word, "hc3")) return CovarianceKind::hc3;
+        if (equalsIgnoringCase(word, "cluster")) return CovarianceKind::cluster;
     }
-    throw InputError("errors: " + describe(cell) + " is not a kind of standard error; use \"classical\", \"hc1\" or \"hc3\"");
+    throw InputError("errors: " + describe(cell) +
+                     " is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"");
 }
 
 double readLevelArgument(const Cell& cell, const std::string& argument)

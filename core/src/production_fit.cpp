@@ -4,6 +4,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <limits>
 
@@ -67,34 +68,48 @@ std::string listOfNames(const std::vector<std::string>& names)
     return text;
 }
 
-// Names the inputs and controls behind collinear design columns, in the user's labels.
-std::string collinearityMessage(const ProductionData& data, bool constantReturns,
+// Names the inputs, controls, trend or period effects behind collinear design columns (in the
+// panel regression's extended column space), in the user's labels.
+std::string collinearityMessage(const ProductionData& data, bool constantReturns, EffectsKind effects,
                                 const std::vector<Eigen::Index>& columns)
 {
     const auto k = static_cast<Eigen::Index>(data.inputLabels.size());
+    const auto m = static_cast<Eigen::Index>(data.controlLabels.size());
     const Eigen::Index slopes = constantReturns ? k - 1 : k;
+    const bool hasTrend = data.panel.hasPeriods() && effects != EffectsKind::twoWay;
     bool withConstant = false;
     std::vector<std::string> names;
-    std::size_t inputs = 0;
-    std::size_t controls = 0;
+    std::vector<std::string> arguments;
+    auto involve = [&arguments](const std::string& argument) {
+        if (std::find(arguments.begin(), arguments.end(), argument) == arguments.end()) arguments.push_back(argument);
+    };
     for (const Eigen::Index column : columns) {
         if (column == 0) {
             withConstant = true;
         } else if (column <= slopes) {
             names.push_back(quoted(data.inputLabels[static_cast<std::size_t>(column - 1)]));
-            ++inputs;
-        } else {
+            involve("inputs");
+        } else if (column <= slopes + m) {
             names.push_back("control " + quoted(data.controlLabels[static_cast<std::size_t>(column - 1 - slopes)]));
-            ++controls;
+            involve("controls");
+        } else if (hasTrend && column == 1 + slopes + m) {
+            names.push_back("the trend");
+            involve("trend");
+        } else if (std::find(names.begin(), names.end(), "the period effects") == names.end()) {
+            names.push_back("the period effects");
+            involve("trend");
         }
     }
-    const std::string argument = controls == 0 ? "inputs" : inputs == 0 ? "controls" : "inputs and controls";
+    const std::string argument = arguments.empty() ? "inputs" : listOfNames(arguments);
     const std::string note =
         constantReturns ? " (as ratios to " + quoted(data.inputLabels.back()) + ", since constant returns are imposed)" : "";
-    if (names.empty()) return "inputs: the data cannot identify ln A" + note;
+    const bool groupEffects = effects != EffectsKind::none;
+    const std::string constant = groupEffects ? "the group effects" : "ln A";
+    if (names.empty()) return "inputs: the data cannot identify " + constant + note;
     if (withConstant && names.size() == 1)
-        return argument + ": " + names.front() + note + " does not vary, so it cannot be told apart from ln A";
-    return argument + ": " + listOfNames(names) + (withConstant ? " together with ln A" : "") + note +
+        return argument + ": " + names.front() + note + (groupEffects ? " does not vary within any group" : " does not vary") +
+               ", so it cannot be told apart from " + constant;
+    return argument + ": " + listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
            " are collinear (inputs taken in logs); drop one of them";
 }
 
@@ -123,6 +138,59 @@ ReturnsToScale returnsToScale(const ProductionFit& fit, const LeastSquaresResult
     return returns;
 }
 
+// The panel options need their columns; errors name the argument to fix.
+void requirePanelColumns(const ProductionData& data, const ProductionFitOptions& options)
+{
+    const PanelColumns& panel = data.panel;
+    const auto n = static_cast<std::size_t>(data.output.size());
+    if (panel.hasGroups() && panel.groupOfRow.size() != n)
+        throw InputError("groups: has " + std::to_string(panel.groupOfRow.size()) + " rows of data but output has " +
+                         std::to_string(n));
+    if (panel.hasPeriods() && static_cast<std::size_t>(panel.periods.size()) != n)
+        throw InputError("trend: has " + std::to_string(panel.periods.size()) + " rows of data but output has " +
+                         std::to_string(n));
+    if (options.effects != EffectsKind::none && !panel.hasGroups())
+        throw InputError("effects: \"" + effectsWord(options.effects) +
+                         "\" needs the groups argument, a column naming each row's plant or firm");
+    if (options.effects == EffectsKind::twoWay && !panel.hasPeriods())
+        throw InputError("effects: \"two-way\" needs the trend argument, the column of periods (years)");
+    if (options.covariance == CovarianceKind::cluster) {
+        if (!panel.hasGroups())
+            throw InputError("errors: \"cluster\" needs the groups argument, a column naming each row's plant or firm");
+        if (panel.groupLabels.size() < 2)
+            throw InputError("groups: every row is in the same group; cluster-robust errors need at least 2 groups");
+    }
+}
+
+ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index column)
+{
+    return {regression.coefficients(column), regression.standardErrors(column), regression.tStatistics(column),
+            regression.pValues(column),      regression.lowerBounds(column),    regression.upperBounds(column)};
+}
+
+PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, const PanelRegression& run,
+                            double logScaleAtControlMeans)
+{
+    PanelSummary summary;
+    summary.effects = effects;
+    summary.groups = static_cast<Eigen::Index>(panel.groupLabels.size());
+    summary.groupLabels = panel.groupLabels;
+    if (effects != EffectsKind::none) {
+        summary.withinRSquared = run.withinRSquared;
+        summary.groupEffects = run.groupEffects;
+    }
+    if (effects == EffectsKind::twoWay) {
+        summary.periods = run.periodValues;
+        const auto later = static_cast<Eigen::Index>(run.periodValues.size()) - 1;
+        summary.periodEffects.resize(later + 1);
+        summary.periodEffects << 0.0, run.regression.coefficients.segment(run.firstPeriodColumn, later);
+    }
+    if (run.trendColumn) summary.technicalChange = parameterAt(run.regression, *run.trendColumn);
+    summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
+    summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;
+    return summary;
+}
+
 } // namespace
 
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed)
@@ -146,6 +214,7 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     const Eigen::Index k = data.inputs.cols();
     const Eigen::Index m = data.controls.cols();
     if (k < 1) throw InputError("inputs: needs at least one column");
+    requirePanelColumns(data, options);
 
     const Eigen::VectorXd logOutput = data.output.array().log().matrix();
     const double totalSumOfSquares = (logOutput.array() - logOutput.mean()).matrix().squaredNorm();
@@ -154,35 +223,51 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
         throw InputError("output: every row holds the same value; there is no variation to explain");
 
     const LogLinearDesign built = buildDesign(data, options.constantReturns);
-    const Eigen::Index p = built.design.cols();
-    if (n < p + 1)
+    const Eigen::Index baseColumns = built.design.cols();
+    const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
+    if (n < p + 1) {
+        const std::string groupNote = options.effects == EffectsKind::none
+                                          ? ""
+                                          : " (" + std::to_string(data.panel.groupLabels.size()) + " group effects included)";
         throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
-                         std::to_string(p) + " parameters to estimate; need at least " + std::to_string(p + 1));
+                         std::to_string(p) + " parameters to estimate" + groupNote + "; need at least " +
+                         std::to_string(p + 1));
+    }
 
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;
     regressionOptions.confidenceLevel = options.confidenceLevel;
     ProductionFit fit;
+    PanelRegression run;
     try {
-        fit.regression = fitLeastSquares(built.design, built.response, 0, regressionOptions);
+        run = fitPanelRegression(built.design, built.response, data.panel, options.effects, regressionOptions);
     } catch (const CollinearColumns& collinear) {
-        throw InputError(collinearityMessage(data, options.constantReturns, collinear.columns()));
+        throw InputError(collinearityMessage(data, options.constantReturns, options.effects, collinear.columns()));
     }
+    fit.regression = run.regression;
     const LeastSquaresResult& regression = fit.regression;
 
     fit.form = options.form;
     fit.inputLabels = data.inputLabels;
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
-    fit.estimates = built.transform * regression.coefficients + built.offset;
-    fit.covariance = built.transform * regression.covariance * built.transform.transpose();
+    // The form's parameters come from the base columns; the trend and period effects are reported apart.
+    fit.estimates = built.transform * regression.coefficients.head(baseColumns) + built.offset;
+    fit.covariance = built.transform * regression.covariance.topLeftCorner(baseColumns, baseColumns) *
+                     built.transform.transpose();
+    if (run.effectsAbsorbConstant) {
+        // ln A is the mean group effect, reported without a standard error (panel_regression.hpp).
+        fit.covariance.row(0).setConstant(notANumber);
+        fit.covariance.col(0).setConstant(notANumber);
+    }
     fit.standardErrors = fit.covariance.diagonal().cwiseSqrt();
     fit.tStatistics = fit.estimates.cwiseQuotient(fit.standardErrors);
     const double df = regression.residualDegreesOfFreedom;
-    const double critical = studentCriticalValue(options.confidenceLevel, df);
+    const double inferenceDf = regression.inferenceDegreesOfFreedom;
+    const double critical = studentCriticalValue(options.confidenceLevel, inferenceDf);
     fit.pValues.resize(fit.estimates.size());
     for (Eigen::Index j = 0; j < fit.estimates.size(); ++j)
-        fit.pValues(j) = studentTwoSidedPValue(fit.tStatistics(j), df);
+        fit.pValues(j) = studentTwoSidedPValue(fit.tStatistics(j), inferenceDf);
     fit.lowerBounds = fit.estimates - critical * fit.standardErrors;
     fit.upperBounds = fit.estimates + critical * fit.standardErrors;
 
@@ -192,6 +277,8 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     fit.returns = returnsToScale(fit, regression, k, options.constantReturns, options.confidenceLevel);
     fit.logScaleAtControlMeans = fit.estimates(0);
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
+    fit.smearingFactor = run.smearingFactor;
+    fit.panel = summarisePanel(data.panel, options.effects, run, fit.logScaleAtControlMeans);
     return fit;
 }
 

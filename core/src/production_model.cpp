@@ -31,6 +31,8 @@ bool isStatisticLabel(const std::string& label)
 {
     for (const char* statistic : statisticLabels)
         if (equalsIgnoringCase(label, statistic)) return true;
+    for (const char* statistic : optionStatisticLabels)
+        if (equalsIgnoringCase(label, statistic)) return true;
     return false;
 }
 
@@ -53,6 +55,8 @@ struct ModelRows {
     std::optional<ProductionForm> form;
     std::optional<double> logScale;
     std::optional<double> logScaleAtControlMeans;
+    std::optional<double> logScaleForPredictions;
+    std::optional<double> smearingFactor;
     std::optional<ScaleTest> scaleTest;
     std::vector<std::string> inputLabels;
     std::vector<double> exponents;
@@ -62,6 +66,12 @@ void readStatisticRow(const CellTable& range, std::size_t row, const std::string
 {
     if (equalsIgnoringCase(label, controlMeansLabel)) {
         rows.logScaleAtControlMeans = requiredNumber(range, row, label);
+    } else if (equalsIgnoringCase(label, predictionScaleLabel)) {
+        rows.logScaleForPredictions = requiredNumber(range, row, label);
+    } else if (equalsIgnoringCase(label, smearingLabel)) {
+        const double factor = requiredNumber(range, row, label);
+        if (!(factor > 0)) throw InputError(rowPlace(row) + " (smearing factor) must be positive");
+        rows.smearingFactor = factor;
     } else if (equalsIgnoringCase(label, returnsLabel)) {
         ScaleTest test;
         test.estimate = requiredNumber(range, row, label);
@@ -155,10 +165,11 @@ ProductionModel readProductionModel(const CellTable& range)
     model.form = *rows.form;
     model.inputLabels = rows.inputLabels;
     const auto cobbDouglas = std::make_shared<CobbDouglas>(
-        rows.logScaleAtControlMeans.value_or(*rows.logScale),
+        rows.logScaleForPredictions.value_or(rows.logScaleAtControlMeans.value_or(*rows.logScale)),
         Eigen::Map<const Eigen::VectorXd>(rows.exponents.data(), static_cast<Eigen::Index>(rows.exponents.size())));
     model.technology = cobbDouglas;
     model.scaleTest = rows.scaleTest;
+    model.smearingFactor = rows.smearingFactor;
     if (model.scaleTest) {
         const double sum = cobbDouglas->scaleElasticity();
         if (std::fabs(model.scaleTest->estimate - sum) > 1e-9 * std::max(1.0, std::fabs(sum)))

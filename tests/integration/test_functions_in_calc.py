@@ -128,6 +128,7 @@ def layout(input_labels, verdict, control_labels=(), imposed=False, note=""):
     rows.append(["form", "cobb-douglas", note, "", "", "", ""])
     if control_labels:
         rows.append(["ln A at control means", NUMBER] + blank)
+    rows.append(["smearing factor", NUMBER] + blank)
     return rows
 
 
@@ -335,19 +336,19 @@ class CobbDouglasTableTest(CalcTestCase):
         cls.data = cobb_douglas_data()
         cls.sheet = new_sheet("CobbDouglas")
         write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
-        # Exactly the table's size: 2 inputs, no controls -> 2 + 0 + 14 = 16 rows.
-        set_array_formula(cls.sheet, "F1:L16", "=PRODFIT(B1:B25;C1:D25)")
-        set_array_formula(cls.sheet, "F21:L36", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
-        set_array_formula(cls.sheet, "F41:L56", '=PRODFIT(B1:B25;C1:D25;;;"hc3")')
+        # Exactly the table's size: 2 inputs, no controls -> 2 + 0 + 15 = 17 rows.
+        set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
+        set_array_formula(cls.sheet, "F21:L37", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
+        set_array_formula(cls.sheet, "F41:L57", '=PRODFIT(B1:B25;C1:D25;;;"hc3")')
         # The same options written out in full, and as empty texts.
-        set_array_formula(cls.sheet, "F61:L76", '=PRODFIT(B1:B25;C1:D25;"cobb-douglas";FALSE();"hc1";0.95)')
-        set_array_formula(cls.sheet, "F81:L96", '=PRODFIT(B1:B25;C1:D25;"";"";"";"")')
+        set_array_formula(cls.sheet, "F61:L77", '=PRODFIT(B1:B25;C1:D25;"cobb-douglas";FALSE();"hc1";0.95)')
+        set_array_formula(cls.sheet, "F81:L97", '=PRODFIT(B1:B25;C1:D25;"";"";"";"")')
         # One row and one column more than the table: Calc pads what the result does not fill.
-        set_array_formula(cls.sheet, "F101:M117", "=PRODFIT(B1:B25;C1:D25)")
+        set_array_formula(cls.sheet, "F101:M118", "=PRODFIT(B1:B25;C1:D25)")
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "F1:L16")
-        cls.hc1 = get_range(cls.sheet, "F21:L36")
-        cls.hc3 = get_range(cls.sheet, "F41:L56")
+        cls.table = get_range(cls.sheet, "F1:L17")
+        cls.hc1 = get_range(cls.sheet, "F21:L37")
+        cls.hc3 = get_range(cls.sheet, "F41:L57")
 
     def reference(self, cov_type):
         y = logs(self.data["P"])
@@ -409,16 +410,16 @@ class CobbDouglasTableTest(CalcTestCase):
             self.need_statsmodels()
             self.assert_matches_statsmodels(self.hc3, statsmodels_table(self.reference("HC3"), ["ln A", "L", "C"], 2))
 
-    def test_result_is_exactly_16_by_7(self):
-        padded = get_range(self.sheet, "F101:M117")
-        self.assertEqual([row[:7] for row in padded[:16]], self.table)
-        self.assertEqual(padded[16], ["#N/A"] * 8)
-        self.assertEqual([row[7] for row in padded], ["#N/A"] * 17)
+    def test_result_is_exactly_17_by_7(self):
+        padded = get_range(self.sheet, "F101:M118")
+        self.assertEqual([row[:7] for row in padded[:17]], self.table)
+        self.assertEqual(padded[17], ["#N/A"] * 8)
+        self.assertEqual([row[7] for row in padded], ["#N/A"] * 18)
 
     def test_empty_arguments_mean_the_defaults(self):
         # ";;" (an omitted argument) and "" both take the documented default (addin/function_table.cxx).
-        self.assertEqual(get_range(self.sheet, "F61:L76"), self.hc1)
-        self.assertEqual(get_range(self.sheet, "F81:L96"), self.table)
+        self.assertEqual(get_range(self.sheet, "F61:L77"), self.hc1)
+        self.assertEqual(get_range(self.sheet, "F81:L97"), self.table)
 
 
 # -- 2: constant returns imposed ------------------------------------------------------------------
@@ -431,9 +432,9 @@ class ConstantReturnsTest(CalcTestCase):
         cls.data = cobb_douglas_data()
         cls.sheet = new_sheet("ConstantReturns")
         write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
-        set_array_formula(cls.sheet, "F1:L16", "=PRODFIT(B1:B25;C1:D25;;TRUE())")
+        set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25;;TRUE())")
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "F1:L16")
+        cls.table = get_range(cls.sheet, "F1:L17")
 
     def test_every_cell_has_its_label_or_a_number(self):
         self.assert_layout(self.table, layout(["L", "C"], "constant (imposed)", imposed=True))
@@ -507,30 +508,30 @@ class StatePanelTest(CalcTestCase):
         last = len(cls.data["gsp"]) + 1
         arguments = "A1:A{0};B1:D{0}".format(last)
         control = "E1:E%d" % last
-        # k = 3 inputs, m = 1 control: k + m + 14 + 1 = 19 rows (fit_table.hpp), the last one
-        # "ln A at control means".
-        set_array_formula(cls.sheet, "G1:M19", "=PRODFIT(%s;;;;;%s)" % (arguments, control))
-        set_array_formula(cls.sheet, "G31:M49", '=PRODFIT(%s;;;"hc1";;%s)' % (arguments, control))
-        set_array_formula(cls.sheet, "G61:N80", "=PRODFIT(%s;;;;;%s)" % (arguments, control))  # 1 more each way
+        # k = 3 inputs, m = 1 control: k + m + 15 + 1 = 20 rows (fit_table.hpp), the last two
+        # "ln A at control means" and "smearing factor".
+        set_array_formula(cls.sheet, "G1:M20", "=PRODFIT(%s;;;;;%s)" % (arguments, control))
+        set_array_formula(cls.sheet, "G31:M50", '=PRODFIT(%s;;;"hc1";;%s)' % (arguments, control))
+        set_array_formula(cls.sheet, "G61:N81", "=PRODFIT(%s;;;;;%s)" % (arguments, control))  # 1 more each way
         # Evaluators read a table with controls at ln A at control means (production_model.hpp).
-        set_array_formula(cls.sheet, "O2:O11", "=PRODOUTPUT($G$1:$M$19;B2:D11)")
+        set_array_formula(cls.sheet, "O2:O11", "=PRODOUTPUT($G$1:$M$20;B2:D11)")
         # PRODSTAT: a control answers to its label without " (control)" (fit_table.hpp).
         set_formula(cls.sheet, "Q2", '=PRODSTAT(%s;"unemp";"std. error";;;;;%s)' % (arguments, control))
         set_formula(cls.sheet, "Q3", '=PRODSTAT(%s;"ln A at control means";;;;;;%s)' % (arguments, control))
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "G1:M19")
-        cls.hc1 = get_range(cls.sheet, "G31:M49")
+        cls.table = get_range(cls.sheet, "G1:M20")
+        cls.hc1 = get_range(cls.sheet, "G31:M50")
 
     def reference(self, cov_type):
         d = self.data
         return statsmodels_fit(logs(d["gsp"]), [logs(d["pcap"]), logs(d["pc"]), logs(d["emp"]), d["unemp"]],
                                cov_type)
 
-    def test_result_is_exactly_19_by_7(self):
-        padded = get_range(self.sheet, "G61:N80")
-        self.assertEqual([row[:7] for row in padded[:19]], self.table)
-        self.assertEqual(padded[19], ["#N/A"] * 8)
-        self.assertEqual([row[7] for row in padded], ["#N/A"] * 20)
+    def test_result_is_exactly_20_by_7(self):
+        padded = get_range(self.sheet, "G61:N81")
+        self.assertEqual([row[:7] for row in padded[:20]], self.table)
+        self.assertEqual(padded[20], ["#N/A"] * 8)
+        self.assertEqual([row[7] for row in padded], ["#N/A"] * 21)
 
     def test_every_cell_has_its_label_or_a_number(self):
         # Verdict: the reference F = 270.9 of "elasticities sum to 1" on (1, 811) df is far beyond
@@ -560,9 +561,10 @@ class StatePanelTest(CalcTestCase):
         coefficient = row_of(self.table, "unemp (control)")[1]
         unemp = self.data["unemp"]
         expected = log_scale + coefficient * math.fsum(unemp) / len(unemp)
-        self.assertEqual(self.table[-1][0], "ln A at control means")
-        self.assert_relative(self.table[-1][1], expected, FORMULA_RELATIVE, "ln A at control means")
-        self.assertEqual(get_cell(self.sheet, "Q3"), self.table[-1][1])
+        # The row before the last ("smearing factor", fit_table.hpp).
+        self.assertEqual(self.table[-2][0], "ln A at control means")
+        self.assert_relative(self.table[-2][1], expected, FORMULA_RELATIVE, "ln A at control means")
+        self.assertEqual(get_cell(self.sheet, "Q3"), self.table[-2][1])
 
     def test_against_statsmodels(self):
         with self.subTest("statsmodels OLS on logs with unemp"):
@@ -585,7 +587,7 @@ class StatePanelTest(CalcTestCase):
 
     def test_output_uses_ln_A_at_control_means(self):
         # Function formula with ln A at control means and the three exponents of the table.
-        scale = math.exp(self.table[-1][1])
+        scale = math.exp(row_of(self.table, "ln A at control means")[1])
         exponents = [row_of(self.table, label)[1] for label in self.INPUTS]
         values = get_range(self.sheet, "O2:O11")
         for i, (value,) in enumerate(values):
@@ -623,9 +625,9 @@ class ProdStatTest(CalcTestCase):
     def setUpClass(cls):
         cls.sheet = new_sheet("ProdStat")
         write_columns(cls.sheet, "A1", cobb_douglas_data(), ["year", "P", "L", "C"])
-        set_array_formula(cls.sheet, "F1:L16", "=PRODFIT(B1:B25;C1:D25)")
-        set_array_formula(cls.sheet, "F21:L36", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
-        set_array_formula(cls.sheet, "F41:L56", "=PRODFIT(B1:B25;C1:D25;;TRUE())")
+        set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
+        set_array_formula(cls.sheet, "F21:L37", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
+        set_array_formula(cls.sheet, "F41:L57", "=PRODFIT(B1:B25;C1:D25;;TRUE())")
         for i, (row_label, column_label, _, _) in enumerate(cls.LOOKUPS):
             column = ';"%s"' % column_label if column_label else ""
             set_formula(cls.sheet, "N%d" % (i + 1), '=PRODSTAT(B1:B25;C1:D25;"%s"%s)' % (row_label, column))
@@ -635,7 +637,7 @@ class ProdStatTest(CalcTestCase):
         recalc(DOC)
 
     def test_lookups_equal_the_table_cells(self):
-        table = get_range(self.sheet, "F1:L16")
+        table = get_range(self.sheet, "F1:L17")
         for i, (row_label, column_label, table_row, table_column) in enumerate(self.LOOKUPS):
             with self.subTest(row_label=row_label, column_label=column_label):
                 expected = row_of(table, table_row)[HEADER.index(table_column)]
@@ -643,8 +645,8 @@ class ProdStatTest(CalcTestCase):
                 self.assertEqual(get_cell(self.sheet, "N%d" % (i + 1)), expected)
 
     def test_lookups_with_options(self):
-        self.assertEqual(get_cell(self.sheet, "O1"), row_of(get_range(self.sheet, "F21:L36"), "C")[2])
-        imposed = get_range(self.sheet, "F41:L56")
+        self.assertEqual(get_cell(self.sheet, "O1"), row_of(get_range(self.sheet, "F21:L37"), "C")[2])
+        imposed = get_range(self.sheet, "F41:L57")
         self.assertEqual(get_cell(self.sheet, "O2"), "constant (imposed)")
         self.assertEqual(get_cell(self.sheet, "O2"), row_of(imposed, "verdict")[1])
         self.assertEqual(get_cell(self.sheet, "O3"), row_of(imposed, "C")[5])
@@ -696,7 +698,7 @@ class EvaluatorTest(CalcTestCase):
     """PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODRETURNS on a PRODFIT table and on typed
     models, one formula per row (as filling down makes) and one array formula over all rows."""
 
-    TABLE = "$F$1:$L$16"
+    TABLE = "$F$1:$L$17"
     TYPED = "$N$1:$O$4"     # form | cobb-douglas; A | 1.01; L | 0.75; C | 0.25 (Cobb & Douglas 1928)
     TYPED_LN = "$N$6:$O$9"  # form | cobb-douglas; ln A | 0.5; L | 0.6; C | 0.3
     FIRST, LAST = 2, 25     # the 24 rows of inputs, C2:D25
@@ -707,7 +709,7 @@ class EvaluatorTest(CalcTestCase):
         cls.data = cobb_douglas_data()
         cls.sheet = new_sheet("Evaluators")
         write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
-        set_array_formula(cls.sheet, "F1:L16", "=PRODFIT(B1:B25;C1:D25)")
+        set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
         set_values(cls.sheet, "N1", [["form", "cobb-douglas"], ["A", 1.01], ["L", 0.75], ["C", 0.25], [None, None],
                                      ["form", "cobb-douglas"], ["ln A", 0.5], ["L", 0.6], ["C", 0.3]])
         for m, model in enumerate(cls.MODELS):
@@ -729,7 +731,7 @@ class EvaluatorTest(CalcTestCase):
         for cell, formula in scale_and_returns:
             set_formula(cls.sheet, cell, formula)
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "F1:L16")
+        cls.table = get_range(cls.sheet, "F1:L17")
 
     @classmethod
     def result_columns(cls, model_index, evaluator_index):
@@ -797,18 +799,18 @@ class RecalculationTest(CalcTestCase):
         data = cobb_douglas_data()
         sheet = new_sheet("Recalculation")
         write_columns(sheet, "A1", data, ["year", "P", "L", "C"])
-        set_array_formula(sheet, "F1:L16", "=PRODFIT(B1:B25;C1:D25)")
-        set_formula(sheet, "N1", "=PRODOUTPUT($F$1:$L$16;C25:D25)")
-        set_formula(sheet, "N2", '=PRODMARGINAL($F$1:$L$16;C25:D25;"L")')
+        set_array_formula(sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
+        set_formula(sheet, "N1", "=PRODOUTPUT($F$1:$L$17;C25:D25)")
+        set_formula(sheet, "N2", '=PRODMARGINAL($F$1:$L$17;C25:D25;"L")')
         recalc(DOC)
-        before = get_range(sheet, "F1:L16")
+        before = get_range(sheet, "F1:L17")
         before_output = get_cell(sheet, "N1")
 
         # 1922's output, 240 in Cobb & Douglas (1928), becomes 250.
         self.assertEqual(get_cell(sheet, "B25"), 240.0)
         set_values(sheet, "B25", [[250]])
         recalc(DOC)
-        after = get_range(sheet, "F1:L16")
+        after = get_range(sheet, "F1:L17")
         returns = row_of(after, "returns to scale")
         self.assert_layout(after, layout(["L", "C"], expected_verdict(returns[1], returns[4], 0.95)))
         for label in ["ln A", "L", "C", "R2"]:
@@ -822,8 +824,8 @@ class RecalculationTest(CalcTestCase):
         self.assert_relative(get_cell(sheet, "N2"), formula.marginal(x, 0), FORMULA_RELATIVE, "PRODMARGINAL after")
 
         # A table entered fresh on the changed data is the same as the recalculated one.
-        set_array_formula(sheet, "F21:L36", "=PRODFIT(B1:B25;C1:D25)")
-        self.assertEqual(get_range(sheet, "F21:L36"), after)
+        set_array_formula(sheet, "F21:L37", "=PRODFIT(B1:B25;C1:D25)")
+        self.assertEqual(get_range(sheet, "F21:L37"), after)
 
         with self.subTest("statsmodels on the changed data"):
             self.need_statsmodels()
@@ -834,7 +836,7 @@ class RecalculationTest(CalcTestCase):
         # Back to 240: the first table again, exactly.
         set_values(sheet, "B25", [[240]])
         recalc(DOC)
-        self.assertEqual(get_range(sheet, "F1:L16"), before)
+        self.assertEqual(get_range(sheet, "F1:L17"), before)
         self.assertEqual(get_cell(sheet, "N1"), before_output)
 
 
@@ -844,9 +846,9 @@ NA = object()  # a data cell that gets the formula =NA()
 TABLE, CELL, COLUMN = "table", "cell", "column"  # how a case's formula is entered
 
 # Base area of the sheet "Errors" (rows 1-25), read by the cases through the placeholders:
-#   A1:C25 P, L, C of Cobb & Douglas (1928); F1:L16 their PRODFIT table; typed models from N6.
+#   A1:C25 P, L, C of Cobb & Douglas (1928); F1:L17 their PRODFIT table; typed models from N6.
 BASE = {
-    "table": "$F$1:$L$16",
+    "table": "$F$1:$L$17",
     "noform": "$N$6:$O$8",    # A | 1.01; L | 0.75; C | 0.25 (no form row)
     "cesmodel": "$N$10:$O$13",  # form | ces; A | 1.01; L | 0.75; C | 0.25
     "negmodel": "$N$15:$O$18",  # form | cobb-douglas; A | -1; L | 0.75; C | 0.25
@@ -918,7 +920,7 @@ ERROR_CASES = [
     ('"ces" not available yet', None, 'PRODFIT({out};{inp};"ces")', TABLE,
      error('form: "ces" is not available yet; use "cobb-douglas"')),
     ('errors "hc" (abbreviated)', None, 'PRODFIT({out};{inp};;;"hc")', TABLE,
-     error("errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\" or \"hc3\"")),
+     error("errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"")),
     ("level 1.5", None, "PRODFIT({out};{inp};;;;1.5)", TABLE, error("level: 1.5 " + LEVEL_HINT)),
     # Calc passes a reference to one empty cell as the number 0 to an `any` argument.
     ("level from an empty cell", None, "PRODFIT({out};{inp};;;;{empty})", TABLE, error("level: 0 " + LEVEL_HINT)),
@@ -986,7 +988,7 @@ class ErrorMessageTest(CalcTestCase):
         sheet = new_sheet("Errors")
         data = cobb_douglas_data()
         write_columns(sheet, "A1", data, ["P", "L", "C"])
-        set_array_formula(sheet, "F1:L16", "=PRODFIT(A1:A25;B1:C25)")
+        set_array_formula(sheet, "F1:L17", "=PRODFIT(A1:A25;B1:C25)")
         set_values(sheet, "N6", [["A", 1.01], ["L", 0.75], ["C", 0.25], [None, None],
                                  ["form", "ces"], ["A", 1.01], ["L", 0.75], ["C", 0.25], [None, None],
                                  ["form", "cobb-douglas"], ["A", -1], ["L", 0.75], ["C", 0.25]])
@@ -1012,7 +1014,7 @@ class ErrorMessageTest(CalcTestCase):
 # -- 9: Function Wizard metadata ---------------------------------------------------------------------
 
 # Display names and argument counts in addin/function_table.cxx (asserted against the parse too).
-ARGUMENT_COUNTS = {"PRODFIT": 7, "PRODSTAT": 9, "PRODOUTPUT": 2, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
+ARGUMENT_COUNTS = {"PRODFIT": 11, "PRODSTAT": 13, "PRODOUTPUT": 3, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
                    "PRODSCALE": 2, "PRODRETURNS": 2}
 # Arguments declared `any` in idl/ (all but the leading ranges); Calc marks those optional.
 REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 2, "PRODOUTPUT": 2, "PRODMARGINAL": 2, "PRODELASTICITY": 2,

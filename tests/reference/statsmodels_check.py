@@ -5,7 +5,9 @@ Usage: /usr/bin/python3 statsmodels_check.py DATA_DIR OUTPUT_CSV
 
 Fits, on tests/data/cobb_douglas_1928.csv and tests/data/us_states_produc_1970_1986.csv, the same
 models as the core (unrestricted ln Y on ln x and controls; constant returns as ln(Y/x_k) on
-ln(x_i/x_k) and controls) with classical, HC1 and HC3 covariance, and writes the figures to
+ln(x_i/x_k) and controls) with classical, HC1 and HC3 covariance; and, on the state panel and
+tests/data/rice_farms_panel.csv, the panel models (fixed effects, two-way effects, a trend, errors
+clustered by group) as regressions with one dummy per group and period. Writes the figures to
 OUTPUT_CSV, one per line: dataset,model,covariance,level,quantity,index,value. "regression" figures
 are those of the regression actually run; "production" figures are mapped back to
 (ln A, exponents, control coefficients), as the core reports them.
@@ -113,6 +115,117 @@ def figures(np, sm, columns, output, inputs, controls, constant_returns, covaria
     return out
 
 
+# Panel models, fitted with one dummy per group (and per period after the first under two-way
+# effects) by statsmodels OLS: dataset -> (file, output, inputs, controls, group column, period
+# column), and the models run on it: name -> (group dummies, period dummies, trend, covariances).
+PANEL_DATASETS = {
+    "state_panel": ("us_states_produc_1970_1986.csv", "gsp", ["pcap", "pc", "emp"], ["unemp"], "state", "year"),
+    "rice_farms": ("rice_farms_panel.csv", "goutput", ["seed", "urea", "totlabor", "size"], [], "id", None),
+}
+PANEL_MODELS = {
+    "state_panel": {
+        "pooled": (False, False, False, ["cluster"]),
+        "fixed": (True, False, False, ["classical", "hc1", "hc3", "cluster"]),
+        "fixed_trend": (True, False, True, ["classical", "cluster"]),
+        "pooled_trend": (False, False, True, ["classical"]),
+        "two_way": (True, True, False, ["classical", "cluster"]),
+    },
+    "rice_farms": {
+        "pooled": (False, False, False, ["cluster"]),
+        "fixed": (True, False, False, ["classical", "cluster"]),
+    },
+}
+
+
+def read_texts(path, name):
+    with open(path, newline="") as handle:
+        return [row[name] for row in csv.DictReader(handle)]
+
+
+def first_appearance(labels):
+    """Index of every row's label in order of first appearance, as the core numbers groups."""
+    order = {}
+    for label in labels:
+        order.setdefault(label, len(order))
+    return [order[label] for label in labels], len(order)
+
+
+def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, group_dummies, period_dummies,
+                  trend, covariance):
+    """Figures of the dummy-variable regression, mapped to what the core reports: production
+    parameters (ln A as the mean group effect under effects, without standard errors), fit
+    statistics, the test of returns to scale, the trend, the group effects, the within R² and the
+    smearing factor."""
+    y = np.log(np.array(columns[output]))
+    regressors = [np.log(np.array(columns[name])) for name in inputs] + [np.array(columns[name]) for name in controls]
+    group_index, group_count = first_appearance(groups)
+    group_index = np.array(group_index)
+    if trend:
+        year = np.array(periods, dtype=float)
+        regressors.append(year - year.min())
+    k, slopes = len(inputs), len(regressors)
+    dummies = []
+    if group_dummies:
+        dummies += [(group_index == g).astype(float) for g in range(1, group_count)]
+    if period_dummies:
+        values = sorted(set(periods))
+        dummies += [(np.array(periods) == value).astype(float) for value in values[1:]]
+    design = np.column_stack([np.ones(len(y))] + regressors + dummies)
+    if covariance == "cluster":
+        fit = sm.OLS(y, design).fit(cov_type="cluster", cov_kwds={"groups": group_index}, use_t=True)
+    else:
+        fit = sm.OLS(y, design).fit(cov_type=COVARIANCES[covariance], use_t=True)
+    alpha = 1.0 - LEVEL
+    out = []
+
+    def put(quantity, values, first=0):
+        for index, value in enumerate(np.atleast_1d(values)):
+            out.append(("production", quantity, first + index, float(value)))
+
+    bounds = fit.conf_int(alpha=alpha)
+    slope = slice(1, 1 + k + len(controls))
+    if group_dummies:
+        # α_1 is the constant, α_g = constant + dummy g; ln A is their mean.
+        first_period_dummy = 1 + slopes + group_count - 1
+        effects = fit.params[0] + np.concatenate([[0.0], fit.params[1 + slopes:first_period_dummy]])
+        put("params", effects.mean())
+        put("group_effect", effects)
+        demeaned = y - np.array([y[group_index == g].mean() for g in range(group_count)])[group_index]
+        put("within_rsquared", 1.0 - fit.ssr / float(np.sum(demeaned ** 2)))
+    else:
+        put("params", fit.params[0])
+        put("bse", fit.bse[0])
+        put("pvalues", fit.pvalues[0])
+        put("low", bounds[0, 0])
+        put("high", bounds[0, 1])
+    put("params", fit.params[slope], 1)
+    put("bse", fit.bse[slope], 1)
+    put("pvalues", fit.pvalues[slope], 1)
+    put("low", bounds[slope, 0], 1)
+    put("high", bounds[slope, 1], 1)
+    if trend:
+        put("trend", fit.params[slopes])
+        put("trend_se", fit.bse[slopes])
+        put("trend_pvalue", fit.pvalues[slopes])
+    put("rsquared", fit.rsquared)
+    put("rsquared_adj", fit.rsquared_adj)
+    put("ssr", fit.ssr)
+    put("llf", fit.llf)
+    put("aic", fit.aic)
+    put("bic", fit.bic)
+    # Duan's smearing factor, with numpy: the mean of exp(residual).
+    put("smearing", np.mean(np.exp(fit.resid)))
+    restriction = np.zeros((1, len(fit.params)))
+    restriction[0, 1:1 + k] = 1.0
+    nu = fit.t_test((restriction, np.zeros(1)))
+    wald = fit.f_test((restriction, np.ones(1)))
+    put("nu", np.squeeze(nu.effect))
+    put("nu_se", np.squeeze(nu.sd))
+    put("nu_fvalue", np.squeeze(wald.fvalue))
+    put("nu_pvalue", np.squeeze(wald.pvalue))
+    return out
+
+
 def main():
     if len(sys.argv) != 3:
         print(__doc__, file=sys.stderr)
@@ -135,6 +248,18 @@ def main():
             for name, covariance in COVARIANCES.items():
                 for level, quantity, index, value in figures(np, sm, columns, output, inputs, controls,
                                                              constant_returns, covariance):
+                    rows.append((dataset, model, name, level, quantity, index, repr(value)))
+
+    for dataset, (file, output, inputs, controls, group_column, period_column) in PANEL_DATASETS.items():
+        path = os.path.join(data_dir, file)
+        columns = read_columns(path, [output] + inputs + controls)
+        groups = read_texts(path, group_column)
+        periods = [float(value) for value in read_texts(path, period_column)] if period_column else None
+        for model, (group_dummies, period_dummies, trend, covariances) in PANEL_MODELS[dataset].items():
+            for name in covariances:
+                for level, quantity, index, value in panel_figures(np, sm, columns, groups, periods, output, inputs,
+                                                                   controls, group_dummies, period_dummies, trend,
+                                                                   name):
                     rows.append((dataset, model, name, level, quantity, index, repr(value)))
 
     os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)

@@ -42,17 +42,24 @@ CsvTable CsvTable::read(const std::string& path)
     return table;
 }
 
-std::vector<double> CsvTable::numbers(const std::string& name) const
+std::vector<std::string> CsvTable::texts(const std::string& name) const
 {
     const auto found = std::find(header_.begin(), header_.end(), name);
     if (found == header_.end()) throw std::runtime_error("no column " + name);
     const auto column = static_cast<std::size_t>(found - header_.begin());
-    std::vector<double> values;
+    std::vector<std::string> values;
     values.reserve(rows_.size());
-    for (const auto& row : rows_) {
+    for (const auto& row : rows_) values.push_back(row[column]);
+    return values;
+}
+
+std::vector<double> CsvTable::numbers(const std::string& name) const
+{
+    std::vector<double> values;
+    for (const auto& text : texts(name)) {
         std::size_t used = 0;
-        const double value = std::stod(row[column], &used);
-        if (used != row[column].size()) throw std::runtime_error("not a number in " + name + ": " + row[column]);
+        const double value = std::stod(text, &used);
+        if (used != text.size()) throw std::runtime_error("not a number in " + name + ": " + text);
         values.push_back(value);
     }
     return values;

@@ -17,6 +17,8 @@ public:
     // The column named `name` as numbers; throws std::runtime_error for an unknown name or a
     // field that is not a number.
     std::vector<double> numbers(const std::string& name) const;
+    // The column named `name` as texts, quotes removed; throws std::runtime_error for an unknown name.
+    std::vector<std::string> texts(const std::string& name) const;
 
 private:
     std::vector<std::string> header_;

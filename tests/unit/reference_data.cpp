@@ -30,7 +30,33 @@ FitArguments argumentsFrom(const std::string& file, const std::string& output,
     return arguments;
 }
 
+CellTable textColumn(const CsvTable& table, const std::string& name)
+{
+    const auto texts = table.texts(name);
+    CellTable column(texts.size() + 1, 1);
+    column.at(0, 0) = name;
+    for (std::size_t row = 0; row < texts.size(); ++row) column.at(row + 1, 0) = texts[row];
+    return column;
+}
+
 } // namespace
+
+FitArguments statePanelWithPanelColumns()
+{
+    const CsvTable table = CsvTable::read(dataPath("us_states_produc_1970_1986.csv"));
+    FitArguments arguments = statePanelArguments();
+    arguments.groups = textColumn(table, "state");
+    arguments.trend = columnsOf(table, {"year"});
+    return arguments;
+}
+
+FitArguments riceFarmsArguments()
+{
+    const CsvTable table = CsvTable::read(dataPath("rice_farms_panel.csv"));
+    FitArguments arguments = argumentsFrom("rice_farms_panel.csv", "goutput", {"seed", "urea", "totlabor", "size"}, {});
+    arguments.groups = columnsOf(table, {"id"});
+    return arguments;
+}
 
 FitArguments cobbDouglas1928Arguments()
 {

@@ -13,4 +13,12 @@ FitArguments cobbDouglas1928Arguments();
 // control unemp (entered as it is). Options left empty (defaults).
 FitArguments statePanelArguments();
 
+// The state panel with the panel columns: groups = state (text, under the header "state"),
+// trend = year (under "year"); effects and the other options left empty.
+FitArguments statePanelWithPanelColumns();
+
+// Feng & Horrace (2012) rice farms, 171 farms × 6 seasons: output goutput; inputs seed, urea,
+// totlabor, size; groups = id (numbers, under the header "id"); options left empty.
+FitArguments riceFarmsArguments();
+
 } // namespace isoquant::testing

@@ -205,7 +205,7 @@ BOOST_AUTO_TEST_CASE(option_words_and_numbers)
     arguments = goodArguments();
     arguments.errors = text("hc");
     BOOST_TEST(fitMessage(arguments) ==
-               "errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\" or \"hc3\"");
+               "errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"");
 
     arguments = goodArguments();
     arguments.level = 1.5;

@@ -20,12 +20,17 @@ struct FitArguments {
     Cell constantReturns;
     Cell errors;
     Cell level;
+    CellTable groups; // empty when omitted
+    Cell effects;
+    CellTable trend;  // empty when omitted
+    Cell incompleteRows;
 
     bool operator==(const FitArguments& other) const
     {
         return output == other.output && inputs == other.inputs && controls == other.controls &&
                form == other.form && constantReturns == other.constantReturns && errors == other.errors &&
-               level == other.level;
+               level == other.level && groups == other.groups && effects == other.effects &&
+               trend == other.trend && incompleteRows == other.incompleteRows;
     }
 };
 
@@ -33,7 +38,9 @@ ProductionFit fitFromArguments(const FitArguments& arguments);
 
 // Evaluators. `inputs` holds one row of input values per bundle (an optional header row of text
 // is skipped), as many columns as the model has inputs; each returns a column, one value per row.
-CellTable outputColumn(const CellTable& model, const CellTable& inputs);
+// `mean` TRUE: the mean prediction, exp(fitted ln Y) times the model's smearing factor; else the
+// median, exp(fitted ln Y).
+CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean = {});
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
 // ν; a column of ν per row when `inputs` is not empty.

@@ -15,7 +15,8 @@ namespace isoquant {
 enum class CovarianceKind {
     classical, // σ²·(XᵀX)⁻¹ with σ² = RSS/(n−p)
     hc1,       // White's sandwich scaled by n/(n−p)
-    hc3        // sandwich with squared residuals divided by (1−hᵢᵢ)²
+    hc3,       // sandwich with squared residuals divided by (1−hᵢᵢ)²
+    cluster    // CR1: Σ_g (X_gᵀe_g)(X_gᵀe_g)ᵀ in the sandwich, scaled by G/(G−1)·(n−1)/(n−p)
 };
 
 struct LeastSquaresOptions {
@@ -30,6 +31,16 @@ struct LeastSquaresOptions {
     double conditionWarning = 1e10;
     // The fit counts as perfect when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
     double perfectFitTolerance = 1e-12;
+    // Parameters removed before the fit by demeaning within groups (the group means of a within
+    // estimator): they count in p, so n − p and the CR1 factor are those of the regression with
+    // one dummy per group. 0 for an ordinary regression.
+    Eigen::Index absorbedParameters = 0;
+    // Leverage of the absorbed parameters, added to every row's hᵢᵢ for HC3 (1/n_g for the
+    // group means: the leverage of the dummy-variable regression is that of the within one plus
+    // 1/n_g). Empty means none.
+    Eigen::VectorXd absorbedLeverage;
+    // For CovarianceKind::cluster: the cluster (0 … G−1) of every row; ignored otherwise.
+    std::vector<Eigen::Index> clusters;
 };
 
 enum class FitStatus {
@@ -42,23 +53,27 @@ struct LeastSquaresResult {
     Eigen::VectorXd coefficients;
     Eigen::VectorXd standardErrors;
     Eigen::VectorXd tStatistics;
-    Eigen::VectorXd pValues; // two-sided, Student t with n−p degrees of freedom
+    Eigen::VectorXd pValues; // two-sided, Student t with inferenceDegreesOfFreedom
     Eigen::VectorXd lowerBounds;
     Eigen::VectorXd upperBounds;
     Eigen::MatrixXd covariance;
     Eigen::VectorXd residuals;
 
     Eigen::Index observations = 0;
-    Eigen::Index parameters = 0;
+    Eigen::Index parameters = 0;         // columns of the design
+    Eigen::Index absorbedParameters = 0; // as in the options; p = parameters + absorbedParameters
     double residualDegreesOfFreedom = 0; // n − p
+    // Of the t and F distributions used for inference: n − p, or G − 1 under cluster errors.
+    double inferenceDegreesOfFreedom = 0;
+    Eigen::Index clusterCount = 0;       // G under cluster errors, else 0
     double residualSumOfSquares = 0;
     // Centred about the mean of y when the design has a constant column, uncentred otherwise.
     double totalSumOfSquares = 0;
     double rSquared = 0;          // 1 − RSS/TSS
     double adjustedRSquared = 0;  // 1 − (1 − R²)·(n − c)/(n − p), c = 1 with a constant, else 0
     double residualStandardDeviation = 0; // √(RSS/(n−p))
-    // Wald F of all coefficients but the constant being zero, on F(q, n−p) with the chosen
-    // covariance; NaN when there is nothing to test.
+    // Wald F of all coefficients but the constant being zero, on F(q, inferenceDegreesOfFreedom)
+    // with the chosen covariance; NaN when there is nothing to test.
     double fStatistic = 0;
     double fPValue = 0;
     // Gaussian: −n/2·(ln 2π + ln(RSS/n) + 1); AIC = −2LL + 2p; BIC = −2LL + p·ln n (p excludes σ²).
@@ -85,7 +100,8 @@ private:
 
 // Fits y = X·b by column-pivoting Householder QR on the column-scaled design, with one step of
 // iterative refinement. `interceptColumn` names the constant column, if any: it decides how TSS,
-// R² and the overall F are formed. Requires rows(X) > cols(X) ≥ 1 and finite data
+// R² and the overall F are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1,
+// finite data and, for cluster errors, a cluster for every row and at least 2 clusters
 // (std::invalid_argument otherwise); throws CollinearColumns at numerical rank deficiency.
 LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
                                    std::optional<Eigen::Index> interceptColumn,
@@ -95,7 +111,7 @@ struct WaldTest {
     double fStatistic = 0;
     double numeratorDegreesOfFreedom = 0;
     double denominatorDegreesOfFreedom = 0;
-    double pValue = 0; // upper tail of F(q, n−p)
+    double pValue = 0; // upper tail of F(q, inferenceDegreesOfFreedom)
 };
 
 // Wald F test of the q linear restrictions R·b = r with the fit's own covariance:

@@ -26,8 +26,14 @@ struct NumericColumns {
 };
 
 // The first row is a header when every cell in it holds text; a text or empty cell anywhere else
-// is an error naming `argument`, its row and column. Throws InputError.
+// is an error naming `argument`, its row and column. Data rows i with skippedRows[i] set (when
+// skippedRows is given; one flag per data row) are not read and not returned, and the rows in
+// messages still count from the top of the range. Throws InputError.
 NumericColumns readNumericColumns(const CellTable& range, const std::string& argument, ValueRule rule,
-                                  const std::string& defaultLabelPrefix);
+                                  const std::string& defaultLabelPrefix,
+                                  const std::vector<bool>* skippedRows = nullptr);
+
+// Whether the first row holds a non-empty text in every cell: the header rule above.
+bool hasHeaderRow(const CellTable& range);
 
 } // namespace isoquant

@@ -11,13 +11,18 @@
 // - With constant returns imposed the regression run is ln(Y/x_k) on ln(xᵢ/x_k), i < k, and the
 //   controls; its F tests that all of its slopes are zero.
 // - The returns-to-scale verdict tests ν = Σ bᵢ = 1 at α = 1 − confidence level.
+// - Groups, effects, a trend and cluster errors: see panel_regression.hpp. Under cluster errors
+//   inference uses t(G−1) and F(q, G−1); under effects p counts the G group means, and ln A is
+//   the mean group effect (no standard error).
 #pragma once
 
 #include "isoquant/least_squares.hpp"
+#include "isoquant/panel_regression.hpp"
 #include "isoquant/production_form.hpp"
 
 #include <Eigen/Dense>
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -29,6 +34,7 @@ struct ProductionData {
     Eigen::MatrixXd controls;        // n × m, finite (m may be 0)
     std::vector<std::string> inputLabels;
     std::vector<std::string> controlLabels;
+    PanelColumns panel; // groups and periods, when given
 };
 
 struct ProductionFitOptions {
@@ -36,6 +42,36 @@ struct ProductionFitOptions {
     bool constantReturns = false;
     CovarianceKind covariance = CovarianceKind::classical;
     double confidenceLevel = 0.95;
+    EffectsKind effects = EffectsKind::none;
+};
+
+struct ParameterEstimate {
+    double estimate = 0;
+    double standardError = 0;
+    double tStatistic = 0;
+    double pValue = 0;
+    double lowerBound = 0;
+    double upperBound = 0;
+};
+
+// What groups, effects and a trend add to a fit.
+struct PanelSummary {
+    EffectsKind effects = EffectsKind::none;
+    Eigen::Index groups = 0;           // G; 0 without groups
+    double withinRSquared = 0;         // under effects
+    std::vector<std::string> groupLabels;
+    Eigen::VectorXd groupEffects;      // α_g under effects, in the order of groupLabels
+    // Two-way: periods after the first and their effects relative to the first period.
+    std::vector<double> periods;
+    Eigen::VectorXd periodEffects;
+    std::optional<ParameterEstimate> technicalChange; // λ per period, with a trend
+    // ln A the evaluators use: ln A at the controls' means, plus λ·(t_last − t_first) with a
+    // trend or the last period's effect under two-way effects (ln A is the mean group effect
+    // under effects).
+    double logScaleForPredictions = 0;
+    bool shiftsLogScale = false;        // effects or a trend: the row above is shown
+    Eigen::Index incompleteRowsDropped = 0;
+    bool dropsIncompleteRows = false;   // the switch was on: the row count is shown
 };
 
 struct ReturnsToScale {
@@ -67,6 +103,10 @@ struct ProductionFit {
     // ln A + Σⱼ cⱼ·mean(zⱼ): the evaluators' ln A when there are controls.
     double logScaleAtControlMeans = 0;
     FitStatus status = FitStatus::ok;
+    // Duan's smearing factor, mean of exp(residual of ln Y): multiplies exp(fitted ln Y), the
+    // median prediction, into the mean prediction.
+    double smearingFactor = 1;
+    PanelSummary panel;
 };
 
 // The returns-to-scale verdict: "constant (imposed)" when imposed; else "constant" when the test

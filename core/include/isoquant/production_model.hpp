@@ -5,7 +5,8 @@
 // "A") and one exponent row per input, in input order. Rows up to the first empty row are
 // parameters; rows after it must be statistic rows of a PRODFIT table. A row labelled
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
-// "ln A at control means" as ln A.
+// "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
+// is one (fixed effects or a trend: the mean group effect, at the latest period).
 #pragma once
 
 #include "isoquant/cells.hpp"
@@ -34,6 +35,8 @@ struct ProductionModel {
     std::shared_ptr<const Technology> technology;
     // The test of ν = 1 from a PRODFIT table; absent for a hand-typed model.
     std::optional<ScaleTest> scaleTest;
+    // Duan's smearing factor from a "smearing factor" row; absent when the model has none.
+    std::optional<double> smearingFactor;
 };
 
 // Throws InputError naming "model" and the row of the range.

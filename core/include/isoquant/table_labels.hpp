@@ -31,4 +31,21 @@ inline constexpr std::array<const char*, 12> statisticLabels{
     overallTestLabel,  logLikelihoodLabel, aicLabel,           bicLabel,
     returnsLabel,      verdictLabel,   formLabel,             controlMeansLabel};
 
+// Rows of the estimation options, after the rows above (fit_table.hpp).
+inline constexpr const char* smearingLabel = "smearing factor";
+inline constexpr const char* groupsLabel = "groups";
+inline constexpr const char* effectsLabel = "effects";
+inline constexpr const char* withinRSquaredLabel = "within R2";
+inline constexpr const char* periodsLabel = "periods";
+inline constexpr const char* technicalChangeLabel = "technical change per period";
+inline constexpr const char* predictionScaleLabel = "ln A for predictions";
+inline constexpr const char* droppedRowsLabel = "incomplete rows dropped";
+// PRODSTAT answers these, followed by a group's or a period's label, from the fit itself.
+inline constexpr const char* groupEffectPrefix = "effect of group ";
+inline constexpr const char* periodEffectPrefix = "effect of period ";
+
+inline constexpr std::array<const char*, 8> optionStatisticLabels{
+    smearingLabel,        groupsLabel,           effectsLabel,   withinRSquaredLabel,
+    periodsLabel,         technicalChangeLabel,  predictionScaleLabel, droppedRowsLabel};
+
 } // namespace isoquant
