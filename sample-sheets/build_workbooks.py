@@ -50,7 +50,7 @@ def furniture_workshops(office, path):
         "output and the marginal products of labour and capital (the output one more unit of each would "
         "add)." % len(rows),
         "Which cells to change: the yellow data cells on the sheet Workshops (B2:D%d). Everything else "
-        "recalculates. The fitted table is the array formula in I1:O16." % last,
+        "recalculates. The fitted table is the array formula in I1:O17." % last,
         "Units: output and capital in thousand EUR a year, labour in thousand hours worked.",
         "Where the data came from: invented. sample-sheets/scenarios.py draws the workshops with seed %d "
         "from output = %.1f x labour^%.2f x capital^%.2f x exp(noise), noise normal with SD %.2f, so the true "
@@ -68,34 +68,34 @@ def furniture_workshops(office, path):
     style.header(sheet.getCellRangeByName("A1:G1"))
     style.input_cells(sheet.getCellRangeByName("B2:D%d" % last))
 
-    table = "$I$1:$O$16"
-    set_array_formula(sheet, "I1:O16", "=PRODFIT(B1:B%d;C1:D%d)" % (last, last))
+    table = "$I$1:$O$17"
+    set_array_formula(sheet, "I1:O17", "=PRODFIT(B1:B%d;C1:D%d)" % (last, last))
     style.header(sheet.getCellRangeByName("I1:O1"))
     for row in range(2, last + 1):
         set_formula(sheet, "E%d" % row, "=PRODOUTPUT(%s;C%d:D%d)" % (table, row, row))
         set_formula(sheet, "F%d" % row, "=PRODMARGINAL(%s;C%d:D%d;\"labour\")" % (table, row, row))
         set_formula(sheet, "G%d" % row, "=PRODMARGINAL(%s;C%d:D%d;\"capital\")" % (table, row, row))
 
-    set_values(sheet, "I18", [["In short"], ["returns to scale"], ["verdict (classical errors)"],
+    set_values(sheet, "I19", [["In short"], ["returns to scale"], ["verdict (classical errors)"],
                               ["verdict (hc3 errors)"]])
-    style.header(sheet.getCellRangeByName("I18:J18"))
-    set_formula(sheet, "J19", "=PRODSCALE(%s)" % table)
-    set_formula(sheet, "J20", "=PRODRETURNS(%s)" % table)
-    set_formula(sheet, "J21", "=PRODSTAT(B1:B%d;C1:D%d;\"verdict\";;;;\"hc3\")" % (last, last))
+    style.header(sheet.getCellRangeByName("I19:J19"))
+    set_formula(sheet, "J20", "=PRODSCALE(%s)" % table)
+    set_formula(sheet, "J21", "=PRODRETURNS(%s)" % table)
+    set_formula(sheet, "J22", "=PRODSTAT(B1:B%d;C1:D%d;\"verdict\";;;;\"hc3\")" % (last, last))
 
     style.number_format(doc, sheet.getCellRangeByName("B2:B%d" % last), "0.0")
     style.number_format(doc, sheet.getCellRangeByName("C2:C%d" % last), "0.0")
     style.number_format(doc, sheet.getCellRangeByName("D2:D%d" % last), "0")
     style.number_format(doc, sheet.getCellRangeByName("E2:G%d" % last), "0.00")
-    style.number_format(doc, sheet.getCellRangeByName("J2:O16"), "0.0000")
+    style.number_format(doc, sheet.getCellRangeByName("J2:O17"), "0.0000")
     style.number_format(doc, sheet.getCellRangeByName("J6"), "0")
-    style.number_format(doc, sheet.getCellRangeByName("J19"), "0.000")
+    style.number_format(doc, sheet.getCellRangeByName("J20"), "0.000")
     style.align_right(sheet.getCellRangeByName("B1:G1"))
     style.align_right(sheet.getCellRangeByName("J1:O1"))
     style.column_widths(sheet, {"A": 28, "B": 18, "C": 18, "D": 18, "E": 24, "F": 22, "G": 22, "H": 6,
                                 "I": 42, "J": 24, "K": 22, "L": 18, "M": 22, "N": 20, "O": 20})
     style.scatter_chart(sheet, "actual_vs_fitted", "Actual against fitted output (thousand EUR)",
-                        x_range="E1:E%d" % last, y_range="B1:B%d" % last, anchor="I23", size_mm=(160, 90))
+                        x_range="E1:E%d" % last, y_range="B1:B%d" % last, anchor="I25", size_mm=(160, 90))
     doc.NamedRanges.addNewByName("fitted_technology", "$Workshops.%s" % table,
                                  sheet.getCellRangeByName("A1").CellAddress, 0)
     doc.calculateAll()
