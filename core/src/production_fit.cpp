@@ -1,8 +1,10 @@
 #include "isoquant/production_fit.hpp"
 
+#include "isoquant/ces_fit.hpp"
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
+#include "isoquant/translog_fit.hpp"
 
 #include <cmath>
 #include <limits>
@@ -140,8 +142,8 @@ std::string classifyReturnsToScale(double estimate, double pValue, double level,
 
 ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptions& options)
 {
-    if (options.form != ProductionForm::cobbDouglas)
-        throw InputError("form: \"" + formWord(options.form) + "\" is not available yet; use \"cobb-douglas\"");
+    if (options.form == ProductionForm::ces) return fitCes(data, options);
+    if (options.form == ProductionForm::translog) return fitTranslog(data, options);
     const Eigen::Index n = data.output.size();
     const Eigen::Index k = data.inputs.cols();
     const Eigen::Index m = data.controls.cols();

@@ -18,10 +18,14 @@
 
 #include <Eigen/Dense>
 
+#include <memory>
 #include <string>
 #include <vector>
 
 namespace isoquant {
+
+struct CesDetails;      // ces_fit.hpp
+struct TranslogDetails; // translog_fit.hpp
 
 struct ProductionData {
     Eigen::VectorXd output;          // n values, positive
@@ -67,6 +71,9 @@ struct ProductionFit {
     // ln A + Σⱼ cⱼ·mean(zⱼ): the evaluators' ln A when there are controls.
     double logScaleAtControlMeans = 0;
     FitStatus status = FitStatus::ok;
+    // What only the "ces" or the "translog" form has; empty for the other forms.
+    std::shared_ptr<const CesDetails> ces;
+    std::shared_ptr<const TranslogDetails> translog;
 };
 
 // The returns-to-scale verdict: "constant (imposed)" when imposed; else "constant" when the test
