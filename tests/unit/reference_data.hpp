@@ -13,4 +13,8 @@ FitArguments cobbDouglas1928Arguments();
 // control unemp (entered as it is). Options left empty (defaults).
 FitArguments statePanelArguments();
 
+// The rice-farm panel (Feng and Horrace 2012, as in plm 2.6 RiceFarms), 1026 rows: output goutput
+// and the named input columns (e.g. size, totlabor). Options left empty (defaults).
+FitArguments riceFarmArguments(const std::vector<std::string>& inputs);
+
 } // namespace isoquant::testing
