@@ -38,6 +38,7 @@ CesComposite cesComposite(double logRatio, double weight, double curvature)
     if (u == 0) {
         composite.value = weight * d;
         composite.byWeight = d;
+        composite.byWeightLogit = weight * (1 - weight) * d;
     } else {
         // K(u) = ln(1 + δ·(eᵘ − 1)): log1p/expm1 keep its relative accuracy for small |u|.
         cumulant =
@@ -46,6 +47,9 @@ CesComposite cesComposite(double logRatio, double weight, double curvature)
         // ∂H/∂δ = d·(eᵘ − 1)/(u·(δeᵘ + 1 − δ)), written without eᵘ for u > 0
         composite.byWeight = u > 0 ? d * -std::expm1(-u) / (u * (weight + (1 - weight) * std::exp(-u)))
                                    : d * std::expm1(u) / (u * (weight * std::exp(u) + 1 - weight));
+        // δ(1−δ)(eᵘ − 1)/(δeᵘ + 1 − δ) = π − δ, which loses digits to cancellation only for small |u|
+        composite.byWeightLogit = std::fabs(u) <= 1 ? weight * (1 - weight) * composite.byWeight
+                                                    : d * (composite.firstShare - weight) / u;
     }
     // ∂H/∂ρ = −d²·(u·K′(u) − K(u))/u² = −d²·d/du[K(u)/u]
     if (std::fabs(u) < seriesLimit) {

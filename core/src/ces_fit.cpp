@@ -87,8 +87,9 @@ public:
     {
         const Eigen::Vector4d raw = toRaw(solver);
         Eigen::MatrixXd jacobian = rawJacobian(logs_, raw);
-        jacobian.col(1) *= raw(1) * (1 - raw(1)); // dδ/dt
-        jacobian.col(2) *= std::exp(solver(2));   // dρ/ds = 1 + ρ
+        for (Eigen::Index i = 0; i < jacobian.rows(); ++i) // ∂/∂t, finite even where δ rounds to 0 or 1
+            jacobian(i, 1) = -raw(3) * cesComposite(logs_.logRatio(i), raw(1), raw(2)).byWeightLogit;
+        jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
         return jacobian;
     }
 

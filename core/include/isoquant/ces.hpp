@@ -15,7 +15,8 @@ namespace isoquant {
 // H and its partial derivatives at (d, δ, ρ).
 struct CesComposite {
     double value = 0;          // H
-    double byWeight = 0;       // ∂H/∂δ
+    double byWeight = 0;       // ∂H/∂δ (overflows where δ is 0 or 1 and |ρ·d| is beyond the range of exp)
+    double byWeightLogit = 0;  // ∂H/∂t for δ = 1/(1 + e^(−t)): δ(1−δ)·∂H/∂δ = d·(π − δ)/u, always finite
     double byCurvature = 0;    // ∂H/∂ρ
     double firstShare = 0;     // π = ∂H/∂d = δ·x₁^(−ρ) / (δ·x₁^(−ρ) + (1−δ)·x₂^(−ρ))
     double secondShare = 0;    // 1 − π, formed on its own to keep its digits when π is near 1
