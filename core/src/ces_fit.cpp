@@ -23,6 +23,9 @@ constexpr Eigen::Index cesParameters = 4;
 constexpr double gridCurvatures[] = {-0.9, -0.75, -0.5, -0.25, 0.0, 0.25, 0.5, 1.0, 2.0, 4.0, 8.0, 16.0};
 // Logits of δ tried before Brent's search refines the best of them (δ from about 0.0025 to 0.9975).
 constexpr double gridWeightLogits[] = {-6, -4.5, -3, -2, -1, 0, 1, 2, 3, 4.5, 6};
+// Bounds a Kmenta start is clamped to: δ in [0.01, 0.99], ρ in [−0.9, 20].
+constexpr double kmentaWeightLimit = 0.01;
+constexpr double kmentaCurvatureLimit = 20.0;
 // Starts taken from the grid besides the Kmenta one.
 constexpr std::size_t gridStartsTried = 2;
 // Bits of precision Brent's search aims at on the logit of δ (enough for a start value).
@@ -135,7 +138,7 @@ ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
 }
 
 // ln Y = β₀ + β₁ ln x₁ + β₂ ln x₂ + β₃ d², the second-order expansion of ln Y about ρ = 0:
-// ν = β₁ + β₂, δ = β₁/ν, ρ = −2β₃/(ν·δ(1−δ)); empty when these leave the domain.
+// ν = β₁ + β₂, δ = β₁/ν, ρ = −2β₃/(ν·δ(1−δ)); empty when ν ≤ 0.
 std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
 {
     const Eigen::Index n = logs.logOutput.size();
@@ -152,11 +155,12 @@ std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
     }
     const Eigen::VectorXd& b = kmenta.coefficients;
     const double nu = b(1) + b(2);
-    const double weight = b(1) / nu;
-    if (!(weight > 0 && weight < 1)) return std::nullopt;
+    if (!(nu > 0)) return std::nullopt;
+    // Kept inside the domain, where a start must lie, when the approximation strays outside it.
+    const double weight = std::clamp(b(1) / nu, kmentaWeightLimit, 1 - kmentaWeightLimit);
     const double curvature = -2 * b(3) / (nu * weight * (1 - weight));
-    if (!(curvature > -1) || !std::isfinite(curvature)) return std::nullopt;
-    return Eigen::Vector4d(b(0), weight, curvature, nu);
+    if (!std::isfinite(curvature)) return std::nullopt;
+    return Eigen::Vector4d(b(0), weight, std::clamp(curvature, gridCurvatures[0], kmentaCurvatureLimit), nu);
 }
 
 CesLogs logsOf(const ProductionData& data)
@@ -194,10 +198,10 @@ void requireCesData(const ProductionData& data, const ProductionFitOptions& opti
 
 CesBoundary boundaryOf(const Eigen::VectorXd& solver, double distance)
 {
-    const double weight = logistic(solver(1));
-    if (weight < distance) return CesBoundary::secondInputOnly;
+    if (logistic(solver(1)) < distance) return CesBoundary::secondInputOnly;
     if (logistic(-solver(1)) < distance) return CesBoundary::firstInputOnly;
     if (std::exp(solver(2)) < distance) return CesBoundary::perfectSubstitutes; // 1 + ρ
+    if (std::exp(-solver(2)) < distance) return CesBoundary::fixedProportions;  // σ
     return CesBoundary::none;
 }
 
@@ -258,6 +262,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     case CesBoundary::firstInputOnly: raw(1) = 1; break;
     case CesBoundary::secondInputOnly: raw(1) = 0; break;
     case CesBoundary::perfectSubstitutes: raw(2) = -1; break;
+    case CesBoundary::fixedProportions: // ρ keeps the value reached
     case CesBoundary::none: break;
     }
     const Eigen::VectorXd residuals = rawResiduals(logs, raw);

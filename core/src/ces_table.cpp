@@ -20,6 +20,9 @@ std::string boundaryNote(const ProductionFit& fit)
     case CesBoundary::perfectSubstitutes:
         return "note: optimum on the boundary rho = -1: the inputs are perfect substitutes (sigma infinite)" +
                noErrors;
+    case CesBoundary::fixedProportions:
+        return "note: optimum at the limit rho -> infinity: the inputs are used in fixed proportions (sigma 0); "
+               "rho shows the value reached" + noErrors;
     case CesBoundary::none: break;
     }
     return "";
@@ -48,7 +51,8 @@ bool onBoundary(const ProductionFit& fit, Eigen::Index parameter)
     switch (fit.ces->boundary) {
     case CesBoundary::firstInputOnly:
     case CesBoundary::secondInputOnly: return parameter == 1;
-    case CesBoundary::perfectSubstitutes: return parameter == 2;
+    case CesBoundary::perfectSubstitutes:
+    case CesBoundary::fixedProportions: return parameter == 2;
     case CesBoundary::none: break;
     }
     return false;
@@ -71,7 +75,7 @@ CellTable cesFitTable(const ProductionFit& fit)
         else
             writer.parameterRow(labels[j], fit, j);
     }
-    if (ces.boundary == CesBoundary::perfectSubstitutes)
+    if (ces.boundary == CesBoundary::perfectSubstitutes || ces.boundary == CesBoundary::fixedProportions)
         writer.put(substitutionLabel, {ces.substitutionElasticity, std::string(boundaryText)});
     else
         writer.put(substitutionLabel, {ces.substitutionElasticity, writer.undefinedIfExact(ces.substitutionStandardError),

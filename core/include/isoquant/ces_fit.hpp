@@ -27,7 +27,8 @@ enum class CesBoundary {
     none,
     firstInputOnly,     // δ = 1: output depends on the first input alone; ρ is not identified
     secondInputOnly,    // δ = 0: output depends on the second input alone; ρ is not identified
-    perfectSubstitutes  // ρ = −1 (σ infinite): Y = A·(δ·x₁ + (1−δ)·x₂)^ν
+    perfectSubstitutes, // ρ = −1 (σ infinite): Y = A·(δ·x₁ + (1−δ)·x₂)^ν
+    fixedProportions    // ρ → ∞ (σ → 0): the Leontief limit; ρ is shown as reached, not as an estimate
 };
 
 struct CesDetails {
@@ -43,9 +44,10 @@ struct CesDetails {
 
 struct CesFitOptions {
     NonlinearLeastSquaresOptions solver;
-    // An optimum with δ or 1 − δ below this, or 1 + ρ below it, lies on the boundary: the estimate
-    // shown is the boundary value and no standard errors are reported. 1e-6 is far below any weight
-    // or curvature the data could tell from the boundary (common practice, no source).
+    // An optimum with δ or 1 − δ below this, or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on
+    // the boundary: the estimate shown is the boundary value (the value reached for ρ → ∞) and no
+    // standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
+    // from the boundary (common practice, no source).
     double boundaryDistance = 1e-6;
     // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
     std::optional<Eigen::Vector4d> start;

@@ -26,8 +26,10 @@ public:
 
 struct NonlinearLeastSquaresOptions {
     // MINPACK ftol: stop when both the actual and the predicted relative reduction of the sum of
-    // squares in one step are at most this.
-    double relativeReductionTolerance = 1e-15;
+    // squares in one step are at most this. 0 (the default) turns the test off: a flat sum of
+    // squares (a parameter with a large standard error) then does not end the iterations before
+    // the parameters themselves settle (xtol) or no reduction is possible at machine precision.
+    double relativeReductionTolerance = 0;
     // MINPACK xtol: stop when the step bound Δ is at most this times ‖D·θ‖, D the diagonal scaling
     // by the Jacobian's column norms (a relative change of θ of about this size).
     double relativeStepTolerance = 1e-15;
