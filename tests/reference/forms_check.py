@@ -9,7 +9,9 @@ analytic Jacobian of that textbook formula, started from the Kmenta approximatio
 errors s^2 (J'J)^-1 at the optimum, sigma = 1/(1 + rho) by the delta method.
 Translog, ln Y = a0 + sum a_i ln x_i + 1/2 sum sum b_ij ln x_i ln x_j, by statsmodels OLS on the
 regressors ln x_i, (ln x_i)^2 / 2 and ln x_i ln x_j (i < j); elasticities and returns to scale at
-the sample means of the logs by t_test, nu = 1 and all b_ij = 0 by f_test.
+the sample means of the logs by t_test, nu = 1 and all b_ij = 0 by f_test. PRODCOMPARE's test of
+Cobb-Douglas within CES: LR = n ln(RSS_cd / RSS_ces) with the statsmodels Cobb-Douglas fit, p-value
+from scipy.stats.chi2(1).
 
 Writes one figure per line: dataset,form,quantity,index,value. Run it with Debian's /usr/bin/python3
 (python3-scipy and python3-statsmodels import only there). Exits with 77 (the CTest skip code)
@@ -45,6 +47,16 @@ def likelihood_figures(np, put, form, rss, n, p, log_output):
     put(form, "llf", llf)
     put(form, "aic", -2 * llf + 2 * p)
     put(form, "bic", -2 * llf + p * np.log(n))
+
+
+def comparison_figures(np, sm, chi2, put, y, x1, x2, ces_rss):
+    """Cobb-Douglas nested in CES at rho = 0: LR = n ln(RSS_cd / RSS_ces) on chi-squared(1)."""
+    ly = np.log(y)
+    cobb_douglas = sm.OLS(ly, np.column_stack([np.ones_like(ly), np.log(x1), np.log(x2)])).fit()
+    ratio = len(ly) * np.log(cobb_douglas.ssr / ces_rss)
+    put("compare", "cd_llf", cobb_douglas.llf)
+    put("compare", "lr", ratio)
+    put("compare", "lr_pvalue", chi2.sf(ratio, 1))
 
 
 def ces_figures(np, optimize, put, y, x1, x2):
@@ -86,6 +98,7 @@ def ces_figures(np, optimize, put, y, x1, x2):
     put("ces", "sigma_se", se[2] / (1 + theta[2]) ** 2)
     put("ces", "nu_fvalue", ((theta[3] - 1) / se[3]) ** 2)
     likelihood_figures(np, put, "ces", rss, n, p, ly)
+    return rss
 
 
 def translog_figures(np, sm, put, y, inputs):
@@ -141,7 +154,7 @@ def main():
         import scipy
         import statsmodels
         import statsmodels.api as sm
-        from scipy import optimize
+        from scipy import optimize, stats
     except ImportError as error:
         print(f"scipy or statsmodels is not importable ({error}); skipping", file=sys.stderr)
         return SKIP
@@ -155,7 +168,9 @@ def main():
             for index, value in enumerate(np.atleast_1d(values)):
                 rows.append((dataset, form, quantity, index, repr(float(value))))
 
-        ces_figures(np, optimize, put, y, np.array(columns[ces_inputs[0]]), np.array(columns[ces_inputs[1]]))
+        x1, x2 = np.array(columns[ces_inputs[0]]), np.array(columns[ces_inputs[1]])
+        ces_rss = ces_figures(np, optimize, put, y, x1, x2)
+        comparison_figures(np, sm, stats.chi2, put, y, x1, x2, ces_rss)
         translog_figures(np, sm, put, y, [np.array(columns[name]) for name in translog_inputs])
 
     os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)

@@ -1,5 +1,6 @@
 // The core's ces and translog fits of the Cobb & Douglas (1928) data and the rice-farm panel
-// (Feng and Horrace 2012) against python3-scipy 1.10.1 (least_squares, trust-region reflective)
+// (Feng and Horrace 2012), and PRODCOMPARE's test of Cobb-Douglas within CES, against
+// python3-scipy 1.10.1 (least_squares, trust-region reflective)
 // and python3-statsmodels 0.13.5 (OLS), recomputed at test time by tests/reference/forms_check.py.
 //
 // Tolerances:
@@ -12,11 +13,16 @@
 //   optimum. The ces p-values are compared through their t statistics: a tail probability such as
 //   1e-83 (t ≈ 49) changes by about t²·Δt/t relative, so it would magnify a 1e-7 difference in t
 //   to 1e-4; the t → p step itself is the one checked on the translog p-values to 1e-8.
+// - PRODCOMPARE's likelihood ratio of ρ = 0, n·ln(RSS_cd/RSS_ces), and its χ²(1) p-value: 1e-6
+//   relative. The ratio inherits the 1e-9 agreement of the sums of squares as an absolute error of
+//   about n·1e-9, which is 4e-7 of the smallest ratio here (0.057 on 24 rows). The Cobb-Douglas
+//   log-likelihood in that table is linear least squares: 1e-8.
 //
 // CTest runs the script first (test forms_figures) and passes the file it wrote in the environment
 // variable ISOQUANT_FORMS_FIGURES; without that file this test is skipped.
 #include "isoquant/ces_fit.hpp"
 #include "isoquant/cell_functions.hpp"
+#include "isoquant/form_comparison.hpp"
 #include "isoquant/translog_fit.hpp"
 #include "reference_data.hpp"
 
@@ -75,13 +81,13 @@ std::vector<Figure> readFigures(const std::string& path)
     return figures;
 }
 
+isoquant::FitArguments cesArguments(const std::string& dataset);
+
 isoquant::ProductionFit coreFit(const std::string& dataset, const std::string& form)
 {
     isoquant::FitArguments arguments;
-    if (dataset == "cobb_douglas_1928")
-        arguments = isoquant::testing::cobbDouglas1928Arguments();
-    else if (form == "ces")
-        arguments = isoquant::testing::riceFarmArguments({"size", "totlabor"});
+    if (dataset == "cobb_douglas_1928" || form == "ces")
+        arguments = cesArguments(dataset);
     else
         arguments = isoquant::testing::riceFarmArguments({"size", "totlabor", "seed", "urea"});
     arguments.form = form;
@@ -121,6 +127,22 @@ double translogFigure(const isoquant::ProductionFit& fit, const std::string& q, 
     return notANumber;
 }
 
+isoquant::FitArguments cesArguments(const std::string& dataset)
+{
+    return dataset == "cobb_douglas_1928" ? isoquant::testing::cobbDouglas1928Arguments()
+                                          : isoquant::testing::riceFarmArguments({"size", "totlabor"});
+}
+
+// PRODCOMPARE's table (form_comparison.hpp): the Cobb-Douglas row is 1, the ces test row 7.
+double comparisonFigure(const isoquant::CellTable& table, const std::string& q)
+{
+    const auto number = [&](std::size_t row, std::size_t column) { return std::get<double>(table.at(row, column)); };
+    if (q == "cd_llf") return number(1, 2);
+    if (q == "lr") return number(7, 1);
+    if (q == "lr_pvalue") return number(7, 4);
+    return notANumber;
+}
+
 double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
 {
     const std::string& q = figure.quantity;
@@ -135,7 +157,8 @@ double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
 
 double toleranceFor(const Figure& figure)
 {
-    if (figure.form == "translog") return 1e-8;
+    if (figure.form == "translog" || figure.quantity == "cd_llf") return 1e-8;
+    if (figure.form == "compare") return 1e-6;
     if (figure.quantity == "params" || figure.quantity == "sigma") return 1e-6;
     if (figure.quantity == "bse" || figure.quantity == "tvalues" || figure.quantity == "sigma_se" ||
         figure.quantity == "nu_fvalue")
@@ -163,8 +186,13 @@ BOOST_AUTO_TEST_CASE(ces_and_translog_agree_with_scipy_and_statsmodels, *boost::
     std::size_t compared = 0;
     for (const auto& figure : figures) {
         const std::string key = figure.dataset + "/" + figure.form;
-        if (!fits.count(key)) fits.emplace(key, coreFit(figure.dataset, figure.form));
-        const double actual = coreFigure(fits.at(key), figure);
+        double actual = notANumber;
+        if (figure.form == "compare") {
+            actual = comparisonFigure(isoquant::compareForms(cesArguments(figure.dataset)), figure.quantity);
+        } else {
+            if (!fits.count(key)) fits.emplace(key, coreFit(figure.dataset, figure.form));
+            actual = coreFigure(fits.at(key), figure);
+        }
         const double tolerance = toleranceFor(figure);
         BOOST_TEST(agrees(actual, figure.value, tolerance),
                    std::setprecision(17) << key << " " << figure.quantity << "[" << figure.index << "]: core " << actual
