@@ -13,7 +13,9 @@ constexpr ArgumentInfo outputArgument{
 constexpr ArgumentInfo inputsArgument{
     "inputs", "Inputs of each row, one column per input (labour, capital, …), positive numbers, as many rows as "
               "output. A first row of text names the inputs."};
-constexpr ArgumentInfo formArgument{"form", "Functional form: \"cobb-douglas\" (default)."};
+constexpr ArgumentInfo formArgument{
+    "form", "Functional form: \"cobb-douglas\" (default), \"ces\" (exactly two inputs, by nonlinear least "
+            "squares) or \"translog\"."};
 constexpr ArgumentInfo constantReturnsArgument{
     "constant returns", "TRUE to impose constant returns to scale (exponents summing to 1); FALSE or empty to "
                         "estimate them freely."};
@@ -25,8 +27,8 @@ constexpr ArgumentInfo controlsArgument{
     "controls", "Optional extra columns entered as they are, not logged (a rate, a 0/1 dummy), as many rows as "
                 "output."};
 constexpr ArgumentInfo modelArgument{
-    "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas), ln A (or A) "
-             "and one exponent row per input."};
+    "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas, ces or "
+             "translog), ln A (or A), then the form's parameter rows (see the README)."};
 constexpr ArgumentInfo bundlesArgument{
     "inputs", "One row of input values in the model's input order, or several rows: the result is then a column "
               "with one value per row."};
@@ -65,6 +67,16 @@ const std::vector<FunctionInfo>& functionTable()
          "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
          "the given level. A typed model without standard errors is judged by its returns to scale alone.",
          {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
+        {"prodRegular", "PRODREGULAR",
+         "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
+         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
+         {modelArgument, bundlesArgument}},
+        {"prodCompare", "PRODCOMPARE",
+         "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
+         "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
+         "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0).",
+         {outputArgument, inputsArgument,
+          {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
     };
     return table;
 }

@@ -40,6 +40,8 @@ public:
     AnyTable SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
     AnyTable SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
+    AnyTable SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
+    AnyTable SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& level) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

@@ -25,7 +25,7 @@
 //   elasticity <label> (one per input: εᵢ at the sample mean of the logs, se, t of εᵢ = 0, p, low,
 //   high); returns to scale (ν at the mean, se, F of ν = 1, p); verdict; CD test (F of all βᵢⱼ = 0
 //   under "t", its p-value); form; ln A at control means (only when m > 0)
-// so 2k + q + m + 16 rows, plus one with controls. Two inputs, no controls: 23 rows.
+// so 2k + q + m + 15 rows, plus one with controls. Two inputs, no controls: 22 rows.
 #pragma once
 
 #include "isoquant/cells.hpp"
