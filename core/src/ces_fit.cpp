@@ -4,6 +4,7 @@
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/least_squares.hpp"
+#include "fit_inference.hpp"
 
 #include <boost/math/constants/constants.hpp>
 #include <boost/math/tools/minima.hpp>
@@ -280,13 +281,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     ProductionFit fit;
     fit.form = ProductionForm::ces;
     fit.inputLabels = data.inputLabels;
-    fit.estimates = raw;
-    fit.standardErrors = inference.standardErrors;
-    fit.tStatistics = inference.tStatistics;
-    fit.pValues = inference.pValues;
-    fit.lowerBounds = inference.lowerBounds;
-    fit.upperBounds = inference.upperBounds;
-    fit.covariance = inference.covariance;
+    setParameterInference(fit, raw, inference);
     fit.logScaleAtControlMeans = raw(0);
 
     LeastSquaresResult& summary = fit.regression;

@@ -66,8 +66,7 @@ CellTable cesFitTable(const ProductionFit& fit)
 {
     const CesDetails& ces = *fit.ces;
     TableWriter writer(cesFitTableRows(), fit.status == FitStatus::perfectFit);
-    writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
-                                     headerLabels[5], headerLabels[6]});
+    writer.headerRow();
     const char* labels[] = {logScaleLabel, weightLabel, curvatureLabel, returnsParameterLabel};
     for (Eigen::Index j = 0; j < 4; ++j) {
         if (onBoundary(fit, j))
@@ -83,18 +82,8 @@ CellTable cesFitTable(const ProductionFit& fit)
                                        writer.undefinedIfExact(ces.substitutionUpperBound)});
     writer.skipRow();
 
-    const LeastSquaresResult& summary = fit.regression;
-    writer.valueRow(observationsLabel, static_cast<double>(summary.observations));
-    writer.valueRow(rSquaredLabel, fit.rSquared);
-    writer.valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
-    writer.valueRow(residualSdLabel, summary.residualStandardDeviation);
-    writer.valueRow(logLikelihoodLabel, writer.undefinedIfExact(summary.logLikelihood));
-    writer.valueRow(aicLabel, writer.undefinedIfExact(summary.aic));
-    writer.valueRow(bicLabel, writer.undefinedIfExact(summary.bic));
-    const ReturnsToScale& returns = fit.returns;
-    writer.put(returnsLabel, {returns.estimate, writer.undefinedIfExact(returns.standardError),
-                              writer.undefinedIfExact(returns.fStatistic), writer.undefinedIfExact(returns.pValue)});
-    writer.textRow(verdictLabel, {returns.verdict});
+    writer.fitStatisticRows(fit, false);
+    writer.returnsRows(fit.returns);
     writer.textRow(formLabel, {formWord(fit.form), cesNote(fit)});
     writer.textRow(convergenceLabel, {convergenceWord(ces.convergence), std::to_string(ces.evaluations) +
                                                                           " evaluations; " + ces.stopReason});

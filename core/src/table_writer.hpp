@@ -54,6 +54,33 @@ public:
         ++row_;
     }
     double undefinedIfExact(double value) const { return exactFit_ ? notANumber : value; }
+    // observations, R2, adjusted R2, residual SD, [F (slopes = 0),] log-likelihood, AIC, BIC
+    void fitStatisticRows(const ProductionFit& fit, bool withOverallTest)
+    {
+        const LeastSquaresResult& summary = fit.regression;
+        valueRow(observationsLabel, static_cast<double>(summary.observations));
+        valueRow(rSquaredLabel, fit.rSquared);
+        valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
+        valueRow(residualSdLabel, summary.residualStandardDeviation);
+        if (withOverallTest)
+            put(overallTestLabel,
+                {Cell{}, Cell{}, undefinedIfExact(summary.fStatistic), undefinedIfExact(summary.fPValue)});
+        valueRow(logLikelihoodLabel, undefinedIfExact(summary.logLikelihood));
+        valueRow(aicLabel, undefinedIfExact(summary.aic));
+        valueRow(bicLabel, undefinedIfExact(summary.bic));
+    }
+    // returns to scale (ν, se, F of ν = 1, p) and the verdict
+    void returnsRows(const ReturnsToScale& returns)
+    {
+        put(returnsLabel, {returns.estimate, undefinedIfExact(returns.standardError),
+                           undefinedIfExact(returns.fStatistic), undefinedIfExact(returns.pValue)});
+        textRow(verdictLabel, {returns.verdict});
+    }
+    void headerRow()
+    {
+        textRow(headerLabels[0],
+                {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4], headerLabels[5], headerLabels[6]});
+    }
     void skipRow() { ++row_; }
     CellTable finish() { return std::move(table_); }
 

@@ -3,6 +3,7 @@
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
+#include "fit_inference.hpp"
 
 #include <cmath>
 
@@ -112,13 +113,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     fit.inputLabels = data.inputLabels;
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
-    fit.estimates = regression.coefficients;
-    fit.standardErrors = regression.standardErrors;
-    fit.tStatistics = regression.tStatistics;
-    fit.pValues = regression.pValues;
-    fit.lowerBounds = regression.lowerBounds;
-    fit.upperBounds = regression.upperBounds;
-    fit.covariance = regression.covariance;
+    setParameterInference(fit, regression.coefficients, regression);
     fit.rSquared = regression.rSquared;
     fit.adjustedRSquared = regression.adjustedRSquared;
     fit.logScaleAtControlMeans = fit.estimates(0);

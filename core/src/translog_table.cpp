@@ -16,8 +16,7 @@ CellTable translogFitTable(const ProductionFit& fit)
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
     TableWriter writer(translogFitTableRows(k, m), fit.status == FitStatus::perfectFit);
-    writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
-                                     headerLabels[5], headerLabels[6]});
+    writer.headerRow();
     Eigen::Index parameter = 0;
     writer.parameterRow(logScaleLabel, fit, parameter++);
     for (const auto& label : fit.inputLabels) writer.parameterRow(label, fit, parameter++);
@@ -26,16 +25,7 @@ CellTable translogFitTable(const ProductionFit& fit)
     for (const auto& label : fit.controlLabels) writer.parameterRow(label + controlSuffix, fit, parameter++);
     writer.skipRow();
 
-    const LeastSquaresResult& regression = fit.regression;
-    writer.valueRow(observationsLabel, static_cast<double>(regression.observations));
-    writer.valueRow(rSquaredLabel, fit.rSquared);
-    writer.valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
-    writer.valueRow(residualSdLabel, regression.residualStandardDeviation);
-    writer.put(overallTestLabel, {Cell{}, Cell{}, writer.undefinedIfExact(regression.fStatistic),
-                                  writer.undefinedIfExact(regression.fPValue)});
-    writer.valueRow(logLikelihoodLabel, writer.undefinedIfExact(regression.logLikelihood));
-    writer.valueRow(aicLabel, writer.undefinedIfExact(regression.aic));
-    writer.valueRow(bicLabel, writer.undefinedIfExact(regression.bic));
+    writer.fitStatisticRows(fit, true);
     for (std::size_t i = 0; i < k; ++i) {
         const auto index = static_cast<Eigen::Index>(i);
         writer.put(elasticityPrefix + fit.inputLabels[i],
@@ -45,10 +35,7 @@ CellTable translogFitTable(const ProductionFit& fit)
                     writer.undefinedIfExact(translog.elasticityLowerBounds(index)),
                     writer.undefinedIfExact(translog.elasticityUpperBounds(index))});
     }
-    const ReturnsToScale& returns = fit.returns;
-    writer.put(returnsLabel, {returns.estimate, writer.undefinedIfExact(returns.standardError),
-                              writer.undefinedIfExact(returns.fStatistic), writer.undefinedIfExact(returns.pValue)});
-    writer.textRow(verdictLabel, {returns.verdict});
+    writer.returnsRows(fit.returns);
     writer.put(cobbDouglasTestLabel, {Cell{}, Cell{}, writer.undefinedIfExact(translog.cobbDouglasTest.fStatistic),
                                       writer.undefinedIfExact(translog.cobbDouglasTest.pValue)});
     writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});

@@ -26,7 +26,7 @@ sys.path.insert(0, HERE)
 sys.path.insert(0, os.path.join(HERE, "..", "reference"))
 
 from office import HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values  # noqa: E402
-from test_functions_in_calc import CalcTestCase, error, read_columns, row_of  # noqa: E402
+from test_functions_in_calc import CalcTestCase, error, read_columns, row_of, write_columns  # noqa: E402
 
 try:  # reference libraries; their checks are skipped when these are missing
     import numpy as np
@@ -67,10 +67,6 @@ def new_sheet(name):
     sheets = DOC.Sheets
     sheets.insertNewByName(name, sheets.getCount())
     return sheets.getByName(name)
-
-
-def write_columns(sheet, top_left, columns, names):
-    set_values(sheet, top_left, [list(names)] + [list(row) for row in zip(*(columns[n] for n in names))])
 
 
 def reference_figures(form, y, inputs):
