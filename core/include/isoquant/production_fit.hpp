@@ -3,6 +3,8 @@
 // Cobb-Douglas: Y = A·Πᵢ xᵢ^bᵢ·exp(Σⱼ cⱼ·zⱼ + u), fitted by least squares on logs:
 //   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ + u,
 // with controls zⱼ (an unemployment rate, a 0/1 dummy) entered as they are, not logged.
+// The ces and translog forms are fitted by ces_fit.hpp and translog_fit.hpp; fitProduction
+// dispatches on options.form and they follow the same conventions.
 //
 // Conventions (the same for every covariance kind):
 // - p counts the regression parameters actually estimated; inference uses t(n−p) and F(q, n−p).
