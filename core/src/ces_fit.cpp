@@ -4,6 +4,7 @@
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/least_squares.hpp"
+#include "isoquant/text.hpp"
 #include "fit_inference.hpp"
 
 #include <boost/math/constants/constants.hpp>
@@ -193,7 +194,8 @@ void requireCesData(const ProductionData& data, const ProductionFitOptions& opti
     for (Eigen::Index i = 0; i < n; ++i) ratios[static_cast<std::size_t>(i)] = data.inputs(i, 0) / data.inputs(i, 1);
     std::sort(ratios.begin(), ratios.end());
     if (std::unique(ratios.begin(), ratios.end()) - ratios.begin() < 3)
-        throw InputError("inputs: the ratio of " + data.inputLabels[0] + " to " + data.inputLabels[1] +
+        throw InputError("inputs: the ratio of " + isoquant::quoted(data.inputLabels[0]) + " to " +
+                         isoquant::quoted(data.inputLabels[1]) +
                          " takes fewer than three values; the ces form cannot tell its weight from its curvature");
 }
 

@@ -284,7 +284,7 @@ BOOST_AUTO_TEST_CASE(bad_input_for_the_forms_is_named)
     proportional.output = isoquant::testing::numberRange(Eigen::VectorXd::LinSpaced(8, 2, 30), {"y"});
     proportional.inputs = isoquant::testing::numberRange(inputs, {"a", "b"});
     BOOST_TEST(fitMessage(proportional, "ces") ==
-               "inputs: the ratio of a to b takes fewer than three values; the ces form cannot tell its weight from "
+               "inputs: the ratio of 'a' to 'b' takes fewer than three values; the ces form cannot tell its weight from "
                "its curvature");
     BOOST_TEST(fitMessage(proportional, "translog") ==
                "inputs: the translog terms 'a', 'b', 'a*a', 'a*b' and 'b*b' are collinear (inputs taken in logs); "
