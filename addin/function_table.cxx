@@ -13,7 +13,9 @@ constexpr ArgumentInfo outputArgument{
 constexpr ArgumentInfo inputsArgument{
     "inputs", "Inputs of each row, one column per input (labour, capital, …), positive numbers, as many rows as "
               "output. A first row of text names the inputs."};
-constexpr ArgumentInfo formArgument{"form", "Functional form: \"cobb-douglas\" (default)."};
+constexpr ArgumentInfo formArgument{
+    "form", "Functional form: \"cobb-douglas\" (default), \"ces\" (exactly two inputs, by nonlinear least "
+            "squares) or \"translog\"."};
 constexpr ArgumentInfo constantReturnsArgument{
     "constant returns", "TRUE to impose constant returns to scale (exponents summing to 1); FALSE or empty to "
                         "estimate them freely."};
@@ -40,8 +42,8 @@ constexpr ArgumentInfo incompleteRowsArgument{
                        "such a cell is an error. A cell with an error value (#N/A) stops Calc before the call "
                        "(Err:504)."};
 constexpr ArgumentInfo modelArgument{
-    "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas), ln A (or A) "
-             "and one exponent row per input."};
+    "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas, ces or "
+             "translog), ln A (or A), then the form's parameter rows (see the README)."};
 constexpr ArgumentInfo bundlesArgument{
     "inputs", "One row of input values in the model's input order, or several rows: the result is then a column "
               "with one value per row."};
@@ -111,6 +113,16 @@ const std::vector<FunctionInfo>& functionTable()
           {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1."},
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
           {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."}}},
+        {"prodRegular", "PRODREGULAR",
+         "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
+         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
+         {modelArgument, bundlesArgument}},
+        {"prodCompare", "PRODCOMPARE",
+         "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
+         "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
+         "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0).",
+         {outputArgument, inputsArgument,
+          {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
     };
     return table;
 }

@@ -182,6 +182,19 @@ AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTab
     });
 }
 
+AnyTable ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
+{
+    return guardedTable([&] { return regularityColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs")); });
+}
+
+AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
+{
+    return guardedTable([&] {
+        return compareFormsTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
+                                 toSingleCell(level, "level"));
+    });
+}
+
 OUString ProductionFunctions::getProgrammaticFuntionName(const OUString& displayName)
 {
     const FunctionInfo* function = findByDisplayName(toUtf8(displayName));

@@ -49,6 +49,8 @@ public:
                                  const css::uno::Any& method) override;
     AnyTable SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
                                 const css::uno::Any& base) override;
+    AnyTable SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
+    AnyTable SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& level) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

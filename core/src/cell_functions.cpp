@@ -1,10 +1,12 @@
 #include "isoquant/cell_functions.hpp"
 
+#include "isoquant/form_comparison.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
 #include "isoquant/production_model.hpp"
+#include "isoquant/regularity.hpp"
 #include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
 
@@ -172,6 +174,26 @@ std::string returnsVerdictCell(const CellTable& model, const Cell& level)
 {
     const double confidence = readLevelArgument(level, "level");
     return returnsVerdict(readProductionModel(model), confidence);
+}
+
+CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
+{
+    const ProductionModel technology = readProductionModel(model);
+    const NumericColumns bundles = readBundles(inputs, technology);
+    CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)
+        column.at(static_cast<std::size_t>(row), 0) = regularityPhrase(
+            *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels);
+    return column;
+}
+
+CellTable compareFormsTable(const CellTable& output, const CellTable& inputs, const Cell& level)
+{
+    FitArguments arguments;
+    arguments.output = output;
+    arguments.inputs = inputs;
+    arguments.level = level;
+    return compareForms(arguments);
 }
 
 } // namespace isoquant

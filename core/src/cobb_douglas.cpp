@@ -16,14 +16,6 @@ long double extendedLogOutput(const CobbDouglas& technology, const Eigen::Vector
     return sum;
 }
 
-// c·exp(L) formed in logs, so that it overflows or underflows only when the result does.
-double scaledExponential(double coefficient, long double logMagnitude)
-{
-    if (coefficient == 0) return 0.0;
-    const long double magnitude = std::exp(std::log(std::fabs(static_cast<long double>(coefficient))) + logMagnitude);
-    return std::copysign(static_cast<double>(magnitude), coefficient);
-}
-
 } // namespace
 
 double CobbDouglas::logOutput(const Eigen::VectorXd& inputs) const

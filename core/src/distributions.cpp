@@ -1,5 +1,6 @@
 #include "isoquant/distributions.hpp"
 
+#include <boost/math/distributions/chi_squared.hpp>
 #include <boost/math/distributions/fisher_f.hpp>
 #include <boost/math/distributions/students_t.hpp>
 
@@ -35,6 +36,15 @@ double fisherUpperPValue(double f, double numeratorDegreesOfFreedom, double deno
     if (f <= 0) return 1.0;
     const boost::math::fisher_f distribution(numeratorDegreesOfFreedom, denominatorDegreesOfFreedom);
     return boost::math::cdf(boost::math::complement(distribution, f));
+}
+
+double chiSquaredUpperPValue(double x, double degreesOfFreedom)
+{
+    if (std::isnan(x) || !(degreesOfFreedom > 0)) return notANumber;
+    if (std::isinf(x)) return 0.0;
+    if (x <= 0) return 1.0;
+    const boost::math::chi_squared_distribution<double> distribution(degreesOfFreedom);
+    return boost::math::cdf(boost::math::complement(distribution, x));
 }
 
 } // namespace isoquant

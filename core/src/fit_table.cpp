@@ -1,78 +1,16 @@
 #include "isoquant/fit_table.hpp"
 
+#include "isoquant/form_tables.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 #include "isoquant/table_labels.hpp"
+#include "table_writer.hpp"
 
 #include <cmath>
-#include <limits>
 
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
-
-Cell numberCell(double value)
-{
-    if (std::isfinite(value)) return value;
-    return std::string(notAvailableText);
-}
-
-// Under an exact fit (zero residuals) standard errors, tests, bounds and the likelihood are
-// undefined; they show "n/a" rather than the meaningless numbers rounding leaves.
-class TableWriter {
-public:
-    TableWriter(std::size_t rows, bool exactFit) : table_(rows, headerLabels.size()), exactFit_(exactFit) {}
-
-    void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
-    {
-        put(label, {fit.estimates(index), undefinedIfExact(fit.standardErrors(index)),
-                    undefinedIfExact(fit.tStatistics(index)), undefinedIfExact(fit.pValues(index)),
-                    undefinedIfExact(fit.lowerBounds(index)), undefinedIfExact(fit.upperBounds(index))});
-    }
-    void valueRow(const char* label, double value) { put(label, {value}); }
-    void textRow(const char* label, std::initializer_list<std::string> texts)
-    {
-        table_.at(row_, 0) = std::string(label);
-        std::size_t column = 1;
-        for (const auto& text : texts) {
-            if (!text.empty()) table_.at(row_, column) = text;
-            ++column;
-        }
-        ++row_;
-    }
-    void put(const std::string& label, std::initializer_list<Cell> values)
-    {
-        table_.at(row_, 0) = label;
-        std::size_t column = 1;
-        for (const auto& value : values) {
-            table_.at(row_, column) = isNumber(value) ? numberCell(std::get<double>(value)) : value;
-            ++column;
-        }
-        ++row_;
-    }
-    double undefinedIfExact(double value) const { return exactFit_ ? notANumber : value; }
-    void skipRow() { ++row_; }
-    CellTable finish() { return std::move(table_); }
-
-private:
-    CellTable table_;
-    bool exactFit_;
-    std::size_t row_ = 0;
-};
-
-std::string statusNote(const ProductionFit& fit)
-{
-    switch (fit.status) {
-    case FitStatus::ok: return "";
-    case FitStatus::illConditioned:
-        return "note: inputs nearly collinear (scaled condition number " +
-               formatNumber(std::round(fit.regression.conditionNumber / 1e9) * 1e9) + "); estimates are fragile";
-    case FitStatus::perfectFit: return "note: the fit is exact; standard errors and tests are undefined";
-    }
-    return "";
-}
 
 std::size_t findRow(const CellTable& table, const std::string& wanted)
 {
@@ -127,6 +65,8 @@ std::size_t fitTableRows(const ProductionFit& fit)
 
 CellTable fitTable(const ProductionFit& fit)
 {
+    if (fit.form == ProductionForm::ces) return cesFitTable(fit);
+    if (fit.form == ProductionForm::translog) return translogFitTable(fit);
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
     TableWriter writer(fitTableRows(fit), fit.status == FitStatus::perfectFit);

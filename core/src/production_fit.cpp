@@ -1,8 +1,10 @@
 #include "isoquant/production_fit.hpp"
 
+#include "isoquant/ces_fit.hpp"
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
+#include "isoquant/translog_fit.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -191,6 +193,17 @@ PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, cons
     return summary;
 }
 
+// The panel options (groups, effects, a trend, cluster errors) are built on the cobb-douglas fit so
+// far; the other forms refuse them rather than fit without them.
+void refusePanelOptions(const ProductionData& data, const ProductionFitOptions& options)
+{
+    const std::string form = " only with the cobb-douglas form, not with \"" + formWord(options.form) + "\"";
+    if (options.effects != EffectsKind::none) throw InputError("effects: group or period effects work" + form);
+    if (data.panel.hasPeriods()) throw InputError("trend: a trend works" + form);
+    if (options.covariance == CovarianceKind::cluster) throw InputError("errors: \"cluster\" works" + form);
+    if (data.panel.hasGroups()) throw InputError("groups: a group column works" + form);
+}
+
 } // namespace
 
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed)
@@ -208,8 +221,9 @@ std::string classifyReturnsToScale(double estimate, double pValue, double level,
 
 ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptions& options)
 {
-    if (options.form != ProductionForm::cobbDouglas)
-        throw InputError("form: \"" + formWord(options.form) + "\" is not available yet; use \"cobb-douglas\"");
+    if (options.form != ProductionForm::cobbDouglas) refusePanelOptions(data, options);
+    if (options.form == ProductionForm::ces) return fitCes(data, options);
+    if (options.form == ProductionForm::translog) return fitTranslog(data, options);
     const Eigen::Index n = data.output.size();
     const Eigen::Index k = data.inputs.cols();
     const Eigen::Index m = data.controls.cols();

@@ -1,6 +1,7 @@
 #include "isoquant/production_model.hpp"
 
 #include "isoquant/cobb_douglas.hpp"
+#include "form_models.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/production_fit.hpp"
@@ -58,9 +59,29 @@ struct ModelRows {
     std::optional<double> logScaleForPredictions;
     std::optional<double> smearingFactor;
     std::optional<ScaleTest> scaleTest;
-    std::vector<std::string> inputLabels;
-    std::vector<double> exponents;
+    std::vector<ParameterRow> parameters;
+    std::optional<std::vector<std::string>> inputsRow; // the labels of an "inputs" row
+    std::optional<std::string> convergence;
 };
+
+bool isFormStatisticLabel(const std::string& label)
+{
+    for (const char* statistic : formStatisticLabels)
+        if (equalsIgnoringCase(label, statistic)) return true;
+    return label.size() > std::string(elasticityPrefix).size() &&
+           equalsIgnoringCase(label.substr(0, std::string(elasticityPrefix).size()), elasticityPrefix);
+}
+
+std::vector<std::string> textsAfterLabel(const CellTable& range, std::size_t row)
+{
+    std::vector<std::string> texts;
+    for (std::size_t column = 1; column < range.columns() && isText(range.at(row, column)); ++column) {
+        const std::string& text = std::get<std::string>(range.at(row, column));
+        if (text.empty()) break;
+        texts.push_back(text);
+    }
+    return texts;
+}
 
 void readStatisticRow(const CellTable& range, std::size_t row, const std::string& label, ModelRows& rows)
 {
@@ -81,6 +102,8 @@ void readStatisticRow(const CellTable& range, std::size_t row, const std::string
         test.fStatistic = optionalNumber(range, row, 3);
         test.pValue = optionalNumber(range, row, 4);
         rows.scaleTest = test;
+    } else if (equalsIgnoringCase(label, convergenceLabel) && isText(range.at(row, 1))) {
+        rows.convergence = std::get<std::string>(range.at(row, 1));
     }
 }
 
@@ -117,6 +140,10 @@ ModelRows readRows(const CellTable& range)
             readFormRow(range, row, rows);
             continue;
         }
+        if (equalsIgnoringCase(label, inputsLabel) && isText(range.at(row, 1))) {
+            rows.inputsRow = textsAfterLabel(range, row);
+            continue;
+        }
         switch (section) {
         case Section::beforeScale:
             if (equalsIgnoringCase(label, logScaleLabel)) {
@@ -133,19 +160,35 @@ ModelRows readRows(const CellTable& range)
             section = Section::parameters;
             break;
         case Section::parameters:
-            if (!endsWithIgnoringCase(label, controlSuffix)) {
-                rows.inputLabels.push_back(label);
-                rows.exponents.push_back(requiredNumber(range, row, label));
-            }
+            if (!endsWithIgnoringCase(label, controlSuffix))
+                rows.parameters.push_back(ParameterRow{label, row, optionalNumber(range, row, 1)});
             break;
         case Section::statistics:
-            if (!isStatisticLabel(label))
+            if (!isStatisticLabel(label) && !isFormStatisticLabel(label))
                 throw InputError(rowPlace(row) + ": " + quoted(label) + " is not a row of a model table");
             readStatisticRow(range, row, label, rows);
             break;
         }
     }
     return rows;
+}
+
+// The Cobb-Douglas exponents, one per parameter row; its sum must match a returns-to-scale row.
+FormModel readCobbDouglasModel(double logScale, const ModelRows& rows)
+{
+    FormModel model;
+    std::vector<double> exponents;
+    for (const auto& parameter : rows.parameters) {
+        if (!std::isfinite(parameter.value))
+            throw InputError(rowPlace(parameter.row) + " (" + quoted(parameter.label) +
+                             ") has no number in its second column");
+        model.inputLabels.push_back(parameter.label);
+        exponents.push_back(parameter.value);
+    }
+    if (model.inputLabels.empty()) throw InputError("model: has no exponent rows, one per input after \"ln A\"");
+    model.technology = std::make_shared<CobbDouglas>(
+        logScale, Eigen::Map<const Eigen::VectorXd>(exponents.data(), static_cast<Eigen::Index>(exponents.size())));
+    return model;
 }
 
 } // namespace
@@ -156,25 +199,35 @@ ProductionModel readProductionModel(const CellTable& range)
         throw InputError("model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
     const ModelRows rows = readRows(range);
     if (!rows.form) throw InputError("model: has no \"form\" row (for example: form | cobb-douglas)");
-    if (*rows.form != ProductionForm::cobbDouglas)
-        throw InputError("model: form \"" + formWord(*rows.form) + "\" is not available yet");
     if (!rows.logScale) throw InputError("model: has no \"ln A\" (or \"A\") row");
-    if (rows.inputLabels.empty()) throw InputError("model: has no exponent rows, one per input after \"ln A\"");
+    if (rows.inputsRow && *rows.form != ProductionForm::ces)
+        throw InputError("model: an \"inputs\" row of labels belongs to a ces model only");
+    if (rows.convergence && !equalsIgnoringCase(*rows.convergence, convergedText))
+        throw InputError("model: the fit did not converge; its estimates are not an optimum, so they are not used");
+
+    // Fixed effects or a trend: the mean group effect at the latest period; controls: at their means.
+    const double logScale =
+        rows.logScaleForPredictions.value_or(rows.logScaleAtControlMeans.value_or(*rows.logScale));
+    FormModel read;
+    switch (*rows.form) {
+    case ProductionForm::cobbDouglas: read = readCobbDouglasModel(logScale, rows); break;
+    case ProductionForm::ces: read = readCesModel(logScale, rows.parameters, rows.inputsRow); break;
+    case ProductionForm::translog: read = readTranslogModel(logScale, rows.parameters); break;
+    }
 
     ProductionModel model;
     model.form = *rows.form;
-    model.inputLabels = rows.inputLabels;
-    const auto cobbDouglas = std::make_shared<CobbDouglas>(
-        rows.logScaleForPredictions.value_or(rows.logScaleAtControlMeans.value_or(*rows.logScale)),
-        Eigen::Map<const Eigen::VectorXd>(rows.exponents.data(), static_cast<Eigen::Index>(rows.exponents.size())));
-    model.technology = cobbDouglas;
+    model.inputLabels = read.inputLabels;
+    model.technology = read.technology;
     model.scaleTest = rows.scaleTest;
     model.smearingFactor = rows.smearingFactor;
-    if (model.scaleTest) {
-        const double sum = cobbDouglas->scaleElasticity();
-        if (std::fabs(model.scaleTest->estimate - sum) > 1e-9 * std::max(1.0, std::fabs(sum)))
-            throw InputError("model: returns to scale (" + formatNumber(model.scaleTest->estimate) +
-                             ") is not the sum of the exponents (" + formatNumber(sum) + ")");
+    // The table's ν must be the model's own (for translog it is taken at the sample mean, unknown here).
+    const auto scale = model.technology->constantScaleElasticity();
+    if (model.scaleTest && scale && model.form != ProductionForm::translog &&
+        std::fabs(model.scaleTest->estimate - *scale) > 1e-9 * std::max(1.0, std::fabs(*scale))) {
+        const std::string what = model.form == ProductionForm::ces ? "nu" : "the sum of the exponents";
+        throw InputError("model: returns to scale (" + formatNumber(model.scaleTest->estimate) + ") is not " + what +
+                         " (" + formatNumber(*scale) + ")");
     }
     return model;
 }

@@ -917,8 +917,8 @@ ERROR_CASES = [
     ("output of two columns", None, "PRODFIT({out2};{inp})", TABLE, error("output: must be one column; it has 2")),
     ("unknown form word", None, 'PRODFIT({out};{inp};"quadratic")', TABLE,
      error("form: 'quadratic' is not a form; use \"cobb-douglas\", \"ces\" or \"translog\"")),
-    ('"ces" not available yet', None, 'PRODFIT({out};{inp};"ces")', TABLE,
-     error('form: "ces" is not available yet; use "cobb-douglas"')),
+    ('"ces" with constant returns', None, 'PRODFIT({out};{inp};"ces";TRUE())', TABLE,
+     error("constant returns: cannot be imposed on the ces form; leave the argument empty")),
     ('errors "hc" (abbreviated)', None, 'PRODFIT({out};{inp};;;"hc")', TABLE,
      error("errors: 'hc' is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"")),
     ("level 1.5", None, "PRODFIT({out};{inp};;;;1.5)", TABLE, error("level: 1.5 " + LEVEL_HINT)),
@@ -938,8 +938,8 @@ ERROR_CASES = [
      error("input: give the input's number (1 for the first) or its label")),
     ("a model range without a form row", None, "PRODOUTPUT({noform};{bundle})", CELL,
      error('model: has no "form" row (for example: form | cobb-douglas)')),
-    ("a typed model of form ces", None, "PRODOUTPUT({cesmodel};{bundle})", CELL,
-     error('model: form "ces" is not available yet')),
+    ("a typed model of form ces with exponent rows", None, "PRODOUTPUT({cesmodel};{bundle})", CELL,
+     error("model: row 3 ('L') is not a parameter of the ces form; its rows are delta, rho (or sigma) and nu")),
     ("a typed model with A below 0", None, "PRODSCALE({negmodel})", CELL, error("model: row 2 (A) must be positive")),
     ("inputs with the wrong number of columns", None, "PRODOUTPUT({table};{bundles3})", COLUMN,
      error("inputs: has 3 columns but the model has 2 inputs")),
@@ -1022,12 +1022,15 @@ REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 2, "PRODOUTPUT": 2, "PRODMARGINA
 # Productivity and growth (their own checks: test_growth_in_calc.py).
 ARGUMENT_COUNTS.update({"PRODTFP": 3, "PRODGROWTH": 4, "PRODINDEX": 4})
 REQUIRED_ARGUMENTS.update({"PRODTFP": 3, "PRODGROWTH": 3, "PRODINDEX": 2})
+# The regularity test and the comparison of forms (test_forms_in_calc.py computes them).
+ARGUMENT_COUNTS.update({"PRODREGULAR": 2, "PRODCOMPARE": 3})
+REQUIRED_ARGUMENTS.update({"PRODREGULAR": 2, "PRODCOMPARE": 2})
 FUNCTION_CATEGORY_NAMES = ["DATABASE", "DATETIME", "FINANCIAL", "INFORMATION", "LOGICAL", "MATHEMATICAL",
                            "MATRIX", "STATISTICAL", "TEXT", "SPREADSHEET", "ADDIN"]
 
 
 class FunctionWizardTest(CalcTestCase):
-    """com.sun.star.sheet.FunctionDescriptions shows the seven functions as function_table.cxx has them."""
+    """com.sun.star.sheet.FunctionDescriptions shows every function as function_table.cxx has them."""
 
     @classmethod
     def setUpClass(cls):

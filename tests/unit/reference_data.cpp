@@ -68,4 +68,9 @@ FitArguments statePanelArguments()
     return argumentsFrom("us_states_produc_1970_1986.csv", "gsp", {"pcap", "pc", "emp"}, {"unemp"});
 }
 
+FitArguments riceFarmArguments(const std::vector<std::string>& inputs)
+{
+    return argumentsFrom("rice_farms_panel.csv", "goutput", inputs, {});
+}
+
 } // namespace isoquant::testing

@@ -21,4 +21,8 @@ FitArguments statePanelWithPanelColumns();
 // totlabor, size; groups = id (numbers, under the header "id"); options left empty.
 FitArguments riceFarmsArguments();
 
+// The rice-farm panel (Feng and Horrace 2012, as in plm 2.6 RiceFarms), 1026 rows: output goutput
+// and the named input columns (e.g. size, totlabor). Options left empty (defaults).
+FitArguments riceFarmArguments(const std::vector<std::string>& inputs);
+
 } // namespace isoquant::testing

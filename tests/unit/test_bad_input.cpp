@@ -197,10 +197,13 @@ BOOST_AUTO_TEST_CASE(option_words_and_numbers)
     auto arguments = goodArguments();
     arguments.form = text("cobb");
     BOOST_TEST(fitMessage(arguments) == "form: 'cobb' is not a form; use \"cobb-douglas\", \"ces\" or \"translog\"");
+    // Form words ignore case; an option the form cannot take is named.
     arguments.form = text("CES");
-    BOOST_TEST(fitMessage(arguments) == "form: \"ces\" is not available yet; use \"cobb-douglas\"");
-    arguments.form = text("translog");
-    BOOST_TEST(fitMessage(arguments) == "form: \"translog\" is not available yet; use \"cobb-douglas\"");
+    arguments.constantReturns = 1.0;
+    BOOST_TEST(fitMessage(arguments) == "constant returns: cannot be imposed on the ces form; leave the argument empty");
+    arguments.form = text("Translog");
+    BOOST_TEST(fitMessage(arguments) ==
+               "constant returns: cannot be imposed on the translog form; leave the argument empty");
 
     arguments = goodArguments();
     arguments.errors = text("hc");
@@ -265,7 +268,7 @@ BOOST_AUTO_TEST_CASE(malformed_models)
                    {{text("form"), text("douglas")}, {text("A"), 1.01}, {text("labour"), 0.75}})) ==
                "model: row 1 (form) must hold \"cobb-douglas\", \"ces\" or \"translog\"");
     BOOST_TEST(outputMessage(typedRange({{text("form"), text("ces")}, {text("A"), 1.01}, {text("labour"), 0.75}})) ==
-               "model: form \"ces\" is not available yet");
+               "model: row 3 ('labour') is not a parameter of the ces form; its rows are delta, rho (or sigma) and nu");
     BOOST_TEST(outputMessage(typedRange({{text("form"), text("cobb-douglas")}, {text("labour"), 0.75}})) ==
                "model: row 2: 'labour' comes before the \"ln A\" (or \"A\") row; give ln A first, then one exponent "
                "row per input");
@@ -310,6 +313,27 @@ BOOST_AUTO_TEST_CASE(results_too_large_to_represent)
         {{text("form"), text("cobb-douglas")}, {text("ln A"), 0.0}, {text("x"), 1e308}, {text("y"), 1e308}});
     BOOST_TEST(messageOf([&] { isoquant::scaleColumn(hugeExponents, CellTable()); }) ==
                "model: its returns to scale are too large to represent");
+}
+
+BOOST_AUTO_TEST_SUITE_END()
+
+// The panel options are built on the cobb-douglas fit; the other forms refuse them, never ignore them.
+BOOST_AUTO_TEST_SUITE(panel_options_with_other_forms)
+
+BOOST_AUTO_TEST_CASE(are_refused_by_name)
+{
+    auto arguments = isoquant::testing::statePanelWithPanelColumns();
+    arguments.form = std::string("translog");
+    arguments.effects = std::string("fixed");
+    BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
+               "effects: group or period effects work only with the cobb-douglas form, not with \"translog\"");
+    arguments.effects = Cell{};
+    BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
+               "trend: a trend works only with the cobb-douglas form, not with \"translog\"");
+    arguments.trend = CellTable{};
+    arguments.form = std::string("ces");
+    BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
+               "groups: a group column works only with the cobb-douglas form, not with \"ces\"");
 }
 
 BOOST_AUTO_TEST_SUITE_END()

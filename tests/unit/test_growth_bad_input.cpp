@@ -146,7 +146,17 @@ BOOST_AUTO_TEST_CASE(models_as_weights)
     BOOST_TEST(growthMessage(output(), inputs(), oneInputModel) == "weights: the model has 1 input but inputs has 2 columns");
     // The model reader's messages name the argument "weights" here.
     BOOST_TEST(growthMessage(output(), inputs(), with(model(), 0, 1, text("ces"))) ==
-               "weights: form \"ces\" is not available yet");
+               "weights: row 3 ('labour') is not a parameter of the ces form; its rows are delta, rho (or sigma) and nu");
+    // A ces model's elasticities vary with the inputs: "fixed" has none to use.
+    const CellTable cesModel = typedRange({{text("form"), text("ces"), Cell{}},
+                                           {text("ln A"), 0.1, Cell{}},
+                                           {text("delta"), 0.4, Cell{}},
+                                           {text("rho"), 0.5, Cell{}},
+                                           {text("nu"), 0.9, Cell{}},
+                                           {text("inputs"), text("labour"), text("capital")}});
+    BOOST_TEST(growthMessage(output(), inputs(), cesModel, text("fixed")) ==
+               "method: \"fixed\" needs elasticities that are the same in every period (a cobb-douglas model); this "
+               "model is ces, so use \"tornqvist\"");
     BOOST_TEST(growthMessage(output(), inputs(), with(model(), 3, 1, -0.6)) ==
                "weights: from period 1 (row 2) to period 2 (row 3) the elasticities sum to 0; the decomposition divides "
                "by this returns to scale, so it must be positive");

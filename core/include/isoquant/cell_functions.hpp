@@ -48,4 +48,10 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs);
 // The returns-to-scale verdict at confidence level `level` (empty: 0.95).
 std::string returnsVerdictCell(const CellTable& model, const Cell& level);
 
+// PRODREGULAR: per row of inputs, "regular" or the condition that fails, in words (regularity.hpp).
+CellTable regularityColumn(const CellTable& model, const CellTable& inputs);
+
+// PRODCOMPARE: the three forms on the same rows (form_comparison.hpp); `level` as for PRODFIT.
+CellTable compareFormsTable(const CellTable& output, const CellTable& inputs, const Cell& level);
+
 } // namespace isoquant

@@ -13,4 +13,7 @@ double studentCriticalValue(double level, double degreesOfFreedom);
 // Upper-tail p-value P(F > f) of Fisher's F(d1, d2). 0 for f = ∞, NaN for NaN.
 double fisherUpperPValue(double f, double numeratorDegreesOfFreedom, double denominatorDegreesOfFreedom);
 
+// Upper-tail p-value P(X > x) of χ²(degrees of freedom). 0 for x = ∞, 1 for x ≤ 0, NaN for NaN.
+double chiSquaredUpperPValue(double x, double degreesOfFreedom);
+
 } // namespace isoquant

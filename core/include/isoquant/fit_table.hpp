@@ -1,6 +1,7 @@
 // The table PRODFIT returns, and lookups in it (PRODSTAT).
 //
-// Layout (7 columns; k inputs, m controls):
+// Cobb-Douglas layout (7 columns; k inputs, m controls; the ces and translog layouts are in
+// form_tables.hpp):
 //   term | estimate | std. error | t | p-value | low | high       header
 //   ln A | …                                                      the scale parameter (under fixed
 //                                                                  or two-way effects the mean group

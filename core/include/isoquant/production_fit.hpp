@@ -3,6 +3,8 @@
 // Cobb-Douglas: Y = A·Πᵢ xᵢ^bᵢ·exp(Σⱼ cⱼ·zⱼ + u), fitted by least squares on logs:
 //   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ + u,
 // with controls zⱼ (an unemployment rate, a 0/1 dummy) entered as they are, not logged.
+// The ces and translog forms are fitted by ces_fit.hpp and translog_fit.hpp; fitProduction
+// dispatches on options.form and they follow the same conventions.
 //
 // Conventions (the same for every covariance kind):
 // - p counts the regression parameters actually estimated; inference uses t(n−p) and F(q, n−p).
@@ -23,10 +25,14 @@
 #include <Eigen/Dense>
 
 #include <optional>
+#include <memory>
 #include <string>
 #include <vector>
 
 namespace isoquant {
+
+struct CesDetails;      // ces_fit.hpp
+struct TranslogDetails; // translog_fit.hpp
 
 struct ProductionData {
     Eigen::VectorXd output;          // n values, positive
@@ -107,6 +113,9 @@ struct ProductionFit {
     // median prediction, into the mean prediction.
     double smearingFactor = 1;
     PanelSummary panel;
+    // What only the "ces" or the "translog" form has; empty for the other forms.
+    std::shared_ptr<const CesDetails> ces;
+    std::shared_ptr<const TranslogDetails> translog;
 };
 
 // The returns-to-scale verdict: "constant (imposed)" when imposed; else "constant" when the test

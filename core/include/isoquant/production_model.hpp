@@ -7,6 +7,17 @@
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
 // "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
 // is one (fixed effects or a trend: the mean group effect, at the latest period).
+//
+// The form row decides what the parameter rows mean:
+// - cobb-douglas: one exponent row per input, labelled by the input.
+// - ces: rows "delta", "rho" (or "sigma", ρ = 1/σ − 1; both may be given and must agree) and
+//   "nu", in any order; an optional row "inputs | <first label> | <second label>" names the two
+//   inputs (otherwise "input 1", "input 2"). A PRODFIT table whose "convergence" row does not say
+//   "converged" is refused.
+// - translog: one row per input (αᵢ), labelled by the input, and one row "<label i>*<label j>" for
+//   every pair i ≤ j (βᵢⱼ, the ½ convention of translog.hpp; either order of the two labels).
+// Rows a form does not know ("elasticity <label>", "CD test", …) are statistic rows after the
+// empty row of a PRODFIT table.
 #pragma once
 
 #include "isoquant/cells.hpp"

@@ -48,4 +48,19 @@ inline constexpr std::array<const char*, 8> optionStatisticLabels{
     smearingLabel,        groupsLabel,           effectsLabel,   withinRSquaredLabel,
     periodsLabel,         technicalChangeLabel,  predictionScaleLabel, droppedRowsLabel};
 
+// Rows of the ces and translog tables (form_tables.hpp).
+inline constexpr const char* weightLabel = "delta";
+inline constexpr const char* curvatureLabel = "rho";
+inline constexpr const char* returnsParameterLabel = "nu";
+inline constexpr const char* substitutionLabel = "sigma";
+inline constexpr const char* convergenceLabel = "convergence";
+inline constexpr const char* inputsLabel = "inputs";
+inline constexpr const char* elasticityPrefix = "elasticity ";
+inline constexpr const char* cobbDouglasTestLabel = "CD test";
+inline constexpr const char* convergedText = "converged";
+inline constexpr const char* boundaryText = "boundary";
+
+// Statistic rows only the ces and translog tables have (besides "elasticity <label>").
+inline constexpr std::array<const char*, 3> formStatisticLabels{convergenceLabel, inputsLabel, cobbDouglasTestLabel};
+
 } // namespace isoquant

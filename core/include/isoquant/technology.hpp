@@ -32,6 +32,16 @@ public:
 
     Eigen::VectorXd gradient(const Eigen::VectorXd& inputs) const;
     Eigen::MatrixXd hessian(const Eigen::VectorXd& inputs) const;
+
+protected:
+    // c·exp(L) formed in logs (extended precision), so that it overflows or underflows only when
+    // the result does.
+    static double scaledExponential(double coefficient, long double logMagnitude);
+    // ∂²Y/∂xᵢ∂xⱼ = Y/(xᵢ·xⱼ)·(εᵢ·εⱼ + ∂εⱼ/∂ln xᵢ − [i = j]·εⱼ), from ln Y, the elasticities εᵢ, εⱼ
+    // and the derivative of εⱼ by ln xᵢ.
+    static double secondPartialFromElasticities(long double logOutput, const Eigen::VectorXd& inputs,
+                                                Eigen::Index first, Eigen::Index second, double firstElasticity,
+                                                double secondElasticity, double elasticityDerivative);
 };
 
 } // namespace isoquant

@@ -1,0 +1,65 @@
+// Fitting the CES form of two inputs (ces.hpp) by nonlinear least squares on logs:
+//   ln Y = ln A + ν·(ln x₂ + H(ln x₁ − ln x₂; δ, ρ)) + u,   p = 4 parameters (ln A, δ, ρ, ν).
+//
+// The solver (nonlinear_least_squares.hpp) works on (ln A, t, s, ν) with δ = 1/(1 + e^(−t)) and
+// ρ = −1 + eˢ, so that every iterate is a CES with δ ∈ (0, 1) and ρ > −1. It starts from the
+// Kmenta approximation (least squares of ln Y on ln x₁, ln x₂ and (ln x₁ − ln x₂)², whose
+// coefficients give νδ, ν(1−δ) and −ρνδ(1−δ)/2) and from the best points of a grid over ρ on
+// which δ is searched (Brent) with ln A and ν concentrated out by simple regression; the lowest
+// sum of squares among the converged runs is kept.
+//
+// Inference is classical at the optimum: V = s²·(JᵀJ)⁻¹ with J the Jacobian in (ln A, δ, ρ, ν) and
+// s² = RSS/(n−4), t(n−4) for every test; σ = 1/(1+ρ) with se(σ) = se(ρ)/(1+ρ)² (delta method).
+// The returns to scale are ν, tested against 1 by F = ((ν−1)/se(ν))² on F(1, n−4).
+// R² = 1 − RSS/TSS of ln Y; log-likelihood, AIC and BIC as for every form, with p = 4.
+#pragma once
+
+#include "isoquant/nonlinear_least_squares.hpp"
+#include "isoquant/production_fit.hpp"
+
+#include <optional>
+#include <string>
+
+namespace isoquant {
+
+// Where an optimum on the edge of the parameter space lies.
+enum class CesBoundary {
+    none,
+    firstInputOnly,     // δ = 1: output depends on the first input alone; ρ is not identified
+    secondInputOnly,    // δ = 0: output depends on the second input alone; ρ is not identified
+    perfectSubstitutes, // ρ = −1 (σ infinite): Y = A·(δ·x₁ + (1−δ)·x₂)^ν
+    fixedProportions    // ρ → ∞ (σ → 0): the Leontief limit; ρ is shown as reached, not as an estimate
+};
+
+struct CesDetails {
+    double substitutionElasticity = 0; // σ = 1/(1+ρ)
+    double substitutionStandardError = 0;
+    double substitutionLowerBound = 0;
+    double substitutionUpperBound = 0;
+    NonlinearStatus convergence = NonlinearStatus::converged;
+    std::string stopReason;
+    Eigen::Index evaluations = 0; // residual evaluations of the run kept
+    CesBoundary boundary = CesBoundary::none;
+};
+
+struct CesFitOptions {
+    NonlinearLeastSquaresOptions solver;
+    // An optimum with δ or 1 − δ below this, or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on
+    // the boundary: the estimate shown is the boundary value (the value reached for ρ → ∞) and no
+    // standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
+    // from the boundary (common practice, no source).
+    double boundaryDistance = 1e-6;
+    // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
+    std::optional<Eigen::Vector4d> start;
+};
+
+// Throws InputError for anything but two inputs, for controls, constant returns or robust errors
+// (not available for this form), for too few rows (n ≥ 5) and when the ratio x₁/x₂ takes fewer
+// than three values (δ and ρ cannot then be told apart).
+ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& options,
+                     const CesFitOptions& cesOptions = {});
+
+// The start values the fit would try, best first: (ln A, δ, ρ, ν).
+std::vector<Eigen::Vector4d> cesStartValues(const ProductionData& data);
+
+} // namespace isoquant

@@ -1,0 +1,90 @@
+// Nonlinear least squares: minimise Σ rᵢ(θ)² by Levenberg–Marquardt (Eigen's unsupported
+// NonLinearOptimization module, a port of MINPACK's lmder), with classical inference at the optimum.
+//
+// This is the engine under the CES fit and the entry point the NIST StRD nonlinear checks call.
+// "Did not converge" is a status of the result, not an error: the caller decides what to show.
+#pragma once
+
+#include <Eigen/Dense>
+
+#include <string>
+
+namespace isoquant {
+
+// A model as the solver sees it: residuals r(θ) = y − f(θ) and their Jacobian ∂r/∂θ.
+class NonlinearModel {
+public:
+    virtual ~NonlinearModel() = default;
+    virtual Eigen::Index observationCount() const = 0;
+    virtual Eigen::Index parameterCount() const = 0;
+    // A residual that is not finite marks θ as outside the model's domain: the solver rejects a
+    // step that lands there as it rejects one that increases the sum of squares.
+    virtual Eigen::VectorXd residuals(const Eigen::VectorXd& parameters) const = 0;
+    // n × p
+    virtual Eigen::MatrixXd jacobian(const Eigen::VectorXd& parameters) const = 0;
+};
+
+struct NonlinearLeastSquaresOptions {
+    // MINPACK ftol: stop when both the actual and the predicted relative reduction of the sum of
+    // squares in one step are at most this. 0 (the default) turns the test off: a flat sum of
+    // squares (a parameter with a large standard error) then does not end the iterations before
+    // the parameters themselves settle (xtol) or no reduction is possible at machine precision.
+    double relativeReductionTolerance = 0;
+    // MINPACK xtol: stop when the step bound Δ is at most this times ‖D·θ‖, D the diagonal scaling
+    // by the Jacobian's column norms (a relative change of θ of about this size).
+    double relativeStepTolerance = 1e-15;
+    // MINPACK gtol: stop when the cosine of the angle between r and every column of the Jacobian is
+    // at most this (0: this test is off).
+    double gradientTolerance = 0;
+    // Residual evaluations (Jacobian evaluations not counted) after which the solver stops, with
+    // the status evaluationLimit.
+    Eigen::Index maximumEvaluations = 4000;
+    // Bounds are θ ∓ t_{(1+level)/2}(n−p)·se.
+    double confidenceLevel = 0.95;
+    // The Jacobian counts as rank deficient (standard errors undefined, shown as NaN) when its
+    // smallest singular value, after scaling every column to unit norm, is at most this fraction
+    // of the largest.
+    double rankTolerance = 1e-12;
+};
+
+enum class NonlinearStatus {
+    converged,       // a MINPACK convergence test held (ftol, xtol or gtol; or no further
+                     // reduction is possible at machine precision)
+    evaluationLimit, // maximumEvaluations reached before any convergence test held
+    stopped          // the Jacobian was not finite at an accepted point
+};
+
+// Classical inference from the Jacobian J at θ: V = s²·(JᵀJ)⁻¹, s² = RSS/(n−p); t = θ/se on
+// t(n−p). Standard errors are NaN when J is rank deficient (see rankTolerance).
+struct NonlinearInference {
+    Eigen::VectorXd standardErrors;
+    Eigen::VectorXd tStatistics;
+    Eigen::VectorXd pValues;
+    Eigen::VectorXd lowerBounds;
+    Eigen::VectorXd upperBounds;
+    Eigen::MatrixXd covariance;
+    double residualSumOfSquares = 0;
+    double residualDegreesOfFreedom = 0;
+    double residualStandardDeviation = 0; // √(RSS/(n−p))
+};
+
+NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+                                      const Eigen::VectorXd& parameters, double confidenceLevel,
+                                      double rankTolerance);
+
+struct NonlinearLeastSquaresResult {
+    Eigen::VectorXd parameters;
+    Eigen::VectorXd residuals;
+    NonlinearInference inference;
+    Eigen::Index observations = 0;
+    Eigen::Index evaluations = 0;         // residual evaluations
+    Eigen::Index jacobianEvaluations = 0;
+    NonlinearStatus status = NonlinearStatus::converged;
+    std::string stopReason; // which MINPACK test ended the iterations, in words
+};
+
+// Requires n > p ≥ 1 and finite residuals at `start` (std::invalid_argument otherwise).
+NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                     const NonlinearLeastSquaresOptions& options = {});
+
+} // namespace isoquant

@@ -1,0 +1,337 @@
+#include "isoquant/ces_fit.hpp"
+
+#include "isoquant/ces.hpp"
+#include "isoquant/distributions.hpp"
+#include "isoquant/input_error.hpp"
+#include "isoquant/least_squares.hpp"
+#include "isoquant/text.hpp"
+#include "fit_inference.hpp"
+
+#include <boost/math/constants/constants.hpp>
+#include <boost/math/tools/minima.hpp>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+namespace isoquant {
+
+namespace {
+
+constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
+constexpr Eigen::Index cesParameters = 4;
+
+// Curvatures ρ at which δ is searched for start values: σ from 10 down to about 0.06.
+constexpr double gridCurvatures[] = {-0.9, -0.75, -0.5, -0.25, 0.0, 0.25, 0.5, 1.0, 2.0, 4.0, 8.0, 16.0};
+// Logits of δ tried before Brent's search refines the best of them (δ from about 0.0025 to 0.9975).
+constexpr double gridWeightLogits[] = {-6, -4.5, -3, -2, -1, 0, 1, 2, 3, 4.5, 6};
+// Bounds a Kmenta start is clamped to: δ in [0.01, 0.99], ρ in [−0.9, 20].
+constexpr double kmentaWeightLimit = 0.01;
+constexpr double kmentaCurvatureLimit = 20.0;
+// Starts taken from the grid besides the Kmenta one.
+constexpr std::size_t gridStartsTried = 2;
+// Bits of precision Brent's search aims at on the logit of δ (enough for a start value).
+constexpr int brentBits = 20;
+
+double logistic(double z) { return z >= 0 ? 1.0 / (1.0 + std::exp(-z)) : std::exp(z) / (1.0 + std::exp(z)); }
+
+// ln Y, ln x₂ and d = ln x₁ − ln x₂ of every row.
+struct CesLogs {
+    Eigen::VectorXd logOutput;
+    Eigen::VectorXd logSecond;
+    Eigen::VectorXd logRatio;
+};
+
+// b + H(d) for every row.
+Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature)
+{
+    Eigen::VectorXd column(logs.logOutput.size());
+    for (Eigen::Index i = 0; i < column.size(); ++i)
+        column(i) = logs.logSecond(i) + cesComposite(logs.logRatio(i), weight, curvature).value;
+    return column;
+}
+
+Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
+{
+    return logs.logOutput - (raw(0) + raw(3) * compositeColumn(logs, raw(1), raw(2)).array()).matrix();
+}
+
+// ∂r/∂(ln A, δ, ρ, ν)
+Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw)
+{
+    const Eigen::Index n = logs.logOutput.size();
+    Eigen::MatrixXd jacobian(n, cesParameters);
+    for (Eigen::Index i = 0; i < n; ++i) {
+        const CesComposite composite = cesComposite(logs.logRatio(i), raw(1), raw(2));
+        jacobian(i, 0) = -1.0;
+        jacobian(i, 1) = -raw(3) * composite.byWeight;
+        jacobian(i, 2) = -raw(3) * composite.byCurvature;
+        jacobian(i, 3) = -(logs.logSecond(i) + composite.value);
+    }
+    return jacobian;
+}
+
+// (ln A, t, s, ν) ↔ (ln A, δ, ρ, ν) with δ = logistic(t), ρ = −1 + eˢ.
+Eigen::Vector4d toRaw(const Eigen::VectorXd& solver)
+{
+    return {solver(0), logistic(solver(1)), std::expm1(solver(2)), solver(3)};
+}
+
+Eigen::Vector4d toSolver(const Eigen::Vector4d& raw)
+{
+    return {raw(0), std::log(raw(1) / (1 - raw(1))), std::log1p(raw(2)), raw(3)};
+}
+
+class CesModel : public NonlinearModel {
+public:
+    explicit CesModel(const CesLogs& logs) : logs_(logs) {}
+    Eigen::Index observationCount() const override { return logs_.logOutput.size(); }
+    Eigen::Index parameterCount() const override { return cesParameters; }
+    Eigen::VectorXd residuals(const Eigen::VectorXd& solver) const override { return rawResiduals(logs_, toRaw(solver)); }
+    Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override
+    {
+        const Eigen::Vector4d raw = toRaw(solver);
+        Eigen::MatrixXd jacobian = rawJacobian(logs_, raw);
+        for (Eigen::Index i = 0; i < jacobian.rows(); ++i) // ∂/∂t, finite even where δ rounds to 0 or 1
+            jacobian(i, 1) = -raw(3) * cesComposite(logs_.logRatio(i), raw(1), raw(2)).byWeightLogit;
+        jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
+        return jacobian;
+    }
+
+private:
+    const CesLogs& logs_;
+};
+
+struct ConcentratedFit {
+    double sumOfSquares = std::numeric_limits<double>::infinity();
+    Eigen::Vector4d raw = Eigen::Vector4d::Zero();
+};
+
+// For fixed δ and ρ the model is linear in ln A and ν: a simple regression of ln Y on b + H.
+ConcentratedFit concentrated(const CesLogs& logs, double weight, double curvature)
+{
+    const Eigen::VectorXd composite = compositeColumn(logs, weight, curvature);
+    const Eigen::ArrayXd centredX = composite.array() - composite.mean();
+    const Eigen::ArrayXd centredY = logs.logOutput.array() - logs.logOutput.mean();
+    const double sxx = centredX.square().sum();
+    ConcentratedFit fit;
+    if (!(sxx > 0) || !std::isfinite(sxx)) return fit;
+    const double slope = (centredX * centredY).sum() / sxx;
+    fit.sumOfSquares = (centredY - slope * centredX).square().sum();
+    fit.raw = {logs.logOutput.mean() - slope * composite.mean(), weight, curvature, slope};
+    return fit;
+}
+
+// Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its neighbours.
+ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
+{
+    const auto sumOfSquares = [&](double logit) { return concentrated(logs, logistic(logit), curvature).sumOfSquares; };
+    std::size_t best = 0;
+    double bestValue = std::numeric_limits<double>::infinity();
+    constexpr std::size_t count = std::size(gridWeightLogits);
+    for (std::size_t i = 0; i < count; ++i) {
+        const double value = sumOfSquares(gridWeightLogits[i]);
+        if (value < bestValue) bestValue = value, best = i;
+    }
+    const double low = gridWeightLogits[best == 0 ? 0 : best - 1];
+    const double high = gridWeightLogits[best + 1 == count ? best : best + 1];
+    const auto [logit, value] = boost::math::tools::brent_find_minima(sumOfSquares, low, high, brentBits);
+    return concentrated(logs, logistic(value <= bestValue ? logit : gridWeightLogits[best]), curvature);
+}
+
+// ln Y = β₀ + β₁ ln x₁ + β₂ ln x₂ + β₃ d², the second-order expansion of ln Y about ρ = 0:
+// ν = β₁ + β₂, δ = β₁/ν, ρ = −2β₃/(ν·δ(1−δ)); empty when ν ≤ 0.
+std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
+{
+    const Eigen::Index n = logs.logOutput.size();
+    Eigen::MatrixXd design(n, 4);
+    design.col(0).setOnes();
+    design.col(1) = logs.logRatio + logs.logSecond;
+    design.col(2) = logs.logSecond;
+    design.col(3) = logs.logRatio.array().square().matrix();
+    LeastSquaresResult kmenta;
+    try {
+        kmenta = fitLeastSquares(design, logs.logOutput, 0);
+    } catch (const CollinearColumns&) {
+        return std::nullopt;
+    }
+    const Eigen::VectorXd& b = kmenta.coefficients;
+    const double nu = b(1) + b(2);
+    if (!(nu > 0)) return std::nullopt;
+    // Kept inside the domain, where a start must lie, when the approximation strays outside it.
+    const double weight = std::clamp(b(1) / nu, kmentaWeightLimit, 1 - kmentaWeightLimit);
+    const double curvature = -2 * b(3) / (nu * weight * (1 - weight));
+    if (!std::isfinite(curvature)) return std::nullopt;
+    return Eigen::Vector4d(b(0), weight, std::clamp(curvature, gridCurvatures[0], kmentaCurvatureLimit), nu);
+}
+
+CesLogs logsOf(const ProductionData& data)
+{
+    CesLogs logs;
+    logs.logOutput = data.output.array().log().matrix();
+    logs.logSecond = data.inputs.col(1).array().log().matrix();
+    logs.logRatio = (data.inputs.col(0).array().log() - logs.logSecond.array()).matrix();
+    return logs;
+}
+
+void requireCesData(const ProductionData& data, const ProductionFitOptions& options)
+{
+    const Eigen::Index n = data.output.size();
+    if (data.inputs.cols() != 2)
+        throw InputError("inputs: the ces form takes exactly two inputs; this range has " +
+                         std::to_string(data.inputs.cols()) + (data.inputs.cols() == 1 ? " column" : " columns"));
+    if (data.controls.cols() > 0) throw InputError("controls: the ces form takes no controls; leave the argument empty");
+    if (options.constantReturns)
+        throw InputError("constant returns: cannot be imposed on the ces form; leave the argument empty");
+    if (options.covariance != CovarianceKind::classical)
+        throw InputError("errors: the ces form reports classical standard errors only; leave the argument empty");
+    if (data.output.maxCoeff() == data.output.minCoeff())
+        throw InputError("output: every row holds the same value; there is no variation to explain");
+    if (n < cesParameters + 1)
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) +
+                         " rows of data for 4 parameters to estimate; need at least 5");
+    std::vector<double> ratios(static_cast<std::size_t>(n));
+    for (Eigen::Index i = 0; i < n; ++i) ratios[static_cast<std::size_t>(i)] = data.inputs(i, 0) / data.inputs(i, 1);
+    std::sort(ratios.begin(), ratios.end());
+    if (std::unique(ratios.begin(), ratios.end()) - ratios.begin() < 3)
+        throw InputError("inputs: the ratio of " + isoquant::quoted(data.inputLabels[0]) + " to " +
+                         isoquant::quoted(data.inputLabels[1]) +
+                         " takes fewer than three values; the ces form cannot tell its weight from its curvature");
+}
+
+CesBoundary boundaryOf(const Eigen::VectorXd& solver, double distance)
+{
+    if (logistic(solver(1)) < distance) return CesBoundary::secondInputOnly;
+    if (logistic(-solver(1)) < distance) return CesBoundary::firstInputOnly;
+    if (std::exp(solver(2)) < distance) return CesBoundary::perfectSubstitutes; // 1 + ρ
+    if (std::exp(-solver(2)) < distance) return CesBoundary::fixedProportions;  // σ
+    return CesBoundary::none;
+}
+
+} // namespace
+
+std::vector<Eigen::Vector4d> cesStartValues(const ProductionData& data)
+{
+    const CesLogs logs = logsOf(data);
+    std::vector<Eigen::Vector4d> starts;
+    if (const auto kmenta = kmentaStart(logs)) starts.push_back(*kmenta);
+    std::vector<ConcentratedFit> grid;
+    for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(logs, curvature));
+    std::sort(grid.begin(), grid.end(),
+              [](const ConcentratedFit& a, const ConcentratedFit& b) { return a.sumOfSquares < b.sumOfSquares; });
+    for (std::size_t i = 0; i < std::min(gridStartsTried, grid.size()); ++i)
+        if (std::isfinite(grid[i].sumOfSquares)) starts.push_back(grid[i].raw);
+    return starts;
+}
+
+ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& options, const CesFitOptions& cesOptions)
+{
+    requireCesData(data, options);
+    const CesLogs logs = logsOf(data);
+    const CesModel model(logs);
+    const Eigen::Index n = data.output.size();
+
+    std::vector<Eigen::Vector4d> starts;
+    if (cesOptions.start) {
+        const Eigen::Vector4d& start = *cesOptions.start;
+        if (!(start(1) > 0 && start(1) < 1 && start(2) > -1) || !start.allFinite())
+            throw InputError("start: needs 0 < delta < 1 and rho > -1");
+        starts.push_back(start);
+    } else {
+        starts = cesStartValues(data);
+    }
+
+    // Keep the lowest sum of squares, preferring converged runs.
+    std::optional<NonlinearLeastSquaresResult> kept;
+    for (const Eigen::Vector4d& start : starts) {
+        NonlinearLeastSquaresOptions solverOptions = cesOptions.solver;
+        solverOptions.confidenceLevel = options.confidenceLevel;
+        NonlinearLeastSquaresResult run = fitNonlinearLeastSquares(model, toSolver(start), solverOptions);
+        const auto rank = [](const NonlinearLeastSquaresResult& r) {
+            return std::make_pair(r.status != NonlinearStatus::converged, r.inference.residualSumOfSquares);
+        };
+        if (!kept || rank(run) < rank(*kept)) kept = std::move(run);
+    }
+    if (!kept) throw InputError("inputs: no start value for the ces fit could be found from these data");
+
+    auto details = std::make_shared<CesDetails>();
+    details->convergence = kept->status;
+    details->stopReason = kept->stopReason;
+    details->evaluations = kept->evaluations;
+    details->boundary = boundaryOf(kept->parameters, cesOptions.boundaryDistance);
+
+    Eigen::Vector4d raw = toRaw(kept->parameters);
+    switch (details->boundary) {
+    case CesBoundary::firstInputOnly: raw(1) = 1; break;
+    case CesBoundary::secondInputOnly: raw(1) = 0; break;
+    case CesBoundary::perfectSubstitutes: raw(2) = -1; break;
+    case CesBoundary::fixedProportions: // ρ keeps the value reached
+    case CesBoundary::none: break;
+    }
+    const Eigen::VectorXd residuals = rawResiduals(logs, raw);
+    NonlinearInference inference = nonlinearInference(rawJacobian(logs, raw), residuals, raw, options.confidenceLevel,
+                                                      cesOptions.solver.rankTolerance);
+    // At a boundary or away from an optimum the classical standard errors mean nothing.
+    const bool inferable = details->boundary == CesBoundary::none && details->convergence == NonlinearStatus::converged;
+    if (!inferable) {
+        for (Eigen::VectorXd* column : {&inference.standardErrors, &inference.tStatistics, &inference.pValues,
+                                        &inference.lowerBounds, &inference.upperBounds})
+            column->setConstant(notANumber);
+        inference.covariance.setConstant(notANumber);
+    }
+
+    ProductionFit fit;
+    fit.form = ProductionForm::ces;
+    fit.inputLabels = data.inputLabels;
+    setParameterInference(fit, raw, inference);
+    fit.logScaleAtControlMeans = raw(0);
+
+    LeastSquaresResult& summary = fit.regression;
+    const double df = inference.residualDegreesOfFreedom;
+    const double rss = inference.residualSumOfSquares;
+    summary.coefficients = raw;
+    summary.standardErrors = inference.standardErrors;
+    summary.covariance = inference.covariance;
+    summary.residuals = residuals;
+    summary.observations = n;
+    summary.parameters = cesParameters;
+    summary.residualDegreesOfFreedom = df;
+    summary.residualSumOfSquares = rss;
+    summary.totalSumOfSquares = (logs.logOutput.array() - logs.logOutput.mean()).square().sum();
+    summary.rSquared = 1.0 - rss / summary.totalSumOfSquares;
+    summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * static_cast<double>(n - 1) / df;
+    summary.residualStandardDeviation = inference.residualStandardDeviation;
+    summary.fStatistic = notANumber;
+    summary.fPValue = notANumber;
+    const double count = static_cast<double>(n);
+    summary.logLikelihood = -count / 2 * (std::log(boost::math::constants::two_pi<double>()) + std::log(rss / count) + 1);
+    summary.aic = -2 * summary.logLikelihood + 2 * cesParameters;
+    summary.bic = -2 * summary.logLikelihood + cesParameters * std::log(count);
+    summary.interceptColumn = 0;
+    summary.confidenceLevel = options.confidenceLevel;
+    const bool exact = std::sqrt(rss) <= LeastSquaresOptions{}.perfectFitTolerance * logs.logOutput.norm();
+    summary.status = exact ? FitStatus::perfectFit : FitStatus::ok;
+    fit.status = summary.status;
+    fit.rSquared = summary.rSquared;
+    fit.adjustedRSquared = summary.adjustedRSquared;
+
+    // σ = 1/(1+ρ), se(σ) = se(ρ)/(1+ρ)²
+    const double onePlusCurvature = 1 + raw(2);
+    details->substitutionElasticity = 1 / onePlusCurvature;
+    details->substitutionStandardError = inference.standardErrors(2) / (onePlusCurvature * onePlusCurvature);
+    const double critical = studentCriticalValue(options.confidenceLevel, df);
+    details->substitutionLowerBound = details->substitutionElasticity - critical * details->substitutionStandardError;
+    details->substitutionUpperBound = details->substitutionElasticity + critical * details->substitutionStandardError;
+    fit.ces = details;
+
+    ReturnsToScale& returns = fit.returns;
+    returns.estimate = raw(3);
+    returns.standardError = inference.standardErrors(3);
+    const double distance = (raw(3) - 1) / returns.standardError;
+    returns.fStatistic = exact ? notANumber : distance * distance;
+    returns.pValue = fisherUpperPValue(returns.fStatistic, 1, df);
+    returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, options.confidenceLevel, false);
+    return fit;
+}
+
+} // namespace isoquant

@@ -1,0 +1,106 @@
+// Writes a PRODFIT table row by row; shared by the tables of every form (internal to the core).
+#pragma once
+
+#include "isoquant/cells.hpp"
+#include "isoquant/production_fit.hpp"
+#include "isoquant/table_labels.hpp"
+#include "isoquant/text.hpp"
+
+#include <cmath>
+#include <limits>
+#include <string>
+
+namespace isoquant {
+
+inline constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
+
+inline Cell numberCell(double value)
+{
+    if (std::isfinite(value)) return value;
+    return std::string(notAvailableText);
+}
+
+// Under an exact fit (zero residuals) standard errors, tests, bounds and the likelihood are
+// undefined; they show "n/a" rather than the meaningless numbers rounding leaves.
+class TableWriter {
+public:
+    TableWriter(std::size_t rows, bool exactFit) : table_(rows, headerLabels.size()), exactFit_(exactFit) {}
+
+    void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
+    {
+        put(label, {fit.estimates(index), undefinedIfExact(fit.standardErrors(index)),
+                    undefinedIfExact(fit.tStatistics(index)), undefinedIfExact(fit.pValues(index)),
+                    undefinedIfExact(fit.lowerBounds(index)), undefinedIfExact(fit.upperBounds(index))});
+    }
+    void valueRow(const char* label, double value) { put(label, {value}); }
+    void textRow(const std::string& label, std::initializer_list<std::string> texts)
+    {
+        table_.at(row_, 0) = label;
+        std::size_t column = 1;
+        for (const auto& text : texts) {
+            if (!text.empty()) table_.at(row_, column) = text;
+            ++column;
+        }
+        ++row_;
+    }
+    void put(const std::string& label, std::initializer_list<Cell> values)
+    {
+        table_.at(row_, 0) = label;
+        std::size_t column = 1;
+        for (const auto& value : values) {
+            table_.at(row_, column) = isNumber(value) ? numberCell(std::get<double>(value)) : value;
+            ++column;
+        }
+        ++row_;
+    }
+    double undefinedIfExact(double value) const { return exactFit_ ? notANumber : value; }
+    // observations, R2, adjusted R2, residual SD, [F (slopes = 0),] log-likelihood, AIC, BIC
+    void fitStatisticRows(const ProductionFit& fit, bool withOverallTest)
+    {
+        const LeastSquaresResult& summary = fit.regression;
+        valueRow(observationsLabel, static_cast<double>(summary.observations));
+        valueRow(rSquaredLabel, fit.rSquared);
+        valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
+        valueRow(residualSdLabel, summary.residualStandardDeviation);
+        if (withOverallTest)
+            put(overallTestLabel,
+                {Cell{}, Cell{}, undefinedIfExact(summary.fStatistic), undefinedIfExact(summary.fPValue)});
+        valueRow(logLikelihoodLabel, undefinedIfExact(summary.logLikelihood));
+        valueRow(aicLabel, undefinedIfExact(summary.aic));
+        valueRow(bicLabel, undefinedIfExact(summary.bic));
+    }
+    // returns to scale (ν, se, F of ν = 1, p) and the verdict
+    void returnsRows(const ReturnsToScale& returns)
+    {
+        put(returnsLabel, {returns.estimate, undefinedIfExact(returns.standardError),
+                           undefinedIfExact(returns.fStatistic), undefinedIfExact(returns.pValue)});
+        textRow(verdictLabel, {returns.verdict});
+    }
+    void headerRow()
+    {
+        textRow(headerLabels[0],
+                {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4], headerLabels[5], headerLabels[6]});
+    }
+    void skipRow() { ++row_; }
+    CellTable finish() { return std::move(table_); }
+
+private:
+    CellTable table_;
+    bool exactFit_;
+    std::size_t row_ = 0;
+};
+
+// The note of the form row for a least-squares fit's status; empty when all is well.
+inline std::string statusNote(const ProductionFit& fit)
+{
+    switch (fit.status) {
+    case FitStatus::ok: return "";
+    case FitStatus::illConditioned:
+        return "note: inputs nearly collinear (scaled condition number " +
+               formatNumber(std::round(fit.regression.conditionNumber / 1e9) * 1e9) + "); estimates are fragile";
+    case FitStatus::perfectFit: return "note: the fit is exact; standard errors and tests are undefined";
+    }
+    return "";
+}
+
+} // namespace isoquant

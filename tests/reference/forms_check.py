@@ -1,0 +1,187 @@
+#!/usr/bin/python3
+"""Recomputes the CES and translog fits of the reference data sets with scipy and statsmodels.
+
+Usage: /usr/bin/python3 forms_check.py DATA_DIR OUTPUT_CSV
+
+CES, ln Y = ln A - (nu/rho) ln(delta x1^-rho + (1 - delta) x2^-rho), by scipy.optimize.least_squares
+(trust-region reflective, an algorithm other than the core's Levenberg-Marquardt) with the
+analytic Jacobian of that textbook formula, started from the Kmenta approximation; standard
+errors s^2 (J'J)^-1 at the optimum, sigma = 1/(1 + rho) by the delta method.
+Translog, ln Y = a0 + sum a_i ln x_i + 1/2 sum sum b_ij ln x_i ln x_j, by statsmodels OLS on the
+regressors ln x_i, (ln x_i)^2 / 2 and ln x_i ln x_j (i < j); elasticities and returns to scale at
+the sample means of the logs by t_test, nu = 1 and all b_ij = 0 by f_test. PRODCOMPARE's test of
+Cobb-Douglas within CES: LR = n ln(RSS_cd / RSS_ces) with the statsmodels Cobb-Douglas fit, p-value
+from scipy.stats.chi2(1).
+
+Writes one figure per line: dataset,form,quantity,index,value. Run it with Debian's /usr/bin/python3
+(python3-scipy and python3-statsmodels import only there). Exits with 77 (the CTest skip code)
+when they cannot be imported, leaving no OUTPUT_CSV behind.
+"""
+
+import csv
+import os
+import sys
+
+SKIP = 77
+LEVEL = 0.95
+
+# dataset: (file, output, CES inputs, translog inputs)
+DATASETS = {
+    "cobb_douglas_1928": ("cobb_douglas_1928.csv", "P", ["L", "C"], ["L", "C"]),
+    "rice_farms": ("rice_farms_panel.csv", "goutput", ["size", "totlabor"], ["size", "totlabor", "seed", "urea"]),
+}
+
+
+def read_columns(path, names):
+    with open(path, newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    return {name: [float(row[name]) for row in rows] for name in names}
+
+
+def likelihood_figures(np, put, form, rss, n, p, log_output):
+    tss = float(np.sum((log_output - log_output.mean()) ** 2))
+    llf = -n / 2.0 * (np.log(2 * np.pi) + np.log(rss / n) + 1.0)
+    put(form, "rss", rss)
+    put(form, "rsquared", 1.0 - rss / tss)
+    put(form, "rsquared_adj", 1.0 - rss / tss * (n - 1) / (n - p))
+    put(form, "llf", llf)
+    put(form, "aic", -2 * llf + 2 * p)
+    put(form, "bic", -2 * llf + p * np.log(n))
+
+
+def comparison_figures(np, sm, chi2, put, y, x1, x2, ces_rss):
+    """Cobb-Douglas nested in CES at rho = 0: LR = n ln(RSS_cd / RSS_ces) on chi-squared(1)."""
+    ly = np.log(y)
+    cobb_douglas = sm.OLS(ly, np.column_stack([np.ones_like(ly), np.log(x1), np.log(x2)])).fit()
+    ratio = len(ly) * np.log(cobb_douglas.ssr / ces_rss)
+    put("compare", "cd_llf", cobb_douglas.llf)
+    put("compare", "lr", ratio)
+    put("compare", "lr_pvalue", chi2.sf(ratio, 1))
+
+
+def ces_figures(np, optimize, put, y, x1, x2):
+    ly, l1, l2 = np.log(y), np.log(x1), np.log(x2)
+
+    def predicted(theta):
+        ln_a, delta, rho, nu = theta
+        s = delta * x1 ** -rho + (1 - delta) * x2 ** -rho
+        return ln_a - nu / rho * np.log(s)
+
+    def jacobian(theta):  # of the residuals ly - predicted
+        ln_a, delta, rho, nu = theta
+        p1, p2 = x1 ** -rho, x2 ** -rho
+        s = delta * p1 + (1 - delta) * p2
+        d_delta = -nu / rho * (p1 - p2) / s
+        d_rho = nu / rho ** 2 * np.log(s) + nu / rho * (delta * p1 * l1 + (1 - delta) * p2 * l2) / s
+        d_nu = -np.log(s) / rho
+        return -np.column_stack([np.ones_like(ly), d_delta, d_rho, d_nu])
+
+    # Kmenta: ln Y = b0 + b1 ln x1 + b2 ln x2 + b3 (ln x1 - ln x2)^2
+    design = np.column_stack([np.ones_like(ly), l1, l2, (l1 - l2) ** 2])
+    b = np.linalg.lstsq(design, ly, rcond=None)[0]
+    nu = b[1] + b[2]
+    delta = b[1] / nu
+    start = [b[0], delta, -2 * b[3] / (nu * delta * (1 - delta)), nu]
+    fit = optimize.least_squares(lambda t: ly - predicted(t), start, jac=jacobian, method="trf", x_scale="jac",
+                                 ftol=1e-15, xtol=1e-15, gtol=1e-15, max_nfev=20000)
+    theta = fit.x
+    residuals = ly - predicted(theta)
+    n, p = len(ly), 4
+    rss = float(residuals @ residuals)
+    j = jacobian(theta)
+    covariance = rss / (n - p) * np.linalg.inv(j.T @ j)
+    se = np.sqrt(np.diag(covariance))
+    put("ces", "params", theta)
+    put("ces", "bse", se)
+    put("ces", "tvalues", theta / se)
+    put("ces", "sigma", 1 / (1 + theta[2]))
+    put("ces", "sigma_se", se[2] / (1 + theta[2]) ** 2)
+    put("ces", "nu_fvalue", ((theta[3] - 1) / se[3]) ** 2)
+    likelihood_figures(np, put, "ces", rss, n, p, ly)
+    return rss
+
+
+def translog_figures(np, sm, put, y, inputs):
+    ly = np.log(y)
+    logs = [np.log(x) for x in inputs]
+    k = len(logs)
+    pairs = [(i, j) for i in range(k) for j in range(i, k)]
+    regressors = logs + [(0.5 if i == j else 1.0) * logs[i] * logs[j] for i, j in pairs]
+    design = np.column_stack([np.ones_like(ly)] + regressors)
+    fit = sm.OLS(ly, design).fit()
+    p = design.shape[1]
+    put("translog", "params", fit.params)
+    put("translog", "bse", fit.bse)
+    put("translog", "pvalues", fit.pvalues)
+    put("translog", "fvalue", fit.fvalue)
+    likelihood_figures(np, put, "translog", float(fit.ssr), len(ly), p, ly)
+    put("translog", "statsmodels_llf", fit.llf)
+    means = [float(np.mean(l)) for l in logs]
+    gradients = np.zeros((k, p))
+    for i in range(k):
+        gradients[i, 1 + i] = 1.0
+    for c, (i, j) in enumerate(pairs):
+        gradients[i, 1 + k + c] += means[j]
+        if i != j:
+            gradients[j, 1 + k + c] += means[i]
+    elasticities = fit.t_test((gradients, np.zeros(k)))
+    put("translog", "elasticity", elasticities.effect)
+    put("translog", "elasticity_se", elasticities.sd)
+    put("translog", "elasticity_pvalue", elasticities.pvalue)
+    total = gradients.sum(axis=0, keepdims=True)
+    nu = fit.t_test((total, np.zeros(1)))
+    put("translog", "nu", float(np.squeeze(nu.effect)))
+    put("translog", "nu_se", float(np.squeeze(nu.sd)))
+    wald = fit.f_test((total, np.ones(1)))
+    put("translog", "nu_fvalue", float(np.squeeze(wald.fvalue)))
+    put("translog", "nu_pvalue", float(np.squeeze(wald.pvalue)))
+    interactions = np.zeros((len(pairs), p))
+    interactions[:, 1 + k:] = np.eye(len(pairs))
+    cd_test = fit.f_test((interactions, np.zeros(len(pairs))))
+    put("translog", "cd_fvalue", float(np.squeeze(cd_test.fvalue)))
+    put("translog", "cd_pvalue", float(np.squeeze(cd_test.pvalue)))
+
+
+def main():
+    if len(sys.argv) != 3:
+        print(__doc__, file=sys.stderr)
+        return 2
+    data_dir, output_path = sys.argv[1], sys.argv[2]
+    if os.path.exists(output_path):
+        os.remove(output_path)  # never leave stale figures for the C++ check to read
+    try:
+        import numpy as np
+        import scipy
+        import statsmodels
+        import statsmodels.api as sm
+        from scipy import optimize, stats
+    except ImportError as error:
+        print(f"scipy or statsmodels is not importable ({error}); skipping", file=sys.stderr)
+        return SKIP
+
+    rows = []
+    for dataset, (file, output, ces_inputs, translog_inputs) in DATASETS.items():
+        columns = read_columns(os.path.join(data_dir, file), [output] + sorted(set(ces_inputs + translog_inputs)))
+        y = np.array(columns[output])
+
+        def put(form, quantity, values):
+            for index, value in enumerate(np.atleast_1d(values)):
+                rows.append((dataset, form, quantity, index, repr(float(value))))
+
+        x1, x2 = np.array(columns[ces_inputs[0]]), np.array(columns[ces_inputs[1]])
+        ces_rss = ces_figures(np, optimize, put, y, x1, x2)
+        comparison_figures(np, sm, stats.chi2, put, y, x1, x2, ces_rss)
+        translog_figures(np, sm, put, y, [np.array(columns[name]) for name in translog_inputs])
+
+    os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
+    with open(output_path, "w", newline="") as handle:
+        writer = csv.writer(handle)
+        writer.writerow(["dataset", "form", "quantity", "index", "value"])
+        writer.writerows(rows)
+    print(f"scipy {scipy.__version__}, statsmodels {statsmodels.__version__}: {len(rows)} figures written to "
+          f"{output_path}")
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
