@@ -285,6 +285,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     fit.inputLabels = data.inputLabels;
     setParameterInference(fit, raw, inference);
     fit.logScaleAtControlMeans = raw(0);
+    fit.smearingFactor = residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
 
     LeastSquaresResult& summary = fit.regression;
     const double df = inference.residualDegreesOfFreedom;

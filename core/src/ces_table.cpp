@@ -60,7 +60,7 @@ bool onBoundary(const ProductionFit& fit, Eigen::Index parameter)
 
 } // namespace
 
-std::size_t cesFitTableRows() { return 19; }
+std::size_t cesFitTableRows() { return 20; }
 
 CellTable cesFitTable(const ProductionFit& fit)
 {
@@ -88,6 +88,7 @@ CellTable cesFitTable(const ProductionFit& fit)
     writer.textRow(convergenceLabel, {convergenceWord(ces.convergence), std::to_string(ces.evaluations) +
                                                                           " evaluations; " + ces.stopReason});
     writer.textRow(inputsLabel, {fit.inputLabels[0], fit.inputLabels[1]});
+    writer.valueRow(smearingLabel, fit.smearingFactor);
     return writer.finish();
 }
 

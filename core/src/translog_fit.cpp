@@ -117,6 +117,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     fit.rSquared = regression.rSquared;
     fit.adjustedRSquared = regression.adjustedRSquared;
     fit.logScaleAtControlMeans = fit.estimates(0);
+    fit.smearingFactor = regression.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
 
     auto details = std::make_shared<TranslogDetails>();

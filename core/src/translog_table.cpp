@@ -7,7 +7,7 @@ namespace isoquant {
 
 std::size_t translogFitTableRows(std::size_t inputs, std::size_t controls)
 {
-    return 2 * inputs + inputs * (inputs + 1) / 2 + controls + 15 + (controls > 0 ? 1 : 0);
+    return 2 * inputs + inputs * (inputs + 1) / 2 + controls + 16 + (controls > 0 ? 1 : 0);
 }
 
 CellTable translogFitTable(const ProductionFit& fit)
@@ -40,6 +40,7 @@ CellTable translogFitTable(const ProductionFit& fit)
                                       writer.undefinedIfExact(translog.cobbDouglasTest.pValue)});
     writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});
     if (m > 0) writer.valueRow(controlMeansLabel, fit.logScaleAtControlMeans);
+    writer.valueRow(smearingLabel, fit.smearingFactor);
     return writer.finish();
 }
 

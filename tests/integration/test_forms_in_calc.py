@@ -134,19 +134,19 @@ class CesTest(FormsTestCase):
         cls.data = read_columns("cobb_douglas_1928.csv", ["P", "L", "C"])
         cls.sheet = new_sheet("Ces")
         write_columns(cls.sheet, "A1", cls.data, ["P", "L", "C"])
-        # The ces table is always 19 x 7 (core/include/isoquant/form_tables.hpp).
-        set_array_formula(cls.sheet, "F1:L19", '=PRODFIT(A1:A25;B1:C25;"ces")')
-        for column, formula in zip("NOPQR", ['PRODOUTPUT($F$1:$L$19;B{r}:C{r})',
-                                             'PRODMARGINAL($F$1:$L$19;B{r}:C{r};"L")',
-                                             'PRODMARGINAL($F$1:$L$19;B{r}:C{r};2)',
-                                             'PRODELASTICITY($F$1:$L$19;B{r}:C{r};"C")',
-                                             'PRODSCALE($F$1:$L$19;B{r}:C{r})']):
+        # The ces table is always 20 x 7 (core/include/isoquant/form_tables.hpp).
+        set_array_formula(cls.sheet, "F1:L20", '=PRODFIT(A1:A25;B1:C25;"ces")')
+        for column, formula in zip("NOPQR", ['PRODOUTPUT($F$1:$L$20;B{r}:C{r})',
+                                             'PRODMARGINAL($F$1:$L$20;B{r}:C{r};"L")',
+                                             'PRODMARGINAL($F$1:$L$20;B{r}:C{r};2)',
+                                             'PRODELASTICITY($F$1:$L$20;B{r}:C{r};"C")',
+                                             'PRODSCALE($F$1:$L$20;B{r}:C{r})']):
             for r in range(2, 26):
                 set_formula(cls.sheet, "%s%d" % (column, r), "=" + formula.format(r=r))
         set_formula(cls.sheet, "T1", '=PRODSTAT(A1:A25;B1:C25;"sigma";"std. error";"ces")')
         set_formula(cls.sheet, "T2", '=PRODSTAT(A1:A25;B1:C25;"convergence";;"ces")')
-        set_formula(cls.sheet, "T3", "=PRODRETURNS($F$1:$L$19)")
-        set_array_formula(cls.sheet, "U2:U25", "=PRODREGULAR($F$1:$L$19;B2:C25)")
+        set_formula(cls.sheet, "T3", "=PRODRETURNS($F$1:$L$20)")
+        set_array_formula(cls.sheet, "U2:U25", "=PRODREGULAR($F$1:$L$20;B2:C25)")
         # A typed ces model: sigma instead of rho, and an inputs row naming the inputs.
         set_values(cls.sheet, "W1", [["form", "ces", None], ["A", 1.5, None], ["delta", 0.3, None],
                                      ["sigma", 0.5, None], ["nu", 0.9, None], ["inputs", "hours", "machines"]])
@@ -155,14 +155,14 @@ class CesTest(FormsTestCase):
         set_formula(cls.sheet, "W10", "=PRODSCALE(W1:Y6)")
         set_formula(cls.sheet, "W11", "=PRODREGULAR(W1:Y6;B2:C2)")
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "F1:L19")
+        cls.table = get_range(cls.sheet, "F1:L20")
 
     def test_layout(self):
         labels = [row[0] for row in self.table]
         # Blank cells of a formula result read as "" (office.py).
         self.assertEqual(labels, ["term", "ln A", "delta", "rho", "nu", "sigma", "", "observations", "R2",
                                   "adjusted R2", "residual SD", "log-likelihood", "AIC", "BIC",
-                                  "returns to scale", "verdict", "form", "convergence", "inputs"])
+                                  "returns to scale", "verdict", "form", "convergence", "inputs", "smearing factor"])
         self.assertEqual(self.table[0], HEADER)
         for row in self.table[1:6]:
             for value in row[1:3]:
@@ -237,17 +237,17 @@ class TranslogTest(FormsTestCase):
         cls.data = read_columns("rice_farms_panel.csv", ["goutput"] + cls.LABELS)
         cls.sheet = new_sheet("Translog")
         write_columns(cls.sheet, "A1", cls.data, ["goutput"] + cls.LABELS)
-        # 2k + k(k+1)/2 + 15 = 8 + 10 + 15 = 33 rows for four inputs.
-        set_array_formula(cls.sheet, "H1:N33", '=PRODFIT(A1:A1027;B1:E1027;"translog")')
-        set_array_formula(cls.sheet, "P2:P11", '=PRODELASTICITY($H$1:$N$33;B2:E11;"seed")')
-        set_array_formula(cls.sheet, "Q2:Q11", "=PRODMARGINAL($H$1:$N$33;B2:E11;1)")
-        set_array_formula(cls.sheet, "R2:R11", "=PRODSCALE($H$1:$N$33;B2:E11)")
-        set_array_formula(cls.sheet, "S2:S11", "=PRODOUTPUT($H$1:$N$33;B2:E11)")
-        set_array_formula(cls.sheet, "T2:T11", "=PRODREGULAR($H$1:$N$33;B2:E11)")
+        # 2k + k(k+1)/2 + 16 = 8 + 10 + 16 = 34 rows for four inputs.
+        set_array_formula(cls.sheet, "H1:N34", '=PRODFIT(A1:A1027;B1:E1027;"translog")')
+        set_array_formula(cls.sheet, "P2:P11", '=PRODELASTICITY($H$1:$N$34;B2:E11;"seed")')
+        set_array_formula(cls.sheet, "Q2:Q11", "=PRODMARGINAL($H$1:$N$34;B2:E11;1)")
+        set_array_formula(cls.sheet, "R2:R11", "=PRODSCALE($H$1:$N$34;B2:E11)")
+        set_array_formula(cls.sheet, "S2:S11", "=PRODOUTPUT($H$1:$N$34;B2:E11)")
+        set_array_formula(cls.sheet, "T2:T11", "=PRODREGULAR($H$1:$N$34;B2:E11)")
         set_formula(cls.sheet, "V1", '=PRODSTAT(A1:A1027;B1:E1027;"CD test";"p-value";"translog")')
-        set_formula(cls.sheet, "V2", "=PRODRETURNS($H$1:$N$33)")
+        set_formula(cls.sheet, "V2", "=PRODRETURNS($H$1:$N$34)")
         recalc(DOC)
-        cls.table = get_range(cls.sheet, "H1:N33")
+        cls.table = get_range(cls.sheet, "H1:N34")
 
     def test_layout(self):
         pairs = ["%s*%s" % (a, b) for i, a in enumerate(self.LABELS) for b in self.LABELS[i:]]
@@ -255,7 +255,7 @@ class TranslogTest(FormsTestCase):
                                                              "residual SD", "F (slopes = 0)", "log-likelihood",
                                                              "AIC", "BIC"]
                     + ["elasticity " + label for label in self.LABELS]
-                    + ["returns to scale", "verdict", "CD test", "form"])
+                    + ["returns to scale", "verdict", "CD test", "form", "smearing factor"])
         self.assertEqual([row[0] for row in self.table], expected)
         self.assertEqual(row_of(self.table, "form")[1], "translog")
         self.assertEqual(row_of(self.table, "observations")[1], 1026.0)
@@ -313,7 +313,7 @@ class CompareTest(FormsTestCase):
         cls.sheet = new_sheet("Compare")
         write_columns(cls.sheet, "A1", cls.data, ["P", "L", "C"])
         set_array_formula(cls.sheet, "F1:L8", "=PRODCOMPARE(A1:A25;B1:C25)")
-        set_array_formula(cls.sheet, "F11:L32", '=PRODFIT(A1:A25;B1:C25;"translog")')
+        set_array_formula(cls.sheet, "F11:L33", '=PRODFIT(A1:A25;B1:C25;"translog")')
         set_formula(cls.sheet, "N1", "=PRODSTAT(A1:A25;B1:C25;\"log-likelihood\")")
         set_formula(cls.sheet, "N2", "=PRODSTAT(A1:A25;B1:C25;\"log-likelihood\";;\"ces\")")
         recalc(DOC)
@@ -331,7 +331,7 @@ class CompareTest(FormsTestCase):
         self.assertEqual(self.table[1 + aic.index(min(aic))][5], 1.0)
 
     def test_nested_tests(self):
-        translog = get_range(self.sheet, "F11:L32")
+        translog = get_range(self.sheet, "F11:L33")
         self.assertEqual(self.table[6][1], row_of(translog, "CD test")[3])
         self.assertEqual(self.table[6][5], "F")
         # LR = 2 (LL_ces - LL_cd), from the two PRODSTAT cells.

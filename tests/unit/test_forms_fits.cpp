@@ -320,15 +320,20 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     BOOST_TEST((cesTable.at(18, 1) == Cell(std::string("size"))));
     BOOST_TEST((isoquant::lookUpFitTable(cesTable, std::string("returns to scale"), Cell{}) == Cell(ces.estimates(3))));
     BOOST_TEST((isoquant::lookUpFitTable(cesTable, std::string("convergence"), Cell{}) == Cell(std::string("converged"))));
+    // Duan's smearing factor is the mean of exp(residual of ln Y), here and for translog below.
+    BOOST_TEST((cesTable.at(19, 0) == Cell(std::string("smearing factor"))));
+    BOOST_TEST((cesTable.at(19, 1) == Cell(ces.regression.residuals.array().exp().mean())));
 
     arguments.inputs = isoquant::testing::riceFarmArguments({"size", "totlabor", "seed"}).inputs;
     arguments.form = std::string("translog");
     const auto translog = isoquant::fitFromArguments(arguments);
     const isoquant::CellTable translogTable = isoquant::fitTable(translog);
     BOOST_TEST(translogTable.rows() == isoquant::translogFitTableRows(3, 0));
-    BOOST_TEST(translogTable.rows() == 27u); // 2·3 + 6 + 15
+    BOOST_TEST(translogTable.rows() == 28u); // 2·3 + 6 + 16
     BOOST_TEST((translogTable.at(5, 0) == Cell(std::string("size*size"))));
     BOOST_TEST((translogTable.at(9, 0) == Cell(std::string("totlabor*seed"))));
+    BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("smearing factor"), Cell{}) ==
+                Cell(translog.regression.residuals.array().exp().mean())));
     BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("elasticity seed"), std::string("std. error")) ==
                 Cell(translog.translog->elasticityStandardErrors(2))));
     BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("CD test"), Cell{}) ==

@@ -2,7 +2,7 @@
 // 7 columns, the same header and column meanings as the Cobb-Douglas table; "n/a" for a number
 // that is not finite or not defined.
 //
-// ces (always 19 rows):
+// ces (always 20 rows):
 //   term | estimate | std. error | t | p-value | low | high     header
 //   ln A, delta (weight of the first input), rho, nu             parameter rows, t of parameter = 0
 //   sigma                                                        σ = 1/(1+ρ): estimate, se (delta
@@ -14,6 +14,7 @@
 //                                                                notes a boundary or no convergence
 //   convergence | converged, not converged or stopped | the solver's evaluations and stop reason
 //   inputs | first input's label | second input's label
+//   smearing factor                                              Duan's: mean of exp(residual of ln Y)
 // At a boundary optimum the parameter on the boundary shows the boundary value (δ = 0 or 1,
 // ρ = −1) with "boundary" under "std. error", and no row carries standard errors; without
 // convergence the estimates are the solver's last values and carry none either.
@@ -24,8 +25,8 @@
 //   observations, R2, adjusted R2, residual SD, F (slopes = 0), log-likelihood, AIC, BIC;
 //   elasticity <label> (one per input: εᵢ at the sample mean of the logs, se, t of εᵢ = 0, p, low,
 //   high); returns to scale (ν at the mean, se, F of ν = 1, p); verdict; CD test (F of all βᵢⱼ = 0
-//   under "t", its p-value); form; ln A at control means (only when m > 0)
-// so 2k + q + m + 15 rows, plus one with controls. Two inputs, no controls: 22 rows.
+//   under "t", its p-value); form; ln A at control means (only when m > 0); smearing factor
+// so 2k + q + m + 16 rows, plus one with controls. Two inputs, no controls: 23 rows.
 #pragma once
 
 #include "isoquant/cells.hpp"
