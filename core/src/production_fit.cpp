@@ -230,11 +230,6 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     if (k < 1) throw InputError("inputs: needs at least one column");
     requirePanelColumns(data, options);
 
-    const Eigen::VectorXd logOutput = data.output.array().log().matrix();
-    const double totalSumOfSquares = (logOutput.array() - logOutput.mean()).matrix().squaredNorm();
-    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
-    if (data.output.maxCoeff() == data.output.minCoeff())
-        throw InputError("output: every row holds the same value; there is no variation to explain");
 
     const LogLinearDesign built = buildDesign(data, options.constantReturns);
     const Eigen::Index baseColumns = built.design.cols();
@@ -243,10 +238,15 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
         const std::string groupNote = options.effects == EffectsKind::none
                                           ? ""
                                           : " (" + std::to_string(data.panel.groupLabels.size()) + " group effects included)";
-        throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
-                         std::to_string(p) + " parameters to estimate" + groupNote + "; need at least " +
-                         std::to_string(p + 1));
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) + (n == 1 ? " row" : " rows") +
+                         " of data for " + std::to_string(p) + " parameters to estimate" + groupNote +
+                         "; need at least " + std::to_string(p + 1));
     }
+    const Eigen::VectorXd logOutput = data.output.array().log().matrix();
+    const double totalSumOfSquares = (logOutput.array() - logOutput.mean()).matrix().squaredNorm();
+    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
+    if (data.output.maxCoeff() == data.output.minCoeff())
+        throw InputError("output: every row holds the same value; there is no variation to explain");
 
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;

@@ -147,6 +147,13 @@ BOOST_AUTO_TEST_CASE(too_few_rows)
     arguments.inputs = firstRows(arguments.inputs, 4);
     BOOST_TEST(fitMessage(arguments) ==
                "too few rows: output and inputs have 3 rows of data for 3 parameters to estimate; need at least 4");
+
+    // One row: too few rows is the message, before "output does not vary" (one value never varies).
+    arguments = goodArguments();
+    arguments.output = firstRows(arguments.output, 2);
+    arguments.inputs = firstRows(arguments.inputs, 2);
+    BOOST_TEST(fitMessage(arguments) ==
+               "too few rows: output and inputs have 1 row of data for 3 parameters to estimate; need at least 4");
 }
 
 BOOST_AUTO_TEST_CASE(collinear_inputs_are_named)

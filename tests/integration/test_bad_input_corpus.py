@@ -1,0 +1,118 @@
+"""The bad-input corpus (tests/bad_input/corpus.tsv) through a real headless Calc.
+
+Every case is a formula over the fixture sheet built below and the exact text the cell must show.
+For each case the test asserts that text (never a number where a message belongs) and that the
+office still answers afterwards. The same situations are checked through the core, message for
+message, in tests/unit/test_bad_input.cpp, test_growth_bad_input.cpp and the forms and panel tests.
+
+Fixture data: the Cobb & Douglas (1928) indexes (tests/data/cobb_douglas_1928.csv) in A1:C25, and
+copies of them each spoiled in one known place (the corpus names the place it expects).
+Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
+"""
+import csv
+import os
+import sys
+import unittest
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
+EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
+CORPUS = os.path.join(ROOT, "tests", "bad_input", "corpus.tsv")
+sys.path.insert(0, HERE)
+
+from office import HeadlessOffice, get_cell, recalc, set_formula, set_values  # noqa: E402
+
+
+def read_corpus():
+    """(name, formula, expected) of every case; lines starting with # are comments."""
+    cases = []
+    with open(CORPUS, newline="", encoding="utf-8") as handle:
+        for number, line in enumerate(handle, start=1):
+            line = line.rstrip("\n")
+            if not line or line.startswith("#"):
+                continue
+            fields = line.split("\t")
+            if len(fields) != 3:
+                raise ValueError("%s line %d: want name, formula and message separated by tabs" % (CORPUS, number))
+            cases.append(tuple(fields))
+    return cases
+
+
+def cobb_douglas_1928():
+    with open(os.path.join(ROOT, "tests", "data", "cobb_douglas_1928.csv"), newline="") as handle:
+        return [[float(row["P"]), float(row["L"]), float(row["C"])] for row in csv.DictReader(handle)]
+
+
+def spoiled(rows, row, column, value):
+    """A copy of the data rows with one cell replaced (row and column 0-based in the data)."""
+    copy = [list(r) for r in rows]
+    copy[row][column] = value
+    return copy
+
+
+def build_fixture(sheet):
+    data = cobb_douglas_1928()
+    header = [["P", "L", "C"]]
+    blocks = {
+        "A1": header + data,                                   # clean data
+        "E1": header + spoiled(data, 3, 0, "n/a"),              # text in output, row 5 of the range
+        "I1": header + spoiled(data, 5, 0, None),               # empty output cell, row 7
+        "M1": header + spoiled(data, 15, 2, 0.0),               # zero capital, row 17, inputs column 2
+        "Q1": header + spoiled(data, 1, 0, -5.0),               # negative output, row 3
+        "U1": header + [[r[0], r[1], 2 * r[1]] for r in data],  # capital = 2 x labour: collinear
+        "Y1": header + [[r[0], r[1], 100.0] for r in data],     # capital constant
+        "AC1": header + [[150.0, r[1], r[2]] for r in data],    # output constant
+    }
+    for corner, rows in blocks.items():
+        set_values(sheet, corner, rows)
+    # A typed Cobb-Douglas model, a model without a form row, a model with a misplaced row.
+    set_values(sheet, "AG1", [["form", "cobb-douglas"], ["A", 1.01], ["L", 0.75], ["C", 0.25]])
+    set_values(sheet, "AG6", [["A", 1.01], ["L", 0.75], ["C", 0.25]])
+    set_values(sheet, "AG10", [["form", "cobb-douglas"], ["L", 0.75], ["A", 1.01], ["C", 0.25]])
+    set_values(sheet, "AG15", [["form", "cobb-douglas"], ["ln A", 0.0], ["x", 1e308], ["y", 1e308]])
+    set_values(sheet, "AG20", [["form", "cobb-douglas"], ["ln A", 0.0], ["x", 400.0]])
+    set_values(sheet, "AJ1", [["x"], [2.0], [1e300]])
+    # Panel columns for the data rows: plants by thirds, a constant period, periods 1899-1922.
+    set_values(sheet, "AL1", [["plant"]] + [["p%d" % (i // 8)] for i in range(24)])
+    set_values(sheet, "AM1", [["year"]] + [[1910.0] for _ in range(24)])
+    set_values(sheet, "AN1", [["year"]] + [[1899.0 + i] for i in range(24)])
+    # Cost shares that do not add up in period 3 (row 4), and a period with a zero quantity.
+    set_values(sheet, "AP1", [["L", "C"]] + [[0.7, 0.3] if i != 2 else [0.7, 0.5] for i in range(24)])
+    set_values(sheet, "AR1", [["L", "C"]] + [[r[1], r[2]] if i != 4 else [r[1], 0.0] for i, r in enumerate(data)])
+    set_formula(sheet, "AT2", "=NA()")
+    set_values(sheet, "AT1", [["P"]])
+    for row in range(3, 26):
+        set_formula(sheet, "AT%d" % row, "=A%d" % row)
+
+
+class BadInputCorpus(unittest.TestCase):
+    @classmethod
+    def setUpClass(cls):
+        cls.office = HeadlessOffice(extension_path=EXTENSION)
+        cls.office.__enter__()
+        cls.doc = cls.office.new_calc()
+        cls.sheet = cls.doc.Sheets.getByIndex(0)
+        build_fixture(cls.sheet)
+
+    @classmethod
+    def tearDownClass(cls):
+        cls.office.__exit__(None, None, None)
+
+    def test_corpus_has_enough_cases(self):
+        cases = read_corpus()
+        self.assertGreaterEqual(len(cases), 50)
+        self.assertEqual(len({name for name, _, _ in cases}), len(cases), "case names must be unique")
+
+    def test_every_case_shows_its_message_and_the_office_answers(self):
+        for name, formula, expected in read_corpus():
+            with self.subTest(case=name):
+                set_formula(self.sheet, "BA1", formula)
+                recalc(self.doc)
+                shown = get_cell(self.sheet, "BA1")
+                self.assertIsInstance(shown, str, "%s showed a number: %r" % (formula, shown))
+                self.assertEqual(shown, expected, formula)
+                self.assertTrue(self.office.alive(timeout=10), "the office stopped answering after " + name)
+
+
+if __name__ == "__main__":
+    unittest.main()
