@@ -13,6 +13,7 @@
 #include "isoquant/text.hpp"
 
 #include <cmath>
+#include <optional>
 
 namespace isoquant {
 
@@ -30,7 +31,8 @@ NumericColumns readBundleRows(const CellTable& inputs, const ProductionModel& mo
     const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     if (bundles.values.cols() != k)
-        throw InputError("inputs: has " + std::to_string(bundles.values.cols()) + " columns but the model has " +
+        throw InputError("inputs: has " + std::to_string(bundles.values.cols()) +
+                         (bundles.values.cols() == 1 ? " column" : " columns") + " but the model has " +
                          std::to_string(k) + (k == 1 ? " input" : " inputs"));
     return bundles;
 }
@@ -56,16 +58,15 @@ CellTable perBundle(const NumericColumns& bundles, Evaluate evaluate)
     return column;
 }
 
-// Two selected inputs that must differ.
-std::pair<Eigen::Index, Eigen::Index> readPair(const Cell& first, const Cell& second, const ProductionModel& model,
-                                               const std::string& firstName, const std::string& secondName)
+// The second of two selected inputs, which must differ from the first, `i`.
+Eigen::Index readOtherInput(Eigen::Index i, const Cell& second, const ProductionModel& model,
+                            const std::string& firstName, const std::string& secondName)
 {
-    const Eigen::Index i = readInputSelector(first, model, firstName);
     const Eigen::Index j = readInputSelector(second, model, secondName);
     if (i == j)
         throw InputError(secondName + ": is the same input as " + firstName + " (" + inputName(model, i) +
                          "); give two different inputs");
-    return {i, j};
+    return j;
 }
 
 std::string undefinedText(const std::string& what, const std::string& why) { return what + " undefined here: " + why; }
@@ -154,7 +155,8 @@ CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, co
 CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
     const ProductionModel technology = readProductionModel(model);
-    const auto [i, j] = readPair(first, second, technology, "input i", "input j");
+    const Eigen::Index i = readInputSelector(first, technology, "input i");
+    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputPairWord(checkedLocalShape(*technology.technology, bundle, place), i, j));
     });
@@ -163,7 +165,8 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
 CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
     const ProductionModel technology = readProductionModel(model);
-    const auto [i, j] = readPair(first, second, technology, "i", "j");
+    const Eigen::Index i = readInputSelector(first, technology, "i");
+    const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
         // fᵢ/fⱼ = (eᵢ/xᵢ)/(eⱼ/xⱼ), from the elasticities so that Y cancels before it can overflow.
         const double ei = technology.technology->elasticity(bundle, i);
@@ -178,7 +181,8 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
                              const Cell& kind)
 {
     const ProductionModel technology = readProductionModel(model);
-    const auto [i, j] = readPair(first, second, technology, "i", "j");
+    const Eigen::Index i = readInputSelector(first, technology, "i");
+    const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
         const auto value =
@@ -261,8 +265,7 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
     if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
     const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "i");
-    const Eigen::Index j = isOmitted(second) ? (i == 0 ? 1 : 0) : readInputSelector(second, technology, "j");
-    if (i == j) throw InputError("j: is the same input as i (" + inputName(technology, i) + "); give two different inputs");
+    const Eigen::Index j = isOmitted(second) ? (i == 0 ? 1 : 0) : readOtherInput(i, second, technology, "i", "j");
     const double logLevel = std::log(readPositiveNumber(level, "output level"));
 
     const std::string argument = "values of input i";

@@ -231,10 +231,10 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
                          [&](const Eigen::VectorXd& bundle) {
                              return closing == Closing::output ? prices.dot(bundle) : -technology.logOutput(bundle);
                          });
-    const LocalShape startShape = localShape(technology, x);
+    // μ = C/ν at the answer (Σ wᵢxᵢ = μ·Σ eᵢ); the start takes the local ν.
     Eigen::VectorXd u(k + 1);
     u.head(k) = x.array().log();
-    u(k) = std::log(prices.dot(x) / startShape.scale());
+    u(k) = std::log(prices.dot(x) / technology.scaleElasticity(x));
     if (!std::isfinite(u(k))) u(k) = std::log(prices.dot(x));
 
     TangencySystem system(technology, prices, closing, logLevel);
@@ -246,8 +246,8 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
     const LocalShape shape = localShape(technology, x);
     if (!isFinite(shape) || !negativeDefinite(onTangentPlane(shape), shape.scaledHessian.cwiseAbs().maxCoeff(), options))
         throw NoSolution("No " + std::string(closing == Closing::output ? "least-cost bundle" : "best use of the budget") +
-                         " found: the point where the isoquant touches the price line is not a minimum of cost "
-                         "there (the isoquant is not bowed towards the origin at that point)");
+                         " found: where the isoquant touches the price line it is not bowed towards the origin, so "
+                         "that point is not an optimum");
     ProductionPlan plan = planAt(technology, x, prices);
     // λ = μ/y
     plan.marginalCost = std::exp(u(k)) / plan.output;
