@@ -49,6 +49,15 @@ constexpr ArgumentInfo bundlesArgument{
               "with one value per row."};
 constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for the first) or its label."};
 
+// Arguments shared by the decision functions.
+constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
+constexpr ArgumentInfo secondInputArgument{"input j", "The second input: its number or its label."};
+constexpr ArgumentInfo pairFirstArgument{"i", "The first input: its number (1 for the first) or its label."};
+constexpr ArgumentInfo pairSecondArgument{"j", "The second input: its number or its label."};
+constexpr ArgumentInfo targetArgument{"target output", "The output to be produced, a positive number."};
+constexpr ArgumentInfo pricesArgument{
+    "prices", "One positive price per input, in the model's input order: a row or a column of numbers."};
+
 } // namespace
 
 const std::vector<FunctionInfo>& functionTable()
@@ -123,6 +132,59 @@ const std::vector<FunctionInfo>& functionTable()
          "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0).",
          {outputArgument, inputsArgument,
           {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
+        {"prodSecond", "PRODSECOND",
+         "Second partial derivative of output for each row of inputs: how the marginal product of input i changes "
+         "with one more unit of input j (of input i itself when j is omitted).",
+         {modelArgument, bundlesArgument, firstInputArgument,
+          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."}}},
+        {"prodInputReturns", "PRODINPUTRETURNS",
+         "Returns to one input alone for each row of inputs: diminishing, constant or increasing, by whether its "
+         "marginal product falls, stays or rises as more of it is used, the other inputs held. Says so where the "
+         "marginal product is not positive.",
+         {modelArgument, bundlesArgument, inputArgument}},
+        {"prodPair", "PRODPAIR",
+         "Technical relation of two inputs for each row of inputs: complements when more of one raises the "
+         "marginal product of the other, substitutes when it lowers it, independent when it leaves it unchanged. "
+         "Not the Allen notion: two-input Cobb-Douglas inputs are technical complements yet Allen substitutes "
+         "(elasticity 1).",
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+        {"prodMrts", "PRODMRTS",
+         "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
+         "of input i replaces at unchanged output (marginal product of i over that of j).",
+         {modelArgument, bundlesArgument, pairFirstArgument, pairSecondArgument}},
+        {"prodSubstitution", "PRODSUBSTITUTION",
+         "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
+         "the two inputs per 1% change in their relative price along the isoquant.",
+         {modelArgument, bundlesArgument, pairFirstArgument, pairSecondArgument,
+          {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
+                   "given)."}}},
+        {"prodLeastCost", "PRODLEASTCOST",
+         "Cheapest input amounts that produce the target output at the given input prices: a row, one amount per "
+         "input (enter as an array formula).",
+         {modelArgument, targetArgument, pricesArgument}},
+        {"prodCost", "PRODCOST",
+         "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
+         "(of one more unit of output) or average.",
+         {modelArgument, targetArgument, pricesArgument,
+          {"what", "\"total\" (default), \"marginal\" or \"average\"."}}},
+        {"prodBudget", "PRODBUDGET",
+         "Best split of a fixed budget among the inputs: a row with the amount of each input that gives the most "
+         "output for exactly that spending, then that output (enter as an array formula).",
+         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
+        {"prodProfit", "PRODPROFIT",
+         "Profit-maximising plan at the given output and input prices: a row with the amount of each input, then "
+         "output and profit (enter as an array formula). Under constant or increasing returns to scale there is no "
+         "finite maximum, and the cell says so.",
+         {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
+          {"input prices", "One positive price per input, in the model's input order: a row or a column."}}},
+        {"prodIsoquant", "PRODISOQUANT",
+         "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
+         "level, a column (for an XY chart). A row without such an amount says so.",
+         {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
+          {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
+                                "per input, the others held at each row's values (input j's column is not read)."},
+          {"i", "Optional: the input whose values are given (default: the first)."},
+          {"j", "Optional: the input solved for (default: the first other input)."}}},
     };
     return table;
 }

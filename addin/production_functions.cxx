@@ -4,6 +4,7 @@
 #include "function_table.hxx"
 
 #include "isoquant/cell_functions.hpp"
+#include "isoquant/decision_cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/growth_cell_functions.hpp"
 #include "isoquant/input_error.hpp"
@@ -192,6 +193,90 @@ AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable
     return guardedTable([&] {
         return compareFormsTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
                                  toSingleCell(level, "level"));
+    });
+}
+
+AnyTable ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const Any& inputI,
+                                         const Any& inputJ)
+{
+    return guardedTable([&] {
+        return secondPartialColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+                                   toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
+    });
+}
+
+AnyTable ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const Any& input)
+{
+    return guardedTable([&] {
+        return inputReturnsColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+                                  toSingleCell(input, "input"));
+    });
+}
+
+AnyTable ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs, const Any& inputI,
+                                       const Any& inputJ)
+{
+    return guardedTable([&] {
+        return inputPairColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+                               toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
+    });
+}
+
+AnyTable ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const Any& i, const Any& j)
+{
+    return guardedTable([&] {
+        return technicalRateColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
+                                   toSingleCell(j, "j"));
+    });
+}
+
+AnyTable ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const Any& i,
+                                               const Any& j, const Any& kind)
+{
+    return guardedTable([&] {
+        return substitutionColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
+                                  toSingleCell(j, "j"), toSingleCell(kind, "kind"));
+    });
+}
+
+AnyTable ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices)
+{
+    return guardedTable([&] {
+        return leastCostRow(toCellTable(model, "model"), toSingleCell(Any(targetOutput), "target output"),
+                            toCellTable(prices, "prices"));
+    });
+}
+
+AnyTable ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices,
+                                       const Any& what)
+{
+    return guardedTable([&] {
+        return costCell(toCellTable(model, "model"), toSingleCell(Any(targetOutput), "target output"),
+                        toCellTable(prices, "prices"), toSingleCell(what, "what"));
+    });
+}
+
+AnyTable ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices)
+{
+    return guardedTable([&] {
+        return budgetRow(toCellTable(model, "model"), toSingleCell(Any(budget), "budget"), toCellTable(prices, "prices"));
+    });
+}
+
+AnyTable ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
+{
+    return guardedTable([&] {
+        return profitRow(toCellTable(model, "model"), toSingleCell(Any(outputPrice), "output price"),
+                         toCellTable(inputPrices, "input prices"));
+    });
+}
+
+AnyTable ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
+                                           const Any& i, const Any& j)
+{
+    return guardedTable([&] {
+        return isoquantColumn(toCellTable(model, "model"), toSingleCell(Any(outputLevel), "output level"),
+                              toCellTable(values, "values of input i"), toSingleCell(i, "i"), toSingleCell(j, "j"));
     });
 }
 

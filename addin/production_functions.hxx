@@ -51,6 +51,24 @@ public:
                                 const css::uno::Any& base) override;
     AnyTable SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
     AnyTable SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& level) override;
+    AnyTable SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& inputI,
+                                 const css::uno::Any& inputJ) override;
+    AnyTable SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
+    AnyTable SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& inputI,
+                               const css::uno::Any& inputJ) override;
+    AnyTable SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& i,
+                               const css::uno::Any& j) override;
+    AnyTable SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& i,
+                                       const css::uno::Any& j, const css::uno::Any& kind) override;
+    AnyTable SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
+                                    const AnyTable& prices) override;
+    AnyTable SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices,
+                               const css::uno::Any& what) override;
+    AnyTable SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices) override;
+    AnyTable SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
+                                 const AnyTable& inputPrices) override;
+    AnyTable SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
+                                   const css::uno::Any& i, const css::uno::Any& j) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

@@ -1,0 +1,291 @@
+"""The decision functions computed by a real headless LibreOffice Calc with the extension:
+PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS, PRODSUBSTITUTION, PRODLEASTCOST, PRODCOST,
+PRODBUDGET, PRODPROFIT and PRODISOQUANT.
+
+Run from the repository root with Debian's Python (the only one that imports uno):
+    /usr/bin/python3 -m unittest -v tests/integration/test_decisions_in_calc.py
+
+One office with the extension serves the whole module. The data are invented: a bakery whose
+output (loaves a day) depends on baker hours and oven hours, with typed Cobb-Douglas models of
+increasing (0.7, 0.5), decreasing (0.45, 0.35) and constant (0.6, 0.4) returns, the scenario of
+the README's worked examples.
+
+Sources of the expected figures, named beside each check:
+- "Cobb-Douglas calculus": fi = bi*Y/xi, fii = bi*(bi - 1)*Y/xi^2, fij = bi*bj*Y/(xi*xj).
+- "Varian (1992), from memory": the two-input Cobb-Douglas cost function and conditional demands
+  (Microeconomic Analysis, 3rd ed., ch. 4): c = [(a/b)^(b/n) + (a/b)^(-a/n)] w1^(a/n) w2^(b/n) (y/A)^(1/n),
+  x1 = (a w2/(b w1))^(b/n) (y/A)^(1/n), with n = a + b.
+- "common practice, no source": Cobb-Douglas budget shares b_i/sum(b); sigma = 1 for Cobb-Douglas;
+  exponents 0.7 and 0.5 give diminishing returns to each input and increasing returns to scale.
+- "first-order conditions": p*f_i = w_i at the profit maximum; MRTS = w1/w2 at the least-cost bundle.
+Formula recomputations agree to 1e-12 relative (the same powers and products in another order);
+isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the issue's rule).
+- Error messages: the wording in core/src/decision_arguments.cpp, decision_cell_functions.cpp,
+  homogeneous_cost.cpp and production_model.cpp, which the add-in prefixes with "Error: ".
+"""
+
+import math
+import os
+import sys
+import unittest
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+sys.path.insert(0, HERE)
+
+from office import (  # noqa: E402  (needs the path above)
+    HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values)
+
+REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
+OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
+
+FORMULA_TOLERANCE = 1e-12
+ISOQUANT_TOLERANCE = 1e-9
+
+# (A, (bakers, ovens)) of the three typed models
+GROWING = (12.0, (0.7, 0.5))      # A1:B4: the README's bakery
+SHRINKING = (40.0, (0.45, 0.35))  # A6:B9: a second shop, decreasing returns
+CONSTANT = (12.0, (0.6, 0.4))     # A11:B14
+PRICES = (18.0, 45.0)     # D1:E1: a baker hour, an oven hour
+BUNDLES = [(10.0, 4.0), (30.0, 9.0), (55.0, 20.0)]  # G2:H4 under a header
+
+OFFICE = None
+DOC = None
+SHEET = None
+
+
+def setUpModule():
+    global OFFICE, DOC, SHEET
+    office = HeadlessOffice(extension_path=OXT)
+    office.__enter__()
+    try:
+        DOC = office.new_calc()
+        SHEET = DOC.Sheets.getByIndex(0)
+        write_bakery(SHEET)
+    except BaseException:
+        office.__exit__(None, None, None)
+        raise
+    OFFICE = office
+
+
+def tearDownModule():
+    if OFFICE is not None:
+        OFFICE.__exit__(None, None, None)
+
+
+def model_rows(model):
+    scale, exponents = model
+    return [["form", "cobb-douglas"], ["A", scale], ["bakers", exponents[0]], ["ovens", exponents[1]]]
+
+
+def write_bakery(sheet):
+    set_values(sheet, "A1", model_rows(GROWING))
+    set_values(sheet, "A6", model_rows(SHRINKING))
+    set_values(sheet, "A11", model_rows(CONSTANT))
+    set_values(sheet, "D1", [list(PRICES)])
+    set_values(sheet, "G1", [["bakers", "ovens"]] + [list(b) for b in BUNDLES])
+
+
+def output_of(model, x):
+    scale, (a, b) = model
+    return scale * x[0] ** a * x[1] ** b
+
+
+def varian_least_cost(model, prices, y):
+    scale, (a, b) = model
+    w1, w2 = prices
+    n = a + b
+    level = (y / scale) ** (1 / n)
+    cost = ((a / b) ** (b / n) + (a / b) ** (-a / n)) * w1 ** (a / n) * w2 ** (b / n) * level
+    return cost, ((a * w2 / (b * w1)) ** (b / n) * level, (b * w1 / (a * w2)) ** (a / n) * level)
+
+
+class DecisionTestCase(unittest.TestCase):
+
+    def assert_close(self, value, expected, tolerance, what):
+        self.assertIsInstance(value, float, "%s: expected a number, the cell shows %r" % (what, value))
+        self.assertLessEqual(abs(value - expected), tolerance * abs(expected),
+                             "%s: %r, expected %r (relative tolerance %g)" % (what, value, expected, tolerance))
+
+
+class CurvatureTest(DecisionTestCase):
+    """PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS and PRODSUBSTITUTION per row of G1:H4."""
+
+    @classmethod
+    def setUpClass(cls):
+        set_array_formula(SHEET, "J2:J4", "=PRODSECOND($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(SHEET, "K2:K4", '=PRODSECOND($A$1:$B$4;$G$1:$H$4;"bakers";"ovens")')
+        set_array_formula(SHEET, "L2:L4", "=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(SHEET, "M2:M4", '=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;"ovens")')
+        set_array_formula(SHEET, "N2:N4", "=PRODPAIR($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "O2:O4", "=PRODMRTS($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "P2:P4", "=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "Q2:Q4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"allen")')
+        set_array_formula(SHEET, "R2:R4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;2;1;"morishima")')
+        set_formula(SHEET, "S2", "=PRODSCALE($A$1:$B$4)")
+        recalc(DOC)
+
+    def test_second_partials(self):
+        a, b = GROWING[1]
+        for row, x in enumerate(BUNDLES, start=2):
+            y = output_of(GROWING, x)
+            # Cobb-Douglas calculus
+            self.assert_close(get_cell(SHEET, "J%d" % row), a * (a - 1) * y / x[0] ** 2, FORMULA_TOLERANCE, "own")
+            self.assert_close(get_cell(SHEET, "K%d" % row), a * b * y / (x[0] * x[1]), FORMULA_TOLERANCE, "cross")
+
+    def test_diminishing_returns_to_each_input_yet_increasing_returns_to_scale(self):
+        # common practice, no source
+        self.assertEqual([r[0] for r in get_range(SHEET, "L2:M4")], ["diminishing"] * 3)
+        self.assertEqual([r[1] for r in get_range(SHEET, "L2:M4")], ["diminishing"] * 3)
+        self.assertGreater(get_cell(SHEET, "S2"), 1.0)
+
+    def test_complements_rate_and_elasticities(self):
+        a, b = GROWING[1]
+        self.assertEqual([r[0] for r in get_range(SHEET, "N2:N4")], ["complements"] * 3)
+        for row, x in enumerate(BUNDLES, start=2):
+            # Cobb-Douglas calculus: MRTS = (a/x1)/(b/x2)
+            self.assert_close(get_cell(SHEET, "O%d" % row), (a / x[0]) / (b / x[1]), FORMULA_TOLERANCE, "MRTS")
+            for column in "PQR":  # sigma = 1 (common practice, no source)
+                self.assert_close(get_cell(SHEET, "%s%d" % (column, row)), 1.0, FORMULA_TOLERANCE, "sigma " + column)
+
+
+class PlansTest(DecisionTestCase):
+    """PRODLEASTCOST, PRODCOST, PRODBUDGET, PRODPROFIT and PRODISOQUANT."""
+
+    @classmethod
+    def setUpClass(cls):
+        set_array_formula(SHEET, "A21:B21", "=PRODLEASTCOST($A$1:$B$4;1500;$D$1:$E$1)")
+        set_formula(SHEET, "C21", "=PRODCOST($A$1:$B$4;1500;$D$1:$E$1)")
+        set_formula(SHEET, "D21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"marginal")')
+        set_formula(SHEET, "E21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"average")')
+        set_array_formula(SHEET, "F21", "=PRODMRTS($A$1:$B$4;A21:B21;1;2)")
+        set_array_formula(SHEET, "A23:C23", "=PRODBUDGET($A$1:$B$4;5000;$D$1:$E$1)")
+        set_array_formula(SHEET, "A25:D25", "=PRODPROFIT($A$6:$B$9;3.2;$D$1:$E$1)")
+        set_array_formula(SHEET, "E25", "=PRODMARGINAL($A$6:$B$9;A25:B25;1)")
+        set_array_formula(SHEET, "F25", "=PRODMARGINAL($A$6:$B$9;A25:B25;2)")
+        set_values(SHEET, "H21", [[float(v)] for v in range(40, 150, 10)])
+        set_array_formula(SHEET, "I21:I31", "=PRODISOQUANT($A$1:$B$4;1500;H21:H31)")
+        set_array_formula(SHEET, "J21:J31", "=PRODOUTPUT($A$1:$B$4;H21:I31)")
+        # The README's curvature figures at 30 baker hours and 9 oven hours (G3:H3).
+        set_array_formula(SHEET, "K33", "=PRODSECOND($A$1:$B$4;G3:H3;1)")
+        set_array_formula(SHEET, "L33", "=PRODSECOND($A$1:$B$4;G3:H3;1;2)")
+        set_array_formula(SHEET, "M33", "=PRODMRTS($A$1:$B$4;G3:H3;1;2)")
+        recalc(DOC)
+
+    def test_readme_figures(self):
+        # The README's worked example prints these rounded; each must round to what it prints.
+        printed = {"K33": "-0.0908", "L33": "0.5047", "M33": "0.42", "A21": "94.21", "B21": "26.92",
+                   "C21": "2907.21", "D21": "1.6151", "E21": "1.9381", "A23": "162.04", "B23": "46.30",
+                   "C23": "2875.31", "A25": "43.49", "B25": "13.53", "C25": "543.58", "D25": "347.89",
+                   "I21": "89.32", "I23": "50.63", "I25": "33.84", "I27": "24.76", "I29": "19.19", "I31": "15.46"}
+        for cell, figure in printed.items():
+            decimals = len(figure.split(".")[1])
+            self.assertEqual("%.*f" % (decimals, get_cell(SHEET, cell)), figure, cell)
+
+    def test_least_cost_against_the_textbook(self):
+        cost, bundle = varian_least_cost(GROWING, PRICES, 1500.0)  # Varian (1992), from memory
+        for value, figure, what in zip(get_range(SHEET, "A21:B21")[0], bundle, ["bakers", "ovens"]):
+            self.assert_close(value, figure, FORMULA_TOLERANCE, what)
+        self.assert_close(get_cell(SHEET, "C21"), cost, FORMULA_TOLERANCE, "total cost")
+        self.assert_close(get_cell(SHEET, "E21"), cost / 1500.0, FORMULA_TOLERANCE, "average cost")
+        # marginal cost of a technology homogeneous of degree nu: C/(nu*y) (Varian 1992, from memory)
+        self.assert_close(get_cell(SHEET, "D21"), cost / (sum(GROWING[1]) * 1500.0), FORMULA_TOLERANCE,
+                          "marginal cost")
+        # first-order conditions: MRTS = w1/w2
+        self.assert_close(get_cell(SHEET, "F21"), PRICES[0] / PRICES[1], FORMULA_TOLERANCE, "MRTS at the bundle")
+
+    def test_budget_split(self):
+        x1, x2, y = get_range(SHEET, "A23:C23")[0]
+        # common practice, no source: shares b_i / sum(b)
+        a, b = GROWING[1]
+        self.assert_close(PRICES[0] * x1 / 5000.0, a / (a + b), FORMULA_TOLERANCE, "bakers' share")
+        self.assert_close(PRICES[1] * x2 / 5000.0, b / (a + b), FORMULA_TOLERANCE, "ovens' share")
+        self.assert_close(y, output_of(GROWING, (x1, x2)), FORMULA_TOLERANCE, "output")
+
+    def test_profit_maximum(self):
+        x1, x2, y, profit = get_range(SHEET, "A25:D25")[0]
+        # first-order conditions, through PRODMARGINAL: p*f_i = w_i
+        self.assert_close(3.2 * get_cell(SHEET, "E25"), PRICES[0], FORMULA_TOLERANCE, "bakers' FOC")
+        self.assert_close(3.2 * get_cell(SHEET, "F25"), PRICES[1], FORMULA_TOLERANCE, "ovens' FOC")
+        self.assert_close(y, output_of(SHRINKING, (x1, x2)), FORMULA_TOLERANCE, "output")
+        self.assert_close(profit, 3.2 * y - PRICES[0] * x1 - PRICES[1] * x2, FORMULA_TOLERANCE, "profit")
+
+    def test_isoquant_through_prodoutput(self):
+        points = get_range(SHEET, "I21:I31")
+        for row in get_range(SHEET, "J21:J31"):
+            self.assert_close(row[0], 1500.0, ISOQUANT_TOLERANCE, "PRODOUTPUT of an isoquant point")
+        # fewer ovens as bakers grow (a downward-sloping isoquant)
+        amounts = [r[0] for r in points]
+        self.assertEqual(amounts, sorted(amounts, reverse=True))
+
+
+def error(text):
+    return "Error: " + text  # the add-in's prefix (addin/production_functions.cxx)
+
+
+# (what, formula, result range, expected first cell). The areas used: the models in A1:B14, prices
+# in D1:E1, bundles in G1:H4; a zero price in D41:E41, a negative one in D42:E42, three prices in
+# D43:F43, a model with a negative exponent in A41:B44.
+CASES = [
+    ("a zero price", "PRODLEASTCOST($A$1:$B$4;1500;D41:E41)", "G41:H41",
+     error("prices: the price of input 2 is 0; prices must be positive")),
+    ("a negative input price", "PRODPROFIT($A$6:$B$9;2;D42:E42)", "G43:J43",
+     error("input prices: the price of input 1 is -3; prices must be positive")),
+    ("a target of 0", "PRODCOST($A$1:$B$4;0;$D$1:$E$1)", "G45",
+     error("target output: is 0; it must be positive")),
+    ("a negative budget", "PRODBUDGET($A$1:$B$4;-100;$D$1:$E$1)", "G47:I47",
+     error("budget: is -100; it must be positive")),
+    ("an output price of 0", "PRODPROFIT($A$6:$B$9;0;$D$1:$E$1)", "G49:J49",
+     error("output price: is 0; it must be positive")),
+    ("an input index out of range", "PRODSECOND($A$1:$B$4;$G$1:$H$4;3)", "G51:G53",
+     error("input i: 3 is not an input number; the model has 2 inputs")),
+    ("an unknown input label", 'PRODMRTS($A$1:$B$4;$G$1:$H$4;1;"flour")', "G55:G57",
+     error("j: 'flour' is not an input of the model; its inputs are 'bakers', 'ovens'")),
+    ("the same input twice", "PRODPAIR($A$1:$B$4;$G$1:$H$4;2;2)", "G59:G61",
+     error("input j: is the same input as input i ('ovens'); give two different inputs")),
+    ("an unknown elasticity kind", 'PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"hicks")', "G63:G65",
+     error("kind: 'hicks' is not a kind; use \"direct\", \"allen\" or \"morishima\"")),
+    ("an unknown cost measure", 'PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"mean")', "G67",
+     error("what: 'mean' is not a cost measure; use \"total\", \"marginal\" or \"average\"")),
+    ("three prices for two inputs", "PRODLEASTCOST($A$1:$B$4;1500;D43:F43)", "G69:H69",
+     error("prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)")),
+    ("an isoquant level of 0", "PRODISOQUANT($A$1:$B$4;0;H21:H31)", "G71:G81",
+     error("output level: is 0; it must be positive")),
+    ("a negative exponent", "PRODLEASTCOST(A41:B44;10;$D$1:$E$1)", "G83:H83",
+     error("model: the exponent of 'ovens' is -0.2; more of that input never raises output, so no plan with a "
+           "positive amount of it is best (every exponent must be positive)")),
+    # Statuses of well-posed questions without an answer: said in the cell, no "Error: ".
+    ("profit under constant returns", "PRODPROFIT($A$11:$B$14;3.2;$D$1:$E$1)", "G85:J85",
+     "No finite profit maximum: returns to scale are constant (1), and at these prices one unit of output costs "
+     "%s to make and sells for 3.2, so every unit loses money and the best plan is to produce nothing"),
+    ("profit under increasing returns", "PRODPROFIT($A$1:$B$4;3.2;$D$1:$E$1)", "G87:J87",
+     "No finite profit maximum: returns to scale are increasing (1.2), so profit grows without limit as every "
+     "input is scaled up"),
+    ("an isoquant level out of reach", "PRODISOQUANT($A$1:$B$4;1E+250;1)", "G89",
+     "no amount of 'ovens' gives this output with 'bakers' at 1"),
+]
+
+
+class DecisionErrorTest(DecisionTestCase):
+    """Bad input and unanswerable questions: the exact text in the cell, no number, office alive."""
+
+    def test_error_cases_then_office_alive(self):
+        set_values(SHEET, "D41", [[18.0, 0.0, None], [-3.0, 45.0, None], [18.0, 45.0, 7.0]])
+        set_values(SHEET, "A41", model_rows((12.0, (0.7, -0.2))))
+        for _, formula, target, _ in CASES:
+            set_array_formula(SHEET, target, "=" + formula)
+        recalc(DOC)
+        # Unit cost of 12*L^0.6*K^0.4 at (18, 45): Varian's cost function at y = 1 (from memory).
+        unit_cost = varian_least_cost(CONSTANT, PRICES, 1.0)[0]
+        for what, formula, target, message in CASES:
+            with self.subTest(what, formula=formula):
+                result = get_range(SHEET, target) if ":" in target else [[get_cell(SHEET, target)]]
+                if "%s" in message:
+                    message = message % ("%.6g" % unit_cost)
+                self.assertEqual(result[0][0], message, what)
+                numbers = [v for row in result for v in row if isinstance(v, float)]
+                self.assertEqual(numbers, [], what + ": numbers shown beside the message")
+        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+
+
+if __name__ == "__main__":
+    unittest.main()
