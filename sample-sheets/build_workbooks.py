@@ -185,7 +185,8 @@ def dairy_creameries(office, path):
     style.align_right(sheet.getCellRangeByName("B1:F1"))
     style.column_widths(sheet, {"A": 26, "B": 14, "C": 18, "D": 18, "E": 18, "F": 26, "G": 70, "H": 6})
     style.wrapped_column(sheet, 6, width_mm=70)
-    sheet.getCellRangeByName("G1:G%d" % last).ParaIndent = 200  # 2 mm off the numbers beside
+    style.align_left(sheet.getCellRangeByName("G1:G%d" % last))  # an indent needs explicit left alignment
+    sheet.getCellRangeByName("G1:G%d" % last).ParaIndent = 300  # 3 mm off the numbers beside
     style.one_page_wide(doc, sheet, landscape=True)
     style.scatter_chart(sheet, "actual_vs_translog", "Actual against translog fitted output (thousand EUR)",
                         x_range="F1:F%d" % last, y_range="C1:C%d" % last, anchor="I2", size_mm=(150, 90))
@@ -246,8 +247,12 @@ def dairy_creameries(office, path):
     style.number_format(doc, sheet.getCellRangeByName("B35:G56"), "0.0000")
     for count_cell in ("B19", "B42"):  # observations of the ces and the translog table
         style.number_format(doc, sheet.getCellRangeByName(count_cell), "0")
-    # The ces convergence note is longer than its column and its neighbours are array cells.
-    sheet.getCellRangeByName("C29").IsTextWrapped = True
+    # The ces convergence note is longer than its column, and its neighbours are array cells that
+    # stop it spilling over: repeat it in full in the empty row below the table.
+    set_formula(sheet, "A32", '="ces convergence: "&B29&", "&C29')
+    sheet.getCellRangeByName("A32").CharHeight = 9.0
+    style.align_left(sheet.getCellRangeByName("C29"))
+    sheet.getCellRangeByName("C29").ParaIndent = 200
     style.column_widths(sheet, {"A": 52, "B": 22, "C": 26, "D": 22, "E": 22, "F": 26, "G": 44})
     style.one_page_wide(doc, sheet, landscape=False)
     add_name(doc, "form_comparison", sheet, "$A$2:$G$9")

@@ -19,8 +19,11 @@ from workbook_checks import formula_problems, named_range  # noqa: E402
 def show(value):
     if isinstance(value, float) and value.is_integer() and abs(value) < 1e9:
         return "%d" % value
+    if isinstance(value, float) and abs(value) < 1e5:
+        text = "%.4f" % value
+        return text[1:] if text == "-0.0000" else text  # a rounding residue of 0, e.g. a scale effect
     if isinstance(value, float):
-        return "%.4f" % value if abs(value) < 1e5 else "%.4g" % value
+        return "%.4g" % value
     return str(value)
 
 

@@ -3,7 +3,7 @@ import uno
 from com.sun.star.awt import Rectangle
 from com.sun.star.table import CellRangeAddress
 from com.sun.star.chart.ChartAxisLabelPosition import OUTSIDE_START
-from com.sun.star.table.CellHoriJustify import RIGHT
+from com.sun.star.table.CellHoriJustify import LEFT, RIGHT
 
 DATA_FILL = 0xFFF6D5   # pale yellow: cells the reader may change
 HEADER_FILL = 0xDDE8F0  # pale blue-grey
@@ -22,6 +22,10 @@ def header(cell_range):
 
 def align_right(cell_range):
     cell_range.HoriJustify = RIGHT
+
+
+def align_left(cell_range):
+    cell_range.HoriJustify = LEFT
 
 
 def input_cells(cell_range):
