@@ -48,6 +48,8 @@ def about_sheet(doc, title, paragraphs):
     set_values(sheet, "A1", rows)
     style.title(sheet.getCellRangeByName("A1"))
     style.wrapped_column(sheet, 0, width_mm=170)
+    # Heights were set for the narrow default column; fit them to the wrapped text again.
+    sheet.getCellRangeByName("A1:A%d" % len(rows)).Rows.OptimalHeight = True
     return sheet
 
 
