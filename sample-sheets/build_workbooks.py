@@ -363,9 +363,8 @@ TFP_TOTAL_TOLERANCE = 0.005
 
 
 def check_growth(doc, path, true_total):
-    problems = formula_problems(doc)
-    if problems:
-        raise SystemExit("%s: formula cells show problems: %s" % (path, problems[:10]))
+    """No formula cell shows a problem, and the total TFP growth is the drawn one up to rounding."""
+    refuse_formula_problems(doc, path)
     total = named_range(doc, "growth_accounting").getDataArray()[-1]
     if abs(total[-1] - true_total) > TFP_TOTAL_TOLERANCE:
         raise SystemExit("%s: TFP growth %.4f is more than %.3f from the true %.4f"
@@ -373,13 +372,17 @@ def check_growth(doc, path, true_total):
     print("  TFP growth over the years %.4f, true %.4f" % (total[-1], true_total))
 
 
-def check_workbook(doc, path, true_values, table_name="fitted_technology"):
-    """No formula cell shows an error or a message, and each labelled estimate of the named table
-    lies within 3 standard errors of its true value."""
+def refuse_formula_problems(doc, path):
     problems = formula_problems(doc)
     if problems:
         raise SystemExit("%s: formula cells show problems: %s" % (path, problems[:10]))
-    table = named_range(doc, table_name).getDataArray()
+
+
+def check_workbook(doc, path, true_values):
+    """No formula cell shows an error or a message, and each labelled estimate of the table named
+    fitted_technology lies within 3 standard errors of its true value."""
+    refuse_formula_problems(doc, path)
+    table = named_range(doc, "fitted_technology").getDataArray()
     for label, truth in true_values.items():
         row = next(r for r in table if r[0] == label)
         estimate, error = row[1], row[2]

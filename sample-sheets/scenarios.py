@@ -39,7 +39,6 @@ def workshop_rows(seed=WORKSHOPS["seed"], count=WORKSHOPS["count"]):
     return rows
 
 
-
 # Marrow Valley Dairies: a cooperative with 8 creameries, six years (2019-2024), one row per
 # creamery and year.
 #   output  = value of dairy products shipped, thousand EUR at 2019 prices
