@@ -19,8 +19,11 @@ from workbook_checks import formula_problems, named_range  # noqa: E402
 def show(value):
     if isinstance(value, float) and value.is_integer() and abs(value) < 1e9:
         return "%d" % value
+    if isinstance(value, float) and abs(value) < 1e5:
+        text = "%.4f" % value
+        return text[1:] if text == "-0.0000" else text  # a rounding residue of 0, e.g. a scale effect
     if isinstance(value, float):
-        return "%.4f" % value if abs(value) < 1e5 else "%.4g" % value
+        return "%.4g" % value
     return str(value)
 
 
@@ -31,7 +34,7 @@ def print_table(rows):
                                for c, value in enumerate(row)).rstrip())
 
 
-def summarise(doc, name):
+def summarise_fit(doc, name):
     table = [list(row) for row in named_range(doc, "fitted_technology").getDataArray()]
     print("\n%s: fitted technology" % name)
     print_table(table)
@@ -39,6 +42,37 @@ def summarise(doc, name):
     returns = by_label["returns to scale"]
     print("  -> returns to scale %.3f (SE %.3f; p-value of the test that it equals 1: %.3f): %s" % (
         returns[1], returns[2], returns[4], by_label["verdict"][1]))
+    if "technical change per period" in by_label:
+        trend = by_label["technical change per period"]
+        print("  -> technical change %.4f a period (SE %.4f): about %.1f%% more output a period from the same "
+              "inputs" % (trend[1], trend[2], 100 * trend[1]))
+
+
+def summarise_comparison(doc, name):
+    table = [list(row) for row in named_range(doc, "form_comparison").getDataArray()]
+    print("\n%s: Cobb-Douglas, CES and translog compared" % name)
+    print_table([row for row in table if any(value != "" for value in row)])
+
+
+def summarise_growth(doc, name):
+    table = [list(row) for row in named_range(doc, "growth_accounting").getDataArray()]
+    header, total = table[0], table[-1]
+    years = len(table) - 2
+    print("\n%s: growth accounting over %d years (log points; 0.05 is about 5%%)" % (name, years))
+    print_table([header, total])
+    print("  -> output grew %.1f%% a year; TFP growth %.2f%% a year, %.0f%% of output growth" % (
+        100 * total[1] / years, 100 * total[-1] / years, 100 * total[-1] / total[1]))
+
+
+# One summary per named table a workbook carries.
+SUMMARIES = {"fitted_technology": summarise_fit, "form_comparison": summarise_comparison,
+             "growth_accounting": summarise_growth}
+
+
+def summarise(doc, name):
+    for table_name, summary in SUMMARIES.items():
+        if doc.NamedRanges.hasByName(table_name):
+            summary(doc, name)
 
 
 def main():

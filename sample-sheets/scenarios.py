@@ -39,6 +39,103 @@ def workshop_rows(seed=WORKSHOPS["seed"], count=WORKSHOPS["count"]):
     return rows
 
 
+# Marrow Valley Dairies: a cooperative with 8 creameries, six years (2019-2024), one row per
+# creamery and year.
+#   output  = value of dairy products shipped, thousand EUR at 2019 prices
+#   labour  = hours worked, thousand hours
+#   capital = plant and equipment at replacement value, thousand EUR at 2019 prices
+# True technology: ln output = ln A + effect(creamery) + trend * (year - 2019)
+#                              + b_labour ln labour + b_capital ln capital + noise,
+# effect ~ Normal(0, EFFECT_SD) per creamery (independent of its inputs), noise ~ Normal(0, NOISE_SD).
+CREAMERIES = dict(
+    seed=20261202,
+    names=("Ashby", "Brindle", "Carrow", "Dunsley", "Elmstead", "Foxton", "Greyholm", "Hatherley"),
+    first_year=2019,
+    years=6,
+    scale=2.9,
+    labour_exponent=0.55,
+    capital_exponent=0.35,
+    trend=0.018,
+    effect_sd=0.05,
+    noise_sd=0.04,
+)
+
+
+def creamery_rows(truth=CREAMERIES):
+    """Rows of (creamery, year, output, labour, capital), creamery by creamery, years in order."""
+    draw = random.Random(truth["seed"])
+    rows = []
+    for name in truth["names"]:
+        effect = draw.gauss(0.0, truth["effect_sd"])
+        labour = math.exp(draw.uniform(math.log(25.0), math.log(90.0)))
+        capital_per_hour = math.exp(draw.gauss(math.log(11.0), 0.3))
+        for offset in range(truth["years"]):
+            # Staff numbers move with the order book; machinery is added most years.
+            labour *= math.exp(draw.gauss(0.005, 0.06))
+            capital_per_hour *= math.exp(draw.gauss(0.025, 0.05))
+            hours = round(labour, 1)
+            capital = round(labour * capital_per_hour, 0)
+            log_output = (math.log(truth["scale"]) + effect + truth["trend"] * offset
+                          + truth["labour_exponent"] * math.log(hours)
+                          + truth["capital_exponent"] * math.log(capital)
+                          + draw.gauss(0.0, truth["noise_sd"]))
+            rows.append((name, truth["first_year"] + offset, round(math.exp(log_output), 1), hours, capital))
+    return rows
+
+
+# Saltmarsh Glassworks: one container-glass plant, twenty years (2005-2024).
+#   output  = glass shipped, million EUR at 2005 prices
+#   labour  = hours worked, thousand hours; capital = furnaces and lines, million EUR at 2005 prices;
+#   energy  = gas and power, GWh
+#   shares  = each input's share of the year's total cost of the three, from the books
+# Each year: input i grows by g_i ~ Normal(growth_i, growth_sd_i); the shares drift linearly from
+# their first to their last values plus Normal(0, SHARE_NOISE) (energy takes the rest); output
+# grows by sum_i mean share_i * g_i + tfp, tfp ~ Normal(TFP_GROWTH, TFP_SD): exactly the Tornqvist
+# accounting, so the productivity growth the workbook finds is the drawn one, up to rounding.
+GLASSWORKS = dict(
+    seed=20261203,
+    first_year=2005,
+    years=20,
+    start=dict(output=240.0, labour=410.0, capital=180.0, energy=520.0),
+    growth=dict(labour=0.002, capital=0.032, energy=0.006),
+    growth_sd=dict(labour=0.02, capital=0.02, energy=0.03),
+    first_shares=dict(labour=0.52, capital=0.28),
+    last_shares=dict(labour=0.45, capital=0.35),
+    share_noise=0.008,
+    tfp_growth=0.011,
+    tfp_sd=0.012,
+)
+GLASSWORKS_INPUTS = ("labour", "capital", "energy")
+
+
+def glassworks_rows(truth=GLASSWORKS):
+    """(rows, true TFP growth per year): rows of (year, output, labour, capital, energy, labour share,
+    capital share, energy share); the TFP growth of year t is the drawn tfp from t-1 to t."""
+    draw = random.Random(truth["seed"])
+    quantities = dict(truth["start"])
+    rows, tfp_path, previous_shares = [], [], None
+    for offset in range(truth["years"]):
+        fraction = offset / (truth["years"] - 1)
+        shares = {name: round(truth["first_shares"][name] + fraction
+                              * (truth["last_shares"][name] - truth["first_shares"][name])
+                              + draw.gauss(0.0, truth["share_noise"]), 3) for name in ("labour", "capital")}
+        shares["energy"] = round(1.0 - shares["labour"] - shares["capital"], 3)
+        if previous_shares is not None:
+            log_output_growth = 0.0
+            for name in GLASSWORKS_INPUTS:
+                growth = draw.gauss(truth["growth"][name], truth["growth_sd"][name])
+                quantities[name] *= math.exp(growth)
+                log_output_growth += 0.5 * (previous_shares[name] + shares[name]) * growth
+            tfp = draw.gauss(truth["tfp_growth"], truth["tfp_sd"])
+            quantities["output"] *= math.exp(log_output_growth + tfp)
+            tfp_path.append(tfp)
+        previous_shares = shares
+        rows.append((truth["first_year"] + offset, round(quantities["output"], 1))
+                    + tuple(round(quantities[name], 1) for name in GLASSWORKS_INPUTS)
+                    + tuple(shares[name] for name in GLASSWORKS_INPUTS))
+    return rows, tfp_path
+
+
 if __name__ == "__main__":
-    for row in workshop_rows():
+    for row in workshop_rows() + creamery_rows() + glassworks_rows()[0]:
         print(row)

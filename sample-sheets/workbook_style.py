@@ -2,7 +2,8 @@
 import uno
 from com.sun.star.awt import Rectangle
 from com.sun.star.table import CellRangeAddress
-from com.sun.star.table.CellHoriJustify import RIGHT
+from com.sun.star.chart.ChartAxisLabelPosition import OUTSIDE_START
+from com.sun.star.table.CellHoriJustify import LEFT, RIGHT
 
 DATA_FILL = 0xFFF6D5   # pale yellow: cells the reader may change
 HEADER_FILL = 0xDDE8F0  # pale blue-grey
@@ -21,6 +22,10 @@ def header(cell_range):
 
 def align_right(cell_range):
     cell_range.HoriJustify = RIGHT
+
+
+def align_left(cell_range):
+    cell_range.HoriJustify = LEFT
 
 
 def input_cells(cell_range):
@@ -71,4 +76,46 @@ def scatter_chart(sheet, name, heading, x_range, y_range, anchor, size_mm):
     diagram.YAxisTitle.String = "actual"
     series = diagram.getDataRowProperties(0)
     series.Lines = False
+    plain_chart_background(chart)
     return chart
+
+
+def stacked_columns_chart(sheet, name, heading, categories, series, anchor, size_mm):
+    """Stacked columns of the series ranges (each with a header cell naming its series), one stack
+    per category cell (with a header cell above them), placed at anchor."""
+    position = sheet.getCellRangeByName(anchor).Position
+    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
+    ranges = tuple(_address(sheet, cell_range) for cell_range in (categories,) + tuple(series))
+    sheet.Charts.addNewByName(name, rectangle, ranges, True, True)
+    chart = sheet.Charts.getByName(name).EmbeddedObject
+    chart.setDiagram(chart.createInstance("com.sun.star.chart.BarDiagram"))
+    chart.HasMainTitle = True
+    chart.Title.String = heading
+    chart.HasLegend = True
+    chart.Diagram.Vertical = False  # upright columns
+    chart.Diagram.Stacked = True
+    # Year labels below the plot, not on the zero line among the negative bars.
+    chart.Diagram.XAxis.LabelPosition = OUTSIDE_START
+    plain_chart_background(chart)
+    return chart
+
+
+def one_page_wide(doc, sheet, landscape, one_page_high=False):
+    """Print the sheet on A4 (landscape or portrait) scaled down to one page across and, with
+    one_page_high, one page down (otherwise as many as its rows need), so that no table or chart is
+    cut between pages."""
+    styles = doc.StyleFamilies.getByName("PageStyles")
+    name = "One page wide%s%s" % (", one high" if one_page_high else "", ", landscape" if landscape else "")
+    if not styles.hasByName(name):
+        styles.insertByName(name, doc.createInstance("com.sun.star.style.PageStyle"))
+        page = styles.getByName(name)
+        page.IsLandscape = landscape
+        page.Width, page.Height = (29700, 21000) if landscape else (21000, 29700)
+        page.ScaleToPagesX = 1
+        page.ScaleToPagesY = 1 if one_page_high else 0
+    sheet.PageStyle = name
+
+
+def plain_chart_background(chart):
+    """A white plot area with the default grey grid: easier to read in print than the grey wall."""
+    chart.Diagram.Wall.FillColor = 0xFFFFFF

@@ -37,7 +37,7 @@ def cell_contents(doc):
 class SampleWorkbooks(unittest.TestCase):
     def test_committed_workbooks_match_their_generator(self):
         committed = sorted(glob.glob(os.path.join(SAMPLES, "*.fods")))
-        self.assertGreaterEqual(len(committed), 1)
+        self.assertGreaterEqual(len(committed), 3)
         with tempfile.TemporaryDirectory() as fresh_folder:
             # The generator checks on its own that every formula computes and that fitted
             # exponents land within 3 SE of the true ones; a failure exits non-zero.
@@ -63,6 +63,10 @@ class SampleWorkbooks(unittest.TestCase):
             self.assertIn("not professional advice", run.stdout)
             self.assertRegex(run.stdout, r"-> returns to scale [0-9.]+ \(SE [0-9.]+; p-value of the test that it equals 1: [0-9.]+\): "
                                          r"(increasing|constant|decreasing)")
+            # The panel workbook's trend and the growth workbook's productivity line.
+            self.assertRegex(run.stdout, r"-> technical change -?[0-9.]+ a period \(SE [0-9.]+\)")
+            self.assertRegex(run.stdout, r"-> output grew -?[0-9.]+% a year; TFP growth -?[0-9.]+% a year, "
+                                         r"-?[0-9]+% of output growth")
             for path in glob.glob(os.path.join(SAMPLES, "*.fods")):
                 pdf = os.path.join(output, os.path.splitext(os.path.basename(path))[0] + ".pdf")
                 self.assertTrue(os.path.getsize(pdf) > 10000, pdf)
