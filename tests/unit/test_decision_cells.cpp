@@ -186,4 +186,28 @@ BOOST_AUTO_TEST_CASE(bad_input_is_named)
                "positive amount of it is best (every exponent must be positive)");
 }
 
+// A fitted or typed ces model takes the ces closed form: the cost-minimising bundle of the textbook
+// dual, C(w, y) = (y/A)^(1/ν)·[δ^σ w₁^(1−σ) + (1−δ)^σ w₂^(1−σ)]^(1/(1−σ)) with σ = 1/(1+ρ) (from
+// memory), and xᵢ = ∂C/∂wᵢ, checked here by the total cost and the tangency of the bundle.
+BOOST_AUTO_TEST_CASE(ces_models_use_the_ces_closed_form)
+{
+    const CellTable model = typedRange({{std::string("form"), std::string("ces"), Cell{}},
+                                        {std::string("A"), 2.0, Cell{}},
+                                        {std::string("delta"), 0.4, Cell{}},
+                                        {std::string("rho"), 0.5, Cell{}},
+                                        {std::string("nu"), 0.9, Cell{}},
+                                        {std::string("inputs"), std::string("labour"), std::string("ovens")}});
+    const double sigma = 1 / 1.5;
+    const double bracket = std::pow(0.4, sigma) * std::pow(18.0, 1 - sigma) + std::pow(0.6, sigma) * std::pow(45.0, 1 - sigma);
+    const double textbookCost = std::pow(400.0 / 2.0, 1 / 0.9) * std::pow(bracket, 1 / (1 - sigma));
+    const CellTable bundle = isoquant::leastCostRow(model, 400.0, pricesRow(18.0, 45.0));
+    BOOST_TEST_REQUIRE((bundle.rows() == 1u && bundle.columns() == 2u));
+    const Eigen::Vector2d x(number(bundle, 0, 0), number(bundle, 0, 1));
+    BOOST_TEST(closeTo(18.0 * x(0) + 45.0 * x(1), textbookCost, 1e-10));
+    const CellTable produced = isoquant::outputColumn(model, numberRange(x.transpose()));
+    BOOST_TEST(closeTo(number(produced, 0, 0), 400.0, 1e-10));
+    const CellTable rate = isoquant::technicalRateColumn(model, numberRange(x.transpose()), 1.0, 2.0);
+    BOOST_TEST(closeTo(number(rate, 0, 0), 18.0 / 45.0, 1e-10));
+}
+
 BOOST_AUTO_TEST_SUITE_END()
