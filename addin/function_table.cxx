@@ -123,6 +123,12 @@ const std::vector<FunctionInfo>& functionTable()
          "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0).",
          {outputArgument, inputsArgument,
           {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
+#ifdef ISOQUANT_BENCHMARK_FLOOR
+        // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
+        {"benchFloor", "ISOQUANTFLOOR",
+         "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
+         {outputArgument, inputsArgument}},
+#endif
     };
     return table;
 }
