@@ -1,7 +1,7 @@
 #!/usr/bin/python3
 """Isoquant's benchmarks, each side by side with what a user would do instead, in one run.
 
-    cmake --build build --target bench            # everything (about 10 minutes on 2 cores)
+    cmake --build build --target bench            # everything (about 5 minutes on 2 cores)
     /usr/bin/python3 tests/benchmarks/run_benchmarks.py --core-bench build/tests/benchmarks/isoquant_core_bench \
         [--oxt build/isoquant-bench.oxt] [--runs 5] [--sizes 10000,100000,1000000]
 
