@@ -136,14 +136,17 @@ int main(int argc, char** argv)
         design.col(0).setOnes();
         design.rightCols(3) = data.inputs.array().log().matrix();
         const Eigen::VectorXd logOutput = data.output.array().log().matrix();
-        for (const double limit : {1e-12, 0.0}) {
+        for (const double limit : {isoquant::LeastSquaresOptions{}.doublePrecisionErrorLimit, 0.0}) {
             isoquant::LeastSquaresOptions options;
             options.doublePrecisionErrorLimit = limit;
+            bool inDouble = false;
             const double seconds = medianSeconds(runs, [&] {
-                sink = isoquant::fitLeastSquares(design, logOutput, 0, options).coefficients(1);
+                const auto fit = isoquant::fitLeastSquares(design, logOutput, 0, options);
+                inDouble = fit.factorisedInDouble;
+                sink = fit.coefficients(1);
             });
-            std::printf("%s %ld %.6g %d\n", limit > 0 ? "least_squares_double" : "least_squares_extended",
-                        static_cast<long>(rows), seconds, runs);
+            std::printf("%s %ld %.6g %d route %s\n", limit > 0 ? "least_squares_default" : "least_squares_extended",
+                        static_cast<long>(rows), seconds, runs, inDouble ? "double" : "long-double");
         }
 
         // The whole core path a PRODFIT cell takes after the add-in's conversion: reading the
