@@ -185,6 +185,12 @@ const std::vector<FunctionInfo>& functionTable()
                                 "per input, the others held at each row's values (input j's column is not read)."},
           {"i", "Optional: the input whose values are given (default: the first)."},
           {"j", "Optional: the input solved for (default: the first other input)."}}},
+#ifdef ISOQUANT_BENCHMARK_FLOOR
+        // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
+        {"benchFloor", "ISOQUANTFLOOR",
+         "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
+         {outputArgument, inputsArgument}},
+#endif
     };
     return table;
 }

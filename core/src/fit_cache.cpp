@@ -51,6 +51,16 @@ std::size_t hashArguments(const FitArguments& arguments)
 
 std::shared_ptr<const ProductionFit> FitCache::fit(const FitArguments& arguments)
 {
+    return fitOrReuse(arguments, nullptr);
+}
+
+std::shared_ptr<const ProductionFit> FitCache::fit(FitArguments&& arguments)
+{
+    return fitOrReuse(arguments, &arguments);
+}
+
+std::shared_ptr<const ProductionFit> FitCache::fitOrReuse(const FitArguments& arguments, FitArguments* expendable)
+{
     const std::size_t hash = hashArguments(arguments);
     // Held while fitting, so that equal arguments arriving together are fitted once (Calc
     // serialises its calls anyway, so nothing is lost).
@@ -63,7 +73,7 @@ std::shared_ptr<const ProductionFit> FitCache::fit(const FitArguments& arguments
     }
     auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
     ++fitsComputed_;
-    entries_.push_front(Entry{hash, arguments, computed});
+    entries_.push_front(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
     if (entries_.size() > capacity_) entries_.pop_back();
     return computed;
 }

@@ -2,8 +2,9 @@
 
 #include "isoquant/distributions.hpp"
 
-#include <Eigen/QR>
-#include <Eigen/SVD>
+#include "least_squares_factor.hpp"
+
+#include <Eigen/Cholesky>
 
 #include <cmath>
 #include <limits>
@@ -124,21 +125,13 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     }
     const Eigen::MatrixXd scaledDesign = design * inverseNorms.asDiagonal();
 
-    // Factorise in extended precision: the error of a least-squares solution grows with
-    // cond²·‖residual‖, and the NIST Wampler and Filip sets need the extra digits.
-    using ExtendedMatrix = Eigen::Matrix<long double, Eigen::Dynamic, Eigen::Dynamic>;
-    using ExtendedVector = Eigen::Matrix<long double, Eigen::Dynamic, 1>;
-    const ExtendedMatrix extendedDesign = scaledDesign.cast<long double>();
-    const ExtendedVector extendedResponse = response.cast<long double>();
-    const Eigen::ColPivHouseholderQR<ExtendedMatrix> qr(extendedDesign);
-    const ExtendedMatrix extendedUpper = qr.matrixR().topLeftCorner(p, p).triangularView<Eigen::Upper>();
-    const Eigen::MatrixXd upper = extendedUpper.cast<double>();
-    const Eigen::JacobiSVD<Eigen::MatrixXd> svd(upper, Eigen::ComputeFullV);
-    const Eigen::VectorXd singularValues = svd.singularValues();
-    if (singularValues(p - 1) <= options.rankTolerance * singularValues(0)) {
-        const Eigen::VectorXd nullDirection = qr.colsPermutation() * svd.matrixV().col(p - 1);
-        throw CollinearColumns(columnsInNullDirection(nullDirection));
-    }
+    // Well-conditioned designs (the usual logs of inputs) are factorised in double, vectorised;
+    // the rest, and every rank decision, in long double (least_squares_factor.hpp).
+    std::optional<LeastSquaresFactor> fast = factorInDouble(scaledDesign, response, options.doublePrecisionErrorLimit);
+    const LeastSquaresFactor factor = fast ? std::move(*fast) : factorInExtendedPrecision(scaledDesign, response);
+    const Eigen::VectorXd& singularValues = factor.singularValues;
+    if (singularValues(p - 1) <= options.rankTolerance * singularValues(0))
+        throw CollinearColumns(columnsInNullDirection(factor.nullDirection));
 
     LeastSquaresResult result;
     result.observations = n;
@@ -149,10 +142,10 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     result.covarianceKind = options.covariance;
     result.confidenceLevel = options.confidenceLevel;
     result.conditionNumber = singularValues(0) / singularValues(p - 1);
+    result.factorisedInDouble = fast.has_value();
 
-    const ExtendedVector scaledCoefficients = qr.solve(extendedResponse);
-    result.coefficients = inverseNorms.cwiseProduct(scaledCoefficients.cast<double>());
-    result.residuals = (extendedResponse - extendedDesign * scaledCoefficients).cast<double>();
+    result.coefficients = inverseNorms.cwiseProduct(factor.coefficients);
+    result.residuals = factor.residuals;
 
     const double df = static_cast<double>(n - allParameters);
     result.residualDegreesOfFreedom = df;
@@ -169,9 +162,7 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     result.residualStandardDeviation = std::sqrt(result.residualSumOfSquares / df);
 
     // (XᵀX)⁻¹ = H·Hᵀ with H = D·P·R⁻¹ (D the inverse column norms, P the pivoting).
-    const Eigen::MatrixXd upperInverse =
-        extendedUpper.triangularView<Eigen::Upper>().solve(ExtendedMatrix::Identity(p, p)).cast<double>();
-    const Eigen::MatrixXd pivotedInverse = qr.colsPermutation() * upperInverse;
+    const Eigen::MatrixXd pivotedInverse = factor.permutation * factor.upperInverse;
     const Eigen::MatrixXd bread = inverseNorms.asDiagonal() * pivotedInverse;
     if (options.covariance == CovarianceKind::classical) {
         result.covariance = (result.residualSumOfSquares / df) * (bread * bread.transpose());

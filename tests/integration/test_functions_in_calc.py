@@ -234,9 +234,11 @@ def _tokens(source):
 def read_function_table(path):
     """{display name: (description, [(argument name, argument description)])} from
     addin/function_table.cxx: its shared `constexpr ArgumentInfo x{"name", "description"};`
-    and its `{"method", "DISPLAY", "description", {arguments}}` entries."""
+    and its `{"method", "DISPLAY", "description", {arguments}}` entries, leaving out the rows only
+    the benchmark extension compiles (between `#ifdef ISOQUANT_BENCHMARK_FLOOR` and `#endif`)."""
     with open(path, encoding="utf-8") as handle:
-        tokens = _tokens(handle.read())
+        text = re.sub(r"#ifdef ISOQUANT_BENCHMARK_FLOOR\n.*?#endif\n", "", handle.read(), flags=re.S)
+    tokens = _tokens(text)
     values = [value for _, value in tokens]
     kinds = [kind for kind, _ in tokens]
     shared = {}

@@ -41,6 +41,20 @@ BOOST_AUTO_TEST_CASE(equal_arguments_fit_once)
     BOOST_TEST(isoquant::hashArguments(negativeZero) == isoquant::hashArguments(zero));
 }
 
+// Arguments handed over (moved into the cache) and arguments only lent (copied) find each other.
+BOOST_AUTO_TEST_CASE(moved_and_lent_arguments_find_the_same_fit)
+{
+    FitCache cache;
+    const FitArguments lent = withLevel(0.95);
+    const auto moved = cache.fit(withLevel(0.95));
+    BOOST_TEST(cache.fit(lent) == moved);
+    BOOST_TEST(cache.fitsComputed() == 1u);
+    const FitArguments other = withLevel(0.9);
+    const auto copied = cache.fit(other);
+    BOOST_TEST(cache.fit(withLevel(0.9)) == copied);
+    BOOST_TEST(cache.fitsComputed() == 2u);
+}
+
 BOOST_AUTO_TEST_CASE(different_arguments_fit_again)
 {
     FitCache cache;

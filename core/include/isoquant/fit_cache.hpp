@@ -22,12 +22,17 @@ public:
     // The fit for these arguments: from the cache when equal arguments were fitted recently.
     // Errors (InputError) are not cached: they are cheap to find again.
     std::shared_ptr<const ProductionFit> fit(const FitArguments& arguments);
+    // The same, keeping `arguments` themselves when they are fitted: no copy of a million-row range.
+    std::shared_ptr<const ProductionFit> fit(FitArguments&& arguments);
 
     // Fits computed since construction (clear() empties the cache, not this count).
     std::size_t fitsComputed() const;
     void clear();
 
 private:
+    // `expendable`, when given, is `arguments` and may be moved into the cache.
+    std::shared_ptr<const ProductionFit> fitOrReuse(const FitArguments& arguments, FitArguments* expendable);
+
     struct Entry {
         std::size_t hash;
         FitArguments arguments;
