@@ -356,6 +356,109 @@ def glassworks_growth(office, path):
     doc.close(True)
 
 
+CAUTION_PLAN = ("Caution: a plan is only as good as its model. Here the model is typed, not fitted: with a "
+                "fitted one the bundles inherit its statistical uncertainty, and the Cobb-Douglas form, the "
+                "prices and the target are assumptions. These are not professional advice: check them with "
+                "qualified practice before they steer costly decisions.")
+
+
+def bakery_planning(office, path):
+    truth = scenarios.BAKERY
+    hours = truth["baker_hours"]
+    last = len(hours) + 1
+    doc = office.new_calc()
+    about_sheet(doc, "Kestrel Street Bakery: planning the day's baking", [
+        "What it shows: for a Cobb-Douglas model of loaves from baker hours and oven hours, the cheapest "
+        "mix of hours that bakes the target number of loaves (PRODLEASTCOST) and what it costs in total, at "
+        "the margin and per loaf (PRODCOST); the most loaves a daily budget can buy and how to split it "
+        "(PRODBUDGET); the isoquant (every mix that bakes the target, PRODISOQUANT) with today's cost line "
+        "touching it at the cheapest mix; and, side by side, what changes when an oven hour costs %.0f "
+        "instead of %.0f EUR." % (truth["dearer_oven_price"], truth["oven_price"]),
+        "Which cells to change: the yellow cells on the sheet Plan: the model (A1:B4), the prices, target "
+        "and budget of both scenarios (B7:C10) and the baker hours the isoquant is drawn over (E2:E%d). "
+        "Everything else recalculates." % last,
+        "Units: loaves a day; baker hours and oven hours a day; prices, costs and the budget in EUR.",
+        "Where the data came from: invented. The model is typed, not fitted: loaves = %.0f x baker "
+        "hours^%.1f x oven hours^%.1f (returns to scale %.1f), with %.0f EUR a baker hour, %.0f EUR an oven "
+        "hour, a target of %.0f loaves and a budget of %.0f EUR a day (sample-sheets/scenarios.py)." % (
+            truth["scale"], truth["baker_exponent"], truth["oven_exponent"],
+            truth["baker_exponent"] + truth["oven_exponent"], truth["baker_price"], truth["oven_price"],
+            truth["target"], truth["budget"]),
+        CAUTION_PLAN,
+        SHARING,
+    ])
+
+    sheet = new_sheet(doc, "Plan")
+    model = "$A$1:$B$4"
+    set_values(sheet, "A1", [["form", "cobb-douglas"], ["A", truth["scale"]], ["bakers", truth["baker_exponent"]],
+                             ["ovens", truth["oven_exponent"]]])
+    style.header(sheet.getCellRangeByName("A1:B1"))
+    style.input_cells(sheet.getCellRangeByName("B2:B4"))
+    set_values(sheet, "A6", [["scenario", "today", "dearer ovens"],
+                             ["price of a baker hour", truth["baker_price"], truth["baker_price"]],
+                             ["price of an oven hour", truth["oven_price"], truth["dearer_oven_price"]],
+                             ["target (loaves a day)", truth["target"], truth["target"]],
+                             ["budget a day", truth["budget"], truth["budget"]],
+                             ["least cost: baker hours", None, None], ["least cost: oven hours", None, None], ["total cost a day", None, None],
+                             ["marginal cost of a loaf", None, None], ["average cost of a loaf", None, None],
+                             ["budget: baker hours", None, None], ["budget: oven hours", None, None], ["budget: loaves", None, None]])
+    style.header(sheet.getCellRangeByName("A6:C6"))
+    style.align_right(sheet.getCellRangeByName("B6:C6"))
+    style.input_cells(sheet.getCellRangeByName("B7:C10"))
+    for column in "BC":
+        prices, target, budget = "%s7:%s8" % (column, column), "%s9" % column, "%s10" % column
+        set_formula(sheet, column + "11", "=INDEX(PRODLEASTCOST(%s;%s;%s);1;1)" % (model, target, prices))
+        set_formula(sheet, column + "12", "=INDEX(PRODLEASTCOST(%s;%s;%s);1;2)" % (model, target, prices))
+        set_formula(sheet, column + "13", "=PRODCOST(%s;%s;%s)" % (model, target, prices))
+        set_formula(sheet, column + "14", '=PRODCOST(%s;%s;%s;"marginal")' % (model, target, prices))
+        set_formula(sheet, column + "15", '=PRODCOST(%s;%s;%s;"average")' % (model, target, prices))
+        for row, item in ((16, 1), (17, 2), (18, 3)):
+            set_formula(sheet, "%s%d" % (column, row), "=INDEX(PRODBUDGET(%s;%s;%s);1;%d)"
+                        % (model, budget, prices, item))
+    style.number_format(doc, sheet.getCellRangeByName("B7:C10"), "0.00")
+    style.number_format(doc, sheet.getCellRangeByName("B9:C10"), "0")
+    style.number_format(doc, sheet.getCellRangeByName("B11:C18"), "0.00")
+    style.number_format(doc, sheet.getCellRangeByName("B14:C15"), "0.0000")
+
+    set_values(sheet, "E1", [["baker hours", "oven hours for the target", "today's cost line"]]
+               + [[float(value), None, None] for value in hours])
+    style.header(sheet.getCellRangeByName("E1:G1"))
+    style.align_right(sheet.getCellRangeByName("E1:G1"))
+    style.input_cells(sheet.getCellRangeByName("E2:E%d" % last))
+    set_array_formula(sheet, "F2:F%d" % last, "=PRODISOQUANT(%s;$B$9;E2:E%d)" % (model, last))
+    for row in range(2, last + 1):
+        set_formula(sheet, "G%d" % row, "=($B$13-$B$7*E%d)/$B$8" % row)
+    style.number_format(doc, sheet.getCellRangeByName("E2:E%d" % last), "0")
+    style.number_format(doc, sheet.getCellRangeByName("F2:G%d" % last), "0.00")
+    style.column_widths(sheet, {"A": 52, "B": 24, "C": 26, "D": 6, "E": 24, "F": 44, "G": 36})
+    style.one_page_wide(doc, sheet, landscape=True, one_page_high=True)
+    style.xy_lines_chart(sheet, "isoquant_and_cost_line", "Mixes that bake the target, and today's cost line",
+                         x_range="E1:E%d" % last, y_range="F1:G%d" % last, anchor="E%d" % (last + 2),
+                         size_mm=(160, 95), x_title="baker hours a day", y_title="oven hours a day")
+    add_name(doc, "least_cost_plan", sheet, "$A$6:$C$15")
+    doc.calculateAll()
+    check_plan(doc, path, truth)
+    office.store(doc, path, FLAT_ODS_FILTER)
+    doc.close(True)
+
+
+def check_plan(doc, path, truth):
+    """No formula cell shows a problem, and in both scenarios the least-cost bundle bakes the target
+    and spends on each input its exponent's share of the cost (the Cobb-Douglas first-order condition)."""
+    refuse_formula_problems(doc, path)
+    table = {row[0]: row[1:] for row in named_range(doc, "least_cost_plan").getDataArray()}
+    a, b = truth["baker_exponent"], truth["oven_exponent"]
+    for column in (0, 1):
+        bakers, ovens = table["least cost: baker hours"][column], table["least cost: oven hours"][column]
+        wage, rent = table["price of a baker hour"][column], table["price of an oven hour"][column]
+        loaves = truth["scale"] * bakers ** a * ovens ** b
+        if abs(loaves - truth["target"]) > 1e-6 * truth["target"] or abs(rent * ovens / (wage * bakers) - b / a) > 1e-9:
+            raise SystemExit("%s: least-cost bundle %.4f, %.4f is not the cheapest way to the target" % (
+                path, bakers, ovens))
+        print("  least cost at %.0f/%.0f: %.2f baker hours, %.2f oven hours, %.2f a day" % (
+            wage, rent, bakers, ovens, table["total cost a day"][column]))
+
+
 # The growth rows round output and inputs to 0.1 (a log error of at most 0.05/180 per figure) and the
 # shares to 0.001; over 19 years of input growth of a few percent the rounded shares move the TFP
 # total by about 19 x 3 x 0.0005 x 0.05 < 0.0015, so 0.005 leaves room without hiding a real error.
@@ -394,7 +497,8 @@ def check_workbook(doc, path, true_values):
 
 WORKBOOKS = {"furniture-workshops.fods": furniture_workshops,
              "dairy-creameries.fods": dairy_creameries,
-             "glassworks-growth.fods": glassworks_growth}
+             "glassworks-growth.fods": glassworks_growth,
+             "bakery-planning.fods": bakery_planning}
 
 
 def main():

@@ -64,9 +64,18 @@ def summarise_growth(doc, name):
         100 * total[1] / years, 100 * total[-1] / years, 100 * total[-1] / total[1]))
 
 
+def summarise_plan(doc, name):
+    table = {row[0]: row[1:] for row in named_range(doc, "least_cost_plan").getDataArray()}
+    print("\n%s: least-cost bundle" % name)
+    for column, scenario in enumerate(table["scenario"]):
+        print("  -> %s: %s loaves a day cost least with %.2f baker hours and %.2f oven hours, %.2f a day" % (
+            scenario, show(table["target (loaves a day)"][column]), table["least cost: baker hours"][column],
+            table["least cost: oven hours"][column], table["total cost a day"][column]))
+
+
 # One summary per named table a workbook carries.
 SUMMARIES = {"fitted_technology": summarise_fit, "form_comparison": summarise_comparison,
-             "growth_accounting": summarise_growth}
+             "growth_accounting": summarise_growth, "least_cost_plan": summarise_plan}
 
 
 def summarise(doc, name):

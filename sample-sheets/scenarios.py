@@ -136,6 +136,22 @@ def glassworks_rows(truth=GLASSWORKS):
     return rows, tfp_path
 
 
+# Kestrel Street Bakery: a typed (not fitted) plan, loaves from baker hours and oven hours.
+# True technology: loaves a day = SCALE * baker_hours^baker_exponent * oven_hours^oven_exponent.
+# Prices in EUR an hour; the second scenario raises the price of an oven hour (energy dearer).
+BAKERY = dict(
+    scale=12.0,
+    baker_exponent=0.7,
+    oven_exponent=0.5,
+    baker_price=18.0,
+    oven_price=45.0,
+    dearer_oven_price=60.0,
+    target=1500.0,
+    budget=5000.0,
+    baker_hours=tuple(range(40, 150, 10)),
+)
+
+
 if __name__ == "__main__":
     for row in workshop_rows() + creamery_rows() + glassworks_rows()[0]:
         print(row)

@@ -80,6 +80,27 @@ def scatter_chart(sheet, name, heading, x_range, y_range, anchor, size_mm):
     return chart
 
 
+def xy_lines_chart(sheet, name, heading, x_range, y_range, anchor, size_mm, x_title, y_title):
+    """An XY chart with lines of each column of y_range (header cells name the series, shown in a
+    legend) against x_range (with a header cell), placed at anchor."""
+    position = sheet.getCellRangeByName(anchor).Position
+    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
+    charts = sheet.Charts
+    charts.addNewByName(name, rectangle, (_address(sheet, x_range), _address(sheet, y_range)), True, False)
+    chart = charts.getByName(name).EmbeddedObject
+    chart.setDiagram(chart.createInstance("com.sun.star.chart.XYDiagram"))
+    chart.HasMainTitle = True
+    chart.Title.String = heading
+    chart.HasLegend = True
+    diagram = chart.Diagram
+    diagram.HasXAxisTitle = True
+    diagram.XAxisTitle.String = x_title
+    diagram.HasYAxisTitle = True
+    diagram.YAxisTitle.String = y_title
+    plain_chart_background(chart)
+    return chart
+
+
 def stacked_columns_chart(sheet, name, heading, categories, series, anchor, size_mm):
     """Stacked columns of the series ranges (each with a header cell naming its series), one stack
     per category cell (with a header cell above them), placed at anchor."""
