@@ -414,6 +414,27 @@ class HeadlessOffice:
         self.store(doc, path, "calc_pdf_Export")
 
 
+def start_module_office(extension_path, prepare=None):
+    """One office with the extension and a new spreadsheet for a whole test module (its
+    setUpModule); `prepare(doc)` fills the document. Returns (office, doc); the office is stopped
+    again if starting or preparing fails. The module's tearDownModule calls stop_module_office."""
+    office = HeadlessOffice(extension_path=extension_path)
+    office.__enter__()
+    try:
+        doc = office.new_calc()
+        if prepare is not None:
+            prepare(doc)
+    except BaseException:
+        office.__exit__(None, None, None)
+        raise
+    return office, doc
+
+
+def stop_module_office(office):
+    if office is not None:
+        office.__exit__(None, None, None)
+
+
 # -- sheet helpers -------------------------------------------------------------
 
 def _origin(sheet, name):

@@ -24,7 +24,6 @@ isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the i
   homogeneous_cost.cpp and production_model.cpp, which the add-in prefixes with "Error: ".
 """
 
-import math
 import os
 import sys
 import unittest
@@ -33,7 +32,8 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 
 from office import (  # noqa: E402  (needs the path above)
-    HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values)
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
+    stop_module_office)
 
 REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
 OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
@@ -55,21 +55,12 @@ SHEET = None
 
 def setUpModule():
     global OFFICE, DOC, SHEET
-    office = HeadlessOffice(extension_path=OXT)
-    office.__enter__()
-    try:
-        DOC = office.new_calc()
-        SHEET = DOC.Sheets.getByIndex(0)
-        write_bakery(SHEET)
-    except BaseException:
-        office.__exit__(None, None, None)
-        raise
-    OFFICE = office
+    OFFICE, DOC = start_module_office(OXT, lambda doc: write_bakery(doc.Sheets.getByIndex(0)))
+    SHEET = DOC.Sheets.getByIndex(0)
 
 
 def tearDownModule():
-    if OFFICE is not None:
-        OFFICE.__exit__(None, None, None)
+    stop_module_office(OFFICE)
 
 
 def model_rows(model):

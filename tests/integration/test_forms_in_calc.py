@@ -25,7 +25,9 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 sys.path.insert(0, os.path.join(HERE, "..", "reference"))
 
-from office import HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values  # noqa: E402
+from office import (  # noqa: E402
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
+    stop_module_office)
 from test_functions_in_calc import CalcTestCase, error, read_columns, row_of, write_columns  # noqa: E402
 
 try:  # reference libraries; their checks are skipped when these are missing
@@ -48,19 +50,11 @@ DOC = None
 
 def setUpModule():
     global OFFICE, DOC
-    office = HeadlessOffice(extension_path=OXT)
-    office.__enter__()
-    try:
-        DOC = office.new_calc()
-    except BaseException:
-        office.__exit__(None, None, None)
-        raise
-    OFFICE = office
+    OFFICE, DOC = start_module_office(OXT)
 
 
 def tearDownModule():
-    if OFFICE is not None:
-        OFFICE.__exit__(None, None, None)
+    stop_module_office(OFFICE)
 
 
 def new_sheet(name):

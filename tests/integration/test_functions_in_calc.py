@@ -36,7 +36,8 @@ sys.path.insert(0, HERE)
 import uno  # noqa: E402  (Debian's python3-uno)
 
 from office import (  # noqa: E402  (needs the path above)
-    HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values)
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
+    stop_module_office)
 
 try:  # reference libraries; their checks are skipped when these are missing
     import numpy as np
@@ -62,19 +63,11 @@ DOC = None
 
 def setUpModule():
     global OFFICE, DOC
-    office = HeadlessOffice(extension_path=OXT)
-    office.__enter__()
-    try:
-        DOC = office.new_calc()
-    except BaseException:
-        office.__exit__(None, None, None)
-        raise
-    OFFICE = office
+    OFFICE, DOC = start_module_office(OXT)
 
 
 def tearDownModule():
-    if OFFICE is not None:
-        OFFICE.__exit__(None, None, None)
+    stop_module_office(OFFICE)
 
 
 # -- data and sheets ---------------------------------------------------------------------

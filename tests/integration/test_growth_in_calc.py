@@ -31,7 +31,8 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 
 from office import (  # noqa: E402  (needs the path above)
-    HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values)
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
+    stop_module_office)
 
 REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
 OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
@@ -58,21 +59,12 @@ SHEET = None
 
 def setUpModule():
     global OFFICE, DOC, SHEET
-    office = HeadlessOffice(extension_path=OXT)
-    office.__enter__()
-    try:
-        DOC = office.new_calc()
-        SHEET = DOC.Sheets.getByIndex(0)
-        write_plant(SHEET)
-    except BaseException:
-        office.__exit__(None, None, None)
-        raise
-    OFFICE = office
+    OFFICE, DOC = start_module_office(OXT, lambda doc: write_plant(doc.Sheets.getByIndex(0)))
+    SHEET = DOC.Sheets.getByIndex(0)
 
 
 def tearDownModule():
-    if OFFICE is not None:
-        OFFICE.__exit__(None, None, None)
+    stop_module_office(OFFICE)
 
 
 def write_plant(sheet):

@@ -27,7 +27,9 @@ import unittest
 HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 
-from office import HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values  # noqa: E402
+from office import (  # noqa: E402
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
+    stop_module_office)
 
 try:  # reference libraries; their checks are skipped when these are missing
     import numpy as np
@@ -49,19 +51,11 @@ DOC = None
 
 def setUpModule():
     global OFFICE, DOC
-    office = HeadlessOffice(extension_path=OXT)
-    office.__enter__()
-    try:
-        DOC = office.new_calc()
-    except BaseException:
-        office.__exit__(None, None, None)
-        raise
-    OFFICE = office
+    OFFICE, DOC = start_module_office(OXT)
 
 
 def tearDownModule():
-    if OFFICE is not None:
-        OFFICE.__exit__(None, None, None)
+    stop_module_office(OFFICE)
 
 
 def read_rows(file_name):
