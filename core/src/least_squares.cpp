@@ -29,52 +29,18 @@ std::vector<Eigen::Index> columnsInNullDirection(const Eigen::VectorXd& directio
     return columns;
 }
 
-void validateShapes(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
-                    std::optional<Eigen::Index> interceptColumn)
+void validateShape(const RegressionRows& rows, std::optional<Eigen::Index> interceptColumn,
+                   const LeastSquaresOptions& options)
 {
-    if (design.cols() < 1) throw std::invalid_argument("design: needs at least one column");
-    if (design.rows() != response.size())
-        throw std::invalid_argument("design and response: different numbers of rows");
-    if (design.rows() <= design.cols())
-        throw std::invalid_argument("design: needs more rows than columns");
-    if (interceptColumn && (*interceptColumn < 0 || *interceptColumn >= design.cols()))
+    if (rows.columns() < 1) throw std::invalid_argument("design: needs at least one column");
+    if (rows.rows() <= rows.columns()) throw std::invalid_argument("design: needs more rows than columns");
+    if (interceptColumn && (*interceptColumn < 0 || *interceptColumn >= rows.columns()))
         throw std::invalid_argument("interceptColumn: outside the design");
-    if (!design.allFinite()) throw std::invalid_argument("design: holds a value that is not finite");
-    if (!response.allFinite()) throw std::invalid_argument("response: holds a value that is not finite");
-}
-
-// Sandwich "meat" Aᵀ·diag(ω)·A, where A = X·(XᵀX)^{-1/2}-like factor with orthonormal columns,
-// so that hᵢᵢ = ‖Aᵢ‖² are the leverages and the sandwich is H·meat·Hᵀ.
-Eigen::MatrixXd robustMeat(const Eigen::MatrixXd& orthonormalFactor, const Eigen::VectorXd& residuals,
-                           CovarianceKind kind, double residualDegreesOfFreedom,
-                           const Eigen::VectorXd& absorbedLeverage)
-{
-    const Eigen::Index n = residuals.size();
-    Eigen::VectorXd weights = residuals.array().square();
-    if (kind == CovarianceKind::hc1) {
-        weights *= static_cast<double>(n) / residualDegreesOfFreedom;
-    } else {
-        Eigen::VectorXd leverage = orthonormalFactor.rowwise().squaredNorm();
-        if (absorbedLeverage.size() == n) leverage += absorbedLeverage;
-        // hᵢᵢ = 1 makes the HC3 weight infinite: the covariance is undefined, not huge.
-        weights = (leverage.array() < 1.0)
-                      .select(weights.array() / (1.0 - leverage.array()).square(), notANumber);
-    }
-    return orthonormalFactor.transpose() * weights.asDiagonal() * orthonormalFactor;
-}
-
-// CR1 meat: Σ_g s_g s_gᵀ with s_g = A_gᵀ e_g the score of cluster g, times
-// G/(G−1)·(n−1)/(n−p), p counting the absorbed parameters too.
-Eigen::MatrixXd clusterMeat(const Eigen::MatrixXd& orthonormalFactor, const Eigen::VectorXd& residuals,
-                            const std::vector<Eigen::Index>& clusters, Eigen::Index clusterCount,
-                            double residualDegreesOfFreedom)
-{
-    Eigen::MatrixXd scores = Eigen::MatrixXd::Zero(orthonormalFactor.cols(), clusterCount);
-    for (Eigen::Index i = 0; i < residuals.size(); ++i)
-        scores.col(clusters[static_cast<std::size_t>(i)]) += residuals(i) * orthonormalFactor.row(i).transpose();
-    const double n = static_cast<double>(residuals.size());
-    const double g = static_cast<double>(clusterCount);
-    return (g / (g - 1.0)) * ((n - 1.0) / residualDegreesOfFreedom) * (scores * scores.transpose());
+    if (!(options.confidenceLevel > 0 && options.confidenceLevel < 1))
+        throw std::invalid_argument("confidenceLevel: must lie strictly between 0 and 1");
+    if (options.absorbedParameters < 0 || rows.rows() <= rows.columns() + options.absorbedParameters)
+        throw std::invalid_argument("design: needs more rows than parameters, absorbed ones included");
+    if (options.rowsPerBlock < 1) throw std::invalid_argument("rowsPerBlock: must be at least 1");
 }
 
 // G, after checking that every row has a cluster in 0 … G−1 and that G ≥ 2.
@@ -91,6 +57,80 @@ Eigen::Index countClusters(const std::vector<Eigen::Index>& clusters, Eigen::Ind
     return count;
 }
 
+// The sandwich "meat" in the coordinates of A = X·H, H = D·P·R⁻¹ (the bread), whose columns are
+// orthonormal, so that hᵢᵢ = ‖Aᵢ‖² are the leverages and the covariance is H·meat·Hᵀ:
+//   HC1: Aᵀ·diag(eᵢ²)·A · n/(n−p);   HC3: Aᵀ·diag(eᵢ²/(1−hᵢᵢ)²)·A;
+//   CR1: Σ_g s_g s_gᵀ with s_g = A_gᵀ e_g the score of cluster g, times G/(G−1)·(n−1)/(n−p),
+// p counting the absorbed parameters too. Accumulated a block of rows at a time.
+class MeatAccumulator {
+public:
+    MeatAccumulator(const LeastSquaresOptions& options, const Eigen::MatrixXd& bread, Eigen::Index rows,
+                    Eigen::Index clusterCount, double residualDegreesOfFreedom)
+        : options_(options), bread_(bread), rows_(rows), clusterCount_(clusterCount),
+          residualDegreesOfFreedom_(residualDegreesOfFreedom),
+          sum_(Eigen::MatrixXd::Zero(bread.cols(), options.covariance == CovarianceKind::cluster ? clusterCount : bread.cols()))
+    {
+    }
+
+    void add(Eigen::Index first, const Eigen::Ref<const Eigen::MatrixXd>& design,
+             const Eigen::Ref<const Eigen::VectorXd>& residuals)
+    {
+        const Eigen::MatrixXd orthonormal = design * bread_;
+        if (options_.covariance == CovarianceKind::cluster) {
+            for (Eigen::Index i = 0; i < residuals.size(); ++i)
+                sum_.col(options_.clusters[static_cast<std::size_t>(first + i)]) +=
+                    residuals(i) * orthonormal.row(i).transpose();
+            return;
+        }
+        Eigen::VectorXd weights = residuals.array().square();
+        if (options_.covariance == CovarianceKind::hc3) {
+            Eigen::VectorXd leverage = orthonormal.rowwise().squaredNorm();
+            if (options_.absorbedLeverage.size() == rows_) leverage += options_.absorbedLeverage.segment(first, residuals.size());
+            // hᵢᵢ = 1 makes the HC3 weight infinite: the covariance is undefined, not huge.
+            weights = (leverage.array() < 1.0).select(weights.array() / (1.0 - leverage.array()).square(), notANumber);
+        }
+        sum_.noalias() += orthonormal.transpose() * weights.asDiagonal() * orthonormal;
+    }
+
+    Eigen::MatrixXd meat() const
+    {
+        const double n = static_cast<double>(rows_);
+        if (options_.covariance == CovarianceKind::hc1) return sum_ * (n / residualDegreesOfFreedom_);
+        if (options_.covariance == CovarianceKind::hc3) return sum_;
+        const double g = static_cast<double>(clusterCount_);
+        return (g / (g - 1.0)) * ((n - 1.0) / residualDegreesOfFreedom_) * (sum_ * sum_.transpose());
+    }
+
+private:
+    const LeastSquaresOptions& options_;
+    const Eigen::MatrixXd& bread_;
+    Eigen::Index rows_;
+    Eigen::Index clusterCount_;
+    double residualDegreesOfFreedom_;
+    Eigen::MatrixXd sum_;
+};
+
+// Well-conditioned designs (the usual logs of inputs) are factorised in double, blocked; the rest,
+// and every rank decision that the double factor cannot settle, in long double.
+struct ChosenFactor {
+    LeastSquaresFactor factor;
+    ResponseMoments response;
+    bool inDouble = false;
+};
+
+ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions& options)
+{
+    DoubleRouteFactor fast = factorByBlocksInDouble(rows, options.rowsPerBlock);
+    ChosenFactor chosen;
+    chosen.response = fast.response;
+    const Eigen::Index p = rows.columns();
+    const bool rankDeficient = fast.factor.singularValues(p - 1) <= options.rankTolerance * fast.factor.singularValues(0);
+    chosen.inDouble = !rankDeficient && options.doublePrecisionErrorLimit > 0 &&
+                      fast.errorEstimate <= options.doublePrecisionErrorLimit;
+    chosen.factor = chosen.inDouble ? std::move(fast.factor) : factorInExtendedPrecision(rows, fast.factor.columnScales);
+    return chosen;
+}
+
 } // namespace
 
 CollinearColumns::CollinearColumns(std::vector<Eigen::Index> columns)
@@ -102,33 +142,27 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
                                    std::optional<Eigen::Index> interceptColumn,
                                    const LeastSquaresOptions& options)
 {
-    validateShapes(design, response, interceptColumn);
-    if (!(options.confidenceLevel > 0 && options.confidenceLevel < 1))
-        throw std::invalid_argument("confidenceLevel: must lie strictly between 0 and 1");
-    if (options.absorbedParameters < 0 || design.rows() <= design.cols() + options.absorbedParameters)
-        throw std::invalid_argument("design: needs more rows than parameters, absorbed ones included");
-    const bool clustered = options.covariance == CovarianceKind::cluster;
-    const Eigen::Index clusterCount = clustered ? countClusters(options.clusters, design.rows()) : 0;
+    if (design.rows() != response.size())
+        throw std::invalid_argument("design and response: different numbers of rows");
+    return fitLeastSquares(MatrixRows(design, response), interceptColumn, options);
+}
 
-    const Eigen::Index n = design.rows();
-    const Eigen::Index p = design.cols();
+LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eigen::Index> interceptColumn,
+                                   const LeastSquaresOptions& options)
+{
+    validateShape(rows, interceptColumn, options);
+    const bool clustered = options.covariance == CovarianceKind::cluster;
+    const Eigen::Index clusterCount = clustered ? countClusters(options.clusters, rows.rows()) : 0;
+
+    const Eigen::Index n = rows.rows();
+    const Eigen::Index p = rows.columns();
     const Eigen::Index allParameters = p + options.absorbedParameters;
 
-    // Equilibrate: columns of about unit norm make the rank decision and the condition number
-    // independent of the units the user's data come in. The scale factors are powers of two, so
-    // scaling perturbs no digit of the data (an inexact scaling alone costs Wampler5 three digits).
-    Eigen::VectorXd inverseNorms(p);
-    for (Eigen::Index j = 0; j < p; ++j) {
-        const double norm = design.col(j).norm();
-        if (norm == 0) throw CollinearColumns({j});
-        inverseNorms(j) = std::ldexp(1.0, -std::ilogb(norm));
-    }
-    const Eigen::MatrixXd scaledDesign = design * inverseNorms.asDiagonal();
-
-    // Well-conditioned designs (the usual logs of inputs) are factorised in double, vectorised;
-    // the rest, and every rank decision, in long double (least_squares_factor.hpp).
-    std::optional<LeastSquaresFactor> fast = factorInDouble(scaledDesign, response, options.doublePrecisionErrorLimit);
-    const LeastSquaresFactor factor = fast ? std::move(*fast) : factorInExtendedPrecision(scaledDesign, response);
+    // Columns are equilibrated by powers of two (least_squares_factor.hpp): the rank decision and
+    // the condition number do not depend on the units of the data, and no digit of it is perturbed
+    // (an inexact scaling alone costs Wampler5 three digits).
+    ChosenFactor chosen = chooseFactor(rows, options);
+    LeastSquaresFactor& factor = chosen.factor;
     const Eigen::VectorXd& singularValues = factor.singularValues;
     if (singularValues(p - 1) <= options.rankTolerance * singularValues(0))
         throw CollinearColumns(columnsInNullDirection(factor.nullDirection));
@@ -142,38 +176,42 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     result.covarianceKind = options.covariance;
     result.confidenceLevel = options.confidenceLevel;
     result.conditionNumber = singularValues(0) / singularValues(p - 1);
-    result.factorisedInDouble = fast.has_value();
-
-    result.coefficients = inverseNorms.cwiseProduct(factor.coefficients);
-    result.residuals = factor.residuals;
+    result.factorisedInDouble = chosen.inDouble;
+    result.coefficients = factor.coefficients;
 
     const double df = static_cast<double>(n - allParameters);
     result.residualDegreesOfFreedom = df;
     // Cluster errors rest on G cluster scores, so inference uses t(G−1) and F(q, G−1).
     const double inferenceDf = clustered ? static_cast<double>(clusterCount - 1) : df;
     result.inferenceDegreesOfFreedom = inferenceDf;
+
+    // (XᵀX)⁻¹ = H·Hᵀ with H = D·P·R⁻¹ (D the column scales, P the pivoting).
+    const Eigen::MatrixXd bread = factor.columnScales.asDiagonal() * (factor.permutation * factor.upperInverse);
+    // A second pass: the residuals (the extended route has them already) and the robust meat.
+    const bool robust = options.covariance != CovarianceKind::classical;
+    MeatAccumulator meat(options, bread, n, clusterCount, df);
+    if (factor.residuals.size() != n) factor.residuals.resize(n);
+    const bool needResiduals = chosen.inDouble;
+    if (needResiduals || robust) {
+        forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
+            auto residuals = factor.residuals.segment(first, design.rows());
+            if (needResiduals) residuals = response - design * factor.coefficients;
+            if (robust) meat.add(first, design, residuals);
+        });
+    }
+    result.residuals = std::move(factor.residuals);
     result.residualSumOfSquares = result.residuals.squaredNorm();
-    result.totalSumOfSquares = interceptColumn
-                                   ? (response.array() - response.mean()).matrix().squaredNorm()
-                                   : response.squaredNorm();
+    result.totalSumOfSquares =
+        interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;
     result.rSquared = 1.0 - result.residualSumOfSquares / result.totalSumOfSquares;
     const double centring = interceptColumn ? 1.0 : 0.0;
     result.adjustedRSquared = 1.0 - (1.0 - result.rSquared) * (static_cast<double>(n) - centring) / df;
     result.residualStandardDeviation = std::sqrt(result.residualSumOfSquares / df);
 
-    // (XᵀX)⁻¹ = H·Hᵀ with H = D·P·R⁻¹ (D the inverse column norms, P the pivoting).
-    const Eigen::MatrixXd pivotedInverse = factor.permutation * factor.upperInverse;
-    const Eigen::MatrixXd bread = inverseNorms.asDiagonal() * pivotedInverse;
-    if (options.covariance == CovarianceKind::classical) {
+    if (robust)
+        result.covariance = bread * meat.meat() * bread.transpose();
+    else
         result.covariance = (result.residualSumOfSquares / df) * (bread * bread.transpose());
-    } else {
-        const Eigen::MatrixXd orthonormalFactor = scaledDesign * pivotedInverse;
-        const Eigen::MatrixXd meat =
-            clustered ? clusterMeat(orthonormalFactor, result.residuals, options.clusters, clusterCount, df)
-                      : robustMeat(orthonormalFactor, result.residuals, options.covariance, df,
-                                         options.absorbedLeverage);
-        result.covariance = bread * meat * bread.transpose();
-    }
 
     result.standardErrors = result.covariance.diagonal().cwiseSqrt();
     result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
@@ -203,7 +241,7 @@ LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::V
     result.aic = -2.0 * result.logLikelihood + 2.0 * static_cast<double>(allParameters);
     result.bic = -2.0 * result.logLikelihood + static_cast<double>(allParameters) * std::log(nd);
 
-    if (std::sqrt(result.residualSumOfSquares) <= options.perfectFitTolerance * response.norm())
+    if (std::sqrt(result.residualSumOfSquares) <= options.perfectFitTolerance * std::sqrt(chosen.response.sumOfSquares))
         result.status = FitStatus::perfectFit;
     else if (result.conditionNumber > options.conditionWarning)
         result.status = FitStatus::illConditioned;

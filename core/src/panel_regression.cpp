@@ -105,70 +105,78 @@ Eigen::Index panelParameterCount(const PanelColumns& panel, EffectsKind effects)
     return count;
 }
 
-PanelRegression fitPanelRegression(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
-                                   const PanelColumns& panel, EffectsKind effects, LeastSquaresOptions options)
+PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumns& panel, EffectsKind effects,
+                                   LeastSquaresOptions options)
 {
     PanelRegression result;
-    result.baseColumns = design.cols();
+    result.baseColumns = base.columns();
     result.effectsAbsorbConstant = effects != EffectsKind::none;
-    const Eigen::Index n = design.rows();
+    const Eigen::Index n = base.rows();
     const auto groups = static_cast<Eigen::Index>(panel.groupLabels.size());
-
-    // The extended design: base columns, then the trend or the period dummies.
-    Eigen::MatrixXd extended = design;
-    auto append = [&extended](const Eigen::MatrixXd& columns) {
-        Eigen::MatrixXd wider(extended.rows(), extended.cols() + columns.cols());
-        wider << extended, columns;
-        extended = std::move(wider);
-    };
-    if (panel.hasPeriods() && effects != EffectsKind::twoWay) {
-        result.trendOrigin = panel.periods.minCoeff();
-        if (panel.periods.maxCoeff() == result.trendOrigin)
-            throw InputError("trend: every row holds the same period; a trend needs at least two different periods");
-        result.trendColumn = extended.cols();
-        append((panel.periods.array() - result.trendOrigin).matrix());
-    }
-    if (effects == EffectsKind::twoWay) {
-        result.periodValues = distinctPeriods(panel.periods);
-        if (result.periodValues.size() < 2)
-            throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
-        result.firstPeriodColumn = extended.cols();
-        append(periodDummies(panel.periods, result.periodValues));
-    }
-
     if (options.covariance == CovarianceKind::cluster) options.clusters = panel.groupOfRow;
 
-    Eigen::MatrixXd runDesign = extended;
-    Eigen::VectorXd runResponse = response;
+    LeastSquaresResult run;
+    auto fitRows = [&](const RegressionRows& rows) {
+        try {
+            run = fitLeastSquares(rows, result.effectsAbsorbConstant ? std::nullopt : std::optional<Eigen::Index>(0),
+                                  options);
+        } catch (const CollinearColumns& collinear) {
+            std::vector<Eigen::Index> columns = collinear.columns();
+            if (result.effectsAbsorbConstant) {
+                for (auto& column : columns) ++column;
+                columns.insert(columns.begin(), 0);
+            }
+            throw CollinearPanelColumns(columns);
+        }
+    };
     Eigen::MatrixXd columnMeans;
     Eigen::VectorXd responseMeans;
-    if (result.effectsAbsorbConstant) {
-        const Eigen::MatrixXd slopes = extended.rightCols(extended.cols() - 1);
-        columnMeans = groupMeans(slopes, panel.groupOfRow, groups);
-        responseMeans = groupMeans(response, panel.groupOfRow, groups).col(0);
-        runDesign = withinGroups(slopes, columnMeans, panel.groupOfRow);
-        runResponse = withinGroups(response, responseMeans, panel.groupOfRow).col(0);
-        for (Eigen::Index j = 0; j < runDesign.cols(); ++j)
-            if (runDesign.col(j).norm() <= withinVariationTolerance * slopes.col(j).norm())
-                throw CollinearPanelColumns({0, j + 1});
-        options.absorbedParameters = groups;
-        Eigen::VectorXd groupSizes = Eigen::VectorXd::Zero(groups);
-        for (const Eigen::Index g : panel.groupOfRow) groupSizes(g) += 1.0;
-        options.absorbedLeverage.resize(n);
-        for (Eigen::Index i = 0; i < n; ++i) options.absorbedLeverage(i) = 1.0 / groupSizes(panel.groupOfRow[static_cast<std::size_t>(i)]);
-    }
-
-    LeastSquaresResult run;
-    try {
-        run = fitLeastSquares(runDesign, runResponse, result.effectsAbsorbConstant ? std::nullopt : std::optional<Eigen::Index>(0),
-                              options);
-    } catch (const CollinearColumns& collinear) {
-        std::vector<Eigen::Index> columns = collinear.columns();
-        if (result.effectsAbsorbConstant) {
-            for (auto& column : columns) ++column;
-            columns.insert(columns.begin(), 0);
+    // Without a trend or effects the base rows are the regression: they are never held in full.
+    if (!panel.hasPeriods() && effects == EffectsKind::none) {
+        fitRows(base);
+    } else {
+        // The extended design: base columns, then the trend or the period dummies.
+        Eigen::MatrixXd extended(n, base.columns());
+        Eigen::VectorXd response(n);
+        base.fill(0, extended, response);
+        auto append = [&extended](const Eigen::MatrixXd& columns) {
+            Eigen::MatrixXd wider(extended.rows(), extended.cols() + columns.cols());
+            wider << extended, columns;
+            extended = std::move(wider);
+        };
+        if (panel.hasPeriods() && effects != EffectsKind::twoWay) {
+            result.trendOrigin = panel.periods.minCoeff();
+            if (panel.periods.maxCoeff() == result.trendOrigin)
+                throw InputError("trend: every row holds the same period; a trend needs at least two different periods");
+            result.trendColumn = extended.cols();
+            append((panel.periods.array() - result.trendOrigin).matrix());
         }
-        throw CollinearPanelColumns(columns);
+        if (effects == EffectsKind::twoWay) {
+            result.periodValues = distinctPeriods(panel.periods);
+            if (result.periodValues.size() < 2)
+                throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
+            result.firstPeriodColumn = extended.cols();
+            append(periodDummies(panel.periods, result.periodValues));
+        }
+
+        if (result.effectsAbsorbConstant) {
+            const Eigen::MatrixXd slopes = extended.rightCols(extended.cols() - 1);
+            columnMeans = groupMeans(slopes, panel.groupOfRow, groups);
+            responseMeans = groupMeans(response, panel.groupOfRow, groups).col(0);
+            const Eigen::MatrixXd runDesign = withinGroups(slopes, columnMeans, panel.groupOfRow);
+            const Eigen::VectorXd runResponse = withinGroups(response, responseMeans, panel.groupOfRow).col(0);
+            for (Eigen::Index j = 0; j < runDesign.cols(); ++j)
+                if (runDesign.col(j).norm() <= withinVariationTolerance * slopes.col(j).norm())
+                    throw CollinearPanelColumns({0, j + 1});
+            options.absorbedParameters = groups;
+            Eigen::VectorXd groupSizes = Eigen::VectorXd::Zero(groups);
+            for (const Eigen::Index g : panel.groupOfRow) groupSizes(g) += 1.0;
+            options.absorbedLeverage.resize(n);
+            for (Eigen::Index i = 0; i < n; ++i) options.absorbedLeverage(i) = 1.0 / groupSizes(panel.groupOfRow[static_cast<std::size_t>(i)]);
+            fitRows(MatrixRows(runDesign, runResponse));
+        } else {
+            fitRows(MatrixRows(extended, response));
+        }
     }
 
     if (result.effectsAbsorbConstant) {
@@ -176,7 +184,7 @@ PanelRegression fitPanelRegression(const Eigen::MatrixXd& design, const Eigen::V
         result.withinRSquared = run.rSquared; // uncentred R² of the demeaned response
         result.regression = withConstantColumn(run, result.groupEffects.mean());
     } else {
-        result.regression = run;
+        result.regression = std::move(run);
     }
     const Eigen::VectorXd& coefficients = result.regression.coefficients;
     if (result.trendColumn)

@@ -16,48 +16,75 @@ namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
-// The regression behind a Cobb-Douglas fit, and how to map its parameters θ back to
-// β = (ln A, b₁…b_k, c₁…c_m):  β = transform·θ + offset.
-struct LogLinearDesign {
-    Eigen::MatrixXd design;
-    Eigen::VectorXd response;
+// The regression behind a Cobb-Douglas fit, its rows taken a block at a time (logs included), so
+// that a million-row fit never holds a log design:
+//   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ,   or with constant returns imposed
+//   ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + Σⱼ cⱼ zⱼ,  b_k = 1 − Σ_{i<k} bᵢ.
+class CobbDouglasRows : public RegressionRows {
+public:
+    CobbDouglasRows(const ProductionData& data, bool constantReturns) : data_(data), constantReturns_(constantReturns) {}
+
+    Eigen::Index rows() const override { return data_.output.size(); }
+    Eigen::Index columns() const override { return 1 + slopes() + data_.controls.cols(); }
+
+    void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
+    {
+        const Eigen::Index count = design.rows();
+        const Eigen::Index k = data_.inputs.cols();
+        design.col(0).setOnes();
+        response = data_.output.segment(first, count).array().log().matrix();
+        design.middleCols(1, slopes()) = data_.inputs.block(first, 0, count, slopes()).array().log().matrix();
+        if (constantReturns_) {
+            const Eigen::VectorXd lastLog = data_.inputs.col(k - 1).segment(first, count).array().log().matrix();
+            response -= lastLog;
+            design.middleCols(1, slopes()).colwise() -= lastLog;
+        }
+        design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
+    }
+
+private:
+    Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
+
+    const ProductionData& data_;
+    bool constantReturns_;
+};
+
+// How the regression's parameters θ map back to β = (ln A, b₁…b_k, c₁…c_m):  β = transform·θ + offset.
+struct ParameterMap {
     Eigen::MatrixXd transform;
     Eigen::VectorXd offset;
 };
 
-LogLinearDesign buildDesign(const ProductionData& data, bool constantReturns)
+ParameterMap parameterMap(Eigen::Index k, Eigen::Index m, bool constantReturns)
 {
-    const Eigen::Index n = data.output.size();
-    const Eigen::Index k = data.inputs.cols();
-    const Eigen::Index m = data.controls.cols();
-    const Eigen::MatrixXd logInputs = data.inputs.array().log().matrix();
     const Eigen::Index slopes = constantReturns ? k - 1 : k;
-
-    LogLinearDesign built;
-    built.design.resize(n, 1 + slopes + m);
-    built.design.col(0).setOnes();
-    built.response = data.output.array().log().matrix();
-    built.transform = Eigen::MatrixXd::Zero(1 + k + m, 1 + slopes + m);
-    built.offset = Eigen::VectorXd::Zero(1 + k + m);
-    built.transform(0, 0) = 1.0;
-    for (Eigen::Index j = 0; j < m; ++j) built.transform(1 + k + j, 1 + slopes + j) = 1.0;
-    built.design.rightCols(m) = data.controls;
-
-    if (!constantReturns) {
-        built.design.middleCols(1, k) = logInputs;
-        for (Eigen::Index i = 0; i < k; ++i) built.transform(1 + i, 1 + i) = 1.0;
-        return built;
+    ParameterMap map;
+    map.transform = Eigen::MatrixXd::Zero(1 + k + m, 1 + slopes + m);
+    map.offset = Eigen::VectorXd::Zero(1 + k + m);
+    map.transform(0, 0) = 1.0;
+    for (Eigen::Index j = 0; j < m; ++j) map.transform(1 + k + j, 1 + slopes + j) = 1.0;
+    for (Eigen::Index i = 0; i < slopes; ++i) map.transform(1 + i, 1 + i) = 1.0;
+    if (constantReturns) {
+        map.transform.block(k, 1, 1, slopes).setConstant(-1.0);
+        map.offset(k) = 1.0;
     }
-    // ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + …, and b_k = 1 − Σ_{i<k} bᵢ.
-    const Eigen::VectorXd lastLog = logInputs.col(k - 1);
-    built.response -= lastLog;
-    for (Eigen::Index i = 0; i < slopes; ++i) {
-        built.design.col(1 + i) = logInputs.col(i) - lastLog;
-        built.transform(1 + i, 1 + i) = 1.0;
-        built.transform(k, 1 + i) = -1.0;
-    }
-    built.offset(k) = 1.0;
-    return built;
+    return map;
+}
+
+// Σ(ln Y − mean ln Y)², by two passes over Y (no vector of logs is kept).
+double centredSumOfSquaresOfLogs(const Eigen::VectorXd& output)
+{
+    const double mean = output.array().log().mean();
+    return (output.array().log() - mean).square().sum();
+}
+
+// TSS of ln Y: the regression's own when its response is ln Y with a constant column (no
+// constant returns imposed, no group effects), else counted apart.
+double totalSumOfSquaresOfLogs(const ProductionData& data, const ProductionFitOptions& options,
+                               const LeastSquaresResult& regression)
+{
+    const bool responseIsLogOutput = !options.constantReturns && options.effects == EffectsKind::none;
+    return responseIsLogOutput ? regression.totalSumOfSquares : centredSumOfSquaresOfLogs(data.output);
 }
 
 std::string listOfNames(const std::vector<std::string>& names)
@@ -170,8 +197,9 @@ ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index
             regression.pValues(column),      regression.lowerBounds(column),    regression.upperBounds(column)};
 }
 
+// `regression` is run.regression, moved into the fit.
 PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, const PanelRegression& run,
-                            double logScaleAtControlMeans)
+                            const LeastSquaresResult& regression, double logScaleAtControlMeans)
 {
     PanelSummary summary;
     summary.effects = effects;
@@ -185,9 +213,9 @@ PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, cons
         summary.periods = run.periodValues;
         const auto later = static_cast<Eigen::Index>(run.periodValues.size()) - 1;
         summary.periodEffects.resize(later + 1);
-        summary.periodEffects << 0.0, run.regression.coefficients.segment(run.firstPeriodColumn, later);
+        summary.periodEffects << 0.0, regression.coefficients.segment(run.firstPeriodColumn, later);
     }
-    if (run.trendColumn) summary.technicalChange = parameterAt(run.regression, *run.trendColumn);
+    if (run.trendColumn) summary.technicalChange = parameterAt(regression, *run.trendColumn);
     summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
     summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;
     return summary;
@@ -231,8 +259,9 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     requirePanelColumns(data, options);
 
 
-    const LogLinearDesign built = buildDesign(data, options.constantReturns);
-    const Eigen::Index baseColumns = built.design.cols();
+    const CobbDouglasRows rows(data, options.constantReturns);
+    const ParameterMap map = parameterMap(k, m, options.constantReturns);
+    const Eigen::Index baseColumns = rows.columns();
     const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
     if (n < p + 1) {
         const std::string groupNote = options.effects == EffectsKind::none
@@ -242,8 +271,6 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
                          " of data for " + std::to_string(p) + " parameters to estimate" + groupNote +
                          "; need at least " + std::to_string(p + 1));
     }
-    const Eigen::VectorXd logOutput = data.output.array().log().matrix();
-    const double totalSumOfSquares = (logOutput.array() - logOutput.mean()).matrix().squaredNorm();
     // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
     if (data.output.maxCoeff() == data.output.minCoeff())
         throw InputError("output: every row holds the same value; there is no variation to explain");
@@ -254,11 +281,11 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     ProductionFit fit;
     PanelRegression run;
     try {
-        run = fitPanelRegression(built.design, built.response, data.panel, options.effects, regressionOptions);
+        run = fitPanelRegression(rows, data.panel, options.effects, regressionOptions);
     } catch (const CollinearColumns& collinear) {
         throw InputError(collinearityMessage(data, options.constantReturns, options.effects, collinear.columns()));
     }
-    fit.regression = run.regression;
+    fit.regression = std::move(run.regression);
     const LeastSquaresResult& regression = fit.regression;
 
     fit.form = options.form;
@@ -266,9 +293,9 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
     // The form's parameters come from the base columns; the trend and period effects are reported apart.
-    fit.estimates = built.transform * regression.coefficients.head(baseColumns) + built.offset;
-    fit.covariance = built.transform * regression.covariance.topLeftCorner(baseColumns, baseColumns) *
-                     built.transform.transpose();
+    fit.estimates = map.transform * regression.coefficients.head(baseColumns) + map.offset;
+    fit.covariance = map.transform * regression.covariance.topLeftCorner(baseColumns, baseColumns) *
+                     map.transform.transpose();
     if (run.effectsAbsorbConstant) {
         // ln A is the mean group effect, reported without a standard error (panel_regression.hpp).
         fit.covariance.row(0).setConstant(notANumber);
@@ -285,14 +312,14 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     fit.lowerBounds = fit.estimates - critical * fit.standardErrors;
     fit.upperBounds = fit.estimates + critical * fit.standardErrors;
 
-    fit.rSquared = 1.0 - regression.residualSumOfSquares / totalSumOfSquares;
+    fit.rSquared = 1.0 - regression.residualSumOfSquares / totalSumOfSquaresOfLogs(data, options, regression);
     fit.adjustedRSquared = 1.0 - (1.0 - fit.rSquared) * static_cast<double>(n - 1) / df;
 
     fit.returns = returnsToScale(fit, regression, k, options.constantReturns, options.confidenceLevel);
     fit.logScaleAtControlMeans = fit.estimates(0);
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
     fit.smearingFactor = run.smearingFactor;
-    fit.panel = summarisePanel(data.panel, options.effects, run, fit.logScaleAtControlMeans);
+    fit.panel = summarisePanel(data.panel, options.effects, run, fit.regression, fit.logScaleAtControlMeans);
     return fit;
 }
 

@@ -73,3 +73,12 @@ BOOST_DATA_TEST_CASE(nist_certified_values_in_extended_precision, bdata::make(ni
     options.doublePrecisionErrorLimit = 0;
     checkCertifiedValues(nistCase, options);
 }
+
+// The double route folds the rows in blocks (TSQR); with two rows per block every set is folded in
+// many steps, and every certified value must still be reached.
+BOOST_DATA_TEST_CASE(nist_certified_values_with_two_rows_per_block, bdata::make(nistCases), nistCase)
+{
+    isoquant::LeastSquaresOptions options;
+    options.rowsPerBlock = 2;
+    checkCertifiedValues(nistCase, options);
+}

@@ -49,6 +49,11 @@ struct LeastSquaresOptions {
     Eigen::VectorXd absorbedLeverage;
     // For CovarianceKind::cluster: the cluster (0 … G−1) of every row; ignored otherwise.
     std::vector<Eigen::Index> clusters;
+    // Rows factorised at a time by the double route (a TSQR: each block is stacked under the
+    // triangular factor so far), and visited at a time by the passes for residuals and robust
+    // errors. Memory beyond the results stays O(rowsPerBlock·p) for any n; results do not depend
+    // on it beyond rounding. At least 1.
+    Eigen::Index rowsPerBlock = 512;
 };
 
 enum class FitStatus {
@@ -96,6 +101,35 @@ struct LeastSquaresResult {
     FitStatus status = FitStatus::ok;
 };
 
+// The rows of a regression, produced a block at a time, so that a fit over a million rows never
+// holds its design in memory (the Cobb-Douglas fit takes logs block by block).
+class RegressionRows {
+public:
+    virtual ~RegressionRows() = default;
+    virtual Eigen::Index rows() const = 0;
+    virtual Eigen::Index columns() const = 0;
+    // Writes rows first … first + design.rows() − 1 of the design and of the response.
+    virtual void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design,
+                      Eigen::Ref<Eigen::VectorXd> response) const = 0;
+};
+
+// A design and response held in memory, as rows.
+class MatrixRows : public RegressionRows {
+public:
+    MatrixRows(const Eigen::MatrixXd& design, const Eigen::VectorXd& response) : design_(design), response_(response) {}
+    Eigen::Index rows() const override { return design_.rows(); }
+    Eigen::Index columns() const override { return design_.cols(); }
+    void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
+    {
+        design = design_.middleRows(first, design.rows());
+        response = response_.segment(first, response.size());
+    }
+
+private:
+    const Eigen::MatrixXd& design_;
+    const Eigen::VectorXd& response_;
+};
+
 // Thrown when the design is numerically rank deficient. `columns` lists the design columns with a
 // non-negligible weight in the (near) null-space direction: those that are collinear together.
 class CollinearColumns : public std::runtime_error {
@@ -107,11 +141,14 @@ private:
     std::vector<Eigen::Index> columns_;
 };
 
-// Fits y = X·b by column-pivoting Householder QR on the column-scaled design, with one step of
-// iterative refinement. `interceptColumn` names the constant column, if any: it decides how TSS,
-// R² and the overall F are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1,
-// finite data and, for cluster errors, a cluster for every row and at least 2 clusters
-// (std::invalid_argument otherwise); throws CollinearColumns at numerical rank deficiency.
+// Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
+// estimate allows, else with column pivoting in long double (see LeastSquaresOptions).
+// `interceptColumn` names the constant column, if any: it decides how TSS, R² and the overall F
+// are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1, finite data and, for
+// cluster errors, a cluster for every row and at least 2 clusters (std::invalid_argument
+// otherwise); throws CollinearColumns at numerical rank deficiency.
+LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eigen::Index> interceptColumn,
+                                   const LeastSquaresOptions& options = {});
 LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
                                    std::optional<Eigen::Index> interceptColumn,
                                    const LeastSquaresOptions& options = {});

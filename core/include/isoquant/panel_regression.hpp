@@ -84,12 +84,13 @@ public:
 // two-way effects, and under effects the G − 1 group effects beyond the constant they replace.
 Eigen::Index panelParameterCount(const PanelColumns& panel, EffectsKind effects);
 
-// `design` has the constant in column 0. options.covariance = cluster clusters by the groups;
+// `base` has the constant in column 0; without a trend and effects it is visited a block at a
+// time and never held in full. options.covariance = cluster clusters by the groups;
 // the caller has checked that the panel columns needed are there (groups for effects and
 // clusters, periods for a trend and two-way effects) and have one entry per row. Throws
 // InputError when the periods do not vary (trend) or there is only one (two-way), and
 // CollinearPanelColumns at rank deficiency.
-PanelRegression fitPanelRegression(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
-                                   const PanelColumns& panel, EffectsKind effects, LeastSquaresOptions options);
+PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumns& panel, EffectsKind effects,
+                                   LeastSquaresOptions options);
 
 } // namespace isoquant

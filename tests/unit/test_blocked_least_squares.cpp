@@ -1,0 +1,101 @@
+// The blocked (TSQR) factorisation against itself: results must not depend on the block size or
+// on the units of the data. Invented data (property tests).
+#include "isoquant/least_squares.hpp"
+
+#include <boost/test/data/test_case.hpp>
+#include <boost/test/unit_test.hpp>
+
+#include <cmath>
+#include <random>
+
+namespace bdata = boost::unit_test::data;
+
+namespace {
+
+struct Regression {
+    Eigen::MatrixXd design;
+    Eigen::VectorXd response;
+    std::vector<Eigen::Index> clusters;
+};
+
+Regression invented(Eigen::Index rows)
+{
+    std::mt19937 generator(20261202u);
+    std::normal_distribution<double> normal;
+    Regression data;
+    data.design.resize(rows, 4);
+    data.response.resize(rows);
+    for (Eigen::Index i = 0; i < rows; ++i) {
+        data.design(i, 0) = 1.0;
+        for (Eigen::Index j = 1; j < 4; ++j) data.design(i, j) = 3.0 + normal(generator);
+        const double noise = (0.5 + std::fabs(data.design(i, 1) - 3.0)) * normal(generator); // heteroskedastic
+        data.response(i) = 0.5 + 0.3 * data.design(i, 1) + 0.6 * data.design(i, 2) - 0.2 * data.design(i, 3) + noise;
+        data.clusters.push_back(i % 17);
+    }
+    return data;
+}
+
+// Relative agreement of two vectors, measured against the larger norm.
+double relativeDifference(const Eigen::VectorXd& a, const Eigen::VectorXd& b)
+{
+    return (a - b).norm() / std::max(a.norm(), b.norm());
+}
+
+const int kinds[] = {static_cast<int>(isoquant::CovarianceKind::classical), static_cast<int>(isoquant::CovarianceKind::hc1),
+                     static_cast<int>(isoquant::CovarianceKind::hc3), static_cast<int>(isoquant::CovarianceKind::cluster)};
+
+} // namespace
+
+BOOST_DATA_TEST_CASE(block_size_changes_no_result_beyond_rounding, bdata::make(kinds), kind)
+{
+    const Regression data = invented(1000);
+    isoquant::LeastSquaresOptions options;
+    options.covariance = static_cast<isoquant::CovarianceKind>(kind);
+    options.clusters = data.clusters;
+    options.rowsPerBlock = 100000; // one block
+    const auto whole = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    for (const Eigen::Index rowsPerBlock : {1, 7, 64}) {
+        options.rowsPerBlock = rowsPerBlock;
+        const auto blocked = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+        BOOST_TEST(blocked.factorisedInDouble);
+        // 1e-12: a few hundred units of rounding for different orders of the same sums
+        // (common practice, no source).
+        BOOST_TEST(relativeDifference(blocked.coefficients, whole.coefficients) <= 1e-12);
+        BOOST_TEST(relativeDifference(blocked.standardErrors, whole.standardErrors) <= 1e-12);
+        BOOST_TEST(relativeDifference(blocked.residuals, whole.residuals) <= 1e-12);
+        BOOST_TEST(std::fabs(blocked.rSquared - whole.rSquared) <= 1e-12);
+    }
+}
+
+// Power-of-two units are exact: a column 2^1000 times larger (values near 1e301, whose squares
+// overflow) must give the same fit with its coefficient 2^1000 times smaller, bit for bit.
+BOOST_AUTO_TEST_CASE(huge_columns_are_scaled_before_any_square_is_taken)
+{
+    const Regression data = invented(300);
+    Eigen::MatrixXd huge = data.design;
+    const double factor = std::ldexp(1.0, 1000);
+    huge.col(2) *= factor;
+    isoquant::LeastSquaresOptions options;
+    options.rowsPerBlock = 50;
+    const auto plain = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    const auto scaled = isoquant::fitLeastSquares(huge, data.response, 0, options);
+    BOOST_TEST(scaled.coefficients.allFinite());
+    BOOST_TEST(scaled.coefficients(2) * factor == plain.coefficients(2));
+    BOOST_TEST(scaled.coefficients(1) == plain.coefficients(1));
+    BOOST_TEST(scaled.standardErrors(3) == plain.standardErrors(3));
+    BOOST_TEST(scaled.conditionNumber == plain.conditionNumber);
+}
+
+// A later block with much larger values than the first ones rescales the factor built so far.
+BOOST_AUTO_TEST_CASE(a_later_block_of_larger_values_rescales_the_factor)
+{
+    Regression data = invented(400);
+    data.design.col(3).tail(200) *= std::ldexp(1.0, 600); // the last 20 blocks of 10 rows near 1e181
+    isoquant::LeastSquaresOptions options;
+    options.rowsPerBlock = 100000;
+    const auto whole = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    options.rowsPerBlock = 10;
+    const auto blocked = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    BOOST_TEST(relativeDifference(blocked.coefficients, whole.coefficients) <= 1e-12);
+    BOOST_TEST(blocked.coefficients.allFinite());
+}
