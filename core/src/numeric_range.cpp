@@ -2,6 +2,7 @@
 
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
+#include "isoquant/work_limits.hpp"
 
 #include <cmath>
 #include <stdexcept>
@@ -32,6 +33,7 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
                                   const std::string& defaultLabelPrefix, const std::vector<bool>* skippedRows)
 {
     if (range.empty()) throw InputError(argument + ": the range is empty");
+    checkRangeSize(range.rows(), range.columns(), argument);
 
     NumericColumns result;
     result.hasHeader = rowIsAllText(range, 0);

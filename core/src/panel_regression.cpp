@@ -1,6 +1,7 @@
 #include "isoquant/panel_regression.hpp"
 
 #include "isoquant/input_error.hpp"
+#include "isoquant/work_limits.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -156,6 +157,10 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
             if (result.periodValues.size() < 2)
                 throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
             result.firstPeriodColumn = extended.cols();
+            const auto later = static_cast<std::size_t>(result.periodValues.size() - 1);
+            checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(extended.cols()) + later, "trend",
+                            "two-way effects with " + groupedCount(later + 1) + " periods",
+                            "use a trend instead of two-way effects, or fewer periods");
             append(periodDummies(panel.periods, result.periodValues));
         }
 

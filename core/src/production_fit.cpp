@@ -5,6 +5,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 #include "isoquant/translog_fit.hpp"
+#include "isoquant/work_limits.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -263,6 +264,10 @@ ProductionFit fitProduction(const ProductionData& data, const ProductionFitOptio
     const ParameterMap map = parameterMap(k, m, options.constantReturns);
     const Eigen::Index baseColumns = rows.columns();
     const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
+    // The design is held in full with a trend or effects, or when it needs the long double route.
+    const Eigen::Index trendColumns = data.panel.hasPeriods() && options.effects != EffectsKind::twoWay ? 1 : 0;
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(baseColumns + trendColumns), "inputs",
+                    "the cobb-douglas form with " + std::to_string(baseColumns + trendColumns) + " regression columns");
     if (n < p + 1) {
         const std::string groupNote = options.effects == EffectsKind::none
                                           ? ""

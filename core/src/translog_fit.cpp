@@ -1,5 +1,7 @@
 #include "isoquant/translog_fit.hpp"
 
+#include "isoquant/work_limits.hpp"
+
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
@@ -88,6 +90,8 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
         throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
                          std::to_string(p) + " parameters of the translog form; need at least " + std::to_string(p + 1));
 
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), "inputs",
+                    "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
     const Eigen::MatrixXd logs = data.inputs.array().log().matrix();
     Eigen::MatrixXd design(n, p);
     design.col(0).setOnes();
