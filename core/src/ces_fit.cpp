@@ -45,9 +45,9 @@ struct CesLogs {
 // b + H(d) for every row.
 Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature)
 {
+    const CesCompositeCurve curve(weight, curvature);
     Eigen::VectorXd column(logs.logOutput.size());
-    for (Eigen::Index i = 0; i < column.size(); ++i)
-        column(i) = logs.logSecond(i) + cesComposite(logs.logRatio(i), weight, curvature).value;
+    for (Eigen::Index i = 0; i < column.size(); ++i) column(i) = logs.logSecond(i) + curve.value(logs.logRatio(i));
     return column;
 }
 
@@ -56,15 +56,20 @@ Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
     return logs.logOutput - (raw(0) + raw(3) * compositeColumn(logs, raw(1), raw(2)).array()).matrix();
 }
 
-// ∂r/∂(ln A, δ, ρ, ν)
-Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw)
+// The second column of the Jacobian: by δ itself (inference) or by its logit t (the solver).
+enum class WeightColumn { byWeight, byLogit };
+
+// ∂r/∂(ln A, δ or t, ρ, ν) at raw = (ln A, δ, ρ, ν); H and its derivatives taken once per row.
+Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn)
 {
     const Eigen::Index n = logs.logOutput.size();
+    const CesCompositeCurve curve(raw(1), raw(2));
     Eigen::MatrixXd jacobian(n, cesParameters);
     for (Eigen::Index i = 0; i < n; ++i) {
-        const CesComposite composite = cesComposite(logs.logRatio(i), raw(1), raw(2));
+        const CesComposite composite = curve.at(logs.logRatio(i));
         jacobian(i, 0) = -1.0;
-        jacobian(i, 1) = -raw(3) * composite.byWeight;
+        // ∂/∂t stays finite even where δ rounds to 0 or 1
+        jacobian(i, 1) = -raw(3) * (weightColumn == WeightColumn::byLogit ? composite.byWeightLogit : composite.byWeight);
         jacobian(i, 2) = -raw(3) * composite.byCurvature;
         jacobian(i, 3) = -(logs.logSecond(i) + composite.value);
     }
@@ -90,10 +95,7 @@ public:
     Eigen::VectorXd residuals(const Eigen::VectorXd& solver) const override { return rawResiduals(logs_, toRaw(solver)); }
     Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override
     {
-        const Eigen::Vector4d raw = toRaw(solver);
-        Eigen::MatrixXd jacobian = rawJacobian(logs_, raw);
-        for (Eigen::Index i = 0; i < jacobian.rows(); ++i) // ∂/∂t, finite even where δ rounds to 0 or 1
-            jacobian(i, 1) = -raw(3) * cesComposite(logs_.logRatio(i), raw(1), raw(2)).byWeightLogit;
+        Eigen::MatrixXd jacobian = rawJacobian(logs_, toRaw(solver), WeightColumn::byLogit);
         jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
         return jacobian;
     }
@@ -269,7 +271,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     case CesBoundary::none: break;
     }
     const Eigen::VectorXd residuals = rawResiduals(logs, raw);
-    NonlinearInference inference = nonlinearInference(rawJacobian(logs, raw), residuals, raw, options.confidenceLevel,
+    NonlinearInference inference = nonlinearInference(rawJacobian(logs, raw, WeightColumn::byWeight), residuals, raw, options.confidenceLevel,
                                                       cesOptions.solver.rankTolerance);
     // At a boundary or away from an optimum the classical standard errors mean nothing.
     const bool inferable = details->boundary == CesBoundary::none && details->convergence == NonlinearStatus::converged;
