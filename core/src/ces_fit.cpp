@@ -75,7 +75,8 @@ Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, Wei
         const CesComposite composite = curve.at(logs.logRatio(i));
         jacobian(i, 0) = -1.0;
         // ∂/∂t stays finite even where δ rounds to 0 or 1
-        jacobian(i, 1) = -raw(3) * (weightColumn == WeightColumn::byLogit ? composite.byWeightLogit : composite.byWeight);
+        const double byWeight = weightColumn == WeightColumn::byLogit ? composite.byWeightLogit : composite.byWeight;
+        jacobian(i, 1) = -raw(3) * byWeight;
         jacobian(i, 2) = -raw(3) * composite.byCurvature;
         jacobian(i, 3) = -(logs.logSecond(i) + composite.value);
     }
@@ -215,7 +216,7 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
 
 // Each start moved to the optimum the solver reaches from it on the sample rows, so that the runs on
 // all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
-// coordinate reached the same minimum (runs into one minimum stop within about 1e-9 of each other,
+// coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
 // distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
 // not finite is replaced by the start itself.
 std::vector<Eigen::VectorXd> movedOnSample(const CesLogs& logs, const CesLogs& sample,
@@ -332,8 +333,8 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     case CesBoundary::none: break;
     }
     const Eigen::VectorXd residuals = rawResiduals(logs, raw);
-    NonlinearInference inference = nonlinearInference(rawJacobian(logs, raw, WeightColumn::byWeight), residuals, raw, options.confidenceLevel,
-                                                      cesOptions.solver.rankTolerance);
+    NonlinearInference inference = nonlinearInference(rawJacobian(logs, raw, WeightColumn::byWeight), residuals, raw,
+                                                      options.confidenceLevel, cesOptions.solver.rankTolerance);
     // At a boundary or away from an optimum the classical standard errors mean nothing.
     const bool inferable = details->boundary == CesBoundary::none && details->convergence == NonlinearStatus::converged;
     if (!inferable) {

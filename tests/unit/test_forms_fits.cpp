@@ -1,5 +1,5 @@
 // Properties of the ces and translog fits: the ces optimum does not depend on where the solver
-// starts, the forms nest Cobb-Douglas as they should, invented technologies (seeded) are recovered
+// starts nor on the rows its start search uses, the forms nest Cobb-Douglas as they should, invented technologies (seeded) are recovered
 // within their standard errors, boundary optima and unconverged fits are said so, bad input is
 // named, and the tables read back into the technologies that were fitted. Data: Cobb & Douglas
 // (1928) and the rice-farm panel (Feng and Horrace 2012), sources in tests/data/README.md.
