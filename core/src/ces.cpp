@@ -24,25 +24,40 @@ double logistic(double z) { return z >= 0 ? 1.0 / (1.0 + std::exp(-z)) : std::ex
 
 } // namespace
 
-CesComposite cesComposite(double logRatio, double weight, double curvature)
+CesCompositeCurve::CesCompositeCurve(double weight, double curvature)
+    : weight_(weight), curvature_(curvature), logWeight_(std::log(weight)), logComplement_(std::log1p(-weight))
+{
+}
+
+double CesCompositeCurve::cumulantAt(double u) const
+{
+    // K(u) = ln(1 + δ·(eᵘ − 1)): log1p/expm1 keep its relative accuracy for small |u|.
+    return std::fabs(u) <= 1 ? std::log1p(weight_ * std::expm1(u)) : logSumExp(logWeight_ + u, logComplement_);
+}
+
+double CesCompositeCurve::value(double logRatio) const
 {
     const double d = logRatio;
-    const double u = -curvature * d;
-    const double logWeight = std::log(weight);            // −∞ at δ = 0
-    const double logComplement = std::log1p(-weight);     // −∞ at δ = 1
+    const double u = -curvature_ * d;
+    return u == 0 ? weight_ * d : d * cumulantAt(u) / u;
+}
+
+CesComposite CesCompositeCurve::at(double logRatio) const
+{
+    const double d = logRatio;
+    const double u = -curvature_ * d;
+    const double weight = weight_;
     CesComposite composite;
     double cumulant = 0; // K(u)
     // π = K′(u) = δeᵘ/(δeᵘ + 1 − δ)
-    composite.firstShare = logistic(u + logWeight - logComplement);
-    composite.secondShare = logistic(-(u + logWeight - logComplement));
+    composite.firstShare = logistic(u + logWeight_ - logComplement_);
+    composite.secondShare = logistic(-(u + logWeight_ - logComplement_));
     if (u == 0) {
         composite.value = weight * d;
         composite.byWeight = d;
         composite.byWeightLogit = weight * (1 - weight) * d;
     } else {
-        // K(u) = ln(1 + δ·(eᵘ − 1)): log1p/expm1 keep its relative accuracy for small |u|.
-        cumulant =
-            std::fabs(u) <= 1 ? std::log1p(weight * std::expm1(u)) : logSumExp(logWeight + u, logComplement);
+        cumulant = cumulantAt(u);
         composite.value = d * cumulant / u;
         // ∂H/∂δ = d·(eᵘ − 1)/(u·(δeᵘ + 1 − δ)), written without eᵘ for u > 0
         composite.byWeight = u > 0 ? d * -std::expm1(-u) / (u * (weight + (1 - weight) * std::exp(-u)))
@@ -64,6 +79,11 @@ CesComposite cesComposite(double logRatio, double weight, double curvature)
         composite.byCurvature = -d * d * (u * composite.firstShare - cumulant) / (u * u);
     }
     return composite;
+}
+
+CesComposite cesComposite(double logRatio, double weight, double curvature)
+{
+    return CesCompositeCurve(weight, curvature).at(logRatio);
 }
 
 namespace {

@@ -7,6 +7,7 @@
 
 #include <cmath>
 #include <limits>
+#include <optional>
 #include <stdexcept>
 
 namespace isoquant {
@@ -72,7 +73,42 @@ NonlinearStatus statusOf(Eigen::LevenbergMarquardtSpace::Status code)
     }
 }
 
+struct GaussNewtonStep {
+    Eigen::VectorXd direction; // −J⁺·r
+    double length = 0;         // ‖J·direction‖
+};
+
+std::optional<GaussNewtonStep> gaussNewtonStep(const NonlinearModel& model, const Eigen::VectorXd& parameters,
+                                               double rankTolerance)
+{
+    const Eigen::VectorXd residuals = model.residuals(parameters);
+    const Eigen::MatrixXd jacobian = model.jacobian(parameters);
+    if (!residuals.allFinite() || !jacobian.allFinite()) return std::nullopt;
+    Eigen::ColPivHouseholderQR<Eigen::MatrixXd> qr(jacobian);
+    qr.setThreshold(rankTolerance);
+    if (qr.rank() < jacobian.cols()) return std::nullopt;
+    GaussNewtonStep step;
+    step.direction = qr.solve(-residuals);
+    step.length = (jacobian * step.direction).norm();
+    return step;
+}
+
 } // namespace
+
+Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& parameters, int maximumSteps,
+                                     double rankTolerance)
+{
+    Eigen::VectorXd refined = parameters;
+    std::optional<GaussNewtonStep> step = gaussNewtonStep(model, refined, rankTolerance);
+    for (int k = 0; step && k < maximumSteps; ++k) {
+        const Eigen::VectorXd next = refined + step->direction;
+        std::optional<GaussNewtonStep> following = gaussNewtonStep(model, next, rankTolerance);
+        if (!following || !(following->length < step->length)) break;
+        refined = next;
+        step = std::move(following);
+    }
+    return refined;
+}
 
 NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
                                       const Eigen::VectorXd& parameters, double confidenceLevel,
@@ -113,8 +149,8 @@ NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eig
     return inference;
 }
 
-NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
-                                                     const NonlinearLeastSquaresOptions& options)
+NonlinearLeastSquaresResult minimizeSumOfSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                 const NonlinearLeastSquaresOptions& options)
 {
     const Eigen::Index n = model.observationCount();
     const Eigen::Index p = model.parameterCount();
@@ -139,6 +175,13 @@ NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model
     result.jacobianEvaluations = solver.njev;
     result.observations = n;
     result.residuals = model.residuals(result.parameters);
+    return result;
+}
+
+NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                     const NonlinearLeastSquaresOptions& options)
+{
+    NonlinearLeastSquaresResult result = minimizeSumOfSquares(model, start, options);
     result.inference = nonlinearInference(model.jacobian(result.parameters), result.residuals, result.parameters,
                                           options.confidenceLevel, options.rankTolerance);
     return result;

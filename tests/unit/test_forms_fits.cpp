@@ -1,5 +1,5 @@
 // Properties of the ces and translog fits: the ces optimum does not depend on where the solver
-// starts, the forms nest Cobb-Douglas as they should, invented technologies (seeded) are recovered
+// starts nor on the rows its start search uses, the forms nest Cobb-Douglas as they should, invented technologies (seeded) are recovered
 // within their standard errors, boundary optima and unconverged fits are said so, bad input is
 // named, and the tables read back into the technologies that were fitted. Data: Cobb & Douglas
 // (1928) and the rice-farm panel (Feng and Horrace 2012), sources in tests/data/README.md.
@@ -145,6 +145,47 @@ BOOST_AUTO_TEST_CASE(ces_on_the_rice_farms_has_a_second_basin_which_the_fit_avoi
         const auto local = isoquant::fitCes(data, formOptions(isoquant::ProductionForm::ces), cesOptions);
         BOOST_TEST(local.regression.residualSumOfSquares > 1.1 * best.regression.residualSumOfSquares);
         BOOST_TEST(local.estimates(2) > 10.0);
+    }
+}
+
+// The ces fit whose grid of start values uses `searchRows` evenly spaced rows.
+isoquant::ProductionFit cesFitSearching(const isoquant::ProductionData& data, Eigen::Index searchRows)
+{
+    isoquant::CesFitOptions cesOptions;
+    cesOptions.startSearchRows = searchRows;
+    return isoquant::fitCes(data, formOptions(isoquant::ProductionForm::ces), cesOptions);
+}
+
+// Both fits converged to one optimum: RSS to 1e-12 relative, estimates to 1e-8. The fit's closing
+// Gauss–Newton steps fix the optimum to the rounding of the residuals (on these data the estimates
+// agree to 2e-10 or better); without them runs from different starts stop where the sum of squares
+// is flat to rounding, up to 4e-8 apart here, and this check would fail.
+void requireSameFit(const isoquant::ProductionFit& fit, const isoquant::ProductionFit& full)
+{
+    BOOST_TEST((fit.ces->convergence == isoquant::NonlinearStatus::converged));
+    BOOST_TEST(closeTo(fit.regression.residualSumOfSquares, full.regression.residualSumOfSquares, 1e-12));
+    for (Eigen::Index j = 0; j < 4; ++j) BOOST_TEST(closeTo(fit.estimates(j), full.estimates(j), 1e-8));
+}
+
+BOOST_AUTO_TEST_CASE(ces_start_search_on_evenly_spaced_rows_reaches_the_optimum_of_the_full_search)
+{
+    // Rice farms, size and labour (1,026 rows): the data with the second, worse basin above. The
+    // grid on 1,000 or on 100 of the rows still starts the fit in the better basin.
+    const isoquant::ProductionData rice = dataOf(isoquant::testing::riceFarmArguments({"size", "totlabor"}));
+    const Eigen::Index allRows = rice.output.size();
+    const auto full = cesFitSearching(rice, allRows);
+    for (const Eigen::Index searchRows : {Eigen::Index{1000}, Eigen::Index{100}})
+        BOOST_TEST_CONTEXT(searchRows << " rows searched") { requireSameFit(cesFitSearching(rice, searchRows), full); }
+
+    // Invented technologies (seeded), 5,000 rows: substitutes, near Cobb-Douglas, complements.
+    const isoquant::Ces technologies[] = {{0.4, 0.3, -0.6, 0.9}, {1.0, 0.55, 0.05, 1.1}, {-0.2, 0.7, 2.5, 0.8}};
+    std::uint32_t seed = 401;
+    for (const auto& truth : technologies) {
+        const isoquant::ProductionData data = generate(truth, 5000, seed++);
+        BOOST_TEST_CONTEXT("rho " << truth.curvature)
+        {
+            requireSameFit(cesFitSearching(data, isoquant::CesFitOptions{}.startSearchRows), cesFitSearching(data, 5000));
+        }
     }
 }
 

@@ -24,6 +24,24 @@ struct CesComposite {
 
 CesComposite cesComposite(double logRatio, double weight, double curvature);
 
+// H along d for one (δ, ρ), as a fit evaluates it on every row: ln δ and ln(1−δ) are taken once,
+// and value() gives H alone (one expm1 and one log1p per row, or one exp and one log1p for |u| > 1).
+// Both give bit for bit what cesComposite gives.
+class CesCompositeCurve {
+public:
+    CesCompositeCurve(double weight, double curvature);
+    double value(double logRatio) const;
+    CesComposite at(double logRatio) const;
+
+private:
+    double cumulantAt(double u) const; // K(u) for u ≠ 0
+
+    double weight_;
+    double curvature_;
+    double logWeight_;     // ln δ, −∞ at δ = 0
+    double logComplement_; // ln(1 − δ), −∞ at δ = 1
+};
+
 class Ces : public Technology {
 public:
     Ces(double logScale, double weight, double curvature, double returnsToScale)

@@ -87,4 +87,19 @@ struct NonlinearLeastSquaresResult {
 NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
                                                      const NonlinearLeastSquaresOptions& options = {});
 
+// The solver alone, for a caller that tries several starts and infers at the one it keeps: as
+// fitNonlinearLeastSquares but with `inference` left empty (no Jacobian at the end).
+NonlinearLeastSquaresResult minimizeSumOfSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                 const NonlinearLeastSquaresOptions& options);
+
+// Gauss–Newton steps Δ = −J⁺·r from θ (meant for a converged θ), at most maximumSteps, each taken
+// only while the step that would follow it is shorter in ‖J·Δ‖, the part of r the model could still
+// explain. Why: the solver's tests look at the sum of squares, which within (Δθ/se)² ≈ ε·n of
+// the optimum (ε the rounding of a residual) changes by no more than its own rounding, so runs from
+// different starts stop up to about √(ε·n)·se apart; J⁺·r is linear in r and fixes the stationary
+// point to the rounding of the residuals. J counts as rank deficient, and θ is returned as it
+// is, when |R_kk| ≤ rankTolerance·|R_11| in its column-pivoted QR; likewise where r or J is not finite.
+Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& parameters, int maximumSteps,
+                                     double rankTolerance);
+
 } // namespace isoquant
