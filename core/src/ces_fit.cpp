@@ -5,6 +5,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/least_squares.hpp"
 #include "isoquant/text.hpp"
+#include "isoquant/work_limits.hpp"
 #include "fit_inference.hpp"
 
 #include <boost/math/constants/constants.hpp>
@@ -303,6 +304,9 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
             starts = movedOnSample(logs, evenlySpacedRows(logs, cesOptions.startSearchRows), starts, solverOptions);
     }
 
+    // The runs on all rows share the work cap (work_limits.hpp).
+    solverOptions.maximumEvaluations = static_cast<Eigen::Index>(
+        evaluationsPerRun(static_cast<std::size_t>(n), starts.size(), static_cast<std::size_t>(solverOptions.maximumEvaluations)));
     // Keep the lowest sum of squares, preferring converged runs.
     std::optional<NonlinearLeastSquaresResult> kept;
     for (const Eigen::VectorXd& start : starts) {

@@ -2,6 +2,8 @@
 
 #include "isoquant/input_error.hpp"
 
+#include <algorithm>
+
 namespace isoquant {
 
 std::string groupedCount(std::size_t count)
@@ -10,6 +12,12 @@ std::string groupedCount(std::size_t count)
     for (auto position = static_cast<std::ptrdiff_t>(digits.size()) - 3; position > 0; position -= 3)
         digits.insert(static_cast<std::size_t>(position), ",");
     return digits;
+}
+
+std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested)
+{
+    if (rows == 0 || runs == 0) return requested;
+    return std::max<std::size_t>(1, std::min(requested, maximumRowEvaluations / rows / runs));
 }
 
 void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument)

@@ -20,6 +20,15 @@ constexpr std::size_t maximumRangeCells = std::size_t{1} << 24;
 // 268 MB in doubles. A full-column translog of 6 inputs (28 columns) fits; of 7 (36) does not.
 constexpr std::size_t maximumDesignValues = std::size_t{1} << 25;
 
+// Rows × residual evaluations that the nonlinear (ces) runs on all rows share: 2²⁷ ≈ 134 million,
+// about 10 s. Beyond it a run stops with the status "not converged", which the table reports as
+// for any run that reaches its evaluation limit; at 10,000 rows the limit is never reached.
+constexpr std::size_t maximumRowEvaluations = std::size_t{1} << 27;
+
+// The evaluation limit of each of `runs` runs over `rows` rows: the `requested` limit, lowered so
+// that all runs together stay within maximumRowEvaluations, but at least 1.
+std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested);
+
 // Throws InputError naming `argument` when a range has more rows or cells than allowed.
 void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument);
 
