@@ -26,6 +26,8 @@
 #include "isoquant/translog_fit.hpp"
 #include "reference_data.hpp"
 
+#include "reference_figures.hpp"
+
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
@@ -40,17 +42,11 @@
 
 namespace {
 
-const char* figuresPath() { return std::getenv("ISOQUANT_FORMS_FIGURES"); }
+const char* figuresPath() { return isoquant::testing::referenceFiguresPath("ISOQUANT_FORMS_FIGURES"); }
 
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
-    const char* path = figuresPath();
-    if (path && std::filesystem::exists(path)) return true;
-    // CTest marks the test skipped on this text (SKIP_REGULAR_EXPRESSION in tests/CMakeLists.txt).
-    std::cout << "scipy/statsmodels form figures not available (ISOQUANT_FORMS_FIGURES unset or no file)\n";
-    boost::test_tools::assertion_result result(false);
-    result.message() << "scipy/statsmodels form figures not available";
-    return result;
+    return isoquant::testing::referenceFiguresAvailable("ISOQUANT_FORMS_FIGURES", "scipy/statsmodels form figures");
 }
 
 struct Figure {
@@ -61,23 +57,9 @@ struct Figure {
 
 std::vector<Figure> readFigures(const std::string& path)
 {
-    std::ifstream file(path);
     std::vector<Figure> figures;
-    std::string line;
-    std::getline(file, line); // header
-    while (std::getline(file, line)) {
-        std::istringstream fields(line);
-        Figure figure;
-        std::string index, value;
-        std::getline(fields, figure.dataset, ',');
-        std::getline(fields, figure.form, ',');
-        std::getline(fields, figure.quantity, ',');
-        std::getline(fields, index, ',');
-        std::getline(fields, value, ',');
-        figure.index = std::stol(index);
-        figure.value = std::stod(value);
-        figures.push_back(figure);
-    }
+    for (const auto& fields : isoquant::testing::readReferenceRows(path))
+        figures.push_back({fields.at(0), fields.at(1), fields.at(2), std::stol(fields.at(3)), std::stod(fields.at(4))});
     return figures;
 }
 

@@ -22,6 +22,8 @@
 #include "growth_series.hpp"
 #include "test_data.hpp"
 
+#include "reference_figures.hpp"
+
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
@@ -42,17 +44,11 @@ namespace {
 constexpr double indexRelativeTolerance = 1e-12;
 constexpr double growthAbsoluteTolerance = 1e-12;
 
-const char* figuresPath() { return std::getenv("ISOQUANT_NUMPY_GROWTH_FIGURES"); }
+const char* figuresPath() { return isoquant::testing::referenceFiguresPath("ISOQUANT_NUMPY_GROWTH_FIGURES"); }
 
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
-    const char* path = figuresPath();
-    if (path && std::filesystem::exists(path)) return true;
-    // CTest marks the test skipped on this text (SKIP_REGULAR_EXPRESSION in tests/CMakeLists.txt).
-    std::cout << "numpy figures not available (ISOQUANT_NUMPY_GROWTH_FIGURES unset or no file)\n";
-    boost::test_tools::assertion_result result(false);
-    result.message() << "numpy figures not available";
-    return result;
+    return isoquant::testing::referenceFiguresAvailable("ISOQUANT_NUMPY_GROWTH_FIGURES", "numpy figures");
 }
 
 // dataset, series, quantity, period ("1"… or "total"), column
@@ -60,21 +56,9 @@ using FigureKey = std::tuple<std::string, std::string, std::string, std::string,
 
 std::map<FigureKey, double> readFigures(const std::string& path)
 {
-    std::ifstream file(path);
     std::map<FigureKey, double> figures;
-    std::string line;
-    std::getline(file, line); // header
-    while (std::getline(file, line)) {
-        std::istringstream fields(line);
-        std::string dataset, series, quantity, period, column, value;
-        std::getline(fields, dataset, ',');
-        std::getline(fields, series, ',');
-        std::getline(fields, quantity, ',');
-        std::getline(fields, period, ',');
-        std::getline(fields, column, ',');
-        std::getline(fields, value, ',');
-        figures[{dataset, series, quantity, period, std::stoi(column)}] = std::stod(value);
-    }
+    for (const auto& fields : isoquant::testing::readReferenceRows(path))
+        figures[{fields.at(0), fields.at(1), fields.at(2), fields.at(3), std::stoi(fields.at(4))}] = std::stod(fields.at(5));
     return figures;
 }
 

@@ -16,6 +16,8 @@
 #include "cell_tables.hpp"
 #include "relative_error.hpp"
 
+#include "reference_figures.hpp"
+
 #include <boost/test/unit_test.hpp>
 
 #include <cstdlib>
@@ -30,17 +32,11 @@ namespace {
 
 constexpr double scipyTolerance = 1e-6;
 
-const char* figuresPath() { return std::getenv("ISOQUANT_SCIPY_LEAST_COST"); }
+const char* figuresPath() { return isoquant::testing::referenceFiguresPath("ISOQUANT_SCIPY_LEAST_COST"); }
 
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
-    const char* path = figuresPath();
-    if (path && std::filesystem::exists(path)) return true;
-    // CTest marks the test skipped on this text (SKIP_REGULAR_EXPRESSION in tests/CMakeLists.txt).
-    std::cout << "scipy figures not available (ISOQUANT_SCIPY_LEAST_COST unset or no file)\n";
-    boost::test_tools::assertion_result result(false);
-    result.message() << "scipy figures not available";
-    return result;
+    return isoquant::testing::referenceFiguresAvailable("ISOQUANT_SCIPY_LEAST_COST", "scipy figures");
 }
 
 std::vector<std::string> fieldsOf(const std::string& line, char separator)
@@ -87,12 +83,8 @@ BOOST_AUTO_TEST_SUITE(scipy_least_cost_cross_check)
 
 BOOST_AUTO_TEST_CASE(least_cost_bundles_agree_with_scipy, *boost::unit_test::precondition(figuresAvailable))
 {
-    std::ifstream file(figuresPath());
-    std::string line;
-    std::getline(file, line); // header
     int compared = 0;
-    while (std::getline(file, line)) {
-        const auto fields = fieldsOf(line, ',');
+    for (const auto& fields : isoquant::testing::readReferenceRows(figuresPath())) {
         BOOST_TEST_REQUIRE(fields.size() == 7u);
         const std::string& name = fields[0];
         const Eigen::VectorXd parameters = numbersOf(fields[2]), prices = numbersOf(fields[3]);

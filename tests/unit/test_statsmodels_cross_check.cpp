@@ -15,6 +15,8 @@
 #include "isoquant/cell_functions.hpp"
 #include "reference_data.hpp"
 
+#include "reference_figures.hpp"
+
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
@@ -31,17 +33,11 @@ namespace {
 
 constexpr double relativeTolerance = 1e-8;
 
-const char* figuresPath() { return std::getenv("ISOQUANT_STATSMODELS_FIGURES"); }
+const char* figuresPath() { return isoquant::testing::referenceFiguresPath("ISOQUANT_STATSMODELS_FIGURES"); }
 
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
-    const char* path = figuresPath();
-    if (path && std::filesystem::exists(path)) return true;
-    // CTest marks the test skipped on this text (SKIP_REGULAR_EXPRESSION in tests/CMakeLists.txt).
-    std::cout << "statsmodels figures not available (ISOQUANT_STATSMODELS_FIGURES unset or no file)\n";
-    boost::test_tools::assertion_result result(false);
-    result.message() << "statsmodels figures not available";
-    return result;
+    return isoquant::testing::referenceFiguresAvailable("ISOQUANT_STATSMODELS_FIGURES", "statsmodels figures");
 }
 
 struct Figure {
@@ -52,25 +48,10 @@ struct Figure {
 
 std::vector<Figure> readFigures(const std::string& path)
 {
-    std::ifstream file(path);
     std::vector<Figure> figures;
-    std::string line;
-    std::getline(file, line); // header
-    while (std::getline(file, line)) {
-        std::istringstream fields(line);
-        Figure figure;
-        std::string index, value;
-        std::getline(fields, figure.dataset, ',');
-        std::getline(fields, figure.model, ',');
-        std::getline(fields, figure.covariance, ',');
-        std::getline(fields, figure.level, ',');
-        std::getline(fields, figure.quantity, ',');
-        std::getline(fields, index, ',');
-        std::getline(fields, value, ',');
-        figure.index = std::stol(index);
-        figure.value = std::stod(value);
-        figures.push_back(figure);
-    }
+    for (const auto& fields : isoquant::testing::readReferenceRows(path))
+        figures.push_back({fields.at(0), fields.at(1), fields.at(2), fields.at(3), fields.at(4), std::stol(fields.at(5)),
+                           std::stod(fields.at(6))});
     return figures;
 }
 
