@@ -63,7 +63,7 @@ CellTable columnOf(const NumericColumns& bundles, Evaluate value)
         if (!std::isfinite(result))
             throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
                              " gives a result too large to represent");
-        column.at(static_cast<std::size_t>(row), 0) = result;
+        column.set(static_cast<std::size_t>(row), 0, result);
     }
     return column;
 }
@@ -182,8 +182,8 @@ CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
     const NumericColumns bundles = readBundles(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)
-        column.at(static_cast<std::size_t>(row), 0) = regularityPhrase(
-            *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels);
+        column.set(static_cast<std::size_t>(row), 0, regularityPhrase(
+            *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels));
     return column;
 }
 

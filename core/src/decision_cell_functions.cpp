@@ -55,7 +55,7 @@ CellTable perBundle(const NumericColumns& bundles, Evaluate evaluate)
         Cell result = evaluate(Eigen::VectorXd(bundles.values.row(row).transpose()), place);
         if (isNumber(result) && !std::isfinite(std::get<double>(result)))
             throw InputError(place + " gives a result too large to represent");
-        column.at(static_cast<std::size_t>(row), 0) = std::move(result);
+        column.set(static_cast<std::size_t>(row), 0, std::move(result));
     }
     return column;
 }
@@ -106,7 +106,7 @@ void requireRepresentable(const ProductionPlan& plan, const std::string& argumen
 CellTable rowOf(const Eigen::VectorXd& values)
 {
     CellTable row(1, static_cast<std::size_t>(values.size()));
-    for (Eigen::Index i = 0; i < values.size(); ++i) row.at(0, static_cast<std::size_t>(i)) = values(i);
+    for (Eigen::Index i = 0; i < values.size(); ++i) row.set(0, static_cast<std::size_t>(i), values(i));
     return row;
 }
 
@@ -293,10 +293,10 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
         bool header = true;
         for (std::size_t column = 0; column < values.columns(); ++column)
             if (column != static_cast<std::size_t>(j) &&
-                !(isText(values.at(0, column)) && !std::get<std::string>(values.at(0, column)).empty()))
+                !(values.isText(0, column) && !values.text(0, column).empty()))
                 header = false;
         for (std::size_t row = 0; row < filled.rows(); ++row)
-            filled.at(row, static_cast<std::size_t>(j)) = (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0);
+            filled.set(row, static_cast<std::size_t>(j), (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0));
         read = readNumericColumns(filled, argument, ValueRule::positive, "input");
         bundles = read.values;
     } else {
@@ -309,10 +309,10 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
         Eigen::VectorXd bundle = bundles.row(row).transpose();
         bundle(j) = 1;
         const auto amount = amountForLevel(*technology.technology, bundle, j, logLevel);
-        column.at(static_cast<std::size_t>(row), 0) =
-            amount ? Cell(*amount)
-                   : Cell("no amount of " + inputName(technology, j) + " gives this output with " +
-                          inputName(technology, i) + " at " + formatNumber(bundle(i)));
+        column.set(static_cast<std::size_t>(row), 0,
+                   amount ? Cell(*amount)
+                          : Cell("no amount of " + inputName(technology, j) + " gives this output with " +
+                                 inputName(technology, i) + " at " + formatNumber(bundle(i))));
     }
     return column;
 }

@@ -85,7 +85,7 @@ isoquant::CellTable asCells(const Eigen::MatrixXd& values)
     isoquant::CellTable table(static_cast<std::size_t>(values.rows()), static_cast<std::size_t>(values.cols()));
     for (Eigen::Index i = 0; i < values.rows(); ++i)
         for (Eigen::Index j = 0; j < values.cols(); ++j)
-            table.at(static_cast<std::size_t>(i), static_cast<std::size_t>(j)) = values(i, j);
+            table.set(static_cast<std::size_t>(i), static_cast<std::size_t>(j), values(i, j));
     return table;
 }
 
