@@ -4,6 +4,8 @@
 
 #include <rtl/string.hxx>
 
+#include <algorithm>
+
 namespace isoquant::addin {
 
 namespace {
@@ -15,9 +17,10 @@ Cell scalarCell(const css::uno::Any& value, const std::string& argument)
     case css::uno::TypeClass_DOUBLE: return *static_cast<const double*>(value.getValue());
     case css::uno::TypeClass_VOID: return Cell{};
     case css::uno::TypeClass_STRING: {
-        const std::string text = toUtf8(value.get<OUString>());
-        if (text.empty()) return Cell{};
-        return text;
+        // Read in place, as >>= does, without a reference-counted copy.
+        const OUString& text = *static_cast<const OUString*>(value.getValue());
+        if (text.isEmpty()) return Cell{};
+        return toUtf8(text);
     }
     case css::uno::TypeClass_BOOLEAN: return value.get<bool>() ? 1.0 : 0.0;
     default: {
@@ -32,6 +35,15 @@ Cell scalarCell(const css::uno::Any& value, const std::string& argument)
 
 std::string toUtf8(const OUString& text)
 {
+    // ASCII (labels and option words nearly always are) is its own UTF-8: copied unit by unit,
+    // with no intermediate OString.
+    const sal_Unicode* units = text.getStr();
+    const auto length = static_cast<std::size_t>(text.getLength());
+    if (std::all_of(units, units + length, [](sal_Unicode unit) { return unit < 0x80; })) {
+        std::string ascii(length, '\0');
+        std::copy(units, units + length, ascii.begin());
+        return ascii;
+    }
     const OString encoded = OUStringToOString(text, RTL_TEXTENCODING_UTF8);
     return std::string(encoded.getStr(), static_cast<std::size_t>(encoded.getLength()));
 }

@@ -2,6 +2,7 @@
 
 #include "isoquant/form_comparison.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
@@ -128,7 +129,7 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
 
 CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     double factor = 1.0;
     if (readSwitchArgument(mean, "mean")) {
         if (!technology.smearingFactor)
@@ -142,7 +143,7 @@ CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Ce
 
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology), [&](const Eigen::VectorXd& bundle) {
         return technology.technology->marginalProduct(bundle, chosen);
@@ -151,7 +152,7 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
 
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology),
                     [&](const Eigen::VectorXd& bundle) { return technology.technology->elasticity(bundle, chosen); });
@@ -159,7 +160,7 @@ CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, cons
 
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     if (inputs.empty()) {
         const auto scale = technology.technology->constantScaleElasticity();
         if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
@@ -173,12 +174,12 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 std::string returnsVerdictCell(const CellTable& model, const Cell& level)
 {
     const double confidence = readLevelArgument(level, "level");
-    return returnsVerdict(readProductionModel(model), confidence);
+    return returnsVerdict(cachedProductionModel(model), confidence);
 }
 
 CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const NumericColumns bundles = readBundles(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)

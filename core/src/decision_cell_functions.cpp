@@ -8,6 +8,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/level_roots.hpp"
 #include "isoquant/local_shape.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/numerical_decisions.hpp"
 #include "isoquant/production_model.hpp"
@@ -128,7 +129,7 @@ struct DecisionSetup {
 
 DecisionSetup readDecision(const CellTable& model, const CellTable& prices, const std::string& pricesName)
 {
-    DecisionSetup setup{readProductionModel(model), {}};
+    DecisionSetup setup{cachedProductionModel(model), {}};
     setup.prices = readPrices(prices, pricesName, static_cast<Eigen::Index>(setup.model.inputLabels.size()));
     return setup;
 }
@@ -143,7 +144,7 @@ ProductionPlan leastCostOf(const DecisionSetup& setup, double target)
 
 CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, "input j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
@@ -153,7 +154,7 @@ CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, c
 
 CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputReturnsWord(checkedLocalShape(*technology.technology, bundle, place), chosen));
@@ -162,7 +163,7 @@ CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, co
 
 CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
@@ -172,7 +173,7 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
 
 CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
@@ -188,7 +189,7 @@ CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, c
 CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
                              const Cell& kind)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
@@ -269,7 +270,7 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
 CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTable& values, const Cell& first,
                          const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
     if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
     const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "i");

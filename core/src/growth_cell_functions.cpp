@@ -4,6 +4,7 @@
 #include "isoquant/growth_table.hpp"
 #include "isoquant/index_numbers.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/period_range.hpp"
 #include "isoquant/production_model.hpp"
@@ -96,7 +97,7 @@ void requireSameLabels(const std::string& argument, const std::string& ownNoun, 
 ProductionModel readModelArgument(const CellTable& range, const std::string& argument)
 {
     try {
-        return readProductionModel(range);
+        return cachedProductionModel(range);
     } catch (const InputError& error) {
         const std::string message = error.what();
         const std::string prefix = "model:";

@@ -75,10 +75,21 @@ int main(int argc, char** argv)
     const int runs = argc > 1 ? std::stoi(argv[1]) : 3;
     const sal_Int32 rows = argc > 2 ? std::stoi(argv[2]) : 1000000;
     const int calls = argc > 3 ? std::stoi(argv[3]) : 200000;
+    // "single": only the single-cell calls (for a profiler).
+    const bool singleOnly = argc > 4 && std::string(argv[4]) == "single";
     rtl::Reference<isoquant::addin::ProductionFunctions> functions(new isoquant::addin::ProductionFunctions);
 
-    const AnyTable output = inventedRange(rows, 1, 1u);
-    const AnyTable inputs = inventedRange(rows, 3, 2u);
+    const AnyTable output = inventedRange(singleOnly ? 1 : rows, 1, 1u);
+    const AnyTable inputs = inventedRange(singleOnly ? 1 : rows, 3, 2u);
+    const AnyTable model = typedModel();
+    const AnyTable oneRow = inventedRange(1, 3, 3u);
+    const double single = medianSeconds(runs, [&] {
+        for (int call = 0; call < calls; ++call)
+            sink = functions->prodMarginal(model, oneRow, Any(1.0))[0][0].get<double>();
+    });
+    std::printf("marginal_single_typed %d %.6g %d per_call_us %.3f\n", calls, single, runs, 1e6 * single / calls);
+    if (singleOnly) return 0;
+
     const double conversion = medianSeconds(runs, [&] {
         sink = static_cast<double>(isoquant::addin::toCellTable(output, "output").rows() +
                                    isoquant::addin::toCellTable(inputs, "inputs").rows());
@@ -98,18 +109,10 @@ int main(int argc, char** argv)
     });
     std::printf("prodfit_cached %ld %.6g %d\n", static_cast<long>(rows), cached, runs);
 
-    const AnyTable model = typedModel();
     const double column = medianSeconds(runs, [&] {
         sink = static_cast<double>(functions->prodMarginal(model, inputs, Any(1.0)).getLength());
     });
     std::printf("marginal_column %ld %.6g %d\n", static_cast<long>(rows), column, runs);
-
-    const AnyTable oneRow = inventedRange(1, 3, 3u);
-    const double single = medianSeconds(runs, [&] {
-        for (int call = 0; call < calls; ++call)
-            sink = functions->prodMarginal(model, oneRow, Any(1.0))[0][0].get<double>();
-    });
-    std::printf("marginal_single_typed %d %.6g %d per_call_us %.3f\n", calls, single, runs, 1e6 * single / calls);
 
     // A PRODFIT table (17 × 7, texts and numbers) as the model.
     const AnyTable smallOutput = inventedRange(200, 1, 4u);
