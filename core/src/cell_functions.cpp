@@ -59,8 +59,10 @@ template <typename Evaluate>
 CellTable columnOf(const NumericColumns& bundles, Evaluate value)
 {
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    Eigen::VectorXd bundle(bundles.values.cols()); // one vector for every row: no allocation per row
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
-        const double result = value(Eigen::VectorXd(bundles.values.row(row).transpose()));
+        bundle = bundles.values.row(row).transpose();
+        const double result = value(bundle);
         if (!std::isfinite(result))
             throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
                              " gives a result too large to represent");

@@ -51,9 +51,11 @@ template <typename Evaluate>
 CellTable perBundle(const NumericColumns& bundles, Evaluate evaluate)
 {
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    Eigen::VectorXd bundle(bundles.values.cols()); // one vector for every row: no allocation per row
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
         const std::string place = rowPlace(bundles, row, "inputs");
-        Cell result = evaluate(Eigen::VectorXd(bundles.values.row(row).transpose()), place);
+        bundle = bundles.values.row(row).transpose();
+        Cell result = evaluate(bundle, place);
         if (isNumber(result) && !std::isfinite(std::get<double>(result)))
             throw InputError(place + " gives a result too large to represent");
         column.set(static_cast<std::size_t>(row), 0, std::move(result));
