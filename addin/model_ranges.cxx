@@ -43,20 +43,13 @@ std::shared_ptr<const CellTable> ModelRanges::cells(const AnyTable& range, const
     const bool kept = cellCount <= largestKeptCells;
     if (kept) {
         const std::lock_guard<std::mutex> lock(mutex_);
-        for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-            if (sameCells(entry->range, range)) {
-                entries_.splice(entries_.begin(), entries_, entry);
-                return entries_.front().cells;
-            }
-        }
+        if (const Entry* reused = entries_.find([&](const Entry& entry) { return sameCells(entry.range, range); }))
+            return reused->cells;
     }
     auto converted = std::make_shared<const CellTable>(toCellTable(range, argument));
     const std::lock_guard<std::mutex> lock(mutex_);
     ++conversions_;
-    if (kept) {
-        entries_.push_front(Entry{range, converted});
-        if (entries_.size() > capacity_) entries_.pop_back();
-    }
+    if (kept) entries_.add(Entry{range, converted});
     return converted;
 }
 

@@ -5,8 +5,9 @@
 
 #include "cell_conversion.hxx"
 
+#include "isoquant/recently_used.hpp"
+
 #include <cstddef>
-#include <list>
 #include <memory>
 #include <mutex>
 #include <string>
@@ -19,7 +20,7 @@ public:
     // isoquant::ModelCache: a model is a few dozen cells).
     static constexpr std::size_t largestKeptCells = 4096;
 
-    explicit ModelRanges(std::size_t capacity = 4) : capacity_(capacity) {}
+    explicit ModelRanges(std::size_t capacity = 4) : entries_(capacity) {}
 
     // toCellTable(range, argument), or the cells of a kept range equal to `range` cell by cell:
     // the same type, the same bits of a number, the same text. Conversion errors are not kept.
@@ -34,9 +35,8 @@ private:
         std::shared_ptr<const CellTable> cells;
     };
 
-    std::size_t capacity_;
     mutable std::mutex mutex_;
-    std::list<Entry> entries_; // most recently used first
+    RecentlyUsed<Entry> entries_;
     std::size_t conversions_ = 0;
 };
 

@@ -79,16 +79,12 @@ std::shared_ptr<const ProductionFit> FitCache::fitOrReuse(const FitArguments& ar
     // Held while fitting, so that equal arguments arriving together are fitted once (Calc
     // serialises its calls anyway, so nothing is lost).
     const std::lock_guard<std::mutex> lock(mutex_);
-    for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-        if (entry->hash == hash && entry->arguments == arguments) {
-            entries_.splice(entries_.begin(), entries_, entry);
-            return entries_.front().fit;
-        }
-    }
+    if (const Entry* kept =
+            entries_.find([&](const Entry& entry) { return entry.hash == hash && entry.arguments == arguments; }))
+        return kept->fit;
     auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
     ++fitsComputed_;
-    entries_.push_front(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
-    if (entries_.size() > capacity_) entries_.pop_back();
+    entries_.add(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
     return computed;
 }
 

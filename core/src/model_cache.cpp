@@ -11,16 +11,11 @@ std::shared_ptr<const ProductionModel> ModelCache::model(const CellTable& range)
         return read;
     }
     const std::lock_guard<std::mutex> lock(mutex_);
-    for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-        if (entry->range == range) {
-            entries_.splice(entries_.begin(), entries_, entry);
-            return entries_.front().model;
-        }
-    }
+    if (const Entry* kept = entries_.find([&](const Entry& entry) { return entry.range == range; }))
+        return kept->model;
     auto read = std::make_shared<const ProductionModel>(readProductionModel(range));
     ++modelsRead_;
-    entries_.push_front(Entry{range, read});
-    if (entries_.size() > capacity_) entries_.pop_back();
+    entries_.add(Entry{range, read});
     return read;
 }
 

@@ -3,12 +3,11 @@
 //   <name> <rows or calls> <median seconds> <runs> [extra]
 // like isoquant_core_bench. Invented, seeded data; nothing is asserted.
 #include "cell_conversion.hxx"
+#include "median_seconds.hpp"
 #include "production_functions.hxx"
 
 #include <rtl/ref.hxx>
 
-#include <algorithm>
-#include <chrono>
 #include <cmath>
 #include <cstdio>
 #include <random>
@@ -17,24 +16,11 @@
 
 namespace {
 
+using isoquant::benchmarks::medianSeconds;
 using isoquant::addin::AnyTable;
-using Clock = std::chrono::steady_clock;
 using css::uno::Any;
 using css::uno::Sequence;
 using rtl::OUString;
-
-template <typename Work>
-double medianSeconds(int runs, Work work)
-{
-    std::vector<double> seconds;
-    for (int run = 0; run < runs; ++run) {
-        const auto start = Clock::now();
-        work();
-        seconds.push_back(std::chrono::duration<double>(Clock::now() - start).count());
-    }
-    std::sort(seconds.begin(), seconds.end());
-    return seconds[seconds.size() / 2];
-}
 
 // `rows` rows of `columns` lognormal amounts (median e² ≈ 7.4), seed fixed.
 AnyTable inventedRange(sal_Int32 rows, sal_Int32 columns, unsigned seed)

@@ -2,9 +2,9 @@
 // writes; equality is by shape and content, whatever order the texts were written in; the rows
 // and columns of readNumericColumns' messages are those of the range. Invented cells.
 #include "isoquant/cells.hpp"
-#include "isoquant/input_error.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/text.hpp"
+#include "input_error_message.hpp"
 
 #include <boost/test/unit_test.hpp>
 
@@ -20,12 +20,8 @@ namespace {
 
 std::string readingMessage(const CellTable& range)
 {
-    try {
-        isoquant::readNumericColumns(range, "inputs", isoquant::ValueRule::positive, "input");
-    } catch (const isoquant::InputError& error) {
-        return error.what();
-    }
-    return "no error";
+    return isoquant::testing::messageOf(
+        [&] { isoquant::readNumericColumns(range, "inputs", isoquant::ValueRule::positive, "input"); });
 }
 
 } // namespace

@@ -6,9 +6,9 @@
 
 #include "isoquant/cells.hpp"
 #include "isoquant/production_model.hpp"
+#include "isoquant/recently_used.hpp"
 
 #include <cstddef>
-#include <list>
 #include <memory>
 #include <mutex>
 
@@ -20,7 +20,7 @@ public:
     // dozen cells, and a copy of a huge range would only hold memory.
     static constexpr std::size_t largestKeptCells = 4096;
 
-    explicit ModelCache(std::size_t capacity = 8) : capacity_(capacity) {}
+    explicit ModelCache(std::size_t capacity = 8) : entries_(capacity) {}
 
     // readProductionModel(range), or the model of an equal range read recently. Errors
     // (InputError) are not kept: a range that fails is read again, and fails again.
@@ -36,9 +36,8 @@ private:
         std::shared_ptr<const ProductionModel> model;
     };
 
-    std::size_t capacity_;
     mutable std::mutex mutex_;
-    std::list<Entry> entries_; // most recently used first
+    RecentlyUsed<Entry> entries_;
     std::size_t modelsRead_ = 0;
 };
 
