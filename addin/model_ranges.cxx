@@ -47,16 +47,11 @@ std::shared_ptr<const CellTable> ModelRanges::cells(const AnyTable& range, const
             return reused->cells;
     }
     auto converted = std::make_shared<const CellTable>(toCellTable(range, argument));
-    const std::lock_guard<std::mutex> lock(mutex_);
-    ++conversions_;
-    if (kept) entries_.add(Entry{range, converted});
+    if (kept) {
+        const std::lock_guard<std::mutex> lock(mutex_);
+        entries_.add(Entry{range, converted});
+    }
     return converted;
-}
-
-std::size_t ModelRanges::conversions() const
-{
-    const std::lock_guard<std::mutex> lock(mutex_);
-    return conversions_;
 }
 
 } // namespace isoquant::addin

@@ -26,9 +26,6 @@ public:
     // the same type, the same bits of a number, the same text. Conversion errors are not kept.
     std::shared_ptr<const CellTable> cells(const AnyTable& range, const std::string& argument);
 
-    // Ranges converted (not reused) since construction.
-    std::size_t conversions() const;
-
 private:
     struct Entry {
         AnyTable range; // reference-counted: keeping it copies no cell
@@ -37,7 +34,6 @@ private:
 
     mutable std::mutex mutex_;
     RecentlyUsed<Entry> entries_;
-    std::size_t conversions_ = 0;
 };
 
 // Whether two ranges hold the same cells: the comparison ModelRanges uses.

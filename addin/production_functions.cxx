@@ -185,7 +185,8 @@ AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTab
 
 AnyTable ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
-    return guardedTable([&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
+    return guardedTable(
+        [&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
 AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
@@ -259,7 +260,8 @@ AnyTable ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& ta
 AnyTable ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices)
 {
     return guardedTable([&] {
-        return budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"), toCellTable(prices, "prices"));
+        return budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"),
+                         toCellTable(prices, "prices"));
     });
 }
 

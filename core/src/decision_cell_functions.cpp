@@ -299,7 +299,8 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
                 !(values.isText(0, column) && !values.text(0, column).empty()))
                 header = false;
         for (std::size_t row = 0; row < filled.rows(); ++row)
-            filled.set(row, static_cast<std::size_t>(j), (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0));
+            filled.set(row, static_cast<std::size_t>(j),
+                       (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0));
         read = readNumericColumns(filled, argument, ValueRule::positive, "input");
         bundles = read.values;
     } else {

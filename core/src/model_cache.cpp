@@ -25,12 +25,6 @@ std::size_t ModelCache::modelsRead() const
     return modelsRead_;
 }
 
-void ModelCache::clear()
-{
-    const std::lock_guard<std::mutex> lock(mutex_);
-    entries_.clear();
-}
-
 ProductionModel cachedProductionModel(const CellTable& range)
 {
     static ModelCache cache;

@@ -26,9 +26,8 @@ public:
     // (InputError) are not kept: a range that fails is read again, and fails again.
     std::shared_ptr<const ProductionModel> model(const CellTable& range);
 
-    // Ranges read (not reused) since construction.
+    // Models read (not reused) since construction; a range that failed is not counted.
     std::size_t modelsRead() const;
-    void clear();
 
 private:
     struct Entry {
