@@ -76,6 +76,8 @@ CellTable toCellTable(const AnyTable& range, const std::string& argument)
 
 Cell toSingleCell(const css::uno::Any& value, const std::string& argument)
 {
+    // A plain value (nearly always) goes straight to scalarCell, without a try at extracting a range.
+    if (value.getValueTypeClass() != css::uno::TypeClass_SEQUENCE) return scalarCell(value, argument);
     AnyTable range;
     if (value >>= range) {
         if (range.getLength() == 1 && range[0].getLength() == 1) return scalarCell(range[0][0], argument);
