@@ -4,6 +4,8 @@
 
 #include <rtl/string.hxx>
 
+#include <algorithm>
+
 namespace isoquant::addin {
 
 namespace {
@@ -15,9 +17,10 @@ Cell scalarCell(const css::uno::Any& value, const std::string& argument)
     case css::uno::TypeClass_DOUBLE: return *static_cast<const double*>(value.getValue());
     case css::uno::TypeClass_VOID: return Cell{};
     case css::uno::TypeClass_STRING: {
-        const std::string text = toUtf8(value.get<OUString>());
-        if (text.empty()) return Cell{};
-        return text;
+        // Read in place, as >>= does, without a reference-counted copy.
+        const OUString& text = *static_cast<const OUString*>(value.getValue());
+        if (text.isEmpty()) return Cell{};
+        return toUtf8(text);
     }
     case css::uno::TypeClass_BOOLEAN: return value.get<bool>() ? 1.0 : 0.0;
     default: {
@@ -32,6 +35,15 @@ Cell scalarCell(const css::uno::Any& value, const std::string& argument)
 
 std::string toUtf8(const OUString& text)
 {
+    // ASCII (labels and option words nearly always are) is its own UTF-8: copied unit by unit,
+    // with no intermediate OString.
+    const sal_Unicode* units = text.getStr();
+    const auto length = static_cast<std::size_t>(text.getLength());
+    if (std::all_of(units, units + length, [](sal_Unicode unit) { return unit < 0x80; })) {
+        std::string ascii(length, '\0');
+        std::copy(units, units + length, ascii.begin());
+        return ascii;
+    }
     const OString encoded = OUStringToOString(text, RTL_TEXTENCODING_UTF8);
     return std::string(encoded.getStr(), static_cast<std::size_t>(encoded.getLength()));
 }
@@ -49,14 +61,23 @@ CellTable toCellTable(const AnyTable& range, const std::string& argument)
     CellTable table(rows, columns);
     for (std::size_t r = 0; r < rows; ++r) {
         const auto& row = range[static_cast<sal_Int32>(r)];
-        for (sal_Int32 c = 0; c < row.getLength(); ++c)
-            table.at(r, static_cast<std::size_t>(c)) = scalarCell(row[c], argument);
+        const css::uno::Any* cells = row.getConstArray();
+        for (sal_Int32 c = 0; c < row.getLength(); ++c) {
+            // Numbers straight into the table: a million-row range is mostly numbers, and this
+            // way a number cell costs no allocation and no temporary Cell.
+            if (cells[c].getValueTypeClass() == css::uno::TypeClass_DOUBLE)
+                table.set(r, static_cast<std::size_t>(c), *static_cast<const double*>(cells[c].getValue()));
+            else
+                table.set(r, static_cast<std::size_t>(c), scalarCell(cells[c], argument));
+        }
     }
     return table;
 }
 
 Cell toSingleCell(const css::uno::Any& value, const std::string& argument)
 {
+    // A plain value (nearly always) goes straight to scalarCell, without a try at extracting a range.
+    if (value.getValueTypeClass() != css::uno::TypeClass_SEQUENCE) return scalarCell(value, argument);
     AnyTable range;
     if (value >>= range) {
         if (range.getLength() == 1 && range[0].getLength() == 1) return scalarCell(range[0][0], argument);
@@ -88,8 +109,14 @@ AnyTable toAnyTable(const CellTable& table)
     for (std::size_t r = 0; r < table.rows(); ++r) {
         css::uno::Sequence<css::uno::Any> row(static_cast<sal_Int32>(table.columns()));
         auto* cells = row.getArray();
-        for (std::size_t c = 0; c < table.columns(); ++c) cells[c] = toAny(table.at(r, c));
-        rows[r] = row;
+        for (std::size_t c = 0; c < table.columns(); ++c) {
+            switch (table.kind(r, c)) {
+            case CellKind::number: cells[c] <<= table.number(r, c); break;
+            case CellKind::text: cells[c] <<= fromUtf8(table.text(r, c)); break;
+            case CellKind::empty: cells[c] <<= OUString(); break;
+            }
+        }
+        rows[r] = std::move(row);
     }
     return result;
 }

@@ -125,14 +125,14 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
 AnyTable ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
 {
     return guardedTable([&] {
-        return outputColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
+        return outputColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
     });
 }
 
 AnyTable ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const Any& input)
 {
     return guardedTable([&] {
-        return marginalProductColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+        return marginalProductColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                      toSingleCell(input, "input"));
     });
 }
@@ -140,7 +140,7 @@ AnyTable ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable
 AnyTable ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const Any& input)
 {
     return guardedTable([&] {
-        return elasticityColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+        return elasticityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                 toSingleCell(input, "input"));
     });
 }
@@ -148,19 +148,19 @@ AnyTable ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTab
 AnyTable ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
 {
     return guardedTable(
-        [&] { return scaleColumn(toCellTable(model, "model"), toOptionalTable(inputs, "inputs")); });
+        [&] { return scaleColumn(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs")); });
 }
 
 Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 {
     return guardedValue(
-        [&] { return Cell(returnsVerdictCell(toCellTable(model, "model"), toSingleCell(level, "level"))); });
+        [&] { return Cell(returnsVerdictCell(*models_.cells(model, "model"), toSingleCell(level, "level"))); });
 }
 
 AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs)
 {
     return guardedTable([&] {
-        return productivityColumn(toCellTable(model, "model"), toCellTable(output, "output"),
+        return productivityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
                                   toCellTable(inputs, "inputs"));
     });
 }
@@ -185,7 +185,8 @@ AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTab
 
 AnyTable ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
-    return guardedTable([&] { return regularityColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs")); });
+    return guardedTable(
+        [&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
 AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
@@ -200,7 +201,7 @@ AnyTable ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& 
                                          const Any& inputJ)
 {
     return guardedTable([&] {
-        return secondPartialColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+        return secondPartialColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                    toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
     });
 }
@@ -208,7 +209,7 @@ AnyTable ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& 
 AnyTable ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const Any& input)
 {
     return guardedTable([&] {
-        return inputReturnsColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+        return inputReturnsColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                   toSingleCell(input, "input"));
     });
 }
@@ -217,7 +218,7 @@ AnyTable ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& in
                                        const Any& inputJ)
 {
     return guardedTable([&] {
-        return inputPairColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"),
+        return inputPairColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
     });
 }
@@ -225,7 +226,7 @@ AnyTable ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& in
 AnyTable ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const Any& i, const Any& j)
 {
     return guardedTable([&] {
-        return technicalRateColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
+        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
                                    toSingleCell(j, "j"));
     });
 }
@@ -234,7 +235,7 @@ AnyTable ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyT
                                                const Any& j, const Any& kind)
 {
     return guardedTable([&] {
-        return substitutionColumn(toCellTable(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
+        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
                                   toSingleCell(j, "j"), toSingleCell(kind, "kind"));
     });
 }
@@ -242,7 +243,7 @@ AnyTable ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyT
 AnyTable ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices)
 {
     return guardedTable([&] {
-        return leastCostRow(toCellTable(model, "model"), toSingleCell(Any(targetOutput), "target output"),
+        return leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"),
                             toCellTable(prices, "prices"));
     });
 }
@@ -251,7 +252,7 @@ AnyTable ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& ta
                                        const Any& what)
 {
     return guardedTable([&] {
-        return costCell(toCellTable(model, "model"), toSingleCell(Any(targetOutput), "target output"),
+        return costCell(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"),
                         toCellTable(prices, "prices"), toSingleCell(what, "what"));
     });
 }
@@ -259,14 +260,15 @@ AnyTable ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& ta
 AnyTable ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices)
 {
     return guardedTable([&] {
-        return budgetRow(toCellTable(model, "model"), toSingleCell(Any(budget), "budget"), toCellTable(prices, "prices"));
+        return budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"),
+                         toCellTable(prices, "prices"));
     });
 }
 
 AnyTable ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        return profitRow(toCellTable(model, "model"), toSingleCell(Any(outputPrice), "output price"),
+        return profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"),
                          toCellTable(inputPrices, "input prices"));
     });
 }
@@ -275,7 +277,7 @@ AnyTable ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable
                                            const Any& i, const Any& j)
 {
     return guardedTable([&] {
-        return isoquantColumn(toCellTable(model, "model"), toSingleCell(Any(outputLevel), "output level"),
+        return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
                               toCellTable(values, "values of input i"), toSingleCell(i, "i"), toSingleCell(j, "j"));
     });
 }

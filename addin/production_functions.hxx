@@ -3,6 +3,8 @@
 // shows only "Err:502" or "#VALUE!", and a crash would take the user's unsaved work with it.
 #pragma once
 
+#include "model_ranges.hxx"
+
 #include "isoquant/fit_cache.hpp"
 
 #include <org/isoquant/calc/XProductionFunctions.hpp>
@@ -99,6 +101,7 @@ private:
                                            const css::uno::Any& incompleteRows);
 
     FitCache fits_;
+    ModelRanges models_;
     css::lang::Locale locale_;
 };
 

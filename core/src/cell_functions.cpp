@@ -2,6 +2,7 @@
 
 #include "isoquant/form_comparison.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
@@ -58,12 +59,14 @@ template <typename Evaluate>
 CellTable columnOf(const NumericColumns& bundles, Evaluate value)
 {
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    Eigen::VectorXd bundle(bundles.values.cols()); // one vector for every row: no allocation per row
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
-        const double result = value(Eigen::VectorXd(bundles.values.row(row).transpose()));
+        bundle = bundles.values.row(row).transpose();
+        const double result = value(bundle);
         if (!std::isfinite(result))
             throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
                              " gives a result too large to represent");
-        column.at(static_cast<std::size_t>(row), 0) = result;
+        column.set(static_cast<std::size_t>(row), 0, result);
     }
     return column;
 }
@@ -128,7 +131,7 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
 
 CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     double factor = 1.0;
     if (readSwitchArgument(mean, "mean")) {
         if (!technology.smearingFactor)
@@ -142,7 +145,7 @@ CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Ce
 
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology), [&](const Eigen::VectorXd& bundle) {
         return technology.technology->marginalProduct(bundle, chosen);
@@ -151,7 +154,7 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
 
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return columnOf(readBundles(inputs, technology),
                     [&](const Eigen::VectorXd& bundle) { return technology.technology->elasticity(bundle, chosen); });
@@ -159,7 +162,7 @@ CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, cons
 
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     if (inputs.empty()) {
         const auto scale = technology.technology->constantScaleElasticity();
         if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
@@ -173,17 +176,17 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 std::string returnsVerdictCell(const CellTable& model, const Cell& level)
 {
     const double confidence = readLevelArgument(level, "level");
-    return returnsVerdict(readProductionModel(model), confidence);
+    return returnsVerdict(cachedProductionModel(model), confidence);
 }
 
 CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const NumericColumns bundles = readBundles(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)
-        column.at(static_cast<std::size_t>(row), 0) = regularityPhrase(
-            *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels);
+        column.set(static_cast<std::size_t>(row), 0, regularityPhrase(
+            *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels));
     return column;
 }
 

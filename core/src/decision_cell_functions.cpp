@@ -8,6 +8,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/level_roots.hpp"
 #include "isoquant/local_shape.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/numerical_decisions.hpp"
 #include "isoquant/production_model.hpp"
@@ -50,12 +51,14 @@ template <typename Evaluate>
 CellTable perBundle(const NumericColumns& bundles, Evaluate evaluate)
 {
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    Eigen::VectorXd bundle(bundles.values.cols()); // one vector for every row: no allocation per row
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
         const std::string place = rowPlace(bundles, row, "inputs");
-        Cell result = evaluate(Eigen::VectorXd(bundles.values.row(row).transpose()), place);
+        bundle = bundles.values.row(row).transpose();
+        Cell result = evaluate(bundle, place);
         if (isNumber(result) && !std::isfinite(std::get<double>(result)))
             throw InputError(place + " gives a result too large to represent");
-        column.at(static_cast<std::size_t>(row), 0) = std::move(result);
+        column.set(static_cast<std::size_t>(row), 0, std::move(result));
     }
     return column;
 }
@@ -106,7 +109,7 @@ void requireRepresentable(const ProductionPlan& plan, const std::string& argumen
 CellTable rowOf(const Eigen::VectorXd& values)
 {
     CellTable row(1, static_cast<std::size_t>(values.size()));
-    for (Eigen::Index i = 0; i < values.size(); ++i) row.at(0, static_cast<std::size_t>(i)) = values(i);
+    for (Eigen::Index i = 0; i < values.size(); ++i) row.set(0, static_cast<std::size_t>(i), values(i));
     return row;
 }
 
@@ -128,7 +131,7 @@ struct DecisionSetup {
 
 DecisionSetup readDecision(const CellTable& model, const CellTable& prices, const std::string& pricesName)
 {
-    DecisionSetup setup{readProductionModel(model), {}};
+    DecisionSetup setup{cachedProductionModel(model), {}};
     setup.prices = readPrices(prices, pricesName, static_cast<Eigen::Index>(setup.model.inputLabels.size()));
     return setup;
 }
@@ -143,7 +146,7 @@ ProductionPlan leastCostOf(const DecisionSetup& setup, double target)
 
 CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, "input j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
@@ -153,7 +156,7 @@ CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, c
 
 CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputReturnsWord(checkedLocalShape(*technology.technology, bundle, place), chosen));
@@ -162,7 +165,7 @@ CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, co
 
 CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
@@ -172,7 +175,7 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
 
 CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
@@ -188,7 +191,7 @@ CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, c
 CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
                              const Cell& kind)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
@@ -269,7 +272,7 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
 CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTable& values, const Cell& first,
                          const Cell& second)
 {
-    const ProductionModel technology = readProductionModel(model);
+    const ProductionModel technology = cachedProductionModel(model);
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
     if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
     const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "i");
@@ -293,10 +296,11 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
         bool header = true;
         for (std::size_t column = 0; column < values.columns(); ++column)
             if (column != static_cast<std::size_t>(j) &&
-                !(isText(values.at(0, column)) && !std::get<std::string>(values.at(0, column)).empty()))
+                !(values.isText(0, column) && !values.text(0, column).empty()))
                 header = false;
         for (std::size_t row = 0; row < filled.rows(); ++row)
-            filled.at(row, static_cast<std::size_t>(j)) = (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0);
+            filled.set(row, static_cast<std::size_t>(j),
+                       (row == 0 && header) ? Cell(std::string("input j")) : Cell(1.0));
         read = readNumericColumns(filled, argument, ValueRule::positive, "input");
         bundles = read.values;
     } else {
@@ -309,10 +313,10 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
         Eigen::VectorXd bundle = bundles.row(row).transpose();
         bundle(j) = 1;
         const auto amount = amountForLevel(*technology.technology, bundle, j, logLevel);
-        column.at(static_cast<std::size_t>(row), 0) =
-            amount ? Cell(*amount)
-                   : Cell("no amount of " + inputName(technology, j) + " gives this output with " +
-                          inputName(technology, i) + " at " + formatNumber(bundle(i)));
+        column.set(static_cast<std::size_t>(row), 0,
+                   amount ? Cell(*amount)
+                          : Cell("no amount of " + inputName(technology, j) + " gives this output with " +
+                                 inputName(technology, i) + " at " + formatNumber(bundle(i))));
     }
     return column;
 }

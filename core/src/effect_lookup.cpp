@@ -21,9 +21,9 @@ bool startsWithIgnoringCase(std::string_view text, std::string_view start)
 CellTable effectRow(const std::string& label, double effect)
 {
     CellTable row(1, headerLabels.size());
-    row.at(0, 0) = label;
-    row.at(0, 1) = effect;
-    for (std::size_t column = 2; column < headerLabels.size(); ++column) row.at(0, column) = std::string(notAvailableText);
+    row.set(0, 0, label);
+    row.set(0, 1, effect);
+    for (std::size_t column = 2; column < headerLabels.size(); ++column) row.set(0, column, std::string(notAvailableText));
     return row;
 }
 

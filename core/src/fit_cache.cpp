@@ -12,25 +12,39 @@ void combine(std::size_t& seed, std::size_t value)
     seed ^= value + 0x9e3779b97f4a7c15ULL + (seed << 6) + (seed >> 2);
 }
 
+void hashNumber(std::size_t& seed, double number)
+{
+    const double value = number == 0 ? 0.0 : number; // -0 == 0
+    std::uint64_t bits = 0;
+    std::memcpy(&bits, &value, sizeof bits);
+    combine(seed, std::hash<std::uint64_t>{}(bits));
+}
+
 void hashCell(std::size_t& seed, const Cell& cell)
 {
     combine(seed, cell.index());
-    if (isNumber(cell)) {
-        const double value = std::get<double>(cell) == 0 ? 0.0 : std::get<double>(cell); // -0 == 0
-        std::uint64_t bits = 0;
-        std::memcpy(&bits, &value, sizeof bits);
-        combine(seed, std::hash<std::uint64_t>{}(bits));
-    } else if (isText(cell)) {
+    if (isNumber(cell))
+        hashNumber(seed, std::get<double>(cell));
+    else if (isText(cell))
         combine(seed, std::hash<std::string>{}(std::get<std::string>(cell)));
-    }
 }
 
+// Cell by cell as hashCell does (column by column), from the table's kinds and slots directly.
 void hashTable(std::size_t& seed, const CellTable& table)
 {
     combine(seed, table.rows());
     combine(seed, table.columns());
-    for (std::size_t row = 0; row < table.rows(); ++row)
-        for (std::size_t column = 0; column < table.columns(); ++column) hashCell(seed, table.at(row, column));
+    for (std::size_t column = 0; column < table.columns(); ++column) {
+        const CellKind* kinds = table.columnKinds(column);
+        const double* slots = table.columnSlots(column);
+        for (std::size_t row = 0; row < table.rows(); ++row) {
+            combine(seed, static_cast<std::size_t>(kinds[row]));
+            if (kinds[row] == CellKind::number)
+                hashNumber(seed, slots[row]);
+            else if (kinds[row] == CellKind::text)
+                combine(seed, std::hash<std::string>{}(table.text(row, column)));
+        }
+    }
 }
 
 } // namespace
@@ -65,16 +79,12 @@ std::shared_ptr<const ProductionFit> FitCache::fitOrReuse(const FitArguments& ar
     // Held while fitting, so that equal arguments arriving together are fitted once (Calc
     // serialises its calls anyway, so nothing is lost).
     const std::lock_guard<std::mutex> lock(mutex_);
-    for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-        if (entry->hash == hash && entry->arguments == arguments) {
-            entries_.splice(entries_.begin(), entries_, entry);
-            return entries_.front().fit;
-        }
-    }
+    if (const Entry* kept =
+            entries_.find([&](const Entry& entry) { return entry.hash == hash && entry.arguments == arguments; }))
+        return kept->fit;
     auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
     ++fitsComputed_;
-    entries_.push_front(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
-    if (entries_.size() > capacity_) entries_.pop_back();
+    entries_.add(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
     return computed;
 }
 

@@ -15,9 +15,8 @@ namespace {
 std::size_t findRow(const CellTable& table, const std::string& wanted)
 {
     for (std::size_t row = 0; row < table.rows(); ++row) {
-        const Cell& cell = table.at(row, 0);
-        if (!isText(cell)) continue;
-        const std::string& label = std::get<std::string>(cell);
+        if (!table.isText(row, 0)) continue;
+        const std::string& label = table.text(row, 0);
         if (equalsIgnoringCase(label, wanted) || equalsIgnoringCase(label, wanted + controlSuffix)) return row;
     }
     if (equalsIgnoringCase(wanted, "F")) return findRow(table, overallTestLabel);
@@ -119,7 +118,7 @@ Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& co
                              " is not a column; use estimate, std. error, t, p-value, low or high");
     } else if (!isEmpty(columnLabel) && !isText(columnLabel)) {
         throw InputError("column label: give a column's label, such as \"p-value\"");
-    } else if (isEmpty(table.at(row, 1))) {
+    } else if (table.isEmpty(row, 1)) {
         column = 3; // rows that hold only a test statistic
     }
     return table.at(row, column);

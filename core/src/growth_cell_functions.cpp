@@ -4,6 +4,7 @@
 #include "isoquant/growth_table.hpp"
 #include "isoquant/index_numbers.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/period_range.hpp"
 #include "isoquant/production_model.hpp"
@@ -96,7 +97,7 @@ void requireSameLabels(const std::string& argument, const std::string& ownNoun, 
 ProductionModel readModelArgument(const CellTable& range, const std::string& argument)
 {
     try {
-        return readProductionModel(range);
+        return cachedProductionModel(range);
     } catch (const InputError& error) {
         const std::string message = error.what();
         const std::string prefix = "model:";
@@ -111,9 +112,8 @@ bool holdsModel(const CellTable& weights)
     if (weights.columns() < 2 || weights.rows() < 2) return false;
     bool anyLabel = false;
     for (std::size_t row = 1; row < weights.rows(); ++row) {
-        const Cell& cell = weights.at(row, 0);
-        if (isNumber(cell)) return false;
-        anyLabel = anyLabel || (isText(cell) && !std::get<std::string>(cell).empty());
+        if (weights.isNumber(row, 0)) return false;
+        anyLabel = anyLabel || (weights.isText(row, 0) && !weights.text(row, 0).empty());
     }
     return anyLabel;
 }
@@ -212,7 +212,7 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
         if (!std::isfinite(levels(row)) || levels(row) == 0)
             throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
                              " gives a productivity too large or too small to represent");
-        column.at(static_cast<std::size_t>(row), 0) = levels(row);
+        column.set(static_cast<std::size_t>(row), 0, levels(row));
     }
     return column;
 }
@@ -259,7 +259,7 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
         if (!std::isfinite(value) || value == 0)
             throw InputError("quantities: " + periodPlace(amounts, period) +
                              ": the index is too large or too small to represent");
-        column.at(static_cast<std::size_t>(period), 0) = value;
+        column.set(static_cast<std::size_t>(period), 0, value);
     }
     return column;
 }

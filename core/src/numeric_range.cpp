@@ -4,6 +4,7 @@
 #include "isoquant/text.hpp"
 #include "isoquant/work_limits.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <stdexcept>
 
@@ -14,7 +15,7 @@ namespace {
 bool rowIsAllText(const CellTable& range, std::size_t row)
 {
     for (std::size_t column = 0; column < range.columns(); ++column)
-        if (!isText(range.at(row, column)) || std::get<std::string>(range.at(row, column)).empty()) return false;
+        if (!range.isText(row, column) || range.text(row, column).empty()) return false;
     return true;
 }
 
@@ -23,6 +24,45 @@ std::string place(const std::string& argument, std::size_t row, std::size_t colu
     std::string text = argument + ": row " + std::to_string(row + 1);
     if (columns > 1) text += ", column " + std::to_string(column + 1);
     return text;
+}
+
+bool isValid(CellKind kind, double slot, ValueRule rule)
+{
+    return kind == CellKind::number && std::isfinite(slot) && (rule == ValueRule::finite || slot > 0);
+}
+
+// Whether every cell from `firstRow` down is a number `rule` accepts: one pass over each column's
+// contiguous kinds and numbers, without the per-cell bookkeeping of the checking loop.
+bool allValid(const CellTable& range, std::size_t firstRow, ValueRule rule)
+{
+    for (std::size_t column = 0; column < range.columns(); ++column) {
+        const CellKind* kinds = range.columnKinds(column);
+        const double* slots = range.columnSlots(column);
+        bool valid = true;
+        for (std::size_t row = firstRow; row < range.rows(); ++row) valid &= isValid(kinds[row], slots[row], rule);
+        if (!valid) return false;
+    }
+    return true;
+}
+
+// Throws the message for the cell at (row, column) unless it holds a number `rule` accepts.
+void requireValid(const CellTable& range, std::size_t row, std::size_t column, const std::string& argument,
+                  ValueRule rule)
+{
+    const std::size_t columns = range.columns();
+    switch (range.kind(row, column)) {
+    case CellKind::empty:
+        throw InputError(place(argument, row, column, columns) + " is empty; every cell must hold a number");
+    case CellKind::text:
+        throw InputError(place(argument, row, column, columns) + " holds text " + quoted(range.text(row, column)) +
+                         "; every cell must hold a number");
+    case CellKind::number: break;
+    }
+    const double value = range.number(row, column);
+    if (!std::isfinite(value)) throw InputError(place(argument, row, column, columns) + " is not a finite number");
+    if (rule == ValueRule::positive && value <= 0)
+        throw InputError(place(argument, row, column, columns) + " is " + formatNumber(value) +
+                         "; logs need positive values");
 }
 
 } // namespace
@@ -40,7 +80,7 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
     const std::size_t firstRow = result.hasHeader ? 1 : 0;
     const std::size_t columns = range.columns();
     for (std::size_t column = 0; column < columns; ++column)
-        result.labels.push_back(result.hasHeader ? std::get<std::string>(range.at(0, column))
+        result.labels.push_back(result.hasHeader ? range.text(0, column)
                                                  : defaultLabelPrefix + " " + std::to_string(column + 1));
     if (range.rows() == firstRow) throw InputError(argument + ": holds a header row but no data");
 
@@ -50,23 +90,20 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
     Eigen::Index kept = 0;
     for (std::size_t row = firstRow; row < range.rows(); ++row) kept += skipped(row) ? 0 : 1;
     result.values.resize(kept, static_cast<Eigen::Index>(columns));
+    // The common case, every cell a valid number: copied column by column. Otherwise cell by
+    // cell in reading order, so that the message names the first bad cell row by row.
+    if (!skippedRows && allValid(range, firstRow, rule)) {
+        for (std::size_t column = 0; column < columns; ++column)
+            std::copy_n(range.columnSlots(column) + firstRow, kept,
+                        result.values.col(static_cast<Eigen::Index>(column)).data());
+        return result;
+    }
     Eigen::Index target = 0;
     for (std::size_t row = firstRow; row < range.rows(); ++row) {
         if (skipped(row)) continue;
         for (std::size_t column = 0; column < columns; ++column) {
-            const Cell& cell = range.at(row, column);
-            if (isEmpty(cell))
-                throw InputError(place(argument, row, column, columns) + " is empty; every cell must hold a number");
-            if (isText(cell))
-                throw InputError(place(argument, row, column, columns) + " holds text " +
-                                 quoted(std::get<std::string>(cell)) + "; every cell must hold a number");
-            const double value = std::get<double>(cell);
-            if (!std::isfinite(value))
-                throw InputError(place(argument, row, column, columns) + " is not a finite number");
-            if (rule == ValueRule::positive && value <= 0)
-                throw InputError(place(argument, row, column, columns) + " is " + formatNumber(value) +
-                                 "; logs need positive values");
-            result.values(target, static_cast<Eigen::Index>(column)) = value;
+            requireValid(range, row, column, argument, rule);
+            result.values(target, static_cast<Eigen::Index>(column)) = range.number(row, column);
         }
         ++target;
     }

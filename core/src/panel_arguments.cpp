@@ -52,8 +52,11 @@ std::vector<bool> findIncompleteRows(const RowRanges& ranges)
                              rowsOfData(dataRows));
         for (std::size_t row = 0; row < dataRows; ++row)
             for (std::size_t column = 0; column < range.columns(); ++column) {
-                const Cell& cell = range.at(row + headerRows, column);
-                if (isBlank(cell) || (textIsMissing && isText(cell))) incomplete[row] = true;
+                const std::size_t cellRow = row + headerRows;
+                const CellKind kind = range.kind(cellRow, column);
+                if (kind == CellKind::empty ||
+                    (kind == CellKind::text && (textIsMissing || range.text(cellRow, column).empty())))
+                    incomplete[row] = true;
             }
     };
     auto headerRows = [](const CellTable& range) -> std::size_t { return hasHeaderRow(range) ? 1 : 0; };

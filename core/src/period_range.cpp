@@ -9,13 +9,6 @@ namespace isoquant {
 
 namespace {
 
-bool firstRowIsAllText(const CellTable& range)
-{
-    for (std::size_t column = 0; column < range.columns(); ++column)
-        if (!isText(range.at(0, column)) || std::get<std::string>(range.at(0, column)).empty()) return false;
-    return true;
-}
-
 std::string cellPlace(const std::string& argument, std::size_t period, std::size_t row, std::size_t column,
                       std::size_t columns)
 {
@@ -37,11 +30,11 @@ NumericColumns readPeriodColumns(const CellTable& range, const std::string& argu
     if (range.empty()) throw InputError(argument + ": the range is empty");
 
     NumericColumns result;
-    result.hasHeader = firstRowIsAllText(range);
+    result.hasHeader = hasHeaderRow(range);
     const std::size_t firstRow = result.hasHeader ? 1 : 0;
     const std::size_t columns = range.columns();
     for (std::size_t column = 0; column < columns; ++column)
-        result.labels.push_back(result.hasHeader ? std::get<std::string>(range.at(0, column))
+        result.labels.push_back(result.hasHeader ? range.text(0, column)
                                                  : defaultLabelPrefix + " " + std::to_string(column + 1));
     if (range.rows() == firstRow) throw InputError(argument + ": holds a header row but no periods");
 

@@ -21,10 +21,9 @@ std::string rowPlace(std::size_t row) { return "model: row " + std::to_string(ro
 
 bool rowIsEmpty(const CellTable& range, std::size_t row)
 {
-    for (std::size_t column = 0; column < range.columns(); ++column) {
-        const Cell& cell = range.at(row, column);
-        if (!isEmpty(cell) && !(isText(cell) && std::get<std::string>(cell).empty())) return false;
-    }
+    for (std::size_t column = 0; column < range.columns(); ++column)
+        if (!range.isEmpty(row, column) && !(range.isText(row, column) && range.text(row, column).empty()))
+            return false;
     return true;
 }
 
@@ -39,17 +38,16 @@ bool isStatisticLabel(const std::string& label)
 
 double requiredNumber(const CellTable& range, std::size_t row, const std::string& label)
 {
-    const Cell& cell = range.at(row, 1);
-    if (!isNumber(cell) || !std::isfinite(std::get<double>(cell)))
+    if (!range.isNumber(row, 1) || !std::isfinite(range.number(row, 1)))
         throw InputError(rowPlace(row) + " (" + quoted(label) + ") has no number in its second column");
-    return std::get<double>(cell);
+    return range.number(row, 1);
 }
 
 // A number in `column` of the row, or NaN where the cell holds none (an "n/a", say).
 double optionalNumber(const CellTable& range, std::size_t row, std::size_t column)
 {
-    if (column >= range.columns() || !isNumber(range.at(row, column))) return notANumber;
-    return std::get<double>(range.at(row, column));
+    if (column >= range.columns() || !range.isNumber(row, column)) return notANumber;
+    return range.number(row, column);
 }
 
 struct ModelRows {
@@ -75,8 +73,8 @@ bool isFormStatisticLabel(const std::string& label)
 std::vector<std::string> textsAfterLabel(const CellTable& range, std::size_t row)
 {
     std::vector<std::string> texts;
-    for (std::size_t column = 1; column < range.columns() && isText(range.at(row, column)); ++column) {
-        const std::string& text = std::get<std::string>(range.at(row, column));
+    for (std::size_t column = 1; column < range.columns() && range.isText(row, column); ++column) {
+        const std::string& text = range.text(row, column);
         if (text.empty()) break;
         texts.push_back(text);
     }
@@ -96,14 +94,14 @@ void readStatisticRow(const CellTable& range, std::size_t row, const std::string
     } else if (equalsIgnoringCase(label, returnsLabel)) {
         ScaleTest test;
         test.estimate = requiredNumber(range, row, label);
-        test.imposed = range.columns() > 2 && isText(range.at(row, 2)) &&
-                       equalsIgnoringCase(std::get<std::string>(range.at(row, 2)), imposedText);
+        test.imposed = range.columns() > 2 && range.isText(row, 2) &&
+                       equalsIgnoringCase(range.text(row, 2), imposedText);
         test.standardError = optionalNumber(range, row, 2);
         test.fStatistic = optionalNumber(range, row, 3);
         test.pValue = optionalNumber(range, row, 4);
         rows.scaleTest = test;
-    } else if (equalsIgnoringCase(label, convergenceLabel) && isText(range.at(row, 1))) {
-        rows.convergence = std::get<std::string>(range.at(row, 1));
+    } else if (equalsIgnoringCase(label, convergenceLabel) && range.isText(row, 1)) {
+        rows.convergence = range.text(row, 1);
     }
 }
 
@@ -130,17 +128,16 @@ ModelRows readRows(const CellTable& range)
             if (section == Section::parameters) section = Section::statistics;
             continue;
         }
-        const Cell& labelCell = range.at(row, 0);
-        if (!isText(labelCell) || std::get<std::string>(labelCell).empty())
+        if (!range.isText(row, 0) || range.text(row, 0).empty())
             throw InputError(rowPlace(row) + " has no label in its first column");
-        const std::string& label = std::get<std::string>(labelCell);
-        const bool isFormRow = equalsIgnoringCase(label, formLabel) && isText(range.at(row, 1));
+        const std::string& label = range.text(row, 0);
+        const bool isFormRow = equalsIgnoringCase(label, formLabel) && range.isText(row, 1);
         if (equalsIgnoringCase(label, headerLabels[0])) continue;
         if (isFormRow) {
             readFormRow(range, row, rows);
             continue;
         }
-        if (equalsIgnoringCase(label, inputsLabel) && isText(range.at(row, 1))) {
+        if (equalsIgnoringCase(label, inputsLabel) && range.isText(row, 1)) {
             rows.inputsRow = textsAfterLabel(range, row);
             continue;
         }

@@ -35,20 +35,20 @@ public:
     void valueRow(const char* label, double value) { put(label, {value}); }
     void textRow(const std::string& label, std::initializer_list<std::string> texts)
     {
-        table_.at(row_, 0) = label;
+        table_.set(row_, 0, label);
         std::size_t column = 1;
         for (const auto& text : texts) {
-            if (!text.empty()) table_.at(row_, column) = text;
+            if (!text.empty()) table_.set(row_, column, text);
             ++column;
         }
         ++row_;
     }
     void put(const std::string& label, std::initializer_list<Cell> values)
     {
-        table_.at(row_, 0) = label;
+        table_.set(row_, 0, label);
         std::size_t column = 1;
         for (const auto& value : values) {
-            table_.at(row_, column) = isNumber(value) ? numberCell(std::get<double>(value)) : value;
+            table_.set(row_, column, isNumber(value) ? numberCell(std::get<double>(value)) : value);
             ++column;
         }
         ++row_;

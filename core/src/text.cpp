@@ -1,21 +1,33 @@
 #include "isoquant/text.hpp"
 
-#include <cctype>
 #include <charconv>
 
 namespace isoquant {
 
+namespace {
+
+// 'A'..'Z' to 'a'..'z', every other byte as it is; not std::tolower, whose answer for bytes above
+// 127 depends on the process's locale (and which costs a call per character).
+char asciiLower(char character)
+{
+    return character >= 'A' && character <= 'Z' ? static_cast<char>(character - 'A' + 'a') : character;
+}
+
+} // namespace
+
 std::string lowerCase(std::string_view text)
 {
     std::string lowered(text);
-    for (char& character : lowered)
-        character = static_cast<char>(std::tolower(static_cast<unsigned char>(character)));
+    for (char& character : lowered) character = asciiLower(character);
     return lowered;
 }
 
 bool equalsIgnoringCase(std::string_view left, std::string_view right)
 {
-    return lowerCase(left) == lowerCase(right);
+    if (left.size() != right.size()) return false;
+    for (std::size_t i = 0; i < left.size(); ++i)
+        if (asciiLower(left[i]) != asciiLower(right[i])) return false;
+    return true;
 }
 
 bool endsWithIgnoringCase(std::string_view text, std::string_view ending)

@@ -7,6 +7,7 @@
 #include "isoquant/fit_table.hpp"
 #include "isoquant/least_squares.hpp"
 #include "isoquant/production_fit.hpp"
+#include "median_seconds.hpp"
 
 #include <algorithm>
 #include <chrono>
@@ -19,6 +20,7 @@
 
 namespace {
 
+using isoquant::benchmarks::medianSeconds;
 using Clock = std::chrono::steady_clock;
 
 // Invented plant-level data: three inputs, lognormal, and
@@ -85,21 +87,8 @@ isoquant::CellTable asCells(const Eigen::MatrixXd& values)
     isoquant::CellTable table(static_cast<std::size_t>(values.rows()), static_cast<std::size_t>(values.cols()));
     for (Eigen::Index i = 0; i < values.rows(); ++i)
         for (Eigen::Index j = 0; j < values.cols(); ++j)
-            table.at(static_cast<std::size_t>(i), static_cast<std::size_t>(j)) = values(i, j);
+            table.set(static_cast<std::size_t>(i), static_cast<std::size_t>(j), values(i, j));
     return table;
-}
-
-template <typename Work>
-double medianSeconds(int runs, Work work)
-{
-    std::vector<double> seconds;
-    for (int run = 0; run < runs; ++run) {
-        const auto start = Clock::now();
-        work();
-        seconds.push_back(std::chrono::duration<double>(Clock::now() - start).count());
-    }
-    std::sort(seconds.begin(), seconds.end());
-    return seconds[seconds.size() / 2];
 }
 
 volatile double sink = 0; // keeps the optimiser from dropping the timed work

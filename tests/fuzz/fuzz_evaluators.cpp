@@ -13,13 +13,13 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
     FuzzedDataProvider data(bytes, size);
     const std::size_t inputs = data.ConsumeIntegralInRange<std::size_t>(1, 4);
     CellTable model(2 + inputs, 2);
-    model.at(0, 0) = std::string("form");
-    model.at(0, 1) = std::string("cobb-douglas");
-    model.at(1, 0) = std::string(data.ConsumeBool() ? "ln A" : "A");
-    model.at(1, 1) = fuzzedCell(data);
+    model.set(0, 0, std::string("form"));
+    model.set(0, 1, std::string("cobb-douglas"));
+    model.set(1, 0, std::string(data.ConsumeBool() ? "ln A" : "A"));
+    model.set(1, 1, fuzzedCell(data));
     for (std::size_t i = 0; i < inputs; ++i) {
-        model.at(2 + i, 0) = "input " + std::to_string(i + 1);
-        model.at(2 + i, 1) = fuzzedCell(data);
+        model.set(2 + i, 0, "input " + std::to_string(i + 1));
+        model.set(2 + i, 1, fuzzedCell(data));
     }
     const std::size_t rows = data.ConsumeIntegralInRange<std::size_t>(0, 8);
     const CellTable bundles = fuzzedTable(data, rows, inputs + data.ConsumeIntegralInRange<std::size_t>(0, 1),

@@ -44,7 +44,7 @@ inline CellTable fuzzedTable(FuzzedDataProvider& data, std::size_t rows, std::si
 {
     CellTable table(rows, columns);
     for (std::size_t row = 0; row < rows; ++row)
-        for (std::size_t column = 0; column < columns; ++column) table.at(row, column) = fuzzedCell(data, words);
+        for (std::size_t column = 0; column < columns; ++column) table.set(row, column, fuzzedCell(data, words));
     return table;
 }
 
@@ -52,10 +52,8 @@ inline CellTable fuzzedTable(FuzzedDataProvider& data, std::size_t rows, std::si
 inline void requireFiniteNumbers(const CellTable& table)
 {
     for (std::size_t row = 0; row < table.rows(); ++row)
-        for (std::size_t column = 0; column < table.columns(); ++column) {
-            const Cell& cell = table.at(row, column);
-            if (isNumber(cell) && !std::isfinite(std::get<double>(cell))) std::abort();
-        }
+        for (std::size_t column = 0; column < table.columns(); ++column)
+            if (table.isNumber(row, column) && !std::isfinite(table.number(row, column))) std::abort();
 }
 
 } // namespace isoquant::fuzzing

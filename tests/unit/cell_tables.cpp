@@ -10,10 +10,10 @@ CellTable numberRange(const Eigen::MatrixXd& values, const std::vector<std::stri
     if (header && labels.size() != static_cast<std::size_t>(values.cols()))
         throw std::invalid_argument("numberRange: one label per column");
     CellTable range(static_cast<std::size_t>(values.rows()) + header, static_cast<std::size_t>(values.cols()));
-    for (std::size_t column = 0; column < labels.size(); ++column) range.at(0, column) = labels[column];
+    for (std::size_t column = 0; column < labels.size(); ++column) range.set(0, column, labels[column]);
     for (Eigen::Index row = 0; row < values.rows(); ++row)
         for (Eigen::Index column = 0; column < values.cols(); ++column)
-            range.at(static_cast<std::size_t>(row) + header, static_cast<std::size_t>(column)) = values(row, column);
+            range.set(static_cast<std::size_t>(row) + header, static_cast<std::size_t>(column), values(row, column));
     return range;
 }
 
@@ -25,7 +25,7 @@ CellTable typedRange(std::initializer_list<std::initializer_list<Cell>> rows)
     for (const auto& cells : rows) {
         if (cells.size() != columns) throw std::invalid_argument("typedRange: rows of different lengths");
         std::size_t column = 0;
-        for (const auto& cell : cells) range.at(row, column++) = cell;
+        for (const auto& cell : cells) range.set(row, column++, cell);
         ++row;
     }
     return range;
@@ -36,7 +36,7 @@ Eigen::VectorXd columnValues(const CellTable& column)
     if (column.columns() != 1) throw std::invalid_argument("columnValues: not one column");
     Eigen::VectorXd values(static_cast<Eigen::Index>(column.rows()));
     for (std::size_t row = 0; row < column.rows(); ++row)
-        values(static_cast<Eigen::Index>(row)) = std::get<double>(column.at(row, 0));
+        values(static_cast<Eigen::Index>(row)) = column.number(row, 0);
     return values;
 }
 

@@ -51,13 +51,13 @@ Eigen::VectorXd outputOf(const Technology& technology, const Eigen::VectorXd& lo
 CellTable typedCobbDouglas(double logScale, const Eigen::VectorXd& exponents, const std::vector<std::string>& labels)
 {
     CellTable model(static_cast<std::size_t>(exponents.size()) + 2, 2);
-    model.at(0, 0) = std::string("form");
-    model.at(0, 1) = std::string("cobb-douglas");
-    model.at(1, 0) = std::string("ln A");
-    model.at(1, 1) = logScale;
+    model.set(0, 0, std::string("form"));
+    model.set(0, 1, std::string("cobb-douglas"));
+    model.set(1, 0, std::string("ln A"));
+    model.set(1, 1, logScale);
     for (Eigen::Index i = 0; i < exponents.size(); ++i) {
-        model.at(static_cast<std::size_t>(i) + 2, 0) = labels.at(static_cast<std::size_t>(i));
-        model.at(static_cast<std::size_t>(i) + 2, 1) = exponents(i);
+        model.set(static_cast<std::size_t>(i) + 2, 0, labels.at(static_cast<std::size_t>(i)));
+        model.set(static_cast<std::size_t>(i) + 2, 1, exponents(i));
     }
     return model;
 }

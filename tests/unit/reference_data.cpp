@@ -34,8 +34,8 @@ CellTable textColumn(const CsvTable& table, const std::string& name)
 {
     const auto texts = table.texts(name);
     CellTable column(texts.size() + 1, 1);
-    column.at(0, 0) = name;
-    for (std::size_t row = 0; row < texts.size(); ++row) column.at(row + 1, 0) = texts[row];
+    column.set(0, 0, name);
+    for (std::size_t row = 0; row < texts.size(); ++row) column.set(row + 1, 0, texts[row]);
     return column;
 }
 

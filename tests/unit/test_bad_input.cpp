@@ -31,7 +31,7 @@ CellTable firstRows(const CellTable& range, std::size_t rows)
 {
     CellTable kept(rows, range.columns());
     for (std::size_t row = 0; row < rows; ++row)
-        for (std::size_t column = 0; column < range.columns(); ++column) kept.at(row, column) = range.at(row, column);
+        for (std::size_t column = 0; column < range.columns(); ++column) kept.set(row, column, range.at(row, column));
     return kept;
 }
 
@@ -59,27 +59,27 @@ BOOST_AUTO_TEST_CASE(the_unspoiled_arguments_fit)
 BOOST_AUTO_TEST_CASE(text_and_empty_cells_are_named_by_row_and_column)
 {
     auto arguments = goodArguments();
-    arguments.inputs.at(5, 1) = text("n.a.");
+    arguments.inputs.set(5, 1, text("n.a."));
     BOOST_TEST(fitMessage(arguments) == "inputs: row 6, column 2 holds text 'n.a.'; every cell must hold a number");
 
     arguments = goodArguments();
-    arguments.inputs.at(9, 0) = Cell{};
+    arguments.inputs.set(9, 0, Cell{});
     BOOST_TEST(fitMessage(arguments) == "inputs: row 10, column 1 is empty; every cell must hold a number");
 
     // A one-column range names the row only.
     arguments = goodArguments();
-    arguments.output.at(3, 0) = Cell{};
+    arguments.output.set(3, 0, Cell{});
     BOOST_TEST(fitMessage(arguments) == "output: row 4 is empty; every cell must hold a number");
 }
 
 BOOST_AUTO_TEST_CASE(values_whose_log_is_taken_must_be_positive)
 {
     auto arguments = goodArguments();
-    arguments.inputs.at(2, 0) = 0.0;
+    arguments.inputs.set(2, 0, 0.0);
     BOOST_TEST(fitMessage(arguments) == "inputs: row 3, column 1 is 0; logs need positive values");
 
     arguments = goodArguments();
-    arguments.output.at(7, 0) = -5.0;
+    arguments.output.set(7, 0, -5.0);
     BOOST_TEST(fitMessage(arguments) == "output: row 8 is -5; logs need positive values");
 
     // Controls are entered as they are, so a negative control is fine.
@@ -93,11 +93,11 @@ BOOST_AUTO_TEST_CASE(values_whose_log_is_taken_must_be_positive)
 BOOST_AUTO_TEST_CASE(values_that_are_not_finite_are_named)
 {
     auto arguments = goodArguments();
-    arguments.inputs.at(4, 0) = notANumber;
+    arguments.inputs.set(4, 0, notANumber);
     BOOST_TEST(fitMessage(arguments) == "inputs: row 5, column 1 is not a finite number");
 
     arguments = goodArguments();
-    arguments.output.at(12, 0) = infinity;
+    arguments.output.set(12, 0, infinity);
     BOOST_TEST(fitMessage(arguments) == "output: row 13 is not a finite number");
 
     arguments = goodArguments();
@@ -124,8 +124,8 @@ BOOST_AUTO_TEST_CASE(ranges_of_the_wrong_shape)
 
     // Both selections are 25 rows tall, but only the output's first row is text: the hint says so.
     arguments = goodArguments();
-    arguments.inputs.at(0, 0) = 100.0;
-    arguments.inputs.at(0, 1) = 100.0;
+    arguments.inputs.set(0, 0, 100.0);
+    arguments.inputs.set(0, 1, 100.0);
     BOOST_TEST(fitMessage(arguments) ==
                "inputs: has 25 rows of data but output has 24 rows (a header row of text was found in output only)");
 
@@ -161,13 +161,13 @@ BOOST_AUTO_TEST_CASE(collinear_inputs_are_named)
     // C = 2·L: ln C = ln 2 + ln L, collinear with the constant.
     auto arguments = goodArguments();
     for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
-        arguments.inputs.at(row, 1) = 2.0 * std::get<double>(arguments.inputs.at(row, 0));
+        arguments.inputs.set(row, 1, 2.0 * arguments.inputs.number(row, 0));
     BOOST_TEST(fitMessage(arguments) ==
                "inputs: 'L' and 'C' together with ln A are collinear (inputs taken in logs); drop one of them");
 
     // A constant column cannot be told apart from ln A.
     arguments = goodArguments();
-    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row) arguments.inputs.at(row, 1) = 100.0;
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row) arguments.inputs.set(row, 1, 100.0);
     BOOST_TEST(fitMessage(arguments) == "inputs: 'C' does not vary, so it cannot be told apart from ln A");
 }
 
@@ -177,7 +177,7 @@ BOOST_AUTO_TEST_CASE(output_without_variation_is_refused)
 {
     for (const double value : {100.0, 50.0}) {
         auto arguments = goodArguments();
-        for (std::size_t row = 1; row < arguments.output.rows(); ++row) arguments.output.at(row, 0) = value;
+        for (std::size_t row = 1; row < arguments.output.rows(); ++row) arguments.output.set(row, 0, value);
         BOOST_TEST_INFO("every output " << value);
         BOOST_TEST(fitMessage(arguments) == "output: every row holds the same value; there is no variation to explain");
     }
@@ -193,7 +193,7 @@ BOOST_AUTO_TEST_CASE(collinear_controls_are_named)
     arguments = goodArguments();
     Eigen::MatrixXd logLabour(24, 1);
     for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
-        logLabour(static_cast<Eigen::Index>(row - 1), 0) = 3.0 * std::log(std::get<double>(arguments.inputs.at(row, 0)));
+        logLabour(static_cast<Eigen::Index>(row - 1), 0) = 3.0 * std::log(arguments.inputs.number(row, 0));
     arguments.controls = isoquant::testing::numberRange(logLabour, {"log hours"});
     BOOST_TEST(fitMessage(arguments) ==
                "inputs and controls: 'L' and control 'log hours' are collinear (inputs taken in logs); drop one of them");

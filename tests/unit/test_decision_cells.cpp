@@ -48,14 +48,14 @@ CellTable pricesRow(double a, double b) { return numberRange(Eigen::RowVector2d(
 
 double number(const CellTable& table, std::size_t row, std::size_t column)
 {
-    BOOST_TEST_REQUIRE(isoquant::isNumber(table.at(row, column)));
-    return std::get<double>(table.at(row, column));
+    BOOST_TEST_REQUIRE(table.isNumber(row, column));
+    return table.number(row, column);
 }
 
 std::string text(const CellTable& table)
 {
-    BOOST_TEST_REQUIRE(isoquant::isText(table.at(0, 0)));
-    return std::get<std::string>(table.at(0, 0));
+    BOOST_TEST_REQUIRE(table.isText(0, 0));
+    return table.text(0, 0);
 }
 
 } // namespace
@@ -77,8 +77,8 @@ BOOST_AUTO_TEST_CASE(isoquant_points_give_the_level_back_through_prodoutput)
     Eigen::MatrixXd rows(4, 3);
     rows << 5, 0, 2, 10, 0, 2, 20, 0, 3, 40, 0, 3;
     CellTable range = numberRange(rows, {"labour", "ovens", "flour"});
-    range.at(2, 1) = std::string("ignored");
-    range.at(3, 1) = Cell{};
+    range.set(2, 1, std::string("ignored"));
+    range.set(3, 1, Cell{});
     const CellTable ovens = isoquant::isoquantColumn(threeInputs(), 12.0, range, std::string("labour"), 2.0);
     for (Eigen::Index row = 0; row < 4; ++row) rows(row, 1) = number(ovens, static_cast<std::size_t>(row), 0);
     const Eigen::VectorXd output3 = isoquant::testing::columnValues(isoquant::outputColumn(threeInputs(), numberRange(rows)));

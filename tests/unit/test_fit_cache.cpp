@@ -67,7 +67,7 @@ BOOST_AUTO_TEST_CASE(different_arguments_fit_again)
 
     // One data cell changed is a different fit too.
     auto changed = withLevel(0.95);
-    changed.output.at(24, 0) = 230.0;
+    changed.output.set(24, 0, 230.0);
     cache.fit(changed);
     BOOST_TEST(cache.fitsComputed() == 3u);
     // Both earlier fits are still there.
@@ -103,7 +103,7 @@ BOOST_AUTO_TEST_CASE(errors_are_not_cached)
         return isoquant::fitFromArguments(arguments);
     });
     auto bad = withLevel(0.95);
-    bad.inputs.at(3, 1) = std::string("n.a.");
+    bad.inputs.set(3, 1, std::string("n.a."));
     BOOST_CHECK_THROW(cache.fit(bad), isoquant::InputError);
     BOOST_CHECK_THROW(cache.fit(bad), isoquant::InputError);
     BOOST_TEST(calls == 2);

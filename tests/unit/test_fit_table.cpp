@@ -45,7 +45,7 @@ std::vector<std::string> firstColumn(const CellTable& table)
 {
     std::vector<std::string> labels;
     for (std::size_t row = 0; row < table.rows(); ++row)
-        labels.push_back(isoquant::isEmpty(table.at(row, 0)) ? "" : text(table.at(row, 0)));
+        labels.push_back(table.isEmpty(row, 0) ? "" : text(table.at(row, 0)));
     return labels;
 }
 
@@ -69,7 +69,7 @@ BOOST_AUTO_TEST_CASE(rows_and_columns_are_as_documented)
                                           "residual SD", "F (slopes = 0)", "log-likelihood", "AIC", "BIC",
                                           "returns to scale", "verdict", "form", "smearing factor"};
     BOOST_TEST(firstColumn(table) == labels, boost::test_tools::per_element());
-    for (std::size_t column = 0; column < 7; ++column) BOOST_TEST(isoquant::isEmpty(table.at(4, column)));
+    for (std::size_t column = 0; column < 7; ++column) BOOST_TEST(table.isEmpty(4, column));
 }
 
 BOOST_AUTO_TEST_CASE(controls_add_their_rows_and_ln_a_at_control_means)
@@ -100,7 +100,7 @@ BOOST_AUTO_TEST_CASE(cells_hold_the_fit)
     }
     BOOST_TEST(number(table.at(5, 1)) == 24.0);
     BOOST_TEST(number(table.at(6, 1)) == fit.rSquared);
-    BOOST_TEST(isoquant::isEmpty(table.at(9, 1)));
+    BOOST_TEST(table.isEmpty(9, 1));
     BOOST_TEST(number(table.at(9, 3)) == fit.regression.fStatistic);
     BOOST_TEST(number(table.at(9, 4)) == fit.regression.fPValue);
     BOOST_TEST(number(table.at(13, 1)) == fit.returns.estimate);
@@ -182,8 +182,8 @@ BOOST_AUTO_TEST_CASE(hand_typed_model_works)
         isoquant::testing::columnValues(isoquant::elasticityColumn(model, inputs, std::string("capital")));
     BOOST_TEST_REQUIRE(output.size() == 24);
     for (std::size_t row = 1; row < inputs.rows(); ++row) {
-        const double labour = std::get<double>(inputs.at(row, 0));
-        const double capital = std::get<double>(inputs.at(row, 1));
+        const double labour = inputs.number(row, 0);
+        const double capital = inputs.number(row, 1);
         const double expected = 1.01 * std::pow(labour, 0.75) * std::pow(capital, 0.25);
         const auto i = static_cast<Eigen::Index>(row - 1);
         BOOST_TEST(closeTo(output(i), expected, 1e-13));
@@ -205,7 +205,7 @@ BOOST_AUTO_TEST_CASE(round_trip_holds_whatever_the_input_labels)
         BOOST_TEST_CONTEXT("input labelled '" << label << "'")
         {
             auto arguments = isoquant::testing::cobbDouglas1928Arguments();
-            arguments.inputs.at(0, 1) = std::string(label);
+            arguments.inputs.set(0, 1, std::string(label));
             isoquant::ProductionFit fit;
             try {
                 fit = isoquant::fitFromArguments(arguments);

@@ -118,7 +118,7 @@ isoquant::FitArguments cesArguments(const std::string& dataset)
 // PRODCOMPARE's table (form_comparison.hpp): the Cobb-Douglas row is 1, the ces test row 7.
 double comparisonFigure(const isoquant::CellTable& table, const std::string& q)
 {
-    const auto number = [&](std::size_t row, std::size_t column) { return std::get<double>(table.at(row, column)); };
+    const auto number = [&](std::size_t row, std::size_t column) { return table.number(row, column); };
     if (q == "cd_llf") return number(1, 2);
     if (q == "lr") return number(7, 1);
     if (q == "lr_pvalue") return number(7, 4);

@@ -34,14 +34,14 @@ isoquant::ProductionData dataOf(const isoquant::FitArguments& arguments)
     const auto column = [](const isoquant::CellTable& range, std::size_t c) {
         Eigen::VectorXd values(static_cast<Eigen::Index>(range.rows() - 1));
         for (std::size_t row = 1; row < range.rows(); ++row)
-            values(static_cast<Eigen::Index>(row - 1)) = std::get<double>(range.at(row, c));
+            values(static_cast<Eigen::Index>(row - 1)) = range.number(row, c);
         return values;
     };
     data.output = column(arguments.output, 0);
     data.inputs.resize(data.output.size(), static_cast<Eigen::Index>(arguments.inputs.columns()));
     for (std::size_t c = 0; c < arguments.inputs.columns(); ++c) {
         data.inputs.col(static_cast<Eigen::Index>(c)) = column(arguments.inputs, c);
-        data.inputLabels.push_back(std::get<std::string>(arguments.inputs.at(0, c)));
+        data.inputLabels.push_back(arguments.inputs.text(0, c));
     }
     data.controls.resize(data.output.size(), 0);
     return data;
@@ -278,7 +278,7 @@ BOOST_AUTO_TEST_CASE(a_boundary_optimum_is_said_so)
     BOOST_TEST((table.at(2, 0) == Cell(std::string("delta"))));
     BOOST_TEST((table.at(2, 2) == Cell(std::string("boundary"))));
     BOOST_TEST((table.at(4, 2) == Cell(std::string("n/a")))); // nu's standard error
-    BOOST_TEST(std::get<std::string>(table.at(16, 2)).find("boundary delta = 1") != std::string::npos);
+    BOOST_TEST(table.text(16, 2).find("boundary delta = 1") != std::string::npos);
 
     const isoquant::Ces beyondSubstitutes(0.2, 0.4, -1.5, 1.0);
     const auto atCurvature =
@@ -342,7 +342,7 @@ BOOST_AUTO_TEST_CASE(bad_input_for_the_forms_is_named)
                "too few rows: output and inputs have 4 rows of data for 6 parameters of the translog form; need at least 7");
 
     auto starred = cobbDouglas;
-    starred.inputs.at(0, 0) = std::string("L*hours");
+    starred.inputs.set(0, 0, std::string("L*hours"));
     BOOST_TEST(fitMessage(starred, "translog") ==
                "inputs: column 1 is labelled 'L*hours'; the translog table joins labels with \"*\", so rename it");
 }
@@ -365,7 +365,7 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     BOOST_TEST((cesTable.at(19, 0) == Cell(std::string("smearing factor"))));
     // Summed in another order the mean may differ in its last bits (Eigen's vectorised sums follow
     // the data's alignment), so the check allows a few units of rounding.
-    BOOST_TEST(closeTo(std::get<double>(cesTable.at(19, 1)), ces.regression.residuals.array().exp().mean(), 1e-14));
+    BOOST_TEST(closeTo(cesTable.number(19, 1), ces.regression.residuals.array().exp().mean(), 1e-14));
 
     arguments.inputs = isoquant::testing::riceFarmArguments({"size", "totlabor", "seed"}).inputs;
     arguments.form = std::string("translog");

@@ -49,7 +49,7 @@ std::string indexMessage(const CellTable& quantities, const CellTable& weights, 
 
 CellTable with(CellTable range, std::size_t row, std::size_t column, Cell value)
 {
-    range.at(row, column) = std::move(value);
+    range.set(row, column, std::move(value));
     return range;
 }
 
@@ -57,7 +57,7 @@ CellTable firstRows(const CellTable& range, std::size_t rows)
 {
     CellTable kept(rows, range.columns());
     for (std::size_t row = 0; row < rows; ++row)
-        for (std::size_t column = 0; column < range.columns(); ++column) kept.at(row, column) = range.at(row, column);
+        for (std::size_t column = 0; column < range.columns(); ++column) kept.set(row, column, range.at(row, column));
     return kept;
 }
 
@@ -112,7 +112,7 @@ BOOST_AUTO_TEST_CASE(ranges_that_do_not_line_up)
                "weights: has 2 periods but inputs has 4 periods");
     CellTable bareShares(4, 2);
     for (std::size_t row = 0; row < 4; ++row)
-        for (std::size_t column = 0; column < 2; ++column) bareShares.at(row, column) = shares().at(row + 1, column);
+        for (std::size_t column = 0; column < 2; ++column) bareShares.set(row, column, shares().at(row + 1, column));
     BOOST_TEST(growthMessage(output(), inputs(), firstRows(bareShares, 3)) ==
                "weights: has 3 periods but inputs has 4 periods (a header row of text was found in inputs only)");
     const CellTable oneShareColumn = typedRange({{text("labour")}, {1.0}, {1.0}, {1.0}, {1.0}});
@@ -120,7 +120,11 @@ BOOST_AUTO_TEST_CASE(ranges_that_do_not_line_up)
     BOOST_TEST(indexMessage(inputs(), oneShareColumn) == "shares: has 1 column but quantities has 2");
     // Shares in another order than the inputs.
     CellTable swapped = shares();
-    for (std::size_t row = 0; row < swapped.rows(); ++row) std::swap(swapped.at(row, 0), swapped.at(row, 1));
+    for (std::size_t row = 0; row < swapped.rows(); ++row) {
+        const Cell first = swapped.at(row, 0);
+        swapped.set(row, 0, swapped.at(row, 1));
+        swapped.set(row, 1, first);
+    }
     BOOST_TEST(growthMessage(output(), inputs(), swapped) ==
                "weights: column 1 is 'capital' but inputs column 1 is 'labour'; give them the same labels, in the same order");
     BOOST_TEST(indexMessage(inputs(), swapped) ==

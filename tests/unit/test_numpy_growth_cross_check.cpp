@@ -72,7 +72,7 @@ public:
             const std::string period = row + 1 == table.rows() ? "total" : std::to_string(row + 1);
             for (std::size_t column = 1; column < table.columns(); ++column)
                 compare({dataset, series, "growth", period, static_cast<int>(column - 1)},
-                        std::get<double>(table.at(row, column)), growthAbsoluteTolerance, false);
+                        table.number(row, column), growthAbsoluteTolerance, false);
         }
     }
 
@@ -80,7 +80,7 @@ public:
                 const CellTable& values)
     {
         for (std::size_t row = 0; row < values.rows(); ++row)
-            compare({dataset, series, quantity, std::to_string(row + 1), 0}, std::get<double>(values.at(row, 0)),
+            compare({dataset, series, quantity, std::to_string(row + 1), 0}, values.number(row, 0),
                     indexRelativeTolerance, true);
     }
 

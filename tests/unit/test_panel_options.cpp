@@ -88,9 +88,9 @@ BOOST_AUTO_TEST_CASE(smearing_factor_is_mean_of_exp_residual)
     const auto fit = isoquant::fitFromArguments(arguments);
     double sum = 0;
     for (std::size_t row = 1; row < arguments.output.rows(); ++row) {
-        const double fitted = fit.estimates(0) + fit.estimates(1) * std::log(std::get<double>(arguments.inputs.at(row, 0))) +
-                              fit.estimates(2) * std::log(std::get<double>(arguments.inputs.at(row, 1)));
-        sum += std::exp(std::log(std::get<double>(arguments.output.at(row, 0))) - fitted);
+        const double fitted = fit.estimates(0) + fit.estimates(1) * std::log(arguments.inputs.number(row, 0)) +
+                              fit.estimates(2) * std::log(arguments.inputs.number(row, 1));
+        sum += std::exp(std::log(arguments.output.number(row, 0)) - fitted);
     }
     const double expected = sum / 24.0;
     BOOST_TEST(std::fabs(fit.smearingFactor - expected) <= 1e-12 * expected);
@@ -100,8 +100,8 @@ BOOST_AUTO_TEST_CASE(smearing_factor_is_mean_of_exp_residual)
 BOOST_AUTO_TEST_CASE(incomplete_rows_are_dropped_only_when_asked)
 {
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
-    arguments.inputs.at(5, 1) = std::string("missing");
-    arguments.output.at(9, 0) = isoquant::Cell{};
+    arguments.inputs.set(5, 1, std::string("missing"));
+    arguments.output.set(9, 0, isoquant::Cell{});
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "output: row 10 is empty; every cell must hold a number");
     arguments.incompleteRows = 1.0;
@@ -109,7 +109,7 @@ BOOST_AUTO_TEST_CASE(incomplete_rows_are_dropped_only_when_asked)
     BOOST_TEST(fit.panel.incompleteRowsDropped == 2);
     BOOST_TEST(fit.regression.observations == 22);
     // A zero is not missing: it is still an error, at its own row.
-    arguments.inputs.at(7, 0) = 0.0;
+    arguments.inputs.set(7, 0, 0.0);
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "inputs: row 8, column 1 is 0; logs need positive values");
 }
@@ -123,13 +123,13 @@ BOOST_AUTO_TEST_CASE(panel_arguments_are_checked)
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "effects: \"two-way\" needs the trend argument, the column of periods (years)");
     arguments = panel.arguments;
-    arguments.groups.at(3, 0) = isoquant::Cell{};
+    arguments.groups.set(3, 0, isoquant::Cell{});
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "groups: row 4 is empty; every row needs the identifier of its plant or firm");
     // An input that is constant within every plant cannot be told apart from the plant effects.
     arguments = panel.arguments;
     for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
-        arguments.inputs.at(row, 1) = std::get<double>(arguments.groups.at(row, 0));
+        arguments.inputs.set(row, 1, arguments.groups.number(row, 0));
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "inputs: 'capital' does not vary within any group, so it cannot be told apart from the group effects");
 }

@@ -100,8 +100,8 @@ BOOST_AUTO_TEST_CASE(standard_error_of_nu_is_that_of_the_sum_of_exponents)
             isoquant::CellTable ratios = generated.arguments.inputs;
             for (std::size_t row = 0; row < ratios.rows(); ++row)
                 for (std::size_t i = 0; i + 1 < ratios.columns(); ++i)
-                    ratios.at(row, i) = std::get<double>(ratios.at(row, i)) /
-                                        std::get<double>(ratios.at(row, ratios.columns() - 1));
+                    ratios.set(row, i, ratios.number(row, i) /
+                                        ratios.number(row, ratios.columns() - 1));
             auto reparameterised = generated.arguments;
             reparameterised.inputs = ratios;
             const auto refit = isoquant::fitFromArguments(reparameterised);

@@ -125,13 +125,13 @@ BOOST_AUTO_TEST_CASE(regularity_column_reads_a_typed_ces_model)
                    isoquant::regularityColumn(model, isoquant::testing::numberRange(Eigen::RowVector2d(1, 2)));
                }) == "model: the inputs row of a ces model must name two inputs");
     auto named = model;
-    named.at(5, 1) = std::string("machines");
+    named.set(5, 1, std::string("machines"));
     const auto bundles = isoquant::testing::numberRange(Eigen::RowVector2d(1.0, 2.0));
     // The inputs row has one text cell; widen the model by a column for the second label.
     isoquant::CellTable wide(6, 3);
     for (std::size_t row = 0; row < 6; ++row)
-        for (std::size_t column = 0; column < 2; ++column) wide.at(row, column) = model.at(row, column);
-    wide.at(5, 2) = std::string("machines");
+        for (std::size_t column = 0; column < 2; ++column) wide.set(row, column, model.at(row, column));
+    wide.set(5, 2, std::string("machines"));
     const isoquant::CellTable column = isoquant::regularityColumn(wide, bundles);
     BOOST_TEST((column.at(0, 0) == Cell(std::string("regular"))));
     BOOST_TEST((isoquant::marginalProductColumn(wide, bundles, std::string("machines")).at(0, 0) ==
@@ -154,7 +154,7 @@ BOOST_AUTO_TEST_CASE(comparison_table_layout)
     // Ranks are a permutation of 1, 2, 3 by each criterion.
     for (std::size_t column : {5u, 6u}) {
         double sum = 0;
-        for (std::size_t row = 1; row <= 3; ++row) sum += std::get<double>(table.at(row, column));
+        for (std::size_t row = 1; row <= 3; ++row) sum += table.number(row, column);
         BOOST_TEST(sum == 6.0);
     }
     BOOST_TEST((table.at(7, 5) == Cell(std::string("chi-squared"))));
@@ -171,7 +171,7 @@ BOOST_AUTO_TEST_CASE(comparison_says_which_form_cannot_be_fitted)
     BOOST_TEST((table.at(2, 1) ==
                 Cell(std::string("not fitted: inputs: the ces form takes exactly two inputs; this range has 3 columns"))));
     BOOST_TEST((table.at(7, 1) == Cell(std::string("n/a: no ces fit"))));
-    BOOST_TEST(std::get<double>(table.at(1, 5)) + std::get<double>(table.at(3, 5)) == 3.0);
+    BOOST_TEST(table.number(1, 5) + table.number(3, 5) == 3.0);
     BOOST_TEST(isoquant::testing::messageOf([&] {
                    isoquant::compareFormsTable(arguments.output, arguments.inputs, std::string("high"));
                }) == "level: 'high' is not a confidence level; give a number between 0 and 1, such as 0.95");

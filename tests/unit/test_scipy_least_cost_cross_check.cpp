@@ -59,13 +59,13 @@ Eigen::VectorXd numbersOf(const std::string& field)
 isoquant::CellTable typedCobbDouglas(const Eigen::VectorXd& parameters)
 {
     isoquant::CellTable model(static_cast<std::size_t>(parameters.size()) + 1, 2);
-    model.at(0, 0) = std::string("form");
-    model.at(0, 1) = std::string("cobb-douglas");
-    model.at(1, 0) = std::string("A");
-    model.at(1, 1) = parameters(0);
+    model.set(0, 0, std::string("form"));
+    model.set(0, 1, std::string("cobb-douglas"));
+    model.set(1, 0, std::string("A"));
+    model.set(1, 1, parameters(0));
     for (Eigen::Index i = 1; i < parameters.size(); ++i) {
-        model.at(static_cast<std::size_t>(i) + 1, 0) = "input " + std::to_string(i);
-        model.at(static_cast<std::size_t>(i) + 1, 1) = parameters(i);
+        model.set(static_cast<std::size_t>(i) + 1, 0, "input " + std::to_string(i));
+        model.set(static_cast<std::size_t>(i) + 1, 1, parameters(i));
     }
     return model;
 }
@@ -94,7 +94,7 @@ BOOST_AUTO_TEST_CASE(least_cost_bundles_agree_with_scipy, *boost::unit_test::pre
             const auto row = isoquant::leastCostRow(typedCobbDouglas(parameters), target,
                                                     isoquant::testing::numberRange(prices.transpose()));
             Eigen::VectorXd cells(static_cast<Eigen::Index>(row.columns()));
-            for (std::size_t i = 0; i < row.columns(); ++i) cells(static_cast<Eigen::Index>(i)) = std::get<double>(row.at(0, i));
+            for (std::size_t i = 0; i < row.columns(); ++i) cells(static_cast<Eigen::Index>(i)) = row.number(0, i);
             compare(name + " (PRODLEASTCOST)", cells, scipy);
             const isoquant::CobbDouglas technology(std::log(parameters(0)), parameters.tail(parameters.size() - 1));
             compare(name + " (numerical)", isoquant::solveLeastCost(technology, target, prices).inputs, scipy);

@@ -65,10 +65,10 @@ BOOST_AUTO_TEST_CASE(group_effects_are_group_means_of_the_residual)
     const auto arguments = isoquant::testing::statePanelArguments();
     double sum = 0;
     for (std::size_t row = 1; row <= 17; ++row) {
-        double value = std::log(std::get<double>(arguments.output.at(row, 0)));
+        double value = std::log(arguments.output.number(row, 0));
         for (std::size_t i = 0; i < 3; ++i)
-            value -= fit.estimates(static_cast<Eigen::Index>(1 + i)) * std::log(std::get<double>(arguments.inputs.at(row, i)));
-        value -= fit.estimates(4) * std::get<double>(arguments.controls.at(row, 0));
+            value -= fit.estimates(static_cast<Eigen::Index>(1 + i)) * std::log(arguments.inputs.number(row, i));
+        value -= fit.estimates(4) * arguments.controls.number(row, 0);
         sum += value;
     }
     const double alabama = sum / 17.0;

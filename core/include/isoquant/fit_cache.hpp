@@ -3,10 +3,10 @@
 #pragma once
 
 #include "isoquant/cell_functions.hpp"
+#include "isoquant/recently_used.hpp"
 
 #include <cstddef>
 #include <functional>
-#include <list>
 #include <memory>
 #include <mutex>
 
@@ -17,7 +17,7 @@ public:
     using Fitter = std::function<ProductionFit(const FitArguments&)>;
 
     explicit FitCache(std::size_t capacity = 8, Fitter fitter = fitFromArguments)
-        : capacity_(capacity), fitter_(std::move(fitter)) {}
+        : fitter_(std::move(fitter)), entries_(capacity) {}
 
     // The fit for these arguments: from the cache when equal arguments were fitted recently.
     // Errors (InputError) are not cached: they are cheap to find again.
@@ -39,10 +39,9 @@ private:
         std::shared_ptr<const ProductionFit> fit;
     };
 
-    std::size_t capacity_;
     Fitter fitter_;
     mutable std::mutex mutex_;
-    std::list<Entry> entries_; // most recently used first
+    RecentlyUsed<Entry> entries_;
     std::size_t fitsComputed_ = 0;
 };
 
