@@ -1,6 +1,7 @@
 #include "cell_conversion.hxx"
 
 #include "isoquant/input_error.hpp"
+#include "isoquant/work_limits.hpp"
 
 #include <rtl/string.hxx>
 
@@ -58,6 +59,8 @@ CellTable toCellTable(const AnyTable& range, const std::string& argument)
     const auto rows = static_cast<std::size_t>(range.getLength());
     std::size_t columns = 0;
     for (const auto& row : range) columns = std::max(columns, static_cast<std::size_t>(row.getLength()));
+    // Before the copy is made, so that an oversized range costs no memory of ours.
+    checkRangeSize(rows, columns, argument);
     CellTable table(rows, columns);
     for (std::size_t r = 0; r < rows; ++r) {
         const auto& row = range[static_cast<sal_Int32>(r)];

@@ -1,6 +1,6 @@
 """A million-row fit and a million-row evaluator column in headless Calc: the numbers match
 python3-statsmodels (Debian) on the same data, a bad cell deep in the range is named by its row,
-and the office answers afterwards. Timings and peak memory are printed for the record
+a range beyond the cap on work per call gets its message, and the office answers afterwards. Timings and peak memory are printed for the record
 (tests/benchmarks/RESULTS.md), never asserted.
 
 Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
@@ -125,6 +125,16 @@ class MillionRows(unittest.TestCase):
             doc.calculateAll()
             self.assertEqual(get_cell(sheet, "E1"),
                              "Error: inputs: row 777778, column 1 holds text 'n/a'; every cell must hold a number")
+            self.assertTrue(office.alive())
+
+            # Beyond the cap on work per call (core/include/isoquant/work_limits.hpp): a message,
+            # before any copy of the range is made.
+            doc.Sheets.insertNewByName("empty", 1)
+            empty = doc.Sheets.getByName("empty")
+            empty.getCellRangeByName("A1").setFormula("=PRODFIT(A2:A1048576;B2:R1048576)")
+            doc.calculateAll()
+            self.assertEqual(get_cell(empty, "A1"), "Error: inputs: the range has 1,048,575 rows × 17 columns; "
+                                                    "one call takes at most 16,777,216 cells")
             self.assertTrue(office.alive())
             print("\nmillion rows (2 inputs), full recalculation: PRODFIT alone %.2f s (peak resident %.0f MB); "
                   "PRODFIT and a PRODMARGINAL column of 1,000,000 rows %.2f s (peak resident %.0f MB); "
