@@ -95,19 +95,19 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
         readNumericColumns(arguments.output, "output", ValueRule::positive, "output", skipped);
     if (output.values.cols() != 1)
         throw InputError("output: must be one column; it has " + std::to_string(output.values.cols()));
-    const NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
+    NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
     requireSameRows(output, inputs, "inputs");
     refuseControlLabels(inputs);
 
     ProductionData data;
     data.output = output.values.col(0);
-    data.inputs = inputs.values;
+    data.inputs = std::move(inputs.values); // a million rows: a copy costs page faults, not only time
     data.inputLabels = inputs.labels;
     if (!arguments.controls.empty()) {
-        const NumericColumns controls =
+        NumericColumns controls =
             readNumericColumns(arguments.controls, "controls", ValueRule::finite, "control", skipped);
         requireSameRows(output, controls, "controls");
-        data.controls = controls.values;
+        data.controls = std::move(controls.values);
         data.controlLabels = controls.labels;
     } else {
         data.controls.resize(data.output.size(), 0);
