@@ -22,7 +22,7 @@ import csv
 import os
 import sys
 
-SKIP = 77
+import reference_script  # this folder: command line, skip code, writing the figures
 LEVEL = 0.95
 
 # dataset: (file, output, CES inputs, translog inputs)
@@ -143,12 +143,7 @@ def translog_figures(np, sm, put, y, inputs):
 
 
 def main():
-    if len(sys.argv) != 3:
-        print(__doc__, file=sys.stderr)
-        return 2
-    data_dir, output_path = sys.argv[1], sys.argv[2]
-    if os.path.exists(output_path):
-        os.remove(output_path)  # never leave stale figures for the C++ check to read
+    data_dir, output_path = reference_script.paths(__doc__)
     try:
         import numpy as np
         import scipy
@@ -156,8 +151,7 @@ def main():
         import statsmodels.api as sm
         from scipy import optimize, stats
     except ImportError as error:
-        print(f"scipy or statsmodels is not importable ({error}); skipping", file=sys.stderr)
-        return SKIP
+        return reference_script.skipped("scipy or statsmodels", error)
 
     rows = []
     for dataset, (file, output, ces_inputs, translog_inputs) in DATASETS.items():
@@ -173,11 +167,7 @@ def main():
         comparison_figures(np, sm, stats.chi2, put, y, x1, x2, ces_rss)
         translog_figures(np, sm, put, y, [np.array(columns[name]) for name in translog_inputs])
 
-    os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
-    with open(output_path, "w", newline="") as handle:
-        writer = csv.writer(handle)
-        writer.writerow(["dataset", "form", "quantity", "index", "value"])
-        writer.writerows(rows)
+    reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
     print(f"scipy {scipy.__version__}, statsmodels {statsmodels.__version__}: {len(rows)} figures written to "
           f"{output_path}")
     return 0

@@ -30,7 +30,7 @@ import itertools
 import os
 import sys
 
-SKIP = 77
+import reference_script  # this folder: command line, skip code, writing the figures
 RICE_INPUTS = [("seed", "pseed"), ("urea", "purea"), ("totlabor", "wage")]
 
 
@@ -109,26 +109,16 @@ def cobb_douglas_figures(np, path):
 
 
 def main():
-    if len(sys.argv) != 3:
-        print(__doc__, file=sys.stderr)
-        return 2
-    data_dir, output_path = sys.argv[1], sys.argv[2]
-    if os.path.exists(output_path):
-        os.remove(output_path)  # never leave stale figures for the C++ check to read
+    data_dir, output_path = reference_script.paths(__doc__)
     try:
         import numpy as np
     except ImportError as error:
-        print(f"numpy is not importable ({error}); skipping", file=sys.stderr)
-        return SKIP
+        return reference_script.skipped("numpy", error)
 
     figures = rice_figures(np, os.path.join(data_dir, "rice_farms_panel.csv"))
     figures += cobb_douglas_figures(np, os.path.join(data_dir, "cobb_douglas_1928.csv"))
-    os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
-    with open(output_path, "w", newline="") as handle:
-        writer = csv.writer(handle)
-        writer.writerow(["dataset", "series", "quantity", "period", "column", "value"])
-        for dataset, series, quantity, period, column, value in figures:
-            writer.writerow([dataset, series, quantity, period, column, repr(float(value))])
+    reference_script.write_figures(output_path, ["dataset", "series", "quantity", "period", "column", "value"],
+                                   [row[:-1] + (repr(float(row[-1])),) for row in figures])
     print(f"numpy {np.__version__}: {len(figures)} figures written to {output_path}")
     return 0
 

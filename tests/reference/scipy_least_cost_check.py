@@ -20,7 +20,7 @@ import math
 import os
 import sys
 
-SKIP = 77
+import reference_script  # this folder: command line, skip code, writing the figures
 
 CASES = [
     ("bakery", "cobb-douglas", [3.0, 0.7, 0.5], [18.0, 45.0], 400.0),
@@ -59,30 +59,21 @@ def least_cost(optimize, np, form, parameters, prices, target):
 
 def main():
     # Called as the other reference scripts are, with the data folder first (this one needs no data).
-    if len(sys.argv) != 3:
-        print(__doc__, file=sys.stderr)
-        return 2
-    output_path = sys.argv[2]
-    if os.path.exists(output_path):
-        os.remove(output_path)  # never leave stale figures for the C++ check to read
+    _, output_path = reference_script.paths(__doc__)
     try:
         import numpy as np
         import scipy
         from scipy import optimize
     except ImportError as error:
-        print(f"scipy is not importable ({error}); skipping", file=sys.stderr)
-        return SKIP
+        return reference_script.skipped("scipy", error)
 
     rows = []
     for name, form, parameters, prices, target in CASES:
         bundle, error = least_cost(optimize, np, form, parameters, prices, target)
         rows.append([name, form, ";".join(map(repr, parameters)), ";".join(map(repr, prices)), repr(target),
                      ";".join(repr(float(x)) for x in bundle), repr(error)])
-    os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
-    with open(output_path, "w", newline="") as handle:
-        writer = csv.writer(handle)
-        writer.writerow(["case", "form", "parameters", "prices", "target", "bundle", "constraint_error"])
-        writer.writerows(rows)
+    reference_script.write_figures(
+        output_path, ["case", "form", "parameters", "prices", "target", "bundle", "constraint_error"], rows)
     print(f"scipy {scipy.__version__}: {len(rows)} least-cost bundles written to {output_path}")
     return 0
 

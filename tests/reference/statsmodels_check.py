@@ -20,7 +20,7 @@ import csv
 import os
 import sys
 
-SKIP = 77
+import reference_script  # this folder: command line, skip code, writing the figures
 LEVEL = 0.95
 
 DATASETS = {
@@ -227,19 +227,13 @@ def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, gr
 
 
 def main():
-    if len(sys.argv) != 3:
-        print(__doc__, file=sys.stderr)
-        return 2
-    data_dir, output_path = sys.argv[1], sys.argv[2]
-    if os.path.exists(output_path):
-        os.remove(output_path)  # never leave stale figures for the C++ check to read
+    data_dir, output_path = reference_script.paths(__doc__)
     try:
         import numpy as np
         import statsmodels
         import statsmodels.api as sm
     except ImportError as error:
-        print(f"statsmodels is not importable ({error}); skipping", file=sys.stderr)
-        return SKIP
+        return reference_script.skipped("statsmodels", error)
 
     rows = []
     for dataset, (file, output, inputs, controls) in DATASETS.items():
@@ -262,11 +256,8 @@ def main():
                                                                    name):
                     rows.append((dataset, model, name, level, quantity, index, repr(value)))
 
-    os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
-    with open(output_path, "w", newline="") as handle:
-        writer = csv.writer(handle)
-        writer.writerow(["dataset", "model", "covariance", "level", "quantity", "index", "value"])
-        writer.writerows(rows)
+    reference_script.write_figures(
+        output_path, ["dataset", "model", "covariance", "level", "quantity", "index", "value"], rows)
     print(f"statsmodels {statsmodels.__version__}: {len(rows)} figures written to {output_path}")
     return 0
 
