@@ -108,8 +108,8 @@ def furniture_workshops(office, path):
     style.align_right(sheet.getCellRangeByName("J1:O1"))
     style.column_widths(sheet, {"A": 28, "B": 18, "C": 18, "D": 18, "E": 24, "F": 22, "G": 22, "H": 6,
                                 "I": 42, "J": 24, "K": 22, "L": 18, "M": 22, "N": 20, "O": 20})
-    style.scatter_chart(sheet, "actual_vs_fitted", "Actual against fitted output (thousand EUR)",
-                        x_range="E1:E%d" % last, y_range="B1:B%d" % last, anchor="I25", size_mm=(160, 90))
+    style.scatter_chart(sheet, "actual_vs_fitted", "Actual and fitted output (thousand EUR)",
+                        actual_range="B1:B%d" % last, fitted_range="E1:E%d" % last, anchor="I25", size_mm=(160, 90))
     doc.NamedRanges.addNewByName("fitted_technology", "$Workshops.%s" % table,
                                  sheet.getCellRangeByName("A1").CellAddress, 0)
     doc.calculateAll()
@@ -190,8 +190,8 @@ def dairy_creameries(office, path):
     style.align_left(sheet.getCellRangeByName("G1:G%d" % last))  # an indent needs explicit left alignment
     sheet.getCellRangeByName("G1:G%d" % last).ParaIndent = 300  # 3 mm off the numbers beside
     style.one_page_wide(doc, sheet, landscape=True)
-    style.scatter_chart(sheet, "actual_vs_translog", "Actual against translog fitted output (thousand EUR)",
-                        x_range="F1:F%d" % last, y_range="C1:C%d" % last, anchor="I2", size_mm=(150, 90))
+    style.scatter_chart(sheet, "actual_vs_translog", "Actual and translog fitted output (thousand EUR)",
+                        actual_range="C1:C%d" % last, fitted_range="F1:F%d" % last, anchor="I2", size_mm=(150, 90))
 
     sheet = doc.Sheets.getByName("Fixed effects")
     table = "$A$1:$G$22"

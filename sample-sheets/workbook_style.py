@@ -58,25 +58,16 @@ def _address(sheet, name):
                             address.EndRow)
 
 
-def scatter_chart(sheet, name, heading, x_range, y_range, anchor, size_mm):
-    """An XY chart of y_range against x_range (both with a header cell), placed at anchor."""
-    position = sheet.getCellRangeByName(anchor).Position
-    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
-    charts = sheet.Charts
-    charts.addNewByName(name, rectangle, (_address(sheet, x_range), _address(sheet, y_range)), True, False)
-    chart = charts.getByName(name).EmbeddedObject
-    chart.setDiagram(chart.createInstance("com.sun.star.chart.XYDiagram"))
-    chart.HasMainTitle = True
-    chart.Title.String = heading
+def scatter_chart(sheet, name, heading, actual_range, fitted_range, anchor, size_mm):
+    """An XY chart of points, actual output against fitted output (both ranges with a header cell),
+    placed at anchor; no legend. Calc takes the leftmost of the two columns as x, so the axis
+    titles follow the columns' order."""
+    fitted_left = _address(sheet, fitted_range).StartColumn < _address(sheet, actual_range).StartColumn
+    x_range, y_range = (fitted_range, actual_range) if fitted_left else (actual_range, fitted_range)
+    x_title, y_title = ("fitted", "actual") if fitted_left else ("actual", "fitted")
+    chart = xy_lines_chart(sheet, name, heading, x_range, y_range, anchor, size_mm, x_title, y_title)
     chart.HasLegend = False
-    diagram = chart.Diagram
-    diagram.HasXAxisTitle = True
-    diagram.XAxisTitle.String = "fitted"
-    diagram.HasYAxisTitle = True
-    diagram.YAxisTitle.String = "actual"
-    series = diagram.getDataRowProperties(0)
-    series.Lines = False
-    plain_chart_background(chart)
+    chart.Diagram.getDataRowProperties(0).Lines = False
     return chart
 
 
