@@ -40,7 +40,8 @@ public:
             response -= lastLog;
             design.middleCols(1, slopes()).colwise() -= lastLog;
         }
-        design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
+        // Without controls their matrix has no storage: a block of it would offset a null pointer.
+        if (data_.controls.cols() > 0) design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
     }
 
 private:
