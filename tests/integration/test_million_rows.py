@@ -113,7 +113,10 @@ class MillionRows(unittest.TestCase):
             set_array_formula(sheet, "M2:M%d" % last, "=PRODMARGINAL($E$1:$K$17;B2:C%d;\"fuel\")" % last)
             both_seconds, both_peak = timed_recalculation(doc, pid)
             marginal = numpy.array([row[0] for row in sheet.getCellRangeByName("M2:M%d" % last).getDataArray()])
-            # The marginal product of fuel, b·A·fuel^b·hours^c / fuel, from the fitted numbers.
+            # The marginal product of fuel, ∂Y/∂fuel = b·A·fuel^b·hours^c / fuel (the derivative of
+            # the Cobb-Douglas form, from memory), from the fitted numbers as the table shows them;
+            # 1e-12 relative: the same expression evaluated in a different order (common practice,
+            # no source).
             log_scale, fuel, hours = table[1][1], table[2][1], table[3][1]
             expected = fuel * numpy.exp(log_scale + fuel * numpy.log(self.inputs[:, 0]) +
                                         hours * numpy.log(self.inputs[:, 1])) / self.inputs[:, 0]
