@@ -8,7 +8,6 @@
 #include <Eigen/Core>
 
 #include <algorithm>
-#include <optional>
 
 namespace isoquant {
 
