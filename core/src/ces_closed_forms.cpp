@@ -1,5 +1,6 @@
 #include "isoquant/ces_closed_forms.hpp"
 
+#include "isoquant/exact_elementwise.hpp"
 #include "isoquant/log_sum.hpp"
 
 #include <cmath>
@@ -29,7 +30,7 @@ HomogeneousCost cesCost(const CesParameters& parameters, const Eigen::Vector2d& 
     cost.scale = nu;
     cost.logUnitDemands = Eigen::Vector2d(logRatio + logSecond, logSecond);
     // ln c = ln(w₁a₁ + w₂a₂)
-    cost.logUnitCost = logSumExp(prices.array().log() + cost.logUnitDemands.array());
+    cost.logUnitCost = logSumExp(exactLog(prices.array()) + cost.logUnitDemands.array());
     return cost;
 }
 

@@ -2,6 +2,7 @@
 
 #include "isoquant/ces.hpp"
 #include "isoquant/distributions.hpp"
+#include "isoquant/exact_elementwise.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/least_squares.hpp"
 #include "isoquant/text.hpp"
@@ -178,9 +179,9 @@ std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
 CesLogs logsOf(const ProductionData& data)
 {
     CesLogs logs;
-    logs.logOutput = data.output.array().log().matrix();
-    logs.logSecond = data.inputs.col(1).array().log().matrix();
-    logs.logRatio = (data.inputs.col(0).array().log() - logs.logSecond.array()).matrix();
+    logs.logOutput = exactLog(data.output.array()).matrix();
+    logs.logSecond = exactLog(data.inputs.col(1).array()).matrix();
+    logs.logRatio = (exactLog(data.inputs.col(0).array()) - logs.logSecond.array()).matrix();
     return logs;
 }
 

@@ -16,7 +16,9 @@
 #include "isoquant/text.hpp"
 
 #include <cmath>
+#include <limits>
 #include <optional>
+#include <utility>
 
 namespace isoquant {
 
@@ -97,13 +99,38 @@ std::optional<HomogeneousCost> closedFormCost(const ProductionModel& model, cons
     return cobbDouglasCost(*cobbDouglas, prices);
 }
 
-// Every amount and figure of a plan must be a positive finite number; else the level asked for is
-// beyond what doubles hold.
-void requireRepresentable(const ProductionPlan& plan, const std::string& argument)
+// A figure shown from a plan must be a normal double, between 2.2e-308 and 1.8e308: below that a
+// double keeps too few digits (6e-323 has 4 bits) to be an answer. Else the level asked for is
+// beyond what doubles hold, and the message names the figure.
+void requireInRange(double value, const std::string& what, const std::string& argument)
 {
-    const bool fine = plan.inputs.allFinite() && plan.inputs.minCoeff() > 0 && std::isfinite(plan.output) &&
-                      plan.output > 0 && std::isfinite(plan.cost) && std::isfinite(plan.marginalCost);
-    if (!fine) throw InputError(argument + ": the answer is too large or too small to represent");
+    if (std::isnan(value) || value < 0)
+        throw InputError(argument + ": " + what + " is not a number that can be represented");
+    if (std::isinf(value))
+        throw InputError(argument + ": the plan is not representable: " + what +
+                         " would exceed 1.8e308, the largest number a cell holds");
+    if (value < std::numeric_limits<double>::min())
+        throw InputError(argument + ": the plan is not representable: " + what +
+                         " would be below 2.2e-308, the smallest number a cell holds at full precision");
+}
+
+// The amounts and the output of a plan, which every decision shows or rests on.
+void requireRepresentable(const ProductionPlan& plan, const ProductionModel& model, const std::string& argument)
+{
+    for (Eigen::Index i = 0; i < plan.inputs.size(); ++i)
+        requireInRange(plan.inputs(i), "the amount of " + inputName(model, i), argument);
+    requireInRange(plan.output, "the output", argument);
+}
+
+// The figure PRODCOST shows, and its name in a message.
+std::pair<double, std::string> costFigure(const ProductionPlan& plan, CostMeasure measure, double level)
+{
+    switch (measure) {
+    case CostMeasure::marginal: return {plan.marginalCost, "the marginal cost"};
+    case CostMeasure::average: return {plan.cost / level, "the average cost"};
+    case CostMeasure::total: break;
+    }
+    return {plan.cost, "the cost"};
 }
 
 CellTable rowOf(const Eigen::VectorXd& values)
@@ -211,7 +238,7 @@ CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTab
     const double level = readPositiveNumber(target, "target output");
     return decided([&] { return leastCostOf(setup, level); },
                    [&](const ProductionPlan& plan) {
-                       requireRepresentable(plan, "target output");
+                       requireRepresentable(plan, setup.model, "target output");
                        return rowOf(plan.inputs);
                    });
 }
@@ -223,13 +250,10 @@ CellTable costCell(const CellTable& model, const Cell& target, const CellTable& 
     const CostMeasure measure = readCostMeasure(what);
     return decided([&] { return leastCostOf(setup, level); },
                    [&](const ProductionPlan& plan) {
-                       requireRepresentable(plan, "target output");
-                       switch (measure) {
-                       case CostMeasure::marginal: return singleCell(plan.marginalCost);
-                       case CostMeasure::average: return singleCell(plan.cost / level);
-                       case CostMeasure::total: break;
-                       }
-                       return singleCell(plan.cost);
+                       requireRepresentable(plan, setup.model, "target output");
+                       const auto [figure, what] = costFigure(plan, measure, level);
+                       requireInRange(figure, what, "target output");
+                       return singleCell(figure);
                    });
 }
 
@@ -243,7 +267,7 @@ CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable&
             return solveBudget(*setup.model.technology, spending, setup.prices);
         },
         [&](const ProductionPlan& plan) {
-            requireRepresentable(plan, "budget");
+            requireRepresentable(plan, setup.model, "budget");
             Eigen::VectorXd row(plan.inputs.size() + 1);
             row << plan.inputs, plan.output;
             return rowOf(row);
@@ -260,7 +284,7 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
             return solveProfit(*setup.model.technology, price, setup.prices);
         },
         [&](const ProductionPlan& plan) {
-            requireRepresentable(plan, "output price");
+            requireRepresentable(plan, setup.model, "output price");
             const double profit = price * plan.output - plan.cost;
             if (!std::isfinite(profit)) throw InputError("output price: the answer is too large to represent");
             Eigen::VectorXd row(plan.inputs.size() + 2);

@@ -1,7 +1,10 @@
 #include "isoquant/homogeneous_cost.hpp"
 
+#include "isoquant/exact_elementwise.hpp"
+
 #include <cmath>
 #include <cstdio>
+#include <limits>
 #include <string>
 
 namespace isoquant {
@@ -20,7 +23,7 @@ ProductionPlan planAtLogOutput(const HomogeneousCost& cost, double logOutput)
 {
     const double logExpansion = logOutput / cost.scale; // ln y^(1/ν)
     ProductionPlan plan;
-    plan.inputs = (cost.logUnitDemands.array() + logExpansion).exp().matrix();
+    plan.inputs = exactExp(cost.logUnitDemands.array() + logExpansion).matrix();
     plan.output = std::exp(logOutput);
     plan.cost = std::exp(cost.logUnitCost + logExpansion);
     // ∂C/∂y = c·y^(1/ν − 1)/ν
@@ -45,13 +48,20 @@ ProductionPlan profitPlan(const HomogeneousCost& cost, double outputPrice)
     const double nu = cost.scale;
     if (std::fabs(nu - 1) <= constantReturnsTolerance) {
         const double unitCost = std::exp(cost.logUnitCost);
+        // Outside the normal doubles the unit cost is compared, and told, by its log.
+        const bool representable = std::isfinite(unitCost) && unitCost >= std::numeric_limits<double>::min();
+        const double gap = representable ? outputPrice - unitCost : std::log(outputPrice) - cost.logUnitCost;
         const std::string comparison =
-            outputPrice > unitCost   ? "so profit grows without limit as every input is scaled up"
-            : outputPrice < unitCost ? "so every unit loses money and the best plan is to produce nothing"
-                                     : "so every scale of production earns zero profit";
+            gap > 0   ? "so profit grows without limit as every input is scaled up"
+            : gap < 0 ? "so every unit loses money and the best plan is to produce nothing"
+                      : "so every scale of production earns zero profit";
+        const std::string costText = representable ? readable(unitCost)
+                                     : cost.logUnitCost > 0
+                                         ? "more than 1.8e308 (ln " + readable(cost.logUnitCost) + ")"
+                                         : "less than 2.2e-308 (ln " + readable(cost.logUnitCost) + ")";
         throw NoSolution("No finite profit maximum: returns to scale are constant (1), and at these prices one "
-                         "unit of output costs " + readable(unitCost) + " to make and sells for " +
-                         readable(outputPrice) + ", " + comparison);
+                         "unit of output costs " + costText + " to make and sells for " + readable(outputPrice) +
+                         ", " + comparison);
     }
     if (nu > 1)
         throw NoSolution("No finite profit maximum: returns to scale are increasing (" + readable(nu) +
@@ -63,7 +73,7 @@ HomogeneousCost cobbDouglasCost(const CobbDouglas& technology, const Eigen::Vect
 {
     const Eigen::ArrayXd b = technology.exponents.array();
     const double nu = b.sum();
-    const Eigen::ArrayXd logPrices = prices.array().log();
+    const Eigen::ArrayXd logPrices = exactLog(prices.array());
     HomogeneousCost cost;
     cost.scale = nu;
     cost.logUnitCost =

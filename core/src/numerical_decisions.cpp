@@ -1,6 +1,7 @@
 #include "isoquant/numerical_decisions.hpp"
 
 #include "isoquant/cobb_douglas.hpp"
+#include "isoquant/exact_elementwise.hpp"
 #include "isoquant/homogeneous_cost.hpp"
 #include "isoquant/level_roots.hpp"
 #include "isoquant/local_shape.hpp"
@@ -28,7 +29,7 @@ enum class Closing { output, spending };
 struct TangencySystem : Eigen::DenseFunctor<double> {
     TangencySystem(const Technology& technology, const Eigen::VectorXd& prices, Closing closing, double logLevel)
         : Eigen::DenseFunctor<double>(static_cast<int>(prices.size()) + 1, static_cast<int>(prices.size()) + 1),
-          technology(technology), logPrices(prices.array().log()), closing(closing), logLevel(logLevel)
+          technology(technology), logPrices(exactLog(prices.array())), closing(closing), logLevel(logLevel)
     {
     }
 
@@ -47,7 +48,7 @@ struct TangencySystem : Eigen::DenseFunctor<double> {
     // wᵢxᵢ/μ
     Eigen::ArrayXd spendingOverMu(const Eigen::VectorXd& u) const
     {
-        return (u.head(k()).array() + logPrices - u(k())).exp();
+        return exactExp(u.head(k()).array() + logPrices - u(k()));
     }
 
     int operator()(const Eigen::VectorXd& u, Eigen::VectorXd& residuals) const
@@ -143,12 +144,12 @@ std::optional<CobbDouglas> localCobbDouglas(const Technology& technology, const 
     for (Eigen::Index i = 0; i < x.size(); ++i) exponents(i) = technology.elasticity(x, i);
     const double logOutput = technology.logOutput(x);
     if (!exponents.allFinite() || !(exponents.minCoeff() > 0) || !std::isfinite(logOutput)) return std::nullopt;
-    return CobbDouglas(logOutput - exponents.dot(x.array().log().matrix()), exponents);
+    return CobbDouglas(logOutput - exponents.dot(exactLog(x.array()).matrix()), exponents);
 }
 
 bool usable(const Eigen::VectorXd& x)
 {
-    return x.allFinite() && x.minCoeff() > 0 && x.array().log().abs().maxCoeff() <= logBound;
+    return x.allFinite() && x.minCoeff() > 0 && exactLog(x.array()).abs().maxCoeff() <= logBound;
 }
 
 // Rounds of: the local Cobb-Douglas answer, then onto the level along the ray (least cost only);
@@ -233,7 +234,7 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
                          });
     // μ = C/ν at the answer (Σ wᵢxᵢ = μ·Σ eᵢ); the start takes the local ν.
     Eigen::VectorXd u(k + 1);
-    u.head(k) = x.array().log();
+    u.head(k) = exactLog(x.array());
     u(k) = std::log(prices.dot(x) / technology.scaleElasticity(x));
     if (!std::isfinite(u(k))) u(k) = std::log(prices.dot(x));
 
@@ -286,7 +287,7 @@ ProductionPlan solveProfit(const Technology& technology, double outputPrice, con
                                          [&](const Eigen::VectorXd& bundle) {
                                              return prices.dot(bundle) - outputPrice * technology.output(bundle);
                                          });
-    Eigen::VectorXd z = x.array().log();
+    Eigen::VectorXd z = exactLog(x.array());
     ProfitSystem system(technology, outputPrice, prices);
     const double residual = solveSystem(system, z, options);
     if (!(residual <= options.residualTolerance)) throw NoSolution(notConverged("the profit maximum", residual));

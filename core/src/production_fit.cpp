@@ -2,6 +2,7 @@
 
 #include "isoquant/ces_fit.hpp"
 #include "isoquant/distributions.hpp"
+#include "isoquant/exact_elementwise.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 #include "isoquant/translog_fit.hpp"
@@ -33,10 +34,10 @@ public:
         const Eigen::Index count = design.rows();
         const Eigen::Index k = data_.inputs.cols();
         design.col(0).setOnes();
-        response = data_.output.segment(first, count).array().log().matrix();
-        design.middleCols(1, slopes()) = data_.inputs.block(first, 0, count, slopes()).array().log().matrix();
+        response = exactLog(data_.output.segment(first, count).array()).matrix();
+        design.middleCols(1, slopes()) = exactLog(data_.inputs.block(first, 0, count, slopes()).array()).matrix();
         if (constantReturns_) {
-            const Eigen::VectorXd lastLog = data_.inputs.col(k - 1).segment(first, count).array().log().matrix();
+            const Eigen::VectorXd lastLog = exactLog(data_.inputs.col(k - 1).segment(first, count).array()).matrix();
             response -= lastLog;
             design.middleCols(1, slopes()).colwise() -= lastLog;
         }
@@ -76,8 +77,8 @@ ParameterMap parameterMap(Eigen::Index k, Eigen::Index m, bool constantReturns)
 // Σ(ln Y − mean ln Y)², by two passes over Y (no vector of logs is kept).
 double centredSumOfSquaresOfLogs(const Eigen::VectorXd& output)
 {
-    const double mean = output.array().log().mean();
-    return (output.array().log() - mean).square().sum();
+    const double mean = exactLog(output.array()).mean();
+    return (exactLog(output.array()) - mean).square().sum();
 }
 
 // TSS of ln Y: the regression's own when its response is ln Y with a constant column (no
@@ -137,9 +138,12 @@ std::string collinearityMessage(const ProductionData& data, bool constantReturns
     const bool groupEffects = effects != EffectsKind::none;
     const std::string constant = groupEffects ? "the group effects" : "ln A";
     if (names.empty()) return "inputs: the data cannot identify " + constant + note;
-    if (withConstant && names.size() == 1)
-        return argument + ": " + names.front() + note + (groupEffects ? " does not vary within any group" : " does not vary") +
-               ", so it cannot be told apart from " + constant;
+    if (withConstant && names.size() == 1) {
+        const bool plural = names.front() == "the period effects";
+        return argument + ": " + names.front() + note + (plural ? " do not vary" : " does not vary") +
+               (groupEffects ? " within any group" : "") + ", so " + (plural ? "they" : "it") +
+               " cannot be told apart from " + constant;
+    }
     return argument + ": " + listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
            " are collinear (inputs taken in logs); drop one of them";
 }

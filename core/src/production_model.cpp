@@ -188,6 +188,18 @@ FormModel readCobbDouglasModel(double logScale, const ModelRows& rows)
     return model;
 }
 
+// Each input or parameter has one row: a second row of the same label (two "L" rows, two "delta"
+// rows) would silently win or be dropped.
+void refuseRepeatedLabels(const std::vector<ParameterRow>& parameters)
+{
+    for (std::size_t later = 1; later < parameters.size(); ++later)
+        for (std::size_t earlier = 0; earlier < later; ++earlier)
+            if (equalsIgnoringCase(parameters[later].label, parameters[earlier].label))
+                throw InputError(rowPlace(parameters[later].row) + ": " + quoted(parameters[later].label) +
+                                 " repeats the label of row " + std::to_string(parameters[earlier].row + 1) +
+                                 "; give each input or parameter one row, under a label of its own");
+}
+
 } // namespace
 
 ProductionModel readProductionModel(const CellTable& range)
@@ -195,6 +207,7 @@ ProductionModel readProductionModel(const CellTable& range)
     if (range.columns() < 2)
         throw InputError("model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
     const ModelRows rows = readRows(range);
+    refuseRepeatedLabels(rows.parameters);
     if (!rows.form) throw InputError("model: has no \"form\" row (for example: form | cobb-douglas)");
     if (!rows.logScale) throw InputError("model: has no \"ln A\" (or \"A\") row");
     if (rows.inputsRow && *rows.form != ProductionForm::ces)

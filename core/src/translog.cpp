@@ -1,12 +1,14 @@
 #include "isoquant/translog.hpp"
 
+#include "isoquant/exact_elementwise.hpp"
+
 #include <cmath>
 
 namespace isoquant {
 
 namespace {
 
-Eigen::VectorXd logsOf(const Eigen::VectorXd& inputs) { return inputs.array().log().matrix(); }
+Eigen::VectorXd logsOf(const Eigen::VectorXd& inputs) { return exactLog(inputs.array()).matrix(); }
 
 } // namespace
 

@@ -3,6 +3,7 @@
 #include "isoquant/work_limits.hpp"
 
 #include "isoquant/distributions.hpp"
+#include "isoquant/exact_elementwise.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 #include "fit_inference.hpp"
@@ -92,7 +93,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
 
     checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), "inputs",
                     "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
-    const Eigen::MatrixXd logs = data.inputs.array().log().matrix();
+    const Eigen::MatrixXd logs = exactLog(data.inputs.array()).matrix();
     Eigen::MatrixXd design(n, p);
     design.col(0).setOnes();
     design.middleCols(1, k) = logs;
@@ -108,7 +109,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     regressionOptions.confidenceLevel = options.confidenceLevel;
     ProductionFit fit;
     try {
-        fit.regression = fitLeastSquares(design, data.output.array().log().matrix(), 0, regressionOptions);
+        fit.regression = fitLeastSquares(design, exactLog(data.output.array()).matrix(), 0, regressionOptions);
     } catch (const CollinearColumns& collinear) {
         throw InputError(collinearTerms(data, collinear.columns()));
     }

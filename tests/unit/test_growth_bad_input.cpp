@@ -130,8 +130,8 @@ BOOST_AUTO_TEST_CASE(ranges_that_do_not_line_up)
     BOOST_TEST(indexMessage(inputs(), swapped) ==
                "shares: column 1 is 'capital' but quantities column 1 is 'labour'; give them the same labels, in the same "
                "order");
-    BOOST_TEST(growthMessage(output(), inputs(), with(model(), 2, 0, text("capital"))) ==
-               "weights: the model's input 1 is 'capital' but inputs column 1 is 'labour'; give them the same labels, in "
+    BOOST_TEST(growthMessage(output(), inputs(), with(model(), 2, 0, text("hours"))) ==
+               "weights: the model's input 1 is 'hours' but inputs column 1 is 'labour'; give them the same labels, in "
                "the same order");
     BOOST_TEST(growthMessage(typedRange({{text("output")}, {100.0}}), firstRows(inputs(), 2), shares()) ==
                "output: growth needs at least 2 periods; it has 1");

@@ -4,6 +4,7 @@
 #include "isoquant/cobb_douglas.hpp"
 #include "isoquant/level_roots.hpp"
 #include "isoquant/local_shape.hpp"
+#include "isoquant/numerical_decisions.hpp"
 #include "isoquant/substitution_elasticity.hpp"
 #include "ces_test_technology.hpp"
 #include "relative_error.hpp"
@@ -70,6 +71,52 @@ double partialDifference(Function f, Eigen::VectorXd x, int i, double relative =
     return (up - down) / ((base + h) - (base - h));
 }
 
+
+// The price elasticities of the conditional demands, εᵢⱼ = ∂ln xᵢ/∂ln wⱼ at the least-cost bundle,
+// by re-solving the least-cost problem numerically (solveLeastCost) at wⱼ·e^(±h), output held.
+Eigen::MatrixXd demandElasticities(const isoquant::Technology& technology, double target, const Eigen::VectorXd& prices)
+{
+    // h = 1e-4: central differences carry a truncation error of about h² = 1e-8, and each solve
+    // holds ln xᵢ to about 1e-12, 1e-8 once divided by 2h.
+    constexpr double h = 1e-4;
+    const Eigen::Index k = prices.size();
+    Eigen::MatrixXd elasticities(k, k);
+    for (Eigen::Index j = 0; j < k; ++j) {
+        Eigen::VectorXd up = prices, down = prices;
+        up(j) *= std::exp(h);
+        down(j) *= std::exp(-h);
+        const Eigen::VectorXd logUp = isoquant::solveLeastCost(technology, target, up).inputs.array().log();
+        const Eigen::VectorXd logDown = isoquant::solveLeastCost(technology, target, down).inputs.array().log();
+        elasticities.col(j) = (logUp - logDown) / (2 * h);
+    }
+    return elasticities;
+}
+
+// Allen σᵢⱼ = εᵢⱼ/sⱼ and Morishima Mᵢⱼ = εᵢⱼ − εⱼⱼ, with sⱼ = wⱼxⱼ/C the cost share of j: in both
+// the price of j, the second input given, varies (Blackorby and Russell 1989, "Will the real
+// elasticity of substitution please stand up?", American Economic Review 79(4); from memory).
+// x is made the least-cost bundle of f(x) by pricing the inputs at their marginal products.
+void checkAgainstDemandElasticities(const isoquant::Technology& technology, const Eigen::VectorXd& x)
+{
+    const Eigen::Index k = x.size();
+    const Eigen::VectorXd prices = technology.gradient(x);
+    const double target = technology.output(x);
+    const Eigen::VectorXd solved = isoquant::solveLeastCost(technology, target, prices).inputs;
+    // The solve's own accuracy, 1e-9 relative (its residual tolerance), before differences are taken.
+    for (Eigen::Index i = 0; i < k; ++i) BOOST_TEST_REQUIRE(closeTo(solved(i), x(i), 1e-9));
+    const Eigen::MatrixXd epsilon = demandElasticities(technology, target, prices);
+    const Eigen::VectorXd shares = prices.cwiseProduct(x) / prices.dot(x);
+    // Against the finite differences' error of about 2e-8 (above): 1e-6 relative (the elasticities
+    // here are near 1, far from 0).
+    for (Eigen::Index i = 0; i < k; ++i)
+        for (Eigen::Index j = 0; j < k; ++j) {
+            if (i == j) continue;
+            const auto ii = static_cast<int>(i), jj = static_cast<int>(j);
+            BOOST_TEST(closeTo(elasticityOf(technology, x, ii, jj, SubstitutionKind::allen), epsilon(i, j) / shares(j), 1e-6));
+            BOOST_TEST(closeTo(elasticityOf(technology, x, ii, jj, SubstitutionKind::morishima),
+                               epsilon(i, j) - epsilon(j, j), 1e-6));
+        }
+}
 } // namespace
 
 BOOST_AUTO_TEST_SUITE(substitution_and_curvature)
@@ -255,6 +302,21 @@ BOOST_AUTO_TEST_CASE(allen_and_morishima_equal_their_cofactor_definitions)
                 BOOST_TEST(closeTo(elasticityOf(technology, x, i, j, SubstitutionKind::allen), allen, 1e-6));
                 BOOST_TEST(closeTo(elasticityOf(technology, x, i, j, SubstitutionKind::morishima), morishima, 1e-6));
             }
+    }
+}
+
+BOOST_AUTO_TEST_CASE(allen_and_morishima_agree_with_resolved_least_cost_demands)
+{
+    // A 3-input translog (seeded random, convex isoquants on these bundles) and a CES of two inputs.
+    std::mt19937 engine(31);
+    for (int n = 0; n < 5; ++n) {
+        const TranslogTestTechnology technology = randomTranslog(engine, 3);
+        checkAgainstDemandElasticities(technology, randomBundle(engine, 3));
+    }
+    std::uniform_real_distribution<double> weight(0.2, 0.8), rho(-0.6, 2.0), returns(0.6, 1.3);
+    for (int n = 0; n < 5; ++n) {
+        const CesTestTechnology technology(isoquant::CesParameters{1.5, weight(engine), rho(engine), returns(engine)});
+        checkAgainstDemandElasticities(technology, randomBundle(engine, 2));
     }
 }
 
