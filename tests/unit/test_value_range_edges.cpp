@@ -255,3 +255,33 @@ BOOST_AUTO_TEST_CASE(typed_models_with_a_repeated_row_are_refused)
 }
 
 BOOST_AUTO_TEST_SUITE_END()
+
+BOOST_AUTO_TEST_SUITE(value_range_edges_messages)
+
+BOOST_AUTO_TEST_CASE(period_effects_that_do_not_vary_within_groups_are_named_in_the_plural)
+{
+    // Invented plants, each observed in one year only (4 rows a plant): with two-way effects the
+    // period effects are constant within every group, so the group effects absorb them.
+    const int plants = 4, rows = 4, n = plants * rows;
+    Eigen::MatrixXd output(n, 1), inputs(n, 2), periods(n, 1), groups(n, 1);
+    for (int g = 0; g < plants; ++g)
+        for (int r = 0; r < rows; ++r) {
+            const int row = g * rows + r;
+            inputs(row, 0) = 10.0 + 3 * r + g;
+            inputs(row, 1) = 5.0 + r * r + 2 * g;
+            output(row, 0) = std::pow(inputs(row, 0), 0.6) * std::pow(inputs(row, 1), 0.3) * (1 + 0.01 * ((row * 7) % 5));
+            periods(row, 0) = 2015 + g;
+            groups(row, 0) = 100 + g;
+        }
+    isoquant::FitArguments arguments;
+    arguments.output = numberRange(output, {"output"});
+    arguments.inputs = numberRange(inputs, {"labour", "capital"});
+    arguments.groups = numberRange(groups, {"plant"});
+    arguments.trend = numberRange(periods, {"year"});
+    arguments.effects = std::string("two-way");
+    BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
+               "trend: the period effects do not vary within any group, so they cannot be told apart from the group "
+               "effects");
+}
+
+BOOST_AUTO_TEST_SUITE_END()
