@@ -24,6 +24,7 @@ isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the i
   homogeneous_cost.cpp and production_model.cpp, which the add-in prefixes with "Error: ".
 """
 
+import math
 import os
 import sys
 import unittest
@@ -209,13 +210,39 @@ class PlansTest(DecisionTestCase):
         self.assertEqual(amounts, sorted(amounts, reverse=True))
 
 
+class TranslogIsoquantTest(DecisionTestCase):
+    """PRODISOQUANT on a typed translog whose output rises in x2 only below x2 = e^-7, so that the
+    level is met at x2 = 3.86e-5 (output rising) and 0.0215 (falling), both far from x2 = 1."""
+
+    @classmethod
+    def setUpClass(cls):
+        set_values(SHEET, "A100", [["form", "translog"], ["ln A", 0.0], ["x1", 0.3], ["x2", 0.3],
+                                   ["x1*x1", 0.0], ["x1*x2", -0.2], ["x2*x2", -0.1]])
+        set_formula(SHEET, "D100", "=PRODISOQUANT(A100:B106;31.50039;148.41316)")
+        set_values(SHEET, "E100", [[148.41316]])
+        set_formula(SHEET, "F100", "=D100")
+        set_formula(SHEET, "D101", "=PRODOUTPUT(A100:B106;E100:F100)")
+        recalc(DOC)
+
+    def test_the_rising_root_is_found(self):
+        # "quadratic formula": ln Y = 0.3 l1 + 0.3 l2 - 0.2 l1 l2 - 0.05 l2^2 (li = ln xi) is a
+        # quadratic in l2; the root where d ln Y/d l2 = 0.3 - 0.2 l1 - 0.1 l2 > 0 is the smaller one.
+        l1 = math.log(148.41316)
+        b, c = 0.3 - 0.2 * l1, 0.3 * l1 - math.log(31.50039)
+        expected = math.exp((-b + math.sqrt(b * b + 0.2 * c)) / -0.1)
+        self.assertLess(abs(expected - 3.86e-5), 0.01e-5)
+        # The root is narrowed to a few ulps of ln x2: 1e-12 relative.
+        self.assert_close(get_cell(SHEET, "D100"), expected, 1e-12, "x2 on the translog isoquant")
+        self.assert_close(get_cell(SHEET, "D101"), 31.50039, ISOQUANT_TOLERANCE, "PRODOUTPUT of that point")
+
+
 def error(text):
     return "Error: " + text  # the add-in's prefix (addin/production_functions.cxx)
 
 
 # (what, formula, result range, expected first cell). The areas used: the models in A1:B14, prices
 # in D1:E1, bundles in G1:H4; a zero price in D41:E41, a negative one in D42:E42, three prices in
-# D43:F43, a model with a negative exponent in A41:B44.
+# D43:F43, a model with a negative exponent in A41:B44, one of A = 1 and exponents 0.5, 0.4 in A111:B114.
 CASES = [
     ("a zero price", "PRODLEASTCOST($A$1:$B$4;1500;D41:E41)", "G41:H41",
      error("prices: the price of input 2 is 0; prices must be positive")),
@@ -253,6 +280,10 @@ CASES = [
      "input is scaled up"),
     ("an isoquant level out of reach", "PRODISOQUANT($A$1:$B$4;1E+250;1)", "G89",
      "no amount of 'ovens' gives this output with 'bakers' at 1"),
+    # A = 1, exponents 0.5 and 0.4: amounts of about (1e-290)^(1/0.9) = 6e-323, subnormal.
+    ("amounts below the normal doubles", "PRODLEASTCOST(A111:B114;1E-290;$D$1:$E$1)", "G91:H91",
+     error("target output: the plan is not representable: the amount of 'bakers' would be below 2.2e-308, the "
+           "smallest number a cell holds at full precision")),
 ]
 
 
@@ -262,6 +293,7 @@ class DecisionErrorTest(DecisionTestCase):
     def test_error_cases_then_office_alive(self):
         set_values(SHEET, "D41", [[18.0, 0.0, None], [-3.0, 45.0, None], [18.0, 45.0, 7.0]])
         set_values(SHEET, "A41", model_rows((12.0, (0.7, -0.2))))
+        set_values(SHEET, "A111", model_rows((1.0, (0.5, 0.4))))
         for _, formula, target, _ in CASES:
             set_array_formula(SHEET, target, "=" + formula)
         recalc(DOC)

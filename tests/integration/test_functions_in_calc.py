@@ -417,6 +417,50 @@ class CobbDouglasTableTest(CalcTestCase):
         self.assertEqual(get_range(self.sheet, "F81:L97"), self.table)
 
 
+# -- 1b: values below the normal doubles ---------------------------------------------------------
+
+class SubnormalValuesTest(CalcTestCase):
+    """Cobb & Douglas (1928) with one labour value replaced by 1e-310, and with every output
+    scaled by 1e-318: both subnormal doubles (below 2.2e-308), whose logs a vectorised kernel would
+    clamp to ln 2.2e-308. statsmodels on the same doubles, logged one by one with math.log."""
+
+    LABOUR_ROW = 5  # 1903, the fifth data row
+
+    @classmethod
+    def setUpClass(cls):
+        cls.data = cobb_douglas_data()
+        cls.labour = list(cls.data["L"])
+        cls.labour[cls.LABOUR_ROW - 1] = 1e-310
+        cls.scaled_output = [p * 1e-318 for p in cls.data["P"]]
+        cls.sheet = new_sheet("Subnormal")
+        columns = {"P": cls.data["P"], "L": cls.labour, "C": cls.data["C"], "Ps": cls.scaled_output,
+                   "L0": cls.data["L"]}
+        write_columns(cls.sheet, "A1", columns, ["P", "L", "C", "Ps", "L0", "C"])
+        set_array_formula(cls.sheet, "H1:N17", "=PRODFIT(A1:A25;B1:C25)")
+        set_array_formula(cls.sheet, "H21:N37", "=PRODFIT(D1:D25;E1:F25)")
+        recalc(DOC)
+
+    def test_the_sheet_holds_the_subnormal_values(self):
+        # Calc keeps the doubles as given: the reference below sees the same numbers.
+        self.assertEqual(get_cell(self.sheet, "B%d" % (self.LABOUR_ROW + 1)), 1e-310)
+        self.assertEqual([r[0] for r in get_range(self.sheet, "D2:D25")], self.scaled_output)
+
+    def test_one_labour_value_of_1e_minus_310_against_statsmodels(self):
+        table = get_range(self.sheet, "H1:N17")
+        with self.subTest("statsmodels OLS on logs"):
+            self.need_statsmodels()
+            result = statsmodels_fit(logs(self.data["P"]), [logs(self.labour), logs(self.data["C"])])
+            self.assert_matches_statsmodels(table, statsmodels_table(result, ["ln A", "L", "C"], 2))
+
+    def test_output_scaled_by_1e_minus_318_against_statsmodels(self):
+        # The unchanged labour column is headed "L0".
+        table = get_range(self.sheet, "H21:N37")
+        with self.subTest("statsmodels OLS on logs"):
+            self.need_statsmodels()
+            result = statsmodels_fit(logs(self.scaled_output), [logs(self.data["L"]), logs(self.data["C"])])
+            self.assert_matches_statsmodels(table, statsmodels_table(result, ["ln A", "L0", "C"], 2))
+
+
 # -- 2: constant returns imposed ------------------------------------------------------------------
 
 class ConstantReturnsTest(CalcTestCase):
