@@ -284,6 +284,12 @@ CASES = [
     ("amounts below the normal doubles", "PRODLEASTCOST(A111:B114;1E-290;$D$1:$E$1)", "G91:H91",
      error("target output: the plan is not representable: the amount of 'bakers' would be below 2.2e-308, the "
            "smallest number a cell holds at full precision")),
+    # A blank cell as the target reaches the add-in (Calc passes a single blank cell as 0); an
+    # omitted one does not: Calc 7.4 answers Err:502 itself for a range-typed parameter left out
+    # (README, "When something is wrong").
+    ("a blank target cell", "PRODLEASTCOST($A$1:$B$4;Z200;$D$1:$E$1)", "G93:H93",
+     error("target output: is 0; it must be positive")),
+    ("an omitted target", "PRODLEASTCOST($A$1:$B$4;;$D$1:$E$1)", "G95:H95", "Err:502"),
 ]
 
 
