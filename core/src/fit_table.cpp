@@ -69,8 +69,7 @@ CellTable fitTable(const ProductionFit& fit)
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
     TableWriter writer(fitTableRows(fit), fit.status == FitStatus::perfectFit);
-    writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
-                                     headerLabels[5], headerLabels[6]});
+    writer.headerRow(cobbDouglasTitle);
     writer.parameterRow(logScaleLabel, fit, 0);
     for (std::size_t i = 0; i < k; ++i) writer.parameterRow(fit.inputLabels[i], fit, static_cast<Eigen::Index>(1 + i));
     for (std::size_t j = 0; j < m; ++j)
@@ -110,12 +109,12 @@ Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& co
     std::size_t column = 1;
     if (isText(columnLabel) && !std::get<std::string>(columnLabel).empty()) {
         const std::string& wanted = std::get<std::string>(columnLabel);
-        column = headerLabels.size();
-        for (std::size_t c = 1; c < headerLabels.size(); ++c)
-            if (equalsIgnoringCase(wanted, headerLabels[c])) column = c;
-        if (column == headerLabels.size())
+        column = tableColumns;
+        for (std::size_t c = 0; c < columnLabels.size(); ++c)
+            if (equalsIgnoringCase(wanted, columnLabels[c])) column = 1 + c;
+        if (column == tableColumns)
             throw InputError("column label: " + quoted(wanted) +
-                             " is not a column; use estimate, std. error, t, p-value, low or high");
+                             " is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     } else if (!isEmpty(columnLabel) && !isText(columnLabel)) {
         throw InputError("column label: give a column's label, such as \"p-value\"");
     } else if (table.isEmpty(row, 1)) {

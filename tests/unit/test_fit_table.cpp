@@ -62,10 +62,11 @@ BOOST_AUTO_TEST_CASE(rows_and_columns_are_as_documented)
     const auto table = isoquant::fitTable(cobbDouglasFit());
     BOOST_TEST(table.rows() == isoquant::fitTableRows(2, 0));
     BOOST_TEST(table.columns() == 7u);
-    const std::vector<std::string> header{"term", "estimate", "std. error", "t", "p-value", "low", "high"};
+    const std::vector<std::string> header{"Cobb-Douglas fit", "value",       "std. error", "t",
+                                          "p-value",          "lower bound", "upper bound"};
     for (std::size_t column = 0; column < 7; ++column) BOOST_TEST(text(table.at(0, column)) == header[column]);
 
-    const std::vector<std::string> labels{"term", "ln A", "L", "C", "", "observations", "R2", "adjusted R2",
+    const std::vector<std::string> labels{"Cobb-Douglas fit", "ln A", "L", "C", "", "observations", "R2", "adjusted R2",
                                           "residual SD", "F (slopes = 0)", "log-likelihood", "AIC", "BIC",
                                           "returns to scale", "verdict", "form", "smearing factor"};
     BOOST_TEST(firstColumn(table) == labels, boost::test_tools::per_element());
@@ -77,14 +78,14 @@ BOOST_AUTO_TEST_CASE(controls_add_their_rows_and_ln_a_at_control_means)
     const auto table = isoquant::fitTable(statePanelFit());
     BOOST_TEST(table.rows() == isoquant::fitTableRows(3, 1));
     const std::vector<std::string> labels{
-        "term",          "ln A",        "pcap",           "pc",  "emp", "unemp (control)", "", "observations",
+        "Cobb-Douglas fit", "ln A",     "pcap",           "pc",  "emp", "unemp (control)", "", "observations",
         "R2",            "adjusted R2", "residual SD",    "F (slopes = 0)", "log-likelihood", "AIC", "BIC",
         "returns to scale", "verdict",  "form",           "ln A at control means", "smearing factor"};
     BOOST_TEST(firstColumn(table) == labels, boost::test_tools::per_element());
 }
 
-// Each parameter row holds estimate, SE, t, p, low, high; statistic rows put a value under
-// "estimate" and a test statistic under "t" with its p-value beside it.
+// Each parameter row holds value, SE, t, p, lower and upper bound; statistic rows put a value under
+// "value" and a test statistic under "t" with its p-value beside it.
 BOOST_AUTO_TEST_CASE(cells_hold_the_fit)
 {
     const auto fit = cobbDouglasFit();
@@ -235,7 +236,7 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(number(look("r2", none)) == fit.rSquared);
     BOOST_TEST(number(look("LN A", none)) == fit.estimates(0));
     BOOST_TEST(number(look("PC", std::string("Std. Error"))) == fit.standardErrors(2));
-    BOOST_TEST(number(look("emp", std::string("HIGH"))) == fit.upperBounds(3));
+    BOOST_TEST(number(look("emp", std::string("UPPER BOUND"))) == fit.upperBounds(3));
     // A control answers to its label with or without " (control)".
     BOOST_TEST(number(look("unemp", none)) == fit.estimates(4));
     BOOST_TEST(number(look("Unemp (Control)", std::string("p-value"))) == fit.pValues(4));
@@ -249,7 +250,7 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
 
     BOOST_TEST(messageOf([&] { look("capital", none); }) == "row label: 'capital' is not a row of the table");
     BOOST_TEST(messageOf([&] { look("pcap", std::string("se")); }) ==
-               "column label: 'se' is not a column; use estimate, std. error, t, p-value, low or high");
+               "column label: 'se' is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     BOOST_TEST(messageOf([&] { isoquant::lookUpFitTable(table, 2.0, none); }) ==
                "row label: give the label of a row of the table, such as \"R2\" or an input's label");
     BOOST_TEST(messageOf([&] { look("pcap", 3.0); }) == "column label: give a column's label, such as \"p-value\"");
