@@ -56,6 +56,9 @@ FORMULA_RELATIVE = 1e-12      # the same closed-form expression, evaluated in a 
 
 COLUMNS = ["value", "std. error", "t", "p-value", "lower bound", "upper bound"]
 HEADER = ["Cobb-Douglas fit"] + COLUMNS
+# The row labels of a two-input Cobb-Douglas table, as PRODSTAT lists them in a message.
+CD_ROW_LIST = ("'ln A', 'L', 'C', 'observations', 'R2', 'adjusted R2', 'residual SD', 'F (slopes = 0)', "
+               "'log-likelihood', 'AIC', 'BIC', 'returns to scale', 'verdict', 'form', 'smearing factor'")
 NUMBER = object()  # a layout slot that must hold a finite number
 
 OFFICE = None
@@ -923,7 +926,7 @@ ERROR_CASES = [
     ("constant returns given as text", None, 'PRODFIT({out};{inp};;"yes")', TABLE,
      error("constant returns: 'yes' is not TRUE or FALSE (1 or 0)")),
     ("PRODSTAT: a row label not in the table", None, 'PRODSTAT({out};{inp};"K")', CELL,
-     error("row label: 'K' is not a row of the table")),
+     error("row label: 'K' is not a row of the table; its rows are " + CD_ROW_LIST)),
     ("PRODSTAT: a column label not in the table", None, 'PRODSTAT({out};{inp};"R2";"se")', CELL,
      error("column label: 'se' is not a column; use value, std. error, t, p-value, lower bound or upper bound")),
     ("an input label that does not exist", None, 'PRODMARGINAL({table};{bundle};"K")', CELL,

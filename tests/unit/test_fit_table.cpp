@@ -248,7 +248,17 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(text(look("Verdict", none)) == "increasing");
     BOOST_TEST(number(look("ln A at control means", none)) == fit.logScaleAtControlMeans);
 
-    BOOST_TEST(messageOf([&] { look("capital", none); }) == "row label: 'capital' is not a row of the table");
+    // Surrounding spaces (also a no-break space) do not count; "R²" is "R2".
+    BOOST_TEST(number(look(" r2  ", none)) == fit.rSquared);
+    BOOST_TEST(number(look("R\u00b2", none)) == fit.rSquared);
+    BOOST_TEST(number(look("adjusted R\u00b2\u00a0", none)) == fit.adjustedRSquared);
+    BOOST_TEST(number(look("pc", std::string(" p-value "))) == fit.pValues(2));
+
+    BOOST_TEST(messageOf([&] { look("capital", none); }) ==
+               "row label: 'capital' is not a row of the table; its rows are 'ln A', 'pcap', 'pc', 'emp', "
+               "'unemp (control)', 'observations', 'R2', 'adjusted R2', 'residual SD', 'F (slopes = 0)', "
+               "'log-likelihood', 'AIC', 'BIC', 'returns to scale', 'verdict', 'form', 'ln A at control means', "
+               "'smearing factor'");
     BOOST_TEST(messageOf([&] { look("pcap", std::string("se")); }) ==
                "column label: 'se' is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     BOOST_TEST(messageOf([&] { isoquant::lookUpFitTable(table, 2.0, none); }) ==
