@@ -71,6 +71,27 @@ CellTable columnOf(const NumericColumns& bundles, Evaluate value)
     return column;
 }
 
+// A last row that holds the sum of the rows above, in output and in every input, is a totals row
+// the user selected with the data (relative 1e-9: sums of typed values agree to rounding). It
+// would be fitted as one more, very large plant. Needs three rows: with two, any row "sums" one.
+void refuseTotalsRow(const NumericColumns& output, const Eigen::MatrixXd& inputs,
+                     const std::vector<bool>* skippedRows)
+{
+    const Eigen::Index n = output.values.rows();
+    if (n < 3) return;
+    auto isTotal = [n](const Eigen::VectorXd& column) {
+        const double above = column.head(n - 1).sum();
+        return std::fabs(column(n - 1) - above) <= 1e-9 * std::fabs(above);
+    };
+    if (!isTotal(output.values.col(0))) return;
+    for (Eigen::Index column = 0; column < inputs.cols(); ++column)
+        if (!isTotal(inputs.col(column))) return;
+    std::size_t lastRow = skippedRows ? skippedRows->size() : static_cast<std::size_t>(n);
+    while (skippedRows && lastRow > 0 && (*skippedRows)[lastRow - 1]) --lastRow;
+    throw InputError("row " + std::to_string(lastRow - 1 + output.firstDataRow()) +
+                     " looks like a total of the rows above; leave it out of the ranges");
+}
+
 } // namespace
 
 ProductionFit fitFromArguments(const FitArguments& arguments)
@@ -98,6 +119,7 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
     requireSameRows(output, inputs, "inputs");
     refuseControlLabels(inputs);
+    refuseTotalsRow(output, inputs.values, skipped);
 
     ProductionData data;
     data.output = output.values.col(0);
