@@ -173,14 +173,19 @@ BOOST_AUTO_TEST_CASE(hand_typed_model_works)
     BOOST_TEST(cobbDouglasOf(read).logScale == std::log(1.01));
     BOOST_TEST(!read.scaleTest.has_value());
 
-    const CellTable inputs = isoquant::testing::cobbDouglas1928Arguments().inputs; // header L, C skipped
-    const Eigen::VectorXd output = isoquant::testing::columnValues(isoquant::outputColumn(model, inputs));
-    const Eigen::VectorXd labourProduct =
-        isoquant::testing::columnValues(isoquant::marginalProductColumn(model, inputs, std::string("Labour")));
+    // The 1928 ranges under the model's labels (in another case): each column result starts with a
+    // header cell of its own, so that it lines up with the data rows when entered beside them.
+    CellTable inputs = isoquant::testing::cobbDouglas1928Arguments().inputs;
+    inputs.set(0, 0, "Labour");
+    inputs.set(0, 1, "CAPITAL");
+    using isoquant::testing::columnValuesUnder;
+    const Eigen::VectorXd output = columnValuesUnder(isoquant::outputColumn(model, inputs), "output");
+    const Eigen::VectorXd labourProduct = columnValuesUnder(
+        isoquant::marginalProductColumn(model, inputs, std::string("Labour")), "marginal product of labour");
     const Eigen::VectorXd capitalProduct =
-        isoquant::testing::columnValues(isoquant::marginalProductColumn(model, inputs, 2.0));
-    const Eigen::VectorXd elasticity =
-        isoquant::testing::columnValues(isoquant::elasticityColumn(model, inputs, std::string("capital")));
+        columnValuesUnder(isoquant::marginalProductColumn(model, inputs, 2.0), "marginal product of capital");
+    const Eigen::VectorXd elasticity = columnValuesUnder(
+        isoquant::elasticityColumn(model, inputs, std::string("capital")), "output elasticity of capital");
     BOOST_TEST_REQUIRE(output.size() == 24);
     for (std::size_t row = 1; row < inputs.rows(); ++row) {
         const double labour = inputs.number(row, 0);

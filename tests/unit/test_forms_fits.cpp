@@ -388,7 +388,8 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     const isoquant::CellTable* tables[] = {&cesTable, &translogTable};
     for (std::size_t c = 0; c < 2; ++c) {
         const auto& [fit, inputs] = cases[c];
-        const Eigen::VectorXd predicted = isoquant::testing::columnValues(isoquant::outputColumn(*tables[c], inputs));
+        const Eigen::VectorXd predicted =
+            isoquant::testing::columnValuesUnder(isoquant::outputColumn(*tables[c], inputs), "output");
         const Eigen::VectorXd output = dataOf(arguments).output;
         for (Eigen::Index row = 0; row < predicted.size(); ++row)
             BOOST_TEST(closeTo(std::log(predicted(row)), std::log(output(row)) - fit->regression.residuals(row), 1e-12));
