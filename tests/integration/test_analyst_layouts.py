@@ -9,10 +9,12 @@ Sources of the expected figures, named beside each check:
 - "Cobb & Douglas (1928)": Tables II and III of the paper (tests/data/cobb_douglas_1928.csv); the
   unrestricted fit's figures listed in tests/data/README.md (R 4.2.2 lm), to the digits printed.
 - "same sheet": a cell compared with another cell of the same fit (PRODSTAT against the table).
+- "Cobb-Douglas calculus": MP_L = b_L * Y / L from the table's own numbers (1e-12 relative).
 - Error messages: the wording in core/src/*.cpp, prefixed "Error: " by the add-in.
 """
 
 import csv
+import math
 import os
 import sys
 import unittest
@@ -141,6 +143,39 @@ class TableSizeUnderTheSwitch(unittest.TestCase):
         self.assertEqual(holed[17][:2], ["incomplete rows dropped", 1.0])
         self.assertEqual(complete[5][:2], ["observations", 24.0])
         self.assertEqual(holed[5][:2], ["observations", 23.0])
+
+
+class InputsByLabel(unittest.TestCase):
+    """A fit on `L | C`, evaluated on inputs headed `C | L` (one row, and a whole column)."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet = new_sheet("ByLabel")
+        cls.rows = cobb_douglas_rows()
+        set_values(cls.sheet, "A1", [["P", "L", "C"]] + cls.rows)
+        set_array_formula(cls.sheet, "I1:O17", "=PRODFIT(A1:A25;B1:C25)")
+        # the same years with capital first
+        set_values(cls.sheet, "Q1", [["C", "L"]] + [[row[2], row[1]] for row in cls.rows])
+        set_formula(cls.sheet, "T1", '=PRODMARGINAL($I$1:$O$17;Q1:R2;"L")')
+        set_array_formula(cls.sheet, "U1:U25", '=PRODMARGINAL($I$1:$O$17;Q1:R25;"L")')
+        recalc(DOC)
+        cls.table = get_range(cls.sheet, "I1:O17")
+
+    def marginal_product_of_labour(self, labour, capital):
+        # Cobb-Douglas calculus from the table's own numbers: b_L * Y / L, Y = exp(ln A) L^b_L C^b_C
+        log_a, b_l, b_c = self.table[1][1], self.table[2][1], self.table[3][1]
+        return b_l * math.exp(log_a) * labour ** b_l * capital ** b_c / labour
+
+    def test_one_row_headed_in_another_order(self):
+        _, labour, capital = self.rows[0]
+        self.assertAlmostEqual(get_cell(self.sheet, "T1") / self.marginal_product_of_labour(labour, capital), 1.0,
+                               delta=1e-12)
+
+    def test_a_column_lines_up_with_its_rows(self):
+        column = [row[0] for row in get_range(self.sheet, "U1:U25")]
+        self.assertEqual(column[0], "marginal product of L")
+        for (_, labour, capital), value in zip(self.rows, column[1:]):
+            self.assertAlmostEqual(value / self.marginal_product_of_labour(labour, capital), 1.0, delta=1e-12)
 
 
 if __name__ == "__main__":
