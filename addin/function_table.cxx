@@ -75,7 +75,7 @@ const std::vector<FunctionInfo>& functionTable()
           {"row label", "A row of the table: ln A, an input's label, R2, adjusted R2, residual SD, F, "
                         "log-likelihood, AIC, BIC, returns to scale, verdict, observations, smearing factor…; "
                         "with effects also \"effect of group <label>\" (and \"effect of period <year>\")."},
-          {"column label", "estimate (default), std. error, t, p-value, low or high."},
+          {"column label", "value (default), std. error, t, p-value, lower bound or upper bound."},
           formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
           effectsArgument, trendArgument, incompleteRowsArgument}},
         {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",

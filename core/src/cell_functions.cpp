@@ -3,6 +3,7 @@
 #include "isoquant/form_comparison.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/model_cache.hpp"
+#include "isoquant/model_inputs.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
@@ -44,16 +45,6 @@ void refuseControlLabels(const NumericColumns& inputs)
     }
 }
 
-NumericColumns readBundles(const CellTable& inputs, const ProductionModel& model)
-{
-    const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
-    const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
-    if (bundles.values.cols() != k)
-        throw InputError("inputs: has " + countOf(bundles.values.cols(), "column") + " but the model has " +
-                         countOf(k, "input"));
-    return bundles;
-}
-
 // Applies `value(bundle)` to every row; a result too large for a double is reported, not shown as inf.
 template <typename Evaluate>
 CellTable columnOf(const NumericColumns& bundles, Evaluate value)
@@ -69,6 +60,27 @@ CellTable columnOf(const NumericColumns& bundles, Evaluate value)
         column.set(static_cast<std::size_t>(row), 0, result);
     }
     return column;
+}
+
+// A last row that holds the sum of the rows above, in output and in every input, is a totals row
+// the user selected with the data (relative 1e-9: sums of typed values agree to rounding). It
+// would be fitted as one more, very large plant. Needs three rows: with two, any row "sums" one.
+void refuseTotalsRow(const NumericColumns& output, const Eigen::MatrixXd& inputs,
+                     const std::vector<bool>* skippedRows)
+{
+    const Eigen::Index n = output.values.rows();
+    if (n < 3) return;
+    auto isTotal = [n](const Eigen::VectorXd& column) {
+        const double above = column.head(n - 1).sum();
+        return std::fabs(column(n - 1) - above) <= 1e-9 * std::fabs(above);
+    };
+    if (!isTotal(output.values.col(0))) return;
+    for (Eigen::Index column = 0; column < inputs.cols(); ++column)
+        if (!isTotal(inputs.col(column))) return;
+    std::size_t lastRow = skippedRows ? skippedRows->size() : static_cast<std::size_t>(n);
+    while (skippedRows && lastRow > 0 && (*skippedRows)[lastRow - 1]) --lastRow;
+    throw InputError("row " + std::to_string(lastRow - 1 + output.firstDataRow()) +
+                     " looks like a total of the rows above; leave it out of the ranges");
 }
 
 } // namespace
@@ -98,6 +110,7 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
     requireSameRows(output, inputs, "inputs");
     refuseControlLabels(inputs);
+    refuseTotalsRow(output, inputs.values, skipped);
 
     ProductionData data;
     data.output = output.values.col(0);
@@ -133,31 +146,40 @@ CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Ce
 {
     const ProductionModel technology = cachedProductionModel(model);
     double factor = 1.0;
-    if (readSwitchArgument(mean, "mean")) {
+    const bool meanOutput = readSwitchArgument(mean, "mean");
+    if (meanOutput) {
         if (!technology.smearingFactor)
             throw InputError("mean: the model has no \"smearing factor\" row; use a PRODFIT table, or add the row "
                              "(the mean of exp(residual) of ln Y)");
         factor = *technology.smearingFactor;
     }
-    return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd& bundle) { return factor * technology.technology->output(bundle); });
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
+                           return factor * technology.technology->output(bundle);
+                       }),
+                       bundles, meanOutput ? "mean output" : "output");
 }
 
 CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
-    return columnOf(readBundles(inputs, technology), [&](const Eigen::VectorXd& bundle) {
-        return technology.technology->marginalProduct(bundle, chosen);
-    });
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
+                           return technology.technology->marginalProduct(bundle, chosen);
+                       }),
+                       bundles, "marginal product of " + technology.inputLabels[static_cast<std::size_t>(chosen)]);
 }
 
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
-    return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd& bundle) { return technology.technology->elasticity(bundle, chosen); });
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
+                           return technology.technology->elasticity(bundle, chosen);
+                       }),
+                       bundles, "output elasticity of " + technology.inputLabels[static_cast<std::size_t>(chosen)]);
 }
 
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
@@ -169,8 +191,11 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
         if (!std::isfinite(*scale)) throw InputError("model: its returns to scale are too large to represent");
         return singleCell(*scale);
     }
-    return columnOf(readBundles(inputs, technology),
-                    [&](const Eigen::VectorXd& bundle) { return technology.technology->scaleElasticity(bundle); });
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
+                           return technology.technology->scaleElasticity(bundle);
+                       }),
+                       bundles, "returns to scale");
 }
 
 std::string returnsVerdictCell(const CellTable& model, const Cell& level)
@@ -182,12 +207,12 @@ std::string returnsVerdictCell(const CellTable& model, const Cell& level)
 CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
 {
     const ProductionModel technology = cachedProductionModel(model);
-    const NumericColumns bundles = readBundles(inputs, technology);
+    const NumericColumns bundles = readModelInputs(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)
         column.set(static_cast<std::size_t>(row), 0, regularityPhrase(
             *technology.technology, bundles.values.row(row).transpose(), technology.inputLabels));
-    return column;
+    return underHeader(std::move(column), bundles, "regularity");
 }
 
 CellTable compareFormsTable(const CellTable& output, const CellTable& inputs, const Cell& level)

@@ -66,7 +66,7 @@ CellTable cesFitTable(const ProductionFit& fit)
 {
     const CesDetails& ces = *fit.ces;
     TableWriter writer(cesFitTableRows(), fit.status == FitStatus::perfectFit);
-    writer.headerRow();
+    writer.headerRow(cesTitle);
     const char* labels[] = {logScaleLabel, weightLabel, curvatureLabel, returnsParameterLabel};
     for (Eigen::Index j = 0; j < 4; ++j) {
         if (onBoundary(fit, j))

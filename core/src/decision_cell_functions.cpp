@@ -9,6 +9,7 @@
 #include "isoquant/level_roots.hpp"
 #include "isoquant/local_shape.hpp"
 #include "isoquant/model_cache.hpp"
+#include "isoquant/model_inputs.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/numerical_decisions.hpp"
 #include "isoquant/production_model.hpp"
@@ -31,15 +32,15 @@ std::string inputName(const ProductionModel& model, Eigen::Index input)
     return quoted(model.inputLabels[static_cast<std::size_t>(input)]);
 }
 
-NumericColumns readBundleRows(const CellTable& inputs, const ProductionModel& model)
+std::string labelOf(const ProductionModel& model, Eigen::Index input)
 {
-    const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
-    const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
-    if (bundles.values.cols() != k)
-        throw InputError("inputs: has " + std::to_string(bundles.values.cols()) +
-                         (bundles.values.cols() == 1 ? " column" : " columns") + " but the model has " +
-                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
-    return bundles;
+    return model.inputLabels[static_cast<std::size_t>(input)];
+}
+
+std::string secondPartialTitle(const ProductionModel& model, Eigen::Index i, Eigen::Index j)
+{
+    if (i == j) return "second derivative in " + labelOf(model, i);
+    return "cross derivative in " + labelOf(model, i) + " and " + labelOf(model, j);
 }
 
 std::string rowPlace(const NumericColumns& rows, Eigen::Index row, const std::string& argument)
@@ -176,18 +177,22 @@ CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, c
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, "input j");
-    return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string&) {
         return Cell(technology.technology->secondPartial(bundle, i, j));
-    });
+    }),
+                       bundles, secondPartialTitle(technology, i, j));
 }
 
 CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
-    return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputReturnsWord(checkedLocalShape(*technology.technology, bundle, place), chosen));
-    });
+    }),
+                       bundles, "returns to " + labelOf(technology, chosen));
 }
 
 CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
@@ -195,9 +200,11 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
-    return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputPairWord(checkedLocalShape(*technology.technology, bundle, place), i, j));
-    });
+    }),
+                       bundles, labelOf(technology, i) + " with " + labelOf(technology, j));
 }
 
 CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
@@ -205,14 +212,16 @@ CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, c
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
-    return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string&) {
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string&) {
         // fᵢ/fⱼ = (eᵢ/xᵢ)/(eⱼ/xⱼ), from the elasticities so that Y cancels before it can overflow.
         const double ei = technology.technology->elasticity(bundle, i);
         const double ej = technology.technology->elasticity(bundle, j);
         if (ej == 0)
             return Cell(undefinedText("rate", "the marginal product of " + inputName(technology, j) + " is 0"));
         return Cell(ei / ej * (bundle(j) / bundle(i)));
-    });
+    }),
+                       bundles, "MRTS of " + labelOf(technology, i) + " for " + labelOf(technology, j));
 }
 
 CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
@@ -222,14 +231,16 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
     const Eigen::Index i = readInputSelector(first, technology, "i");
     const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
-    return perBundle(readBundleRows(inputs, technology), [&](const Eigen::VectorXd& bundle, const std::string& place) {
+    const NumericColumns bundles = readModelInputs(inputs, technology);
+    return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
         const auto value =
             substitutionElasticity(checkedLocalShape(*technology.technology, bundle, place), i, j, chosen);
         if (!value)
             return Cell(undefinedText("elasticity", "a marginal product is 0, or the isoquant is straight or "
                                                     "not curved at this bundle"));
         return Cell(*value);
-    });
+    }),
+                       bundles, "elasticity of substitution, " + labelOf(technology, i) + " and " + labelOf(technology, j));
 }
 
 CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTable& prices)

@@ -16,14 +16,14 @@ bool startsWithIgnoringCase(std::string_view text, std::string_view start)
     return text.size() >= start.size() && equalsIgnoringCase(text.substr(0, start.size()), start);
 }
 
-// A one-row table in the PRODFIT columns: the effect under "estimate", "n/a" elsewhere, so that
+// A one-row table in the PRODFIT columns: the effect under "value", "n/a" elsewhere, so that
 // the column label is read exactly as for the table's rows.
 CellTable effectRow(const std::string& label, double effect)
 {
-    CellTable row(1, headerLabels.size());
+    CellTable row(1, tableColumns);
     row.set(0, 0, label);
     row.set(0, 1, effect);
-    for (std::size_t column = 2; column < headerLabels.size(); ++column) row.set(0, column, std::string(notAvailableText));
+    for (std::size_t column = 2; column < tableColumns; ++column) row.set(0, column, std::string(notAvailableText));
     return row;
 }
 

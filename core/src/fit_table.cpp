@@ -7,20 +7,45 @@
 #include "table_writer.hpp"
 
 #include <cmath>
+#include <string_view>
 
 namespace isoquant {
 
 namespace {
 
-std::size_t findRow(const CellTable& table, const std::string& wanted)
+// A row label as PRODSTAT compares it: without surrounding spaces, and "R²" read as "R2" (the
+// superscript is what a user types who copies the label from a report).
+std::string comparableLabel(std::string_view label)
 {
+    const auto first = label.find_first_not_of(" \t\u00a0");
+    if (first == std::string_view::npos) return "";
+    label = label.substr(first, label.find_last_not_of(" \t\u00a0") - first + 1);
+    std::string result(label);
+    for (std::size_t at = result.find("\u00b2"); at != std::string::npos; at = result.find("\u00b2", at))
+        result.replace(at, std::string("\u00b2").size(), "2");
+    return result;
+}
+
+// The labels of the table's rows, for a message: "'ln A', 'L', 'C', 'observations', …".
+std::string rowLabelList(const CellTable& table)
+{
+    std::string list;
+    for (std::size_t row = 1; row < table.rows(); ++row)
+        if (table.isText(row, 0) && !table.text(row, 0).empty())
+            list += (list.empty() ? "" : ", ") + quoted(table.text(row, 0));
+    return list;
+}
+
+std::size_t findRow(const CellTable& table, const std::string& typed)
+{
+    const std::string wanted = comparableLabel(typed);
     for (std::size_t row = 0; row < table.rows(); ++row) {
         if (!table.isText(row, 0)) continue;
-        const std::string& label = table.text(row, 0);
+        const std::string label = comparableLabel(table.text(row, 0));
         if (equalsIgnoringCase(label, wanted) || equalsIgnoringCase(label, wanted + controlSuffix)) return row;
     }
     if (equalsIgnoringCase(wanted, "F")) return findRow(table, overallTestLabel);
-    throw InputError("row label: " + quoted(wanted) + " is not a row of the table");
+    throw InputError("row label: " + quoted(typed) + " is not a row of the table; its rows are " + rowLabelList(table));
 }
 
 // Rows of the estimation options (groups, effects, trend, incomplete rows), in table order.
@@ -69,8 +94,7 @@ CellTable fitTable(const ProductionFit& fit)
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
     TableWriter writer(fitTableRows(fit), fit.status == FitStatus::perfectFit);
-    writer.textRow(headerLabels[0], {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4],
-                                     headerLabels[5], headerLabels[6]});
+    writer.headerRow(cobbDouglasTitle);
     writer.parameterRow(logScaleLabel, fit, 0);
     for (std::size_t i = 0; i < k; ++i) writer.parameterRow(fit.inputLabels[i], fit, static_cast<Eigen::Index>(1 + i));
     for (std::size_t j = 0; j < m; ++j)
@@ -109,13 +133,13 @@ Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& co
 
     std::size_t column = 1;
     if (isText(columnLabel) && !std::get<std::string>(columnLabel).empty()) {
-        const std::string& wanted = std::get<std::string>(columnLabel);
-        column = headerLabels.size();
-        for (std::size_t c = 1; c < headerLabels.size(); ++c)
-            if (equalsIgnoringCase(wanted, headerLabels[c])) column = c;
-        if (column == headerLabels.size())
+        const std::string wanted = comparableLabel(std::get<std::string>(columnLabel));
+        column = tableColumns;
+        for (std::size_t c = 0; c < columnLabels.size(); ++c)
+            if (equalsIgnoringCase(wanted, columnLabels[c])) column = 1 + c;
+        if (column == tableColumns)
             throw InputError("column label: " + quoted(wanted) +
-                             " is not a column; use estimate, std. error, t, p-value, low or high");
+                             " is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     } else if (!isEmpty(columnLabel) && !isText(columnLabel)) {
         throw InputError("column label: give a column's label, such as \"p-value\"");
     } else if (table.isEmpty(row, 1)) {

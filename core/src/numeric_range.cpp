@@ -19,6 +19,33 @@ bool rowIsAllText(const CellTable& range, std::size_t row)
     return true;
 }
 
+// A first row of labels with a gap ("labour | (empty) | energy") is a header the user meant to
+// give: say which label is missing instead of reporting the labels as text in the data.
+void refuseHeaderGap(const CellTable& range, const std::string& argument)
+{
+    bool anyLabel = false;
+    std::size_t firstGap = range.columns();
+    for (std::size_t column = 0; column < range.columns(); ++column) {
+        if (range.kind(0, column) == CellKind::number) return;
+        const bool label = range.isText(0, column) && !range.text(0, column).empty();
+        anyLabel |= label;
+        if (!label && firstGap == range.columns()) firstGap = column;
+    }
+    if (anyLabel && firstGap < range.columns())
+        throw InputError(argument + ": row 1, column " + std::to_string(firstGap + 1) +
+                         " is an empty header; give every column a label or none");
+}
+
+// Two columns under one label would make every later choice by label ambiguous.
+void refuseDuplicateLabels(const std::vector<std::string>& labels, const std::string& argument)
+{
+    for (std::size_t i = 0; i < labels.size(); ++i)
+        for (std::size_t j = i + 1; j < labels.size(); ++j)
+            if (equalsIgnoringCase(labels[i], labels[j]))
+                throw InputError(argument + ": the label " + quoted(labels[j]) +
+                                 " heads two columns; give every column its own label");
+}
+
 std::string place(const std::string& argument, std::size_t row, std::size_t column, std::size_t columns)
 {
     std::string text = argument + ": row " + std::to_string(row + 1);
@@ -77,11 +104,13 @@ NumericColumns readNumericColumns(const CellTable& range, const std::string& arg
 
     NumericColumns result;
     result.hasHeader = rowIsAllText(range, 0);
+    if (!result.hasHeader && range.columns() > 1) refuseHeaderGap(range, argument);
     const std::size_t firstRow = result.hasHeader ? 1 : 0;
     const std::size_t columns = range.columns();
     for (std::size_t column = 0; column < columns; ++column)
         result.labels.push_back(result.hasHeader ? range.text(0, column)
                                                  : defaultLabelPrefix + " " + std::to_string(column + 1));
+    if (result.hasHeader) refuseDuplicateLabels(result.labels, argument);
     if (range.rows() == firstRow) throw InputError(argument + ": holds a header row but no data");
 
     if (skippedRows && skippedRows->size() != range.rows() - firstRow)

@@ -27,6 +27,14 @@ bool rowIsEmpty(const CellTable& range, std::size_t row)
     return true;
 }
 
+// The first cell of a fitted table's header row ("Cobb-Douglas fit", …).
+bool isTableTitle(const std::string& label)
+{
+    for (const char* title : tableTitles)
+        if (equalsIgnoringCase(label, title)) return true;
+    return false;
+}
+
 bool isStatisticLabel(const std::string& label)
 {
     for (const char* statistic : statisticLabels)
@@ -132,7 +140,7 @@ ModelRows readRows(const CellTable& range)
             throw InputError(rowPlace(row) + " has no label in its first column");
         const std::string& label = range.text(row, 0);
         const bool isFormRow = equalsIgnoringCase(label, formLabel) && range.isText(row, 1);
-        if (equalsIgnoringCase(label, headerLabels[0])) continue;
+        if (section == Section::beforeScale && isTableTitle(label)) continue;
         if (isFormRow) {
             readFormRow(range, row, rows);
             continue;

@@ -24,7 +24,7 @@ inline Cell numberCell(double value)
 // undefined; they show "n/a" rather than the meaningless numbers rounding leaves.
 class TableWriter {
 public:
-    TableWriter(std::size_t rows, bool exactFit) : table_(rows, headerLabels.size()), exactFit_(exactFit) {}
+    TableWriter(std::size_t rows, bool exactFit) : table_(rows, tableColumns), exactFit_(exactFit) {}
 
     void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
     {
@@ -76,10 +76,11 @@ public:
                            undefinedIfExact(returns.fStatistic), undefinedIfExact(returns.pValue)});
         textRow(verdictLabel, {returns.verdict});
     }
-    void headerRow()
+    // The header: the table's title, then the column words.
+    void headerRow(const char* title)
     {
-        textRow(headerLabels[0],
-                {headerLabels[1], headerLabels[2], headerLabels[3], headerLabels[4], headerLabels[5], headerLabels[6]});
+        textRow(title, {columnLabels[0], columnLabels[1], columnLabels[2], columnLabels[3], columnLabels[4],
+                        columnLabels[5]});
     }
     void skipRow() { ++row_; }
     CellTable finish() { return std::move(table_); }

@@ -16,7 +16,7 @@ CellTable translogFitTable(const ProductionFit& fit)
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
     TableWriter writer(translogFitTableRows(k, m), fit.status == FitStatus::perfectFit);
-    writer.headerRow();
+    writer.headerRow(translogTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(logScaleLabel, fit, parameter++);
     for (const auto& label : fit.inputLabels) writer.parameterRow(label, fit, parameter++);

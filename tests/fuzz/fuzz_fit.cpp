@@ -28,7 +28,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
         const CellTable table = fitTable(fitFromArguments(arguments));
         requireFiniteNumbers(table);
         const std::vector<std::string> labels{"R2", "F", "verdict", "returns to scale", "labour", "ln A", "nothing"};
-        requireFiniteNumbers(singleCell(lookUpFitTable(table, fuzzedCell(data, labels), fuzzedCell(data, {"t", "low"}))));
+        requireFiniteNumbers(singleCell(lookUpFitTable(table, fuzzedCell(data, labels), fuzzedCell(data, {"t", "lower bound"}))));
     } catch (const InputError&) {
     }
     return 0;

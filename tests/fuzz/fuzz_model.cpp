@@ -11,7 +11,7 @@ using namespace isoquant::fuzzing;
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t size)
 {
     FuzzedDataProvider data(bytes, size);
-    const std::vector<std::string> words{"form", "cobb-douglas", "ces", "ln A", "A", "term", "returns to scale",
+    const std::vector<std::string> words{"form", "cobb-douglas", "ces", "ln A", "A", "Cobb-Douglas fit", "ces fit", "translog fit", "returns to scale",
                                          "verdict", "labour", "capital", "x (control)", "ln A at control means",
                                          "imposed", "n/a", "R2", ""};
     const std::size_t rows = data.ConsumeIntegralInRange<std::size_t>(0, 24);

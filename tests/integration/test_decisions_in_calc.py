@@ -100,21 +100,33 @@ class DecisionTestCase(unittest.TestCase):
 
 
 class CurvatureTest(DecisionTestCase):
-    """PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS and PRODSUBSTITUTION per row of G1:H4."""
+    """PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS and PRODSUBSTITUTION per row of G1:H4.
+
+    G1:H4 starts with a header row, so each result starts with a header cell of its own and is
+    entered over rows 1-4, beside the data it belongs to (issue 14, item 4)."""
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J2:J4", "=PRODSECOND($A$1:$B$4;$G$1:$H$4;1)")
-        set_array_formula(SHEET, "K2:K4", '=PRODSECOND($A$1:$B$4;$G$1:$H$4;"bakers";"ovens")')
-        set_array_formula(SHEET, "L2:L4", "=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;1)")
-        set_array_formula(SHEET, "M2:M4", '=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;"ovens")')
-        set_array_formula(SHEET, "N2:N4", "=PRODPAIR($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "O2:O4", "=PRODMRTS($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "P2:P4", "=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "Q2:Q4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"allen")')
-        set_array_formula(SHEET, "R2:R4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;2;1;"morishima")')
+        set_array_formula(SHEET, "J1:J4", "=PRODSECOND($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(SHEET, "K1:K4", '=PRODSECOND($A$1:$B$4;$G$1:$H$4;"bakers";"ovens")')
+        set_array_formula(SHEET, "L1:L4", "=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(SHEET, "M1:M4", '=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;"ovens")')
+        set_array_formula(SHEET, "N1:N4", "=PRODPAIR($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "O1:O4", "=PRODMRTS($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "P1:P4", "=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(SHEET, "Q1:Q4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"allen")')
+        set_array_formula(SHEET, "R1:R4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;2;1;"morishima")')
         set_formula(SHEET, "S2", "=PRODSCALE($A$1:$B$4)")
         recalc(DOC)
+
+    def test_each_result_has_its_own_header_cell(self):
+        # the words of core/src/decision_cell_functions.cpp
+        self.assertEqual(get_range(SHEET, "J1:R1")[0],
+                         ["second derivative in bakers", "cross derivative in bakers and ovens", "returns to bakers",
+                          "returns to ovens", "bakers with ovens", "MRTS of bakers for ovens",
+                          "elasticity of substitution, bakers and ovens",
+                          "elasticity of substitution, bakers and ovens",
+                          "elasticity of substitution, ovens and bakers"])
 
     def test_second_partials(self):
         a, b = GROWING[1]

@@ -42,7 +42,7 @@ REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
 OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
 
 FORMULA_RELATIVE = 1e-12
-HEADER = ["term", "estimate", "std. error", "t", "p-value", "low", "high"]
+COLUMNS = ["value", "std. error", "t", "p-value", "lower bound", "upper bound"]
 
 OFFICE = None
 DOC = None
@@ -154,10 +154,10 @@ class CesTest(FormsTestCase):
     def test_layout(self):
         labels = [row[0] for row in self.table]
         # Blank cells of a formula result read as "" (office.py).
-        self.assertEqual(labels, ["term", "ln A", "delta", "rho", "nu", "sigma", "", "observations", "R2",
+        self.assertEqual(labels, ["ces fit", "ln A", "delta", "rho", "nu", "sigma", "", "observations", "R2",
                                   "adjusted R2", "residual SD", "log-likelihood", "AIC", "BIC",
                                   "returns to scale", "verdict", "form", "convergence", "inputs", "smearing factor"])
-        self.assertEqual(self.table[0], HEADER)
+        self.assertEqual(self.table[0], ["ces fit"] + COLUMNS)
         for row in self.table[1:6]:
             for value in row[1:3]:
                 self.assert_number(value, row[0])
@@ -238,23 +238,23 @@ class TranslogTest(FormsTestCase):
         set_array_formula(cls.sheet, "R2:R11", "=PRODSCALE($H$1:$N$34;B2:E11)")
         set_array_formula(cls.sheet, "S2:S11", "=PRODOUTPUT($H$1:$N$34;B2:E11)")
         set_array_formula(cls.sheet, "T2:T11", "=PRODREGULAR($H$1:$N$34;B2:E11)")
-        set_formula(cls.sheet, "V1", '=PRODSTAT(A1:A1027;B1:E1027;"CD test";"p-value";"translog")')
+        set_formula(cls.sheet, "V1", '=PRODSTAT(A1:A1027;B1:E1027;"Cobb-Douglas test";"p-value";"translog")')
         set_formula(cls.sheet, "V2", "=PRODRETURNS($H$1:$N$34)")
         recalc(DOC)
         cls.table = get_range(cls.sheet, "H1:N34")
 
     def test_layout(self):
         pairs = ["%s*%s" % (a, b) for i, a in enumerate(self.LABELS) for b in self.LABELS[i:]]
-        expected = (["term", "ln A"] + self.LABELS + pairs + ["", "observations", "R2", "adjusted R2",
+        expected = (["translog fit", "ln A"] + self.LABELS + pairs + ["", "observations", "R2", "adjusted R2",
                                                              "residual SD", "F (slopes = 0)", "log-likelihood",
                                                              "AIC", "BIC"]
                     + ["elasticity " + label for label in self.LABELS]
-                    + ["returns to scale", "verdict", "CD test", "form", "smearing factor"])
+                    + ["returns to scale", "verdict", "Cobb-Douglas test", "form", "smearing factor"])
         self.assertEqual([row[0] for row in self.table], expected)
         self.assertEqual(row_of(self.table, "form")[1], "translog")
         self.assertEqual(row_of(self.table, "observations")[1], 1026.0)
-        self.assertEqual(row_of(self.table, "CD test")[1:3], ["", ""])
-        self.assert_number(row_of(self.table, "CD test")[3], "CD test F")
+        self.assertEqual(row_of(self.table, "Cobb-Douglas test")[1:3], ["", ""])
+        self.assert_number(row_of(self.table, "Cobb-Douglas test")[3], "Cobb-Douglas test F")
 
     def test_against_statsmodels(self):
         with self.subTest("statsmodels OLS"):
@@ -272,8 +272,8 @@ class TranslogTest(FormsTestCase):
             self.assert_relative(returns[1], figures[("nu", 0)], 1e-8, "nu")
             self.assert_relative(returns[2], figures[("nu_se", 0)], 1e-8, "nu se")
             self.assert_relative(returns[3], figures[("nu_fvalue", 0)], 1e-8, "F of nu = 1")
-            self.assert_relative(row_of(self.table, "CD test")[3], figures[("cd_fvalue", 0)], 1e-8, "CD test F")
-            self.assert_relative(get_cell(self.sheet, "V1"), figures[("cd_pvalue", 0)], 1e-8, "CD test p")
+            self.assert_relative(row_of(self.table, "Cobb-Douglas test")[3], figures[("cd_fvalue", 0)], 1e-8, "Cobb-Douglas test F")
+            self.assert_relative(get_cell(self.sheet, "V1"), figures[("cd_pvalue", 0)], 1e-8, "Cobb-Douglas test p")
 
     def test_evaluators_follow_the_function_formula(self):
         for r in range(2, 12):
@@ -326,7 +326,7 @@ class CompareTest(FormsTestCase):
 
     def test_nested_tests(self):
         translog = get_range(self.sheet, "F11:L33")
-        self.assertEqual(self.table[6][1], row_of(translog, "CD test")[3])
+        self.assertEqual(self.table[6][1], row_of(translog, "Cobb-Douglas test")[3])
         self.assertEqual(self.table[6][5], "F")
         # LR = 2 (LL_ces - LL_cd), from the two PRODSTAT cells.
         self.assert_relative(self.table[7][1], 2 * (get_cell(self.sheet, "N2") - get_cell(self.sheet, "N1")),

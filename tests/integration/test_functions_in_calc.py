@@ -54,7 +54,11 @@ FUNCTION_TABLE_SOURCE = os.path.join(REPO, "addin", "function_table.cxx")
 STATSMODELS_RELATIVE = 1e-8   # two implementations of the same least squares, in double precision
 FORMULA_RELATIVE = 1e-12      # the same closed-form expression, evaluated in a different order
 
-HEADER = ["term", "estimate", "std. error", "t", "p-value", "low", "high"]
+COLUMNS = ["value", "std. error", "t", "p-value", "lower bound", "upper bound"]
+HEADER = ["Cobb-Douglas fit"] + COLUMNS
+# The row labels of a two-input Cobb-Douglas table, as PRODSTAT lists them in a message.
+CD_ROW_LIST = ("'ln A', 'L', 'C', 'observations', 'R2', 'adjusted R2', 'residual SD', 'F (slopes = 0)', "
+               "'log-likelihood', 'AIC', 'BIC', 'returns to scale', 'verdict', 'form', 'smearing factor'")
 NUMBER = object()  # a layout slot that must hold a finite number
 
 OFFICE = None
@@ -170,22 +174,22 @@ def statsmodels_table(result, labels, inputs, level=0.95):
     bounds = result.conf_int(alpha=1 - level)
     figures = {}
     for j, label in enumerate(labels):
-        figures[(label, "estimate")] = result.params[j]
+        figures[(label, "value")] = result.params[j]
         figures[(label, "std. error")] = result.bse[j]
         figures[(label, "t")] = result.tvalues[j]
         figures[(label, "p-value")] = result.pvalues[j]
-        figures[(label, "low")] = bounds[j][0]
-        figures[(label, "high")] = bounds[j][1]
-    figures[("R2", "estimate")] = result.rsquared
-    figures[("adjusted R2", "estimate")] = result.rsquared_adj
-    figures[("residual SD", "estimate")] = math.sqrt(result.scale)
+        figures[(label, "lower bound")] = bounds[j][0]
+        figures[(label, "upper bound")] = bounds[j][1]
+    figures[("R2", "value")] = result.rsquared
+    figures[("adjusted R2", "value")] = result.rsquared_adj
+    figures[("residual SD", "value")] = math.sqrt(result.scale)
     figures[("F (slopes = 0)", "t")] = float(result.fvalue)
     figures[("F (slopes = 0)", "p-value")] = float(result.f_pvalue)
-    figures[("log-likelihood", "estimate")] = result.llf
-    figures[("AIC", "estimate")] = result.aic
-    figures[("BIC", "estimate")] = result.bic
+    figures[("log-likelihood", "value")] = result.llf
+    figures[("AIC", "value")] = result.aic
+    figures[("BIC", "value")] = result.bic
     nu, se, f_value, p_value = statsmodels_returns_test(result, inputs)
-    figures[("returns to scale", "estimate")] = nu
+    figures[("returns to scale", "value")] = nu
     figures[("returns to scale", "std. error")] = se
     figures[("returns to scale", "t")] = f_value
     figures[("returns to scale", "p-value")] = p_value
@@ -355,10 +359,10 @@ class CobbDouglasTableTest(CalcTestCase):
     def test_published_reference_figures(self):
         # Reference figures (R 4.2.2 lm; statsmodels 0.13.5 agrees) for Cobb & Douglas (1928):
         # ln P = b0 + bL ln L + bC ln C.
-        expected = {("ln A", "estimate"): "-0.1773097", ("ln A", "std. error"): "0.434293",
-                    ("L", "estimate"): "0.8072782", ("L", "std. error"): "0.1450762",
-                    ("C", "estimate"): "0.2330535", ("C", "std. error"): "0.0635297",
-                    ("R2", "estimate"): "0.957425", ("residual SD", "estimate"): "0.0581384",
+        expected = {("ln A", "value"): "-0.1773097", ("ln A", "std. error"): "0.434293",
+                    ("L", "value"): "0.8072782", ("L", "std. error"): "0.1450762",
+                    ("C", "value"): "0.2330535", ("C", "std. error"): "0.0635297",
+                    ("R2", "value"): "0.957425", ("residual SD", "value"): "0.0581384",
                     # F test of bL + bC = 1, as printed (4 and 3 significant digits):
                     ("returns to scale", "t"): "0.1956", ("returns to scale", "p-value"): "0.663"}
         for (label, column), figure in expected.items():
@@ -483,9 +487,9 @@ class ConstantReturnsTest(CalcTestCase):
         # Reference figures (R 4.2.2 lm; statsmodels 0.13.5 agrees), constant returns:
         # ln(P/C) on ln(L/C): intercept 0.0145446 (SE 0.019979), slope 0.7458658 (SE 0.041224),
         # capital exponent 1 - slope = 0.2541342 with the slope's SE, A = 1.014651.
-        expected = {("ln A", "estimate"): "0.0145446", ("ln A", "std. error"): "0.019979",
-                    ("L", "estimate"): "0.7458658", ("L", "std. error"): "0.041224",
-                    ("C", "estimate"): "0.2541342", ("C", "std. error"): "0.041224"}
+        expected = {("ln A", "value"): "0.0145446", ("ln A", "std. error"): "0.019979",
+                    ("L", "value"): "0.7458658", ("L", "std. error"): "0.041224",
+                    ("C", "value"): "0.2541342", ("C", "std. error"): "0.041224"}
         for (label, column), figure in expected.items():
             with self.subTest(row=label, column=column):
                 self.assert_published(row_of(self.table, label)[HEADER.index(column)], figure,
@@ -512,22 +516,22 @@ class ConstantReturnsTest(CalcTestCase):
             tss = sum((y - sum(log_p) / len(log_p)) ** 2 for y in log_p)  # R2 is of ln P itself
             r2 = 1 - result.ssr / tss
             figures = {
-                ("ln A", "estimate"): result.params[0], ("ln A", "std. error"): result.bse[0],
+                ("ln A", "value"): result.params[0], ("ln A", "std. error"): result.bse[0],
                 ("ln A", "t"): result.tvalues[0], ("ln A", "p-value"): result.pvalues[0],
-                ("ln A", "low"): bounds[0][0], ("ln A", "high"): bounds[0][1],
-                ("L", "estimate"): result.params[1], ("L", "std. error"): result.bse[1],
+                ("ln A", "lower bound"): bounds[0][0], ("ln A", "upper bound"): bounds[0][1],
+                ("L", "value"): result.params[1], ("L", "std. error"): result.bse[1],
                 ("L", "t"): result.tvalues[1], ("L", "p-value"): result.pvalues[1],
-                ("L", "low"): bounds[1][0], ("L", "high"): bounds[1][1],
-                ("C", "estimate"): 1 - result.params[1], ("C", "std. error"): result.bse[1],
+                ("L", "lower bound"): bounds[1][0], ("L", "upper bound"): bounds[1][1],
+                ("C", "value"): 1 - result.params[1], ("C", "std. error"): result.bse[1],
                 ("C", "t"): capital_t, ("C", "p-value"): 2 * scipy.stats.t.sf(abs(capital_t), df),
-                ("C", "low"): 1 - bounds[1][1], ("C", "high"): 1 - bounds[1][0],
-                ("R2", "estimate"): r2,
-                ("adjusted R2", "estimate"): 1 - (1 - r2) * (result.nobs - 1) / df,
-                ("residual SD", "estimate"): math.sqrt(result.scale),
+                ("C", "lower bound"): 1 - bounds[1][1], ("C", "upper bound"): 1 - bounds[1][0],
+                ("R2", "value"): r2,
+                ("adjusted R2", "value"): 1 - (1 - r2) * (result.nobs - 1) / df,
+                ("residual SD", "value"): math.sqrt(result.scale),
                 ("F (slopes = 0)", "t"): float(result.fvalue),
                 ("F (slopes = 0)", "p-value"): float(result.f_pvalue),
-                ("log-likelihood", "estimate"): result.llf,
-                ("AIC", "estimate"): result.aic, ("BIC", "estimate"): result.bic,
+                ("log-likelihood", "value"): result.llf,
+                ("AIC", "value"): result.aic, ("BIC", "value"): result.bic,
             }
             self.assert_matches_statsmodels(self.table, figures)
 
@@ -645,19 +649,19 @@ class ProdStatTest(CalcTestCase):
 
     # (row label typed, column label typed or None, table row, table column)
     LOOKUPS = [
-        ("l", None, "L", "estimate"),                 # an input's label, in another case
+        ("l", None, "L", "value"),                 # an input's label, in another case
         ("C", "std. error", "C", "std. error"),
         ("L", "p-value", "L", "p-value"),
-        ("LN A", "High", "ln A", "high"),
-        ("R2", None, "R2", "estimate"),
+        ("LN A", "Upper Bound", "ln A", "upper bound"),
+        ("R2", None, "R2", "value"),
         ("F", None, "F (slopes = 0)", "t"),            # "F" alias; the row holds only a statistic
         ("F (slopes = 0)", "p-value", "F (slopes = 0)", "p-value"),
-        ("verdict", None, "verdict", "estimate"),
+        ("verdict", None, "verdict", "value"),
         ("returns to scale", "p-value", "returns to scale", "p-value"),
-        ("Residual SD", None, "residual SD", "estimate"),
-        ("observations", None, "observations", "estimate"),
-        ("aic", None, "AIC", "estimate"),
-        ("form", None, "form", "estimate"),
+        ("Residual SD", None, "residual SD", "value"),
+        ("observations", None, "observations", "value"),
+        ("aic", None, "AIC", "value"),
+        ("form", None, "form", "value"),
     ]
 
     @classmethod
@@ -672,7 +676,7 @@ class ProdStatTest(CalcTestCase):
             set_formula(cls.sheet, "N%d" % (i + 1), '=PRODSTAT(B1:B25;C1:D25;"%s"%s)' % (row_label, column))
         set_formula(cls.sheet, "O1", '=PRODSTAT(B1:B25;C1:D25;"C";"std. error";;;"hc1")')
         set_formula(cls.sheet, "O2", '=PRODSTAT(B1:B25;C1:D25;"verdict";;;TRUE())')
-        set_formula(cls.sheet, "O3", '=PRODSTAT(B1:B25;C1:D25;"C";"low";;TRUE())')
+        set_formula(cls.sheet, "O3", '=PRODSTAT(B1:B25;C1:D25;"C";"lower bound";;TRUE())')
         recalc(DOC)
 
     def test_lookups_equal_the_table_cells(self):
@@ -966,9 +970,9 @@ ERROR_CASES = [
     ("constant returns given as text", None, 'PRODFIT({out};{inp};;"yes")', TABLE,
      error("constant returns: 'yes' is not TRUE or FALSE (1 or 0)")),
     ("PRODSTAT: a row label not in the table", None, 'PRODSTAT({out};{inp};"K")', CELL,
-     error("row label: 'K' is not a row of the table")),
+     error("row label: 'K' is not a row of the table; its rows are " + CD_ROW_LIST)),
     ("PRODSTAT: a column label not in the table", None, 'PRODSTAT({out};{inp};"R2";"se")', CELL,
-     error("column label: 'se' is not a column; use estimate, std. error, t, p-value, low or high")),
+     error("column label: 'se' is not a column; use value, std. error, t, p-value, lower bound or upper bound")),
     ("an input label that does not exist", None, 'PRODMARGINAL({table};{bundle};"K")', CELL,
      error("input: 'K' is not an input of the model; its inputs are 'L', 'C'")),
     ("input number 3 for a 2-input model", None, "PRODELASTICITY({table};{bundle};3)", CELL,

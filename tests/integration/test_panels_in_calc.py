@@ -43,7 +43,7 @@ OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt")
 
 STATSMODELS_RELATIVE = 1e-8   # two implementations of the same least squares, in double precision
 FORMULA_RELATIVE = 1e-12      # the same closed-form expression, evaluated in a different order
-HEADER = ["term", "estimate", "std. error", "t", "p-value", "low", "high"]
+HEADER = ["Cobb-Douglas fit", "value", "std. error", "t", "p-value", "lower bound", "upper bound"]
 
 OFFICE = None
 DOC = None

@@ -40,4 +40,13 @@ Eigen::VectorXd columnValues(const CellTable& column)
     return values;
 }
 
+Eigen::VectorXd columnValuesUnder(const CellTable& column, const std::string& title)
+{
+    if (column.rows() < 2 || !column.isText(0, 0) || column.text(0, 0) != title)
+        throw std::invalid_argument("columnValuesUnder: the column does not start with '" + title + "'");
+    CellTable below(column.rows() - 1, 1);
+    for (std::size_t row = 1; row < column.rows(); ++row) below.set(row - 1, 0, column.at(row, 0));
+    return columnValues(below);
+}
+
 } // namespace isoquant::testing

@@ -20,4 +20,8 @@ CellTable typedRange(std::initializer_list<std::initializer_list<Cell>> rows);
 // The numbers of a one-column result range.
 Eigen::VectorXd columnValues(const CellTable& column);
 
+// The numbers of a column result under its header cell (model_inputs.hpp); throws
+// std::invalid_argument when the first cell is not `title`.
+Eigen::VectorXd columnValuesUnder(const CellTable& column, const std::string& title);
+
 } // namespace isoquant::testing

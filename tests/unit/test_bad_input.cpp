@@ -343,4 +343,43 @@ BOOST_AUTO_TEST_CASE(are_refused_by_name)
                "groups: a group column works only with the cobb-douglas form, not with \"ces\"");
 }
 
+// Header rows: a gap in the labels and a label used twice are named (issue 14, items 6 and 12).
+BOOST_AUTO_TEST_CASE(header_rows_give_every_column_its_own_label)
+{
+    auto arguments = goodArguments();
+    arguments.inputs.set(0, 0, Cell{});
+    BOOST_TEST(fitMessage(arguments) == "inputs: row 1, column 1 is an empty header; give every column a label or none");
+
+    arguments = goodArguments();
+    arguments.inputs.set(0, 1, text("l"));
+    BOOST_TEST(fitMessage(arguments) == "inputs: the label 'l' heads two columns; give every column its own label");
+}
+
+// A last row holding the column sums (a totals row selected with the data) is refused, named by
+// its row in the selection; a last row that is the total in output alone is data like any other.
+BOOST_AUTO_TEST_CASE(a_totals_row_is_refused)
+{
+    auto arguments = goodArguments();
+    const std::size_t rows = arguments.output.rows(); // header and 24 data rows
+    CellTable output(rows + 1, 1), inputs(rows + 1, 2);
+    for (std::size_t row = 0; row < rows; ++row) {
+        output.set(row, 0, arguments.output.at(row, 0));
+        for (std::size_t column = 0; column < 2; ++column) inputs.set(row, column, arguments.inputs.at(row, column));
+    }
+    double outputSum = 0, inputSums[2] = {0, 0};
+    for (std::size_t row = 1; row < rows; ++row) {
+        outputSum += output.number(row, 0);
+        for (std::size_t column = 0; column < 2; ++column) inputSums[column] += inputs.number(row, column);
+    }
+    output.set(rows, 0, outputSum);
+    inputs.set(rows, 0, inputSums[0]);
+    inputs.set(rows, 1, inputSums[1] * (1 + 1e-12)); // typed sums agree to rounding
+    arguments.output = output;
+    arguments.inputs = inputs;
+    BOOST_TEST(fitMessage(arguments) == "row 26 looks like a total of the rows above; leave it out of the ranges");
+
+    arguments.inputs.set(rows, 1, inputSums[1] * 1.01);
+    BOOST_TEST(isoquant::fitFromArguments(arguments).estimates.size() == 3);
+}
+
 BOOST_AUTO_TEST_SUITE_END()

@@ -139,18 +139,50 @@ BOOST_AUTO_TEST_CASE(curvature_words_and_elasticities_per_row)
     Eigen::MatrixXd bundles(2, 2);
     bundles << 10, 4, 30, 9;
     const CellTable rows = numberRange(bundles, {"labour", "ovens"});
+    // Two data rows under a header row: each result starts with a header cell of its own.
     const CellTable returns = isoquant::inputReturnsColumn(bakery(), rows, std::string("ovens"));
-    BOOST_TEST((returns.at(0, 0) == Cell(std::string("diminishing")) && returns.at(1, 0) == Cell(std::string("diminishing"))));
+    BOOST_TEST((returns.at(0, 0) == Cell(std::string("returns to ovens"))));
+    BOOST_TEST((returns.at(1, 0) == Cell(std::string("diminishing")) && returns.at(2, 0) == Cell(std::string("diminishing"))));
     const CellTable pair = isoquant::inputPairColumn(bakery(), rows, 1.0, 2.0);
-    BOOST_TEST((pair.at(1, 0) == Cell(std::string("complements"))));
+    BOOST_TEST((pair.at(0, 0) == Cell(std::string("labour with ovens"))));
+    BOOST_TEST((pair.at(2, 0) == Cell(std::string("complements"))));
     for (const char* kind : {"direct", "allen", "morishima"}) {
         const CellTable sigma = isoquant::substitutionColumn(bakery(), rows, 2.0, 1.0, std::string(kind));
-        BOOST_TEST(closeTo(number(sigma, 0, 0), 1.0, 1e-12));
+        BOOST_TEST((sigma.at(0, 0) == Cell(std::string("elasticity of substitution, ovens and labour"))));
+        BOOST_TEST(closeTo(number(sigma, 1, 0), 1.0, 1e-12));
     }
     // Own second partial: b(b − 1)·Y/x² (Cobb-Douglas calculus), and the cross partial bᵢbⱼY/(xᵢxⱼ).
     const double y = 3.0 * std::pow(10.0, 0.7) * std::pow(4.0, 0.5);
-    BOOST_TEST(closeTo(number(isoquant::secondPartialColumn(bakery(), rows, 1.0, {}), 0, 0), 0.7 * -0.3 * y / 100.0, 1e-12));
-    BOOST_TEST(closeTo(number(isoquant::secondPartialColumn(bakery(), rows, 1.0, 2.0), 0, 0), 0.7 * 0.5 * y / 40.0, 1e-12));
+    const CellTable own = isoquant::secondPartialColumn(bakery(), rows, 1.0, {});
+    BOOST_TEST((own.at(0, 0) == Cell(std::string("second derivative in labour"))));
+    BOOST_TEST(closeTo(number(own, 1, 0), 0.7 * -0.3 * y / 100.0, 1e-12));
+    const CellTable cross = isoquant::secondPartialColumn(bakery(), rows, 1.0, 2.0);
+    BOOST_TEST((cross.at(0, 0) == Cell(std::string("cross derivative in labour and ovens"))));
+    BOOST_TEST(closeTo(number(cross, 1, 0), 0.7 * 0.5 * y / 40.0, 1e-12));
+}
+
+// Inputs headed in another order than the model's are taken by their labels (issue 14, item 2);
+// a label the model lacks or an input without a column is named.
+BOOST_AUTO_TEST_CASE(inputs_are_matched_to_the_model_by_label)
+{
+    using isoquant::testing::messageOf;
+    Eigen::MatrixXd bundles(1, 2);
+    bundles << 4, 10; // ovens, labour
+    const CellTable swapped = numberRange(bundles, {"Ovens", "LABOUR"});
+    Eigen::MatrixXd inOrder(1, 2);
+    inOrder << 10, 4;
+    const CellTable ordered = numberRange(inOrder, {"labour", "ovens"});
+    // One data row under a header: the plain value, as a single-cell formula shows it.
+    BOOST_TEST(number(isoquant::marginalProductColumn(bakery(), swapped, std::string("labour")), 0, 0) ==
+               number(isoquant::marginalProductColumn(bakery(), ordered, std::string("labour")), 0, 0));
+    BOOST_TEST(number(isoquant::technicalRateColumn(bakery(), swapped, 1.0, 2.0), 0, 0) ==
+               number(isoquant::technicalRateColumn(bakery(), ordered, 1.0, 2.0), 0, 0));
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(bakery(), numberRange(inOrder, {"labour", "flour"})); }) ==
+               "inputs: the column headed 'flour' is not an input of the model; its inputs are 'labour', 'ovens'");
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(bakery(), numberRange(bundles.leftCols(1), {"labour"})); }) ==
+               "inputs: no column is headed 'ovens', an input of the model; its inputs are 'labour', 'ovens'");
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(bakery(), numberRange(inOrder, {"labour", "Labour"})); }) ==
+               "inputs: the label 'Labour' heads two columns; give every column its own label");
 }
 
 BOOST_AUTO_TEST_CASE(bad_input_is_named)

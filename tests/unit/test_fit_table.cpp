@@ -62,10 +62,11 @@ BOOST_AUTO_TEST_CASE(rows_and_columns_are_as_documented)
     const auto table = isoquant::fitTable(cobbDouglasFit());
     BOOST_TEST(table.rows() == isoquant::fitTableRows(2, 0));
     BOOST_TEST(table.columns() == 7u);
-    const std::vector<std::string> header{"term", "estimate", "std. error", "t", "p-value", "low", "high"};
+    const std::vector<std::string> header{"Cobb-Douglas fit", "value",       "std. error", "t",
+                                          "p-value",          "lower bound", "upper bound"};
     for (std::size_t column = 0; column < 7; ++column) BOOST_TEST(text(table.at(0, column)) == header[column]);
 
-    const std::vector<std::string> labels{"term", "ln A", "L", "C", "", "observations", "R2", "adjusted R2",
+    const std::vector<std::string> labels{"Cobb-Douglas fit", "ln A", "L", "C", "", "observations", "R2", "adjusted R2",
                                           "residual SD", "F (slopes = 0)", "log-likelihood", "AIC", "BIC",
                                           "returns to scale", "verdict", "form", "smearing factor"};
     BOOST_TEST(firstColumn(table) == labels, boost::test_tools::per_element());
@@ -77,14 +78,14 @@ BOOST_AUTO_TEST_CASE(controls_add_their_rows_and_ln_a_at_control_means)
     const auto table = isoquant::fitTable(statePanelFit());
     BOOST_TEST(table.rows() == isoquant::fitTableRows(3, 1));
     const std::vector<std::string> labels{
-        "term",          "ln A",        "pcap",           "pc",  "emp", "unemp (control)", "", "observations",
+        "Cobb-Douglas fit", "ln A",     "pcap",           "pc",  "emp", "unemp (control)", "", "observations",
         "R2",            "adjusted R2", "residual SD",    "F (slopes = 0)", "log-likelihood", "AIC", "BIC",
         "returns to scale", "verdict",  "form",           "ln A at control means", "smearing factor"};
     BOOST_TEST(firstColumn(table) == labels, boost::test_tools::per_element());
 }
 
-// Each parameter row holds estimate, SE, t, p, low, high; statistic rows put a value under
-// "estimate" and a test statistic under "t" with its p-value beside it.
+// Each parameter row holds value, SE, t, p, lower and upper bound; statistic rows put a value under
+// "value" and a test statistic under "t" with its p-value beside it.
 BOOST_AUTO_TEST_CASE(cells_hold_the_fit)
 {
     const auto fit = cobbDouglasFit();
@@ -172,14 +173,19 @@ BOOST_AUTO_TEST_CASE(hand_typed_model_works)
     BOOST_TEST(cobbDouglasOf(read).logScale == std::log(1.01));
     BOOST_TEST(!read.scaleTest.has_value());
 
-    const CellTable inputs = isoquant::testing::cobbDouglas1928Arguments().inputs; // header L, C skipped
-    const Eigen::VectorXd output = isoquant::testing::columnValues(isoquant::outputColumn(model, inputs));
-    const Eigen::VectorXd labourProduct =
-        isoquant::testing::columnValues(isoquant::marginalProductColumn(model, inputs, std::string("Labour")));
+    // The 1928 ranges under the model's labels (in another case): each column result starts with a
+    // header cell of its own, so that it lines up with the data rows when entered beside them.
+    CellTable inputs = isoquant::testing::cobbDouglas1928Arguments().inputs;
+    inputs.set(0, 0, "Labour");
+    inputs.set(0, 1, "CAPITAL");
+    using isoquant::testing::columnValuesUnder;
+    const Eigen::VectorXd output = columnValuesUnder(isoquant::outputColumn(model, inputs), "output");
+    const Eigen::VectorXd labourProduct = columnValuesUnder(
+        isoquant::marginalProductColumn(model, inputs, std::string("Labour")), "marginal product of labour");
     const Eigen::VectorXd capitalProduct =
-        isoquant::testing::columnValues(isoquant::marginalProductColumn(model, inputs, 2.0));
-    const Eigen::VectorXd elasticity =
-        isoquant::testing::columnValues(isoquant::elasticityColumn(model, inputs, std::string("capital")));
+        columnValuesUnder(isoquant::marginalProductColumn(model, inputs, 2.0), "marginal product of capital");
+    const Eigen::VectorXd elasticity = columnValuesUnder(
+        isoquant::elasticityColumn(model, inputs, std::string("capital")), "output elasticity of capital");
     BOOST_TEST_REQUIRE(output.size() == 24);
     for (std::size_t row = 1; row < inputs.rows(); ++row) {
         const double labour = inputs.number(row, 0);
@@ -235,7 +241,7 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(number(look("r2", none)) == fit.rSquared);
     BOOST_TEST(number(look("LN A", none)) == fit.estimates(0));
     BOOST_TEST(number(look("PC", std::string("Std. Error"))) == fit.standardErrors(2));
-    BOOST_TEST(number(look("emp", std::string("HIGH"))) == fit.upperBounds(3));
+    BOOST_TEST(number(look("emp", std::string("UPPER BOUND"))) == fit.upperBounds(3));
     // A control answers to its label with or without " (control)".
     BOOST_TEST(number(look("unemp", none)) == fit.estimates(4));
     BOOST_TEST(number(look("Unemp (Control)", std::string("p-value"))) == fit.pValues(4));
@@ -247,9 +253,19 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(text(look("Verdict", none)) == "increasing");
     BOOST_TEST(number(look("ln A at control means", none)) == fit.logScaleAtControlMeans);
 
-    BOOST_TEST(messageOf([&] { look("capital", none); }) == "row label: 'capital' is not a row of the table");
+    // Surrounding spaces (also a no-break space) do not count; "R²" is "R2".
+    BOOST_TEST(number(look(" r2  ", none)) == fit.rSquared);
+    BOOST_TEST(number(look("R\u00b2", none)) == fit.rSquared);
+    BOOST_TEST(number(look("adjusted R\u00b2\u00a0", none)) == fit.adjustedRSquared);
+    BOOST_TEST(number(look("pc", std::string(" p-value "))) == fit.pValues(2));
+
+    BOOST_TEST(messageOf([&] { look("capital", none); }) ==
+               "row label: 'capital' is not a row of the table; its rows are 'ln A', 'pcap', 'pc', 'emp', "
+               "'unemp (control)', 'observations', 'R2', 'adjusted R2', 'residual SD', 'F (slopes = 0)', "
+               "'log-likelihood', 'AIC', 'BIC', 'returns to scale', 'verdict', 'form', 'ln A at control means', "
+               "'smearing factor'");
     BOOST_TEST(messageOf([&] { look("pcap", std::string("se")); }) ==
-               "column label: 'se' is not a column; use estimate, std. error, t, p-value, low or high");
+               "column label: 'se' is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     BOOST_TEST(messageOf([&] { isoquant::lookUpFitTable(table, 2.0, none); }) ==
                "row label: give the label of a row of the table, such as \"R2\" or an input's label");
     BOOST_TEST(messageOf([&] { look("pcap", 3.0); }) == "column label: give a column's label, such as \"p-value\"");

@@ -192,7 +192,7 @@ BOOST_AUTO_TEST_CASE(ces_start_search_on_evenly_spaced_rows_reaches_the_optimum_
 BOOST_AUTO_TEST_CASE(the_forms_nest_cobb_douglas)
 {
     // CES and translog contain Cobb-Douglas (ρ → 0; all βᵢⱼ = 0), so their least-squares fits are at
-    // least as close; and the translog's CD test is the F of that restriction,
+    // least as close; and the translog's Cobb-Douglas test is the F of that restriction,
     // ((RSS_CD − RSS_TL)/q)/(RSS_TL/(n − p)) under classical errors.
     const isoquant::FitArguments datasets[] = {isoquant::testing::cobbDouglas1928Arguments(),
                                                isoquant::testing::riceFarmArguments({"size", "totlabor"})};
@@ -355,7 +355,7 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     const auto ces = isoquant::fitFromArguments(arguments);
     const isoquant::CellTable cesTable = isoquant::fitTable(ces);
     BOOST_TEST(cesTable.rows() == isoquant::cesFitTableRows());
-    const char* cesLabels[] = {"term", "ln A", "delta", "rho", "nu", "sigma"};
+    const char* cesLabels[] = {"ces fit", "ln A", "delta", "rho", "nu", "sigma"};
     for (std::size_t row = 0; row < std::size(cesLabels); ++row)
         BOOST_TEST((cesTable.at(row, 0) == Cell(std::string(cesLabels[row]))));
     BOOST_TEST((cesTable.at(18, 1) == Cell(std::string("size"))));
@@ -379,7 +379,7 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
                        translog.regression.residuals.array().exp().mean(), 1e-14));
     BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("elasticity seed"), std::string("std. error")) ==
                 Cell(translog.translog->elasticityStandardErrors(2))));
-    BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("CD test"), Cell{}) ==
+    BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("Cobb-Douglas test"), Cell{}) ==
                 Cell(translog.translog->cobbDouglasTest.fStatistic)));
 
     // Read back, each table predicts exp(ln Y − residual) for every row of its own data.
@@ -388,7 +388,8 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     const isoquant::CellTable* tables[] = {&cesTable, &translogTable};
     for (std::size_t c = 0; c < 2; ++c) {
         const auto& [fit, inputs] = cases[c];
-        const Eigen::VectorXd predicted = isoquant::testing::columnValues(isoquant::outputColumn(*tables[c], inputs));
+        const Eigen::VectorXd predicted =
+            isoquant::testing::columnValuesUnder(isoquant::outputColumn(*tables[c], inputs), "output");
         const Eigen::VectorXd output = dataOf(arguments).output;
         for (Eigen::Index row = 0; row < predicted.size(); ++row)
             BOOST_TEST(closeTo(std::log(predicted(row)), std::log(output(row)) - fit->regression.residuals(row), 1e-12));

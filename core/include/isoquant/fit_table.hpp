@@ -2,7 +2,7 @@
 //
 // Cobb-Douglas layout (7 columns; k inputs, m controls; the ces and translog layouts are in
 // form_tables.hpp):
-//   term | estimate | std. error | t | p-value | low | high       header
+//   Cobb-Douglas fit | value | std. error | t | p-value | lower bound | upper bound   header
 //   ln A | …                                                      the scale parameter (under fixed
 //                                                                  or two-way effects the mean group
 //                                                                  effect, its other cells n/a)
@@ -17,14 +17,14 @@
 //   groups (G), effects (the word)                                 when groups are given
 //   within R2                                                      effects "fixed" or "two-way"
 //   periods (T)                                                    effects "two-way"
-//   technical change per period | λ with its std. error … high     a trend (effects not two-way)
+//   technical change per period | λ with its std. error … bounds    a trend (effects not two-way)
 //   ln A for predictions                                           effects or a trend: the ln A
 //                                                                  the evaluators use
 //   incomplete rows dropped                                        the switch is on (even at 0)
 // so the table has k + m + 15 rows, plus 1 with controls, plus 2 with groups, 1 under effects,
 // 1 more under two-way effects, 1 for a trend, 1 for "ln A for predictions" (effects or a trend)
 // and 1 when incomplete rows are dropped. Two inputs, no options: 17 rows.
-// Statistic rows use the same columns: a value under "estimate", its standard error under
+// Statistic rows use the same columns: a value under "value", its standard error under
 // "std. error", a test statistic under "t", its p-value under "p-value". A number that is not
 // finite (an exact fit's t, say) is shown as the text "n/a".
 // Group and period effects are not rows of the table; PRODSTAT answers "effect of group <label>"
@@ -46,7 +46,7 @@ std::size_t fitTableRows(const ProductionFit& fit);
 
 // The cell at `rowLabel` (a term or statistic label, case-insensitive; a control also answers to
 // its label without " (control)"; "F" answers for "F (slopes = 0)") and `columnLabel` (a header
-// word; empty means "estimate", or "t" on the rows that hold only a test statistic).
+// word; empty means "value", or "t" on the rows that hold only a test statistic).
 // Throws InputError naming the argument when a label is not in the table.
 Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel);
 

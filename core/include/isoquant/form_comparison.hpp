@@ -6,7 +6,7 @@
 //   cobb-douglas, ces, translog                                                one row each
 //   (empty row)
 //   nested test | statistic | df1 | df2 | p-value | distribution | verdict     header
-//   translog vs cobb-douglas   Wald F of all βᵢⱼ = 0 (the translog table's CD test), on F(q, n−p)
+//   translog vs cobb-douglas   Wald F of all βᵢⱼ = 0 (the translog table's Cobb-Douglas test), on F(q, n−p)
 //   ces vs cobb-douglas        likelihood ratio of ρ = 0, LR = 2·(LL_ces − LL_cd) = n·ln(RSS_cd/RSS_ces),
 //                              on χ²(1): Cobb-Douglas is the CES at ρ = 0, an interior point of
 //                              ρ > −1, with δ and ν identified there (νδ and ν(1−δ) are its exponents)

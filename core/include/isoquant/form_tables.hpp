@@ -3,10 +3,10 @@
 // that is not finite or not defined.
 //
 // ces (always 20 rows):
-//   term | estimate | std. error | t | p-value | low | high     header
+//   ces fit | value | std. error | t | p-value | lower bound | upper bound   header
 //   ln A, delta (weight of the first input), rho, nu             parameter rows, t of parameter = 0
-//   sigma                                                        σ = 1/(1+ρ): estimate, se (delta
-//                                                                method), low, high; t and p empty
+//   sigma                                                        σ = 1/(1+ρ): value, se (delta
+//                                                                method), bounds; t and p empty
 //   (empty row)
 //   observations, R2, adjusted R2, residual SD, log-likelihood, AIC, BIC      (on ln Y, p = 4)
 //   returns to scale                                             ν, se, F of ν = 1 under "t", p
@@ -20,11 +20,11 @@
 // convergence the estimates are the solver's last values and carry none either.
 //
 // translog (k inputs, m controls, q = k(k+1)/2):
-//   header; ln A; one row per input (αᵢ); one row "<label i>*<label j>" per βᵢⱼ, i ≤ j, in the
+//   header (translog fit | value | …); ln A; one row per input (αᵢ); one row "<label i>*<label j>" per βᵢⱼ, i ≤ j, in the
 //   order 1*1, 1*2, …, 1*k, 2*2, …; one row per control "<label> (control)"; an empty row;
 //   observations, R2, adjusted R2, residual SD, F (slopes = 0), log-likelihood, AIC, BIC;
-//   elasticity <label> (one per input: εᵢ at the sample mean of the logs, se, t of εᵢ = 0, p, low,
-//   high); returns to scale (ν at the mean, se, F of ν = 1, p); verdict; CD test (F of all βᵢⱼ = 0
+//   elasticity <label> (one per input: εᵢ at the sample mean of the logs, se, t of εᵢ = 0, p,
+//   bounds); returns to scale (ν at the mean, se, F of ν = 1, p); verdict; Cobb-Douglas test (F of all βᵢⱼ = 0
 //   under "t", its p-value); form; ln A at control means (only when m > 0); smearing factor
 // so 2k + q + m + 16 rows, plus one with controls. Two inputs, no controls: 23 rows.
 #pragma once

@@ -16,7 +16,7 @@
 //   "converged" is refused.
 // - translog: one row per input (αᵢ), labelled by the input, and one row "<label i>*<label j>" for
 //   every pair i ≤ j (βᵢⱼ, the ½ convention of translog.hpp; either order of the two labels).
-// Rows a form does not know ("elasticity <label>", "CD test", …) are statistic rows after the
+// Rows a form does not know ("elasticity <label>", "Cobb-Douglas test", …) are statistic rows after the
 // empty row of a PRODFIT table.
 #pragma once
 

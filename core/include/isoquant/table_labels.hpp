@@ -2,11 +2,19 @@
 #pragma once
 
 #include <array>
+#include <cstddef>
 
 namespace isoquant {
 
-inline constexpr std::array<const char*, 7> headerLabels{"term", "estimate", "std. error", "t",
-                                                         "p-value", "low", "high"};
+// The header row: its first cell names the table (a title below), the others name the columns.
+inline constexpr std::array<const char*, 6> columnLabels{"value",   "std. error",  "t",
+                                                         "p-value", "lower bound", "upper bound"};
+inline constexpr std::size_t tableColumns = 1 + columnLabels.size();
+inline constexpr const char* cobbDouglasTitle = "Cobb-Douglas fit";
+inline constexpr const char* cesTitle = "ces fit";
+inline constexpr const char* translogTitle = "translog fit";
+// The titles a model reader skips as the header row.
+inline constexpr std::array<const char*, 3> tableTitles{cobbDouglasTitle, cesTitle, translogTitle};
 inline constexpr const char* logScaleLabel = "ln A";
 inline constexpr const char* scaleLabel = "A"; // a hand-typed model may give A instead of ln A
 inline constexpr const char* controlSuffix = " (control)";
@@ -56,7 +64,7 @@ inline constexpr const char* substitutionLabel = "sigma";
 inline constexpr const char* convergenceLabel = "convergence";
 inline constexpr const char* inputsLabel = "inputs";
 inline constexpr const char* elasticityPrefix = "elasticity ";
-inline constexpr const char* cobbDouglasTestLabel = "CD test";
+inline constexpr const char* cobbDouglasTestLabel = "Cobb-Douglas test";
 inline constexpr const char* convergedText = "converged";
 inline constexpr const char* boundaryText = "boundary";
 
