@@ -119,7 +119,8 @@ const std::vector<FunctionInfo>& functionTable()
          "period = 1 unless a base is given.",
          {{"quantities", "Quantities of each period, one column per input, positive. A first row of text names "
                          "them."},
-          {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1."},
+          {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
+                     "within 0.01 (rescaled to exactly 1)."},
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
           {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."}}},
         {"prodRegular", "PRODREGULAR",

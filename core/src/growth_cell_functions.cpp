@@ -146,8 +146,7 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
     requireColumns(shares, "weights", k, "inputs has");
     requireSamePeriods(inputs, "inputs", shares, "weights");
     if (inputs.hasHeader && shares.hasHeader) requireSameLabels("weights", "column", shares.labels, "inputs column", inputs.labels);
-    requireSharesSumToOne(shares, "weights");
-    result.values = shares.values;
+    result.values = sharesRescaledToOne(shares, "weights");
     result.labels = shares.labels;
     result.labelled = shares.hasHeader;
     return result;
@@ -249,9 +248,9 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
     requireSamePeriods(amounts, "quantities", weights, "shares");
     if (amounts.hasHeader && weights.hasHeader)
         requireSameLabels("shares", "column", weights.labels, "quantities column", amounts.labels);
-    requireSharesSumToOne(weights, "shares");
+    const Eigen::MatrixXd rescaled = sharesRescaledToOne(weights, "shares");
 
-    const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, weights.values);
+    const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, rescaled);
     CellTable column(static_cast<std::size_t>(logIndex.size()), 1);
     for (Eigen::Index period = 0; period < logIndex.size(); ++period) {
         // base·exp(0) is the base exactly in the first period.

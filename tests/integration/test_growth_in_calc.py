@@ -256,8 +256,8 @@ ERROR_CASES = [
      error("quantities: period 5 (row 6), column 2 is 0; quantities must be positive (growth is a difference of "
            "logs)")),
     ("shares that do not sum to 1", "PRODINDEX(C1:E9;J71:L79)", "J141:J148",
-     error("shares: period 4 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 (within "
-           "0.01)")),
+     error("shares: period 4 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 within "
+           "0.01 (0.99 to 1.01, both included)")),
     ('"fixed" with cost shares', 'PRODGROWTH(B1:B9;C1:E9;F1:H9;"fixed")', "J151:P159",
      error('method: "fixed" uses a model\'s constant elasticities; with cost shares as weights use "tornqvist"')),
     ("an unknown index method", 'PRODINDEX(C1:E9;F1:H9;"chain")', "J161:J168",
