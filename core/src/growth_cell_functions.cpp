@@ -190,9 +190,32 @@ void requireFinite(const GrowthAccount& account, const NumericColumns& inputs)
         throw InputError("weights: the total over all periods is too large to represent");
 }
 
+// PRODTFP's periods: λ·(tᵢ − t_last) for every row, moving the model's ln A (that of the latest
+// period) to the row's own period.
+Eigen::VectorXd periodShifts(const ProductionModel& model, const CellTable& periods, Eigen::Index rows)
+{
+    if (model.hasPeriodEffects)
+        throw InputError("periods: the model has period effects (\"two-way\"), which its table does not hold; "
+                         "fit a trend instead, or leave periods out");
+    if (!model.technicalChange)
+        throw InputError("periods: the model has no trend (no \"technical change per period\" row), so every row "
+                         "has the same technology; leave periods out");
+    if (!model.latestPeriod)
+        throw InputError("periods: the model has no \"latest period\" row, the period its ln A refers to; refit it "
+                         "with PRODFIT, or add the row after an empty row");
+    const NumericColumns read = readNumericColumns(periods, "periods", ValueRule::finite, "period");
+    if (read.values.cols() != 1)
+        throw InputError("periods: must be one column; it has " + std::to_string(read.values.cols()));
+    if (read.values.rows() != rows)
+        throw InputError("periods: has " + plural(static_cast<std::size_t>(read.values.rows()), "row") +
+                         " of data but output has " + plural(static_cast<std::size_t>(rows), "row"));
+    return *model.technicalChange * (read.values.col(0).array() - *model.latestPeriod);
+}
+
 } // namespace
 
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs)
+CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+                             const CellTable& periods)
 {
     const ProductionModel technology = readModelArgument(model, "model");
     const NumericColumns observed = readNumericColumns(output, "output", ValueRule::positive, "output");
@@ -205,7 +228,10 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
                          " of data but output has " + plural(static_cast<std::size_t>(observed.values.rows()), "row"));
     if (bundles.hasHeader) requireSameLabels("inputs", "column", bundles.labels, "the model's input", technology.inputLabels);
 
-    const Eigen::VectorXd levels = productivityLevels(*technology.technology, observed.values.col(0), bundles.values);
+    const Eigen::VectorXd shifts =
+        periods.empty() ? Eigen::VectorXd() : periodShifts(technology, periods, observed.values.rows());
+    const Eigen::VectorXd levels =
+        productivityLevels(*technology.technology, observed.values.col(0), bundles.values, shifts);
     CellTable column(static_cast<std::size_t>(levels.size()), 1);
     for (Eigen::Index row = 0; row < levels.size(); ++row) {
         if (!std::isfinite(levels(row)) || levels(row) == 0)
