@@ -108,6 +108,24 @@ BOOST_AUTO_TEST_CASE(pooled_trend)
     BOOST_TEST(withoutPeriods < -0.01);
 }
 
+// A pooled fit with a control and constant returns imposed, and a trend: the evaluators take the
+// control at its mean (ln A at control means), so the log TFP of a row is its residual plus
+// γ·(z − z̄); both average 0 over the fitted rows (least squares with a constant), so with periods
+// the geometric mean is 1 again. The control is invented: a rate uniform on [0, 1].
+BOOST_AUTO_TEST_CASE(pooled_trend_with_a_control_and_constant_returns)
+{
+    Panel panel = unbalancedPanel(5);
+    panel.arguments.groups = CellTable();
+    std::mt19937 engine(6);
+    std::uniform_real_distribution<double> rate(0.0, 1.0);
+    Eigen::VectorXd control(panel.years.size());
+    for (Eigen::Index row = 0; row < control.size(); ++row) control(row) = rate(engine);
+    panel.arguments.controls = numberRange(control, {"utilisation"});
+    panel.arguments.constantReturns = 1.0; // TRUE() in a cell
+    BOOST_TEST(isoquant::fitFromArguments(panel.arguments).returns.imposed);
+    BOOST_TEST(std::fabs(meanLogProductivity(panel.arguments, panel.arguments.trend)) <= meanLogTolerance);
+}
+
 // Fixed effects on the unbalanced panel, no trend: ln A for predictions is the row-weighted mean of
 // the group effects, Σ_g n_g·α_g / n (recomputed here from the fit's effects), so the geometric
 // mean is 1 without periods; the plain mean of the effects (the ln A row) differs from it here.
