@@ -98,20 +98,26 @@ const std::vector<FunctionInfo>& functionTable()
          {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
         {"prodTfp", "PRODTFP",
          "Total factor productivity of each row: observed output divided by the output the model predicts from that "
-         "row's inputs (1 = exactly as predicted). A column, one value per row.",
+         "row's inputs (1 = exactly as predicted). A column, one value per row. On the rows a PRODFIT table was "
+         "fitted to, the geometric mean is 1 (with a trend, when periods is given).",
          {modelArgument, outputArgument,
           {"inputs", "Inputs of each row in the model's input order, as many rows as output. A first row of text "
-                     "names the inputs."}}},
+                     "names the inputs."},
+          {"periods", "Optional, for a model with a trend: the period (year) of each row, as many rows as output. "
+                      "Each row is then compared with its own period's technology: ln A + technical change per "
+                      "period × (period - latest period)."}}},
         {"prodGrowth", "PRODGROWTH",
          "Growth accounting from one period to the next: output growth split into each input's contribution, a "
          "scale effect and TFP growth (the residual), in log differences, plus a total row. Returns a table (enter "
-         "as an array formula).",
+         "as an array formula). TFP growth excludes the scale effect: the Solow residual (output growth minus the "
+         "contributions) = scale effect + TFP growth.",
          {{"output", "Output of each period, in time order: one column of positive numbers. A first row of text is "
                      "read as a header."},
           {"inputs", "Input quantities of each period, one column per input, positive, as many periods as output. "
                      "A first row of text names the inputs."},
           {"weights", "A model (a PRODFIT table or a typed model: its elasticities at each period's inputs) or cost "
-                      "shares of the inputs, one column per input and one row per period, each row summing to 1."},
+                      "shares of the inputs, one column per input and one row per period, each row summing to 1 "
+                      "within 0.01 (rescaled to exactly 1)."},
           {"method", "\"tornqvist\" (default: weights averaged over adjacent periods) or \"fixed\" (the constant "
                      "elasticities of a cobb-douglas model)."}}},
         {"prodIndex", "PRODINDEX",
@@ -119,7 +125,8 @@ const std::vector<FunctionInfo>& functionTable()
          "period = 1 unless a base is given.",
          {{"quantities", "Quantities of each period, one column per input, positive. A first row of text names "
                          "them."},
-          {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1."},
+          {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
+                     "within 0.01 (rescaled to exactly 1)."},
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
           {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."}}},
         {"prodRegular", "PRODREGULAR",

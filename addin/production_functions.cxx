@@ -157,11 +157,12 @@ Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
         [&] { return Cell(returnsVerdictCell(*models_.cells(model, "model"), toSingleCell(level, "level"))); });
 }
 
-AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs)
+AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+                                      const Any& periods)
 {
     return guardedTable([&] {
         return productivityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                  toCellTable(inputs, "inputs"));
+                                  toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"));
     });
 }
 

@@ -46,7 +46,8 @@ public:
     AnyTable SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
     AnyTable SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
-    AnyTable SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs) override;
+    AnyTable SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+                              const css::uno::Any& periods) override;
     AnyTable SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
                                  const css::uno::Any& method) override;
     AnyTable SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,

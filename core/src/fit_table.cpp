@@ -48,12 +48,13 @@ std::size_t findRow(const CellTable& table, const std::string& typed)
     throw InputError("row label: " + quoted(typed) + " is not a row of the table; its rows are " + rowLabelList(table));
 }
 
-// Rows of the estimation options (groups, effects, trend, incomplete rows), in table order.
+// Rows of the estimation options (groups, effects, trend, incomplete rows), in table order; a
+// trend adds two: technical change per period and latest period.
 std::size_t optionRows(const PanelSummary& panel)
 {
     const bool effects = panel.effects != EffectsKind::none;
     return (panel.groups > 0 ? 2 : 0) + (effects ? 1 : 0) + (panel.effects == EffectsKind::twoWay ? 1 : 0) +
-           (panel.technicalChange ? 1 : 0) + (panel.shiftsLogScale ? 1 : 0) + (panel.dropsIncompleteRows ? 1 : 0);
+           (panel.technicalChange ? 2 : 0) + (panel.shiftsLogScale ? 1 : 0) + (panel.dropsIncompleteRows ? 1 : 0);
 }
 
 void writeOptionRows(TableWriter& writer, const PanelSummary& panel)
@@ -72,6 +73,7 @@ void writeOptionRows(TableWriter& writer, const PanelSummary& panel)
                     writer.undefinedIfExact(change.lowerBound), writer.undefinedIfExact(change.upperBound)});
     }
     if (panel.shiftsLogScale) writer.valueRow(predictionScaleLabel, panel.logScaleForPredictions);
+    if (panel.technicalChange) writer.valueRow(latestPeriodLabel, panel.latestPeriod);
     if (panel.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(panel.incompleteRowsDropped));
 }
 

@@ -58,11 +58,13 @@ GrowthAccount accountForGrowth(const Eigen::VectorXd& output, const Eigen::Matri
 }
 
 Eigen::VectorXd productivityLevels(const Technology& technology, const Eigen::VectorXd& output,
-                                   const Eigen::MatrixXd& inputs)
+                                   const Eigen::MatrixXd& inputs, const Eigen::VectorXd& logScaleShifts)
 {
     Eigen::VectorXd levels(output.size());
-    for (Eigen::Index row = 0; row < output.size(); ++row)
-        levels(row) = std::exp(std::log(output(row)) - technology.logOutput(inputs.row(row).transpose()));
+    for (Eigen::Index row = 0; row < output.size(); ++row) {
+        const double shift = logScaleShifts.size() > 0 ? logScaleShifts(row) : 0.0;
+        levels(row) = std::exp(std::log(output(row)) - technology.logOutput(inputs.row(row).transpose()) - shift);
+    }
     return levels;
 }
 

@@ -146,8 +146,7 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
     requireColumns(shares, "weights", k, "inputs has");
     requireSamePeriods(inputs, "inputs", shares, "weights");
     if (inputs.hasHeader && shares.hasHeader) requireSameLabels("weights", "column", shares.labels, "inputs column", inputs.labels);
-    requireSharesSumToOne(shares, "weights");
-    result.values = shares.values;
+    result.values = sharesRescaledToOne(shares, "weights");
     result.labels = shares.labels;
     result.labelled = shares.hasHeader;
     return result;
@@ -191,9 +190,32 @@ void requireFinite(const GrowthAccount& account, const NumericColumns& inputs)
         throw InputError("weights: the total over all periods is too large to represent");
 }
 
+// PRODTFP's periods: λ·(tᵢ − t_last) for every row, moving the model's ln A (that of the latest
+// period) to the row's own period.
+Eigen::VectorXd periodShifts(const ProductionModel& model, const CellTable& periods, Eigen::Index rows)
+{
+    if (model.hasPeriodEffects)
+        throw InputError("periods: the model has period effects (\"two-way\"), which its table does not hold; "
+                         "fit a trend instead, or leave periods out");
+    if (!model.technicalChange)
+        throw InputError("periods: the model has no trend (no \"technical change per period\" row), so every row "
+                         "has the same technology; leave periods out");
+    if (!model.latestPeriod)
+        throw InputError("periods: the model has no \"latest period\" row, the period its ln A refers to; refit it "
+                         "with PRODFIT, or add the row after an empty row");
+    const NumericColumns read = readNumericColumns(periods, "periods", ValueRule::finite, "period");
+    if (read.values.cols() != 1)
+        throw InputError("periods: must be one column; it has " + std::to_string(read.values.cols()));
+    if (read.values.rows() != rows)
+        throw InputError("periods: has " + plural(static_cast<std::size_t>(read.values.rows()), "row") +
+                         " of data but output has " + plural(static_cast<std::size_t>(rows), "row"));
+    return *model.technicalChange * (read.values.col(0).array() - *model.latestPeriod);
+}
+
 } // namespace
 
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs)
+CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+                             const CellTable& periods)
 {
     const ProductionModel technology = readModelArgument(model, "model");
     const NumericColumns observed = readNumericColumns(output, "output", ValueRule::positive, "output");
@@ -206,7 +228,10 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
                          " of data but output has " + plural(static_cast<std::size_t>(observed.values.rows()), "row"));
     if (bundles.hasHeader) requireSameLabels("inputs", "column", bundles.labels, "the model's input", technology.inputLabels);
 
-    const Eigen::VectorXd levels = productivityLevels(*technology.technology, observed.values.col(0), bundles.values);
+    const Eigen::VectorXd shifts =
+        periods.empty() ? Eigen::VectorXd() : periodShifts(technology, periods, observed.values.rows());
+    const Eigen::VectorXd levels =
+        productivityLevels(*technology.technology, observed.values.col(0), bundles.values, shifts);
     CellTable column(static_cast<std::size_t>(levels.size()), 1);
     for (Eigen::Index row = 0; row < levels.size(); ++row) {
         if (!std::isfinite(levels(row)) || levels(row) == 0)
@@ -249,9 +274,9 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
     requireSamePeriods(amounts, "quantities", weights, "shares");
     if (amounts.hasHeader && weights.hasHeader)
         requireSameLabels("shares", "column", weights.labels, "quantities column", amounts.labels);
-    requireSharesSumToOne(weights, "shares");
+    const Eigen::MatrixXd rescaled = sharesRescaledToOne(weights, "shares");
 
-    const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, weights.values);
+    const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, rescaled);
     CellTable column(static_cast<std::size_t>(logIndex.size()), 1);
     for (Eigen::Index period = 0; period < logIndex.size(); ++period) {
         // base·exp(0) is the base exactly in the first period.

@@ -68,14 +68,21 @@ std::string periodPlace(const NumericColumns& columns, Eigen::Index index)
            std::to_string(static_cast<std::size_t>(index) + columns.firstDataRow()) + ")";
 }
 
-void requireSharesSumToOne(const NumericColumns& shares, const std::string& argument)
+Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::string& argument)
 {
+    // 0.99 and 1.01 typed in cells, or shares that add up to them, may sum to a hair beyond in
+    // binary: the slack, a millionth of the tolerance, lets them in and nothing visibly beyond.
+    constexpr double slack = 1e-6 * shareSumTolerance;
+    Eigen::MatrixXd rescaled = shares.values;
     for (Eigen::Index period = 0; period < shares.values.rows(); ++period) {
         const double sum = shares.values.row(period).sum();
-        if (std::fabs(sum - 1) > shareSumTolerance)
+        if (!(std::fabs(sum - 1) <= shareSumTolerance + slack))
             throw InputError(argument + ": " + periodPlace(shares, period) + ": the shares sum to " +
-                             formatNumber(sum) + "; the cost shares of a period must sum to 1 (within 0.01)");
+                             formatNumber(sum) + "; the cost shares of a period must sum to 1 within 0.01 "
+                             "(0.99 to 1.01, both included)");
+        rescaled.row(period) /= sum;
     }
+    return rescaled;
 }
 
 void requireSamePeriods(const NumericColumns& reference, const std::string& referenceArgument,

@@ -221,9 +221,20 @@ PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, cons
         summary.periodEffects.resize(later + 1);
         summary.periodEffects << 0.0, regression.coefficients.segment(run.firstPeriodColumn, later);
     }
-    if (run.trendColumn) summary.technicalChange = parameterAt(regression, *run.trendColumn);
+    if (run.trendColumn) {
+        summary.technicalChange = parameterAt(regression, *run.trendColumn);
+        summary.latestPeriod = panel.periods.maxCoeff();
+    }
     summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
     summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;
+    if (effects != EffectsKind::none) {
+        // ln A at the control means holds the plain mean of the group effects; predictions use the
+        // mean over rows, Σ_g n_g·α_g / n.
+        double rowWeighted = 0;
+        for (const Eigen::Index group : panel.groupOfRow) rowWeighted += run.groupEffects(group);
+        rowWeighted /= static_cast<double>(panel.groupOfRow.size());
+        summary.logScaleForPredictions += rowWeighted - run.groupEffects.mean();
+    }
     return summary;
 }
 

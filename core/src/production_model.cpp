@@ -64,6 +64,9 @@ struct ModelRows {
     std::optional<double> logScaleAtControlMeans;
     std::optional<double> logScaleForPredictions;
     std::optional<double> smearingFactor;
+    std::optional<double> technicalChange;
+    std::optional<double> latestPeriod;
+    bool hasPeriodEffects = false;
     std::optional<ScaleTest> scaleTest;
     std::vector<ParameterRow> parameters;
     std::optional<std::vector<std::string>> inputsRow; // the labels of an "inputs" row
@@ -110,6 +113,12 @@ void readStatisticRow(const CellTable& range, std::size_t row, const std::string
         rows.scaleTest = test;
     } else if (equalsIgnoringCase(label, convergenceLabel) && range.isText(row, 1)) {
         rows.convergence = range.text(row, 1);
+    } else if (equalsIgnoringCase(label, technicalChangeLabel)) {
+        rows.technicalChange = requiredNumber(range, row, label);
+    } else if (equalsIgnoringCase(label, latestPeriodLabel)) {
+        rows.latestPeriod = requiredNumber(range, row, label);
+    } else if (equalsIgnoringCase(label, effectsLabel) && range.isText(row, 1)) {
+        rows.hasPeriodEffects = equalsIgnoringCase(range.text(row, 1), effectsWord(EffectsKind::twoWay));
     }
 }
 
@@ -239,6 +248,9 @@ ProductionModel readProductionModel(const CellTable& range)
     model.technology = read.technology;
     model.scaleTest = rows.scaleTest;
     model.smearingFactor = rows.smearingFactor;
+    model.technicalChange = rows.technicalChange;
+    model.latestPeriod = rows.latestPeriod;
+    model.hasPeriodEffects = rows.hasPeriodEffects;
     // The table's ν must be the model's own (for translog it is taken at the sample mean, unknown here).
     const auto scale = model.technology->constantScaleElasticity();
     if (model.scaleTest && scale && model.form != ProductionForm::translog &&

@@ -13,8 +13,13 @@ Sources of the expected figures, named beside each check:
   (absolute for log growth, which may be near 0; relative for index values): the same few
   operations on numbers of order 1 in double precision, in another order.
 - "identity": each PRODGROWTH row adds up to its output growth (TFP growth is the residual).
-- "least squares": on the sample a PRODFIT table was fitted to, the log residuals average 0, so
-  PRODTFP's geometric mean is 1.
+- "least squares": on the sample a PRODFIT table was fitted to, the log residuals average 0 (over
+  all rows, and within each group under fixed effects), so PRODTFP's geometric mean is 1 when each
+  row is compared with its own period's technology (the `periods` argument, with a trend) and
+  with the group effects' mean over rows.
+- "Diewert (1992)": W. E. Diewert, "Fisher ideal output, input and productivity indexes
+  revisited", Journal of Productivity Analysis 3, 211–248: the identity test (constant quantities
+  give a constant index) and proportionality (from memory).
 - "Fisher (1922)": the Fisher index is the geometric mean of Laspeyres and Paasche (from memory).
 - Error messages: the wording in core/src/period_range.cpp and core/src/growth_cell_functions.cpp,
   which the add-in prefixes with "Error: ".
@@ -24,6 +29,7 @@ numpy_growth_figures / numpy_growth_cross_check.
 
 import math
 import os
+import random
 import sys
 import unittest
 
@@ -233,6 +239,139 @@ class IndexAndProductivityTest(GrowthTestCase):
         self.assertEqual(get_cell(SHEET, "H51"), levels[-1])
 
 
+# Invented: an unbalanced panel of four kilns (plants) over 2016-2023, each observed for its own run
+# of years; ln Y = α_kiln + 0.6 ln L + 0.3 ln K + 0.025·(year − 2016) + noise, seeded.
+KILN_RUNS = {"north": (2016, 6), "east": (2018, 3), "south": (2016, 8), "west": (2019, 5)}
+
+
+def kiln_panel():
+    generator = random.Random(17)
+    rows = [["year", "kiln", "output", "labour", "capital"]]
+    for effect, (kiln, (first, years)) in zip([0.2, 0.9, 0.5, 1.3], KILN_RUNS.items()):
+        for year in range(first, first + years):
+            labour = math.exp(generator.uniform(2.0, 5.0) + 0.5 * effect)
+            capital = math.exp(generator.uniform(3.0, 6.0) - 0.5 * effect)
+            log_output = (effect + 0.6 * math.log(labour) + 0.3 * math.log(capital) + 0.025 * (year - 2016)
+                          + generator.gauss(0.0, 0.05))
+            rows.append([year, kiln, round(math.exp(log_output), 3), round(labour, 3), round(capital, 3)])
+    return rows
+
+
+class RescaledSharesAndPeriodsTest(GrowthTestCase):
+    """Issue items: shares within 0.01 of 1 rescaled; PRODTFP's periods and the row-weighted mean effect."""
+
+    @classmethod
+    def setUpClass(cls):
+        # Constant quantities (year 1's, eight times) and the plant's shares scaled to sum to 0.995
+        # and to 1.008 in every year (within 0.01: accepted and rescaled).
+        constant = [LABELS] + [columns_of(INPUTS)[0]] * N
+        set_values(SHEET, "Z301", constant)
+        for top_left, factor in [("AC301", 0.995), ("AF301", 1.008)]:
+            set_values(SHEET, top_left, [LABELS] + [[factor * s for s in row] for row in columns_of(SHARES)])
+        # Output and every input × 1.1 a year.
+        growing = [["output"] + LABELS] + [[1000 * 1.1 ** t] + [q * 1.1 ** t for q in columns_of(INPUTS)[0]]
+                                           for t in range(N)]
+        set_values(SHEET, "Z311", growing)
+        for m, method in enumerate(IndexAndProductivityTest.METHODS):
+            for shares, first_column in [("AC301:AE309", 0), ("AF301:AH309", 4)]:
+                column = ["AJ", "AK", "AL", "AM", "AN", "AO", "AP", "AQ"][first_column + m]
+                set_array_formula(SHEET, "%s302:%s309" % (column, column),
+                                  '=PRODINDEX(Z301:AB309;%s;"%s";100)' % (shares, method))
+                set_array_formula(SHEET, "%s312:%s319" % (column, column),
+                                  '=PRODINDEX(AA311:AC319;%s;"%s";100)' % (shares, method))
+        set_array_formula(SHEET, "AJ321:AP329", "=PRODGROWTH(Z311:Z319;AA311:AC319;AC301:AE309)")
+        set_array_formula(SHEET, "AJ331:AP339", "=PRODGROWTH(Z311:Z319;AA311:AC319;AF301:AH309)")
+        # Shares typed to sum to exactly 0.99 (year 2) and 1.01 (year 3): accepted.
+        edge = [LABELS] + columns_of(SHARES)
+        edge[2] = [0.5, 0.35, 0.14]
+        edge[3] = [0.5, 0.36, 0.15]
+        set_values(SHEET, "Z341", edge)
+        set_array_formula(SHEET, "AJ342:AJ349", '=PRODINDEX(C1:E9;Z341:AB349;"laspeyres")')
+
+        # The tile plant with a trend in its year column (A1:A9): 3 inputs, 18 + 2 + 1 = 21 rows.
+        set_array_formula(SHEET, "AF261:AL281", "=PRODFIT(B1:B9;C1:E9;;;;;;;;A1:A9)")
+        set_array_formula(SHEET, "AN262:AN269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9;A1:A9)")
+        set_array_formula(SHEET, "AO262:AO269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9)")
+        # The kilns: fixed effects and a trend (17 + 2 + 1 + 2 + 1 = 23 rows), fixed effects alone (21).
+        cls.kilns = kiln_panel()
+        last = len(cls.kilns) + 200
+        set_values(SHEET, "Z201", cls.kilns)
+        set_array_formula(SHEET, "AF201:AL223",
+                          '=PRODFIT(AB201:AB%d;AC201:AD%d;;;;;;AA201:AA%d;"fixed";Z201:Z%d)' % ((last,) * 4))
+        set_array_formula(SHEET, "AF231:AL251", '=PRODFIT(AB201:AB%d;AC201:AD%d;;;;;;AA201:AA%d;"fixed")' % ((last,) * 3))
+        set_array_formula(SHEET, "AN202:AN%d" % last,
+                          "=PRODTFP($AF$201:$AL$223;AB202:AB%d;AC202:AD%d;Z202:Z%d)" % ((last,) * 3))
+        set_array_formula(SHEET, "AO202:AO%d" % last, "=PRODTFP($AF$231:$AL$251;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
+        set_array_formula(SHEET, "AP202:AP%d" % last, "=PRODTFP($AF$201:$AL$223;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
+        recalc(DOC)
+
+    def column(self, where):
+        values = [row[0] for row in get_range(SHEET, where)]
+        for value in values:
+            self.assert_number(value, where)
+        return values
+
+    def test_identity_and_proportionality_with_shares_off_by_less_than_the_tolerance(self):
+        # Diewert (1992): constant quantities give the base in every year; quantities × 1.1 a year give
+        # the index × 1.1 a year, for every method (1e-12 relative, as for the formula checks).
+        for column in ["AJ", "AK", "AL", "AM", "AN", "AO", "AP", "AQ"]:
+            with self.subTest(column=column):
+                for value in self.column("%s302:%s309" % (column, column)):
+                    self.assertLessEqual(abs(value - 100), FORMULA_TOLERANCE * 100)
+                growing = self.column("%s312:%s319" % (column, column))
+                for before, after in zip(growing, growing[1:]):
+                    self.assertLessEqual(abs(after / before - 1.1), FORMULA_TOLERANCE * 1.1)
+
+    def test_no_scale_effect_with_shares_off_by_less_than_the_tolerance(self):
+        # Rescaled shares sum to 1: scale effect and TFP growth 0 (1e-12 absolute), and the inputs'
+        # contributions add up to ln 1.1 a year (identity).
+        for where in ["AJ321:AP329", "AJ331:AP339"]:
+            table = get_range(SHEET, where)
+            self.assertEqual(table[0][0], "period")
+            for row in table[1:]:
+                years = 7 if row[0] == "total" else 1
+                self.assertLessEqual(abs(row[5]), years * FORMULA_TOLERANCE, "%s %s scale effect" % (where, row[0]))
+                self.assertLessEqual(abs(row[6]), years * FORMULA_TOLERANCE, "%s %s TFP growth" % (where, row[0]))
+                self.assertLessEqual(abs(sum(row[2:5]) - years * math.log(1.1)), years * FORMULA_TOLERANCE)
+
+    def test_shares_summing_to_exactly_099_and_101_are_accepted(self):
+        # Formula: the Laspeyres links with the typed shares divided by their sums (0.99, 1.01).
+        edge = columns_of(SHARES)
+        edge[1] = [0.5, 0.35, 0.14]
+        edge[2] = [0.5, 0.36, 0.15]
+        rescaled = [[s / sum(row) for s in row] for row in edge]
+        expected = index_by_formula(columns_of(INPUTS), rescaled, "laspeyres")
+        for value, figure in zip(self.column("AJ342:AJ349"), expected):
+            self.assertLessEqual(abs(value - figure), FORMULA_TOLERANCE * figure)
+
+    def test_periods_give_geometric_mean_one_for_a_trend_fit(self):
+        labels = [row[0] for row in get_range(SHEET, "AF261:AF281")]
+        self.assertEqual(labels[-3:], ["technical change per period", "ln A for predictions", "latest period"])
+        self.assertEqual(get_cell(SHEET, "AG281"), 8.0)
+        # least squares: 1 to 1e-12 (ln values of order 7).
+        self.assertLessEqual(abs(sum(math.log(x) for x in self.column("AN262:AN269")) / N), 1e-12)
+        # Without periods every year is judged by year 8's technology: λ·(mean year − 8) (formula).
+        change = get_cell(SHEET, "AG279")
+        mean_log = sum(math.log(x) for x in self.column("AO262:AO269")) / N
+        self.assertLessEqual(abs(mean_log - change * (4.5 - 8)), 1e-12)
+
+    def test_periods_give_geometric_mean_one_for_fixed_effects_on_an_unbalanced_panel(self):
+        n = len(self.kilns) - 1
+        labels = [row[0] for row in get_range(SHEET, "AF201:AF223")]
+        self.assertEqual(labels[-4:], ["within R2", "technical change per period", "ln A for predictions",
+                                       "latest period"])
+        self.assertEqual(get_cell(SHEET, "AG223"), 2023.0)
+        # least squares within each kiln, the effects' mean over rows: 1 to 1e-12, with a trend and
+        # periods, and with fixed effects alone.
+        for where in ["AN202:AN%d" % (201 + n), "AO202:AO%d" % (201 + n)]:
+            with self.subTest(where=where):
+                self.assertLessEqual(abs(sum(math.log(x) for x in self.column(where)) / n), 1e-12)
+        # With the trend but without periods it is not 1.
+        self.assertGreater(abs(sum(math.log(x) for x in self.column("AP202:AP%d" % (201 + n))) / n), 1e-3)
+        # ln A for predictions (fixed effects alone) is not the plain mean of the effects (ln A).
+        self.assertGreater(abs(get_cell(SHEET, "AG251") - get_cell(SHEET, "AG232")), 1e-4)
+
+
 def error(text):
     return "Error: " + text  # the add-in's prefix (addin/production_functions.cxx)
 
@@ -256,8 +395,8 @@ ERROR_CASES = [
      error("quantities: period 5 (row 6), column 2 is 0; quantities must be positive (growth is a difference of "
            "logs)")),
     ("shares that do not sum to 1", "PRODINDEX(C1:E9;J71:L79)", "J141:J148",
-     error("shares: period 4 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 (within "
-           "0.01)")),
+     error("shares: period 4 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 within "
+           "0.01 (0.99 to 1.01, both included)")),
     ('"fixed" with cost shares', 'PRODGROWTH(B1:B9;C1:E9;F1:H9;"fixed")', "J151:P159",
      error('method: "fixed" uses a model\'s constant elasticities; with cost shares as weights use "tornqvist"')),
     ("an unknown index method", 'PRODINDEX(C1:E9;F1:H9;"chain")', "J161:J168",
@@ -301,7 +440,7 @@ class GrowthErrorTest(GrowthTestCase):
 class GrowthFunctionWizardTest(unittest.TestCase):
     """The three functions are listed with their argument names; the optional ones are marked so."""
 
-    EXPECTED = {"PRODTFP": (["model", "output", "inputs"], 3),
+    EXPECTED = {"PRODTFP": (["model", "output", "inputs", "periods"], 3),
                 "PRODGROWTH": (["output", "inputs", "weights", "method"], 3),
                 "PRODINDEX": (["quantities", "shares", "method", "base"], 2)}
 

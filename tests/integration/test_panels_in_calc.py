@@ -144,8 +144,9 @@ class StatePanelTest(PanelTestCase):
         set_array_formula(sheet, "J31:P54", "=PRODFIT(%s;\"fixed\")" % STATE_ARGS.format(errors='"cluster"'))
         # Pooled, errors clustered by state: 20 + groups and effects 2 = 22 rows.
         set_array_formula(sheet, "J61:P82", "=PRODFIT(%s;\"none\")" % STATE_ARGS.format(errors='"cluster"'))
-        # Pooled with a trend in year, no groups: 20 + trend 1 + ln A for predictions 1 = 22 rows.
-        set_array_formula(sheet, "J91:P112", "=PRODFIT(C1:C{0};D1:F{0};;;;;G1:G{0};;;{1})".format(STATE_LAST, years))
+        # Pooled with a trend in year, no groups: 20 + trend 2 (technical change per period, latest
+        # period) + ln A for predictions 1 = 23 rows.
+        set_array_formula(sheet, "J91:P113", "=PRODFIT(C1:C{0};D1:F{0};;;;;G1:G{0};;;{1})".format(STATE_LAST, years))
         # Two-way (state and year): 20 + 2 + within R2 1 + periods 1 + ln A for predictions 1 = 25 rows.
         set_array_formula(sheet, "J121:P145", "=PRODFIT(%s;\"two-way\";%s)" % (STATE_ARGS.format(errors=""), years))
         set_formula(sheet, "R1", '=PRODSTAT(C1:C{0};D1:F{0};"effect of group ALABAMA";;;;;;G1:G{0};A1:A{0};"fixed")'
@@ -161,7 +162,7 @@ class StatePanelTest(PanelTestCase):
         cls.fixed = get_range(sheet, "J1:P24")
         cls.fixed_cluster = get_range(sheet, "J31:P54")
         cls.pooled_cluster = get_range(sheet, "J61:P82")
-        cls.trend = get_range(sheet, "J91:P112")
+        cls.trend = get_range(sheet, "J91:P113")
         cls.two_way = get_range(sheet, "J121:P145")
 
     def logs(self, name):
@@ -247,6 +248,8 @@ class StatePanelTest(PanelTestCase):
                     + 16 * change[1])
         self.assert_relative(row_of(self.trend, "ln A for predictions")[1], expected, FORMULA_RELATIVE,
                              "ln A for predictions")
+        # The period ln A for predictions refers to, the last row (Munnell 1990: 1970-1986).
+        self.assertEqual(self.trend[-1][:2], ["latest period", 1986.0])
 
     def test_two_way_against_statsmodels(self):
         self.assertEqual(row_of(self.two_way, "periods")[1], 17.0)  # 1970-1986

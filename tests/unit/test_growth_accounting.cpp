@@ -18,6 +18,7 @@
 #include "isoquant/growth_cell_functions.hpp"
 #include "isoquant/growth_table.hpp"
 #include "cell_tables.hpp"
+#include "growth_checks.hpp"
 #include "growth_series.hpp"
 #include "reference_data.hpp"
 
@@ -27,65 +28,15 @@
 #include <limits>
 
 using isoquant::CellTable;
+using isoquant::testing::checkRowsAddUp;
+using isoquant::testing::epsilon;
+using isoquant::testing::generate;
+using isoquant::testing::Generated;
+using isoquant::testing::labelledOutput;
+using isoquant::testing::labels;
+using isoquant::testing::number;
 using isoquant::testing::numberRange;
-
-namespace {
-
-constexpr double epsilon = std::numeric_limits<double>::epsilon();
-
-// Recovery tolerance: ln Y and ln xᵢ are below 20 in magnitude here, each log and difference
-// carries a few units in the last place of 20 (about 4e-15), and a period's residual combines
-// k + 2 ≤ 6 such terms with weights below 1: well under 1e-13. 1e-12 is the margin; a wrong
-// weight moves TFP growth by about 1e-3 (input growth of SD 0.08 times weight errors of 0.01+).
-constexpr double recoveryTolerance = 1e-12;
-
-double number(const CellTable& table, std::size_t row, std::size_t column)
-{
-    return table.number(row, column);
-}
-
-// Every row of a PRODGROWTH table adds up (identity): output growth against the sum of the
-// columns after it. The residual r = g − Σc − s is k + 1 roundings away from exact and the
-// re-addition another k + 2, each bounded by u = ε/2 times the sum of magnitudes (recursive
-// summation; N. J. Higham, Accuracy and Stability of Numerical Algorithms, 2nd ed., §4.2 (from
-// memory)), so |g − (Σc + s + r)| ≤ (2k + 3)·u·Σ|terms| < (k + 2)·ε·Σ|terms|.
-void checkRowsAddUp(const CellTable& table)
-{
-    const std::size_t columns = table.columns();
-    const std::size_t k = columns - 4;
-    for (std::size_t row = 1; row < table.rows(); ++row) {
-        const double outputGrowth = number(table, row, 1);
-        double sum = 0, magnitudes = std::fabs(outputGrowth);
-        for (std::size_t column = 2; column < columns; ++column) {
-            sum += number(table, row, column);
-            magnitudes += std::fabs(number(table, row, column));
-        }
-        BOOST_TEST_INFO("row " << row + 1);
-        BOOST_TEST(std::fabs(outputGrowth - sum) <= static_cast<double>(k + 2) * epsilon * magnitudes);
-    }
-}
-
-struct Generated {
-    Eigen::MatrixXd quantities;
-    Eigen::VectorXd logProductivity;
-    Eigen::VectorXd output;
-};
-
-Generated generate(unsigned seed, const isoquant::Technology& technology, Eigen::Index periods)
-{
-    std::mt19937 engine(seed);
-    Generated made;
-    made.quantities = isoquant::testing::wanderingQuantities(engine, periods, technology.inputCount());
-    made.logProductivity = isoquant::testing::productivityPath(engine, periods);
-    made.output = isoquant::testing::outputOf(technology, made.logProductivity, made.quantities);
-    return made;
-}
-
-const std::vector<std::string> labels{"labour", "capital", "energy"};
-
-CellTable labelledOutput(const Eigen::VectorXd& output) { return numberRange(output, {"output"}); }
-
-} // namespace
+using isoquant::testing::recoveryTolerance;
 
 BOOST_AUTO_TEST_SUITE(growth_accounting)
 
@@ -158,6 +109,36 @@ BOOST_AUTO_TEST_CASE(cost_shares_recover_the_tfp_path_under_constant_returns)
         BOOST_TEST(std::fabs(number(table, row, 5)) <= recoveryTolerance); // ν = 1: no scale effect
         BOOST_TEST(std::fabs(number(table, row, 6) - (data.logProductivity(t) - data.logProductivity(t - 1))) <=
                    recoveryTolerance);
+    }
+}
+
+// Cost shares that sum to 0.995 or 1.008 in every period (accepted: within 0.01) are rescaled to
+// sum to 1, so when output and every input grow by 10% a period there is no scale effect and no
+// TFP growth, and the inputs' contributions add up to ln 1.1 (identity: shares summing to 1 carry
+// equal input growth through unchanged). Used as given, 0.995 would leave a scale effect of
+// −0.005·ln 1.1 ≈ −4.8e-4 per period, far outside the 1e-12 of recoveryTolerance.
+BOOST_AUTO_TEST_CASE(shares_off_by_less_than_the_tolerance_leave_no_scale_effect)
+{
+    std::mt19937 engine(12);
+    const Eigen::MatrixXd shares = isoquant::testing::driftingShares(engine, 10, 3);
+    Eigen::MatrixXd quantities(10, 3);
+    Eigen::VectorXd output(10);
+    for (Eigen::Index t = 0; t < 10; ++t) {
+        quantities.row(t) = std::pow(1.1, t) * Eigen::RowVector3d(40.0, 75.0, 12.0);
+        output(t) = std::pow(1.1, t) * 90.0;
+    }
+    for (const double sum : {0.995, 1.008}) {
+        const CellTable table = isoquant::growthAccountTable(numberRange(output), numberRange(quantities),
+                                                             numberRange(sum * shares), {});
+        checkRowsAddUp(table);
+        for (std::size_t row = 1; row < table.rows(); ++row) {
+            const double periods = row + 1 < table.rows() ? 1.0 : 9.0; // the total row spans 9 periods
+            BOOST_TEST_INFO("shares summing to " << sum << ", row " << row + 1);
+            BOOST_TEST(std::fabs(number(table, row, 5)) <= periods * recoveryTolerance); // scale effect
+            BOOST_TEST(std::fabs(number(table, row, 6)) <= periods * recoveryTolerance); // TFP growth
+            BOOST_TEST(std::fabs(number(table, row, 2) + number(table, row, 3) + number(table, row, 4) -
+                                 periods * std::log(1.1)) <= periods * recoveryTolerance);
+        }
     }
 }
 

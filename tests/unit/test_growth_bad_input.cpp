@@ -96,12 +96,29 @@ BOOST_AUTO_TEST_CASE(missing_and_non_positive_values_name_the_period)
 
 BOOST_AUTO_TEST_CASE(shares_that_do_not_sum_to_one)
 {
+    const std::string rule = "; the cost shares of a period must sum to 1 within 0.01 (0.99 to 1.01, both included)";
     BOOST_TEST(growthMessage(output(), inputs(), with(shares(), 3, 1, 0.37)) ==
-               "weights: period 3 (row 4): the shares sum to 0.98; the cost shares of a period must sum to 1 (within 0.01)");
+               "weights: period 3 (row 4): the shares sum to 0.98" + rule);
     BOOST_TEST(indexMessage(inputs(), with(shares(), 1, 0, 60.0)) ==
-               "shares: period 1 (row 2): the shares sum to 60.4; the cost shares of a period must sum to 1 (within 0.01)");
-    // Within 0.01 they are used as given.
+               "shares: period 1 (row 2): the shares sum to 60.4" + rule);
+    // Within 0.01 they are accepted (and rescaled: test_index_numbers.cpp checks the values).
     BOOST_TEST(isoquant::quantityIndexColumn(inputs(), with(shares(), 3, 1, 0.385), {}, {}).rows() == 4u);
+}
+
+// The bounds are included: shares typed to sum to 0.99 or 1.01 pass although their binary sum may
+// land a hair outside (0.6 + 0.41 need not be the double nearest 1.01), as do sums within 1e-8 of
+// a bound; a hundredth of a percent beyond, they are refused.
+BOOST_AUTO_TEST_CASE(the_share_tolerance_includes_its_bounds)
+{
+    for (const double capital : {0.39, 0.41, 0.3899999999, 0.4100000001}) {
+        BOOST_TEST(isoquant::quantityIndexColumn(inputs(), with(shares(), 1, 1, capital), {}, {}).rows() == 4u);
+        BOOST_TEST(isoquant::growthAccountTable(output(), inputs(), with(shares(), 1, 1, capital), {}).rows() == 5u);
+    }
+    const std::string refused = "shares: period 1 (row 2): the shares sum to ";
+    BOOST_TEST(indexMessage(inputs(), with(shares(), 1, 1, 0.3899)).rfind(refused, 0) == 0u);
+    BOOST_TEST(indexMessage(inputs(), with(shares(), 1, 1, 0.4101)).rfind(refused, 0) == 0u);
+    BOOST_TEST(growthMessage(output(), inputs(), with(shares(), 1, 1, 0.4101)).rfind("weights: period 1 (row 2)", 0) ==
+               0u);
 }
 
 BOOST_AUTO_TEST_CASE(ranges_that_do_not_line_up)

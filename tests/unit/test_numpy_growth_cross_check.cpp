@@ -3,8 +3,8 @@
 // - the rice farm panel (tests/data/rice_farms_panel.csv; Feng and Horrace 2012, as distributed in
 //   plm 2.6): for each of the 171 farms, six seasons of seed, urea and labour with their prices and
 //   gross output; the input quantity index by all four methods (numpy forms Laspeyres, Paasche and
-//   Fisher from prices and quantities, the core from cost shares) and the growth account with cost
-//   shares;
+//   Fisher from prices and quantities, the core from cost shares, also from shares summing to 0.99
+//   and 1.01) and the growth account with cost shares;
 // - Cobb & Douglas (1928) (tests/data/cobb_douglas_1928.csv): the growth account and TFP levels
 //   under their published technology P = 1.01·L^0.75·C^0.25.
 // All these figures are recomputed (numpy and the core), none is published.
@@ -140,13 +140,20 @@ void compareRiceFarms(Comparison& comparison)
         const std::string farm = farmName(ids[first]);
         const std::vector<std::string> labels{"seed", "urea", "labour"};
         const CellTable quantityRange = numberRange(farmQuantities, labels);
-        const CellTable shareRange = numberRange(farmShares, labels);
-        comparison.growthTable("rice_farms", farm,
-                               isoquant::growthAccountTable(numberRange(farmOutput, {"output"}), quantityRange,
-                                                            shareRange, {}));
-        for (const char* method : {"tornqvist", "laspeyres", "paasche", "fisher"})
-            comparison.column("rice_farms", farm, std::string("index_") + method,
-                              isoquant::quantityIndexColumn(quantityRange, shareRange, std::string(method), {}));
+        // The shares as computed, and the same shares off by up to 0.01 (× 0.99 in odd seasons,
+        // × 1.01 in even ones, as rounded books might give them): PRODINDEX and PRODGROWTH rescale
+        // each season's shares to sum to 1, so both must give numpy's figures.
+        Eigen::MatrixXd offShares = farmShares;
+        for (Eigen::Index t = 0; t < seasons; ++t) offShares.row(t) *= t % 2 == 0 ? 0.99 : 1.01;
+        for (const Eigen::MatrixXd& shares : {farmShares, offShares}) {
+            const CellTable shareRange = numberRange(shares, labels);
+            comparison.growthTable("rice_farms", farm,
+                                   isoquant::growthAccountTable(numberRange(farmOutput, {"output"}), quantityRange,
+                                                                shareRange, {}));
+            for (const char* method : {"tornqvist", "laspeyres", "paasche", "fisher"})
+                comparison.column("rice_farms", farm, std::string("index_") + method,
+                                  isoquant::quantityIndexColumn(quantityRange, shareRange, std::string(method), {}));
+        }
         first = end;
     }
 }
@@ -183,10 +190,11 @@ BOOST_AUTO_TEST_CASE(core_agrees_with_numpy, *boost::unit_test::precondition(fig
     compareRiceFarms(comparison);
     compareCobbDouglas1928(comparison);
     // 171 farms × (4 indexes × 6 seasons + 6 growth rows × 6 columns) = 10260 figures; Cobb & Douglas:
-    // 24 growth rows × 5 columns + 24 levels = 144. Every figure numpy wrote is compared, the
-    // Cobb & Douglas account twice (both methods).
+    // 24 growth rows × 5 columns + 24 levels = 144. Every figure numpy wrote is compared, the rice
+    // farms' twice (shares summing to 1, and off by up to 0.01), the Cobb & Douglas account twice
+    // (both methods).
     BOOST_TEST(comparison.available() == 10404u);
-    BOOST_TEST(comparison.compared() == 10404u + 120u);
+    BOOST_TEST(comparison.compared() == 10404u + 10260u + 120u);
     BOOST_TEST_MESSAGE("compared " << comparison.compared() << " figures with numpy");
 }
 

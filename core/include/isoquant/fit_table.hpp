@@ -20,9 +20,11 @@
 //   technical change per period | λ with its std. error … bounds    a trend (effects not two-way)
 //   ln A for predictions                                           effects or a trend: the ln A
 //                                                                  the evaluators use
+//   latest period                                                  a trend: t_last, the period
+//                                                                  "ln A for predictions" is at
 //   incomplete rows dropped                                        the switch is on (even at 0)
 // so the table has k + m + 15 rows, plus 1 with controls, plus 2 with groups, 1 under effects,
-// 1 more under two-way effects, 1 for a trend, 1 for "ln A for predictions" (effects or a trend)
+// 1 more under two-way effects, 2 for a trend, 1 for "ln A for predictions" (effects or a trend)
 // and 1 when incomplete rows are dropped. Two inputs, no options: 17 rows.
 // Statistic rows use the same columns: a value under "value", its standard error under
 // "std. error", a test statistic under "t", its p-value under "p-value". A number that is not

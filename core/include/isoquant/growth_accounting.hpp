@@ -50,10 +50,12 @@ GrowthAccount accountForGrowth(const Eigen::VectorXd& output, const Eigen::Matri
                                const Eigen::MatrixXd& intervalWeights);
 
 // Total factor productivity of each row: observed output over the technology's prediction,
-// Y / f(x) = exp(ln Y − ln f(x)). 1 means exactly as predicted. On the sample a least-squares
-// fit with a constant was fitted to, the mean of ln(Y/f(x)) is the mean residual, 0, so the
-// geometric mean is 1.
+// Y / f(x) = exp(ln Y − ln f(x) − shiftᵢ), where `logScaleShifts` (empty: all 0) moves each row's
+// ln A to its own period: shiftᵢ = λ·(tᵢ − t_last) for a trend. 1 means exactly as predicted. On
+// the sample a least-squares fit with a constant (or group effects) was fitted to, with each row
+// at its own period's ln A, the mean of ln(Y/f(x)) is the mean residual, 0, so the geometric mean
+// is 1.
 Eigen::VectorXd productivityLevels(const Technology& technology, const Eigen::VectorXd& output,
-                                   const Eigen::MatrixXd& inputs);
+                                   const Eigen::MatrixXd& inputs, const Eigen::VectorXd& logScaleShifts = {});
 
 } // namespace isoquant

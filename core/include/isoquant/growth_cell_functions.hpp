@@ -9,19 +9,25 @@ namespace isoquant {
 
 // PRODTFP: total factor productivity Y / f(x) of each row (growth_accounting.hpp), a column.
 // `model` as for the evaluators (a PRODFIT table or a typed model); `output` one column;
-// `inputs` one column per model input, as many rows as output.
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs);
+// `inputs` one column per model input, as many rows as output. `periods` (empty when omitted):
+// the period of each row, for a model with a trend (rows "technical change per period" and
+// "latest period"): row i is then compared with the technology of its period tᵢ, whose ln A is
+// the model's ln A + λ·(tᵢ − t_last).
+CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+                             const CellTable& periods = {});
 
 // PRODGROWTH: the growth account of every period (layout in growth_table.hpp).
 // `weights` is read as a model when every cell of its first column below the first row holds a
 // label or is empty (a PRODFIT table or a typed model: its elasticities at each period's inputs);
-// otherwise as cost shares, one column per input and one row per period (an optional header row).
+// otherwise as cost shares, one column per input and one row per period (an optional header row),
+// each period's summing to 1 within 0.01 and rescaled to sum to exactly 1.
 // `method`: "tornqvist" (default; each interval weighs by the mean of its two periods' weights)
 // or "fixed" (the constant elasticities of a Cobb-Douglas model).
 CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, const CellTable& weights,
                              const Cell& method);
 
-// PRODINDEX: the chained quantity index of every period (index_numbers.hpp), a column.
+// PRODINDEX: the chained quantity index of every period (index_numbers.hpp), a column. Each
+// period's shares must sum to 1 within 0.01 and are rescaled to sum to exactly 1.
 // `method`: "tornqvist" (default), "laspeyres", "paasche" or "fisher"; `base`: the first period's
 // value, a positive number (default 1).
 CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shares, const Cell& method,

@@ -6,9 +6,9 @@
 //   Laspeyres:  L_t = Σᵢ sᵢ,t−1·rᵢ        (= Σ p_{t−1}q_t / Σ p_{t−1}q_{t−1} when s are value shares)
 //   Paasche:    L_t = 1 / Σᵢ sᵢ,t / rᵢ     (= Σ p_t q_t / Σ p_t q_{t−1})
 //   Fisher:     L_t = √(Laspeyres·Paasche)
-// and the chained index is I_1 = base, I_t = I_{t−1}·L_t. Shares enter as given: they are not
-// rescaled to sum to 1. The chain is carried in logs (ln I_t = ln base + Σ ln L), so an index
-// overflows only when its own value does.
+// and the chained index is I_1 = base, I_t = I_{t−1}·L_t. Shares enter as given here; PRODINDEX
+// rescales each period's shares to sum to 1 first (period_range.hpp). The chain is carried in
+// logs (ln I_t = ln base + Σ ln L), so an index overflows only when its own value does.
 #pragma once
 
 #include <Eigen/Dense>

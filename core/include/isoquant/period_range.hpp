@@ -23,14 +23,15 @@ NumericColumns readPeriodColumns(const CellTable& range, const std::string& argu
 // "period 4 (row 5)" for the data row at 0-based `index` of `columns`.
 std::string periodPlace(const NumericColumns& columns, Eigen::Index index);
 
-// How far a period's shares may stray from summing to 1: |Σᵢ sᵢ − 1| ≤ 0.01. Shares are used as
-// given (never rescaled); the check only catches columns that are not shares at all, or shares
-// of a different set of inputs.
+// How far a period's shares may stray from summing to 1: 0.99 ≤ Σᵢ sᵢ ≤ 1.01, both ends included.
+// The check only catches columns that are not shares at all, or shares of a different set of
+// inputs; shares that pass are rescaled to sum to exactly 1, so that rounded shares (0.33, 0.33,
+// 0.33) keep the indexes' identity and proportionality and leave no spurious scale effect.
 inline constexpr double shareSumTolerance = 0.01;
 
-// Throws InputError naming `argument` and the first period whose shares miss 1 by more than
-// shareSumTolerance.
-void requireSharesSumToOne(const NumericColumns& shares, const std::string& argument);
+// shares.values with each period's row divided by its sum. Throws InputError naming `argument`
+// and the first period whose shares miss 1 by more than shareSumTolerance.
+Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::string& argument);
 
 // Throws InputError when `other` has a different number of periods than `reference`.
 void requireSamePeriods(const NumericColumns& reference, const std::string& referenceArgument,

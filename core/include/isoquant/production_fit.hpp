@@ -71,9 +71,11 @@ struct PanelSummary {
     std::vector<double> periods;
     Eigen::VectorXd periodEffects;
     std::optional<ParameterEstimate> technicalChange; // λ per period, with a trend
+    double latestPeriod = 0;                          // t_last, with a trend
     // ln A the evaluators use: ln A at the controls' means, plus λ·(t_last − t_first) with a
-    // trend or the last period's effect under two-way effects (ln A is the mean group effect
-    // under effects).
+    // trend or the last period's effect under two-way effects. Under effects ln A is here the
+    // mean group effect weighted by the groups' rows, Σ_g n_g·α_g / n, so that the log TFP of the
+    // fitted rows averages 0 on an unbalanced panel too.
     double logScaleForPredictions = 0;
     bool shiftsLogScale = false;        // effects or a trend: the row above is shown
     Eigen::Index incompleteRowsDropped = 0;

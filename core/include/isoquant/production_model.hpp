@@ -6,7 +6,7 @@
 // parameters; rows after it must be statistic rows of a PRODFIT table. A row labelled
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
 // "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
-// is one (fixed effects or a trend: the mean group effect, at the latest period).
+// is one (fixed effects or a trend: the mean group effect over rows, at the latest period).
 //
 // The form row decides what the parameter rows mean:
 // - cobb-douglas: one exponent row per input, labelled by the input.
@@ -48,6 +48,13 @@ struct ProductionModel {
     std::optional<ScaleTest> scaleTest;
     // Duan's smearing factor from a "smearing factor" row; absent when the model has none.
     std::optional<double> smearingFactor;
+    // A trend: λ from the "technical change per period" row and t_last from "latest period", so
+    // that the technology of period t has ln A + λ·(t − t_last) (PRODTFP's periods). Absent
+    // without those rows.
+    std::optional<double> technicalChange;
+    std::optional<double> latestPeriod;
+    // The "effects" row says "two-way": period effects, which the table does not hold.
+    bool hasPeriodEffects = false;
 };
 
 // Throws InputError naming "model" and the row of the range.

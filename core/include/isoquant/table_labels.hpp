@@ -47,14 +47,15 @@ inline constexpr const char* withinRSquaredLabel = "within R2";
 inline constexpr const char* periodsLabel = "periods";
 inline constexpr const char* technicalChangeLabel = "technical change per period";
 inline constexpr const char* predictionScaleLabel = "ln A for predictions";
+inline constexpr const char* latestPeriodLabel = "latest period";
 inline constexpr const char* droppedRowsLabel = "incomplete rows dropped";
 // PRODSTAT answers these, followed by a group's or a period's label, from the fit itself.
 inline constexpr const char* groupEffectPrefix = "effect of group ";
 inline constexpr const char* periodEffectPrefix = "effect of period ";
 
-inline constexpr std::array<const char*, 8> optionStatisticLabels{
-    smearingLabel,        groupsLabel,           effectsLabel,   withinRSquaredLabel,
-    periodsLabel,         technicalChangeLabel,  predictionScaleLabel, droppedRowsLabel};
+inline constexpr std::array<const char*, 9> optionStatisticLabels{
+    smearingLabel,        groupsLabel,           effectsLabel,         withinRSquaredLabel, periodsLabel,
+    technicalChangeLabel, predictionScaleLabel,  latestPeriodLabel,    droppedRowsLabel};
 
 // Rows of the ces and translog tables (form_tables.hpp).
 inline constexpr const char* weightLabel = "delta";
