@@ -83,6 +83,26 @@ void refuseTotalsRow(const NumericColumns& output, const Eigen::MatrixXd& inputs
                      " looks like a total of the rows above; leave it out of the ranges");
 }
 
+// HC3 is undefined at a row of leverage 1: the message names it in the sheet's counting (the
+// regression's row `fitted`, after any dropped rows, below output's header) and, when its group
+// has no other row, says so.
+std::string unitLeverageMessage(Eigen::Index fitted, const std::vector<bool>& dropped, std::size_t firstDataRow,
+                                const PanelColumns& panel)
+{
+    std::size_t dataRow = 0;
+    for (Eigen::Index kept = 0;; ++dataRow) {
+        const bool used = dataRow >= dropped.size() || !dropped[dataRow];
+        if (used && kept++ == fitted) break;
+    }
+    const std::string row = "errors: row " + std::to_string(dataRow + firstDataRow) + " has leverage 1 ";
+    if (panel.hasGroups()) {
+        const Eigen::Index group = panel.groupOfRow[static_cast<std::size_t>(fitted)];
+        if (std::count(panel.groupOfRow.begin(), panel.groupOfRow.end(), group) == 1)
+            return row + "(its group has one row); hc3 is undefined here — use hc1 or cluster";
+    }
+    return row + "(the fit passes through it exactly); hc3 is undefined here — use hc1";
+}
+
 } // namespace
 
 ProductionFit fitFromArguments(const FitArguments& arguments)
@@ -135,7 +155,12 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
         data.panel.periods = trend.values.col(0);
     }
 
-    ProductionFit fit = fitProduction(data, options);
+    ProductionFit fit;
+    try {
+        fit = fitProduction(data, options);
+    } catch (const UnitLeverage& leverage) {
+        throw InputError(unitLeverageMessage(leverage.row(), incomplete, output.firstDataRow(), data.panel));
+    }
     fit.panel.dropsIncompleteRows = dropIncomplete;
     fit.panel.incompleteRowsDropped =
         static_cast<Eigen::Index>(std::count(incomplete.begin(), incomplete.end(), true));

@@ -91,8 +91,13 @@ CellTable compareForms(const FitArguments& arguments)
         const bool exact = translog->status == FitStatus::perfectFit;
         const double f = exact ? notANumber : test.fStatistic;
         const double p = exact ? notANumber : test.pValue;
+        // Under cluster errors with q > G − 1 the test is undefined: the verdict cell says why.
+        const std::string conclusion =
+            test.exceedsClusters ? tooFewGroupsNote("the test", test.numeratorDegreesOfFreedom,
+                                                    translog->regression.clusterCount)
+                                 : verdict(p, level);
         writer.put("translog vs cobb-douglas", {f, test.numeratorDegreesOfFreedom, test.denominatorDegreesOfFreedom,
-                                                p, std::string("F"), verdict(p, level)});
+                                                p, std::string("F"), conclusion});
     } else {
         writer.textRow("translog vs cobb-douglas", {"n/a: no translog fit"});
     }

@@ -16,6 +16,11 @@ namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
+// A leverage this close to 1 counts as 1: hᵢᵢ = ‖Aᵢ‖² carries rounding of a few p·ε (1e-14 at
+// most here), and a true 1 − 1e-10 would already scale its row's HC3 weight by 1e20 (common
+// practice, no source).
+constexpr double unitLeverage = 1.0 - 1e-10;
+
 // Columns with at least this share of the largest weight in the null direction count as part of
 // the collinear set (weights are in unit-norm column scale, so they are comparable).
 constexpr double nullDirectionShare = 1e-3;
@@ -61,7 +66,8 @@ Eigen::Index countClusters(const std::vector<Eigen::Index>& clusters, Eigen::Ind
 // orthonormal, so that hᵢᵢ = ‖Aᵢ‖² are the leverages and the covariance is H·meat·Hᵀ:
 //   HC1: Aᵀ·diag(eᵢ²)·A · n/(n−p);   HC3: Aᵀ·diag(eᵢ²/(1−hᵢᵢ)²)·A;
 //   CR1: Σ_g s_g s_gᵀ with s_g = A_gᵀ e_g the score of cluster g, times G/(G−1)·(n−1)/(n−p),
-// p counting the absorbed parameters too. Accumulated a block of rows at a time.
+// p counting the absorbed parameters too, but not those nested in the clusters beyond one
+// (absorbedNestedInClusters). Accumulated a block of rows at a time.
 class MeatAccumulator {
 public:
     MeatAccumulator(const LeastSquaresOptions& options, const Eigen::MatrixXd& bread, Eigen::Index rows,
@@ -86,8 +92,11 @@ public:
         if (options_.covariance == CovarianceKind::hc3) {
             Eigen::VectorXd leverage = orthonormal.rowwise().squaredNorm();
             if (options_.absorbedLeverage.size() == rows_) leverage += options_.absorbedLeverage.segment(first, residuals.size());
-            // hᵢᵢ = 1 makes the HC3 weight infinite: the covariance is undefined, not huge.
-            weights = (leverage.array() < 1.0).select(weights.array() / (1.0 - leverage.array()).square(), notANumber);
+            // hᵢᵢ = 1 makes the HC3 weight 0/0: the covariance is undefined, not huge. The row is
+            // named rather than letting NaN reach every standard error.
+            for (Eigen::Index i = 0; i < leverage.size(); ++i)
+                if (leverage(i) >= unitLeverage) throw UnitLeverage(first + i);
+            weights = weights.array() / (1.0 - leverage.array()).square();
         }
         sum_.noalias() += orthonormal.transpose() * weights.asDiagonal() * orthonormal;
     }
@@ -98,7 +107,8 @@ public:
         if (options_.covariance == CovarianceKind::hc1) return sum_ * (n / residualDegreesOfFreedom_);
         if (options_.covariance == CovarianceKind::hc3) return sum_;
         const double g = static_cast<double>(clusterCount_);
-        return (g / (g - 1.0)) * ((n - 1.0) / residualDegreesOfFreedom_) * (sum_ * sum_.transpose());
+        const double clusterDf = residualDegreesOfFreedom_ + static_cast<double>(options_.absorbedNestedInClusters);
+        return (g / (g - 1.0)) * ((n - 1.0) / clusterDf) * (sum_ * sum_.transpose());
     }
 
 private:
@@ -109,6 +119,27 @@ private:
     double residualDegreesOfFreedom_;
     Eigen::MatrixXd sum_;
 };
+
+// The overall F: every coefficient but the constant (interceptColumn) is zero.
+void addOverallTest(LeastSquaresResult& result)
+{
+    const Eigen::Index p = result.parameters;
+    const auto& interceptColumn = result.interceptColumn;
+    const Eigen::Index tested = interceptColumn ? p - 1 : p;
+    result.overallRestrictions = tested;
+    if (tested == 0) {
+        result.fStatistic = notANumber;
+        result.fPValue = notANumber;
+        return;
+    }
+    Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(tested, p);
+    for (Eigen::Index j = 0, row = 0; j < p; ++j)
+        if (!interceptColumn || j != *interceptColumn) restrictions(row++, j) = 1.0;
+    const WaldTest overall = testLinearRestrictions(result, restrictions, Eigen::VectorXd::Zero(tested));
+    result.fStatistic = overall.fStatistic;
+    result.fPValue = overall.pValue;
+    result.overallTestExceedsClusters = overall.exceedsClusters;
+}
 
 // Well-conditioned designs (the usual logs of inputs) are factorised in double, blocked; the rest,
 // and every rank decision that the double factor cannot settle, in long double.
@@ -135,6 +166,11 @@ ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions&
 
 CollinearColumns::CollinearColumns(std::vector<Eigen::Index> columns)
     : std::runtime_error("design columns are collinear"), columns_(std::move(columns))
+{
+}
+
+UnitLeverage::UnitLeverage(Eigen::Index row)
+    : std::runtime_error("a row has leverage 1; HC3 errors are undefined"), row_(row)
 {
 }
 
@@ -222,18 +258,7 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     result.lowerBounds = result.coefficients - critical * result.standardErrors;
     result.upperBounds = result.coefficients + critical * result.standardErrors;
 
-    const Eigen::Index tested = interceptColumn ? p - 1 : p;
-    if (tested > 0) {
-        Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(tested, p);
-        for (Eigen::Index j = 0, row = 0; j < p; ++j)
-            if (!interceptColumn || j != *interceptColumn) restrictions(row++, j) = 1.0;
-        const WaldTest overall = testLinearRestrictions(result, restrictions, Eigen::VectorXd::Zero(tested));
-        result.fStatistic = overall.fStatistic;
-        result.fPValue = overall.pValue;
-    } else {
-        result.fStatistic = notANumber;
-        result.fPValue = notANumber;
-    }
+    addOverallTest(result);
 
     const double nd = static_cast<double>(n);
     const double pi = 3.14159265358979323846;
@@ -258,6 +283,12 @@ WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::Matr
     WaldTest test;
     test.numeratorDegreesOfFreedom = static_cast<double>(values.size());
     test.denominatorDegreesOfFreedom = fit.inferenceDegreesOfFreedom;
+    if (fit.covarianceKind == CovarianceKind::cluster && values.size() > fit.clusterCount - 1) {
+        test.exceedsClusters = true;
+        test.fStatistic = notANumber;
+        test.pValue = notANumber;
+        return test;
+    }
     const Eigen::LDLT<Eigen::MatrixXd> factor(middle);
     const bool singular = factor.info() != Eigen::Success || !middle.allFinite() ||
                           (factor.vectorD().array() <= 0).any();

@@ -85,6 +85,25 @@ LeastSquaresResult withConstantColumn(const LeastSquaresResult& run, double mean
     return extended;
 }
 
+// The overall F of a two-way run tests its first `slopes` columns (inputs and controls), the
+// period effects kept, as under the other kinds of effects.
+void testSlopesOnly(LeastSquaresResult& run, Eigen::Index slopes)
+{
+    run.overallRestrictions = slopes;
+    run.overallTestExceedsClusters = false;
+    if (slopes == 0) {
+        run.fStatistic = notANumber;
+        run.fPValue = notANumber;
+        return;
+    }
+    Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(slopes, run.parameters);
+    restrictions.leftCols(slopes).setIdentity();
+    const WaldTest test = testLinearRestrictions(run, restrictions, Eigen::VectorXd::Zero(slopes));
+    run.fStatistic = test.fStatistic;
+    run.fPValue = test.pValue;
+    run.overallTestExceedsClusters = test.exceedsClusters;
+}
+
 } // namespace
 
 std::string effectsWord(EffectsKind effects)
@@ -174,6 +193,8 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
                 if (runDesign.col(j).norm() <= withinVariationTolerance * slopes.col(j).norm())
                     throw CollinearPanelColumns({0, j + 1});
             options.absorbedParameters = groups;
+            // The clusters are the groups: the group effects beyond the mean are nested in them.
+            if (options.covariance == CovarianceKind::cluster) options.absorbedNestedInClusters = groups - 1;
             Eigen::VectorXd groupSizes = Eigen::VectorXd::Zero(groups);
             for (const Eigen::Index g : panel.groupOfRow) groupSizes(g) += 1.0;
             options.absorbedLeverage.resize(n);
@@ -184,6 +205,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
         }
     }
 
+    if (effects == EffectsKind::twoWay) testSlopesOnly(run, result.baseColumns - 1);
     if (result.effectsAbsorbConstant) {
         result.groupEffects = responseMeans - columnMeans * run.coefficients;
         result.withinRSquared = run.rSquared; // uncentred R² of the demeaned response

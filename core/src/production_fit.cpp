@@ -167,6 +167,7 @@ ReturnsToScale returnsToScale(const ProductionFit& fit, const LeastSquaresResult
     const WaldTest test = testLinearRestrictions(regression, restriction, Eigen::VectorXd::Ones(1));
     // An exact fit leaves nothing to test: the verdict then follows ν alone.
     const bool testable = regression.status != FitStatus::perfectFit;
+    returns.exceedsClusters = test.exceedsClusters;
     returns.fStatistic = testable ? test.fStatistic : notANumber;
     returns.pValue = testable ? test.pValue : notANumber;
     returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, confidenceLevel, false);

@@ -4,6 +4,7 @@
 #include "isoquant/cells.hpp"
 #include "isoquant/production_fit.hpp"
 #include "isoquant/table_labels.hpp"
+#include "isoquant/translog_fit.hpp"
 #include "isoquant/text.hpp"
 
 #include <cmath>
@@ -91,8 +92,8 @@ private:
     std::size_t row_ = 0;
 };
 
-// The note of the form row for a least-squares fit's status; empty when all is well.
-inline std::string statusNote(const ProductionFit& fit)
+// The note of the form row for a least-squares fit's status alone; empty when all is well.
+inline std::string fitStatusNote(const ProductionFit& fit)
 {
     switch (fit.status) {
     case FitStatus::ok: return "";
@@ -102,6 +103,46 @@ inline std::string statusNote(const ProductionFit& fit)
     case FitStatus::perfectFit: return "note: the fit is exact; standard errors and tests are undefined";
     }
     return "";
+}
+
+// Why a Wald test shows n/a under cluster errors: q restrictions, but G cluster scores that sum
+// to zero carry at most G − 1 (least_squares.hpp, WaldTest).
+inline std::string tooFewGroupsNote(const std::string& test, double restrictions, Eigen::Index groups)
+{
+    return "note: too few groups for " + test + ": its " + formatNumber(restrictions) +
+           " restrictions exceed the " + std::to_string(groups - 1) + " that cluster errors on " +
+           std::to_string(groups) + " groups can carry, so it is n/a";
+}
+
+// Below this mean number of rows per group, heteroskedasticity-robust errors under fixed effects
+// are flagged: they are inconsistent with few periods per group (Stock and Watson, Econometrica
+// 76(1), 2008); the threshold of 10 is the (common practice, no source).
+inline constexpr double fewRowsPerGroup = 10.0;
+
+// The note of the form row: the fit's status, the tests that are n/a for want of groups, and
+// heteroskedasticity-robust errors under effects with few rows per group; "; " between them.
+inline std::string statusNote(const ProductionFit& fit)
+{
+    std::string note = fitStatusNote(fit);
+    auto add = [&note](const std::string& more) { note += (note.empty() ? "" : "; ") + more; };
+    const LeastSquaresResult& regression = fit.regression;
+    if (regression.overallTestExceedsClusters)
+        add(tooFewGroupsNote(overallTestLabel, static_cast<double>(regression.overallRestrictions),
+                             regression.clusterCount));
+    if (fit.returns.exceedsClusters)
+        add(tooFewGroupsNote(std::string("the test of ") + returnsLabel, 1.0, regression.clusterCount));
+    if (fit.translog && fit.translog->cobbDouglasTest.exceedsClusters)
+        add(tooFewGroupsNote(cobbDouglasTestLabel, fit.translog->cobbDouglasTest.numeratorDegreesOfFreedom,
+                             regression.clusterCount));
+    const bool heteroskedasticityRobust =
+        regression.covarianceKind == CovarianceKind::hc1 || regression.covarianceKind == CovarianceKind::hc3;
+    if (heteroskedasticityRobust && fit.panel.effects != EffectsKind::none && fit.panel.groups > 0) {
+        const double rowsPerGroup = static_cast<double>(regression.observations) / static_cast<double>(fit.panel.groups);
+        if (rowsPerGroup < fewRowsPerGroup)
+            add("note: heteroskedasticity-robust errors with fixed effects: prefer cluster (" +
+                formatNumber(std::round(rowsPerGroup * 10) / 10) + " rows per group; below 10 they are inconsistent)");
+    }
+    return note;
 }
 
 } // namespace isoquant

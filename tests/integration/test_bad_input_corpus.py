@@ -76,6 +76,8 @@ def build_fixture(sheet):
     set_values(sheet, "AL1", [["plant"]] + [["p%d" % (i // 8)] for i in range(24)])
     set_values(sheet, "AM1", [["year"]] + [[1910.0] for _ in range(24)])
     set_values(sheet, "AN1", [["year"]] + [[1899.0 + i] for i in range(24)])
+    # Plants by thirds, but the 10th data row (sheet row 11) alone in its plant.
+    set_values(sheet, "AV1", [["plant"]] + [["solo" if i == 9 else "p%d" % (i // 8)] for i in range(24)])
     # Cost shares that do not add up in period 3 (row 4), and a period with a zero quantity.
     set_values(sheet, "AP1", [["L", "C"]] + [[0.7, 0.3] if i != 2 else [0.7, 0.5] for i in range(24)])
     set_values(sheet, "AR1", [["L", "C"]] + [[r[1], r[2]] if i != 4 else [r[1], 0.0] for i, r in enumerate(data)])

@@ -12,7 +12,9 @@ One office serves the whole module. Sources of the expected figures, named besid
 - "Cobb & Douglas (1928)": Tables II and III of the paper (tests/data/cobb_douglas_1928.csv).
 - "statsmodels": python3-statsmodels 0.13.5 / numpy, recomputed here at test time with one dummy
   per group (and per year for two-way effects), compared to 1e-8 relative; skipped as subtests
-  when the libraries cannot be imported.
+  when the libraries cannot be imported. Under fixed effects the cluster (CR1) covariance is
+  statsmodels' times (n - k - G)/(n - k - 1): the group effects are nested in the clusters and
+  left out of the factor (README, "Estimation options").
 - "function formula": Y = exp(ln A) * prod x_i^b_i and the smearing factor times it, computed here
   from the table's own numbers (1e-12 relative).
 - Error messages: the wording in core/src/*.cpp, prefixed "Error: " by the add-in.
@@ -95,6 +97,15 @@ def dummy_regression(y, regressors, groups, periods=None, cluster=False):
     if cluster:
         return model.fit(cov_type="cluster", cov_kwds={"groups": index}, use_t=True)
     return model.fit()
+
+
+def nested_cluster_inference(result, group_count):
+    """Standard errors and p-values (t(G - 1)) of a clustered dummy regression with the CR1 factor
+    that leaves out the G - 1 group dummies nested in the clusters: statsmodels' covariance times
+    (n - p)/(n - p + G - 1), p counting the dummies."""
+    covariance = result.cov_params() * (result.df_resid / (result.df_resid + group_count - 1))
+    contrast = result.t_test(np.eye(len(result.params)), cov_p=covariance)
+    return contrast.sd, contrast.pvalue
 
 
 class PanelTestCase(unittest.TestCase):
@@ -199,17 +210,24 @@ class StatePanelTest(PanelTestCase):
                 states = [row["state"] for row in self.rows]
                 if effects:
                     result = dummy_regression(self.logs("gsp"), self.regressors(), states, cluster=True)
+                    errors, pvalues = nested_cluster_inference(result, 48)
                 else:
                     index, _ = first_appearance(states)
                     design = np.column_stack([np.ones(816)] + self.regressors())
                     result = sm.OLS(np.array(self.logs("gsp")), design).fit(
                         cov_type="cluster", cov_kwds={"groups": index}, use_t=True)
+                    errors, pvalues = result.bse, result.pvalues
                 labels = self.INPUTS + ["unemp (control)"]
                 for j, label in enumerate(labels):
                     row = row_of(table, label)
                     self.assert_relative(row[1], result.params[1 + j], STATSMODELS_RELATIVE, label)
-                    self.assert_relative(row[2], result.bse[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
-                    self.assert_relative(row[4], result.pvalues[1 + j], STATSMODELS_RELATIVE, label + " p on t(47)")
+                    self.assert_relative(row[2], errors[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+                    self.assert_relative(row[4], pvalues[1 + j], STATSMODELS_RELATIVE, label + " p on t(47)")
+                if effects:
+                    # statsmodels' own CR1 of the dummy regression is larger by sqrt((n-k-1)/(n-k-G)).
+                    ratio = math.sqrt((816 - 4 - 1) / (816 - 4 - 48))
+                    self.assert_relative(result.bse[1], row_of(table, "pcap")[2] * ratio, STATSMODELS_RELATIVE,
+                                         "statsmodels' dummy-regression CR1 of pcap")
 
     def test_group_effect_and_predictions(self):
         # Function formula: Alabama's effect is the mean over its 17 rows of ln gsp - b'x.
@@ -263,6 +281,12 @@ class StatePanelTest(PanelTestCase):
                 self.assert_relative(row[2], result.bse[1 + j], STATSMODELS_RELATIVE, label + " std. error")
             # The 1986 effect relative to 1970 is the last dummy's coefficient.
             self.assert_relative(get_cell(self.sheet, "R3"), result.params[-1], STATSMODELS_RELATIVE, "1986 effect")
+            # F (slopes = 0) tests the three inputs and unemp, not the year effects: f_test of those 4.
+            slopes = np.zeros((4, len(result.params)))
+            slopes[:, 1:5] = np.eye(4)
+            test = result.f_test(slopes)
+            f_row = row_of(self.two_way, "F (slopes = 0)")
+            self.assert_relative(f_row[3], float(np.squeeze(test.fvalue)), STATSMODELS_RELATIVE, "two-way F")
 
 
 # -- rice farms: fixed effects by farm with numeric identifiers -----------------------------------------------
@@ -290,10 +314,52 @@ class RiceFarmsTest(PanelTestCase):
             y = [math.log(float(r["goutput"])) for r in self.rows]
             x = [[math.log(float(r[n])) for r in self.rows] for n in self.INPUTS]
             result = dummy_regression(y, x, [r["id"] for r in self.rows], cluster=True)
+            errors, _ = nested_cluster_inference(result, 171)
             for j, label in enumerate(self.INPUTS):
                 row = row_of(self.table, label)
                 self.assert_relative(row[1], result.params[1 + j], STATSMODELS_RELATIVE, label)
-                self.assert_relative(row[2], result.bse[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+                self.assert_relative(row[2], errors[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+
+
+# -- too few groups for a Wald test under cluster errors ----------------------------------------------------
+
+class TooFewGroupsTest(PanelTestCase):
+    """Munnell (1990), the first 3 states (51 rows), fixed effects, a trend and the control unemp with
+    errors clustered by state: F (slopes = 0) tests 5 coefficients, but 3 cluster scores that sum to
+    zero carry at most 2 (algebra: X'e = 0), so the test shows n/a and the form row says why."""
+
+    @classmethod
+    def setUpClass(cls):
+        rows = read_rows("us_states_produc_1970_1986.csv")[:51]
+        cls.rows = rows
+        names = ["state", "year", "gsp", "pcap", "pc", "emp", "unemp"]
+        cls.sheet = sheet = new_sheet("TooFewGroups")
+        set_values(sheet, "A1", [names] + [[row["state"]] + [float(row[n]) for n in names[1:]] for row in rows])
+        # 20 rows + groups and effects 2 + within R2 1 + technical change 1 + ln A for predictions 1 = 25.
+        set_array_formula(sheet, "J1:P25", '=PRODFIT(C1:C52;D1:F52;;;"cluster";;G1:G52;A1:A52;"fixed";B1:B52)')
+        recalc(DOC)
+        cls.table = get_range(sheet, "J1:P25")
+
+    def test_overall_f_is_not_available_with_a_note(self):
+        self.assertEqual(row_of(self.table, "groups")[1], 3.0)
+        self.assertEqual(row_of(self.table, "F (slopes = 0)")[3:5], ["n/a", "n/a"])
+        self.assertEqual(row_of(self.table, "form")[1:3],
+                         ["cobb-douglas", "note: too few groups for F (slopes = 0): its 5 restrictions exceed the 2 "
+                                          "that cluster errors on 3 groups can carry, so it is n/a"])
+        # One restriction is still carried: the test of returns to scale is a number.
+        self.assert_number(row_of(self.table, "returns to scale")[3], "F of nu = 1")
+
+    def test_cr1_errors_against_statsmodels(self):
+        self.need_statsmodels()
+        y = [math.log(float(r["gsp"])) for r in self.rows]
+        x = [[math.log(float(r[n])) for r in self.rows] for n in ["pcap", "pc", "emp"]]
+        x += [[float(r["unemp"]) for r in self.rows], [float(r["year"]) - 1970.0 for r in self.rows]]
+        result = dummy_regression(y, x, [r["state"] for r in self.rows], cluster=True)
+        errors, _ = nested_cluster_inference(result, 3)
+        for j, label in enumerate(["pcap", "pc", "emp", "unemp (control)"]):
+            self.assert_relative(row_of(self.table, label)[2], errors[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+        self.assert_relative(row_of(self.table, "technical change per period")[2], errors[5], STATSMODELS_RELATIVE,
+                             "trend CR1 error")
 
 
 # -- incomplete rows on Cobb & Douglas (1928) ---------------------------------------------------------------

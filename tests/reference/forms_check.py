@@ -9,7 +9,9 @@ analytic Jacobian of that textbook formula, started from the Kmenta approximatio
 errors s^2 (J'J)^-1 at the optimum, sigma = 1/(1 + rho) by the delta method.
 Translog, ln Y = a0 + sum a_i ln x_i + 1/2 sum sum b_ij ln x_i ln x_j, by statsmodels OLS on the
 regressors ln x_i, (ln x_i)^2 / 2 and ln x_i ln x_j (i < j); elasticities and returns to scale at
-the sample means of the logs by t_test, nu = 1 and all b_ij = 0 by f_test. PRODCOMPARE's test of
+the sample means of the logs by t_test, nu = 1 and all b_ij = 0 by f_test; the same with HC1 and
+HC3 covariance (forms "translog_hc1", "translog_hc3"; cluster errors are not offered for the
+translog form). PRODCOMPARE's test of
 Cobb-Douglas within CES: LR = n ln(RSS_cd / RSS_ces) with the statsmodels Cobb-Douglas fit, p-value
 from scipy.stats.chi2(1).
 
@@ -101,21 +103,25 @@ def ces_figures(np, optimize, put, y, x1, x2):
     return rss
 
 
-def translog_figures(np, sm, put, y, inputs):
+def translog_figures(np, sm, put, y, inputs, form="translog", covariance="nonrobust"):
     ly = np.log(y)
     logs = [np.log(x) for x in inputs]
     k = len(logs)
     pairs = [(i, j) for i in range(k) for j in range(i, k)]
     regressors = logs + [(0.5 if i == j else 1.0) * logs[i] * logs[j] for i, j in pairs]
     design = np.column_stack([np.ones_like(ly)] + regressors)
-    fit = sm.OLS(ly, design).fit()
+    fit = sm.OLS(ly, design).fit(cov_type=covariance, use_t=True)
+
+    def out(quantity, values):
+        put(form, quantity, values)
+
     p = design.shape[1]
-    put("translog", "params", fit.params)
-    put("translog", "bse", fit.bse)
-    put("translog", "pvalues", fit.pvalues)
-    put("translog", "fvalue", fit.fvalue)
-    likelihood_figures(np, put, "translog", float(fit.ssr), len(ly), p, ly)
-    put("translog", "statsmodels_llf", fit.llf)
+    out("params", fit.params)
+    out("bse", fit.bse)
+    out("pvalues", fit.pvalues)
+    out("fvalue", fit.fvalue)
+    likelihood_figures(np, put, form, float(fit.ssr), len(ly), p, ly)
+    out("statsmodels_llf", fit.llf)
     means = [float(np.mean(l)) for l in logs]
     gradients = np.zeros((k, p))
     for i in range(k):
@@ -125,21 +131,21 @@ def translog_figures(np, sm, put, y, inputs):
         if i != j:
             gradients[j, 1 + k + c] += means[i]
     elasticities = fit.t_test((gradients, np.zeros(k)))
-    put("translog", "elasticity", elasticities.effect)
-    put("translog", "elasticity_se", elasticities.sd)
-    put("translog", "elasticity_pvalue", elasticities.pvalue)
+    out("elasticity", elasticities.effect)
+    out("elasticity_se", elasticities.sd)
+    out("elasticity_pvalue", elasticities.pvalue)
     total = gradients.sum(axis=0, keepdims=True)
     nu = fit.t_test((total, np.zeros(1)))
-    put("translog", "nu", float(np.squeeze(nu.effect)))
-    put("translog", "nu_se", float(np.squeeze(nu.sd)))
+    out("nu", float(np.squeeze(nu.effect)))
+    out("nu_se", float(np.squeeze(nu.sd)))
     wald = fit.f_test((total, np.ones(1)))
-    put("translog", "nu_fvalue", float(np.squeeze(wald.fvalue)))
-    put("translog", "nu_pvalue", float(np.squeeze(wald.pvalue)))
+    out("nu_fvalue", float(np.squeeze(wald.fvalue)))
+    out("nu_pvalue", float(np.squeeze(wald.pvalue)))
     interactions = np.zeros((len(pairs), p))
     interactions[:, 1 + k:] = np.eye(len(pairs))
     cd_test = fit.f_test((interactions, np.zeros(len(pairs))))
-    put("translog", "cd_fvalue", float(np.squeeze(cd_test.fvalue)))
-    put("translog", "cd_pvalue", float(np.squeeze(cd_test.pvalue)))
+    out("cd_fvalue", float(np.squeeze(cd_test.fvalue)))
+    out("cd_pvalue", float(np.squeeze(cd_test.pvalue)))
 
 
 def main():
@@ -165,7 +171,10 @@ def main():
         x1, x2 = np.array(columns[ces_inputs[0]]), np.array(columns[ces_inputs[1]])
         ces_rss = ces_figures(np, optimize, put, y, x1, x2)
         comparison_figures(np, sm, stats.chi2, put, y, x1, x2, ces_rss)
-        translog_figures(np, sm, put, y, [np.array(columns[name]) for name in translog_inputs])
+        translog_columns = [np.array(columns[name]) for name in translog_inputs]
+        translog_figures(np, sm, put, y, translog_columns)
+        for covariance in ("HC1", "HC3"):
+            translog_figures(np, sm, put, y, translog_columns, "translog_" + covariance.lower(), covariance)
 
     reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
     print(f"scipy {scipy.__version__}, statsmodels {statsmodels.__version__}: {len(rows)} figures written to "

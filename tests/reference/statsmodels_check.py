@@ -7,7 +7,12 @@ Fits, on tests/data/cobb_douglas_1928.csv and tests/data/us_states_produc_1970_1
 models as the core (unrestricted ln Y on ln x and controls; constant returns as ln(Y/x_k) on
 ln(x_i/x_k) and controls) with classical, HC1 and HC3 covariance; and, on the state panel and
 tests/data/rice_farms_panel.csv, the panel models (fixed effects, two-way effects, a trend, errors
-clustered by group) as regressions with one dummy per group and period. Writes the figures to
+clustered by group) as regressions with one dummy per group and period; under effects the
+cluster covariance is statsmodels' CR1 of that regression times (n - k - G)/(n - k - 1), the
+factor that leaves out the group effects nested in the clusters (README, "Estimation options").
+The overall F is statsmodels' f_test of the inputs, controls and trend, the effects kept. Two
+subsets of the state panel: 1970 and 1971 only (T = 2), and Alabama reduced to its 1986 row (a
+group of one row). Writes the figures to
 OUTPUT_CSV, one per line: dataset,model,covariance,level,quantity,index,value. "regression" figures
 are those of the regression actually run; "production" figures are mapped back to
 (ln A, exponents, control coefficients), as the core reports them.
@@ -117,22 +122,26 @@ def figures(np, sm, columns, output, inputs, controls, constant_returns, covaria
 
 # Panel models, fitted with one dummy per group (and per period after the first under two-way
 # effects) by statsmodels OLS: dataset -> (file, output, inputs, controls, group column, period
-# column), and the models run on it: name -> (group dummies, period dummies, trend, covariances).
+# column), and the models run on it: name -> (group dummies, period dummies, trend, covariances,
+# rows kept: None for all, else a test of (group, period)). The C++ check leaves out the same rows.
 PANEL_DATASETS = {
     "state_panel": ("us_states_produc_1970_1986.csv", "gsp", ["pcap", "pc", "emp"], ["unemp"], "state", "year"),
     "rice_farms": ("rice_farms_panel.csv", "goutput", ["seed", "urea", "totlabor", "size"], [], "id", None),
 }
 PANEL_MODELS = {
     "state_panel": {
-        "pooled": (False, False, False, ["cluster"]),
-        "fixed": (True, False, False, ["classical", "hc1", "hc3", "cluster"]),
-        "fixed_trend": (True, False, True, ["classical", "cluster"]),
-        "pooled_trend": (False, False, True, ["classical"]),
-        "two_way": (True, True, False, ["classical", "cluster"]),
+        "pooled": (False, False, False, ["classical", "hc1", "cluster"], None),
+        "fixed": (True, False, False, ["classical", "hc1", "hc3", "cluster"], None),
+        "fixed_trend": (True, False, True, ["classical", "hc1", "cluster"], None),
+        "pooled_trend": (False, False, True, ["classical", "hc1", "cluster"], None),
+        "two_way": (True, True, False, ["classical", "hc1", "cluster"], None),
+        "fixed_two_years": (True, False, False, ["classical", "cluster"], lambda group, year: year <= 1971),
+        "fixed_singleton": (True, False, False, ["hc1", "cluster"],
+                            lambda group, year: group != "ALABAMA" or year == 1986),
     },
     "rice_farms": {
-        "pooled": (False, False, False, ["cluster"]),
-        "fixed": (True, False, False, ["classical", "cluster"]),
+        "pooled": (False, False, False, ["cluster"], None),
+        "fixed": (True, False, False, ["classical", "hc1", "cluster"], None),
     },
 }
 
@@ -175,6 +184,11 @@ def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, gr
         fit = sm.OLS(y, design).fit(cov_type="cluster", cov_kwds={"groups": group_index}, use_t=True)
     else:
         fit = sm.OLS(y, design).fit(cov_type=COVARIANCES[covariance], use_t=True)
+    # statsmodels' CR1 factor G/(G-1)(n-1)/(n-p) counts the G - 1 group dummies in p; nested in
+    # the clusters, they are left out: times (n - p)/(n - p + G - 1), the period dummies kept.
+    covariance_used = None
+    if covariance == "cluster" and group_dummies:
+        covariance_used = fit.cov_params() * (fit.df_resid / (fit.df_resid + group_count - 1))
     alpha = 1.0 - LEVEL
     out = []
 
@@ -182,7 +196,15 @@ def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, gr
         for index, value in enumerate(np.atleast_1d(values)):
             out.append(("production", quantity, first + index, float(value)))
 
-    bounds = fit.conf_int(alpha=alpha)
+    def selector(columns):
+        rows = np.zeros((len(columns), len(fit.params)))
+        for row, column in enumerate(columns):
+            rows[row, column] = 1.0
+        return rows
+
+    every = fit.t_test((np.eye(len(fit.params)), np.zeros(len(fit.params))), cov_p=covariance_used)
+    bse, pvalues = every.sd, every.pvalue
+    bounds = every.conf_int(alpha=alpha)
     slope = slice(1, 1 + k + len(controls))
     if group_dummies:
         # α_1 is the constant, α_g = constant + dummy g; ln A is their mean.
@@ -194,19 +216,23 @@ def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, gr
         put("within_rsquared", 1.0 - fit.ssr / float(np.sum(demeaned ** 2)))
     else:
         put("params", fit.params[0])
-        put("bse", fit.bse[0])
-        put("pvalues", fit.pvalues[0])
+        put("bse", bse[0])
+        put("pvalues", pvalues[0])
         put("low", bounds[0, 0])
         put("high", bounds[0, 1])
     put("params", fit.params[slope], 1)
-    put("bse", fit.bse[slope], 1)
-    put("pvalues", fit.pvalues[slope], 1)
+    put("bse", bse[slope], 1)
+    put("pvalues", pvalues[slope], 1)
     put("low", bounds[slope, 0], 1)
     put("high", bounds[slope, 1], 1)
     if trend:
         put("trend", fit.params[slopes])
-        put("trend_se", fit.bse[slopes])
-        put("trend_pvalue", fit.pvalues[slopes])
+        put("trend_se", bse[slopes])
+        put("trend_pvalue", pvalues[slopes])
+    # F (slopes = 0): the inputs, controls and trend, not the group or period dummies.
+    overall = fit.f_test(selector(range(1, 1 + slopes)), cov_p=covariance_used)
+    put("fvalue", np.squeeze(overall.fvalue))
+    put("f_pvalue", np.squeeze(overall.pvalue))
     put("rsquared", fit.rsquared)
     put("rsquared_adj", fit.rsquared_adj)
     put("ssr", fit.ssr)
@@ -217,8 +243,8 @@ def panel_figures(np, sm, columns, groups, periods, output, inputs, controls, gr
     put("smearing", np.mean(np.exp(fit.resid)))
     restriction = np.zeros((1, len(fit.params)))
     restriction[0, 1:1 + k] = 1.0
-    nu = fit.t_test((restriction, np.zeros(1)))
-    wald = fit.f_test((restriction, np.ones(1)))
+    nu = fit.t_test((restriction, np.zeros(1)), cov_p=covariance_used)
+    wald = fit.f_test((restriction, np.ones(1)), cov_p=covariance_used)
     put("nu", np.squeeze(nu.effect))
     put("nu_se", np.squeeze(nu.sd))
     put("nu_fvalue", np.squeeze(wald.fvalue))
@@ -246,10 +272,14 @@ def main():
 
     for dataset, (file, output, inputs, controls, group_column, period_column) in PANEL_DATASETS.items():
         path = os.path.join(data_dir, file)
-        columns = read_columns(path, [output] + inputs + controls)
-        groups = read_texts(path, group_column)
-        periods = [float(value) for value in read_texts(path, period_column)] if period_column else None
-        for model, (group_dummies, period_dummies, trend, covariances) in PANEL_MODELS[dataset].items():
+        all_columns = read_columns(path, [output] + inputs + controls)
+        all_groups = read_texts(path, group_column)
+        all_periods = [float(value) for value in read_texts(path, period_column)] if period_column else None
+        for model, (group_dummies, period_dummies, trend, covariances, keep) in PANEL_MODELS[dataset].items():
+            kept = [i for i in range(len(all_groups)) if keep is None or keep(all_groups[i], all_periods[i])]
+            columns = {name: [values[i] for i in kept] for name, values in all_columns.items()}
+            groups = [all_groups[i] for i in kept]
+            periods = [all_periods[i] for i in kept] if all_periods else None
             for name in covariances:
                 for level, quantity, index, value in panel_figures(np, sm, columns, groups, periods, output, inputs,
                                                                    controls, group_dummies, period_dummies, trend,

@@ -5,7 +5,9 @@
 //
 // Tolerances:
 // - translog: 1e-8 relative on every figure, as for the Cobb-Douglas cross-check: the same linear
-//   least squares by two factorisations, each good to about 1e-12 on these designs.
+//   least squares by two factorisations, each good to about 1e-12 on these designs; also with HC1
+//   and HC3 errors (statsmodels cov_type "HC1", "HC3": standard errors, p-values, the overall F,
+//   the elasticities' errors and the Wald tests of ν = 1 and of Cobb-Douglas).
 // - ces: the two solvers stop by different rules. At a least-squares optimum the sum of squares is
 //   stationary, so it (and R², log-likelihood, AIC, BIC) agrees to 1e-9 relative while the
 //   parameters may differ by the solvers' step tolerances: 1e-6 relative on estimates, and 1e-5 on
@@ -65,6 +67,7 @@ std::vector<Figure> readFigures(const std::string& path)
 
 isoquant::FitArguments cesArguments(const std::string& dataset);
 
+// "translog_hc1" and "translog_hc3" are the translog form with those errors.
 isoquant::ProductionFit coreFit(const std::string& dataset, const std::string& form)
 {
     isoquant::FitArguments arguments;
@@ -72,7 +75,9 @@ isoquant::ProductionFit coreFit(const std::string& dataset, const std::string& f
         arguments = cesArguments(dataset);
     else
         arguments = isoquant::testing::riceFarmArguments({"size", "totlabor", "seed", "urea"});
-    arguments.form = form;
+    const auto separator = form.find('_');
+    arguments.form = form.substr(0, separator);
+    if (separator != std::string::npos) arguments.errors = form.substr(separator + 1);
     return isoquant::fitFromArguments(arguments);
 }
 
@@ -139,7 +144,7 @@ double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
 
 double toleranceFor(const Figure& figure)
 {
-    if (figure.form == "translog" || figure.quantity == "cd_llf") return 1e-8;
+    if (figure.form.rfind("translog", 0) == 0 || figure.quantity == "cd_llf") return 1e-8;
     if (figure.form == "compare") return 1e-6;
     if (figure.quantity == "params" || figure.quantity == "sigma") return 1e-6;
     if (figure.quantity == "bse" || figure.quantity == "tvalues" || figure.quantity == "sigma_se" ||

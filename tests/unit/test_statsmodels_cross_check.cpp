@@ -4,9 +4,13 @@
 // RSS, overall F, log-likelihood, AIC, BIC and the Wald test of ν = 1 — agrees to 1e-8 relative.
 // Panel models (Munnell state panel, Feng & Horrace rice farms) are compared with statsmodels'
 // regression with one dummy per group (and per period for two-way effects): slopes, their
-// classical, HC1, HC3 and cluster-robust (CR1, t(G−1)) errors, p-values and bounds, the group
-// effects and their mean (ln A), within R², the trend, the test of ν = 1 and the smearing factor
-// (numpy's mean of exp(residual)).
+// classical, HC1, HC3 and cluster-robust (CR1, t(G−1)) errors, p-values and bounds, F (slopes = 0)
+// (statsmodels' f_test of the inputs, controls and trend), the group effects and their mean
+// (ln A), within R², the trend, the test of ν = 1 and the smearing factor (numpy's mean of
+// exp(residual)). Under effects the script scales statsmodels' CR1 covariance by
+// (n − k − G)/(n − k − 1), the group effects being nested in the clusters. Two subsets of the state
+// panel, left out here as incomplete rows (blank output): 1970–1971 only (T = 2), and Alabama
+// reduced to its 1986 row (a group of one row).
 // 1e-8 leaves room for the two libraries' different factorisations and distribution functions
 // (both are good to about 1e-12 on these well-conditioned designs) while catching any formula slip.
 //
@@ -65,8 +69,20 @@ isoquant::FitArguments panelArguments(const Figure& figure)
     const std::string& model = figure.model;
     const bool trend = model == "fixed_trend" || model == "pooled_trend" || model == "two_way";
     if (!trend) arguments.trend = {};
-    if (model == "fixed" || model == "fixed_trend") arguments.effects = std::string("fixed");
+    if (model.rfind("fixed", 0) == 0) arguments.effects = std::string("fixed");
     if (model == "two_way") arguments.effects = std::string("two-way");
+    const bool twoYears = model == "fixed_two_years", singleton = model == "fixed_singleton";
+    if (twoYears || singleton) {
+        // The script's subsets: rows it leaves out get a blank output and are dropped.
+        const auto withYears = isoquant::testing::statePanelWithPanelColumns();
+        for (std::size_t row = 1; row < arguments.output.rows(); ++row) {
+            const double year = withYears.trend.number(row, 0);
+            const bool alabama = withYears.groups.text(row, 0) == "ALABAMA";
+            if ((twoYears && year > 1971) || (singleton && alabama && year != 1986))
+                arguments.output.set(row, 0, isoquant::Cell{});
+        }
+        arguments.incompleteRows = 1.0;
+    }
     return arguments;
 }
 
@@ -110,6 +126,8 @@ double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
         if (q == "high") return fit.upperBounds(i);
         if (q == "rsquared") return fit.rSquared;
         if (q == "rsquared_adj") return fit.adjustedRSquared;
+        if (q == "fvalue") return r.fStatistic;
+        if (q == "f_pvalue") return r.fPValue;
         if (q == "nu") return fit.returns.estimate;
         if (q == "nu_se") return fit.returns.standardError;
         if (q == "nu_fvalue") return fit.returns.fStatistic;

@@ -28,7 +28,10 @@
 // and 1 when incomplete rows are dropped. Two inputs, no options: 17 rows.
 // Statistic rows use the same columns: a value under "value", its standard error under
 // "std. error", a test statistic under "t", its p-value under "p-value". A number that is not
-// finite (an exact fit's t, say) is shown as the text "n/a".
+// finite (an exact fit's t, say) is shown as the text "n/a". The form row's third cell holds notes
+// (table_writer.hpp, statusNote): a nearly collinear or exact fit, a Wald test n/a because cluster
+// errors on G groups carry at most G − 1 restrictions, hc1/hc3 under effects with under 10 rows
+// per group.
 // Group and period effects are not rows of the table; PRODSTAT answers "effect of group <label>"
 // and "effect of period <period>" from the fit itself (lookUpFit).
 #pragma once

@@ -16,7 +16,8 @@ enum class CovarianceKind {
     classical, // σ²·(XᵀX)⁻¹ with σ² = RSS/(n−p)
     hc1,       // White's sandwich scaled by n/(n−p)
     hc3,       // sandwich with squared residuals divided by (1−hᵢᵢ)²
-    cluster    // CR1: Σ_g (X_gᵀe_g)(X_gᵀe_g)ᵀ in the sandwich, scaled by G/(G−1)·(n−1)/(n−p)
+    cluster    // CR1: Σ_g (X_gᵀe_g)(X_gᵀe_g)ᵀ in the sandwich, scaled by G/(G−1)·(n−1)/(n−p), p less
+               // the absorbed parameters nested in the clusters (LeastSquaresOptions)
 };
 
 struct LeastSquaresOptions {
@@ -40,9 +41,16 @@ struct LeastSquaresOptions {
     // The fit counts as perfect when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
     double perfectFitTolerance = 1e-12;
     // Parameters removed before the fit by demeaning within groups (the group means of a within
-    // estimator): they count in p, so n − p and the CR1 factor are those of the regression with
-    // one dummy per group. 0 for an ordinary regression.
+    // estimator): they count in p, so n − p, σ² and the HC1 factor are those of the regression
+    // with one dummy per group (the CR1 factor: see the next option). 0 for an ordinary regression.
     Eigen::Index absorbedParameters = 0;
+    // Of the absorbed parameters, those nested within the clusters beyond one overall level (the
+    // G − 1 group effects beyond the mean when the clusters are the groups). They use up no
+    // cluster degrees of freedom, so the CR1 factor leaves them out of p (Cameron and Miller,
+    // "A Practitioner's Guide to Cluster-Robust Inference", J. Human Resources 50(2), 2015, on
+    // fixed effects nested in clusters; from memory): G/(G−1)·(n−1)/(n − p + nested). σ², n − p
+    // and every other figure still count them.
+    Eigen::Index absorbedNestedInClusters = 0;
     // Leverage of the absorbed parameters, added to every row's hᵢᵢ for HC3 (1/n_g for the
     // group means: the leverage of the dummy-variable regression is that of the within one plus
     // 1/n_g). Empty means none.
@@ -87,9 +95,12 @@ struct LeastSquaresResult {
     double adjustedRSquared = 0;  // 1 − (1 − R²)·(n − c)/(n − p), c = 1 with a constant, else 0
     double residualStandardDeviation = 0; // √(RSS/(n−p))
     // Wald F of all coefficients but the constant being zero, on F(q, inferenceDegreesOfFreedom)
-    // with the chosen covariance; NaN when there is nothing to test.
+    // with the chosen covariance; NaN when there is nothing to test or the test is undefined
+    // (overallTestExceedsClusters).
     double fStatistic = 0;
     double fPValue = 0;
+    Eigen::Index overallRestrictions = 0;   // q of that test
+    bool overallTestExceedsClusters = false; // q > G − 1 under cluster errors (WaldTest)
     // Gaussian: −n/2·(ln 2π + ln(RSS/n) + 1); AIC = −2LL + 2p; BIC = −2LL + p·ln n (p excludes σ²).
     double logLikelihood = 0;
     double aic = 0;
@@ -141,12 +152,23 @@ private:
     std::vector<Eigen::Index> columns_;
 };
 
+// Thrown for HC3 errors when row `row` (0-based in the regression) has leverage 1: its weight
+// e²/(1 − h)² is 0/0, and the HC3 covariance is undefined.
+class UnitLeverage : public std::runtime_error {
+public:
+    explicit UnitLeverage(Eigen::Index row);
+    Eigen::Index row() const { return row_; }
+
+private:
+    Eigen::Index row_;
+};
+
 // Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
 // estimate allows, else with column pivoting in long double (see LeastSquaresOptions).
 // `interceptColumn` names the constant column, if any: it decides how TSS, R² and the overall F
 // are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1, finite data and, for
 // cluster errors, a cluster for every row and at least 2 clusters (std::invalid_argument
-// otherwise); throws CollinearColumns at numerical rank deficiency.
+// otherwise); throws CollinearColumns at numerical rank deficiency and UnitLeverage (HC3 only).
 LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eigen::Index> interceptColumn,
                                    const LeastSquaresOptions& options = {});
 LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
@@ -158,10 +180,14 @@ struct WaldTest {
     double numeratorDegreesOfFreedom = 0;
     double denominatorDegreesOfFreedom = 0;
     double pValue = 0; // upper tail of F(q, inferenceDegreesOfFreedom)
+    // Under cluster errors the G cluster scores sum to zero (Xᵀe = 0), so the covariance has rank
+    // at most G − 1: with q > G − 1 restrictions R V Rᵀ is singular and F (a ratio of rounding
+    // errors) is undefined. Then this is set and the statistic and p-value are NaN.
+    bool exceedsClusters = false;
 };
 
 // Wald F test of the q linear restrictions R·b = r with the fit's own covariance:
-// F = (Rb − r)ᵀ (R V Rᵀ)⁻¹ (Rb − r) / q.
+// F = (Rb − r)ᵀ (R V Rᵀ)⁻¹ (Rb − r) / q; NaN when R V Rᵀ is singular (see WaldTest).
 WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::MatrixXd& restrictions,
                                 const Eigen::VectorXd& values);
 

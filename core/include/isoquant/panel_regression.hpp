@@ -10,11 +10,15 @@
 // - fixed: y and every column but the constant are demeaned within each group and the regression
 //   is run without the constant (the within estimator). Its slopes equal those of the regression
 //   with one dummy per group. The G group means count as parameters: p = (columns run) + G, so
-//   n − p, σ², the HC1 factor n/(n − p) and the CR1 factor G/(G−1)·(n−1)/(n−p) are exactly those
-//   of that dummy-variable regression (HC3 adds 1/n_g to every leverage for the same reason).
+//   n − p, σ² and the HC1 factor n/(n − p) are exactly those of that dummy-variable regression
+//   (HC3 adds 1/n_g to every leverage for the same reason). The CR1 factor does not count the
+//   G − 1 group effects beyond the mean, which are nested in the clusters (the groups):
+//   G/(G−1)·(n−1)/(n − k − 1), k the columns run (least_squares.hpp, absorbedNestedInClusters).
 // - two-way: as fixed, with one dummy per period after the first (demeaned within groups too),
 //   so unbalanced panels are handled exactly; the periods come from the trend column and no
-//   trend is estimated (the period effects absorb it).
+//   trend is estimated (the period effects absorb it). The period effects are not nested in the
+//   groups: they stay in the k of the CR1 factor. The overall F tests the inputs and controls
+//   only, the period effects kept.
 // Under fixed or two-way effects, column 0 of the returned regression carries the mean of the
 // group effects, (1/G)·Σ_g α_g with α_g = ȳ_g − x̄_gᵀ·b (group means of the columns run), with
 // zero variance in the covariance and NaN standard error, t, p and bounds: the group effects are

@@ -88,6 +88,7 @@ struct ReturnsToScale {
     double fStatistic = 0;     // Wald F of ν = 1 (NaN when imposed or undefined)
     double pValue = 0;
     bool imposed = false;
+    bool exceedsClusters = false; // the test needs more than G − 1 restrictions (WaldTest)
     std::string verdict;       // "increasing", "constant", "decreasing" or "constant (imposed)"
 };
 
