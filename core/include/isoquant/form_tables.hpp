@@ -6,9 +6,7 @@
 //   term | estimate | std. error | t | p-value | low | high     header
 //   ln A, delta (weight of the first input), rho, nu             parameter rows, t of parameter = 0
 //   sigma                                                        σ = 1/(1+ρ): estimate, se (delta
-//                                                                method), low = 1/(1+high of ρ),
-//                                                                high = 1/(1+low of ρ) ("n/a" when
-//                                                                low of ρ ≤ −1); t and p empty
+//                                                                method), low, high; t and p empty
 //   (empty row)
 //   observations, R2, adjusted R2, residual SD, log-likelihood, AIC, BIC      (on ln Y, p = 4)
 //   returns to scale                                             ν, se, F of ν = 1 under "t", p
@@ -22,7 +20,9 @@
 // At a boundary optimum the parameter on the boundary shows the boundary value (δ = 0 or 1,
 // ρ = −1) with "boundary" under "std. error", and no row carries standard errors (at δ = 0 or 1
 // sigma is "n/a": ρ is not identified); without convergence the estimates are the solver's last
-// values and carry none either, nor does a point that is not identified.
+// values and carry none either, nor does a point that is not identified. The bounds of sigma are
+// those of ρ transformed, 1/(1 + upper bound of ρ) and 1/(1 + lower bound of ρ), the upper one
+// "n/a" when the lower bound of ρ is at or below −1.
 //
 // translog (k inputs, m controls, q = k(k+1)/2):
 //   header; ln A; one row per input (αᵢ); one row "<label i>*<label j>" per βᵢⱼ, i ≤ j, in the
