@@ -29,7 +29,10 @@ constexpr int gaussNewtonSteps = 3;
 // values that differ in the ninth digit are distinct data (common practice, no source).
 constexpr double sameValueTolerance = 1e-9;
 
-bool sameValue(double a, double b) { return std::fabs(a - b) <= sameValueTolerance * std::max(std::fabs(a), std::fabs(b)); }
+bool sameValue(double a, double b)
+{
+    return std::fabs(a - b) <= sameValueTolerance * std::max(std::fabs(a), std::fabs(b));
+}
 
 // The number of values in `values` told apart by sameValue (sorted, each compared with the last kept).
 std::size_t distinctValues(std::vector<double> values)
@@ -42,7 +45,10 @@ std::size_t distinctValues(std::vector<double> values)
     return count;
 }
 
-std::vector<double> columnValues(const Eigen::VectorXd& column) { return {column.data(), column.data() + column.size()}; }
+std::vector<double> columnValues(const Eigen::VectorXd& column)
+{
+    return {column.data(), column.data() + column.size()};
+}
 
 void requireCesData(const ProductionData& data, const ProductionFitOptions& options)
 {
@@ -113,7 +119,8 @@ std::vector<Eigen::VectorXd> solverStarts(const CesLogs& logs, const CesFitOptio
         starts.push_back(toSolver(start));
         return starts;
     }
-    for (const Eigen::Vector4d& start : startValues(logs, cesOptions.startSearchRows)) starts.push_back(toSolver(start));
+    for (const Eigen::Vector4d& start : startValues(logs, cesOptions.startSearchRows))
+        starts.push_back(toSolver(start));
     if (logs.logOutput.size() > cesOptions.startSearchRows)
         starts = movedOnSample(logs, evenlySpacedRows(logs, cesOptions.startSearchRows), starts, solverOptions);
     return starts;
@@ -156,7 +163,8 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
 
     NonlinearLeastSquaresOptions solverOptions = cesOptions.solver;
     solverOptions.confidenceLevel = options.confidenceLevel;
-    const NonlinearLeastSquaresResult kept = bestRun(model, solverStarts(logs, cesOptions, solverOptions), solverOptions);
+    const NonlinearLeastSquaresResult kept =
+        bestRun(model, solverStarts(logs, cesOptions, solverOptions), solverOptions);
 
     CesDetails details;
     details.convergence = kept.status;

@@ -201,7 +201,8 @@ ProductionModel readProductionModel(const CellTable& range)
     if (rows.inputsRow && *rows.form != ProductionForm::ces)
         throw InputError("model: an \"inputs\" row of labels belongs to a ces model only");
     if (rows.convergence && equalsIgnoringCase(*rows.convergence, cesStatusWord(NonlinearStatus::notIdentified)))
-        throw InputError("model: the fit is not identified; its estimates are one optimum of many, so they are not used");
+        throw InputError(
+            "model: the fit is not identified; its estimates are one optimum of many, so they are not used");
     if (rows.convergence && !equalsIgnoringCase(*rows.convergence, convergedText))
         throw InputError("model: the fit did not converge; its estimates are not an optimum, so they are not used");
 

@@ -218,6 +218,10 @@ BOOST_AUTO_TEST_CASE(ces_near_fixed_proportions_reaches_scipys_best_optimum,
         const double rss = fit.regression.residualSumOfSquares;
         BOOST_TEST(rss <= c.bestRss * (1 + 1e-7), std::setprecision(17) << name << ": core " << rss << " ("
                    << isoquant::cesStatusWord(fit.ces->convergence) << "), scipy's best " << c.bestRss);
+        // Never "converged" at an interior point without standard errors: that is "not identified".
+        if (fit.ces->convergence == isoquant::NonlinearStatus::converged &&
+            fit.ces->boundary == isoquant::CesBoundary::none)
+            BOOST_TEST(fit.standardErrors.allFinite(), name << ": converged without standard errors");
     }
 }
 

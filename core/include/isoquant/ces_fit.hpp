@@ -55,8 +55,8 @@ struct CesDetails {
 struct CesFitOptions {
     NonlinearLeastSquaresOptions solver;
     // An optimum with δ or 1 − δ below this (and the share of that input below it on every row),
-    // or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on the boundary: the estimate shown is the boundary value (the value reached for ρ → ∞) and no
-    // standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
+    // or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on the boundary: the estimate shown is the
+    // boundary value (the value reached for ρ → ∞) and no standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
     // from the boundary (common practice, no source).
     double boundaryDistance = 1e-6;
     // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
