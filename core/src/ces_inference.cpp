@@ -100,7 +100,7 @@ void setReturns(ProductionFit& fit, const std::string& untested, double level)
     returns.fStatistic = exact ? notANumber : distance * distance;
     returns.pValue = fisherUpperPValue(returns.fStatistic, 1, fit.regression.residualDegreesOfFreedom);
     returns.verdict = untested.empty() ? classifyReturnsToScale(returns.estimate, returns.pValue, level, false)
-                                       : "not tested (" + untested + ")";
+                                       : untestedVerdictPrefix + untested + ")";
 }
 
 } // namespace

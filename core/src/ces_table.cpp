@@ -34,7 +34,7 @@ std::string cesNote(const ProductionFit& fit)
     case NonlinearStatus::converged: break;
     case NonlinearStatus::notIdentified:
         return "note: not identified: the sum of squares is flat along some direction at the point reached "
-               "(singular Hessian); the estimates are one point of many and have no standard errors";
+               "(singular Hessian); the estimates are one optimum of many and have no standard errors";
     case NonlinearStatus::evaluationLimit:
     case NonlinearStatus::stopped:
         return "note: the fit did not converge; the estimates are the solver's last values, not an optimum";

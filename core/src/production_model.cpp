@@ -266,7 +266,7 @@ std::string returnsVerdict(const ProductionModel& model, double level)
 
 std::optional<std::string> untestedVerdict(const CellTable& range)
 {
-    const std::string untested = "not tested (";
+    const std::string untested = untestedVerdictPrefix;
     for (std::size_t row = 0; row < range.rows(); ++row) {
         if (!range.isText(row, 0) || !equalsIgnoringCase(range.text(row, 0), verdictLabel)) continue;
         if (range.columns() < 2 || !range.isText(row, 1)) return std::nullopt;

@@ -56,8 +56,9 @@ struct CesFitOptions {
     NonlinearLeastSquaresOptions solver;
     // An optimum with δ or 1 − δ below this (and the share of that input below it on every row),
     // or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on the boundary: the estimate shown is the
-    // boundary value (the value reached for ρ → ∞) and no standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
-    // from the boundary (common practice, no source).
+    // boundary value (the value reached for ρ → ∞) and no standard errors are reported. 1e-6 is
+    // far below any weight or curvature the data could tell from the boundary (common practice, no
+    // source).
     double boundaryDistance = 1e-6;
     // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
     std::optional<Eigen::Vector4d> start;
@@ -88,5 +89,9 @@ std::vector<Eigen::Vector4d> cesStartValues(const ProductionData& data,
 
 // The word of the table's convergence row: "converged", "not converged", "stopped" or "not identified".
 std::string cesStatusWord(NonlinearStatus status);
+
+// How the verdict of a fit without a test of ν = 1 begins: "not tested (boundary)", "not tested
+// (not converged)", "not tested (stopped)" or "not tested (not identified)".
+inline constexpr const char* untestedVerdictPrefix = "not tested (";
 
 } // namespace isoquant
