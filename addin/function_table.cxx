@@ -94,7 +94,8 @@ const std::vector<FunctionInfo>& functionTable()
           {"inputs", "Optional rows of input values: the result is then a column with one value per row."}}},
         {"prodReturns", "PRODRETURNS",
          "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
-         "the given level. A typed model without standard errors is judged by its returns to scale alone.",
+         "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "
+         "table without a test (boundary, not converged, not identified) gives its own \"not tested (...)\".",
          {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
         {"prodTfp", "PRODTFP",
          "Total factor productivity of each row: observed output divided by the output the model predicts from that "

@@ -226,6 +226,7 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
 std::string returnsVerdictCell(const CellTable& model, const Cell& level)
 {
     const double confidence = readLevelArgument(level, "level");
+    if (const auto untested = untestedVerdict(model)) return *untested;
     return returnsVerdict(cachedProductionModel(model), confidence);
 }
 

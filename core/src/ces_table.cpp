@@ -30,20 +30,17 @@ std::string boundaryNote(const ProductionFit& fit)
 
 std::string cesNote(const ProductionFit& fit)
 {
-    if (fit.ces->convergence != NonlinearStatus::converged)
+    switch (fit.ces->convergence) {
+    case NonlinearStatus::converged: break;
+    case NonlinearStatus::notIdentified:
+        return "note: not identified: the sum of squares is flat along some direction at the point reached "
+               "(singular Hessian); the estimates are one optimum of many and have no standard errors";
+    case NonlinearStatus::evaluationLimit:
+    case NonlinearStatus::stopped:
         return "note: the fit did not converge; the estimates are the solver's last values, not an optimum";
+    }
     if (fit.ces->boundary != CesBoundary::none) return boundaryNote(fit);
     return statusNote(fit);
-}
-
-std::string convergenceWord(NonlinearStatus status)
-{
-    switch (status) {
-    case NonlinearStatus::converged: return convergedText;
-    case NonlinearStatus::evaluationLimit: return "not converged";
-    case NonlinearStatus::stopped: return "stopped";
-    }
-    return "stopped";
 }
 
 bool onBoundary(const ProductionFit& fit, Eigen::Index parameter)
@@ -85,7 +82,7 @@ CellTable cesFitTable(const ProductionFit& fit)
     writer.fitStatisticRows(fit, false);
     writer.returnsRows(fit.returns);
     writer.textRow(formLabel, {formWord(fit.form), cesNote(fit)});
-    writer.textRow(convergenceLabel, {convergenceWord(ces.convergence), std::to_string(ces.evaluations) +
+    writer.textRow(convergenceLabel, {cesStatusWord(ces.convergence), std::to_string(ces.evaluations) +
                                                                           " evaluations; " + ces.stopReason});
     writer.textRow(inputsLabel, {fit.inputLabels[0], fit.inputLabels[1]});
     writer.valueRow(smearingLabel, fit.smearingFactor);

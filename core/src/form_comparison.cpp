@@ -44,9 +44,10 @@ std::string verdict(double pValue, double level)
     return pValue < 1.0 - level ? "cobb-douglas rejected" : "cobb-douglas not rejected";
 }
 
-// A ces fit gives a likelihood ratio only at an interior, converged optimum.
+// A ces fit gives a likelihood ratio only at an interior, converged, identified optimum.
 std::string cesUnusable(const ProductionFit& ces)
 {
+    if (ces.ces->convergence == NonlinearStatus::notIdentified) return "n/a: the ces fit is not identified";
     if (ces.ces->convergence != NonlinearStatus::converged) return "n/a: the ces fit did not converge";
     if (ces.ces->boundary != CesBoundary::none) return "n/a: the ces optimum is on a boundary";
     return "";

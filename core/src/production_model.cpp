@@ -1,5 +1,6 @@
 #include "isoquant/production_model.hpp"
 
+#include "isoquant/ces_fit.hpp"
 #include "isoquant/cobb_douglas.hpp"
 #include "form_models.hpp"
 #include "isoquant/input_error.hpp"
@@ -229,6 +230,9 @@ ProductionModel readProductionModel(const CellTable& range)
     if (!rows.logScale) throw InputError("model: has no \"ln A\" (or \"A\") row");
     if (rows.inputsRow && *rows.form != ProductionForm::ces)
         throw InputError("model: an \"inputs\" row of labels belongs to a ces model only");
+    if (rows.convergence && equalsIgnoringCase(*rows.convergence, cesStatusWord(NonlinearStatus::notIdentified)))
+        throw InputError(
+            "model: the fit is not identified; its estimates are one optimum of many, so they are not used");
     if (rows.convergence && !equalsIgnoringCase(*rows.convergence, convergedText))
         throw InputError("model: the fit did not converge; its estimates are not an optimum, so they are not used");
 
@@ -291,6 +295,20 @@ std::string returnsVerdict(const ProductionModel& model, double level)
         return classifyReturnsToScale(*scale, notANumber, level, false);
     }
     return classifyReturnsToScale(model.scaleTest->estimate, model.scaleTest->pValue, level, model.scaleTest->imposed);
+}
+
+std::optional<std::string> untestedVerdict(const CellTable& range)
+{
+    const std::string untested = untestedVerdictPrefix;
+    for (std::size_t row = 0; row < range.rows(); ++row) {
+        if (!range.isText(row, 0) || !equalsIgnoringCase(range.text(row, 0), verdictLabel)) continue;
+        if (range.columns() < 2 || !range.isText(row, 1)) return std::nullopt;
+        const std::string& verdict = range.text(row, 1);
+        if (verdict.size() > untested.size() && equalsIgnoringCase(verdict.substr(0, untested.size()), untested))
+            return verdict;
+        return std::nullopt;
+    }
+    return std::nullopt;
 }
 
 } // namespace isoquant

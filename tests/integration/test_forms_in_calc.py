@@ -14,10 +14,13 @@ beside each check:
 - "function formula": the CES and translog formulas evaluated here from the table's own numbers
   (1e-12 relative: the same expression in another order).
 - Error messages: the wording in core/src/*.cpp, which the add-in prefixes with "Error: ".
+- "invented": seeded data made here (invented_rows) to reach a ces boundary and a fit that is not
+  identified; the checks there are the words of the report, not figures.
 """
 
 import math
 import os
+import random
 import sys
 import unittest
 
@@ -337,6 +340,88 @@ class CompareTest(FormsTestCase):
             self.assert_relative(self.table[7][4], float(stats.chi2.sf(self.table[7][1], 1)), 1e-12, "LR p-value")
         # Cobb & Douglas (1928) is not rejected by either test at 5% (p-values in the table).
         self.assertEqual([self.table[6][6], self.table[7][6]], ["cobb-douglas not rejected"] * 2)
+
+
+def invented_rows(seed, n, log_output):
+    """Invented data (Python's random.Random(seed), so the same rows on every run): x1 and x2
+    log-uniform on [1, 100], then Y = exp(log_output(x1, x2) + N(0, noise^2)) with the noise the
+    function's second value."""
+    rng = random.Random(seed)
+    rows = []
+    for _ in range(n):
+        x1 = math.exp(rng.uniform(0.0, math.log(100.0)))
+        x2 = math.exp(rng.uniform(0.0, math.log(100.0)))
+        mean, noise = log_output(x1, x2)
+        rows.append([math.exp(mean + rng.gauss(0.0, noise)), x1, x2])
+    return rows
+
+
+def outside_ces(x1, x2):
+    """A Cobb-Douglas with exponents 0.8 and -0.15: no CES with delta in [0, 1] has a negative
+    elasticity, so the ces optimum lies on delta = 1."""
+    return 0.2 + 0.8 * math.log(x1) - 0.15 * math.log(x2), 0.05
+
+
+def near_fixed_proportions(x1, x2):
+    """A CES at rho = 50 (delta 0.4, nu 0.9): on these 40 rows the optimum runs out on a ridge
+    toward fixed proportions, where J'J is singular to rounding."""
+    return 0.5 - 0.9 / 50 * math.log(0.4 * x1 ** -50 + 0.6 * x2 ** -50), 0.025
+
+
+class CesWithoutTestTest(FormsTestCase):
+    """Where the ces fit has no test of nu = 1, its verdict and PRODRETURNS say so; a constant
+    input is refused as Cobb-Douglas refuses it. Expected words: core/src/ces_inference.cpp,
+    ces_table.cpp and production_fit.cpp."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet = new_sheet("CesWithoutTest")
+        set_values(cls.sheet, "A1", [["y", "a", "b"]] + invented_rows(1, 60, outside_ces))
+        set_array_formula(cls.sheet, "E1:K20", '=PRODFIT(A1:A61;B1:C61;"ces")')
+        set_formula(cls.sheet, "M1", "=PRODRETURNS(E1:K20)")
+        ridge = invented_rows(3, 40, near_fixed_proportions)
+        set_values(cls.sheet, "A70", [["y", "a", "b"]] + ridge)
+        set_array_formula(cls.sheet, "E70:K89", '=PRODFIT(A70:A110;B70:C110;"ces")')
+        set_formula(cls.sheet, "M70", "=PRODRETURNS(E70:K89)")
+        set_formula(cls.sheet, "M71", "=PRODOUTPUT(E70:K89;B71:C71)")
+        set_array_formula(cls.sheet, "E92:K99", "=PRODCOMPARE(A70:A110;B70:C110)")
+        # The same output and first input with the second input constant in all 40 rows.
+        set_values(cls.sheet, "O70", [["y", "a", "b"]] + [[y, a, 7.5] for y, a, _ in ridge])
+        set_array_formula(cls.sheet, "S70:Y89", '=PRODFIT(O70:O110;P70:Q110;"ces")')
+        set_array_formula(cls.sheet, "S91:Y108", "=PRODFIT(O70:O110;P70:Q110)")
+        set_array_formula(cls.sheet, "S110:Y117", "=PRODCOMPARE(O70:O110;P70:Q110)")
+        recalc(DOC)
+        cls.boundary = get_range(cls.sheet, "E1:K20")
+        cls.ridge = get_range(cls.sheet, "E70:K89")
+
+    def test_boundary_verdict_and_prodreturns(self):
+        self.assertEqual(row_of(self.boundary, "delta")[1:3], [1.0, "boundary"])
+        self.assertEqual(row_of(self.boundary, "verdict")[1], "not tested (boundary)")
+        self.assertEqual(get_cell(self.sheet, "M1"), "not tested (boundary)")
+        # rho is not identified at delta = 1, so neither is sigma.
+        self.assertEqual(row_of(self.boundary, "sigma")[1:7], ["n/a", "n/a", "", "", "n/a", "n/a"])
+        self.assertEqual(row_of(self.boundary, "returns to scale")[2:5], ["n/a", "n/a", "n/a"])
+        self.assertIn("boundary delta = 1", row_of(self.boundary, "form")[2])
+
+    def test_not_identified_status(self):
+        self.assertEqual(row_of(self.ridge, "convergence")[1], "not identified")
+        self.assertIn("not identified", row_of(self.ridge, "form")[2])
+        self.assertEqual(row_of(self.ridge, "verdict")[1], "not tested (not identified)")
+        self.assertEqual(row_of(self.ridge, "rho")[2], "n/a")
+        self.assertEqual(get_cell(self.sheet, "M70"), "not tested (not identified)")
+        self.assert_message(get_cell(self.sheet, "M71"), error(
+            "model: the fit is not identified; its estimates are one optimum of many, so they are not used"),
+            "PRODOUTPUT of a table not identified")
+        comparison = get_range(self.sheet, "E92:K99")
+        self.assertEqual(row_of(comparison, "ces vs cobb-douglas")[1], "n/a: the ces fit is not identified")
+
+    def test_constant_second_input_refused_as_by_cobb_douglas(self):
+        message = error("inputs: 'b' does not vary, so it cannot be told apart from ln A")
+        for what, target in [("ces", "S70:Y89"), ("cobb-douglas", "S91:Y108"), ("PRODCOMPARE", "S110:Y117")]:
+            with self.subTest(what):
+                result = get_range(self.sheet, target)
+                self.assert_message(result[0][0], message, what)
+                self.assertEqual([v for row in result for v in row if isinstance(v, float)], [], what)
 
 
 ERROR_CASES = [

@@ -15,6 +15,16 @@ translog form). PRODCOMPARE's test of
 Cobb-Douglas within CES: LR = n ln(RSS_cd / RSS_ces) with the statsmodels Cobb-Douglas fit, p-value
 from scipy.stats.chi2(1).
 
+Data near fixed proportions (rho = 50), invented here: for seeds 1 to RHO50_DATASETS of numpy's
+default_rng, 40 rows with x1, x2 log-uniform on [1, 100] (independent), ln Y = 0.5 + 0.9 (b + H)
+at delta = 0.4, rho = 50 and N(0, 0.025^2) noise, written out as figures (form "data": y, x1, x2
+by row) together with the lowest sum of squares scipy.optimize.least_squares reaches from 28 starts
+(rho in 0.5, 2, 8, 20, 50, 100, 200 times delta in 0.2, 0.4, 0.6, 0.8; ln A = 0.5, nu = 0.9), each
+run by both "trf" and "lm" (form "search": best_rss). The CES is taken there in the stable form the
+core uses too, ln Y = ln A + nu (ln x2 + H), H = -ln(delta e^(-rho d) + 1 - delta) / rho with
+d = ln x1 - ln x2 and the log-sum-exp formed by numpy.logaddexp, in the coordinates (ln A,
+logit delta, ln(1 + rho), nu), so that x^(-rho) neither overflows nor underflows for large rho.
+
 Writes one figure per line: dataset,form,quantity,index,value. Run it with Debian's /usr/bin/python3
 (python3-scipy and python3-statsmodels import only there). Exits with 77 (the CTest skip code)
 when they cannot be imported, leaving no OUTPUT_CSV behind.
@@ -103,6 +113,55 @@ def ces_figures(np, optimize, put, y, x1, x2):
     return rss
 
 
+RHO50_DATASETS = 12
+
+
+def rho50_data(np, seed):
+    """(y, x1, x2) of the invented data near fixed proportions (see the module's text)."""
+    n, ln_a, delta, rho, nu, noise = 40, 0.5, 0.4, 50.0, 0.9, 0.025
+    rng = np.random.default_rng(seed)
+    x1 = np.exp(rng.uniform(0.0, np.log(100.0), n))
+    x2 = np.exp(rng.uniform(0.0, np.log(100.0), n))
+    ly = ln_a - nu / rho * np.log(delta * x1 ** -rho + (1 - delta) * x2 ** -rho) + rng.normal(0.0, noise, n)
+    return np.exp(ly), x1, x2
+
+
+def rho50_best_rss(np, optimize, y, x1, x2):
+    """The lowest sum of squares least_squares reaches from the starts of the module's text."""
+    ly, l2, d = np.log(y), np.log(x2), np.log(x1) - np.log(x2)
+
+    def residuals(theta):
+        ln_a, logit, log_rho, nu = theta
+        delta, rho = 1 / (1 + np.exp(-logit)), np.expm1(log_rho)
+        if abs(rho) < 1e-12:
+            composite = delta * d
+        else:
+            composite = -np.logaddexp(np.log(delta) - rho * d, np.log1p(-delta)) / rho
+        return ly - (ln_a + nu * (l2 + composite))
+
+    best = np.inf
+    for rho in (0.5, 2, 8, 20, 50, 100, 200):
+        for delta in (0.2, 0.4, 0.6, 0.8):
+            start = [0.5, np.log(delta / (1 - delta)), np.log1p(rho), 0.9]
+            for method in ("trf", "lm"):
+                with np.errstate(all="ignore"):
+                    fit = optimize.least_squares(residuals, start, method=method, xtol=1e-15, ftol=1e-15,
+                                                 gtol=1e-15, max_nfev=20000)
+                rss = float(fit.fun @ fit.fun)
+                if np.isfinite(rss):
+                    best = min(best, rss)
+    return best
+
+
+def rho50_figures(np, optimize, rows):
+    for seed in range(1, RHO50_DATASETS + 1):
+        y, x1, x2 = rho50_data(np, seed)
+        dataset = f"ces_rho50_seed{seed}"
+        for name, column in (("y", y), ("x1", x1), ("x2", x2)):
+            rows.extend((dataset, "data", name, i, repr(float(v))) for i, v in enumerate(column))
+        rows.append((dataset, "search", "best_rss", 0, repr(rho50_best_rss(np, optimize, y, x1, x2))))
+
+
 def translog_figures(np, sm, put, y, inputs, form="translog", covariance="nonrobust"):
     ly = np.log(y)
     logs = [np.log(x) for x in inputs]
@@ -176,6 +235,7 @@ def main():
         for covariance in ("HC1", "HC3"):
             translog_figures(np, sm, put, y, translog_columns, "translog_" + covariance.lower(), covariance)
 
+    rho50_figures(np, optimize, rows)
     reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
     print(f"scipy {scipy.__version__}, statsmodels {statsmodels.__version__}: {len(rows)} figures written to "
           f"{output_path}")

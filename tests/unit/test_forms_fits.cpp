@@ -13,6 +13,7 @@
 #include "isoquant/translog.hpp"
 #include "isoquant/translog_fit.hpp"
 #include "cell_tables.hpp"
+#include "generated_data.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 #include "relative_error.hpp"
@@ -60,25 +61,7 @@ std::string fitMessage(isoquant::FitArguments arguments, const char* form)
     return isoquant::testing::messageOf([&] { isoquant::fitFromArguments(arguments); });
 }
 
-// Data from a known technology: inputs log-uniform over [1, 100], noise on ln Y normal with SD 0.05.
-template <typename Technology>
-isoquant::ProductionData generate(const Technology& technology, int n, std::uint32_t seed)
-{
-    std::mt19937 engine(seed);
-    std::uniform_real_distribution<double> logInput(0.0, std::log(100.0));
-    std::normal_distribution<double> noise(0.0, 0.05);
-    const Eigen::Index k = technology.inputCount();
-    isoquant::ProductionData data;
-    data.inputs.resize(n, k);
-    data.output.resize(n);
-    for (int row = 0; row < n; ++row) {
-        for (Eigen::Index i = 0; i < k; ++i) data.inputs(row, i) = std::exp(logInput(engine));
-        data.output(row) = std::exp(technology.logOutput(data.inputs.row(row).transpose()) + noise(engine));
-    }
-    for (Eigen::Index i = 0; i < k; ++i) data.inputLabels.push_back("x" + std::to_string(i + 1));
-    data.controls.resize(n, 0);
-    return data;
-}
+using isoquant::testing::generate;
 
 // Every estimate within 3 standard errors of the truth (a 99.7% band under normality; common
 // practice, no source). The seeds are fixed, so the check is deterministic.

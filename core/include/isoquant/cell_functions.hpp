@@ -45,7 +45,8 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
 // ν; a column of ν per row when `inputs` is not empty.
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs);
-// The returns-to-scale verdict at confidence level `level` (empty: 0.95).
+// The returns-to-scale verdict at confidence level `level` (empty: 0.95); a table whose verdict row
+// reads "not tested (…)" gives that row (untestedVerdict in production_model.hpp).
 std::string returnsVerdictCell(const CellTable& model, const Cell& level);
 
 // PRODREGULAR: per row of inputs, "regular" or the condition that fails, in words (regularity.hpp).

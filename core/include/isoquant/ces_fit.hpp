@@ -14,8 +14,12 @@
 // on the test data (up to 4e-8 without them).
 //
 // Inference is classical at the optimum: V = s²·(JᵀJ)⁻¹ with J the Jacobian in (ln A, δ, ρ, ν) and
-// s² = RSS/(n−4), t(n−4) for every test; σ = 1/(1+ρ) with se(σ) = se(ρ)/(1+ρ)² (delta method).
-// The returns to scale are ν, tested against 1 by F = ((ν−1)/se(ν))² on F(1, n−4).
+// s² = RSS/(n−4), t(n−4) for every test; σ = 1/(1+ρ) with se(σ) = se(ρ)/(1+ρ)² (delta method) and
+// bounds [1/(1+ρ_high), 1/(1+ρ_low)], the bounds of ρ transformed (σ is monotone in ρ), the upper
+// one infinite when ρ_low ≤ −1. The returns to scale are ν, tested against 1 by
+// F = ((ν−1)/se(ν))² on F(1, n−4). There is no inference, and the verdict is "not tested (…)",
+// at a boundary optimum, without convergence, and where J is rank deficient at a converged interior
+// point (status NonlinearStatus::notIdentified: JᵀJ singular, the optimum not unique).
 // R² = 1 − RSS/TSS of ln Y; log-likelihood, AIC and BIC as for every form, with p = 4.
 #pragma once
 
@@ -30,14 +34,15 @@ namespace isoquant {
 // Where an optimum on the edge of the parameter space lies.
 enum class CesBoundary {
     none,
-    firstInputOnly,     // δ = 1: output depends on the first input alone; ρ is not identified
-    secondInputOnly,    // δ = 0: output depends on the second input alone; ρ is not identified
+    firstInputOnly,     // δ = 1 and the second input's share below boundaryDistance on every row:
+                        // output depends on the first input alone; ρ and σ are not identified
+    secondInputOnly,    // δ = 0 and the first input's share below boundaryDistance on every row
     perfectSubstitutes, // ρ = −1 (σ infinite): Y = A·(δ·x₁ + (1−δ)·x₂)^ν
     fixedProportions    // ρ → ∞ (σ → 0): the Leontief limit; ρ is shown as reached, not as an estimate
 };
 
 struct CesDetails {
-    double substitutionElasticity = 0; // σ = 1/(1+ρ)
+    double substitutionElasticity = 0; // σ = 1/(1+ρ); NaN where δ is 0 or 1 (σ not identified)
     double substitutionStandardError = 0;
     double substitutionLowerBound = 0;
     double substitutionUpperBound = 0;
@@ -49,10 +54,11 @@ struct CesDetails {
 
 struct CesFitOptions {
     NonlinearLeastSquaresOptions solver;
-    // An optimum with δ or 1 − δ below this, or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on
-    // the boundary: the estimate shown is the boundary value (the value reached for ρ → ∞) and no
-    // standard errors are reported. 1e-6 is far below any weight or curvature the data could tell
-    // from the boundary (common practice, no source).
+    // An optimum with δ or 1 − δ below this (and the share of that input below it on every row),
+    // or 1 + ρ below it, or σ = 1/(1+ρ) below it, lies on the boundary: the estimate shown is the
+    // boundary value (the value reached for ρ → ∞) and no standard errors are reported. 1e-6 is
+    // far below any weight or curvature the data could tell from the boundary (common practice, no
+    // source).
     double boundaryDistance = 1e-6;
     // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
     std::optional<Eigen::Vector4d> start;
@@ -70,8 +76,9 @@ struct CesFitOptions {
 };
 
 // Throws InputError for anything but two inputs, for controls, constant returns or robust errors
-// (not available for this form), for too few rows (n ≥ 5) and when the ratio x₁/x₂ takes fewer
-// than three values (δ and ρ cannot then be told apart).
+// (not available for this form), for too few rows (n ≥ 5), for an input that does not vary (as the
+// Cobb-Douglas fit does), and when the ratio x₁/x₂ takes fewer than three values (δ and ρ cannot
+// then be told apart). Values that agree to 1e-9 relative count as one in both checks.
 ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& options,
                      const CesFitOptions& cesOptions = {});
 
@@ -79,5 +86,12 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
 // searchRows as CesFitOptions::startSearchRows.
 std::vector<Eigen::Vector4d> cesStartValues(const ProductionData& data,
                                             Eigen::Index searchRows = CesFitOptions{}.startSearchRows);
+
+// The word of the table's convergence row: "converged", "not converged", "stopped" or "not identified".
+std::string cesStatusWord(NonlinearStatus status);
+
+// How the verdict of a fit without a test of ν = 1 begins: "not tested (boundary)", "not tested
+// (not converged)", "not tested (stopped)" or "not tested (not identified)".
+inline constexpr const char* untestedVerdictPrefix = "not tested (";
 
 } // namespace isoquant

@@ -10,14 +10,19 @@
 //   (empty row)
 //   observations, R2, adjusted R2, residual SD, log-likelihood, AIC, BIC      (on ln Y, p = 4)
 //   returns to scale                                             ν, se, F of ν = 1 under "t", p
-//   verdict, form                                                as for Cobb-Douglas; the form row
-//                                                                notes a boundary or no convergence
-//   convergence | converged, not converged or stopped | the solver's evaluations and stop reason
+//   verdict, form                                                as for Cobb-Douglas, but "not tested
+//                                                                (boundary | not converged | stopped |
+//                                                                not identified)" without a test; the
+//                                                                form row notes why
+//   convergence | converged, not converged, stopped or not identified | evaluations, stop reason
 //   inputs | first input's label | second input's label
 //   smearing factor                                              Duan's: mean of exp(residual of ln Y)
 // At a boundary optimum the parameter on the boundary shows the boundary value (δ = 0 or 1,
-// ρ = −1) with "boundary" under "std. error", and no row carries standard errors; without
-// convergence the estimates are the solver's last values and carry none either.
+// ρ = −1) with "boundary" under "std. error", and no row carries standard errors (at δ = 0 or 1
+// sigma is "n/a": ρ is not identified); without convergence the estimates are the solver's last
+// values and carry none either, nor does a point that is not identified. The bounds of sigma are
+// those of ρ transformed, 1/(1 + upper bound of ρ) and 1/(1 + lower bound of ρ), the upper one
+// "n/a" when the lower bound of ρ is at or below −1.
 //
 // translog (k inputs, m controls, q = k(k+1)/2):
 //   header (translog fit | value | …); ln A; one row per input (αᵢ); one row "<label i>*<label j>" per βᵢⱼ, i ≤ j, in the

@@ -51,7 +51,10 @@ enum class NonlinearStatus {
     converged,       // a MINPACK convergence test held (ftol, xtol or gtol; or no further
                      // reduction is possible at machine precision)
     evaluationLimit, // maximumEvaluations reached before any convergence test held
-    stopped          // the Jacobian was not finite at an accepted point
+    stopped,         // the Jacobian was not finite at an accepted point
+    notIdentified    // set by a caller, never by the solver: a convergence test held, but the
+                     // Jacobian is rank deficient there (JᵀJ, the Gauss–Newton Hessian, singular),
+                     // so the optimum is not unique and has no standard errors
 };
 
 // Classical inference from the Jacobian J at θ: V = s²·(JᵀJ)⁻¹, s² = RSS/(n−p); t = θ/se on

@@ -67,4 +67,9 @@ Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& mode
 // α = 1 − level when the model carries one, else by ν alone.
 std::string returnsVerdict(const ProductionModel& model, double level);
 
+// The verdict row of a PRODFIT table when it reads "not tested (…)" (a ces fit at a boundary, not
+// converged or not identified): such a fit carries no test, and PRODRETURNS repeats the row rather
+// than judge by ν alone. Empty for any other table.
+std::optional<std::string> untestedVerdict(const CellTable& range);
+
 } // namespace isoquant
