@@ -176,8 +176,8 @@ const std::vector<FunctionInfo>& functionTable()
          {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
         {"prodProfit", "PRODPROFIT",
          "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
-         "profit, a row or a column like the input prices (enter as an array formula). Under constant or increasing returns to scale there is no "
-         "finite maximum, and the cell says so.",
+         "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
+         "increasing returns to scale there is no finite maximum, and the cell says so.",
          {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
           pricesArgument}},
         {"prodIsoquant", "PRODISOQUANT",

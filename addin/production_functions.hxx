@@ -41,9 +41,11 @@ public:
                                     const css::uno::Any& level, const css::uno::Any& controls,
                                     const css::uno::Any& groups, const css::uno::Any& effects,
                                     const css::uno::Any& trend, const css::uno::Any& incompleteRows) override;
-    css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& mean) override;
+    css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs,
+                                      const css::uno::Any& mean) override;
     css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
-    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
+    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs,
+                                          const AnyTable& input) override;
     css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs) override;
@@ -52,10 +54,12 @@ public:
     css::uno::Any SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
                                 const css::uno::Any& base) override;
     css::uno::Any SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
-    css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& level) override;
+    css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs,
+                                       const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                  const css::uno::Any& inputJ) override;
-    css::uno::Any SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
+    css::uno::Any SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs,
+                                            const AnyTable& input) override;
     css::uno::Any SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                     const AnyTable& inputJ) override;
     css::uno::Any SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
@@ -66,7 +70,8 @@ public:
                                     const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                const css::uno::Any& what) override;
-    css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,
+                                      const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
                                  const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
