@@ -124,4 +124,37 @@ AnyTable toAnyTable(const CellTable& table)
     return result;
 }
 
+namespace {
+
+bool holdsNumbers(const CellTable& table)
+{
+    for (std::size_t c = 0; c < table.columns(); ++c) {
+        const CellKind* kinds = table.columnKinds(c);
+        if (std::find(kinds, kinds + table.rows(), CellKind::number) != kinds + table.rows()) return true;
+    }
+    return false;
+}
+
+css::uno::Sequence<css::uno::Sequence<OUString>> toTextTable(const CellTable& table)
+{
+    css::uno::Sequence<css::uno::Sequence<OUString>> result(static_cast<sal_Int32>(table.rows()));
+    auto* rows = result.getArray();
+    for (std::size_t r = 0; r < table.rows(); ++r) {
+        css::uno::Sequence<OUString> row(static_cast<sal_Int32>(table.columns()));
+        auto* cells = row.getArray();
+        for (std::size_t c = 0; c < table.columns(); ++c)
+            if (table.isText(r, c)) cells[c] = fromUtf8(table.text(r, c));
+        rows[r] = std::move(row);
+    }
+    return result;
+}
+
+} // namespace
+
+css::uno::Any toResult(const CellTable& table)
+{
+    if (holdsNumbers(table)) return css::uno::Any(toAnyTable(table));
+    return css::uno::Any(toTextTable(table));
+}
+
 } // namespace isoquant::addin

@@ -32,4 +32,11 @@ CellTable toOptionalTable(const css::uno::Any& value, const std::string& argumen
 css::uno::Any toAny(const Cell& cell);
 AnyTable toAnyTable(const CellTable& table);
 
+// A table result as the `any` an array function returns. A table without numbers (verdict columns,
+// messages) goes as sequence<sequence<string>>: LibreOffice 7.4 enters those texts in the
+// document's shared-string pool, so that =, IF, COUNTIF, MATCH and VLOOKUP find them. A table
+// with numbers must go as sequence<sequence<any>>, whose texts 7.4 does not pool (DEVELOPERS.md,
+// "Texts in array results").
+css::uno::Any toResult(const CellTable& table);
+
 } // namespace isoquant::addin

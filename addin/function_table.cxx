@@ -42,8 +42,12 @@ constexpr ArgumentInfo incompleteRowsArgument{
                        "such a cell is an error. A cell with an error value (#N/A) stops Calc before the call "
                        "(Err:504)."};
 constexpr ArgumentInfo modelArgument{
-    "model", "A PRODFIT table, or a typed table of labels and values: a form row (cobb-douglas, ces or "
-             "translog), ln A (or A), then the form's parameter rows (see the README)."};
+    "model", "A PRODFIT table, or a table typed by hand, labels in the first column and values in the second. "
+             "Row 1: form | cobb-douglas (or ces, translog). Row 2: A | value (or ln A | value). Cobb-douglas: "
+             "then one row per input, its label | its exponent. Ces: then delta, sigma (or rho) and nu rows, and "
+             "optionally a row inputs | label 1 | label 2. Translog: then one row per input (label | first-order "
+             "coefficient) and one per pair i <= j (label*label | coefficient, 0 without interaction). An "
+             "optional smearing factor row serves PRODOUTPUT's mean."};
 constexpr ArgumentInfo bundlesArgument{
     "inputs", "One row of input values in the model's input order, or several rows: the result is then a column "
               "with one value per row."};
@@ -52,11 +56,10 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
 constexpr ArgumentInfo secondInputArgument{"input j", "The second input: its number or its label."};
-constexpr ArgumentInfo pairFirstArgument{"i", "The first input: its number (1 for the first) or its label."};
-constexpr ArgumentInfo pairSecondArgument{"j", "The second input: its number or its label."};
 constexpr ArgumentInfo targetArgument{"target output", "The output to be produced, a positive number."};
 constexpr ArgumentInfo pricesArgument{
-    "prices", "One positive price per input, in the model's input order: a row or a column of numbers."};
+    "input prices", "One positive price per input, in the model's input order: a row of prices gives a row of "
+                    "results, a column of prices a column."};
 
 } // namespace
 
@@ -159,16 +162,16 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodMrts", "PRODMRTS",
          "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
          "of input i replaces at unchanged output (marginal product of i over that of j).",
-         {modelArgument, bundlesArgument, pairFirstArgument, pairSecondArgument}},
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
         {"prodSubstitution", "PRODSUBSTITUTION",
          "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
          "the two inputs per 1% change in their relative price along the isoquant.",
-         {modelArgument, bundlesArgument, pairFirstArgument, pairSecondArgument,
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
                    "given)."}}},
         {"prodLeastCost", "PRODLEASTCOST",
-         "Cheapest input amounts that produce the target output at the given input prices: a row, one amount per "
-         "input (enter as an array formula).",
+         "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
+         "a row or a column like the prices (enter as an array formula).",
          {modelArgument, targetArgument, pricesArgument}},
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
@@ -176,23 +179,24 @@ const std::vector<FunctionInfo>& functionTable()
          {modelArgument, targetArgument, pricesArgument,
           {"what", "\"total\" (default), \"marginal\" or \"average\"."}}},
         {"prodBudget", "PRODBUDGET",
-         "Best split of a fixed budget among the inputs: a row with the amount of each input that gives the most "
-         "output for exactly that spending, then that output (enter as an array formula).",
+         "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
+         "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
          {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
         {"prodProfit", "PRODPROFIT",
-         "Profit-maximising plan at the given output and input prices: a row with the amount of each input, then "
-         "output and profit (enter as an array formula). Under constant or increasing returns to scale there is no "
-         "finite maximum, and the cell says so.",
+         "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
+         "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
+         "increasing returns to scale there is no finite maximum, and the cell says so.",
          {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
-          {"input prices", "One positive price per input, in the model's input order: a row or a column."}}},
+          pricesArgument}},
         {"prodIsoquant", "PRODISOQUANT",
          "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
          "level, a column (for an XY chart). A row without such an amount says so.",
          {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
           {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
                                 "per input, the others held at each row's values (input j's column is not read)."},
-          {"i", "Optional: the input whose values are given (default: the first)."},
-          {"j", "Optional: the input solved for (default: the first other input)."}}},
+          {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
+          {"input j", "Optional: the input solved for, its number or its label (default: the first other "
+                      "input)."}}},
 #ifdef ISOQUANT_BENCHMARK_FLOOR
         // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
         {"benchFloor", "ISOQUANTFLOOR",

@@ -38,12 +38,23 @@ std::string failureMessage(Compute&& compute)
 }
 
 template <typename Compute>
-AnyTable guardedTable(Compute&& compute)
+Any guardedTable(Compute&& compute)
 {
-    AnyTable result;
-    const std::string message = failureMessage([&] { result = toAnyTable(compute()); });
-    if (!message.empty()) return toAnyTable(singleCell(message));
+    Any result;
+    const std::string message = failureMessage([&] { result = toResult(compute()); });
+    if (!message.empty()) return toResult(singleCell(message));
     return result;
+}
+
+// A result that is a list, one value per input, then any totals (PRODLEASTCOST, PRODBUDGET,
+// PRODPROFIT), comes from the core as a row; it follows the orientation of the prices: prices in
+// a column give a column, so that the array formula can be entered over a column.
+CellTable orientedLike(const CellTable& row, const CellTable& prices)
+{
+    if (prices.rows() <= prices.columns() || row.rows() != 1) return row;
+    CellTable column(row.columns(), 1);
+    for (std::size_t c = 0; c < row.columns(); ++c) column.set(c, 0, row.at(0, c));
+    return column;
 }
 
 template <typename Compute>
@@ -97,7 +108,7 @@ FitArguments ProductionFunctions::withPanelArguments(FitArguments arguments, con
     return arguments;
 }
 
-AnyTable ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
+Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                       const Any& constantReturns, const Any& errors, const Any& level,
                                       const Any& controls, const Any& groups, const Any& effects, const Any& trend,
                                       const Any& incompleteRows)
@@ -109,7 +120,7 @@ AnyTable ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& in
     });
 }
 
-Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs, const Any& rowLabel,
+Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs, const AnyTable& rowLabel,
                                   const Any& columnLabel, const Any& form, const Any& constantReturns,
                                   const Any& errors, const Any& level, const Any& controls, const Any& groups,
                                   const Any& effects, const Any& trend, const Any& incompleteRows)
@@ -118,34 +129,34 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
         const auto fit = fits_.fit(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
             incompleteRows));
-        return lookUpFit(*fit, toSingleCell(rowLabel, "row label"), toSingleCell(columnLabel, "column label"));
+        return lookUpFit(*fit, toSingleCell(Any(rowLabel), "row label"), toSingleCell(columnLabel, "column label"));
     });
 }
 
-AnyTable ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
+Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
 {
     return guardedTable([&] {
         return outputColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
     });
 }
 
-AnyTable ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const Any& input)
+Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
 {
     return guardedTable([&] {
         return marginalProductColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                     toSingleCell(input, "input"));
+                                     toSingleCell(Any(input), "input"));
     });
 }
 
-AnyTable ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const Any& input)
+Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
 {
     return guardedTable([&] {
         return elasticityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                toSingleCell(input, "input"));
+                                toSingleCell(Any(input), "input"));
     });
 }
 
-AnyTable ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
+Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
 {
     return guardedTable(
         [&] { return scaleColumn(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs")); });
@@ -157,7 +168,7 @@ Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
         [&] { return Cell(returnsVerdictCell(*models_.cells(model, "model"), toSingleCell(level, "level"))); });
 }
 
-AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                                       const Any& periods)
 {
     return guardedTable([&] {
@@ -166,7 +177,7 @@ AnyTable ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& out
     });
 }
 
-AnyTable ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
+Any ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
                                          const Any& method)
 {
     return guardedTable([&] {
@@ -175,7 +186,7 @@ AnyTable ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable&
     });
 }
 
-AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& shares, const Any& method,
+Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& shares, const Any& method,
                                         const Any& base)
 {
     return guardedTable([&] {
@@ -184,13 +195,13 @@ AnyTable ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTab
     });
 }
 
-AnyTable ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
+Any ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
     return guardedTable(
         [&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
-AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
+Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
 {
     return guardedTable([&] {
         return compareFormsTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
@@ -198,88 +209,96 @@ AnyTable ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable
     });
 }
 
-AnyTable ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const Any& inputI,
-                                         const Any& inputJ)
+Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                    const Any& inputJ)
 {
     return guardedTable([&] {
         return secondPartialColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
+                                   toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"));
     });
 }
 
-AnyTable ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const Any& input)
+Any ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
 {
     return guardedTable([&] {
         return inputReturnsColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                  toSingleCell(input, "input"));
+                                  toSingleCell(Any(input), "input"));
     });
 }
 
-AnyTable ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs, const Any& inputI,
-                                       const Any& inputJ)
+Any ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                  const AnyTable& inputJ)
 {
     return guardedTable([&] {
         return inputPairColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                               toSingleCell(inputI, "input i"), toSingleCell(inputJ, "input j"));
+                               toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
     });
 }
 
-AnyTable ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const Any& i, const Any& j)
+Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                  const AnyTable& inputJ)
 {
     return guardedTable([&] {
-        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
-                                   toSingleCell(j, "j"));
+        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
     });
 }
 
-AnyTable ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const Any& i,
-                                               const Any& j, const Any& kind)
+Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                          const AnyTable& inputJ, const Any& kind)
 {
     return guardedTable([&] {
-        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(i, "i"),
-                                  toSingleCell(j, "j"), toSingleCell(kind, "kind"));
+        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                  toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
+                                  toSingleCell(kind, "kind"));
     });
 }
 
-AnyTable ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices)
+Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
+                                       const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        return leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"),
-                            toCellTable(prices, "prices"));
+        const CellTable prices = toCellTable(inputPrices, "input prices");
+        return orientedLike(
+            leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
+            prices);
     });
 }
 
-AnyTable ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices,
-                                       const Any& what)
+Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
+                                  const Any& what)
 {
     return guardedTable([&] {
         return costCell(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"),
-                        toCellTable(prices, "prices"), toSingleCell(what, "what"));
+                        toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
     });
 }
 
-AnyTable ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices)
+Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        return budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"),
-                         toCellTable(prices, "prices"));
+        const CellTable prices = toCellTable(inputPrices, "input prices");
+        return orientedLike(budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"), prices),
+                            prices);
     });
 }
 
-AnyTable ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
+Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        return profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"),
-                         toCellTable(inputPrices, "input prices"));
+        const CellTable prices = toCellTable(inputPrices, "input prices");
+        return orientedLike(
+            profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
     });
 }
 
-AnyTable ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
-                                           const Any& i, const Any& j)
+Any ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
+                                      const Any& inputI, const Any& inputJ)
 {
     return guardedTable([&] {
         return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
-                              toCellTable(values, "values of input i"), toSingleCell(i, "i"), toSingleCell(j, "j"));
+                              toCellTable(values, "values of input i"), toSingleCell(inputI, "input i"),
+                              toSingleCell(inputJ, "input j"));
     });
 }
 

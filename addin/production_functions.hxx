@@ -30,48 +30,53 @@ public:
     using AnyTable = css::uno::Sequence<css::uno::Sequence<css::uno::Any>>;
 
     // XProductionFunctions
-    AnyTable SAL_CALL prodFit(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
+    css::uno::Any SAL_CALL prodFit(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
                               const css::uno::Any& level, const css::uno::Any& controls,
                               const css::uno::Any& groups, const css::uno::Any& effects, const css::uno::Any& trend,
                               const css::uno::Any& incompleteRows) override;
-    css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& rowLabel,
+    css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const AnyTable& rowLabel,
                                     const css::uno::Any& columnLabel, const css::uno::Any& form,
                                     const css::uno::Any& constantReturns, const css::uno::Any& errors,
                                     const css::uno::Any& level, const css::uno::Any& controls,
                                     const css::uno::Any& groups, const css::uno::Any& effects,
                                     const css::uno::Any& trend, const css::uno::Any& incompleteRows) override;
-    AnyTable SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& mean) override;
-    AnyTable SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
-    AnyTable SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
-    AnyTable SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
+    css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs,
+                                      const css::uno::Any& mean) override;
+    css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
+    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs,
+                                          const AnyTable& input) override;
+    css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
-    AnyTable SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+    css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                               const css::uno::Any& periods) override;
-    AnyTable SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
+    css::uno::Any SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
                                  const css::uno::Any& method) override;
-    AnyTable SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
+    css::uno::Any SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
                                 const css::uno::Any& base) override;
-    AnyTable SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
-    AnyTable SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& level) override;
-    AnyTable SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& inputI,
+    css::uno::Any SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
+    css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs,
+                                       const css::uno::Any& level) override;
+    css::uno::Any SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                  const css::uno::Any& inputJ) override;
-    AnyTable SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& input) override;
-    AnyTable SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& inputI,
-                               const css::uno::Any& inputJ) override;
-    AnyTable SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& i,
-                               const css::uno::Any& j) override;
-    AnyTable SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const css::uno::Any& i,
-                                       const css::uno::Any& j, const css::uno::Any& kind) override;
-    AnyTable SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                    const AnyTable& prices) override;
-    AnyTable SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& prices,
+    css::uno::Any SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs,
+                                            const AnyTable& input) override;
+    css::uno::Any SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                    const AnyTable& inputJ) override;
+    css::uno::Any SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                    const AnyTable& inputJ) override;
+    css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
+                                            const AnyTable& inputJ, const css::uno::Any& kind) override;
+    css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
+                                    const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                const css::uno::Any& what) override;
-    AnyTable SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& prices) override;
-    AnyTable SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
+    css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,
+                                      const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
                                  const AnyTable& inputPrices) override;
-    AnyTable SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
-                                   const css::uno::Any& i, const css::uno::Any& j) override;
+    css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
+                                   const css::uno::Any& inputI, const css::uno::Any& inputJ) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

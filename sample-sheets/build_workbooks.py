@@ -406,14 +406,15 @@ def bakery_planning(office, path):
     style.align_right(sheet.getCellRangeByName("B6:C6"))
     style.input_cells(sheet.getCellRangeByName("B7:C10"))
     for column in "BC":
+        # The prices are a column, so PRODLEASTCOST and PRODBUDGET give columns: INDEX picks row k.
         prices, target, budget = "%s7:%s8" % (column, column), "%s9" % column, "%s10" % column
         set_formula(sheet, column + "11", "=INDEX(PRODLEASTCOST(%s;%s;%s);1;1)" % (model, target, prices))
-        set_formula(sheet, column + "12", "=INDEX(PRODLEASTCOST(%s;%s;%s);1;2)" % (model, target, prices))
+        set_formula(sheet, column + "12", "=INDEX(PRODLEASTCOST(%s;%s;%s);2;1)" % (model, target, prices))
         set_formula(sheet, column + "13", "=PRODCOST(%s;%s;%s)" % (model, target, prices))
         set_formula(sheet, column + "14", '=PRODCOST(%s;%s;%s;"marginal")' % (model, target, prices))
         set_formula(sheet, column + "15", '=PRODCOST(%s;%s;%s;"average")' % (model, target, prices))
         for row, item in ((16, 1), (17, 2), (18, 3)):
-            set_formula(sheet, "%s%d" % (column, row), "=INDEX(PRODBUDGET(%s;%s;%s);1;%d)"
+            set_formula(sheet, "%s%d" % (column, row), "=INDEX(PRODBUDGET(%s;%s;%s);%d;1)"
                         % (model, budget, prices, item))
     style.number_format(doc, sheet.getCellRangeByName("B7:C10"), "0.00")
     style.number_format(doc, sheet.getCellRangeByName("B9:C10"), "0")

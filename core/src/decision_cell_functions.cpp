@@ -210,8 +210,8 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
 CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
     const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "i");
-    const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
+    const Eigen::Index i = readInputSelector(first, technology, "input i");
+    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string&) {
         // fᵢ/fⱼ = (eᵢ/xᵢ)/(eⱼ/xⱼ), from the elasticities so that Y cancels before it can overflow.
@@ -228,8 +228,8 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
                              const Cell& kind)
 {
     const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "i");
-    const Eigen::Index j = readOtherInput(i, second, technology, "i", "j");
+    const Eigen::Index i = readInputSelector(first, technology, "input i");
+    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
@@ -245,7 +245,7 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
 
 CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTable& prices)
 {
-    const DecisionSetup setup = readDecision(model, prices, "prices");
+    const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double level = readPositiveNumber(target, "target output");
     return decided([&] { return leastCostOf(setup, level); },
                    [&](const ProductionPlan& plan) {
@@ -256,7 +256,7 @@ CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTab
 
 CellTable costCell(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what)
 {
-    const DecisionSetup setup = readDecision(model, prices, "prices");
+    const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double level = readPositiveNumber(target, "target output");
     const CostMeasure measure = readCostMeasure(what);
     return decided([&] { return leastCostOf(setup, level); },
@@ -270,7 +270,7 @@ CellTable costCell(const CellTable& model, const Cell& target, const CellTable& 
 
 CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable& prices)
 {
-    const DecisionSetup setup = readDecision(model, prices, "prices");
+    const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double spending = readPositiveNumber(budget, "budget");
     return decided(
         [&] {
@@ -310,8 +310,9 @@ CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTa
     const ProductionModel technology = cachedProductionModel(model);
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
     if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
-    const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "i");
-    const Eigen::Index j = isOmitted(second) ? (i == 0 ? 1 : 0) : readOtherInput(i, second, technology, "i", "j");
+    const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "input i");
+    const Eigen::Index j =
+        isOmitted(second) ? (i == 0 ? 1 : 0) : readOtherInput(i, second, technology, "input i", "input j");
     const double logLevel = std::log(readPositiveNumber(level, "output level"));
 
     const std::string argument = "values of input i";

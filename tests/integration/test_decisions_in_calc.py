@@ -257,7 +257,7 @@ def error(text):
 # D43:F43, a model with a negative exponent in A41:B44, one of A = 1 and exponents 0.5, 0.4 in A111:B114.
 CASES = [
     ("a zero price", "PRODLEASTCOST($A$1:$B$4;1500;D41:E41)", "G41:H41",
-     error("prices: the price of input 2 is 0; prices must be positive")),
+     error("input prices: the price of input 2 is 0; prices must be positive")),
     ("a negative input price", "PRODPROFIT($A$6:$B$9;2;D42:E42)", "G43:J43",
      error("input prices: the price of input 1 is -3; prices must be positive")),
     ("a target of 0", "PRODCOST($A$1:$B$4;0;$D$1:$E$1)", "G45",
@@ -269,7 +269,7 @@ CASES = [
     ("an input index out of range", "PRODSECOND($A$1:$B$4;$G$1:$H$4;3)", "G51:G53",
      error("input i: 3 is not an input number; the model has 2 inputs")),
     ("an unknown input label", 'PRODMRTS($A$1:$B$4;$G$1:$H$4;1;"flour")', "G55:G57",
-     error("j: 'flour' is not an input of the model; its inputs are 'bakers', 'ovens'")),
+     error("input j: 'flour' is not an input of the model; its inputs are 'bakers', 'ovens'")),
     ("the same input twice", "PRODPAIR($A$1:$B$4;$G$1:$H$4;2;2)", "G59:G61",
      error("input j: is the same input as input i ('ovens'); give two different inputs")),
     ("an unknown elasticity kind", 'PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"hicks")', "G63:G65",
@@ -277,7 +277,7 @@ CASES = [
     ("an unknown cost measure", 'PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"mean")', "G67",
      error("what: 'mean' is not a cost measure; use \"total\", \"marginal\" or \"average\"")),
     ("three prices for two inputs", "PRODLEASTCOST($A$1:$B$4;1500;D43:F43)", "G69:H69",
-     error("prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)")),
+     error("input prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)")),
     ("an isoquant level of 0", "PRODISOQUANT($A$1:$B$4;0;H21:H31)", "G71:G81",
      error("output level: is 0; it must be positive")),
     ("a negative exponent", "PRODLEASTCOST(A41:B44;10;$D$1:$E$1)", "G83:H83",

@@ -190,9 +190,9 @@ BOOST_AUTO_TEST_CASE(bad_input_is_named)
     using isoquant::testing::messageOf;
     const CellTable model = bakery();
     BOOST_TEST(messageOf([&] { isoquant::leastCostRow(model, 400.0, pricesRow(18.0, 0.0)); }) ==
-               "prices: the price of input 2 is 0; prices must be positive");
+               "input prices: the price of input 2 is 0; prices must be positive");
     BOOST_TEST(messageOf([&] { isoquant::leastCostRow(model, 400.0, numberRange(Eigen::RowVector3d(1, 2, 3))); }) ==
-               "prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)");
+               "input prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)");
     BOOST_TEST(messageOf([&] { isoquant::costCell(model, -5.0, pricesRow(18.0, 45.0), {}); }) ==
                "target output: is -5; it must be positive");
     BOOST_TEST(messageOf([&] { isoquant::costCell(model, 5.0, pricesRow(18.0, 45.0), std::string("mean")); }) ==
