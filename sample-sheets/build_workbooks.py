@@ -146,7 +146,7 @@ def dairy_creameries(office, path):
         "and the sheet Creameries flags, row by row, where the fitted translog is not a well-behaved "
         "production function (PRODREGULAR)." % (truth["years"], len(truth["names"])),
         "Which cells to change: the yellow data cells on the sheet Creameries (C2:E%d). Everything else "
-        "recalculates. The fixed-effects table is the array formula in A1:G22 of the sheet Fixed effects; "
+        "recalculates. The fixed-effects table is the array formula in A1:G23 of the sheet Fixed effects; "
         "the comparison of forms, the CES and the translog tables are on the sheet Forms." % last,
         "Units: output in thousand EUR at %d prices, labour in thousand hours worked, capital (plant and "
         "equipment at replacement value) in thousand EUR at %d prices." % (first_year, first_year),
@@ -194,13 +194,13 @@ def dairy_creameries(office, path):
                         actual_range="C1:C%d" % last, fitted_range="F1:F%d" % last, anchor="I2", size_mm=(150, 90))
 
     sheet = doc.Sheets.getByName("Fixed effects")
-    table = "$A$1:$G$22"
-    set_array_formula(sheet, "A1:G22", '=PRODFIT(%s;%s;;;"cluster";;;%s;"fixed";%s)' % (output, inputs, groups, years))
+    table = "$A$1:$G$23"
+    set_array_formula(sheet, "A1:G23", '=PRODFIT(%s;%s;;;"cluster";;;%s;"fixed";%s)' % (output, inputs, groups, years))
     style.header(sheet.getCellRangeByName("A1:G1"))
-    style.number_format(doc, sheet.getCellRangeByName("B2:G22"), "0.0000")
+    style.number_format(doc, sheet.getCellRangeByName("B2:G23"), "0.0000")
     for count_cell in ("B6", "B18"):  # observations, groups
         style.number_format(doc, sheet.getCellRangeByName(count_cell), "0")
-    style.align_right(sheet.getCellRangeByName("B1:G22"))
+    style.align_right(sheet.getCellRangeByName("B1:G23"))
     set_values(sheet, "A24", [["In short"], ["technical change per year"], ["returns to scale"],
                               ["verdict (cluster errors)"], ["pooled fit, no effects or trend: labour"],
                               ["pooled fit, no effects or trend: capital"]])
