@@ -41,6 +41,10 @@ constexpr ArgumentInfo incompleteRowsArgument{
     "incomplete rows", "TRUE to leave out rows with a blank or text cell (the table counts them); FALSE or empty: "
                        "such a cell is an error. A cell with an error value (#N/A) stops Calc before the call "
                        "(Err:504)."};
+// The optional last argument of PRODGROWTH and PRODINDEX.
+constexpr ArgumentInfo periodNamesArgument{
+    "periods", "Optional: the year or name of each period (numbers or texts), as many rows as the periods, a "
+               "header row allowed. They label the table's rows and the messages instead of 2, 3, …."};
 constexpr ArgumentInfo modelArgument{
     "model", "A PRODFIT table, or a table typed by hand, labels in the first column and values in the second. "
              "Row 1: form | cobb-douglas (or ces, translog). Row 2: A | value (or ln A | value). Cobb-douglas: "
@@ -123,7 +127,8 @@ const std::vector<FunctionInfo>& functionTable()
                       "shares of the inputs, one column per input and one row per period, each row summing to 1 "
                       "within 0.01 (rescaled to exactly 1)."},
           {"method", "\"tornqvist\" (default: weights averaged over adjacent periods) or \"fixed\" (the constant "
-                     "elasticities of a cobb-douglas model)."}}},
+                     "elasticities of a cobb-douglas model)."},
+          periodNamesArgument}},
         {"prodIndex", "PRODINDEX",
          "Chained quantity index of several inputs weighted by their cost shares: one value per period, the first "
          "period = 1 unless a base is given.",
@@ -132,7 +137,8 @@ const std::vector<FunctionInfo>& functionTable()
           {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
                      "within 0.01 (rescaled to exactly 1)."},
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
-          {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."}}},
+          {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."},
+          periodNamesArgument}},
         {"prodRegular", "PRODREGULAR",
          "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
          "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",

@@ -178,20 +178,22 @@ Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, 
 }
 
 Any ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
-                                         const Any& method)
+                                         const Any& method, const Any& periods)
 {
     return guardedTable([&] {
         return growthAccountTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
-                                  toCellTable(weights, "weights"), toSingleCell(method, "method"));
+                                  toCellTable(weights, "weights"), toSingleCell(method, "method"),
+                                  toOptionalTable(periods, "periods"));
     });
 }
 
 Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& shares, const Any& method,
-                                        const Any& base)
+                                        const Any& base, const Any& periods)
 {
     return guardedTable([&] {
         return quantityIndexColumn(toCellTable(quantities, "quantities"), toCellTable(shares, "shares"),
-                                   toSingleCell(method, "method"), toSingleCell(base, "base"));
+                                   toSingleCell(method, "method"), toSingleCell(base, "base"),
+                                   toOptionalTable(periods, "periods"));
     });
 }
 

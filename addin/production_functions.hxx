@@ -51,9 +51,9 @@ public:
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                               const css::uno::Any& periods) override;
     css::uno::Any SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
-                                 const css::uno::Any& method) override;
+                                      const css::uno::Any& method, const css::uno::Any& periods) override;
     css::uno::Any SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
-                                const css::uno::Any& base) override;
+                                     const css::uno::Any& base, const css::uno::Any& periods) override;
     css::uno::Any SAL_CALL prodRegular(const AnyTable& model, const AnyTable& inputs) override;
     css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs,
                                        const css::uno::Any& level) override;

@@ -5,6 +5,7 @@
 #include "isoquant/index_numbers.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/model_cache.hpp"
+#include "isoquant/model_inputs.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/period_range.hpp"
 #include "isoquant/production_model.hpp"
@@ -142,7 +143,8 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
         result.form = model.form;
         return result;
     }
-    const NumericColumns shares = readPeriodColumns(weights, "weights", PeriodValueRule::nonNegative, "input");
+    NumericColumns shares = readPeriodColumns(weights, "weights", PeriodValueRule::nonNegative, "input");
+    shares.rowNames = inputs.rowNames;
     requireColumns(shares, "weights", k, "inputs has");
     requireSamePeriods(inputs, "inputs", shares, "weights");
     if (inputs.hasHeader && shares.hasHeader) requireSameLabels("weights", "column", shares.labels, "inputs column", inputs.labels);
@@ -221,12 +223,10 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
     const NumericColumns observed = readNumericColumns(output, "output", ValueRule::positive, "output");
     if (observed.values.cols() != 1)
         throw InputError("output: must be one column; it has " + std::to_string(observed.values.cols()));
-    const NumericColumns bundles = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
-    requireColumns(bundles, "inputs", technology.inputLabels.size(), "the model's inputs are");
+    const NumericColumns bundles = readModelInputs(inputs, technology);
     if (bundles.values.rows() != observed.values.rows())
         throw InputError("inputs: has " + plural(static_cast<std::size_t>(bundles.values.rows()), "row") +
                          " of data but output has " + plural(static_cast<std::size_t>(observed.values.rows()), "row"));
-    if (bundles.hasHeader) requireSameLabels("inputs", "column", bundles.labels, "the model's input", technology.inputLabels);
 
     const Eigen::VectorXd shifts =
         periods.empty() ? Eigen::VectorXd() : periodShifts(technology, periods, observed.values.rows());
@@ -239,11 +239,11 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
                              " gives a productivity too large or too small to represent");
         column.set(static_cast<std::size_t>(row), 0, levels(row));
     }
-    return column;
+    return underHeader(std::move(column), observed, "TFP");
 }
 
 CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, const CellTable& weights,
-                             const Cell& method)
+                             const Cell& method, const CellTable& periods)
 {
     const GrowthMethod chosen = readGrowthMethod(method);
     const NumericColumns observed = readPeriodColumns(output, "output", PeriodValueRule::positive, "output");
@@ -251,8 +251,10 @@ CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, c
         throw InputError("output: must be one column; it has " + std::to_string(observed.values.cols()));
     if (observed.values.rows() < 2)
         throw InputError("output: growth needs at least 2 periods; it has 1");
-    const NumericColumns quantities = readPeriodColumns(inputs, "inputs", PeriodValueRule::positive, "input");
+    NumericColumns quantities = readPeriodColumns(inputs, "inputs", PeriodValueRule::positive, "input");
     requireSamePeriods(observed, "output", quantities, "inputs");
+    const std::vector<Cell> names = periods.empty() ? std::vector<Cell>{} : readPeriodNames(periods, observed, "output");
+    for (const Cell& name : names) quantities.rowNames.push_back(periodNameText(name));
 
     const PeriodWeights periodWeights = readWeights(weights, quantities);
     const Eigen::MatrixXd interval = intervalWeights(periodWeights, chosen);
@@ -260,16 +262,20 @@ CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, c
     const GrowthAccount account = accountForGrowth(observed.values.col(0), quantities.values, interval);
     requireFinite(account, quantities);
     const bool inputsNamed = quantities.hasHeader || !periodWeights.labelled;
-    return growthTable(account, inputsNamed ? quantities.labels : periodWeights.labels);
+    return growthTable(account, inputsNamed ? quantities.labels : periodWeights.labels, names);
 }
 
 CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shares, const Cell& method,
-                              const Cell& base)
+                              const Cell& base, const CellTable& periods)
 {
     const IndexFormula formula = readIndexFormula(method);
     const double baseValue = readIndexBase(base);
-    const NumericColumns amounts = readPeriodColumns(quantities, "quantities", PeriodValueRule::positive, "item");
-    const NumericColumns weights = readPeriodColumns(shares, "shares", PeriodValueRule::nonNegative, "item");
+    NumericColumns amounts = readPeriodColumns(quantities, "quantities", PeriodValueRule::positive, "item");
+    if (!periods.empty())
+        for (const Cell& name : readPeriodNames(periods, amounts, "quantities"))
+            amounts.rowNames.push_back(periodNameText(name));
+    NumericColumns weights = readPeriodColumns(shares, "shares", PeriodValueRule::nonNegative, "item");
+    weights.rowNames = amounts.rowNames;
     requireColumns(weights, "shares", static_cast<std::size_t>(amounts.values.cols()), "quantities has");
     requireSamePeriods(amounts, "quantities", weights, "shares");
     if (amounts.hasHeader && weights.hasHeader)
@@ -286,7 +292,7 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
                              ": the index is too large or too small to represent");
         column.set(static_cast<std::size_t>(period), 0, value);
     }
-    return column;
+    return underHeader(std::move(column), amounts, "quantity index");
 }
 
 } // namespace isoquant

@@ -16,7 +16,8 @@ void writeRow(CellTable& table, std::size_t row, Cell period, const GrowthCompon
 
 } // namespace
 
-CellTable growthTable(const GrowthAccount& account, const std::vector<std::string>& inputLabels)
+CellTable growthTable(const GrowthAccount& account, const std::vector<std::string>& inputLabels,
+                      const std::vector<Cell>& periodNames)
 {
     const std::size_t periods = account.periods.size() + 1;
     CellTable table(growthTableRows(periods), growthTableColumns(inputLabels.size()));
@@ -28,7 +29,8 @@ CellTable growthTable(const GrowthAccount& account, const std::vector<std::strin
     table.set(0, column, productivityGrowthHeader);
 
     for (std::size_t interval = 0; interval < account.periods.size(); ++interval)
-        writeRow(table, interval + 1, static_cast<double>(interval + 2), account.periods[interval]);
+        writeRow(table, interval + 1, periodNames.empty() ? Cell(static_cast<double>(interval + 2)) : periodNames[interval + 1],
+                 account.periods[interval]);
     writeRow(table, periods, std::string(totalLabel), account.total);
     return table;
 }

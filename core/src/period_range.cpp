@@ -64,8 +64,37 @@ NumericColumns readPeriodColumns(const CellTable& range, const std::string& argu
 
 std::string periodPlace(const NumericColumns& columns, Eigen::Index index)
 {
-    return "period " + std::to_string(index + 1) + " (row " +
+    const std::string name = columns.rowNames.empty() ? std::to_string(index + 1)
+                                                      : columns.rowNames[static_cast<std::size_t>(index)];
+    return "period " + name + " (row " +
            std::to_string(static_cast<std::size_t>(index) + columns.firstDataRow()) + ")";
+}
+
+std::string periodNameText(const Cell& name)
+{
+    return isNumber(name) ? formatNumber(std::get<double>(name)) : std::get<std::string>(name);
+}
+
+std::vector<Cell> readPeriodNames(const CellTable& periods, const NumericColumns& rows,
+                                  const std::string& rowsArgument)
+{
+    const auto dataRows = static_cast<std::size_t>(rows.values.rows());
+    if (periods.columns() != 1)
+        throw InputError("periods: must be one column; it has " + std::to_string(periods.columns()));
+    if (periods.rows() != dataRows && periods.rows() != dataRows + 1)
+        throw InputError("periods: has " + plural(static_cast<Eigen::Index>(periods.rows()), "row") + " but " +
+                         rowsArgument + " has " + plural(static_cast<Eigen::Index>(dataRows), "period") +
+                         "; give one year or name per period (a header row may come first)");
+    const std::size_t first = periods.rows() - dataRows;
+    std::vector<Cell> names;
+    for (std::size_t row = first; row < periods.rows(); ++row) {
+        const Cell& cell = periods.at(row, 0);
+        const bool blank = isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty());
+        if (blank || (isNumber(cell) && !std::isfinite(std::get<double>(cell))))
+            throw InputError("periods: row " + std::to_string(row + 1) + " holds no year or name");
+        names.push_back(cell);
+    }
+    return names;
 }
 
 Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::string& argument)

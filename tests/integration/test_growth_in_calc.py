@@ -201,11 +201,11 @@ class IndexAndProductivityTest(GrowthTestCase):
     def setUpClass(cls):
         for m, method in enumerate(cls.METHODS):
             column = "ABCD"[m]
-            set_array_formula(SHEET, "%s51:%s58" % (column, column), '=PRODINDEX(C1:E9;F1:H9;"%s")' % method)
-            set_array_formula(SHEET, "%s61:%s68" % (column, column), '=PRODINDEX(C1:E9;F1:H9;"%s";100)' % method)
-        set_array_formula(SHEET, "F51:F58", "=PRODINDEX(C1:E9;F1:H9)")
+            set_array_formula(SHEET, "%s50:%s58" % (column, column), '=PRODINDEX(C1:E9;F1:H9;"%s")' % method)
+            set_array_formula(SHEET, "%s60:%s68" % (column, column), '=PRODINDEX(C1:E9;F1:H9;"%s";100)' % method)
+        set_array_formula(SHEET, "F50:F58", "=PRODINDEX(C1:E9;F1:H9)")
         set_array_formula(SHEET, "R31:X47", "=PRODFIT(B1:B9;C1:E9)")
-        set_array_formula(SHEET, "G51:G58", "=PRODTFP($R$31:$X$47;B1:B9;C1:E9)")
+        set_array_formula(SHEET, "G50:G58", "=PRODTFP($R$31:$X$47;B1:B9;C1:E9)")
         set_formula(SHEET, "H51", "=PRODTFP($R$31:$X$47;B9;C9:E9)")
         recalc(DOC)
 
@@ -228,6 +228,11 @@ class IndexAndProductivityTest(GrowthTestCase):
         for t in range(51, 59):
             laspeyres, paasche, fisher = (get_cell(SHEET, "%s%d" % (c, t)) for c in "BCD")
             self.assertLessEqual(abs(fisher - math.sqrt(laspeyres * paasche)), FORMULA_TOLERANCE * fisher)
+
+    def test_columns_under_a_header_row_start_with_their_own_header_cell(self):
+        # entered over rows 50-58 beside the ranges' header row 1-9: the header cells line up
+        self.assertEqual(get_cell(SHEET, "A50"), "quantity index")
+        self.assertEqual(get_cell(SHEET, "G50"), "TFP")
 
     def test_productivity_on_the_fitting_sample(self):
         levels = [row[0] for row in get_range(SHEET, "G51:G58")]
@@ -275,9 +280,9 @@ class RescaledSharesAndPeriodsTest(GrowthTestCase):
         for m, method in enumerate(IndexAndProductivityTest.METHODS):
             for shares, first_column in [("AC301:AE309", 0), ("AF301:AH309", 4)]:
                 column = ["AJ", "AK", "AL", "AM", "AN", "AO", "AP", "AQ"][first_column + m]
-                set_array_formula(SHEET, "%s302:%s309" % (column, column),
+                set_array_formula(SHEET, "%s301:%s309" % (column, column),
                                   '=PRODINDEX(Z301:AB309;%s;"%s";100)' % (shares, method))
-                set_array_formula(SHEET, "%s312:%s319" % (column, column),
+                set_array_formula(SHEET, "%s311:%s319" % (column, column),
                                   '=PRODINDEX(AA311:AC319;%s;"%s";100)' % (shares, method))
         set_array_formula(SHEET, "AJ321:AP329", "=PRODGROWTH(Z311:Z319;AA311:AC319;AC301:AE309)")
         set_array_formula(SHEET, "AJ331:AP339", "=PRODGROWTH(Z311:Z319;AA311:AC319;AF301:AH309)")
@@ -286,12 +291,12 @@ class RescaledSharesAndPeriodsTest(GrowthTestCase):
         edge[2] = [0.5, 0.35, 0.14]
         edge[3] = [0.5, 0.36, 0.15]
         set_values(SHEET, "Z341", edge)
-        set_array_formula(SHEET, "AJ342:AJ349", '=PRODINDEX(C1:E9;Z341:AB349;"laspeyres")')
+        set_array_formula(SHEET, "AJ341:AJ349", '=PRODINDEX(C1:E9;Z341:AB349;"laspeyres")')
 
         # The tile plant with a trend in its year column (A1:A9): 3 inputs, 18 + 2 + 1 = 21 rows.
         set_array_formula(SHEET, "AF261:AL281", "=PRODFIT(B1:B9;C1:E9;;;;;;;;A1:A9)")
-        set_array_formula(SHEET, "AN262:AN269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9;A1:A9)")
-        set_array_formula(SHEET, "AO262:AO269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9)")
+        set_array_formula(SHEET, "AN261:AN269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9;A1:A9)")
+        set_array_formula(SHEET, "AO261:AO269", "=PRODTFP($AF$261:$AL$281;B1:B9;C1:E9)")
         # The kilns: fixed effects and a trend (17 + 2 + 1 + 2 + 1 = 23 rows), fixed effects alone (21).
         cls.kilns = kiln_panel()
         last = len(cls.kilns) + 200
@@ -397,6 +402,9 @@ ERROR_CASES = [
     ("shares that do not sum to 1", "PRODINDEX(C1:E9;J71:L79)", "J141:J148",
      error("shares: period 4 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 within "
            "0.01 (0.99 to 1.01, both included)")),
+    ("shares that do not sum to 1, periods named", "PRODINDEX(C1:E9;J71:L79;;;AR1:AR9)", "J201:J208",
+     error("shares: period FY2020 (row 5): the shares sum to 0.9; the cost shares of a period must sum to 1 within "
+           "0.01 (0.99 to 1.01, both included)")),
     ('"fixed" with cost shares', 'PRODGROWTH(B1:B9;C1:E9;F1:H9;"fixed")', "J151:P159",
      error('method: "fixed" uses a model\'s constant elasticities; with cost shares as weights use "tornqvist"')),
     ("an unknown index method", 'PRODINDEX(C1:E9;F1:H9;"chain")', "J161:J168",
@@ -422,6 +430,7 @@ class GrowthErrorTest(GrowthTestCase):
         set_values(SHEET, "C71", zero)
         set_values(SHEET, "F71", swapped)
         set_values(SHEET, "J71", short)
+        set_values(SHEET, "AR1", [[name] for name in PERIOD_NAMES])
         if get_cell(SHEET, "R1") != "form":  # the typed model, when this class runs alone
             set_values(SHEET, "R1", [["form", "cobb-douglas"], ["A", 2.5], ["labour", 0.55], ["capital", 0.3],
                                      ["energy", 0.1]])
@@ -437,12 +446,34 @@ class GrowthErrorTest(GrowthTestCase):
         self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
 
 
+PERIOD_NAMES = ["season"] + ["FY%d" % year for year in range(2017, 2025)]  # invented names of the 8 years
+
+
+class PeriodNamesTest(GrowthTestCase):
+    """PRODGROWTH's optional periods label the table's rows instead of 2, 3, …"""
+
+    @classmethod
+    def setUpClass(cls):
+        set_values(SHEET, "AR1", [[name] for name in PERIOD_NAMES])
+        set_array_formula(SHEET, "AR11:AX19", "=PRODGROWTH(B1:B9;C1:E9;F1:H9;;AR1:AR9)")
+        set_array_formula(SHEET, "AZ11:BF19", "=PRODGROWTH(B1:B9;C1:E9;F1:H9)")
+        recalc(DOC)
+
+    def test_rows_carry_the_period_names(self):
+        named = get_range(SHEET, "AR11:AX19")
+        numbered = get_range(SHEET, "AZ11:BF19")
+        self.assertEqual([row[0] for row in named[1:]], PERIOD_NAMES[2:] + ["total"])
+        self.assertEqual([row[0] for row in numbered[1:]], [float(t) for t in range(2, 9)] + ["total"])
+        # same sheet: everything but the labels is the table without periods
+        self.assertEqual([row[1:] for row in named], [row[1:] for row in numbered])
+
+
 class GrowthFunctionWizardTest(unittest.TestCase):
     """The three functions are listed with their argument names; the optional ones are marked so."""
 
     EXPECTED = {"PRODTFP": (["model", "output", "inputs", "periods"], 3),
-                "PRODGROWTH": (["output", "inputs", "weights", "method"], 3),
-                "PRODINDEX": (["quantities", "shares", "method", "base"], 2)}
+                "PRODGROWTH": (["output", "inputs", "weights", "method", "periods"], 3),
+                "PRODINDEX": (["quantities", "shares", "method", "base", "periods"], 2)}
 
     def test_listed_with_arguments(self):
         descriptions = OFFICE.service_manager.createInstanceWithContext(

@@ -211,8 +211,8 @@ BOOST_AUTO_TEST_CASE(productivity_levels_are_the_tfp_path)
     const isoquant::CobbDouglas technology(0.3, exponents);
     const Generated data = generate(6, technology, 20);
     const CellTable model = isoquant::testing::typedCobbDouglas(0.3, exponents, labels);
-    const Eigen::VectorXd levels = isoquant::testing::columnValues(
-        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, labels)));
+    const Eigen::VectorXd levels = isoquant::testing::columnValuesUnder(
+        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, labels)), "TFP");
     const CellTable table = isoquant::growthAccountTable(labelledOutput(data.output),
                                                          numberRange(data.quantities, labels), model, {});
     for (Eigen::Index t = 0; t < 20; ++t) {
@@ -246,7 +246,7 @@ BOOST_AUTO_TEST_CASE(productivity_averages_one_on_the_fitting_sample)
     arguments.inputs = numberRange(inputs, {"labour", "capital"});
     const CellTable model = isoquant::fitTable(isoquant::fitFromArguments(arguments));
     const Eigen::VectorXd levels =
-        isoquant::testing::columnValues(isoquant::productivityColumn(model, arguments.output, arguments.inputs));
+        isoquant::testing::columnValuesUnder(isoquant::productivityColumn(model, arguments.output, arguments.inputs), "TFP");
     BOOST_TEST(std::fabs(levels.array().log().mean()) <= 1e-12);
     BOOST_TEST(std::fabs(levels.mean() - 1) <= 0.02);
     BOOST_TEST(levels.minCoeff() < 0.95); // the plants do differ
@@ -259,7 +259,7 @@ BOOST_AUTO_TEST_CASE(cobb_douglas_1928_productivity_has_geometric_mean_one)
     const auto arguments = isoquant::testing::cobbDouglas1928Arguments();
     const CellTable model = isoquant::fitTable(isoquant::fitFromArguments(arguments));
     const Eigen::VectorXd levels =
-        isoquant::testing::columnValues(isoquant::productivityColumn(model, arguments.output, arguments.inputs));
+        isoquant::testing::columnValuesUnder(isoquant::productivityColumn(model, arguments.output, arguments.inputs), "TFP");
     BOOST_TEST(levels.size() == 24);
     BOOST_TEST(std::fabs(levels.array().log().mean()) <= 1e-12);
 }

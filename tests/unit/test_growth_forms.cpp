@@ -87,8 +87,8 @@ BOOST_AUTO_TEST_CASE(typed_translog_model_through_the_cell_path)
     const CellTable table = isoquant::growthAccountTable(labelledOutput(data.output),
                                                          numberRange(data.quantities, labels), model, {});
     checkRowsAddUp(table);
-    const Eigen::VectorXd levels = isoquant::testing::columnValues(
-        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, labels)));
+    const Eigen::VectorXd levels = isoquant::testing::columnValuesUnder(
+        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, labels)), "TFP");
     double largestScaleEffect = 0;
     for (Eigen::Index t = 1; t < 25; ++t) {
         const auto row = static_cast<std::size_t>(t);
@@ -142,8 +142,8 @@ BOOST_AUTO_TEST_CASE(typed_ces_model_through_the_cell_path)
         BOOST_TEST_INFO("period " << t + 1);
         BOOST_TEST(std::fabs(number(table, row, 4) - 0.1 * contributions) <= recoveryTolerance);
     }
-    const Eigen::VectorXd levels = isoquant::testing::columnValues(
-        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, twoLabels)));
+    const Eigen::VectorXd levels = isoquant::testing::columnValuesUnder(
+        isoquant::productivityColumn(model, labelledOutput(data.output), numberRange(data.quantities, twoLabels)), "TFP");
     for (Eigen::Index t = 0; t < 20; ++t) {
         BOOST_TEST_INFO("period " << t + 1);
         BOOST_TEST(std::fabs(std::log(levels(t)) - data.logProductivity(t)) <= recoveryTolerance);
@@ -174,7 +174,7 @@ BOOST_AUTO_TEST_CASE(translog_fit_productivity_has_geometric_mean_one)
     arguments.form = std::string("translog");
     const CellTable model = isoquant::fitTable(isoquant::fitFromArguments(arguments));
     const Eigen::VectorXd levels =
-        isoquant::testing::columnValues(isoquant::productivityColumn(model, arguments.output, arguments.inputs));
+        isoquant::testing::columnValuesUnder(isoquant::productivityColumn(model, arguments.output, arguments.inputs), "TFP");
     BOOST_TEST(std::fabs(levels.array().log().mean()) <= 1e-12);
     BOOST_TEST(levels.minCoeff() < 0.95); // the plants do differ
 }
@@ -210,7 +210,7 @@ BOOST_AUTO_TEST_CASE(ces_fit_productivity_has_geometric_mean_one)
     arguments.form = std::string("ces");
     const CellTable model = isoquant::fitTable(isoquant::fitFromArguments(arguments));
     const Eigen::VectorXd levels =
-        isoquant::testing::columnValues(isoquant::productivityColumn(model, arguments.output, arguments.inputs));
+        isoquant::testing::columnValuesUnder(isoquant::productivityColumn(model, arguments.output, arguments.inputs), "TFP");
     BOOST_TEST(std::fabs(levels.array().log().mean()) <= 1e-9);
     BOOST_TEST(levels.minCoeff() < 0.95); // the plants do differ
 }

@@ -79,8 +79,10 @@ public:
     void column(const std::string& dataset, const std::string& series, const std::string& quantity,
                 const CellTable& values)
     {
-        for (std::size_t row = 0; row < values.rows(); ++row)
-            compare({dataset, series, quantity, std::to_string(row + 1), 0}, values.number(row, 0),
+        // A column over ranges with a header row starts with its own header cell (model_inputs.hpp).
+        const std::size_t first = values.isText(0, 0) ? 1 : 0;
+        for (std::size_t row = first; row < values.rows(); ++row)
+            compare({dataset, series, quantity, std::to_string(row + 1 - first), 0}, values.number(row, 0),
                     indexRelativeTolerance, true);
     }
 

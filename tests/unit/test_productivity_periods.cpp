@@ -20,7 +20,7 @@
 #include <random>
 
 using isoquant::CellTable;
-using isoquant::testing::columnValues;
+using isoquant::testing::columnValuesUnder;
 using isoquant::testing::messageOf;
 using isoquant::testing::numberRange;
 
@@ -76,7 +76,8 @@ Panel unbalancedPanel(unsigned seed)
 double meanLogProductivity(const isoquant::FitArguments& arguments, const CellTable& periods = {})
 {
     const CellTable table = isoquant::fitTable(isoquant::fitFromArguments(arguments));
-    return columnValues(isoquant::productivityColumn(table, arguments.output, arguments.inputs, periods))
+    // output has a header row, so the column starts with its header cell "TFP"
+    return columnValuesUnder(isoquant::productivityColumn(table, arguments.output, arguments.inputs, periods), "TFP")
         .array()
         .log()
         .mean();

@@ -22,6 +22,9 @@ struct NumericColumns {
     std::vector<std::string> labels; // from the header row, or "<prefix> 1", "<prefix> 2", …
     Eigen::MatrixXd values;          // data rows only
     bool hasHeader = false;
+    // Names of the data rows for messages (the periods PRODGROWTH and PRODINDEX are given); empty
+    // when the rows are only numbered.
+    std::vector<std::string> rowNames;
     std::size_t firstDataRow() const { return hasHeader ? 2 : 1; } // 1-based, as in messages
 };
 

@@ -8,6 +8,7 @@
 #include "isoquant/numeric_range.hpp"
 
 #include <string>
+#include <vector>
 
 namespace isoquant {
 
@@ -20,8 +21,18 @@ enum class PeriodValueRule {
 NumericColumns readPeriodColumns(const CellTable& range, const std::string& argument, PeriodValueRule rule,
                                  const std::string& defaultLabelPrefix);
 
-// "period 4 (row 5)" for the data row at 0-based `index` of `columns`.
+// "period 4 (row 5)" for the data row at 0-based `index` of `columns`; "period 2019 (row 5)" when
+// the rows are named (columns.rowNames).
 std::string periodPlace(const NumericColumns& columns, Eigen::Index index);
+
+// The `periods` argument of PRODGROWTH and PRODINDEX: one year or name (a number or a text) per
+// data row of `rows`, read from `argument`, under an optional header row (there exactly when the
+// column has one row more). Throws InputError naming "periods" and the row.
+std::vector<Cell> readPeriodNames(const CellTable& periods, const NumericColumns& rows,
+                                  const std::string& rowsArgument);
+
+// A period's name as text: "2019", "Q3".
+std::string periodNameText(const Cell& name);
 
 // How far a period's shares may stray from summing to 1: 0.99 ≤ Σᵢ sᵢ ≤ 1.01, both ends included.
 // The check only catches columns that are not shares at all, or shares of a different set of
