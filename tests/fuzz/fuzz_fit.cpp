@@ -58,7 +58,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
     try {
         const CellTable table = fitTable(fitFromArguments(arguments));
         requireFiniteNumbers(table);
-        const std::vector<std::string> labels{"R2", "F", "verdict", "returns to scale", "labour", "ln A", "groups", "nothing"};
+        const std::vector<std::string> labels{"R2",     "F",    "verdict", "returns to scale",
+                                              "labour", "ln A", "groups",  "nothing"};
         requireFiniteNumbers(singleCell(lookUpFitTable(table, fuzzedCell(data, labels), fuzzedCell(data, {"t", "low"}))));
     } catch (const InputError&) {
     }

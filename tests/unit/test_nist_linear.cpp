@@ -77,8 +77,8 @@ bool checkCertifiedValues(const NistCase& nistCase, const isoquant::LeastSquares
 // The route chosen is the one DEVELOPERS.md names (a documentation check).
 BOOST_DATA_TEST_CASE(nist_certified_values_are_reproduced, bdata::make(nistCases), nistCase)
 {
-    const bool expectDouble = std::any_of(std::begin(doubleRouteCases), std::end(doubleRouteCases),
-                                          [&](const NistCase& other) { return std::string(other.file) == nistCase.file; });
+    const auto sameFile = [&](const NistCase& other) { return std::string(other.file) == nistCase.file; };
+    const bool expectDouble = std::any_of(std::begin(doubleRouteCases), std::end(doubleRouteCases), sameFile);
     BOOST_TEST(checkCertifiedValues(nistCase, {}) == expectDouble, nistCase.file << " factorised in double");
 }
 
