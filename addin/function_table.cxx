@@ -146,7 +146,8 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodCompare", "PRODCOMPARE",
          "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
          "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
-         "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0).",
+         "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0). AIC = -2LL + 2p and "
+         "BIC = -2LL + p ln n, p the parameters column (sigma squared not counted).",
          {outputArgument, inputsArgument,
           {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
         {"prodSecond", "PRODSECOND",

@@ -176,14 +176,16 @@ class PlansTest(DecisionTestCase):
         recalc(DOC)
 
     def test_readme_figures(self):
-        # The README's worked example prints these rounded; each must round to what it prints.
+        # Documentation check, not an independent source: the README's worked example prints these
+        # rounded; each must round to what it prints (the checks below compare with the sources).
         printed = {"K33": "-0.0908", "L33": "0.5047", "M33": "0.42", "A21": "94.21", "B21": "26.92",
                    "C21": "2907.21", "D21": "1.6151", "E21": "1.9381", "A23": "162.04", "B23": "46.30",
                    "C23": "2875.31", "A25": "43.49", "B25": "13.53", "C25": "543.58", "D25": "347.89",
                    "I21": "89.32", "I23": "50.63", "I25": "33.84", "I27": "24.76", "I29": "19.19", "I31": "15.46"}
         for cell, figure in printed.items():
             decimals = len(figure.split(".")[1])
-            self.assertEqual("%.*f" % (decimals, get_cell(SHEET, cell)), figure, cell)
+            self.assertEqual("%.*f" % (decimals, get_cell(SHEET, cell)), figure,
+                             "%s (README, documentation check)" % cell)
 
     def test_least_cost_against_the_textbook(self):
         cost, bundle = varian_least_cost(GROWING, PRICES, 1500.0)  # Varian (1992), from memory

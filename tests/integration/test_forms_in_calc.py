@@ -29,11 +29,12 @@ sys.path.insert(0, HERE)
 sys.path.insert(0, os.path.join(HERE, "..", "reference"))
 
 from office import (  # noqa: E402
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
-    stop_module_office)
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, skip_missing_reference,
+    start_module_office, stop_module_office)
 from test_functions_in_calc import CalcTestCase, error, read_columns, row_of, write_columns  # noqa: E402
 
-try:  # reference libraries; their checks are skipped when these are missing
+try:  # reference libraries; their checks are skipped when these are missing (failed
+    # under ISOQUANT_REQUIRE_REFERENCES=1)
     import numpy as np
     import statsmodels.api as sm
     from scipy import optimize, stats
@@ -120,7 +121,7 @@ def translog_output(table, labels, x):
 class FormsTestCase(CalcTestCase):
     def need_reference(self):
         if forms_check is None:
-            self.skipTest("python3-scipy/statsmodels/numpy not importable: reference checks skipped")
+            skip_missing_reference(self, "python3-scipy/statsmodels/numpy not importable")
 
 
 class CesTest(FormsTestCase):

@@ -35,10 +35,11 @@ sys.path.insert(0, HERE)
 import uno  # noqa: E402  (Debian's python3-uno)
 
 from office import (  # noqa: E402  (needs the path above)
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
-    stop_module_office)
+    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, skip_missing_reference,
+    start_module_office, stop_module_office)
 
-try:  # reference libraries; their checks are skipped when these are missing
+try:  # reference libraries; their checks are skipped when these are missing (failed
+    # under ISOQUANT_REQUIRE_REFERENCES=1)
     import numpy as np
     import scipy.stats
     import statsmodels.api as sm
@@ -251,7 +252,7 @@ class CalcTestCase(unittest.TestCase):
     def need_statsmodels(self):
         """Call inside a subTest: skips just that subtest when the reference libraries are missing."""
         if sm is None:
-            self.skipTest("python3-statsmodels/scipy/numpy not importable: reference checks skipped")
+            skip_missing_reference(self, "python3-statsmodels/scipy/numpy not importable")
 
     def assert_message(self, value, message, what):
         """A cell shows exactly the message, as text (so no number)."""

@@ -168,10 +168,11 @@ class GrowthTableTest(GrowthTestCase):
             self.assert_rows_add_up(table)
         # The total row's output growth is ln(Y_8 / Y_1) (formula).
         self.assertLessEqual(abs(get_cell(SHEET, "K9") - math.log(1580 / 1200)), FORMULA_TOLERANCE)
-        # The README's worked example prints this total row rounded to 4 decimals.
+        # Documentation check, not an independent source (those are the formula checks above): the
+        # README's worked example prints this total row rounded to 4 decimals.
         printed = [0.2751, 0.0456, 0.1038, 0.0150, 0.0000, 0.1106]
         for value, figure in zip(get_range(SHEET, "K9:P9")[0], printed):
-            self.assertLessEqual(abs(value - figure), 0.00005, "README total row")
+            self.assertLessEqual(abs(value - figure), 0.00005, "README total row (documentation check)")
 
     def test_with_a_typed_model(self):
         weights = [[0.55, 0.3, 0.1]] * N

@@ -1,11 +1,13 @@
-"""What the reference scripts in this folder share: their command line, the skip when a Debian
-library is missing, and writing their figures for the C++ checks."""
+"""What the reference scripts in this folder share: their command line, the skip (or the failure,
+under ISOQUANT_REQUIRE_REFERENCES=1) when a Debian library is missing, and writing their figures
+for the C++ checks."""
 
 import csv
 import os
 import sys
 
 SKIP = 77  # the fixtures' SKIP_RETURN_CODE (add_reference_check in tests/CMakeLists.txt)
+MISSING_REQUIRED = 1  # a plain failure, under ISOQUANT_REQUIRE_REFERENCES=1
 
 
 def paths(usage):
@@ -20,8 +22,18 @@ def paths(usage):
     return data_dir, output_path
 
 
+def references_required():
+    """True under ISOQUANT_REQUIRE_REFERENCES=1 (the CMake option of that name sets it for the tests)."""
+    return os.environ.get("ISOQUANT_REQUIRE_REFERENCES") == "1"
+
+
 def skipped(libraries, error):
-    """The exit code for a missing library, after saying so."""
+    """The exit code for a missing library, after saying so: the skip code, or a failure when the
+    references are required."""
+    if references_required():
+        print(f"{libraries} is not importable ({error}) but ISOQUANT_REQUIRE_REFERENCES=1: failing",
+              file=sys.stderr)
+        return MISSING_REQUIRED
     print(f"{libraries} is not importable ({error}); skipping", file=sys.stderr)
     return SKIP
 

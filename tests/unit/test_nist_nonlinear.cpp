@@ -1,9 +1,10 @@
 // NIST StRD nonlinear set Misra1a through the core's nonlinear least squares, from both of NIST's
 // start values. Source: NIST/ITL Statistical Reference Datasets, Misra1a (certified values copied
-// in tests/data/README.md). Accuracy by the log relative error (LRE, McCullough 1998); the issue's
-// target is LRE ≥ 6 on both parameters and on the residual sum of squares. The certified standard
-// deviations are checked to the same LRE, since the CES table's standard errors come from the same
-// inference code.
+// in tests/data/README.md). Accuracy by the log relative error (LRE, McCullough 1998); required is
+// what DEVELOPERS.md ("Numerical choices") claims, LRE ≥ 9.4 from both start values, on both
+// parameters, the residual sum of squares, the residual SD and the certified standard deviations
+// (the CES table's standard errors come from the same inference code); lowest reached 9.50 (SD of
+// b1 from start 1).
 #include "isoquant/nonlinear_least_squares.hpp"
 #include "csv_table.hpp"
 #include "nist_dataset.hpp"
@@ -27,7 +28,7 @@ constexpr double certifiedSd1 = 2.7070075241E+00;
 constexpr double certifiedSd2 = 7.2668688436E-06;
 constexpr double certifiedResidualSumOfSquares = 1.2455138894E-01;
 constexpr double certifiedResidualSd = 1.0187876330E-01;
-constexpr double requiredLre = 6.0;
+constexpr double requiredLre = 9.4;
 
 // y = b1·(1 − exp(−b2·x))
 class Misra1a : public isoquant::NonlinearModel {
