@@ -14,6 +14,18 @@
 
 namespace isoquant {
 
+bool trendCountsDays(const Eigen::VectorXd& periods)
+{
+    constexpr double smallestDateSerial = 3000, shortestDateStep = 28;
+    std::vector<double> distinct(periods.data(), periods.data() + periods.size());
+    std::sort(distinct.begin(), distinct.end());
+    distinct.erase(std::unique(distinct.begin(), distinct.end()), distinct.end());
+    if (distinct.size() < 2 || distinct.front() <= smallestDateSerial) return false;
+    for (std::size_t i = 1; i < distinct.size(); ++i)
+        if (distinct[i] - distinct[i - 1] < shortestDateStep) return false;
+    return true;
+}
+
 namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
@@ -202,18 +214,6 @@ ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index
 {
     return {regression.coefficients(column), regression.standardErrors(column), regression.tStatistics(column),
             regression.pValues(column),      regression.lowerBounds(column),    regression.upperBounds(column)};
-}
-
-bool trendCountsDays(const Eigen::VectorXd& periods)
-{
-    constexpr double smallestDateSerial = 3000, shortestDateStep = 28;
-    std::vector<double> distinct(periods.data(), periods.data() + periods.size());
-    std::sort(distinct.begin(), distinct.end());
-    distinct.erase(std::unique(distinct.begin(), distinct.end()), distinct.end());
-    if (distinct.size() < 2 || distinct.front() <= smallestDateSerial) return false;
-    for (std::size_t i = 1; i < distinct.size(); ++i)
-        if (distinct[i] - distinct[i - 1] < shortestDateStep) return false;
-    return true;
 }
 
 // `regression` is run.regression, moved into the fit.
