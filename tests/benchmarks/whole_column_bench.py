@@ -1,8 +1,11 @@
 """Whole columns against the exact range in Calc: =PRODSTAT(A:A;B:D;"labour") and
 =PRODSTAT(A1:A41;B1:D41;"labour") on 40 rows of invented seeded data (calc_benchmarks.invented).
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    ISOQUANT_OXT=$PWD/build/isoquant.oxt /usr/bin/python3 tests/benchmarks/whole_column_bench.py
+Run from the repository root with Debian's Python (the only one that imports uno), with the
+benchmark extension (target oxt_bench), which adds the do-nothing ISOQUANTFLOOR(output; inputs):
+    cmake --build build --target oxt_bench
+    ISOQUANT_OXT=$PWD/build/isoquant-bench.oxt /usr/bin/python3 tests/benchmarks/whole_column_bench.py
+ISOQUANTFLOOR over the whole columns times Calc's own part: building the argument arrays.
 
 Two figures per range, medians of RUNS:
 - first: a full recalculation (XCalculatable.calculateAll) right after new data were written, so the
@@ -25,7 +28,12 @@ from calc_benchmarks import invented  # noqa: E402
 from office import start_module_office, stop_module_office  # noqa: E402
 
 ROWS, RUNS = 40, 5
-RANGES = {"exact range": 'A1:A41;B1:D41', "whole columns": 'A:A;B:D'}
+FORMULAS = {
+    "exact range": '=PRODSTAT(A1:A41;B1:D41;"labour")',
+    "whole columns": '=PRODSTAT(A:A;B:D;"labour")',
+    "floor, exact": "=ISOQUANTFLOOR(A1:A41;B1:D41)",
+    "floor, whole": "=ISOQUANTFLOOR(A:A;B:D)",
+}
 
 
 def write_data(sheet, seed):
@@ -43,15 +51,15 @@ def timed(doc):
 
 def main():
     oxt = os.environ.get("ISOQUANT_OXT", os.path.join(os.path.dirname(os.path.dirname(HERE)), "build",
-                                                       "isoquant.oxt"))
+                                                       "isoquant-bench.oxt"))
     print("load average before: %.2f %.2f %.2f" % os.getloadavg())
     office, doc = start_module_office(oxt)
     try:
         doc.enableAutomaticCalculation(False)
         sheet = doc.Sheets.getByIndex(0)
         seed = 1
-        for name, ranges in RANGES.items():
-            sheet.getCellRangeByName("F1").setFormula('=PRODSTAT(%s;"labour")' % ranges)
+        for name, formula in FORMULAS.items():
+            sheet.getCellRangeByName("F1").setFormula(formula)
             first, again = [], []
             for _ in range(RUNS):
                 seed += 1  # new data: no fit in the cache is equal
@@ -59,7 +67,7 @@ def main():
                 first.append(timed(doc))
                 again.append(timed(doc))
             value = sheet.getCellRangeByName("F1").getValue()
-            print("%-14s first %.3f s  again %.3f s  (labour %.6f)" %
+            print("%-14s first %.4f s  again %.4f s  (value %.6f)" %
                   (name, statistics.median(first), statistics.median(again), value))
             sheet.getCellRangeByName("F1").setFormula("")
     finally:
