@@ -68,8 +68,11 @@ CellTable toCellTable(const AnyTable& range, const std::string& argument)
         for (sal_Int32 c = 0; c < row.getLength(); ++c) {
             // Numbers straight into the table: a million-row range is mostly numbers, and this
             // way a number cell costs no allocation and no temporary Cell.
-            if (cells[c].getValueTypeClass() == css::uno::TypeClass_DOUBLE)
+            const css::uno::TypeClass type = cells[c].getValueTypeClass();
+            if (type == css::uno::TypeClass_DOUBLE)
                 table.set(r, static_cast<std::size_t>(c), *static_cast<const double*>(cells[c].getValue()));
+            else if (type == css::uno::TypeClass_VOID)
+                continue; // already empty: a whole column's empty tail costs no call per cell
             else
                 table.set(r, static_cast<std::size_t>(c), scalarCell(cells[c], argument));
         }

@@ -36,11 +36,12 @@ constexpr ArgumentInfo effectsArgument{
                "estimator) or \"two-way\" (group and period effects; the periods come from trend)."};
 constexpr ArgumentInfo trendArgument{
     "trend", "Optional column of periods (years), as many rows as output: adds a time trend, reported as the "
-             "rate of technical change per period. With \"two-way\" effects it gives the periods instead."};
+             "rate of technical change per period (per day for dates: use =YEAR(date) for years). With "
+             "\"two-way\" effects it gives the periods instead."};
 constexpr ArgumentInfo incompleteRowsArgument{
     "incomplete rows", "TRUE to leave out rows with a blank or text cell (the table counts them); FALSE or empty: "
-                       "such a cell is an error. A cell with an error value (#N/A) stops Calc before the call "
-                       "(Err:504)."};
+                       "such a cell is an error. Empty rows below the data end it either way (whole columns "
+                       "work). A cell with an error value (#N/A) stops Calc before the call (Err:504)."};
 // The optional last argument of PRODGROWTH and PRODINDEX.
 constexpr ArgumentInfo periodNamesArgument{
     "periods", "Optional: the year or name of each period (numbers or texts), as many rows as the periods, a "
@@ -125,7 +126,8 @@ const std::vector<FunctionInfo>& functionTable()
                      "A first row of text names the inputs."},
           {"weights", "A model (a PRODFIT table or a typed model: its elasticities at each period's inputs) or cost "
                       "shares of the inputs, one column per input and one row per period, each row summing to 1 "
-                      "within 0.01 (rescaled to exactly 1)."},
+                      "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
+                      "share\" names the input."},
           {"method", "\"tornqvist\" (default: weights averaged over adjacent periods) or \"fixed\" (the constant "
                      "elasticities of a cobb-douglas model)."},
           periodNamesArgument}},
@@ -135,7 +137,8 @@ const std::vector<FunctionInfo>& functionTable()
          {{"quantities", "Quantities of each period, one column per input, positive. A first row of text names "
                          "them."},
           {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
-                     "within 0.01 (rescaled to exactly 1)."},
+                     "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
+                     "share\" names the input."},
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
           {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."},
           periodNamesArgument}},

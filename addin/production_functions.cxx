@@ -114,9 +114,10 @@ Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs,
                                       const Any& incompleteRows)
 {
     return guardedTable([&] {
-        return fitTable(*fits_.fit(withPanelArguments(
+        // Cut before the cache: a whole column's empty tail is neither hashed nor kept.
+        return fitTable(*fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
-            incompleteRows)));
+            incompleteRows))));
     });
 }
 
@@ -126,9 +127,9 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
                                   const Any& effects, const Any& trend, const Any& incompleteRows)
 {
     return guardedValue([&] {
-        const auto fit = fits_.fit(withPanelArguments(
+        const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
-            incompleteRows));
+            incompleteRows)));
         return lookUpFit(*fit, toSingleCell(Any(rowLabel), "row label"), toSingleCell(columnLabel, "column label"));
     });
 }

@@ -103,10 +103,38 @@ std::string unitLeverageMessage(Eigen::Index fitted, const std::vector<bool>& dr
     return row + "(the fit passes through it exactly); hc3 is undefined here — use hc1";
 }
 
+// The row count of the ranges once trailing rows empty in every one of them are cut: output's own
+// when the ranges differ in height (the shape check names that) or nothing is to cut.
+std::size_t rowsBeforeEmptyTail(const FitArguments& arguments)
+{
+    const std::size_t rows = arguments.output.rows();
+    std::size_t filled = 0;
+    for (const CellTable* range : {&arguments.output, &arguments.inputs, &arguments.controls, &arguments.groups,
+                                   &arguments.trend}) {
+        if (range->empty()) continue;
+        if (range->rows() != rows) return rows;
+        filled = std::max(filled, filledRows(*range));
+    }
+    return filled == 0 ? rows : filled;
+}
+
 } // namespace
+
+FitArguments withoutTrailingEmptyRows(FitArguments arguments)
+{
+    const std::size_t rows = rowsBeforeEmptyTail(arguments);
+    if (rows == arguments.output.rows()) return arguments;
+    for (CellTable* range : {&arguments.output, &arguments.inputs, &arguments.controls, &arguments.groups,
+                             &arguments.trend})
+        if (!range->empty()) *range = topRows(*range, rows);
+    return arguments;
+}
 
 ProductionFit fitFromArguments(const FitArguments& arguments)
 {
+    // Whole columns (B:B) end at their last value; only the cut ranges are copied.
+    if (rowsBeforeEmptyTail(arguments) != arguments.output.rows())
+        return fitFromArguments(withoutTrailingEmptyRows(arguments));
     ProductionFitOptions options;
     options.form = readFormArgument(arguments.form);
     options.constantReturns = readSwitchArgument(arguments.constantReturns, "constant returns");
@@ -247,7 +275,8 @@ CellTable compareFormsTable(const CellTable& output, const CellTable& inputs, co
     arguments.output = output;
     arguments.inputs = inputs;
     arguments.level = level;
-    return compareForms(arguments);
+    // Cut once here rather than in each of the three fits.
+    return compareForms(withoutTrailingEmptyRows(std::move(arguments)));
 }
 
 } // namespace isoquant

@@ -61,4 +61,36 @@ bool CellTable::operator==(const CellTable& other) const
     return true;
 }
 
+std::size_t filledRows(const CellTable& table)
+{
+    std::size_t filled = 0;
+    for (std::size_t column = 0; column < table.columns(); ++column) {
+        const CellKind* kinds = table.columnKinds(column);
+        // From the bottom up: a whole column's empty tail costs one byte compare a cell.
+        for (std::size_t row = table.rows(); row > filled; --row) {
+            const CellKind kind = kinds[row - 1];
+            if (kind == CellKind::number || (kind == CellKind::text && !table.text(row - 1, column).empty())) {
+                filled = row;
+                break;
+            }
+        }
+    }
+    return filled;
+}
+
+CellTable topRows(const CellTable& table, std::size_t rows)
+{
+    if (rows >= table.rows()) return table;
+    CellTable top(rows, table.columns());
+    for (std::size_t column = 0; column < table.columns(); ++column)
+        for (std::size_t row = 0; row < rows; ++row) {
+            switch (table.kind(row, column)) {
+            case CellKind::number: top.set(row, column, table.number(row, column)); break;
+            case CellKind::text: top.set(row, column, table.text(row, column)); break;
+            case CellKind::empty: break;
+            }
+        }
+    return top;
+}
+
 } // namespace isoquant

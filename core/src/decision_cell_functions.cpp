@@ -16,6 +16,7 @@
 #include "isoquant/substitution_elasticity.hpp"
 #include "isoquant/text.hpp"
 
+#include <charconv>
 #include <cmath>
 #include <limits>
 #include <optional>
@@ -150,6 +151,20 @@ CellTable decided(Solve solve, Layout layout)
     } catch (const NoSolution& status) {
         return singleCell(std::string(status.what()));
     }
+}
+
+// Under decreasing returns a profit maximum always exists, but where the price barely covers
+// the cost its output can be a speck (4.8e-17 hours of labour): below a millionth of one unit of
+// output the plan is reported as producing nothing (the threshold: common practice, no source).
+constexpr double negligibleOutput = 1e-6;
+
+void refuseNegligibleSize(const ProductionPlan& plan)
+{
+    if (!(plan.output < negligibleOutput)) return;
+    char digits[32]; // three significant digits: the size is read, not computed with
+    const auto end = std::to_chars(digits, digits + sizeof digits, plan.output, std::chars_format::general, 3).ptr;
+    throw NoSolution("No profitable size: producing nothing is best at these prices (the best output, " +
+                     std::string(digits, end) + ", is below a millionth of one unit)");
 }
 
 struct DecisionSetup {
@@ -295,6 +310,7 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
             return solveProfit(*setup.model.technology, price, setup.prices);
         },
         [&](const ProductionPlan& plan) {
+            refuseNegligibleSize(plan);
             requireRepresentable(plan, setup.model, "output price");
             const double profit = price * plan.output - plan.cost;
             if (!std::isfinite(profit)) throw InputError("output price: the answer is too large to represent");

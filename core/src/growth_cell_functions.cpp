@@ -147,7 +147,7 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
     shares.rowNames = inputs.rowNames;
     requireColumns(shares, "weights", k, "inputs has");
     requireSamePeriods(inputs, "inputs", shares, "weights");
-    if (inputs.hasHeader && shares.hasHeader) requireSameLabels("weights", "column", shares.labels, "inputs column", inputs.labels);
+    if (inputs.hasHeader && shares.hasHeader) requireShareLabels("weights", shares.labels, "inputs column", inputs.labels);
     result.values = sharesRescaledToOne(shares, "weights");
     result.labels = shares.labels;
     result.labelled = shares.hasHeader;
@@ -279,7 +279,7 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
     requireColumns(weights, "shares", static_cast<std::size_t>(amounts.values.cols()), "quantities has");
     requireSamePeriods(amounts, "quantities", weights, "shares");
     if (amounts.hasHeader && weights.hasHeader)
-        requireSameLabels("shares", "column", weights.labels, "quantities column", amounts.labels);
+        requireShareLabels("shares", weights.labels, "quantities column", amounts.labels);
     const Eigen::MatrixXd rescaled = sharesRescaledToOne(weights, "shares");
 
     const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, rescaled);

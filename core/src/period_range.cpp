@@ -3,7 +3,9 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/text.hpp"
 
+#include <algorithm>
 #include <cmath>
+#include <vector>
 
 namespace isoquant {
 
@@ -20,6 +22,32 @@ std::string cellPlace(const std::string& argument, std::size_t period, std::size
 std::string plural(Eigen::Index count, const std::string& noun)
 {
     return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
+}
+
+// The label's words, lower-cased: runs of letters and digits (and of any non-ASCII byte, so that
+// "Arbeit" and "Lohnanteil" stay whole words in any language).
+std::vector<std::string> wordsOf(const std::string& label)
+{
+    std::vector<std::string> words(1);
+    for (const char character : lowerCase(label)) {
+        const auto byte = static_cast<unsigned char>(character);
+        if (byte >= 0x80 || (byte >= 'a' && byte <= 'z') || (byte >= '0' && byte <= '9')) {
+            words.back() += character;
+        } else if (!words.back().empty()) {
+            words.emplace_back();
+        }
+    }
+    if (words.back().empty()) words.pop_back();
+    return words;
+}
+
+// "labour share", "share of labour", "labour cost share" name the input "labour": the word
+// "share" and the input's label as whole words, in its order.
+bool namesShareOf(const std::string& shareLabel, const std::string& inputLabel)
+{
+    const std::vector<std::string> share = wordsOf(shareLabel), input = wordsOf(inputLabel);
+    if (input.empty() || std::find(share.begin(), share.end(), "share") == share.end()) return false;
+    return std::search(share.begin(), share.end(), input.begin(), input.end()) != share.end();
 }
 
 } // namespace
@@ -105,6 +133,10 @@ Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::str
     Eigen::MatrixXd rescaled = shares.values;
     for (Eigen::Index period = 0; period < shares.values.rows(); ++period) {
         const double sum = shares.values.row(period).sum();
+        // Shares typed in percent sum to 100 (within 100 times the tolerance): say how to fix them.
+        if (std::fabs(sum - 100) <= 100 * shareSumTolerance + slack)
+            throw InputError(argument + ": " + periodPlace(shares, period) +
+                             ": the shares sum to 100: give them as fractions (divide by 100)");
         if (!(std::fabs(sum - 1) <= shareSumTolerance + slack))
             throw InputError(argument + ": " + periodPlace(shares, period) + ": the shares sum to " +
                              formatNumber(sum) + "; the cost shares of a period must sum to 1 within 0.01 "
@@ -124,6 +156,26 @@ void requireSamePeriods(const NumericColumns& reference, const std::string& refe
                " only)";
     throw InputError(otherArgument + ": has " + plural(other.values.rows(), "period") + " but " + referenceArgument +
                      " has " + plural(reference.values.rows(), "period") + hint);
+}
+
+void requireShareLabels(const std::string& argument, const std::vector<std::string>& shareLabels,
+                        const std::string& referenceNoun, const std::vector<std::string>& referenceLabels)
+{
+    for (std::size_t i = 0; i < shareLabels.size() && i < referenceLabels.size(); ++i) {
+        const std::string& label = shareLabels[i];
+        if (equalsIgnoringCase(label, referenceLabels[i])) continue;
+        std::vector<std::size_t> named;
+        for (std::size_t j = 0; j < referenceLabels.size(); ++j)
+            if (namesShareOf(label, referenceLabels[j])) named.push_back(j);
+        if (named.size() > 1)
+            throw InputError(argument + ": column " + std::to_string(i + 1) + " is " + quoted(label) +
+                             ", which names both " + quoted(referenceLabels[named[0]]) + " and " +
+                             quoted(referenceLabels[named[1]]) + "; head it with one label only");
+        if (named.size() == 1 && named[0] == i) continue;
+        throw InputError(argument + ": column " + std::to_string(i + 1) + " is " + quoted(label) + " but " +
+                         referenceNoun + " " + std::to_string(i + 1) + " is " + quoted(referenceLabels[i]) +
+                         "; give them the same labels, in the same order");
+    }
 }
 
 } // namespace isoquant

@@ -14,6 +14,18 @@
 
 namespace isoquant {
 
+bool trendCountsDays(const Eigen::VectorXd& periods)
+{
+    constexpr double smallestDateSerial = 3000, shortestDateStep = 28;
+    std::vector<double> distinct(periods.data(), periods.data() + periods.size());
+    std::sort(distinct.begin(), distinct.end());
+    distinct.erase(std::unique(distinct.begin(), distinct.end()), distinct.end());
+    if (distinct.size() < 2 || distinct.front() <= smallestDateSerial) return false;
+    for (std::size_t i = 1; i < distinct.size(); ++i)
+        if (distinct[i] - distinct[i - 1] < shortestDateStep) return false;
+    return true;
+}
+
 namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
@@ -225,6 +237,7 @@ PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, cons
     if (run.trendColumn) {
         summary.technicalChange = parameterAt(regression, *run.trendColumn);
         summary.latestPeriod = panel.periods.maxCoeff();
+        summary.trendLooksLikeDates = trendCountsDays(panel.periods);
     }
     summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
     summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;

@@ -134,6 +134,8 @@ inline std::string statusNote(const ProductionFit& fit)
     if (fit.translog && fit.translog->cobbDouglasTest.exceedsClusters)
         add(tooFewGroupsNote(cobbDouglasTestLabel, fit.translog->cobbDouglasTest.numeratorDegreesOfFreedom,
                              regression.clusterCount));
+    if (fit.panel.technicalChange && fit.panel.trendLooksLikeDates)
+        add("note: the trend counts days (dates?), so technical change is per day; for years use =YEAR(date)");
     const bool heteroskedasticityRobust =
         regression.covarianceKind == CovarianceKind::hc1 || regression.covarianceKind == CovarianceKind::hc3;
     if (heteroskedasticityRobust && fit.panel.effects != EffectsKind::none && fit.panel.groups > 0) {

@@ -1,6 +1,7 @@
 #include "isoquant/text.hpp"
 
 #include <charconv>
+#include <cmath>
 
 namespace isoquant {
 
@@ -37,10 +38,16 @@ bool endsWithIgnoringCase(std::string_view text, std::string_view ending)
 
 std::string formatNumber(double value)
 {
-    // The shortest text that reads back as the same double, in plain notation where that is the
-    // shorter ("100", "0.25", "1e-300").
+    // Rounded to 15 significant digits, as Calc shows a number, so that sums of typed values read
+    // as typed ("0.9896", not "0.9896000000000001"); then the shortest text of that double, in
+    // plain notation where that is the shorter ("100", "0.25", "1e-300").
+    // to_chars and from_chars, unlike printf and strtod, ignore the process's locale.
+    char rounded[32];
+    const auto end = std::to_chars(rounded, rounded + sizeof rounded, value, std::chars_format::general, 15).ptr;
+    double shown = value;
+    if (std::isfinite(value)) std::from_chars(rounded, end, shown);
     char buffer[32];
-    const auto written = std::to_chars(buffer, buffer + sizeof buffer, value);
+    const auto written = std::to_chars(buffer, buffer + sizeof buffer, shown);
     return std::string(buffer, written.ptr);
 }
 

@@ -81,6 +81,13 @@ def build_fixture(sheet):
     # Cost shares that do not add up in period 3 (row 4), and a period with a zero quantity.
     set_values(sheet, "AP1", [["L", "C"]] + [[0.7, 0.3] if i != 2 else [0.7, 0.5] for i in range(24)])
     set_values(sheet, "AR1", [["L", "C"]] + [[r[1], r[2]] if i != 4 else [r[1], 0.0] for i, r in enumerate(data)])
+    # Cost shares typed in percent; a share header that names both inputs.
+    set_values(sheet, "AX1", [["L", "C"]] + [[70.0, 30.0] for _ in range(24)])
+    set_values(sheet, "BC1", [["L and C share", "C share"]] + [[0.7, 0.3] for _ in range(24)])
+    # A decreasing-returns model (nu 0.95) and unit input prices: at output price 0.1 the best
+    # output is 7.39e-26 (y* = (nu*p/c)^(nu/(1-nu)), c = nu*A^(-1/nu)*prod (w_i/b_i)^(b_i/nu)).
+    set_values(sheet, "BF1", [["form", "cobb-douglas"], ["A", 1.0], ["L", 0.5], ["C", 0.45]])
+    set_values(sheet, "BI1", [[1.0, 1.0]])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

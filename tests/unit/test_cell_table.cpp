@@ -192,4 +192,33 @@ BOOST_AUTO_TEST_CASE(labels_compare_ignoring_ascii_case_only)
     BOOST_TEST(isoquant::lowerCase("CES @[Z]") == "ces @[z]");
 }
 
+// Numbers in messages read as Calc shows them (15 significant digits), shortest form.
+BOOST_AUTO_TEST_CASE(numbers_in_messages_are_rounded_to_what_matters)
+{
+    BOOST_TEST(isoquant::formatNumber(0.6 + 0.3896) == "0.9896");
+    BOOST_TEST(isoquant::formatNumber(0.1 + 0.2) == "0.3"); // 0.30000000000000004 in binary
+    BOOST_TEST(isoquant::formatNumber(100) == "100");
+    BOOST_TEST(isoquant::formatNumber(0.25) == "0.25");
+    BOOST_TEST(isoquant::formatNumber(-0.1) == "-0.1");
+    BOOST_TEST(isoquant::formatNumber(1e-300) == "1e-300");
+    BOOST_TEST(isoquant::formatNumber(2015) == "2015");
+    BOOST_TEST(isoquant::formatNumber(123456789.125) == "123456789.125");
+}
+
+BOOST_AUTO_TEST_CASE(filled_rows_and_top_rows)
+{
+    CellTable table(10, 2);
+    BOOST_TEST(isoquant::filledRows(table) == 0u);
+    table.set(0, 0, "label");
+    table.set(3, 1, 2.5);
+    table.set(6, 0, std::string()); // an empty text is no value
+    BOOST_TEST(isoquant::filledRows(table) == 4u);
+    const CellTable top = isoquant::topRows(table, 4);
+    BOOST_TEST((top.rows() == 4u && top.columns() == 2u));
+    BOOST_TEST(top.text(0, 0) == "label");
+    BOOST_TEST(top.number(3, 1) == 2.5);
+    BOOST_TEST(top.isEmpty(3, 0));
+    BOOST_TEST((isoquant::topRows(table, 20) == table));
+}
+
 BOOST_AUTO_TEST_SUITE_END()

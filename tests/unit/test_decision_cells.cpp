@@ -242,4 +242,28 @@ BOOST_AUTO_TEST_CASE(ces_models_use_the_ces_closed_form)
     BOOST_TEST(closeTo(number(rate, 0, 0), 18.0 / 45.0, 1e-10));
 }
 
+// A ces model with ν = 0.95 at prices where the profit maximum y* = (ν·p/c)^(ν/(1−ν)) (the
+// homogeneous-cost formula of homogeneous_cost.hpp) is a speck: at p = 5 it is 7.12e-16 (c =
+// 29.78 from the textbook ces cost function, computed here), reported as producing nothing; at
+// p = 40 it is 102.6, a plan.
+BOOST_AUTO_TEST_CASE(no_profitable_size_is_said_in_words)
+{
+    const CellTable model = typedRange({{std::string("form"), std::string("ces"), Cell{}},
+                                        {std::string("A"), 2.0, Cell{}},
+                                        {std::string("delta"), 0.4, Cell{}},
+                                        {std::string("rho"), 0.5, Cell{}},
+                                        {std::string("nu"), 0.95, Cell{}},
+                                        {std::string("inputs"), std::string("labour"), std::string("ovens")}});
+    const double sigma = 1 / 1.5;
+    const double bracket = std::pow(0.4, sigma) * std::pow(18.0, 1 - sigma) + std::pow(0.6, sigma) * std::pow(45.0, 1 - sigma);
+    const double unitCost = std::pow(2.0, -1 / 0.95) * std::pow(bracket, 1 / (1 - sigma));
+    BOOST_TEST(std::pow(0.95 * 5.0 / unitCost, 19.0) < 1e-6);
+    BOOST_TEST(text(isoquant::profitRow(model, 5.0, pricesRow(18.0, 45.0))) ==
+               "No profitable size: producing nothing is best at these prices (the best output, 7.12e-16, is below a "
+               "millionth of one unit)");
+    const CellTable plan = isoquant::profitRow(model, 40.0, pricesRow(18.0, 45.0));
+    BOOST_TEST_REQUIRE(plan.columns() == 4u);
+    BOOST_TEST(closeTo(number(plan, 0, 2), std::pow(0.95 * 40.0 / unitCost, 19.0), 1e-9));
+}
+
 BOOST_AUTO_TEST_SUITE_END()

@@ -10,6 +10,8 @@
 #include <boost/test/unit_test.hpp>
 
 #include <limits>
+#include <utility>
+#include <vector>
 
 using isoquant::Cell;
 using isoquant::CellTable;
@@ -213,6 +215,52 @@ BOOST_AUTO_TEST_CASE(results_too_large_are_reported)
     const CellTable weights = typedRange({{1.0}, {1.0}});
     BOOST_TEST(indexMessage(quantities, weights) ==
                "quantities: period 2 (row 2): the index is too large or too small to represent");
+}
+
+// Shares typed in percent get told to divide by 100; sums print as typed (0.5 + 0.3796 is
+// 0.8795999999999999 in binary, shown 0.8796).
+BOOST_AUTO_TEST_CASE(shares_in_percent_and_sums_as_typed)
+{
+    const CellTable percent =
+        typedRange({{text("labour"), text("capital")}, {60.0, 40.0}, {62.0, 38.0}, {61.0, 39.0}, {60.0, 40.0}});
+    const std::string divide = "period 1 (row 2): the shares sum to 100: give them as fractions (divide by 100)";
+    BOOST_TEST(growthMessage(output(), inputs(), percent) == "weights: " + divide);
+    BOOST_TEST(indexMessage(inputs(), percent) == "shares: " + divide);
+    BOOST_TEST(indexMessage(inputs(), with(with(shares(), 1, 0, 0.5), 1, 1, 0.3796)) ==
+               "shares: period 1 (row 2): the shares sum to 0.8796; the cost shares of a period must sum to 1 within "
+               "0.01 (0.99 to 1.01, both included)");
+}
+
+// Share columns headed the natural way match their input; one that names two inputs is refused.
+BOOST_AUTO_TEST_CASE(share_columns_headed_the_natural_way)
+{
+    const CellTable plain = isoquant::growthAccountTable(output(), inputs(), shares(), {});
+    for (const auto& [labour, capital] : std::vector<std::pair<const char*, const char*>>{
+             {"labour share", "capital share"}, {"share of labour", "share of capital"},
+             {"Labour cost share", "capital cost share"}}) {
+        CellTable headed = shares();
+        headed.set(0, 0, text(labour));
+        headed.set(0, 1, text(capital));
+        BOOST_TEST((isoquant::growthAccountTable(output(), inputs(), headed, {}) == plain), labour);
+        BOOST_TEST(isoquant::quantityIndexColumn(inputs(), headed, {}, {}).rows() == 4u);
+    }
+    CellTable swapped = shares();
+    swapped.set(0, 0, text("capital share"));
+    swapped.set(0, 1, text("labour share"));
+    BOOST_TEST(growthMessage(output(), inputs(), swapped) ==
+               "weights: column 1 is 'capital share' but inputs column 1 is 'labour'; give them the same labels, in "
+               "the same order");
+    CellTable both = shares();
+    both.set(0, 0, text("labour and capital share"));
+    BOOST_TEST(growthMessage(output(), inputs(), both) ==
+               "weights: column 1 is 'labour and capital share', which names both 'labour' and 'capital'; head it "
+               "with one label only");
+    // "labourer" is not the word "labour", and a label without the word "share" is not a share's.
+    CellTable near = shares();
+    near.set(0, 0, text("labourer share"));
+    BOOST_TEST(growthMessage(output(), inputs(), near).find("column 1 is 'labourer share' but") != std::string::npos);
+    near.set(0, 0, text("labour cost"));
+    BOOST_TEST(growthMessage(output(), inputs(), near).find("column 1 is 'labour cost' but") != std::string::npos);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

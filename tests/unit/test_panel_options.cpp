@@ -3,6 +3,7 @@
 // Cobb & Douglas (1928) (tests/data/README.md), and dropping incomplete rows.
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
+#include "isoquant/text.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
@@ -132,6 +133,62 @@ BOOST_AUTO_TEST_CASE(panel_arguments_are_checked)
         arguments.inputs.set(row, 1, arguments.groups.number(row, 0));
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
                "inputs: 'capital' does not vary within any group, so it cannot be told apart from the group effects");
+}
+
+// Whole columns (B:B): rows empty in every range below the data end it, so the fit is the one on
+// the exact range (Cobb & Douglas (1928), tests/data/README.md), equal to the last bit; a blank row
+// inside the data still needs the switch.
+BOOST_AUTO_TEST_CASE(whole_columns_end_at_their_last_value)
+{
+    const auto exact = isoquant::testing::cobbDouglas1928Arguments();
+    auto whole = exact;
+    const std::size_t rows = 1000; // 25 rows of data and header, then an empty tail
+    for (isoquant::CellTable* range : {&whole.output, &whole.inputs}) {
+        isoquant::CellTable longer(rows, range->columns());
+        for (std::size_t row = 0; row < range->rows(); ++row)
+            for (std::size_t column = 0; column < range->columns(); ++column) longer.set(row, column, range->at(row, column));
+        *range = longer;
+    }
+    const auto cut = isoquant::withoutTrailingEmptyRows(whole);
+    BOOST_TEST(cut.output.rows() == exact.output.rows());
+    BOOST_TEST((cut.inputs == exact.inputs));
+    const auto fromWhole = isoquant::fitFromArguments(whole);
+    const auto fromExact = isoquant::fitFromArguments(exact);
+    BOOST_TEST((fromWhole.estimates == fromExact.estimates));
+    BOOST_TEST(fromWhole.regression.observations == 24);
+    // A blank row inside the data is not a tail.
+    whole.output.setEmpty(9, 0);
+    whole.inputs.setEmpty(9, 0);
+    whole.inputs.setEmpty(9, 1);
+    BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(whole); }) ==
+               "output: row 10 is empty; every cell must hold a number");
+    // Ranges of different heights are not cut: the shape check names them.
+    auto uneven = exact;
+    uneven.inputs = whole.inputs;
+    BOOST_TEST(isoquant::withoutTrailingEmptyRows(uneven).inputs.rows() == rows);
+}
+
+// A trend of dates (Calc's day counts, year-ends 31 Dec 2015…2022 = 42369…44926) gives λ per day:
+// the form row says so. Years and periods 1, 2, … get no such note, nor do dates a day apart.
+BOOST_AUTO_TEST_CASE(a_trend_of_dates_is_noted_on_the_form_row)
+{
+    auto panel = plantPanel(11);
+    const auto byYear = isoquant::fitFromArguments(panel.arguments);
+    BOOST_TEST(!byYear.panel.trendLooksLikeDates);
+    const double yearEnds[] = {42369, 42735, 43100, 43465, 43830, 44196, 44561, 44926};
+    for (std::size_t row = 1; row < panel.arguments.trend.rows(); ++row)
+        panel.arguments.trend.set(row, 0, yearEnds[static_cast<int>(panel.arguments.trend.number(row, 0)) - 2015]);
+    const auto byDate = isoquant::fitFromArguments(panel.arguments);
+    BOOST_TEST(byDate.panel.trendLooksLikeDates);
+    const auto table = isoquant::fitTable(byDate);
+    std::size_t formRow = 0;
+    while (formRow < table.rows() && !(table.isText(formRow, 0) && table.text(formRow, 0) == "form")) ++formRow;
+    BOOST_TEST_REQUIRE((formRow < table.rows() && table.isText(formRow, 2)));
+    BOOST_TEST(table.text(formRow, 2) ==
+               "note: the trend counts days (dates?), so technical change is per day; for years use =YEAR(date)");
+    BOOST_TEST(!isoquant::trendCountsDays(Eigen::Vector3d(44926, 44927, 44928)));
+    BOOST_TEST(!isoquant::trendCountsDays(Eigen::Vector3d(1, 2, 3)));
+    BOOST_TEST(isoquant::trendCountsDays(Eigen::Vector3d(44926, 44957, 44985))); // month-ends, 28 days apart at least
 }
 
 BOOST_AUTO_TEST_SUITE_END()

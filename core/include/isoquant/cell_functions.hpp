@@ -34,6 +34,13 @@ struct FitArguments {
     }
 };
 
+// Rows at the bottom that are empty in every range argument (output, inputs, controls, groups,
+// trend) end the data: a whole column such as B:B is cut after its last value. Blank rows inside
+// the data are not cut (they still need the incomplete-rows switch). Ranges of different heights
+// are returned as they are, for the shape check to name.
+FitArguments withoutTrailingEmptyRows(FitArguments arguments);
+
+// Fits after withoutTrailingEmptyRows.
 ProductionFit fitFromArguments(const FitArguments& arguments);
 
 // Evaluators. `inputs` holds one row of input values per bundle (an optional header row of text

@@ -92,4 +92,11 @@ inline CellTable singleCell(const Cell& cell)
     return table;
 }
 
+// The rows down to the last one that holds a number or a non-empty text in any column (0 when
+// every cell is empty): a whole column selected as a range ends there.
+std::size_t filledRows(const CellTable& table);
+
+// The first `rows` rows of `table` (all of it when it has no more).
+CellTable topRows(const CellTable& table, std::size_t rows);
+
 } // namespace isoquant

@@ -44,6 +44,13 @@ inline constexpr double shareSumTolerance = 0.01;
 // and the first period whose shares miss 1 by more than shareSumTolerance.
 Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::string& argument);
 
+// Share columns line up with `referenceLabels` (the inputs' or items' header) by position; column
+// i must be headed by label i itself or name it the natural way: the word "share" and the label as
+// whole words ("labour share", "share of labour", "labour cost share" for "labour"). Throws
+// InputError naming `argument` for a column that heads another label, or that names two.
+void requireShareLabels(const std::string& argument, const std::vector<std::string>& shareLabels,
+                        const std::string& referenceNoun, const std::vector<std::string>& referenceLabels);
+
 // Throws InputError when `other` has a different number of periods than `reference`.
 void requireSamePeriods(const NumericColumns& reference, const std::string& referenceArgument,
                         const NumericColumns& other, const std::string& otherArgument);

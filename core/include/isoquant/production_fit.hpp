@@ -72,6 +72,7 @@ struct PanelSummary {
     Eigen::VectorXd periodEffects;
     std::optional<ParameterEstimate> technicalChange; // λ per period, with a trend
     double latestPeriod = 0;                          // t_last, with a trend
+    bool trendLooksLikeDates = false;                 // trendCountsDays: λ is then per day
     // ln A the evaluators use: ln A at the controls' means, plus λ·(t_last − t_first) with a
     // trend or the last period's effect under two-way effects. Under effects ln A is here the
     // mean group effect weighted by the groups' rows, Σ_g n_g·α_g / n, so that the log TFP of the
@@ -81,6 +82,12 @@ struct PanelSummary {
     Eigen::Index incompleteRowsDropped = 0;
     bool dropsIncompleteRows = false;   // the switch was on: the row count is shown
 };
+
+// Calc stores a date as a count of days (serial numbers near 45000 for 2023): a trend of dates,
+// say year-ends, gives λ per day. Taken for dates when every distinct period lies above 3000
+// (the serial of 1908-03-18; years stay below it) and consecutive ones are 28 days or more apart
+// (months or longer; periods counted 1, 2, … are 1 apart).
+bool trendCountsDays(const Eigen::VectorXd& periods);
 
 struct ReturnsToScale {
     double estimate = 0;       // ν = Σ bᵢ

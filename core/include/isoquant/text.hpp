@@ -11,7 +11,8 @@ std::string lowerCase(std::string_view text);
 bool equalsIgnoringCase(std::string_view left, std::string_view right);
 bool endsWithIgnoringCase(std::string_view text, std::string_view ending);
 
-// Shortest text that reads back as the same double ("0", "17", "0.25", "1e-300").
+// A number in a message: rounded to 15 significant digits (as Calc shows it), then the shortest
+// text of that value ("0", "17", "0.25", "0.9896" for 0.9896000000000001, "1e-300").
 std::string formatNumber(double value);
 
 // 'text' in single quotes, cut to a readable length.
