@@ -242,7 +242,7 @@ BOOST_AUTO_TEST_CASE(share_columns_headed_the_natural_way)
         headed.set(0, 0, text(labour));
         headed.set(0, 1, text(capital));
         BOOST_TEST((isoquant::growthAccountTable(output(), inputs(), headed, {}) == plain), labour);
-        BOOST_TEST(isoquant::quantityIndexColumn(inputs(), headed, {}, {}).rows() == 4u);
+        BOOST_TEST(isoquant::quantityIndexColumn(inputs(), headed, {}, {}).rows() == 5u);
     }
     CellTable swapped = shares();
     swapped.set(0, 0, text("capital share"));
