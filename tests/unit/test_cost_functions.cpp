@@ -216,28 +216,44 @@ BOOST_AUTO_TEST_CASE(fitted_cost_table_reads_back_as_a_cost_model)
     BOOST_TEST(closeTo(model.costElasticity(output, prices), tableNumber(table, "cost elasticity"), 1e-12));
 }
 
-BOOST_AUTO_TEST_CASE(efficient_scale_is_where_average_cost_is_lowest)
+BOOST_AUTO_TEST_CASE(translog_fit_finds_the_efficient_scale_of_a_u_shaped_average_cost)
 {
-    // An invented translog cost with a U-shaped average cost: ε = 0.6 + 0.1·ln y at unit prices.
-    const CellTable model = typedRange({{std::string("form"), std::string("translog cost")},
-                                        {std::string("constant"), 1.0},
-                                        {std::string("output"), 0.6},
-                                        {std::string("labour"), 0.7},
-                                        {std::string("energy"), 0.3},
-                                        {std::string("output*output"), 0.1},
-                                        {std::string("labour*labour"), 0.0},
-                                        {std::string("labour*energy"), 0.0},
-                                        {std::string("energy*energy"), 0.0},
-                                        {std::string("labour*output"), 0.0},
-                                        {std::string("energy*output"), 0.0}});
-    const double lowest = std::exp(4.0); // ε = 1 where ln y = (1 − 0.6)/0.1 (exact)
-    auto average = [&](double output) {
-        return isoquant::costModelColumn(model, numberRange(Eigen::MatrixXd::Constant(1, 1, output)),
-                                         numberRange(Eigen::RowVector2d(1.0, 1.0)), std::string("average"))
+    // An invented translog cost with a U-shaped average cost: ln C = 1 + 0.6 ln y + ½·0.1 (ln y)²
+    // + 0.7 ln w₁ + 0.3 ln w₂, so ε = 0.6 + 0.1 ln y is 1 at y* = e⁴ at any prices (exact).
+    std::mt19937 engine(42);
+    std::uniform_real_distribution<double> logOutput(0.0, 8.0), logPrice(0.0, std::log(20.0));
+    std::normal_distribution<double> disturbance(0.0, 0.02);
+    const int n = 200;
+    Eigen::MatrixXd cost(n, 1), output(n, 1), prices(n, 2);
+    for (int row = 0; row < n; ++row) {
+        const double ly = logOutput(engine), l1 = logPrice(engine), l2 = logPrice(engine);
+        output(row, 0) = std::exp(ly);
+        prices(row, 0) = std::exp(l1);
+        prices(row, 1) = std::exp(l2);
+        cost(row, 0) = std::exp(1.0 + 0.6 * ly + 0.05 * ly * ly + 0.7 * l1 + 0.3 * l2 + disturbance(engine));
+    }
+    isoquant::CostFitArguments arguments;
+    arguments.cost = numberRange(cost);
+    arguments.output = numberRange(output);
+    arguments.prices = numberRange(prices, {"labour", "energy"});
+    arguments.form = std::string("translog");
+    const CellTable table = isoquant::costFitTable(isoquant::costFitFromArguments(arguments));
+    const double lowest = std::exp(4.0);
+    requireNear(table, "efficient scale", lowest);
+    requireNear(table, "output*output", 0.1);
+    // Read back as a model: average cost is lowest at the table's efficient scale, at prices whose
+    // logs are the sample's means (the scale is defined there).
+    const double found = tableNumber(table, "efficient scale");
+    const Eigen::RowVector2d meanPrices(std::exp(prices.col(0).array().log().mean()),
+                                        std::exp(prices.col(1).array().log().mean()));
+    auto figure = [&](double level, const char* what) {
+        return isoquant::costModelColumn(table, numberRange(Eigen::MatrixXd::Constant(1, 1, level)),
+                                         numberRange(meanPrices), std::string(what))
             .number(0, 0);
     };
-    BOOST_TEST(average(lowest) < average(lowest * 1.01));
-    BOOST_TEST(average(lowest) < average(lowest / 1.01));
+    BOOST_TEST(closeTo(figure(found, "cost elasticity"), 1.0, 1e-12)); // the defining equation, to rounding
+    BOOST_TEST(figure(found, "average") < figure(found * 1.01, "average"));
+    BOOST_TEST(figure(found, "average") < figure(found / 1.01, "average"));
 }
 
 BOOST_AUTO_TEST_SUITE_END()
