@@ -1,5 +1,6 @@
 // PRODCOSTFIT and PRODCOST over a cost model with bad input: each message names the argument and,
 // where there is one, the row (counted from the top of the range, header included). Invented data.
+#include "isoquant/cell_functions.hpp"
 #include "isoquant/cost_cell_functions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
@@ -100,6 +101,10 @@ BOOST_AUTO_TEST_CASE(cost_models_and_their_arguments_are_checked)
                                         {std::string("output"), 0.8},
                                         {std::string("labour"), 0.6},
                                         {std::string("energy"), 0.4}});
+    // A cost model where a production model is needed says so (PRODOUTPUT, PRODLEASTCOST, …).
+    BOOST_TEST(messageOf([&] { isoquant::outputColumn(model, numberRange(Eigen::RowVector2d(3.0, 4.0))); }) ==
+               "model: is a cost model (a PRODCOSTFIT table or form \"... cost\"); this function needs a production "
+               "model, a PRODFIT table or a typed one (PRODCOST takes both)");
     Eigen::MatrixXd outputs(3, 1), prices(2, 2);
     outputs << 100, 0, 300;
     prices << 14, 0.3, 15, 0.3;
