@@ -99,7 +99,12 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     data.output = output.values.col(0);
     data.prices = prices.values;
     data.priceLabels = prices.labels;
-    return fitCost(data, options);
+    try {
+        return fitCost(data, options);
+    } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
+        throw InputError("errors: row " + std::to_string(static_cast<std::size_t>(leverage.row()) + cost.firstDataRow()) +
+                         " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
+    }
 }
 
 namespace {
