@@ -176,14 +176,14 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
          "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
-         "function (a PRODCOSTFIT table or a typed one); then a column of outputs gives a column of figures.",
+         "function (a PRODCOSTFIT table or a typed one). A column of outputs gives a column of figures.",
          {{"model", "A production model (see PRODFIT), or a cost model: a PRODCOSTFIT table, or typed rows form | "
                     "cobb-douglas cost, constant | value, output | value, then one row per input, its label | its "
                     "price coefficient."},
-          {"target output", "The output to be produced, a positive number; for a cost model also a column of "
-                            "outputs."},
-          {"input prices", "One positive price per input, in the model's order, as a row or a column; for a cost "
-                           "model with a column of outputs, one row of prices per output (or one row for all)."},
+          {"target output", "The output to be produced, a positive number, or a column of outputs (the result is "
+                            "then a column)."},
+          {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
+                           "column of outputs, one row of prices per output (or one row for all)."},
           {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
                    "per percent of output) or \"returns to scale\" (its inverse)."}}},
         {"prodCostFit", "PRODCOSTFIT",

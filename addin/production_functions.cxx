@@ -5,7 +5,6 @@
 
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/cost_model.hpp"
 #include "isoquant/decision_cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/growth_cell_functions.hpp"
@@ -271,12 +270,8 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
                                   const Any& what)
 {
     return guardedTable([&] {
-        const auto cells = models_.cells(model, "model");
-        if (isCostModel(*cells))
-            return costModelColumn(*cells, toCellTable(targetOutput, "target output"),
-                                   toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
-        return costCell(*cells, toSingleCell(Any(targetOutput), "target output"),
-                        toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+        return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
+                          toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
     });
 }
 

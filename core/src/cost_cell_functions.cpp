@@ -2,10 +2,13 @@
 
 #include "isoquant/cost_model.hpp"
 #include "isoquant/decision_arguments.hpp"
+#include "isoquant/decision_cell_functions.hpp"
+#include "isoquant/model_cache.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
+#include "isoquant/production_model.hpp"
 #include "isoquant/text.hpp"
 
 #include <cmath>
@@ -155,6 +158,43 @@ CellTable costModelColumn(const CellTable& model, const CellTable& target, const
         column.set(static_cast<std::size_t>(row), 0, figure);
     }
     return column;
+}
+
+
+namespace {
+
+// PRODCOST over a production model, one least-cost plan per output (costCell); a row without an
+// answer shows its sentence, a message names its row.
+CellTable productionCostColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    const NumericColumns outputs = readOneColumn(target, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs);
+    CellTable column(static_cast<std::size_t>(n), 1);
+    for (Eigen::Index row = 0; row < n; ++row) {
+        CellTable rowPrices(1, static_cast<std::size_t>(inputs));
+        for (Eigen::Index i = 0; i < inputs; ++i)
+            rowPrices.set(0, static_cast<std::size_t>(i), priceRows(priceRows.rows() == 1 ? 0 : row, i));
+        try {
+            column.set(static_cast<std::size_t>(row), 0, costCell(model, outputs.values(row, 0), rowPrices, what).at(0, 0));
+        } catch (const InputError& error) {
+            const std::string argument = "target output: ", message = error.what();
+            if (message.compare(0, argument.size(), argument) != 0) throw;
+            throw InputError(argument + "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                             ": " + message.substr(argument.size()));
+        }
+    }
+    return column;
+}
+
+} // namespace
+
+CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    if (isCostModel(model)) return costModelColumn(model, target, prices, what);
+    if (target.rows() == 1 && target.columns() == 1) return costCell(model, target.at(0, 0), prices, what);
+    return productionCostColumn(model, target, prices, what);
 }
 
 } // namespace isoquant

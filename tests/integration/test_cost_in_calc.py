@@ -159,6 +159,7 @@ class CostModelTest(CostTestCase):
             set_array_formula(SHEET, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
             set_array_formula(SHEET, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
             set_array_formula(SHEET, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
+        set_array_formula(SHEET, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
         recalc(DOC)
 
     def test_fitted_model_total_cost_is_the_median_prediction(self):
@@ -178,6 +179,13 @@ class CostModelTest(CostTestCase):
         for column, word, value in zip("RSTUV", WORDS, expected):
             self.assert_close(get_cell(SHEET, "%s12" % column), value, FORMULA_TOLERANCE, "typed cost model " + word)
             self.assert_close(get_cell(SHEET, "%s14" % column), value, FORMULA_TOLERANCE, "production model " + word)
+
+
+    def test_production_model_gives_a_column_of_marginal_costs(self):
+        for row in range(5):
+            y, prices = DATA[row][1], DATA[row][2:]
+            self.assert_close(get_cell(SHEET, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y), FORMULA_TOLERANCE,
+                              "marginal cost, row %d" % row)  # dual of Cobb-Douglas
 
 
 class CostBadInputTest(CostTestCase):

@@ -193,6 +193,16 @@ BOOST_AUTO_TEST_CASE(cost_model_gives_a_column_for_a_column_of_outputs)
     for (Eigen::Index row = 0; row < 3; ++row)
         BOOST_TEST(closeTo(column.number(static_cast<std::size_t>(row), 0),
                            std::exp(dualLogCost(outputs(row, 0), prices.row(row).transpose())) / outputs(row, 0), 1e-12));
+    // A production model gives the same column through its least-cost plans (duality, 1e-12 as above).
+    for (const auto& measure : measures) {
+        const CellTable viaProduction = isoquant::costColumn(productionModel(), numberRange(outputs, {"washes"}),
+                                                             numberRange(prices, inputLabels), measure);
+        const CellTable viaCost = isoquant::costColumn(dualCostModel(), numberRange(outputs, {"washes"}),
+                                                       numberRange(prices, inputLabels), measure);
+        BOOST_TEST_REQUIRE(viaProduction.rows() == 3u);
+        for (std::size_t row = 0; row < 3; ++row)
+            BOOST_TEST(closeTo(viaProduction.number(row, 0), viaCost.number(row, 0), 1e-12), measure << ", row " << row);
+    }
     // One row of prices serves every output.
     const CellTable shared = isoquant::costModelColumn(dualCostModel(), numberRange(outputs),
                                                        numberRange(prices.topRows(1)), std::string("cost elasticity"));

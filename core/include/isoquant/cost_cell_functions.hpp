@@ -34,4 +34,9 @@ CostFit costFitFromArguments(const CostFitArguments& arguments);
 // "marginal" ε·C/y, "average" C/y, "cost elasticity" ε, "returns to scale" 1/ε. A column.
 CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
 
+// PRODCOST for any model: a cost model as above; a production model as costCell
+// (decision_cell_functions.hpp) for one output, and for a column of outputs one least-cost figure
+// per row, with prices as above.
+CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
+
 } // namespace isoquant
