@@ -9,6 +9,7 @@
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
 #include "isoquant/production_model.hpp"
+#include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
 
 #include <cmath>
@@ -72,9 +73,9 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
     for (std::size_t column = 0; column < labels.size(); ++column) {
         const std::string& label = labels[column];
         if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
-            equalsIgnoringCase(label, costOutputLabel))
+            equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
             throw InputError("prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
-                             "; the cost table uses \"constant\", \"output\" and \"*\" itself, so rename it");
+                             "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
     }
 }
 

@@ -91,7 +91,7 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     arguments = sixLaundries();
     arguments.prices = numberRange(Eigen::MatrixXd::Constant(6, 2, 3.0), {"labour", "output"});
     BOOST_TEST(fitMessage(arguments) == "prices: column 2 is labelled 'output'; the cost table uses \"constant\", "
-                                        "\"output\" and \"*\" itself, so rename it");
+                                        "\"output\", \"form\" and \"*\" itself, so rename it");
 }
 
 BOOST_AUTO_TEST_CASE(cost_models_and_their_arguments_are_checked)
