@@ -172,10 +172,11 @@ Eigen::RowVectorXd elasticityGradient(const CostFit& fit, Eigen::Index parameter
 // y* where ε = 1 at the mean log prices, for a translog whose ε rises with output (β_yy > 0).
 std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double degreesOfFreedom, double level)
 {
+    if (fit.form != CostForm::translog) return std::nullopt; // θ has no β_yy
     const Eigen::Index k = static_cast<Eigen::Index>(fit.priceLabels.size());
     const Eigen::VectorXd& theta = fit.summary.estimates;
     const double curvature = theta(2 + k);
-    if (fit.form != CostForm::translog || !(curvature > 0)) return std::nullopt;
+    if (!(curvature > 0)) return std::nullopt;
     const double logScale = (1.0 - theta(1) - theta.tail(k).dot(fit.meanLogPrices)) / curvature;
     Eigen::RowVectorXd gradient = Eigen::RowVectorXd::Zero(theta.size()); // of ln y*
     gradient(1) = -1.0 / curvature;
