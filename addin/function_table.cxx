@@ -176,10 +176,9 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
          "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
-         "function (a PRODCOSTFIT table or a typed one). A column of outputs gives a column of figures.",
-         {{"model", "A production model (see PRODFIT), or a cost model: a PRODCOSTFIT table, or typed rows form | "
-                    "cobb-douglas cost, constant | value, output | value, then one row per input, its label | its "
-                    "price coefficient."},
+         "function: a PRODCOSTFIT table, or typed rows form | cobb-douglas cost, constant | value, output | value, "
+         "then one row per input, its label | its price coefficient. A column of outputs gives a column of figures.",
+         {modelArgument,
           {"target output", "The output to be produced, a positive number, or a column of outputs (the result is "
                             "then a column)."},
           {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
@@ -193,7 +192,7 @@ const std::vector<FunctionInfo>& functionTable()
          {{"cost", "Total cost of each row (plant, branch or period): one column of positive numbers. A first row "
                    "of text is read as a header."},
           {"output", "Output of each row: one column of positive numbers, as many rows as cost."},
-          {"prices", "Input prices of each row, one column per input, positive numbers, as many rows as cost. A "
+          {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
                      "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
           {"form", "\"cobb-douglas\" (default) or \"translog\"."},
           {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},

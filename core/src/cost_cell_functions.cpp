@@ -74,7 +74,7 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
         const std::string& label = labels[column];
         if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
             equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
-            throw InputError("prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+            throw InputError("input prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
                              "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
     }
 }
@@ -94,8 +94,8 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     const NumericColumns cost = readOneColumn(arguments.cost, "cost");
     const NumericColumns output = readOneColumn(arguments.output, "output");
     requireSameRows(cost, output, "output");
-    const NumericColumns prices = readNumericColumns(arguments.prices, "prices", ValueRule::positive, "input");
-    requireSameRows(cost, prices, "prices");
+    const NumericColumns prices = readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input");
+    requireSameRows(cost, prices, "input prices");
     refuseReservedLabels(prices.labels);
 
     CostData data;

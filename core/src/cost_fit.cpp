@@ -143,7 +143,7 @@ void setParameters(ProductionFit& summary, const Eigen::VectorXd& theta, const E
 void requireCostData(const CostData& data, Eigen::Index parameters)
 {
     const Eigen::Index n = data.cost.size();
-    if (data.prices.cols() < 1) throw InputError("prices: needs at least one column");
+    if (data.prices.cols() < 1) throw InputError("input prices: needs at least one column");
     if (n < parameters + 1)
         throw InputError("too few rows: cost, output and prices have " + std::to_string(n) + " rows of data for " +
                          std::to_string(parameters) + " parameters to estimate; need at least " +
@@ -218,7 +218,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     const Eigen::Index regressors = k + 1 + (translog ? 1 + k * (k - 1) / 2 + (k - 1) : 0);
     requireCostData(data, regressors);
     const Eigen::Index n = data.cost.size();
-    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), "prices",
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), "input prices",
                     translog ? "the translog cost form" : "the Cobb-Douglas cost form");
     const NormalisedRegression normalised = normalisedRegression(data, options.form);
 
@@ -237,7 +237,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
         for (std::size_t c = 0; c < columns.size(); ++c)
             names += (c == 0 ? "" : c + 1 == columns.size() ? " and " : ", ") +
                      normalised.termNames[static_cast<std::size_t>(columns[c])];
-        throw InputError("prices: the cost terms " + names +
+        throw InputError("input prices: the cost terms " + names +
                          " are collinear (prices divided by the last one, in logs); use fewer inputs or more varied data");
     }
     const LeastSquaresResult& regression = summary.regression;

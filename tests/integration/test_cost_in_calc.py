@@ -217,7 +217,7 @@ class FunctionWizardTest(unittest.TestCase):
         self.assertIn("cost function", listed["PRODCOSTFIT"]["Description"])
         arguments = listed["PRODCOSTFIT"]["Arguments"]
         self.assertEqual([a.Name for a in arguments],
-                         ["cost", "output", "prices", "form", "shares", "errors", "level", "controls", "groups",
+                         ["cost", "output", "input prices", "form", "shares", "errors", "level", "controls", "groups",
                           "effects", "trend", "incomplete rows"])
         self.assertEqual([a.IsOptional for a in arguments], [i >= 3 for i in range(12)])
         self.assertIn("cost elasticity", listed["PRODCOST"]["Description"])

@@ -53,7 +53,7 @@ BOOST_AUTO_TEST_CASE(non_positive_values_name_the_argument_and_row)
     BOOST_TEST(fitMessage(arguments) == "output: row 3 is -5; logs need positive values");
     arguments = sixLaundries();
     arguments.prices = withNumber(arguments.prices, 6, 1, 0.0);
-    BOOST_TEST(fitMessage(arguments) == "prices: row 7, column 2 is 0; logs need positive values");
+    BOOST_TEST(fitMessage(arguments) == "input prices: row 7, column 2 is 0; logs need positive values");
 }
 
 BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
@@ -63,7 +63,7 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     BOOST_TEST(fitMessage(arguments) == "output: has 5 rows of data but cost has 6 rows");
     arguments = sixLaundries();
     arguments.prices = numberRange(Eigen::MatrixXd::Constant(7, 2, 3.0), {"labour", "energy"});
-    BOOST_TEST(fitMessage(arguments) == "prices: has 7 rows of data but cost has 6 rows");
+    BOOST_TEST(fitMessage(arguments) == "input prices: has 7 rows of data but cost has 6 rows");
     arguments = sixLaundries();
     arguments.form = std::string("translog"); // 1 + 1 + 1 + 1 + 1 + 1 = 6 parameters for 2 prices
     BOOST_TEST(fitMessage(arguments) ==
@@ -90,7 +90,7 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     BOOST_TEST(fitMessage(arguments) == "shares: not available yet for cost fits; leave it empty");
     arguments = sixLaundries();
     arguments.prices = numberRange(Eigen::MatrixXd::Constant(6, 2, 3.0), {"labour", "output"});
-    BOOST_TEST(fitMessage(arguments) == "prices: column 2 is labelled 'output'; the cost table uses \"constant\", "
+    BOOST_TEST(fitMessage(arguments) == "input prices: column 2 is labelled 'output'; the cost table uses \"constant\", "
                                         "\"output\", \"form\" and \"*\" itself, so rename it");
 }
 
