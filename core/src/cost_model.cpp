@@ -125,6 +125,9 @@ CostModel readCostModel(const CellTable& model)
         else if (equalsIgnoringCase(label, costOutputLabel)) output = value;
         else if (label.find('*') != std::string::npos) secondOrder.push_back({row, label, value});
         else {
+            for (const auto& earlier : cost.priceLabels)
+                if (equalsIgnoringCase(earlier, label))
+                    throw InputError(rowPlace(row, label) + " repeats a price row's label; give each input one row");
             cost.priceLabels.push_back(label);
             prices.push_back(value);
         }

@@ -103,6 +103,13 @@ BOOST_AUTO_TEST_CASE(cost_models_and_their_arguments_are_checked)
     const CellTable price = numberRange(Eigen::MatrixXd::Constant(1, 1, 14.0));
     BOOST_TEST(messageOf([&] { isoquant::costModelColumn(noOutput, one, price, {}); }) ==
                "model: has no \"output\" row; a cost model needs \"constant\", \"output\" and one row per input price");
+    const CellTable repeated = typedRange({{std::string("form"), std::string("cobb-douglas cost")},
+                                           {std::string("constant"), 1.0},
+                                           {std::string("output"), 0.8},
+                                           {std::string("labour"), 0.5},
+                                           {std::string("Labour"), 0.5}});
+    BOOST_TEST(messageOf([&] { isoquant::costModelColumn(repeated, one, price, {}); }) ==
+               "model: row 5 ('Labour') repeats a price row's label; give each input one row");
     const CellTable model = typedRange({{std::string("form"), std::string("cobb-douglas cost")},
                                         {std::string("constant"), 1.0},
                                         {std::string("output"), 0.8},
