@@ -185,9 +185,34 @@ const std::vector<FunctionInfo>& functionTable()
          {modelArgument, targetArgument, pricesArgument}},
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
-         "(of one more unit of output) or average.",
-         {modelArgument, targetArgument, pricesArgument,
-          {"what", "\"total\" (default), \"marginal\" or \"average\"."}}},
+         "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
+         "function: a PRODCOSTFIT table, or typed rows form | cobb-douglas cost, constant | value, output | value, "
+         "then one row per input, its label | its price coefficient. A column of outputs gives a column of figures.",
+         {modelArgument,
+          {"target output", "The output to be produced, a positive number, or a column of outputs (the result is "
+                            "then a column)."},
+          {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
+                           "column of outputs, one row of prices per output (or one row for all)."},
+          {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
+                   "per percent of output) or \"returns to scale\" (its inverse)."}}},
+        {"prodCostFit", "PRODCOSTFIT",
+         "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
+         "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "
+         "fit statistics, cost elasticity, returns to scale with its test and verdict, efficient scale.",
+         {{"cost", "Total cost of each row (plant, branch or period): one column of positive numbers. A first row "
+                   "of text is read as a header."},
+          {"output", "Output of each row: one column of positive numbers, as many rows as cost."},
+          {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
+                     "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
+          {"form", "\"cobb-douglas\" (default) or \"translog\"."},
+          {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},
+          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."},
+          levelArgument,
+          {"controls", "Not available yet for cost fits; leave empty."},
+          {"groups", "Not available yet for cost fits; leave empty."},
+          {"effects", "Not available yet for cost fits; leave empty."},
+          {"trend", "Not available yet for cost fits; leave empty."},
+          {"incomplete rows", "Not available yet for cost fits; leave empty."}}},
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",

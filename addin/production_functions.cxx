@@ -4,6 +4,7 @@
 #include "function_table.hxx"
 
 #include "isoquant/cell_functions.hpp"
+#include "isoquant/cost_cell_functions.hpp"
 #include "isoquant/decision_cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/growth_cell_functions.hpp"
@@ -272,8 +273,31 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
                                   const Any& what)
 {
     return guardedTable([&] {
-        return costCell(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"),
-                        toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+        return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
+                          toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+    });
+}
+
+Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
+                                     const Any& form, const Any& shares, const Any& errors, const Any& level,
+                                     const Any& controls, const Any& groups, const Any& effects, const Any& trend,
+                                     const Any& incompleteRows)
+{
+    return guardedTable([&] {
+        CostFitArguments arguments;
+        arguments.cost = toCellTable(cost, "cost");
+        arguments.output = toCellTable(output, "output");
+        arguments.prices = toCellTable(prices, "prices");
+        arguments.form = toSingleCell(form, "form");
+        arguments.shares = toOptionalTable(shares, "shares");
+        arguments.errors = toSingleCell(errors, "errors");
+        arguments.level = toSingleCell(level, "level");
+        arguments.controls = toOptionalTable(controls, "controls");
+        arguments.groups = toOptionalTable(groups, "groups");
+        arguments.effects = toSingleCell(effects, "effects");
+        arguments.trend = toOptionalTable(trend, "trend");
+        arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
+        return costFitTable(costFitFromArguments(arguments));
     });
 }
 

@@ -69,6 +69,12 @@ public:
                                             const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
                                     const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
+                                       const css::uno::Any& form, const css::uno::Any& shares,
+                                       const css::uno::Any& errors, const css::uno::Any& level,
+                                       const css::uno::Any& controls, const css::uno::Any& groups,
+                                       const css::uno::Any& effects, const css::uno::Any& trend,
+                                       const css::uno::Any& incompleteRows) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,

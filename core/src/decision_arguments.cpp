@@ -72,8 +72,12 @@ CostMeasure readCostMeasure(const Cell& cell)
         if (equalsIgnoringCase(word, "total")) return CostMeasure::total;
         if (equalsIgnoringCase(word, "marginal")) return CostMeasure::marginal;
         if (equalsIgnoringCase(word, "average")) return CostMeasure::average;
+        if (equalsIgnoringCase(word, "cost elasticity")) return CostMeasure::costElasticity;
+        if (equalsIgnoringCase(word, "returns to scale")) return CostMeasure::returnsToScale;
     }
-    throw InputError("what: " + describe(cell) + " is not a cost measure; use \"total\", \"marginal\" or \"average\"");
+    throw InputError("what: " + describe(cell) +
+                     " is not a cost measure; use \"total\", \"marginal\", \"average\", \"cost elasticity\" or "
+                     "\"returns to scale\"");
 }
 
 } // namespace isoquant

@@ -130,6 +130,9 @@ std::pair<double, std::string> costFigure(const ProductionPlan& plan, CostMeasur
     switch (measure) {
     case CostMeasure::marginal: return {plan.marginalCost, "the marginal cost"};
     case CostMeasure::average: return {plan.cost / level, "the average cost"};
+    // ε = ∂ln C/∂ln y = MC·y/C; returns to scale 1/ε
+    case CostMeasure::costElasticity: return {plan.marginalCost * level / plan.cost, "the cost elasticity"};
+    case CostMeasure::returnsToScale: return {plan.cost / (plan.marginalCost * level), "the returns to scale"};
     case CostMeasure::total: break;
     }
     return {plan.cost, "the cost"};

@@ -2,6 +2,7 @@
 
 #include "isoquant/ces_fit.hpp"
 #include "isoquant/cobb_douglas.hpp"
+#include "isoquant/cost_model.hpp"
 #include "form_models.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/option_arguments.hpp"
@@ -222,6 +223,9 @@ void refuseRepeatedLabels(const std::vector<ParameterRow>& parameters)
 
 ProductionModel readProductionModel(const CellTable& range)
 {
+    if (isCostModel(range))
+        throw InputError("model: is a cost model (a PRODCOSTFIT table or form \"... cost\"); this function needs a "
+                         "production model, a PRODFIT table or a typed one (PRODCOST takes both)");
     if (range.columns() < 2)
         throw InputError("model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
     const ModelRows rows = readRows(range);

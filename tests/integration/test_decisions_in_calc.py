@@ -277,7 +277,8 @@ CASES = [
     ("an unknown elasticity kind", 'PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"hicks")', "G63:G65",
      error("kind: 'hicks' is not a kind; use \"direct\", \"allen\" or \"morishima\"")),
     ("an unknown cost measure", 'PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"mean")', "G67",
-     error("what: 'mean' is not a cost measure; use \"total\", \"marginal\" or \"average\"")),
+     error("what: 'mean' is not a cost measure; use \"total\", \"marginal\", \"average\", "
+           "\"cost elasticity\" or \"returns to scale\"")),
     ("three prices for two inputs", "PRODLEASTCOST($A$1:$B$4;1500;D43:F43)", "G69:H69",
      error("input prices: give one price per input, 2 numbers in a row or a column (the model has 2 inputs)")),
     ("an isoquant level of 0", "PRODISOQUANT($A$1:$B$4;0;H21:H31)", "G71:G81",

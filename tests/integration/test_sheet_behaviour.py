@@ -261,7 +261,7 @@ class ExtensionManagerTextTest(unittest.TestCase):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
             if str(properties.get("Name", "")).startswith("PROD") and properties["Category"] == ADD_IN:
                 names.add(properties["Name"])
-        self.assertEqual(len(names), 22)
+        self.assertEqual(len(names), 23)
         self.assertEqual([n for n in sorted(names) if n not in description], [])
         publisher = packages[0].getPublisherInfo()  # StringPair: First the name, Second the link
         self.assertEqual(publisher.First, "The Isoquant developers")

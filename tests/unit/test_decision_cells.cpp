@@ -196,7 +196,8 @@ BOOST_AUTO_TEST_CASE(bad_input_is_named)
     BOOST_TEST(messageOf([&] { isoquant::costCell(model, -5.0, pricesRow(18.0, 45.0), {}); }) ==
                "target output: is -5; it must be positive");
     BOOST_TEST(messageOf([&] { isoquant::costCell(model, 5.0, pricesRow(18.0, 45.0), std::string("mean")); }) ==
-               "what: 'mean' is not a cost measure; use \"total\", \"marginal\" or \"average\"");
+               "what: 'mean' is not a cost measure; use \"total\", \"marginal\", \"average\", "
+               "\"cost elasticity\" or \"returns to scale\"");
     BOOST_TEST(messageOf([&] { isoquant::budgetRow(model, std::string("lots"), pricesRow(18.0, 45.0)); }) ==
                "budget: holds text 'lots'; give a positive number");
     BOOST_TEST(messageOf([&] { isoquant::profitRow(model, Cell{}, pricesRow(18.0, 45.0)); }) ==

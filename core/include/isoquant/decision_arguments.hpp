@@ -21,8 +21,8 @@ Eigen::VectorXd readPrices(const CellTable& range, const std::string& argument, 
 // "direct" (default), "allen" or "morishima".
 SubstitutionKind readSubstitutionKind(const Cell& cell);
 
-enum class CostMeasure { total, marginal, average };
-// "total" (default), "marginal" or "average".
+enum class CostMeasure { total, marginal, average, costElasticity, returnsToScale };
+// "total" (default), "marginal", "average", "cost elasticity" (∂ln C/∂ln y) or "returns to scale" (its inverse).
 CostMeasure readCostMeasure(const Cell& cell);
 
 } // namespace isoquant

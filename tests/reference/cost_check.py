@@ -1,0 +1,153 @@
+#!/usr/bin/python3
+"""Recomputes PRODCOSTFIT's cost functions of the rice-farm panel with statsmodels OLS.
+
+Usage: /usr/bin/python3 cost_check.py DATA_DIR OUTPUT_CSV
+
+Data: rice_farms_panel.csv (Feng and Horrace 2012, as in plm 2.6 RiceFarms; tests/data/README.md),
+1026 rows: cost C = pseed*seed + purea*urea + wage*totlabor, output y = goutput, prices
+w = (pseed, purea, wage), the last (wage) the numeraire.
+Cobb-Douglas cost, homogeneous of degree one in prices: OLS of ln(C/w3) on 1, ln y, ln(w1/w3),
+ln(w2/w3). Translog cost: the same plus (ln y)^2/2, the halved squares and the cross product of the
+normalised log prices, and each normalised log price times ln y. The full form's parameters are
+linear combinations of the regression's, taken with statsmodels' t_test (R b = q), so the
+implied last price coefficient 1 - b1 - b2 and the implied second-order terms get their standard
+errors and p-values from statsmodels itself, classical and with HC1 and HC3 covariance.
+Also: R^2 of ln C (1 - SSR/TSS of ln C), the overall F, log-likelihood, AIC, BIC, the cost
+elasticity at the sample means of the logs (t_test), the F of elasticity = 1 (f_test), the
+efficient scale of the translog (where the elasticity is 1 at the mean log prices) with its
+delta-method standard error, and the smearing factor mean(exp(residual)).
+
+Writes one figure per line: dataset,form,quantity,index,value. Exits with 77 (the CTest skip code)
+when statsmodels cannot be imported, leaving no OUTPUT_CSV behind.
+"""
+
+import csv
+import os
+import sys
+
+import reference_script  # this folder: command line, skip code, writing the figures
+
+PRICES = ["pseed", "purea", "wage"]
+QUANTITIES = ["seed", "urea", "totlabor"]
+FORMS = [("cobb-douglas", "nonrobust"), ("cobb-douglas", "HC1"), ("translog", "nonrobust"), ("translog", "HC3")]
+
+
+def read_data(data_dir, np):
+    with open(os.path.join(data_dir, "rice_farms_panel.csv"), newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    prices = np.array([[float(row[p]) for p in PRICES] for row in rows])
+    quantities = np.array([[float(row[q]) for q in QUANTITIES] for row in rows])
+    output = np.array([float(row["goutput"]) for row in rows])
+    return (prices * quantities).sum(axis=1), output, prices
+
+
+def regression(np, form, log_output, relative):
+    """Design columns and, per full parameter, (coefficient row R, constant c): theta = R b + c."""
+    k = relative.shape[1] + 1
+    columns = [np.ones_like(log_output), log_output] + [relative[:, i] for i in range(k - 1)]
+    if form == "translog":
+        columns.append(log_output ** 2 / 2)
+        reduced_pairs = [(i, j) for i in range(k - 1) for j in range(i, k - 1)]
+        for i, j in reduced_pairs:
+            columns.append(relative[:, i] * relative[:, j] * (0.5 if i == j else 1.0))
+        columns += [relative[:, i] * log_output for i in range(k - 1)]
+    p = len(columns)
+
+    def unit(*indices_and_signs):
+        row = np.zeros(p)
+        for index, sign in indices_and_signs:
+            row[index] += sign
+        return row
+
+    theta = [(unit((0, 1)), 0.0), (unit((1, 1)), 0.0)]
+    theta += [(unit((2 + i, 1)), 0.0) for i in range(k - 1)]
+    theta.append((unit(*[(2 + i, -1) for i in range(k - 1)]), 1.0))  # Σ βᵢ = 1
+    if form == "translog":
+        yy = 2 + (k - 1)
+        theta.append((unit((yy, 1)), 0.0))
+        pair_column = {pair: yy + 1 + n for n, pair in enumerate(reduced_pairs)}
+
+        def beta(i, j):  # βᵢⱼ of the reduced form, i, j < k - 1 + 1
+            return pair_column[(min(i, j), max(i, j))]
+
+        for i in range(k):
+            for j in range(i, k):
+                if j < k - 1:
+                    theta.append((unit((beta(i, j), 1)), 0.0))
+                elif i < k - 1:  # row sums zero
+                    theta.append((unit(*[(beta(i, m), -1) for m in range(k - 1)]), 0.0))
+                else:
+                    theta.append((unit(*[(beta(a, b), 1) for a in range(k - 1) for b in range(k - 1)]), 0.0))
+        first = yy + 1 + len(reduced_pairs)
+        theta += [(unit((first + i, 1)), 0.0) for i in range(k - 1)]
+        theta.append((unit(*[(first + i, -1) for i in range(k - 1)]), 0.0))
+    return np.column_stack(columns), theta
+
+
+def figures(np, sm, put, form, cov_type, cost, output, prices):
+    name = form if cov_type == "nonrobust" else form + "_" + cov_type.lower()
+    log_output, log_prices = np.log(output), np.log(prices)
+    relative = log_prices[:, :-1] - log_prices[:, -1:]
+    response = np.log(cost) - log_prices[:, -1]
+    design, theta = regression(np, form, log_output, relative)
+    fit = sm.OLS(response, design).fit(cov_type=cov_type, use_t=True)  # t(n − p) for every kind, as the core
+    for index, (row, constant) in enumerate(theta):
+        test = fit.t_test((row.reshape(1, -1), np.array([-constant])))
+        put(name, "params", float(row @ fit.params) + constant, index)
+        put(name, "bse", float(np.squeeze(test.sd)), index)
+        put(name, "pvalues", float(np.squeeze(test.pvalue)), index)
+    log_cost = np.log(cost)
+    put(name, "rsquared", 1.0 - fit.ssr / float(((log_cost - log_cost.mean()) ** 2).sum()))
+    put(name, "fvalue", float(np.squeeze(fit.fvalue)))
+    put(name, "llf", fit.llf)
+    put(name, "aic", fit.aic)
+    put(name, "bic", fit.bic)
+    put(name, "smearing", float(np.exp(fit.resid).mean()))
+    # the cost elasticity at the mean logs, in the regression's coefficients
+    k = prices.shape[1]
+    gradient = np.zeros(design.shape[1])
+    gradient[1] = 1.0
+    if form == "translog":
+        gradient[2 + (k - 1)] = log_output.mean()
+        mean_relative = relative.mean(axis=0)
+        gradient[-(k - 1):] = mean_relative
+    elasticity = fit.t_test(gradient.reshape(1, -1))
+    put(name, "elasticity", float(np.squeeze(elasticity.effect)))
+    put(name, "elasticity_se", float(np.squeeze(elasticity.sd)))
+    unit_test = fit.f_test((gradient.reshape(1, -1), np.array([1.0])))
+    put(name, "unit_fvalue", float(np.squeeze(unit_test.fvalue)))
+    put(name, "unit_pvalue", float(np.squeeze(unit_test.pvalue)))
+    if form == "translog":
+        curvature = fit.params[2 + (k - 1)]
+        rest = gradient.copy()
+        rest[2 + (k - 1)] = 0.0
+        log_scale = (1.0 - rest @ fit.params) / curvature
+        delta = -rest / curvature
+        delta[2 + (k - 1)] = -log_scale / curvature
+        put(name, "efficient_scale", float(np.exp(log_scale)))
+        put(name, "efficient_scale_se", float(np.exp(log_scale) * np.sqrt(delta @ fit.cov_params() @ delta)))
+
+
+def main():
+    data_dir, output_path = reference_script.paths(__doc__)
+    try:
+        import numpy as np
+        import statsmodels
+        import statsmodels.api as sm
+    except ImportError as error:
+        return reference_script.skipped("statsmodels", error)
+    cost, output, prices = read_data(data_dir, np)
+    rows = []
+
+    def put(form, quantity, value, index=0):
+        rows.append(["rice_farms", form, quantity, index, repr(float(value))])
+
+    for form, cov_type in FORMS:
+        figures(np, sm, put, form, cov_type, cost, output, prices)
+    reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
+    print(f"statsmodels {statsmodels.__version__}: {len(rows)} cost-function figures written to {output_path}")
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
