@@ -287,7 +287,7 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
         CostFitArguments arguments;
         arguments.cost = toCellTable(cost, "cost");
         arguments.output = toCellTable(output, "output");
-        arguments.prices = toCellTable(prices, "prices");
+        arguments.prices = toCellTable(prices, "input prices");
         arguments.form = toSingleCell(form, "form");
         arguments.shares = toOptionalTable(shares, "shares");
         arguments.errors = toSingleCell(errors, "errors");
