@@ -13,6 +13,10 @@ namespace isoquant::addin {
 class BenchmarkProductionFunctions
     : public cppu::ImplInheritanceHelper1<ProductionFunctions, org::isoquant::calc::XBenchmarkFloor> {
 public:
+    explicit BenchmarkProductionFunctions(const css::uno::Reference<css::uno::XComponentContext>& context)
+        : ImplInheritanceHelper1(context)
+    {
+    }
     double SAL_CALL benchFloor(const AnyTable& output, const AnyTable& inputs) override;
 };
 

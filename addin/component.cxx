@@ -12,12 +12,12 @@
 namespace {
 
 css::uno::Reference<css::uno::XInterface> SAL_CALL createProductionFunctions(
-    const css::uno::Reference<css::uno::XComponentContext>&)
+    const css::uno::Reference<css::uno::XComponentContext>& context)
 {
 #ifdef ISOQUANT_BENCHMARK_FLOOR
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::BenchmarkProductionFunctions);
+    return static_cast<cppu::OWeakObject*>(new isoquant::addin::BenchmarkProductionFunctions(context));
 #else
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::ProductionFunctions);
+    return static_cast<cppu::OWeakObject*>(new isoquant::addin::ProductionFunctions(context));
 #endif
 }
 

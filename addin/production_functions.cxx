@@ -84,6 +84,13 @@ css::uno::Sequence<OUString> supportedServiceNames()
     return names;
 }
 
+ProductionFunctions::ProductionFunctions(const css::uno::Reference<css::uno::XComponentContext>& context)
+    : punctuation_(new LocalePunctuation(context))
+{
+}
+
+ProductionFunctions::~ProductionFunctions() { punctuation_->stop(); }
+
 FitArguments ProductionFunctions::fitArguments(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                                const Any& constantReturns, const Any& errors, const Any& level,
                                                const Any& controls) const

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "model_ranges.hxx"
+#include "office_locale.hxx"
 
 #include "isoquant/fit_cache.hpp"
 
@@ -14,6 +15,7 @@
 #include <com/sun/star/lang/XServiceName.hpp>
 #include <com/sun/star/sheet/XAddIn.hpp>
 #include <cppuhelper/implbase4.hxx>
+#include <rtl/ref.hxx>
 
 namespace isoquant::addin {
 
@@ -28,6 +30,10 @@ class ProductionFunctions
                                    css::lang::XServiceName, css::lang::XServiceInfo> {
 public:
     using AnyTable = css::uno::Sequence<css::uno::Sequence<css::uno::Any>>;
+
+    // The context gives the office's locale setting (how numbers in messages are punctuated).
+    explicit ProductionFunctions(const css::uno::Reference<css::uno::XComponentContext>& context);
+    ~ProductionFunctions() override;
 
     // XProductionFunctions
     css::uno::Any SAL_CALL prodFit(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
@@ -115,6 +121,7 @@ private:
     FitCache fits_;
     ModelRanges models_;
     css::lang::Locale locale_;
+    rtl::Reference<LocalePunctuation> punctuation_;
 };
 
 } // namespace isoquant::addin

@@ -16,7 +16,6 @@
 #include "isoquant/substitution_elasticity.hpp"
 #include "isoquant/text.hpp"
 
-#include <charconv>
 #include <cmath>
 #include <limits>
 #include <optional>
@@ -110,10 +109,10 @@ void requireInRange(double value, const std::string& what, const std::string& ar
         throw InputError(argument + ": " + what + " is not a number that can be represented");
     if (std::isinf(value))
         throw InputError(argument + ": the plan is not representable: " + what +
-                         " would exceed 1.8e308, the largest number a cell holds");
+                         " would exceed " + localDecimal("1.8e308") + ", the largest number a cell holds");
     if (value < std::numeric_limits<double>::min())
         throw InputError(argument + ": the plan is not representable: " + what +
-                         " would be below 2.2e-308, the smallest number a cell holds at full precision");
+                         " would be below " + localDecimal("2.2e-308") + ", the smallest number a cell holds at full precision");
 }
 
 // The amounts and the output of a plan, which every decision shows or rests on.
@@ -164,10 +163,9 @@ constexpr double negligibleOutput = 1e-6;
 void refuseNegligibleSize(const ProductionPlan& plan)
 {
     if (!(plan.output < negligibleOutput)) return;
-    char digits[32]; // three significant digits: the size is read, not computed with
-    const auto end = std::to_chars(digits, digits + sizeof digits, plan.output, std::chars_format::general, 3).ptr;
+    // Three significant digits: the size is read, not computed with.
     throw NoSolution("No profitable size: producing nothing is best at these prices (the best output, " +
-                     std::string(digits, end) + ", is below a millionth of one unit)");
+                     formatNumber(plan.output, 3) + ", is below a millionth of one unit)");
 }
 
 struct DecisionSetup {

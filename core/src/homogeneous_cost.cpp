@@ -3,7 +3,7 @@
 #include "isoquant/exact_elementwise.hpp"
 
 #include <cmath>
-#include <cstdio>
+#include "isoquant/text.hpp"
 #include <limits>
 #include <string>
 
@@ -12,12 +12,7 @@ namespace isoquant {
 namespace {
 
 // Six significant digits: the unit cost in a sentence is read, not computed with.
-std::string readable(double value)
-{
-    char buffer[32];
-    std::snprintf(buffer, sizeof buffer, "%.6g", value);
-    return buffer;
-}
+std::string readable(double value) { return formatNumber(value, 6); }
 
 ProductionPlan planAtLogOutput(const HomogeneousCost& cost, double logOutput)
 {
@@ -57,8 +52,8 @@ ProductionPlan profitPlan(const HomogeneousCost& cost, double outputPrice)
                       : "so every scale of production earns zero profit";
         const std::string costText = representable ? readable(unitCost)
                                      : cost.logUnitCost > 0
-                                         ? "more than 1.8e308 (ln " + readable(cost.logUnitCost) + ")"
-                                         : "less than 2.2e-308 (ln " + readable(cost.logUnitCost) + ")";
+                                         ? "more than " + localDecimal("1.8e308") + " (ln " + readable(cost.logUnitCost) + ")"
+                                         : "less than " + localDecimal("2.2e-308") + " (ln " + readable(cost.logUnitCost) + ")";
         throw NoSolution("No finite profit maximum: returns to scale are constant (1), and at these prices one "
                          "unit of output costs " + costText + " to make and sells for " + readable(outputPrice) +
                          ", " + comparison);

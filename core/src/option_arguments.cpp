@@ -73,7 +73,7 @@ double readLevelArgument(const Cell& cell, const std::string& argument)
         const double level = std::get<double>(cell);
         if (level > 0 && level < 1) return level;
     }
-    throw InputError(argument + ": " + describe(cell) + " is not a confidence level; give a number between 0 and 1, such as 0.95");
+    throw InputError(argument + ": " + describe(cell) + " is not a confidence level; give a number between 0 and 1, such as " + localDecimal("0.95"));
 }
 
 } // namespace isoquant

@@ -139,8 +139,8 @@ Eigen::MatrixXd sharesRescaledToOne(const NumericColumns& shares, const std::str
                              ": the shares sum to 100: give them as fractions (divide by 100)");
         if (!(std::fabs(sum - 1) <= shareSumTolerance + slack))
             throw InputError(argument + ": " + periodPlace(shares, period) + ": the shares sum to " +
-                             formatNumber(sum) + "; the cost shares of a period must sum to 1 within 0.01 "
-                             "(0.99 to 1.01, both included)");
+                             formatNumber(sum) + "; the cost shares of a period must sum to 1 within " + localDecimal("0.01") +
+                             " (" + localDecimal("0.99") + " to " + localDecimal("1.01") + ", both included)");
         rescaled.row(period) /= sum;
     }
     return rescaled;

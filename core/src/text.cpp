@@ -2,6 +2,7 @@
 
 #include <charconv>
 #include <cmath>
+#include <mutex>
 
 namespace isoquant {
 
@@ -14,7 +15,46 @@ char asciiLower(char character)
     return character >= 'A' && character <= 'Z' ? static_cast<char>(character - 'A' + 'a') : character;
 }
 
+std::mutex punctuationMutex;
+NumberPunctuation currentPunctuation;
+
 } // namespace
+
+void setNumberPunctuation(NumberPunctuation punctuation)
+{
+    // The add-in's change listener may run on another thread than the cell calls.
+    const std::lock_guard<std::mutex> lock(punctuationMutex);
+    currentPunctuation = std::move(punctuation);
+}
+
+NumberPunctuation numberPunctuation()
+{
+    const std::lock_guard<std::mutex> lock(punctuationMutex);
+    return currentPunctuation;
+}
+
+std::string localDecimal(std::string_view plainNumber)
+{
+    const std::string decimal = numberPunctuation().decimal;
+    std::string text;
+    for (char character : plainNumber) {
+        if (character == '.') text += decimal;
+        else text += character;
+    }
+    return text;
+}
+
+std::string groupedCount(std::size_t count)
+{
+    const std::string separator = numberPunctuation().thousands;
+    const std::string digits = std::to_string(count);
+    std::string text;
+    for (std::size_t i = 0; i < digits.size(); ++i) {
+        if (i > 0 && (digits.size() - i) % 3 == 0) text += separator;
+        text += digits[i];
+    }
+    return text;
+}
 
 std::string lowerCase(std::string_view text)
 {
@@ -48,7 +88,15 @@ std::string formatNumber(double value)
     if (std::isfinite(value)) std::from_chars(rounded, end, shown);
     char buffer[32];
     const auto written = std::to_chars(buffer, buffer + sizeof buffer, shown);
-    return std::string(buffer, written.ptr);
+    return localDecimal(std::string_view(buffer, static_cast<std::size_t>(written.ptr - buffer)));
+}
+
+std::string formatNumber(double value, int significantDigits)
+{
+    char buffer[32];
+    const auto written = std::to_chars(buffer, buffer + sizeof buffer, value, std::chars_format::general,
+                                       significantDigits);
+    return localDecimal(std::string_view(buffer, static_cast<std::size_t>(written.ptr - buffer)));
 }
 
 std::string quoted(std::string_view text)

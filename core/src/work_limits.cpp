@@ -1,18 +1,11 @@
 #include "isoquant/work_limits.hpp"
 
 #include "isoquant/input_error.hpp"
+#include "isoquant/text.hpp"
 
 #include <algorithm>
 
 namespace isoquant {
-
-std::string groupedCount(std::size_t count)
-{
-    std::string digits = std::to_string(count);
-    for (auto position = static_cast<std::ptrdiff_t>(digits.size()) - 3; position > 0; position -= 3)
-        digits.insert(static_cast<std::size_t>(position), ",");
-    return digits;
-}
 
 std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested)
 {

@@ -205,6 +205,24 @@ BOOST_AUTO_TEST_CASE(numbers_in_messages_are_rounded_to_what_matters)
     BOOST_TEST(isoquant::formatNumber(123456789.125) == "123456789.125");
 }
 
+// A German locale setting (the add-in passes the office's) writes "0,9896" and "1.048.576", in
+// computed numbers, numbers written in the source and counts alike; the default comes back.
+BOOST_AUTO_TEST_CASE(numbers_in_messages_follow_the_locale_punctuation)
+{
+    isoquant::setNumberPunctuation({",", "."});
+    BOOST_TEST(isoquant::formatNumber(0.6 + 0.3896) == "0,9896");
+    BOOST_TEST(isoquant::formatNumber(4.8e-17, 3) == "4,8e-17");
+    BOOST_TEST(isoquant::localDecimal("1.8e308") == "1,8e308");
+    BOOST_TEST(isoquant::groupedCount(1048576) == "1.048.576");
+    BOOST_TEST(isoquant::groupedCount(999) == "999");
+    // A French locale groups with a no-break space (UTF-8 C2 A0).
+    isoquant::setNumberPunctuation({",", "\xC2\xA0"});
+    BOOST_TEST(isoquant::groupedCount(33554432) == "33\xC2\xA0" "554\xC2\xA0" "432");
+    isoquant::setNumberPunctuation({});
+    BOOST_TEST(isoquant::formatNumber(0.25) == "0.25");
+    BOOST_TEST(isoquant::groupedCount(1048576) == "1,048,576");
+}
+
 BOOST_AUTO_TEST_CASE(filled_rows_and_top_rows)
 {
     CellTable table(10, 2);

@@ -6,6 +6,8 @@
 // them a 1,048,575-row Cobb-Douglas fit takes about a second (tests/benchmarks/RESULTS.md).
 #pragma once
 
+#include "isoquant/text.hpp" // groupedCount, used with the limits
+
 #include <cstddef>
 #include <string>
 
@@ -36,8 +38,5 @@ void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& ar
 // `what` says what the columns are ("the translog form of 7 inputs"), `advice` what to do.
 void checkDesignSize(std::size_t rows, std::size_t columns, const std::string& argument, const std::string& what,
                      const std::string& advice = "use fewer inputs or a sample of the rows");
-
-// 1048576 as "1,048,576".
-std::string groupedCount(std::size_t count);
 
 } // namespace isoquant
