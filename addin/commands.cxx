@@ -18,11 +18,23 @@ using css::uno::Reference;
 
 constexpr const char* fitArrayCommand = "FitArray";
 constexpr const char* saveCopyCommand = "SaveForColleagues";
+constexpr const char* helpCommand = "Help";
+
+// The menu's short help, shown by its last entry.
+constexpr const char* helpText =
+    "Fit the Array to Its Result: put the cursor on a formula whose result is a table or a column "
+    "(typed into one cell, or an array formula over too few or too many cells) and run it; the formula "
+    "is entered again over exactly the rows and columns of its result. Cells with content in the way are "
+    "not overwritten unless you say yes; Edit > Undo takes it back.\n\n"
+    "Save a Copy for Colleagues: writes a copy (.ods or .xlsx) in which every cell that calls an Isoquant "
+    "function holds the value it shows now, so that colleagues without the extension see the same numbers. "
+    "Formats and built-in formulas stay; a first sheet lists what was frozen. This document is not changed.";
 
 bool isOurs(const css::util::URL& url)
 {
     return url.Protocol == OUString::createFromAscii(commandsProtocol) &&
-           (url.Path == OUString::createFromAscii(fitArrayCommand) || url.Path == OUString::createFromAscii(saveCopyCommand));
+           (url.Path == OUString::createFromAscii(fitArrayCommand) || url.Path == OUString::createFromAscii(saveCopyCommand) ||
+            url.Path == OUString::createFromAscii(helpCommand));
 }
 
 } // namespace
@@ -68,6 +80,8 @@ void Commands::dispatchWithNotification(const css::util::URL& url,
             outcome = fitArrayToResult(frame_, context_);
         else if (url.Path == OUString::createFromAscii(saveCopyCommand))
             outcome = saveCopyForColleagues(frame_, context_, arguments);
+        else if (url.Path == OUString::createFromAscii(helpCommand))
+            outcome = {true, OUString::createFromAscii(helpText)};
         else
             outcome = {false, "Unknown Isoquant command " + url.Complete};
     } catch (const css::uno::Exception& error) {
@@ -75,9 +89,9 @@ void Commands::dispatchWithNotification(const css::util::URL& url,
     } catch (const std::exception& error) {
         outcome = {false, "The command stopped: " + OUString::createFromAscii(error.what())};
     }
-    // A dispatch from the menu (no listener) tells the user why a command did nothing, and where a
-    // copy went; a caller that listens, such as a DispatchHelper, gets the sentence as the result.
-    if (!listener.is() && (!outcome.done || url.Path == OUString::createFromAscii(saveCopyCommand)))
+    // A dispatch from the menu (no listener) tells the user why a command did nothing, where a copy
+    // went, or the help; a caller that listens, such as a DispatchHelper, gets the sentence as the result.
+    if (!listener.is() && (!outcome.done || url.Path != OUString::createFromAscii(fitArrayCommand)))
         tellUser(frame_, context_, outcome.message, !outcome.done);
     if (listener.is()) {
         css::frame::DispatchResultEvent event;

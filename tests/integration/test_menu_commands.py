@@ -26,6 +26,7 @@ REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
 OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
 FIT_ARRAY = "org.isoquant.calc.commands:FitArray"
 SAVE_COPY = "org.isoquant.calc.commands:SaveForColleagues"
+HELP = "org.isoquant.calc.commands:Help"
 SUCCESS, FAILURE = 1, 0  # com.sun.star.frame.DispatchResultState
 
 OFFICE = None
@@ -96,13 +97,24 @@ class MenuInstalled(unittest.TestCase):
             return provider.createInstanceWithArguments("com.sun.star.configuration.ConfigurationAccess", (prop,))
 
         menu = node("/org.openoffice.Office.Addons/AddonUI/OfficeMenuBar/org.isoquant.calc.menu")
-        self.assertEqual(menu.Title, "Is~oquant")
+        self.assertEqual(menu.Title, "Iso~quant")
         self.assertEqual(menu.Context, "com.sun.star.sheet.SpreadsheetDocument")
         entries = menu.Submenu
         self.assertEqual(sorted(entries.getByName(name).URL for name in entries.getElementNames()),
-                         sorted([FIT_ARRAY, SAVE_COPY]))
+                         sorted([FIT_ARRAY, SAVE_COPY, HELP]))
         handler = node("/org.openoffice.Office.ProtocolHandler/HandlerSet/org.isoquant.calc.CommandsImpl")
         self.assertEqual(tuple(handler.Protocols), ("org.isoquant.calc.commands:*",))
+
+
+    def test_the_help_entry_explains_both_commands(self):
+        doc = OFFICE.new_calc()
+        try:
+            state, sentence = dispatch(doc, HELP)
+            self.assertEqual(state, SUCCESS)
+            self.assertIn("Fit the Array to Its Result:", sentence)
+            self.assertIn("Save a Copy for Colleagues:", sentence)
+        finally:
+            doc.close(True)
 
 
 class FitTheArray(unittest.TestCase):
