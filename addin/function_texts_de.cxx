@@ -26,8 +26,8 @@ constexpr ArgumentInfo errorsArgument{
                       "Heteroskedastizität) oder \"cluster\" (robust innerhalb jeder Gruppe des Arguments Gruppen; "
                       "Tests rechnen dann bei G Gruppen mit G - 1 Freiheitsgraden)."};
 constexpr ArgumentInfo levelArgument{
-    "Konfidenzniveau", "Konfidenzniveau der Konfidenzgrenzen und des Urteils über die Skalenerträge, zwischen 0 und 1 "
-                       "(Standard 0,95)."};
+    "Konfidenzniveau", "Konfidenzniveau der Konfidenzintervalle und des Urteils über die Skalenerträge, zwischen 0 "
+                       "und 1 (Standard 0,95)."};
 constexpr ArgumentInfo controlsArgument{
     "Kontrollvariablen", "Optionale zusätzliche Spalten, unlogarithmiert aufgenommen (eine Quote, eine "
                          "0/1-Dummyvariable), so viele Zeilen wie bei der Ausbringung."};
@@ -63,7 +63,8 @@ constexpr ArgumentInfo modelArgument{
 constexpr ArgumentInfo bundlesArgument{
     "Faktormengen", "Eine Zeile von Faktormengen in der Faktorreihenfolge des Modells oder mehrere Zeilen: das "
                     "Ergebnis ist dann eine Spalte mit einem Wert je Zeile."};
-constexpr ArgumentInfo inputArgument{"Faktor", "Welcher Faktor: seine Nummer (1 für den ersten) oder seine Bezeichnung."};
+constexpr ArgumentInfo inputArgument{"Faktor",
+                                     "Welcher Faktor: seine Nummer (1 für den ersten) oder seine Bezeichnung."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -99,8 +100,9 @@ const Translation& germanTranslation()
           effectsArgument, trendArgument, incompleteRowsArgument}},
         {"prodOutput", "Ausbringung, die das Modell für jede Zeile von Faktormengen vorhersagt.",
          {modelArgument, bundlesArgument,
-          {"Mittelwert", "WAHR für die Vorhersage des Mittelwerts (der Median mal dem Smearing-Faktor der Tabelle); "
-                         "FALSCH oder leer für die Vorhersage des Medians, exp des geschätzten Logarithmus."}}},
+          {"Mittelwert", "WAHR für die Vorhersage des Mittelwerts (der Median, multipliziert mit dem "
+                         "Smearing-Faktor der Tabelle); FALSCH oder leer für die Vorhersage des Medians, exp des "
+                         "geschätzten Logarithmus."}}},
         {"prodMarginal",
          "Grenzprodukt eines Faktors für jede Zeile von Faktormengen: die zusätzliche Ausbringung aus einer weiteren "
          "Einheit dieses Faktors.",
@@ -110,16 +112,17 @@ const Translation& germanTranslation()
          "Ausbringung bei 1 % mehr von diesem Faktor.",
          {modelArgument, bundlesArgument, inputArgument}},
         {"prodScale",
-         "Skalenerträge: die prozentuale Änderung der Ausbringung, wenn alle Faktoren um 1 % steigen (die Summe der "
-         "Produktionselastizitäten, Skalenelastizität).",
+         "Skalenelastizität, das Maß der Skalenerträge: die prozentuale Änderung der Ausbringung, wenn alle Faktoren "
+         "um 1 % steigen (die Summe der Produktionselastizitäten).",
          {modelArgument,
           {"Faktormengen", "Optionale Zeilen von Faktormengen: das Ergebnis ist dann eine Spalte mit einem Wert je "
                            "Zeile."}}},
         {"prodReturns",
          "Urteil über die Skalenerträge: steigend, konstant oder sinkend (die Zelle zeigt increasing, constant oder "
-         "decreasing), nach dem Test der Skalenelastizität = 1 auf dem gegebenen Niveau. Ein eingegebenes Modell ohne "
-         "Standardfehler wird allein nach seiner Skalenelastizität beurteilt; eine ces-Tabelle ohne Test (Randlösung, "
-         "nicht konvergiert, nicht identifiziert) liefert ihr eigenes \"not tested (...)\".",
+         "decreasing), nach dem Test, ob die Skalenelastizität gleich 1 ist, auf dem gegebenen Konfidenzniveau. Ein "
+         "eingegebenes Modell ohne Standardfehler wird allein nach seiner Skalenelastizität beurteilt; eine "
+         "ces-Tabelle ohne Test (Randlösung, nicht konvergiert, nicht identifiziert) liefert ihr eigenes \"not "
+         "tested (...)\".",
          {modelArgument, {"Konfidenzniveau", "Konfidenzniveau des Tests, zwischen 0 und 1 (Standard 0,95)."}}},
         {"prodTfp",
          "Totale Faktorproduktivität jeder Zeile: beobachtete Ausbringung geteilt durch die Ausbringung, die das "
