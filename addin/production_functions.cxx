@@ -2,6 +2,7 @@
 
 #include "cell_conversion.hxx"
 #include "function_table.hxx"
+#include "wizard_texts.hxx"
 
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/cost_cell_functions.hpp"
@@ -67,11 +68,12 @@ Any guardedValue(Compute&& compute)
     return result;
 }
 
-const ArgumentInfo* argumentInfo(const OUString& programmaticName, sal_Int32 argument)
+// An argument's texts in the wizard's language; empty for an unknown function or argument.
+ArgumentInfo wizardArgument(const OUString& programmaticName, sal_Int32 argument, const Translation* translation)
 {
     const FunctionInfo* function = findByProgrammaticName(toUtf8(programmaticName));
-    if (!function || argument < 0 || static_cast<std::size_t>(argument) >= function->arguments.size()) return nullptr;
-    return &function->arguments[static_cast<std::size_t>(argument)];
+    if (!function || argument < 0) return {};
+    return argumentTexts(*function, static_cast<std::size_t>(argument), translation);
 }
 
 } // namespace
@@ -351,26 +353,32 @@ OUString ProductionFunctions::getDisplayFunctionName(const OUString& programmati
 OUString ProductionFunctions::getFunctionDescription(const OUString& programmaticName)
 {
     const FunctionInfo* function = findByProgrammaticName(toUtf8(programmaticName));
-    return function ? fromUtf8(function->description) : OUString();
+    return function ? fromUtf8(functionDescription(*function, wizardTranslation_)) : OUString();
 }
 
 OUString ProductionFunctions::getDisplayArgumentName(const OUString& programmaticName, sal_Int32 argument)
 {
-    const ArgumentInfo* info = argumentInfo(programmaticName, argument);
-    return info ? fromUtf8(info->name) : OUString();
+    return fromUtf8(wizardArgument(programmaticName, argument, wizardTranslation_).name);
 }
 
 OUString ProductionFunctions::getArgumentDescription(const OUString& programmaticName, sal_Int32 argument)
 {
-    const ArgumentInfo* info = argumentInfo(programmaticName, argument);
-    return info ? fromUtf8(info->description) : OUString();
+    return fromUtf8(wizardArgument(programmaticName, argument, wizardTranslation_).description);
 }
 
 OUString ProductionFunctions::getProgrammaticCategoryName(const OUString&) { return fromUtf8(categoryName); }
 
-OUString ProductionFunctions::getDisplayCategoryName(const OUString&) { return fromUtf8(categoryName); }
+OUString ProductionFunctions::getDisplayCategoryName(const OUString&)
+{
+    return fromUtf8(categoryDisplayName(wizardTranslation_));
+}
 
-void ProductionFunctions::setLocale(const css::lang::Locale& locale) { locale_ = locale; }
+// Calc passes the UI language here before it reads the wizard's texts.
+void ProductionFunctions::setLocale(const css::lang::Locale& locale)
+{
+    locale_ = locale;
+    wizardTranslation_ = translationFor(toUtf8(locale.Language));
+}
 
 css::lang::Locale ProductionFunctions::getLocale() { return locale_; }
 

@@ -21,6 +21,8 @@ namespace isoquant::addin {
 
 using rtl::OUString;
 
+struct Translation; // wizard_texts.hxx
+
 inline constexpr const char* implementationName = "org.isoquant.calc.ProductionFunctionsImpl";
 inline constexpr const char* serviceName = "org.isoquant.calc.ProductionFunctions";
 css::uno::Sequence<OUString> supportedServiceNames();
@@ -121,6 +123,7 @@ private:
     FitCache fits_;
     ModelRanges models_;
     css::lang::Locale locale_;
+    const Translation* wizardTranslation_ = nullptr; // Function Wizard texts; null: English
     rtl::Reference<LocalePunctuation> punctuation_;
 };
 
