@@ -21,7 +21,7 @@ Sources of the expected figures, named beside each check in those modules:
 
 import math
 
-from .support import CalcTestCase, read_columns, row_of, skip_missing_reference
+from .support import CalcTestCase, read_columns, row_of, skip_missing_reference, write_columns
 
 try:  # reference libraries; their checks are skipped when these are missing (failed
     # under ISOQUANT_REQUIRE_REFERENCES=1)
@@ -42,6 +42,15 @@ NUMBER = object()  # a layout slot that must hold a finite number
 def cobb_douglas_data():
     # Cobb & Douglas (1928), Tables II and III: output P, labour L, capital C, 1899 = 100.
     return read_columns("cobb_douglas_1928.csv", ["year", "P", "L", "C"])
+
+
+def cobb_douglas_sheet(session, name):
+    """A new sheet of the session with Cobb & Douglas (1928) in A1:D25 (year, P, L, C under a header
+    row, so P is B1:B25 and L, C are C1:D25); returns the sheet and the data's columns."""
+    data = cobb_douglas_data()
+    sheet = session.new_sheet(name)
+    write_columns(sheet, "A1", data, ["year", "P", "L", "C"])
+    return sheet, data
 
 
 def state_panel_data():

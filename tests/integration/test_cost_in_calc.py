@@ -130,7 +130,8 @@ class CostModelTest(CalcTestCase):
     def setUpClass(cls):
         set_array_formula(CALC.sheet, "J81:P101", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
         for column, word in zip("RSTUV", WORDS):
-            set_array_formula(CALC.sheet, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
+            set_array_formula(CALC.sheet, "%s2:%s6" % (column, column),
+                              '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
             set_array_formula(CALC.sheet, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
             set_array_formula(CALC.sheet, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
         set_array_formula(CALC.sheet, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
@@ -143,7 +144,7 @@ class CostModelTest(CalcTestCase):
             log_cost = fitted[0][0] + fitted[1][0] * math.log(y) + sum(
                 fitted[2 + i][0] * math.log(w) for i, w in enumerate(prices))
             self.assert_relative(get_cell(CALC.sheet, "R%d" % (row + 2)), math.exp(log_cost), FORMULA_TOLERANCE,
-                              "total, row %d" % row)  # cost-model formula
+                                 "total, row %d" % row)  # cost-model formula
             self.assert_relative(get_cell(CALC.sheet, "U%d" % (row + 2)), fitted[1][0], FORMULA_TOLERANCE, "elasticity")
 
     def test_typed_dual_and_production_model_agree(self):
@@ -151,15 +152,17 @@ class CostModelTest(CalcTestCase):
         cost = dual_cost(y, prices)  # dual of Cobb-Douglas
         expected = [cost, cost / (NU * y), cost / y, 1 / NU, NU]
         for column, word, value in zip("RSTUV", WORDS, expected):
-            self.assert_relative(get_cell(CALC.sheet, "%s12" % column), value, FORMULA_TOLERANCE, "typed cost model " + word)
-            self.assert_relative(get_cell(CALC.sheet, "%s14" % column), value, FORMULA_TOLERANCE, "production model " + word)
+            self.assert_relative(get_cell(CALC.sheet, "%s12" % column), value, FORMULA_TOLERANCE,
+                                 "typed cost model " + word)
+            self.assert_relative(get_cell(CALC.sheet, "%s14" % column), value, FORMULA_TOLERANCE,
+                                 "production model " + word)
 
 
     def test_production_model_gives_a_column_of_marginal_costs(self):
         for row in range(5):
             y, prices = DATA[row][1], DATA[row][2:]
-            self.assert_relative(get_cell(CALC.sheet, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y), FORMULA_TOLERANCE,
-                              "marginal cost, row %d" % row)  # dual of Cobb-Douglas
+            self.assert_relative(get_cell(CALC.sheet, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y),
+                                 FORMULA_TOLERANCE, "marginal cost, row %d" % row)  # dual of Cobb-Douglas
 
 
 class CostBadInputTest(CalcTestCase):
@@ -172,7 +175,8 @@ class CostBadInputTest(CalcTestCase):
         set_array_formula(CALC.sheet, "J171:P191", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
         recalc(CALC.doc)
         self.assertEqual(get_cell(CALC.sheet, "J111"), "Error: cost: row 4 is 0; logs need positive values")
-        self.assertEqual(get_cell(CALC.sheet, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
+        self.assertEqual(get_cell(CALC.sheet, "J141"),
+                         "Error: controls: not available yet for cost fits; leave it empty")
         self.assertEqual(get_cell(CALC.sheet, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
         self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 

@@ -108,8 +108,10 @@ class CurvatureTest(CalcTestCase):
         for row, x in enumerate(BUNDLES, start=2):
             y = output_of(GROWING, x)
             # Cobb-Douglas calculus
-            self.assert_relative(get_cell(CALC.sheet, "J%d" % row), a * (a - 1) * y / x[0] ** 2, FORMULA_TOLERANCE, "own")
-            self.assert_relative(get_cell(CALC.sheet, "K%d" % row), a * b * y / (x[0] * x[1]), FORMULA_TOLERANCE, "cross")
+            self.assert_relative(get_cell(CALC.sheet, "J%d" % row), a * (a - 1) * y / x[0] ** 2, FORMULA_TOLERANCE,
+                                 "own")
+            self.assert_relative(get_cell(CALC.sheet, "K%d" % row), a * b * y / (x[0] * x[1]), FORMULA_TOLERANCE,
+                                 "cross")
 
     def test_diminishing_returns_to_each_input_yet_increasing_returns_to_scale(self):
         # common practice, no source
@@ -124,7 +126,8 @@ class CurvatureTest(CalcTestCase):
             # Cobb-Douglas calculus: MRTS = (a/x1)/(b/x2)
             self.assert_relative(get_cell(CALC.sheet, "O%d" % row), (a / x[0]) / (b / x[1]), FORMULA_TOLERANCE, "MRTS")
             for column in "PQR":  # sigma = 1 (common practice, no source)
-                self.assert_relative(get_cell(CALC.sheet, "%s%d" % (column, row)), 1.0, FORMULA_TOLERANCE, "sigma " + column)
+                self.assert_relative(get_cell(CALC.sheet, "%s%d" % (column, row)), 1.0, FORMULA_TOLERANCE,
+                                     "sigma " + column)
 
 
 class PlansTest(CalcTestCase):
@@ -170,9 +173,10 @@ class PlansTest(CalcTestCase):
         self.assert_relative(get_cell(CALC.sheet, "E21"), cost / 1500.0, FORMULA_TOLERANCE, "average cost")
         # marginal cost of a technology homogeneous of degree nu: C/(nu*y) (Varian 1992, from memory)
         self.assert_relative(get_cell(CALC.sheet, "D21"), cost / (sum(GROWING[1]) * 1500.0), FORMULA_TOLERANCE,
-                          "marginal cost")
+                             "marginal cost")
         # first-order conditions: MRTS = w1/w2
-        self.assert_relative(get_cell(CALC.sheet, "F21"), PRICES[0] / PRICES[1], FORMULA_TOLERANCE, "MRTS at the bundle")
+        self.assert_relative(get_cell(CALC.sheet, "F21"), PRICES[0] / PRICES[1], FORMULA_TOLERANCE,
+                             "MRTS at the bundle")
 
     def test_budget_split(self):
         x1, x2, y = get_range(CALC.sheet, "A23:C23")[0]

@@ -15,9 +15,9 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from .fit_checks import (FORMULA_RELATIVE, FitTestCase, cobb_douglas_data, layout, logs, statsmodels_fit,
+from .fit_checks import (FORMULA_RELATIVE, FitTestCase, cobb_douglas_sheet, layout, logs, statsmodels_fit,
                          statsmodels_table)
-from .support import module_session, row_of, write_columns
+from .support import module_session, row_of
 
 CALC = module_session()
 setUpModule, tearDownModule = CALC.start, CALC.stop
@@ -86,9 +86,7 @@ class EvaluatorTest(FitTestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.data = cobb_douglas_data()
-        cls.sheet = CALC.new_sheet("Evaluators")
-        write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Evaluators")
         set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
         set_values(cls.sheet, "N1", [["form", "cobb-douglas"], ["A", 1.01], ["L", 0.75], ["C", 0.25], [None, None],
                                      ["form", "cobb-douglas"], ["ln A", 0.5], ["L", 0.6], ["C", 0.3]])
@@ -176,9 +174,7 @@ class RecalculationTest(FitTestCase):
     """Changing one data cell changes the table and the evaluators that read it."""
 
     def test_one_changed_output_refits(self):
-        data = cobb_douglas_data()
-        sheet = CALC.new_sheet("Recalculation")
-        write_columns(sheet, "A1", data, ["year", "P", "L", "C"])
+        sheet, data = cobb_douglas_sheet(CALC, "Recalculation")
         set_array_formula(sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
         set_formula(sheet, "N1", "=PRODOUTPUT($F$1:$L$17;C25:D25)")
         set_formula(sheet, "N2", '=PRODMARGINAL($F$1:$L$17;C25:D25;"L")')

@@ -15,8 +15,8 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula
 
-from .fit_checks import (HEADER, FitTestCase, cobb_douglas_data, layout, logs, scipy, statsmodels_fit,
-                         statsmodels_table)
+from .fit_checks import (HEADER, FitTestCase, cobb_douglas_data, cobb_douglas_sheet, layout, logs, scipy,
+                         statsmodels_fit, statsmodels_table)
 from .support import module_session, row_of, write_columns
 
 CALC = module_session()
@@ -30,9 +30,7 @@ class CobbDouglasTableTest(FitTestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.data = cobb_douglas_data()
-        cls.sheet = CALC.new_sheet("CobbDouglas")
-        write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "CobbDouglas")
         # Exactly the table's size: 2 inputs, no controls -> 2 + 0 + 15 = 17 rows.
         set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
         set_array_formula(cls.sheet, "F21:L37", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
@@ -170,9 +168,7 @@ class ConstantReturnsTest(FitTestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.data = cobb_douglas_data()
-        cls.sheet = CALC.new_sheet("ConstantReturns")
-        write_columns(cls.sheet, "A1", cls.data, ["year", "P", "L", "C"])
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "ConstantReturns")
         set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25;;TRUE())")
         recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "F1:L17")
@@ -258,8 +254,7 @@ class ProdStatTest(FitTestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = CALC.new_sheet("ProdStat")
-        write_columns(cls.sheet, "A1", cobb_douglas_data(), ["year", "P", "L", "C"])
+        cls.sheet, _ = cobb_douglas_sheet(CALC, "ProdStat")
         set_array_formula(cls.sheet, "F1:L17", "=PRODFIT(B1:B25;C1:D25)")
         set_array_formula(cls.sheet, "F21:L37", '=PRODFIT(B1:B25;C1:D25;;;"hc1")')
         set_array_formula(cls.sheet, "F41:L57", "=PRODFIT(B1:B25;C1:D25;;TRUE())")

@@ -283,11 +283,14 @@ class RescaledSharesAndPeriodsTest(GrowthTestCase):
         set_values(CALC.sheet, "Z201", cls.kilns)
         set_array_formula(CALC.sheet, "AF201:AL223",
                           '=PRODFIT(AB201:AB%d;AC201:AD%d;;;;;;AA201:AA%d;"fixed";Z201:Z%d)' % ((last,) * 4))
-        set_array_formula(CALC.sheet, "AF231:AL251", '=PRODFIT(AB201:AB%d;AC201:AD%d;;;;;;AA201:AA%d;"fixed")' % ((last,) * 3))
+        set_array_formula(CALC.sheet, "AF231:AL251",
+                          '=PRODFIT(AB201:AB%d;AC201:AD%d;;;;;;AA201:AA%d;"fixed")' % ((last,) * 3))
         set_array_formula(CALC.sheet, "AN202:AN%d" % last,
                           "=PRODTFP($AF$201:$AL$223;AB202:AB%d;AC202:AD%d;Z202:Z%d)" % ((last,) * 3))
-        set_array_formula(CALC.sheet, "AO202:AO%d" % last, "=PRODTFP($AF$231:$AL$251;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
-        set_array_formula(CALC.sheet, "AP202:AP%d" % last, "=PRODTFP($AF$201:$AL$223;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
+        set_array_formula(CALC.sheet, "AO202:AO%d" % last,
+                          "=PRODTFP($AF$231:$AL$251;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
+        set_array_formula(CALC.sheet, "AP202:AP%d" % last,
+                          "=PRODTFP($AF$201:$AL$223;AB202:AB%d;AC202:AD%d)" % ((last,) * 2))
         recalc(CALC.doc)
 
     def column(self, where):

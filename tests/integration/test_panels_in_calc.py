@@ -310,7 +310,8 @@ class TooFewGroupsTest(PanelTestCase):
         result = dummy_regression(y, x, [r["state"] for r in self.rows], cluster=True)
         errors, _ = nested_cluster_inference(result, 3)
         for j, label in enumerate(["pcap", "pc", "emp", "unemp (control)"]):
-            self.assert_relative(row_of(self.table, label)[2], errors[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+            self.assert_relative(row_of(self.table, label)[2], errors[1 + j], STATSMODELS_RELATIVE,
+                                 label + " CR1 error")
         self.assert_relative(row_of(self.table, "technical change per period")[2], errors[5], STATSMODELS_RELATIVE,
                              "trend CR1 error")
 
