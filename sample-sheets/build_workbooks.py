@@ -1,24 +1,24 @@
 #!/usr/bin/python3
 """Builds the sample workbooks from the seeded scenarios in scenarios.py.
 
-    /usr/bin/python3 sample-sheets/build_workbooks.py --extension build/isoquant.oxt [--output DIR]
+    PYTHONPATH=addin/python /usr/bin/python3 sample-sheets/build_workbooks.py --extension build/isoquant.oxt [--output DIR]
+
+(from the repository root; `cmake --build build --target sample_workbooks` runs it over sample-sheets/)
 
 Each workbook is written as flat OpenDocument XML (.fods), readable and diffable. After building,
 every formula cell must compute without an error or message, and the fitted exponents must land
 within three standard errors of the true ones; the script exits non-zero otherwise.
 """
-import argparse
 import os
 import sys
 
+from isoquant_office import HeadlessOffice, extension_and_output, set_array_formula, set_formula, set_values
+
+import scenarios  # this folder's modules: on the path as the script's own
+import workbook_style as style
+from workbook_checks import formula_problems, named_range
+
 HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, os.path.join(HERE, "..", "tests", "integration"))
-
-from office import HeadlessOffice, get_cell, set_array_formula, set_formula, set_values  # noqa: E402
-from workbook_checks import formula_problems, named_range  # noqa: E402
-
-import scenarios  # noqa: E402
-import workbook_style as style  # noqa: E402
 
 FLAT_ODS_FILTER = "OpenDocument Spreadsheet Flat XML"
 
@@ -503,11 +503,7 @@ WORKBOOKS = {"furniture-workshops.fods": furniture_workshops,
 
 
 def main():
-    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    parser.add_argument("--extension", required=True, help="path to isoquant.oxt")
-    parser.add_argument("--output", default=HERE, help="folder to write the workbooks to")
-    arguments = parser.parse_args()
-    os.makedirs(arguments.output, exist_ok=True)
+    arguments = extension_and_output(__doc__.splitlines()[0], "folder to write the workbooks to", HERE)
     with HeadlessOffice(extension_path=arguments.extension) as office:
         for name, build in WORKBOOKS.items():
             path = os.path.join(arguments.output, name)

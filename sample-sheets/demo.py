@@ -2,18 +2,19 @@
 """The main job on the bundled sample data: open each sample workbook in a headless Calc with the
 extension installed, recalculate, print what the fit says, and export the workbook to PDF.
 
-    /usr/bin/python3 sample-sheets/demo.py --extension build/isoquant.oxt --output build/demo
+    PYTHONPATH=addin/python /usr/bin/python3 sample-sheets/demo.py --extension build/isoquant.oxt --output build/demo
+
+(from the repository root; `cmake --build build --target demo` runs it, README command 1)
 """
-import argparse
 import glob
 import os
 import sys
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, os.path.join(HERE, "..", "tests", "integration"))
+from isoquant_office import HeadlessOffice, extension_and_output, recalc
 
-from office import HeadlessOffice, recalc  # noqa: E402
-from workbook_checks import formula_problems, named_range  # noqa: E402
+from workbook_checks import formula_problems, named_range  # this folder: on the path as the script's own
+
+HERE = os.path.dirname(os.path.abspath(__file__))
 
 
 def show(value):
@@ -85,11 +86,7 @@ def summarise(doc, name):
 
 
 def main():
-    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    parser.add_argument("--extension", required=True, help="path to isoquant.oxt")
-    parser.add_argument("--output", required=True, help="folder for the PDF exports")
-    arguments = parser.parse_args()
-    os.makedirs(arguments.output, exist_ok=True)
+    arguments = extension_and_output(__doc__.splitlines()[0], "folder for the PDF exports")
     workbooks = sorted(glob.glob(os.path.join(HERE, "*.fods")))
     failures = 0
     with HeadlessOffice(extension_path=arguments.extension) as office:

@@ -1,7 +1,6 @@
-"""Checks on a computed workbook shared by the builder, the demo and the tests."""
+"""Checks on a computed workbook shared by the builder and the demo."""
+from isoquant_office import get_cell  # first: it imports uno, which makes com.sun.star importable
 from com.sun.star.sheet.CellFlags import FORMULA
-
-from office import get_cell
 
 
 def formula_cells(doc):

@@ -3,15 +3,11 @@
 full recalculation of the document (XCalculatable.calculateAll) holding only the formulas measured.
 """
 
-import os
 import statistics
-import sys
 import time
 
 import numpy
-
-sys.path.insert(0, os.path.join(os.path.dirname(os.path.dirname(os.path.abspath(__file__))), "integration"))
-from office import HeadlessOffice  # noqa: E402
+from isoquant_office import HeadlessOffice, set_values_in_blocks
 
 # The typed model the column benchmarks evaluate (invented exponents).
 LOG_SCALE, EXPONENTS = 0.6, (0.3, 0.5, 0.15)
@@ -27,12 +23,8 @@ def invented(rows, seed=20261202):
 
 def fill(sheet, output, inputs):
     """Output in A2:A(n+1), inputs in B:D, a header row of text."""
-    sheet.getCellRangeByName("A1:D1").setDataArray((("output", "capital", "labour", "materials"),))
-    values = numpy.column_stack([output, inputs])
-    for start in range(0, len(values), CHUNK):
-        block = values[start:start + CHUNK]
-        target = sheet.getCellRangeByPosition(0, start + 1, 3, start + len(block))
-        target.setDataArray(tuple(tuple(float(v) for v in row) for row in block))
+    set_values_in_blocks(sheet, ["output", "capital", "labour", "materials"], numpy.column_stack([output, inputs]),
+                         CHUNK)
 
 
 def recalculation_seconds(doc, runs):

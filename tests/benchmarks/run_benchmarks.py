@@ -2,7 +2,8 @@
 """Isoquant's benchmarks, each side by side with what a user would do instead, in one run.
 
     cmake --build build --target bench            # everything (about 5 minutes on 2 cores)
-    /usr/bin/python3 tests/benchmarks/run_benchmarks.py --core-bench build/tests/benchmarks/isoquant_core_bench \
+    PYTHONPATH=addin/python /usr/bin/python3 tests/benchmarks/run_benchmarks.py \
+        --core-bench build/tests/benchmarks/isoquant_core_bench \
         [--oxt build/isoquant-bench.oxt] [--runs 5] [--sizes 10000,100000,1000000]
 
 Prints every figure with both sides and their ratio, then each target of the performance issue as
@@ -16,7 +17,6 @@ import argparse
 import os
 import statistics
 import subprocess
-import sys
 import tempfile
 import time
 
@@ -156,8 +156,7 @@ def main():
         if not args.skip_core:
             core_part(args, folder)
     if args.oxt:
-        sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-        import calc_benchmarks
+        import calc_benchmarks  # this folder (the script's own, on the path); needs the package isoquant_office
         calc_benchmarks.run(args, report, target)
     print("load after: %s" % open("/proc/loadavg").read().strip())
     print("== Targets ==")

@@ -1,10 +1,11 @@
 """Whole columns against the exact range in Calc: =PRODSTAT(A:A;B:D;"labour") and
 =PRODSTAT(A1:A41;B1:D41;"labour") on 40 rows of invented seeded data (calc_benchmarks.invented).
 
-Run from the repository root with Debian's Python (the only one that imports uno), with the
-benchmark extension (target oxt_bench), which adds the do-nothing ISOQUANTFLOOR(output; inputs):
+Run from the repository root with Debian's Python (the only one that imports uno), the package
+isoquant_office (addin/python) on the path, with the benchmark extension (target oxt_bench), which
+adds the do-nothing ISOQUANTFLOOR(output; inputs):
     cmake --build build --target oxt_bench
-    ISOQUANT_OXT=$PWD/build/isoquant-bench.oxt /usr/bin/python3 tests/benchmarks/whole_column_bench.py
+    PYTHONPATH=addin/python ISOQUANT_OXT=$PWD/build/isoquant-bench.oxt /usr/bin/python3 tests/benchmarks/whole_column_bench.py
 ISOQUANTFLOOR over the whole columns times Calc's own part: building the argument arrays.
 
 Two figures per range, medians of RUNS:
@@ -17,15 +18,12 @@ Only the timed formula is in the document. The machine's load average is printed
 
 import os
 import statistics
-import sys
 import time
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
-sys.path.insert(0, os.path.join(os.path.dirname(HERE), "integration"))
+from calc_benchmarks import fill, invented  # this folder: on the path as the script's own
+from isoquant_office import CalcSession
 
-from calc_benchmarks import invented  # noqa: E402
-from office import start_module_office, stop_module_office  # noqa: E402
+HERE = os.path.dirname(os.path.abspath(__file__))
 
 ROWS, RUNS = 40, 5
 FORMULAS = {
@@ -34,13 +32,6 @@ FORMULAS = {
     "floor, exact": "=ISOQUANTFLOOR(A1:A41;B1:D41)",
     "floor, whole": "=ISOQUANTFLOOR(A:A;B:D)",
 }
-
-
-def write_data(sheet, seed):
-    output, inputs = invented(ROWS, seed)
-    sheet.getCellRangeByName("A1:D1").setDataArray((("output", "capital", "labour", "materials"),))
-    rows = tuple((float(y),) + tuple(float(x) for x in xs) for y, xs in zip(output, inputs))
-    sheet.getCellRangeByPosition(0, 1, 3, ROWS).setDataArray(rows)
 
 
 def timed(doc):
@@ -53,17 +44,18 @@ def main():
     oxt = os.environ.get("ISOQUANT_OXT", os.path.join(os.path.dirname(os.path.dirname(HERE)), "build",
                                                        "isoquant-bench.oxt"))
     print("load average before: %.2f %.2f %.2f" % os.getloadavg())
-    office, doc = start_module_office(oxt)
+    session = CalcSession(oxt)
+    session.start()
     try:
+        doc, sheet = session.doc, session.sheet
         doc.enableAutomaticCalculation(False)
-        sheet = doc.Sheets.getByIndex(0)
         seed = 1
         for name, formula in FORMULAS.items():
             sheet.getCellRangeByName("F1").setFormula(formula)
             first, again = [], []
             for _ in range(RUNS):
                 seed += 1  # new data: no fit in the cache is equal
-                write_data(sheet, seed)
+                fill(sheet, *invented(ROWS, seed))
                 first.append(timed(doc))
                 again.append(timed(doc))
             value = sheet.getCellRangeByName("F1").getValue()
@@ -71,7 +63,7 @@ def main():
                   (name, statistics.median(first), statistics.median(again), value))
             sheet.getCellRangeByName("F1").setFormula("")
     finally:
-        stop_module_office(office)
+        session.stop()
     print("load average after: %.2f %.2f %.2f" % os.getloadavg())
 
 

@@ -4,8 +4,9 @@ PRODSTAT labels typed loosely, the table's size under the incomplete-rows switch
 trend, whole columns as ranges, shares in percent or headed "labour share", and a profit maximum
 too small to be a plant.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_analyst_layouts.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_analyst_layouts.py
 
 Sources of the expected figures, named beside each check:
 - "Cobb & Douglas (1928)": Tables II and III of the paper (tests/data/cobb_douglas_1928.csv); the
@@ -17,44 +18,15 @@ Sources of the expected figures, named beside each check:
   c = A^(-1/nu) * (d^s w1^(1-s) + (1-d)^s w2^(1-s))^(1/(1-s)), s = 1/(1+rho), computed here.
 """
 
-import csv
 import math
-import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from office import (  # noqa: E402
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
-    stop_module_office)
+from .support import cobb_douglas_rows, module_session
 
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
-
-OFFICE = None
-DOC = None
-
-
-def setUpModule():
-    global OFFICE, DOC
-    OFFICE, DOC = start_module_office(OXT)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
-
-
-def cobb_douglas_rows():
-    with open(os.path.join(REPO, "tests", "data", "cobb_douglas_1928.csv"), newline="") as handle:
-        return [[float(row["P"]), float(row["L"]), float(row["C"])] for row in csv.DictReader(handle)]
-
-
-def new_sheet(name):
-    sheets = DOC.Sheets
-    sheets.insertNewByName(name, sheets.getCount())
-    return sheets.getByName(name)
+CALC = module_session()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 class TotalsRow(unittest.TestCase):
@@ -62,14 +34,14 @@ class TotalsRow(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Totals")
+        cls.sheet = CALC.new_sheet("Totals")
         set_values(cls.sheet, "B1", [["P", "L", "C"]] + cobb_douglas_rows())
         for column in "BCD":
             set_formula(cls.sheet, "%s26" % column, "=SUM(%s2:%s25)" % (column, column))
         set_array_formula(cls.sheet, "G1:M17", "=PRODFIT(B1:B26;C1:D26)")
         set_formula(cls.sheet, "O1", '=PRODSTAT(B1:B26;C1:D26;"L")')
         set_formula(cls.sheet, "O2", '=PRODSTAT(B1:B25;C1:D25;"L")')
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_the_totals_row_is_named(self):
         message = "Error: row 26 looks like a total of the rows above; leave it out of the ranges"
@@ -86,13 +58,13 @@ class HeaderRows(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Headers")
+        cls.sheet = CALC.new_sheet("Headers")
         rows = cobb_douglas_rows()
         set_values(cls.sheet, "A1", [["output", "capital", "capital"]] + rows)
         set_values(cls.sheet, "E1", [["output", "labour", ""]] + rows)
         set_formula(cls.sheet, "I1", '=PRODSTAT(A1:A25;B1:C25;"capital")')
         set_formula(cls.sheet, "I2", '=PRODSTAT(E1:E25;F1:G25;"labour")')
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_a_label_used_twice_is_named(self):
         self.assertEqual(get_cell(self.sheet, "I1"),
@@ -108,12 +80,12 @@ class LooseLabels(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Labels")
+        cls.sheet = CALC.new_sheet("Labels")
         set_values(cls.sheet, "A1", [["P", "L", "C"]] + cobb_douglas_rows())
         set_array_formula(cls.sheet, "E1:K17", "=PRODFIT(A1:A25;B1:C25)")
         set_formula(cls.sheet, "M1", '=PRODSTAT(A1:A25;B1:C25;" R\u00b2 ")')
         set_formula(cls.sheet, "M2", '=PRODSTAT(A1:A25;B1:C25;"L ";" upper bound")')
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "E1:K17")
 
     def test_same_cells_as_the_table(self):
@@ -129,7 +101,7 @@ class TableSizeUnderTheSwitch(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Switch")
+        cls.sheet = CALC.new_sheet("Switch")
         rows = cobb_douglas_rows()
         set_values(cls.sheet, "A1", [["P", "L", "C"]] + rows)
         holed = [list(row) for row in rows]
@@ -137,7 +109,7 @@ class TableSizeUnderTheSwitch(unittest.TestCase):
         set_values(cls.sheet, "E1", [["P", "L", "C"]] + holed)
         set_array_formula(cls.sheet, "I1:O18", "=PRODFIT(A1:A25;B1:C25;;;;;;;;;TRUE())")
         set_array_formula(cls.sheet, "Q1:W18", "=PRODFIT(E1:E25;F1:G25;;;;;;;;;TRUE())")
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_the_dropped_rows_row_is_always_there(self):
         complete = get_range(self.sheet, "I1:O18")
@@ -154,7 +126,7 @@ class InputsByLabel(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("ByLabel")
+        cls.sheet = CALC.new_sheet("ByLabel")
         cls.rows = cobb_douglas_rows()
         set_values(cls.sheet, "A1", [["P", "L", "C"]] + cls.rows)
         set_array_formula(cls.sheet, "I1:O17", "=PRODFIT(A1:A25;B1:C25)")
@@ -162,7 +134,7 @@ class InputsByLabel(unittest.TestCase):
         set_values(cls.sheet, "Q1", [["C", "L"]] + [[row[2], row[1]] for row in cls.rows])
         set_formula(cls.sheet, "T1", '=PRODMARGINAL($I$1:$O$17;Q1:R2;"L")')
         set_array_formula(cls.sheet, "U1:U25", '=PRODMARGINAL($I$1:$O$17;Q1:R25;"L")')
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "I1:O17")
 
     def marginal_product_of_labour(self, labour, capital):
@@ -192,7 +164,7 @@ class DatesAsTheTrend(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Dates")
+        cls.sheet = CALC.new_sheet("Dates")
         set_values(cls.sheet, "A1", [["P", "L", "C"]] + cobb_douglas_rows())
         set_values(cls.sheet, "D1", [["year end", "year"]])
         for row in range(2, 26):
@@ -200,7 +172,7 @@ class DatesAsTheTrend(unittest.TestCase):
             set_formula(cls.sheet, "E%d" % row, "=YEAR(D%d)" % row)
         set_array_formula(cls.sheet, "G1:M24", "=PRODFIT(A1:A25;B1:C25;;;;;;;;D1:D25)")
         set_array_formula(cls.sheet, "O1:U24", "=PRODFIT(A1:A25;B1:C25;;;;;;;;E1:E25)")
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_the_form_row_says_the_rate_is_per_day(self):
         form = find_row(get_range(self.sheet, "G1:M24"), "form")
@@ -217,7 +189,7 @@ class WholeColumns(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Whole")
+        cls.sheet = CALC.new_sheet("Whole")
         set_values(cls.sheet, "A1", [["P", "L", "C"]] + cobb_douglas_rows())
         set_formula(cls.sheet, "E1", '=PRODSTAT(A:A;B:C;"L")')
         set_formula(cls.sheet, "E2", '=PRODSTAT(A1:A25;B1:C25;"L")')
@@ -225,7 +197,7 @@ class WholeColumns(unittest.TestCase):
         set_array_formula(cls.sheet, "O1:U17", "=PRODFIT(A1:A25;B1:C25)")
         set_array_formula(cls.sheet, "G20:M27", "=PRODCOMPARE(A:A;B:C)")
         set_array_formula(cls.sheet, "O20:U27", "=PRODCOMPARE(A1:A25;B1:C25)")
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_the_published_fit_from_whole_columns(self):
         # Cobb & Douglas (1928), unrestricted fit: labour 0.8072782 (R 4.2.2 lm, 7 digits printed).
@@ -242,7 +214,7 @@ class SharesAsUsersTypeThem(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Shares")
+        cls.sheet = CALC.new_sheet("Shares")
         rows = cobb_douglas_rows()
         set_values(cls.sheet, "A1", [["P", "labour", "capital"]] + rows)
         set_values(cls.sheet, "D1", [["labour", "capital"]] + [[0.75, 0.25]] * 24)
@@ -254,7 +226,7 @@ class SharesAsUsersTypeThem(unittest.TestCase):
         set_formula(cls.sheet, "X1", "=PRODGROWTH(A1:A25;B1:C25;H1:I25)")
         set_formula(cls.sheet, "X2", "=PRODGROWTH(A1:A25;B1:C25;J1:K25)")
         set_formula(cls.sheet, "X3", '=PRODFIT(A1:A25;B1:C25;"cobb douglas")')
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_share_headers_name_their_inputs(self):
         # same sheet: headed "labour share" | "share of capital", the table of plain headers
@@ -279,13 +251,13 @@ class NoProfitableSize(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("Profit")
+        cls.sheet = CALC.new_sheet("Profit")
         set_values(cls.sheet, "A1", [["form", "ces", ""], ["A", 2, ""], ["delta", 0.4, ""], ["rho", 0.5, ""],
                                      ["nu", 0.95, ""], ["inputs", "labour", "ovens"]])
         set_values(cls.sheet, "E1", [[18, 45]])
         set_formula(cls.sheet, "E3", "=PRODPROFIT(A1:C6;5;E1:F1)")
         set_array_formula(cls.sheet, "E4:H4", "=PRODPROFIT(A1:C6;40;E1:F1)")
-        recalc(DOC)
+        recalc(CALC.doc)
 
     def test_producing_nothing_is_said(self):
         self.assertEqual(get_cell(self.sheet, "E3"), "No profitable size: producing nothing is best at these prices "

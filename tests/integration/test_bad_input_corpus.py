@@ -7,20 +7,19 @@ message, in tests/unit/test_bad_input.cpp, test_growth_bad_input.cpp and the for
 
 Fixture data: the Cobb & Douglas (1928) indexes (tests/data/cobb_douglas_1928.csv) in A1:C25, and
 copies of them each spoiled in one known place (the corpus names the place it expects).
-Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_bad_input_corpus.py
+The extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
-import csv
 import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
-EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
-CORPUS = os.path.join(ROOT, "tests", "bad_input", "corpus.tsv")
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, recalc, set_formula, set_values
 
-from office import HeadlessOffice, get_cell, recalc, set_formula, set_values  # noqa: E402
+from .support import REPO, cobb_douglas_rows, module_session
+
+CORPUS = os.path.join(REPO, "tests", "bad_input", "corpus.tsv")
 
 
 def read_corpus():
@@ -38,11 +37,6 @@ def read_corpus():
     return cases
 
 
-def cobb_douglas_1928():
-    with open(os.path.join(ROOT, "tests", "data", "cobb_douglas_1928.csv"), newline="") as handle:
-        return [[float(row["P"]), float(row["L"]), float(row["C"])] for row in csv.DictReader(handle)]
-
-
 def spoiled(rows, row, column, value):
     """A copy of the data rows with one cell replaced (row and column 0-based in the data)."""
     copy = [list(r) for r in rows]
@@ -51,7 +45,7 @@ def spoiled(rows, row, column, value):
 
 
 def build_fixture(sheet):
-    data = cobb_douglas_1928()
+    data = cobb_douglas_rows()
     header = [["P", "L", "C"]]
     blocks = {
         "A1": header + data,                                   # clean data
@@ -94,19 +88,11 @@ def build_fixture(sheet):
         set_formula(sheet, "AT%d" % row, "=A%d" % row)
 
 
+CALC = module_session(build_fixture)
+setUpModule, tearDownModule = CALC.start, CALC.stop
+
+
 class BadInputCorpus(unittest.TestCase):
-    @classmethod
-    def setUpClass(cls):
-        cls.office = HeadlessOffice(extension_path=EXTENSION)
-        cls.office.__enter__()
-        cls.doc = cls.office.new_calc()
-        cls.sheet = cls.doc.Sheets.getByIndex(0)
-        build_fixture(cls.sheet)
-
-    @classmethod
-    def tearDownClass(cls):
-        cls.office.__exit__(None, None, None)
-
     def test_corpus_has_enough_cases(self):
         cases = read_corpus()
         self.assertGreaterEqual(len(cases), 50)
@@ -115,12 +101,12 @@ class BadInputCorpus(unittest.TestCase):
     def test_every_case_shows_its_message_and_the_office_answers(self):
         for name, formula, expected in read_corpus():
             with self.subTest(case=name):
-                set_formula(self.sheet, "BA1", formula)
-                recalc(self.doc)
-                shown = get_cell(self.sheet, "BA1")
+                set_formula(CALC.sheet, "BA1", formula)
+                recalc(CALC.doc)
+                shown = get_cell(CALC.sheet, "BA1")
                 self.assertIsInstance(shown, str, "%s showed a number: %r" % (formula, shown))
                 self.assertEqual(shown, expected, formula)
-                self.assertTrue(self.office.alive(timeout=10), "the office stopped answering after " + name)
+                self.assertTrue(CALC.office.alive(timeout=10), "the office stopped answering after " + name)
 
 
 if __name__ == "__main__":

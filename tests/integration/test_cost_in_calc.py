@@ -1,8 +1,9 @@
 """The cost functions computed by a real headless LibreOffice Calc with the extension: PRODCOSTFIT's
 tables, PRODCOST over a fitted and a typed cost model, a bad input, and the Function Wizard's entry.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_cost_in_calc.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_cost_in_calc.py
 
 One office with the extension serves the whole module. The data are invented: 30 branches of a
 chain of laundries, each with its yearly cost, washes and the prices of labour, machine hours and
@@ -22,19 +23,12 @@ Formula recomputations agree to 1e-12 relative (the same logs and exponentials i
 """
 
 import math
-import os
 import random
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_values
 
-from office import (  # noqa: E402  (needs the path above)
-    get_cell, get_range, recalc, set_array_formula, set_values, start_module_office, stop_module_office)
-
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
+from .support import CalcTestCase, module_session
 
 FORMULA_TOLERANCE = 1e-12
 LSTSQ_TOLERANCE = 1e-8
@@ -43,11 +37,6 @@ SCALE, EXPONENTS = 2.5, (0.5, 0.3, 0.4)
 LABELS = ["labour", "machines", "energy"]
 NU = sum(EXPONENTS)
 ROWS = 30
-
-OFFICE = None
-DOC = None
-SHEET = None
-
 
 def dual_cost(y, prices):
     cost = NU * (y / SCALE) ** (1 / NU)
@@ -75,41 +64,26 @@ TYPED_PRODUCTION = [["form", "cobb-douglas"], ["A", SCALE]] + [[label, b] for la
 WORDS = ["total", "marginal", "average", "cost elasticity", "returns to scale"]
 
 
-def setUpModule():
-    global OFFICE, DOC, SHEET
-
-    def prepare(doc):
-        sheet = doc.Sheets.getByIndex(0)
-        set_values(sheet, "A1", [["cost", "washes"] + LABELS] + DATA)  # A1:E31
-        set_values(sheet, "G1", TYPED_COST)                            # G1:H6
-        set_values(sheet, "G11", TYPED_PRODUCTION)                     # G11:H15
-
-    OFFICE, DOC = start_module_office(OXT, prepare)
-    SHEET = DOC.Sheets.getByIndex(0)
+def write_laundries(sheet):
+    set_values(sheet, "A1", [["cost", "washes"] + LABELS] + DATA)  # A1:E31
+    set_values(sheet, "G1", TYPED_COST)                            # G1:H6
+    set_values(sheet, "G11", TYPED_PRODUCTION)                     # G11:H15
 
 
-def tearDownModule():
-    stop_module_office(OFFICE)
+CALC = module_session(write_laundries)
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
-class CostTestCase(unittest.TestCase):
-
-    def assert_close(self, value, expected, tolerance, what):
-        self.assertIsInstance(value, float, "%s: expected a number, the cell shows %r" % (what, value))
-        self.assertLessEqual(abs(value - expected), tolerance * abs(expected),
-                             "%s: %r, expected %r (relative tolerance %g)" % (what, value, expected, tolerance))
-
-
-class CostFitTableTest(CostTestCase):
+class CostFitTableTest(CalcTestCase):
     """PRODCOSTFIT over 7 columns: Cobb-Douglas k + 18 = 21 rows, translog 2k + k(k+1)/2 + 19 = 31."""
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J1:P21", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
-        set_array_formula(SHEET, "J31:P61", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
-        recalc(DOC)
-        cls.table = get_range(SHEET, "J1:P21")
-        cls.translog = get_range(SHEET, "J31:P61")
+        set_array_formula(CALC.sheet, "J1:P21", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(CALC.sheet, "J31:P61", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
+        recalc(CALC.doc)
+        cls.table = get_range(CALC.sheet, "J1:P21")
+        cls.translog = get_range(CALC.sheet, "J31:P61")
 
     def test_cobb_douglas_layout(self):
         self.assertEqual(self.table[0], ["Cobb-Douglas cost fit", "value", "std. error", "t", "p-value",
@@ -134,9 +108,9 @@ class CostFitTableTest(CostTestCase):
         b = np.linalg.lstsq(design, logs[:, 0] - logs[:, 4], rcond=None)[0]
         expected = list(b) + [1 - b[2] - b[3]]
         for row, value in zip(self.table[1:6], expected):
-            self.assert_close(row[1], value, LSTSQ_TOLERANCE, row[0])  # numpy lstsq
-        self.assert_close(self.table[15][1], b[1], LSTSQ_TOLERANCE, "cost elasticity = output coefficient")
-        self.assert_close(self.table[16][1], 1 / b[1], LSTSQ_TOLERANCE, "returns to scale")
+            self.assert_relative(row[1], value, LSTSQ_TOLERANCE, row[0])  # numpy lstsq
+        self.assert_relative(self.table[15][1], b[1], LSTSQ_TOLERANCE, "cost elasticity = output coefficient")
+        self.assert_relative(self.table[16][1], 1 / b[1], LSTSQ_TOLERANCE, "returns to scale")
 
     def test_translog_layout(self):
         self.assertEqual(self.translog[0][0], "translog cost fit")
@@ -149,68 +123,69 @@ class CostFitTableTest(CostTestCase):
         self.assertEqual(self.translog[-2][1], "translog cost")
 
 
-class CostModelTest(CostTestCase):
+class CostModelTest(CalcTestCase):
     """PRODCOST over the fitted table and over the typed dual, and for the production model."""
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J81:P101", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(CALC.sheet, "J81:P101", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
         for column, word in zip("RSTUV", WORDS):
-            set_array_formula(SHEET, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
-            set_array_formula(SHEET, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
-            set_array_formula(SHEET, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
-        set_array_formula(SHEET, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
-        recalc(DOC)
+            set_array_formula(CALC.sheet, "%s2:%s6" % (column, column),
+                              '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
+            set_array_formula(CALC.sheet, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
+            set_array_formula(CALC.sheet, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
+        set_array_formula(CALC.sheet, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
+        recalc(CALC.doc)
 
     def test_fitted_model_total_cost_is_the_median_prediction(self):
-        fitted = get_range(SHEET, "K82:K86")
+        fitted = get_range(CALC.sheet, "K82:K86")
         for row in range(5):
             y, prices = DATA[row][1], DATA[row][2:]
             log_cost = fitted[0][0] + fitted[1][0] * math.log(y) + sum(
                 fitted[2 + i][0] * math.log(w) for i, w in enumerate(prices))
-            self.assert_close(get_cell(SHEET, "R%d" % (row + 2)), math.exp(log_cost), FORMULA_TOLERANCE,
-                              "total, row %d" % row)  # cost-model formula
-            self.assert_close(get_cell(SHEET, "U%d" % (row + 2)), fitted[1][0], FORMULA_TOLERANCE, "elasticity")
+            self.assert_relative(get_cell(CALC.sheet, "R%d" % (row + 2)), math.exp(log_cost), FORMULA_TOLERANCE,
+                                 "total, row %d" % row)  # cost-model formula
+            self.assert_relative(get_cell(CALC.sheet, "U%d" % (row + 2)), fitted[1][0], FORMULA_TOLERANCE, "elasticity")
 
     def test_typed_dual_and_production_model_agree(self):
         y, prices = DATA[0][1], DATA[0][2:]
         cost = dual_cost(y, prices)  # dual of Cobb-Douglas
         expected = [cost, cost / (NU * y), cost / y, 1 / NU, NU]
         for column, word, value in zip("RSTUV", WORDS, expected):
-            self.assert_close(get_cell(SHEET, "%s12" % column), value, FORMULA_TOLERANCE, "typed cost model " + word)
-            self.assert_close(get_cell(SHEET, "%s14" % column), value, FORMULA_TOLERANCE, "production model " + word)
+            self.assert_relative(get_cell(CALC.sheet, "%s12" % column), value, FORMULA_TOLERANCE,
+                                 "typed cost model " + word)
+            self.assert_relative(get_cell(CALC.sheet, "%s14" % column), value, FORMULA_TOLERANCE,
+                                 "production model " + word)
 
 
     def test_production_model_gives_a_column_of_marginal_costs(self):
         for row in range(5):
             y, prices = DATA[row][1], DATA[row][2:]
-            self.assert_close(get_cell(SHEET, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y), FORMULA_TOLERANCE,
-                              "marginal cost, row %d" % row)  # dual of Cobb-Douglas
+            self.assert_relative(get_cell(CALC.sheet, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y),
+                                 FORMULA_TOLERANCE, "marginal cost, row %d" % row)  # dual of Cobb-Douglas
 
 
-class CostBadInputTest(CostTestCase):
+class CostBadInputTest(CalcTestCase):
 
     def test_messages_name_argument_and_row(self):
-        set_values(SHEET, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
-        set_values(SHEET, "A44", [[0.0]])
-        set_array_formula(SHEET, "J111:P131", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
-        set_array_formula(SHEET, "J141:P161", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
-        set_array_formula(SHEET, "J171:P191", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
-        recalc(DOC)
-        self.assertEqual(get_cell(SHEET, "J111"), "Error: cost: row 4 is 0; logs need positive values")
-        self.assertEqual(get_cell(SHEET, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
-        self.assertEqual(get_cell(SHEET, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
-        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+        set_values(CALC.sheet, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
+        set_values(CALC.sheet, "A44", [[0.0]])
+        set_array_formula(CALC.sheet, "J111:P131", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
+        set_array_formula(CALC.sheet, "J141:P161", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
+        set_array_formula(CALC.sheet, "J171:P191", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
+        recalc(CALC.doc)
+        self.assertEqual(get_cell(CALC.sheet, "J111"), "Error: cost: row 4 is 0; logs need positive values")
+        self.assertEqual(get_cell(CALC.sheet, "J141"),
+                         "Error: controls: not available yet for cost fits; leave it empty")
+        self.assertEqual(get_cell(CALC.sheet, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
+        self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
 
 class FunctionWizardTest(unittest.TestCase):
 
     def test_prodcostfit_is_listed_with_its_arguments(self):
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
         listed = {}
-        for i in range(descriptions.getCount()):
-            properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}
+        for properties in CALC.office.function_descriptions():
             if properties.get("Name") in ("PRODCOSTFIT", "PRODCOST"):
                 listed[properties["Name"]] = properties
         self.assertEqual(sorted(listed), ["PRODCOST", "PRODCOSTFIT"])

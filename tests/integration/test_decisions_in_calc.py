@@ -2,8 +2,9 @@
 PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS, PRODSUBSTITUTION, PRODLEASTCOST, PRODCOST,
 PRODBUDGET, PRODPROFIT and PRODISOQUANT.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_decisions_in_calc.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_decisions_in_calc.py
 
 One office with the extension serves the whole module. The data are invented: a bakery whose
 output (loaves a day) depends on baker hours and oven hours, with typed Cobb-Douglas models of
@@ -25,19 +26,11 @@ isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the i
 """
 
 import math
-import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from office import (  # noqa: E402  (needs the path above)
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, start_module_office,
-    stop_module_office)
-
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
+from .support import CalcTestCase, module_session
 
 FORMULA_TOLERANCE = 1e-12
 ISOQUANT_TOLERANCE = 1e-9
@@ -48,20 +41,6 @@ SHRINKING = (40.0, (0.45, 0.35))  # A6:B9: a second shop, decreasing returns
 CONSTANT = (12.0, (0.6, 0.4))     # A11:B14
 PRICES = (18.0, 45.0)     # D1:E1: a baker hour, an oven hour
 BUNDLES = [(10.0, 4.0), (30.0, 9.0), (55.0, 20.0)]  # G2:H4 under a header
-
-OFFICE = None
-DOC = None
-SHEET = None
-
-
-def setUpModule():
-    global OFFICE, DOC, SHEET
-    OFFICE, DOC = start_module_office(OXT, lambda doc: write_bakery(doc.Sheets.getByIndex(0)))
-    SHEET = DOC.Sheets.getByIndex(0)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
 
 
 def model_rows(model):
@@ -75,6 +54,10 @@ def write_bakery(sheet):
     set_values(sheet, "A11", model_rows(CONSTANT))
     set_values(sheet, "D1", [list(PRICES)])
     set_values(sheet, "G1", [["bakers", "ovens"]] + [list(b) for b in BUNDLES])
+
+
+CALC = module_session(write_bakery)
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def output_of(model, x):
@@ -91,15 +74,7 @@ def varian_least_cost(model, prices, y):
     return cost, ((a * w2 / (b * w1)) ** (b / n) * level, (b * w1 / (a * w2)) ** (a / n) * level)
 
 
-class DecisionTestCase(unittest.TestCase):
-
-    def assert_close(self, value, expected, tolerance, what):
-        self.assertIsInstance(value, float, "%s: expected a number, the cell shows %r" % (what, value))
-        self.assertLessEqual(abs(value - expected), tolerance * abs(expected),
-                             "%s: %r, expected %r (relative tolerance %g)" % (what, value, expected, tolerance))
-
-
-class CurvatureTest(DecisionTestCase):
+class CurvatureTest(CalcTestCase):
     """PRODSECOND, PRODINPUTRETURNS, PRODPAIR, PRODMRTS and PRODSUBSTITUTION per row of G1:H4.
 
     G1:H4 starts with a header row, so each result starts with a header cell of its own and is
@@ -107,21 +82,21 @@ class CurvatureTest(DecisionTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J1:J4", "=PRODSECOND($A$1:$B$4;$G$1:$H$4;1)")
-        set_array_formula(SHEET, "K1:K4", '=PRODSECOND($A$1:$B$4;$G$1:$H$4;"bakers";"ovens")')
-        set_array_formula(SHEET, "L1:L4", "=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;1)")
-        set_array_formula(SHEET, "M1:M4", '=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;"ovens")')
-        set_array_formula(SHEET, "N1:N4", "=PRODPAIR($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "O1:O4", "=PRODMRTS($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "P1:P4", "=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2)")
-        set_array_formula(SHEET, "Q1:Q4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"allen")')
-        set_array_formula(SHEET, "R1:R4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;2;1;"morishima")')
-        set_formula(SHEET, "S2", "=PRODSCALE($A$1:$B$4)")
-        recalc(DOC)
+        set_array_formula(CALC.sheet, "J1:J4", "=PRODSECOND($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(CALC.sheet, "K1:K4", '=PRODSECOND($A$1:$B$4;$G$1:$H$4;"bakers";"ovens")')
+        set_array_formula(CALC.sheet, "L1:L4", "=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;1)")
+        set_array_formula(CALC.sheet, "M1:M4", '=PRODINPUTRETURNS($A$1:$B$4;$G$1:$H$4;"ovens")')
+        set_array_formula(CALC.sheet, "N1:N4", "=PRODPAIR($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(CALC.sheet, "O1:O4", "=PRODMRTS($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(CALC.sheet, "P1:P4", "=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2)")
+        set_array_formula(CALC.sheet, "Q1:Q4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;1;2;"allen")')
+        set_array_formula(CALC.sheet, "R1:R4", '=PRODSUBSTITUTION($A$1:$B$4;$G$1:$H$4;2;1;"morishima")')
+        set_formula(CALC.sheet, "S2", "=PRODSCALE($A$1:$B$4)")
+        recalc(CALC.doc)
 
     def test_each_result_has_its_own_header_cell(self):
         # the words of core/src/decision_cell_functions.cpp
-        self.assertEqual(get_range(SHEET, "J1:R1")[0],
+        self.assertEqual(get_range(CALC.sheet, "J1:R1")[0],
                          ["second derivative in bakers", "cross derivative in bakers and ovens", "returns to bakers",
                           "returns to ovens", "bakers with ovens", "MRTS of bakers for ovens",
                           "elasticity of substitution, bakers and ovens",
@@ -133,47 +108,50 @@ class CurvatureTest(DecisionTestCase):
         for row, x in enumerate(BUNDLES, start=2):
             y = output_of(GROWING, x)
             # Cobb-Douglas calculus
-            self.assert_close(get_cell(SHEET, "J%d" % row), a * (a - 1) * y / x[0] ** 2, FORMULA_TOLERANCE, "own")
-            self.assert_close(get_cell(SHEET, "K%d" % row), a * b * y / (x[0] * x[1]), FORMULA_TOLERANCE, "cross")
+            self.assert_relative(get_cell(CALC.sheet, "J%d" % row), a * (a - 1) * y / x[0] ** 2, FORMULA_TOLERANCE,
+                                 "own")
+            self.assert_relative(get_cell(CALC.sheet, "K%d" % row), a * b * y / (x[0] * x[1]), FORMULA_TOLERANCE,
+                                 "cross")
 
     def test_diminishing_returns_to_each_input_yet_increasing_returns_to_scale(self):
         # common practice, no source
-        self.assertEqual([r[0] for r in get_range(SHEET, "L2:M4")], ["diminishing"] * 3)
-        self.assertEqual([r[1] for r in get_range(SHEET, "L2:M4")], ["diminishing"] * 3)
-        self.assertGreater(get_cell(SHEET, "S2"), 1.0)
+        self.assertEqual([r[0] for r in get_range(CALC.sheet, "L2:M4")], ["diminishing"] * 3)
+        self.assertEqual([r[1] for r in get_range(CALC.sheet, "L2:M4")], ["diminishing"] * 3)
+        self.assertGreater(get_cell(CALC.sheet, "S2"), 1.0)
 
     def test_complements_rate_and_elasticities(self):
         a, b = GROWING[1]
-        self.assertEqual([r[0] for r in get_range(SHEET, "N2:N4")], ["complements"] * 3)
+        self.assertEqual([r[0] for r in get_range(CALC.sheet, "N2:N4")], ["complements"] * 3)
         for row, x in enumerate(BUNDLES, start=2):
             # Cobb-Douglas calculus: MRTS = (a/x1)/(b/x2)
-            self.assert_close(get_cell(SHEET, "O%d" % row), (a / x[0]) / (b / x[1]), FORMULA_TOLERANCE, "MRTS")
+            self.assert_relative(get_cell(CALC.sheet, "O%d" % row), (a / x[0]) / (b / x[1]), FORMULA_TOLERANCE, "MRTS")
             for column in "PQR":  # sigma = 1 (common practice, no source)
-                self.assert_close(get_cell(SHEET, "%s%d" % (column, row)), 1.0, FORMULA_TOLERANCE, "sigma " + column)
+                self.assert_relative(get_cell(CALC.sheet, "%s%d" % (column, row)), 1.0, FORMULA_TOLERANCE,
+                                     "sigma " + column)
 
 
-class PlansTest(DecisionTestCase):
+class PlansTest(CalcTestCase):
     """PRODLEASTCOST, PRODCOST, PRODBUDGET, PRODPROFIT and PRODISOQUANT."""
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "A21:B21", "=PRODLEASTCOST($A$1:$B$4;1500;$D$1:$E$1)")
-        set_formula(SHEET, "C21", "=PRODCOST($A$1:$B$4;1500;$D$1:$E$1)")
-        set_formula(SHEET, "D21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"marginal")')
-        set_formula(SHEET, "E21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"average")')
-        set_array_formula(SHEET, "F21", "=PRODMRTS($A$1:$B$4;A21:B21;1;2)")
-        set_array_formula(SHEET, "A23:C23", "=PRODBUDGET($A$1:$B$4;5000;$D$1:$E$1)")
-        set_array_formula(SHEET, "A25:D25", "=PRODPROFIT($A$6:$B$9;3.2;$D$1:$E$1)")
-        set_array_formula(SHEET, "E25", "=PRODMARGINAL($A$6:$B$9;A25:B25;1)")
-        set_array_formula(SHEET, "F25", "=PRODMARGINAL($A$6:$B$9;A25:B25;2)")
-        set_values(SHEET, "H21", [[float(v)] for v in range(40, 150, 10)])
-        set_array_formula(SHEET, "I21:I31", "=PRODISOQUANT($A$1:$B$4;1500;H21:H31)")
-        set_array_formula(SHEET, "J21:J31", "=PRODOUTPUT($A$1:$B$4;H21:I31)")
+        set_array_formula(CALC.sheet, "A21:B21", "=PRODLEASTCOST($A$1:$B$4;1500;$D$1:$E$1)")
+        set_formula(CALC.sheet, "C21", "=PRODCOST($A$1:$B$4;1500;$D$1:$E$1)")
+        set_formula(CALC.sheet, "D21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"marginal")')
+        set_formula(CALC.sheet, "E21", '=PRODCOST($A$1:$B$4;1500;$D$1:$E$1;"average")')
+        set_array_formula(CALC.sheet, "F21", "=PRODMRTS($A$1:$B$4;A21:B21;1;2)")
+        set_array_formula(CALC.sheet, "A23:C23", "=PRODBUDGET($A$1:$B$4;5000;$D$1:$E$1)")
+        set_array_formula(CALC.sheet, "A25:D25", "=PRODPROFIT($A$6:$B$9;3.2;$D$1:$E$1)")
+        set_array_formula(CALC.sheet, "E25", "=PRODMARGINAL($A$6:$B$9;A25:B25;1)")
+        set_array_formula(CALC.sheet, "F25", "=PRODMARGINAL($A$6:$B$9;A25:B25;2)")
+        set_values(CALC.sheet, "H21", [[float(v)] for v in range(40, 150, 10)])
+        set_array_formula(CALC.sheet, "I21:I31", "=PRODISOQUANT($A$1:$B$4;1500;H21:H31)")
+        set_array_formula(CALC.sheet, "J21:J31", "=PRODOUTPUT($A$1:$B$4;H21:I31)")
         # The README's curvature figures at 30 baker hours and 9 oven hours (G3:H3).
-        set_array_formula(SHEET, "K33", "=PRODSECOND($A$1:$B$4;G3:H3;1)")
-        set_array_formula(SHEET, "L33", "=PRODSECOND($A$1:$B$4;G3:H3;1;2)")
-        set_array_formula(SHEET, "M33", "=PRODMRTS($A$1:$B$4;G3:H3;1;2)")
-        recalc(DOC)
+        set_array_formula(CALC.sheet, "K33", "=PRODSECOND($A$1:$B$4;G3:H3;1)")
+        set_array_formula(CALC.sheet, "L33", "=PRODSECOND($A$1:$B$4;G3:H3;1;2)")
+        set_array_formula(CALC.sheet, "M33", "=PRODMRTS($A$1:$B$4;G3:H3;1;2)")
+        recalc(CALC.doc)
 
     def test_readme_figures(self):
         # Documentation check, not an independent source: the README's worked example prints these
@@ -184,59 +162,60 @@ class PlansTest(DecisionTestCase):
                    "I21": "89.32", "I23": "50.63", "I25": "33.84", "I27": "24.76", "I29": "19.19", "I31": "15.46"}
         for cell, figure in printed.items():
             decimals = len(figure.split(".")[1])
-            self.assertEqual("%.*f" % (decimals, get_cell(SHEET, cell)), figure,
+            self.assertEqual("%.*f" % (decimals, get_cell(CALC.sheet, cell)), figure,
                              "%s (README, documentation check)" % cell)
 
     def test_least_cost_against_the_textbook(self):
         cost, bundle = varian_least_cost(GROWING, PRICES, 1500.0)  # Varian (1992), from memory
-        for value, figure, what in zip(get_range(SHEET, "A21:B21")[0], bundle, ["bakers", "ovens"]):
-            self.assert_close(value, figure, FORMULA_TOLERANCE, what)
-        self.assert_close(get_cell(SHEET, "C21"), cost, FORMULA_TOLERANCE, "total cost")
-        self.assert_close(get_cell(SHEET, "E21"), cost / 1500.0, FORMULA_TOLERANCE, "average cost")
+        for value, figure, what in zip(get_range(CALC.sheet, "A21:B21")[0], bundle, ["bakers", "ovens"]):
+            self.assert_relative(value, figure, FORMULA_TOLERANCE, what)
+        self.assert_relative(get_cell(CALC.sheet, "C21"), cost, FORMULA_TOLERANCE, "total cost")
+        self.assert_relative(get_cell(CALC.sheet, "E21"), cost / 1500.0, FORMULA_TOLERANCE, "average cost")
         # marginal cost of a technology homogeneous of degree nu: C/(nu*y) (Varian 1992, from memory)
-        self.assert_close(get_cell(SHEET, "D21"), cost / (sum(GROWING[1]) * 1500.0), FORMULA_TOLERANCE,
-                          "marginal cost")
+        self.assert_relative(get_cell(CALC.sheet, "D21"), cost / (sum(GROWING[1]) * 1500.0), FORMULA_TOLERANCE,
+                             "marginal cost")
         # first-order conditions: MRTS = w1/w2
-        self.assert_close(get_cell(SHEET, "F21"), PRICES[0] / PRICES[1], FORMULA_TOLERANCE, "MRTS at the bundle")
+        self.assert_relative(get_cell(CALC.sheet, "F21"), PRICES[0] / PRICES[1], FORMULA_TOLERANCE,
+                             "MRTS at the bundle")
 
     def test_budget_split(self):
-        x1, x2, y = get_range(SHEET, "A23:C23")[0]
+        x1, x2, y = get_range(CALC.sheet, "A23:C23")[0]
         # common practice, no source: shares b_i / sum(b)
         a, b = GROWING[1]
-        self.assert_close(PRICES[0] * x1 / 5000.0, a / (a + b), FORMULA_TOLERANCE, "bakers' share")
-        self.assert_close(PRICES[1] * x2 / 5000.0, b / (a + b), FORMULA_TOLERANCE, "ovens' share")
-        self.assert_close(y, output_of(GROWING, (x1, x2)), FORMULA_TOLERANCE, "output")
+        self.assert_relative(PRICES[0] * x1 / 5000.0, a / (a + b), FORMULA_TOLERANCE, "bakers' share")
+        self.assert_relative(PRICES[1] * x2 / 5000.0, b / (a + b), FORMULA_TOLERANCE, "ovens' share")
+        self.assert_relative(y, output_of(GROWING, (x1, x2)), FORMULA_TOLERANCE, "output")
 
     def test_profit_maximum(self):
-        x1, x2, y, profit = get_range(SHEET, "A25:D25")[0]
+        x1, x2, y, profit = get_range(CALC.sheet, "A25:D25")[0]
         # first-order conditions, through PRODMARGINAL: p*f_i = w_i
-        self.assert_close(3.2 * get_cell(SHEET, "E25"), PRICES[0], FORMULA_TOLERANCE, "bakers' FOC")
-        self.assert_close(3.2 * get_cell(SHEET, "F25"), PRICES[1], FORMULA_TOLERANCE, "ovens' FOC")
-        self.assert_close(y, output_of(SHRINKING, (x1, x2)), FORMULA_TOLERANCE, "output")
-        self.assert_close(profit, 3.2 * y - PRICES[0] * x1 - PRICES[1] * x2, FORMULA_TOLERANCE, "profit")
+        self.assert_relative(3.2 * get_cell(CALC.sheet, "E25"), PRICES[0], FORMULA_TOLERANCE, "bakers' FOC")
+        self.assert_relative(3.2 * get_cell(CALC.sheet, "F25"), PRICES[1], FORMULA_TOLERANCE, "ovens' FOC")
+        self.assert_relative(y, output_of(SHRINKING, (x1, x2)), FORMULA_TOLERANCE, "output")
+        self.assert_relative(profit, 3.2 * y - PRICES[0] * x1 - PRICES[1] * x2, FORMULA_TOLERANCE, "profit")
 
     def test_isoquant_through_prodoutput(self):
-        points = get_range(SHEET, "I21:I31")
-        for row in get_range(SHEET, "J21:J31"):
-            self.assert_close(row[0], 1500.0, ISOQUANT_TOLERANCE, "PRODOUTPUT of an isoquant point")
+        points = get_range(CALC.sheet, "I21:I31")
+        for row in get_range(CALC.sheet, "J21:J31"):
+            self.assert_relative(row[0], 1500.0, ISOQUANT_TOLERANCE, "PRODOUTPUT of an isoquant point")
         # fewer ovens as bakers grow (a downward-sloping isoquant)
         amounts = [r[0] for r in points]
         self.assertEqual(amounts, sorted(amounts, reverse=True))
 
 
-class TranslogIsoquantTest(DecisionTestCase):
+class TranslogIsoquantTest(CalcTestCase):
     """PRODISOQUANT on a typed translog whose output rises in x2 only below x2 = e^-7, so that the
     level is met at x2 = 3.86e-5 (output rising) and 0.0215 (falling), both far from x2 = 1."""
 
     @classmethod
     def setUpClass(cls):
-        set_values(SHEET, "A100", [["form", "translog"], ["ln A", 0.0], ["x1", 0.3], ["x2", 0.3],
-                                   ["x1*x1", 0.0], ["x1*x2", -0.2], ["x2*x2", -0.1]])
-        set_formula(SHEET, "D100", "=PRODISOQUANT(A100:B106;31.50039;148.41316)")
-        set_values(SHEET, "E100", [[148.41316]])
-        set_formula(SHEET, "F100", "=D100")
-        set_formula(SHEET, "D101", "=PRODOUTPUT(A100:B106;E100:F100)")
-        recalc(DOC)
+        set_values(CALC.sheet, "A100", [["form", "translog"], ["ln A", 0.0], ["x1", 0.3], ["x2", 0.3],
+                                        ["x1*x1", 0.0], ["x1*x2", -0.2], ["x2*x2", -0.1]])
+        set_formula(CALC.sheet, "D100", "=PRODISOQUANT(A100:B106;31.50039;148.41316)")
+        set_values(CALC.sheet, "E100", [[148.41316]])
+        set_formula(CALC.sheet, "F100", "=D100")
+        set_formula(CALC.sheet, "D101", "=PRODOUTPUT(A100:B106;E100:F100)")
+        recalc(CALC.doc)
 
     def test_the_rising_root_is_found(self):
         # "quadratic formula": ln Y = 0.3 l1 + 0.3 l2 - 0.2 l1 l2 - 0.05 l2^2 (li = ln xi) is a
@@ -246,8 +225,8 @@ class TranslogIsoquantTest(DecisionTestCase):
         expected = math.exp((-b + math.sqrt(b * b + 0.2 * c)) / -0.1)
         self.assertLess(abs(expected - 3.86e-5), 0.01e-5)
         # The root is narrowed to a few ulps of ln x2: 1e-12 relative.
-        self.assert_close(get_cell(SHEET, "D100"), expected, 1e-12, "x2 on the translog isoquant")
-        self.assert_close(get_cell(SHEET, "D101"), 31.50039, ISOQUANT_TOLERANCE, "PRODOUTPUT of that point")
+        self.assert_relative(get_cell(CALC.sheet, "D100"), expected, 1e-12, "x2 on the translog isoquant")
+        self.assert_relative(get_cell(CALC.sheet, "D101"), 31.50039, ISOQUANT_TOLERANCE, "PRODOUTPUT of that point")
 
 
 def error(text):
@@ -308,27 +287,25 @@ CASES = [
 ]
 
 
-class DecisionErrorTest(DecisionTestCase):
+class DecisionErrorTest(CalcTestCase):
     """Bad input and unanswerable questions: the exact text in the cell, no number, office alive."""
 
     def test_error_cases_then_office_alive(self):
-        set_values(SHEET, "D41", [[18.0, 0.0, None], [-3.0, 45.0, None], [18.0, 45.0, 7.0]])
-        set_values(SHEET, "A41", model_rows((12.0, (0.7, -0.2))))
-        set_values(SHEET, "A111", model_rows((1.0, (0.5, 0.4))))
+        set_values(CALC.sheet, "D41", [[18.0, 0.0, None], [-3.0, 45.0, None], [18.0, 45.0, 7.0]])
+        set_values(CALC.sheet, "A41", model_rows((12.0, (0.7, -0.2))))
+        set_values(CALC.sheet, "A111", model_rows((1.0, (0.5, 0.4))))
         for _, formula, target, _ in CASES:
-            set_array_formula(SHEET, target, "=" + formula)
-        recalc(DOC)
+            set_array_formula(CALC.sheet, target, "=" + formula)
+        recalc(CALC.doc)
         # Unit cost of 12*L^0.6*K^0.4 at (18, 45): Varian's cost function at y = 1 (from memory).
         unit_cost = varian_least_cost(CONSTANT, PRICES, 1.0)[0]
         for what, formula, target, message in CASES:
             with self.subTest(what, formula=formula):
-                result = get_range(SHEET, target) if ":" in target else [[get_cell(SHEET, target)]]
+                result = get_range(CALC.sheet, target) if ":" in target else [[get_cell(CALC.sheet, target)]]
                 if "%s" in message:
                     message = message % ("%.6g" % unit_cost)
-                self.assertEqual(result[0][0], message, what)
-                numbers = [v for row in result for v in row if isinstance(v, float)]
-                self.assertEqual(numbers, [], what + ": numbers shown beside the message")
-        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+                self.assert_only_message(result, message, what)
+        self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
 
 if __name__ == "__main__":

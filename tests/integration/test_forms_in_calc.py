@@ -1,7 +1,8 @@
 """The ces and translog forms, PRODREGULAR and PRODCOMPARE computed by a real headless Calc.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_forms_in_calc.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_forms_in_calc.py
 
 One office with the extension serves the whole module. Sources of the expected figures, named
 beside each check:
@@ -19,52 +20,25 @@ beside each check:
 """
 
 import math
-import os
 import random
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
-sys.path.insert(0, os.path.join(HERE, "..", "reference"))
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from office import (  # noqa: E402
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, skip_missing_reference,
-    start_module_office, stop_module_office)
-from test_functions_in_calc import CalcTestCase, error, read_columns, row_of, write_columns  # noqa: E402
+from .fit_checks import COLUMNS, FORMULA_RELATIVE, error
+from .support import CalcTestCase, module_session, read_columns, row_of, skip_missing_reference, write_columns
 
 try:  # reference libraries; their checks are skipped when these are missing (failed
     # under ISOQUANT_REQUIRE_REFERENCES=1)
     import numpy as np
     import statsmodels.api as sm
     from scipy import optimize, stats
-    import forms_check
+    from ..reference import forms_check
 except ImportError:
     np = sm = optimize = stats = forms_check = None
 
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
-
-FORMULA_RELATIVE = 1e-12
-COLUMNS = ["value", "std. error", "t", "p-value", "lower bound", "upper bound"]
-
-OFFICE = None
-DOC = None
-
-
-def setUpModule():
-    global OFFICE, DOC
-    OFFICE, DOC = start_module_office(OXT)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
-
-
-def new_sheet(name):
-    sheets = DOC.Sheets
-    sheets.insertNewByName(name, sheets.getCount())
-    return sheets.getByName(name)
+CALC = module_session()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def reference_figures(form, y, inputs):
@@ -130,7 +104,7 @@ class CesTest(FormsTestCase):
     @classmethod
     def setUpClass(cls):
         cls.data = read_columns("cobb_douglas_1928.csv", ["P", "L", "C"])
-        cls.sheet = new_sheet("Ces")
+        cls.sheet = CALC.new_sheet("Ces")
         write_columns(cls.sheet, "A1", cls.data, ["P", "L", "C"])
         # The ces table is always 20 x 7 (core/include/isoquant/form_tables.hpp).
         set_array_formula(cls.sheet, "F1:L20", '=PRODFIT(A1:A25;B1:C25;"ces")')
@@ -152,12 +126,12 @@ class CesTest(FormsTestCase):
         set_formula(cls.sheet, "W9", '=PRODMARGINAL(W1:Y6;B2:C2;"machines")')
         set_formula(cls.sheet, "W10", "=PRODSCALE(W1:Y6)")
         set_formula(cls.sheet, "W11", "=PRODREGULAR(W1:Y6;B2:C2)")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "F1:L20")
 
     def test_layout(self):
         labels = [row[0] for row in self.table]
-        # Blank cells of a formula result read as "" (office.py).
+        # Blank cells of a formula result read as "" (isoquant_office.get_range).
         self.assertEqual(labels, ["ces fit", "ln A", "delta", "rho", "nu", "sigma", "", "observations", "R2",
                                   "adjusted R2", "residual SD", "log-likelihood", "AIC", "BIC",
                                   "returns to scale", "verdict", "form", "convergence", "inputs", "smearing factor"])
@@ -233,7 +207,7 @@ class TranslogTest(FormsTestCase):
     @classmethod
     def setUpClass(cls):
         cls.data = read_columns("rice_farms_panel.csv", ["goutput"] + cls.LABELS)
-        cls.sheet = new_sheet("Translog")
+        cls.sheet = CALC.new_sheet("Translog")
         write_columns(cls.sheet, "A1", cls.data, ["goutput"] + cls.LABELS)
         # 2k + k(k+1)/2 + 16 = 8 + 10 + 16 = 34 rows for four inputs.
         set_array_formula(cls.sheet, "H1:N34", '=PRODFIT(A1:A1027;B1:E1027;"translog")')
@@ -244,7 +218,7 @@ class TranslogTest(FormsTestCase):
         set_array_formula(cls.sheet, "T2:T11", "=PRODREGULAR($H$1:$N$34;B2:E11)")
         set_formula(cls.sheet, "V1", '=PRODSTAT(A1:A1027;B1:E1027;"Cobb-Douglas test";"p-value";"translog")')
         set_formula(cls.sheet, "V2", "=PRODRETURNS($H$1:$N$34)")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "H1:N34")
 
     def test_layout(self):
@@ -308,13 +282,13 @@ class CompareTest(FormsTestCase):
     @classmethod
     def setUpClass(cls):
         cls.data = read_columns("cobb_douglas_1928.csv", ["P", "L", "C"])
-        cls.sheet = new_sheet("Compare")
+        cls.sheet = CALC.new_sheet("Compare")
         write_columns(cls.sheet, "A1", cls.data, ["P", "L", "C"])
         set_array_formula(cls.sheet, "F1:L8", "=PRODCOMPARE(A1:A25;B1:C25)")
         set_array_formula(cls.sheet, "F11:L33", '=PRODFIT(A1:A25;B1:C25;"translog")')
         set_formula(cls.sheet, "N1", "=PRODSTAT(A1:A25;B1:C25;\"log-likelihood\")")
         set_formula(cls.sheet, "N2", "=PRODSTAT(A1:A25;B1:C25;\"log-likelihood\";;\"ces\")")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(cls.sheet, "F1:L8")
 
     def test_layout_and_ranks(self):
@@ -376,7 +350,7 @@ class CesWithoutTestTest(FormsTestCase):
 
     @classmethod
     def setUpClass(cls):
-        cls.sheet = new_sheet("CesWithoutTest")
+        cls.sheet = CALC.new_sheet("CesWithoutTest")
         set_values(cls.sheet, "A1", [["y", "a", "b"]] + invented_rows(1, 60, outside_ces))
         set_array_formula(cls.sheet, "E1:K20", '=PRODFIT(A1:A61;B1:C61;"ces")')
         set_formula(cls.sheet, "M1", "=PRODRETURNS(E1:K20)")
@@ -391,7 +365,7 @@ class CesWithoutTestTest(FormsTestCase):
         set_array_formula(cls.sheet, "S70:Y89", '=PRODFIT(O70:O110;P70:Q110;"ces")')
         set_array_formula(cls.sheet, "S91:Y108", "=PRODFIT(O70:O110;P70:Q110)")
         set_array_formula(cls.sheet, "S110:Y117", "=PRODCOMPARE(O70:O110;P70:Q110)")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.boundary = get_range(cls.sheet, "E1:K20")
         cls.ridge = get_range(cls.sheet, "E70:K89")
 
@@ -456,7 +430,7 @@ class FormErrorTest(FormsTestCase):
     """Bad input to the new forms and functions: the exact message, no number, office alive."""
 
     def test_error_cases_then_office_alive(self):
-        sheet = new_sheet("FormErrors")
+        sheet = CALC.new_sheet("FormErrors")
         data = read_columns("cobb_douglas_1928.csv", ["P", "L", "C"])
         rows = [["P", "L", "C", "year", "a*b", "b", "P2"]]
         for i, (p, l, c) in enumerate(zip(data["P"], data["L"], data["C"])):
@@ -471,14 +445,12 @@ class FormErrorTest(FormsTestCase):
                 set_array_formula(sheet, target, formula)
             else:
                 set_formula(sheet, target, formula)
-        recalc(DOC)
+        recalc(CALC.doc)
         for what, formula, target, message in ERROR_CASES:
             with self.subTest(what, formula=formula):
                 result = get_range(sheet, target) if ":" in target else [[get_cell(sheet, target)]]
-                self.assert_message(result[0][0], message, what)
-                numbers = [v for row in result for v in row if isinstance(v, float)]
-                self.assertEqual(numbers, [], what + ": numbers shown beside the message")
-        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+                self.assert_only_message(result, message, what)
+        self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
 
 if __name__ == "__main__":

@@ -22,18 +22,12 @@ Sources of the expected texts, named beside each check:
   user interface (SUMME for SUM), proof that the interface really is German (from memory).
 """
 
-import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+import uno
+from isoquant_office import HeadlessOffice
 
-import uno  # noqa: E402
-from office import HeadlessOffice, stop_module_office  # noqa: E402  (needs the path above)
-
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
+from .support import EXTENSION as OXT
 
 ADD_IN = 11  # com.sun.star.sheet.FunctionCategory.ADDIN (the built-in PRODUCT also starts with PROD)
 
@@ -149,13 +143,13 @@ def setUpModule():
             raise RuntimeError("the office's user interface did not switch to German: is Debian's "
                                "libreoffice-l10n-de installed (.ci/packages.txt)?")
     finally:
-        stop_module_office(office)
+        office.__exit__(None, None, None)
     office = HeadlessOffice(extension_path=OXT)
     office.__enter__()
     try:
         ENGLISH, BUILT_IN["english"] = read_wizard(office)
     finally:
-        stop_module_office(office)
+        office.__exit__(None, None, None)
 
 
 class GermanWizardTest(unittest.TestCase):

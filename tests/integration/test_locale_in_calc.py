@@ -9,20 +9,15 @@ setting when it starts), and back to English afterwards (the add-in follows the 
 
 Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
-import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
-EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
-sys.path.insert(0, HERE)
+import uno
+from isoquant_office import get_cell, recalc, set_formula, set_values
 
-import uno  # noqa: E402
-from office import get_cell, recalc, set_formula, set_values, start_module_office, stop_module_office  # noqa: E402
+from .support import module_session
 
-OFFICE = None
-DOC = None
+CALC = module_session()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 # Two periods of two inputs; the second period's shares sum to 0.6 + 0.3896 = 0.9896.
 QUANTITIES = [["labour", "energy"], [10.0, 4.0], [11.0, 4.5]]
@@ -31,8 +26,8 @@ SHARES = [["labour", "energy"], [0.6, 0.4], [0.6, 0.3896]]
 
 def set_locale_setting(tag):
     """Writes the locale setting as the Options dialog does ("" is the system default)."""
-    provider = OFFICE.service_manager.createInstanceWithContext(
-        "com.sun.star.configuration.ConfigurationProvider", OFFICE.context)
+    provider = CALC.office.service_manager.createInstanceWithContext(
+        "com.sun.star.configuration.ConfigurationProvider", CALC.office.context)
     path = uno.createUnoStruct("com.sun.star.beans.PropertyValue")
     path.Name, path.Value = "nodepath", "/org.openoffice.Setup/L10N"
     access = provider.createInstanceWithArguments("com.sun.star.configuration.ConfigurationUpdateAccess", (path,))
@@ -40,28 +35,18 @@ def set_locale_setting(tag):
     access.commitChanges()
 
 
-def setUpModule():
-    global OFFICE, DOC
-    OFFICE, DOC = start_module_office(EXTENSION)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
-
-
 class LocalePunctuation(unittest.TestCase):
     def message(self, cell, formula):
-        sheet = DOC.Sheets.getByIndex(0)
-        set_formula(sheet, cell, formula)
-        recalc(DOC)
-        return get_cell(sheet, cell)
+        set_formula(CALC.sheet, cell, formula)
+        recalc(CALC.doc)
+        return get_cell(CALC.sheet, cell)
 
     def test_german_then_english(self):
-        sheet = DOC.Sheets.getByIndex(0)
+        sheet = CALC.sheet
         set_locale_setting("de-DE")
         set_values(sheet, "A1", QUANTITIES)
         set_values(sheet, "D1", SHARES)
-        recalc(DOC)
+        recalc(CALC.doc)
         # The office itself now writes a German decimal comma: the setting took effect.
         self.assertEqual(sheet.getCellRangeByName("D3").getString(), "0,6")
 
@@ -74,7 +59,7 @@ class LocalePunctuation(unittest.TestCase):
             "Error: level: 1,5 is not a confidence level; give a number between 0 and 1, such as 0,95")
 
         set_locale_setting("en-US")
-        recalc(DOC)
+        recalc(CALC.doc)
         self.assertEqual(sheet.getCellRangeByName("D3").getString(), "0.6")
         self.assertEqual(
             self.message("H3", "=PRODINDEX(A1:B3;D1:E3)"),

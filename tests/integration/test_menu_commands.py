@@ -12,18 +12,13 @@ Headless, the office cancels every dialog, so a command that would ask before ov
 
 import os
 import random
-import sys
 import tempfile
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+import uno
+from isoquant_office import HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-import uno  # noqa: E402
-from office import HeadlessOffice, get_cell, get_range, recalc, set_array_formula, set_formula, set_values  # noqa: E402
-
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
+from .support import EXTENSION as OXT
 FIT_ARRAY = "org.isoquant.calc.commands:FitArray"
 SAVE_COPY = "org.isoquant.calc.commands:SaveForColleagues"
 HELP = "org.isoquant.calc.commands:Help"

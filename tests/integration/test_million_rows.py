@@ -3,22 +3,20 @@ python3-statsmodels (Debian) on the same data, a bad cell deep in the range is n
 a range beyond the cap on work per call gets its message, and the office answers afterwards. Timings and peak memory are printed for the record
 (tests/benchmarks/RESULTS.md), never asserted.
 
-Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_million_rows.py
+The extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
 import os
-import sys
 import time
 import unittest
 
 import numpy
 import statsmodels.api as sm
+from isoquant_office import HeadlessOffice, get_cell, get_range, set_array_formula, set_values_in_blocks
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
-EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
-sys.path.insert(0, HERE)
-
-from office import HeadlessOffice, get_cell, get_range, set_array_formula  # noqa: E402
+from .support import EXTENSION
 
 ROWS = 1000000
 CHUNK = 50000
@@ -35,12 +33,7 @@ def invented():
 
 def fill(sheet, output, inputs):
     """Header in row 1, output in A, inputs in B:C, rows 2 … ROWS + 1."""
-    sheet.getCellRangeByName("A1:C1").setDataArray((("routes done", "fuel", "driver hours"),))
-    values = numpy.column_stack([output, inputs])
-    for start in range(0, ROWS, CHUNK):
-        block = values[start:start + CHUNK]
-        target = sheet.getCellRangeByPosition(0, start + 1, 2, start + len(block))
-        target.setDataArray(tuple(tuple(float(v) for v in row) for row in block))
+    set_values_in_blocks(sheet, ["routes done", "fuel", "driver hours"], numpy.column_stack([output, inputs]), CHUNK)
 
 
 def office_process(office):

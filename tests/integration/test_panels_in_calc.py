@@ -1,8 +1,9 @@
 """PRODFIT's estimation options (groups, effects, trend, cluster errors, incomplete rows) and
 PRODOUTPUT's mean prediction, computed by a real headless LibreOffice Calc with the extension.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_panels_in_calc.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_panels_in_calc.py
 
 One office serves the whole module. Sources of the expected figures, named beside each check:
 - "Munnell (1990)": the US state panel 1970-1986 (48 states x 17 years), as distributed in the R
@@ -20,18 +21,13 @@ One office serves the whole module. Sources of the expected figures, named besid
 - Error messages: the wording in core/src/*.cpp, prefixed "Error: " by the add-in.
 """
 
-import csv
 import math
-import os
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from office import (  # noqa: E402
-    get_cell, get_range, recalc, set_array_formula, set_formula, set_values, skip_missing_reference,
-    start_module_office, stop_module_office)
+from .fit_checks import FORMULA_RELATIVE, STATSMODELS_RELATIVE
+from .support import CalcTestCase, module_session, read_rows, row_of, skip_missing_reference
 
 try:  # reference libraries; their checks are skipped when these are missing (failed
     # under ISOQUANT_REQUIRE_REFERENCES=1)
@@ -40,43 +36,8 @@ try:  # reference libraries; their checks are skipped when these are missing (fa
 except ImportError:
     np = sm = None
 
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-DATA_DIR = os.path.join(HERE, "..", "data")
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
-
-STATSMODELS_RELATIVE = 1e-8   # two implementations of the same least squares, in double precision
-FORMULA_RELATIVE = 1e-12      # the same closed-form expression, evaluated in a different order
-HEADER = ["Cobb-Douglas fit", "value", "std. error", "t", "p-value", "lower bound", "upper bound"]
-
-OFFICE = None
-DOC = None
-
-
-def setUpModule():
-    global OFFICE, DOC
-    OFFICE, DOC = start_module_office(OXT)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
-
-
-def read_rows(file_name):
-    with open(os.path.join(DATA_DIR, file_name), newline="") as handle:
-        return list(csv.DictReader(handle))
-
-
-def new_sheet(name):
-    sheets = DOC.Sheets
-    sheets.insertNewByName(name, sheets.getCount())
-    return sheets.getByName(name)
-
-
-def row_of(table, label):
-    for row in table:
-        if row[0] == label:
-            return row
-    raise KeyError(label)
+CALC = module_session()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def first_appearance(labels):
@@ -109,16 +70,7 @@ def nested_cluster_inference(result, group_count):
     return contrast.sd, contrast.pvalue
 
 
-class PanelTestCase(unittest.TestCase):
-    def assert_number(self, value, what):
-        self.assertIsInstance(value, float, "%s: expected a number, the cell shows %r" % (what, value))
-        self.assertTrue(math.isfinite(value), "%s: %r is not finite" % (what, value))
-
-    def assert_relative(self, value, expected, relative, what):
-        self.assert_number(value, what)
-        self.assertLessEqual(abs(value - expected), relative * abs(expected),
-                             "%s: %r, expected %r (relative tolerance %g)" % (what, value, expected, relative))
-
+class PanelTestCase(CalcTestCase):
     def assert_six_decimals(self, value, figure, what):
         """Agrees with a figure printed to six decimals: within half a unit in the sixth."""
         self.assert_number(value, what)
@@ -146,7 +98,7 @@ class StatePanelTest(PanelTestCase):
         cls.rows = rows
         names = ["state", "year", "gsp", "pcap", "pc", "emp", "unemp"]
         values = [names] + [[row["state"]] + [float(row[n]) for n in names[1:]] for row in rows]
-        cls.sheet = sheet = new_sheet("StatePanel")
+        cls.sheet = sheet = CALC.new_sheet("StatePanel")
         set_values(sheet, "A1", values)
         years = "B1:B%d" % STATE_LAST
         fixed = "=PRODFIT(%s;\"fixed\")" % STATE_ARGS.format(errors="")
@@ -170,7 +122,7 @@ class StatePanelTest(PanelTestCase):
         # Evaluators on the fixed-effects table: ln A for predictions is used (production_model.hpp).
         set_formula(sheet, "R4", "=PRODOUTPUT($J$1:$P$24;D2:F2)")
         set_formula(sheet, "R5", "=PRODOUTPUT($J$1:$P$24;D2:F2;TRUE())")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.fixed = get_range(sheet, "J1:P24")
         cls.fixed_cluster = get_range(sheet, "J31:P54")
         cls.pooled_cluster = get_range(sheet, "J61:P82")
@@ -301,11 +253,11 @@ class RiceFarmsTest(PanelTestCase):
     def setUpClass(cls):
         cls.rows = read_rows("rice_farms_panel.csv")
         names = ["id", "goutput"] + cls.INPUTS
-        cls.sheet = sheet = new_sheet("RiceFarms")
+        cls.sheet = sheet = CALC.new_sheet("RiceFarms")
         set_values(sheet, "A1", [names] + [[float(r[n]) for n in names] for r in cls.rows])
         # k = 4: 4 + 15 + 2 + 1 + 1 = 23 rows.
         set_array_formula(sheet, "H1:N23", '=PRODFIT(B1:B1027;C1:F1027;;;"cluster";;;A1:A1027;"fixed")')
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(sheet, "H1:N23")
 
     def test_fixed_effects_and_cluster_errors_against_statsmodels(self):
@@ -334,11 +286,11 @@ class TooFewGroupsTest(PanelTestCase):
         rows = read_rows("us_states_produc_1970_1986.csv")[:51]
         cls.rows = rows
         names = ["state", "year", "gsp", "pcap", "pc", "emp", "unemp"]
-        cls.sheet = sheet = new_sheet("TooFewGroups")
+        cls.sheet = sheet = CALC.new_sheet("TooFewGroups")
         set_values(sheet, "A1", [names] + [[row["state"]] + [float(row[n]) for n in names[1:]] for row in rows])
         # 20 rows + groups and effects 2 + within R2 1 + technical change 1 + ln A for predictions 1 = 25.
         set_array_formula(sheet, "J1:P25", '=PRODFIT(C1:C52;D1:F52;;;"cluster";;G1:G52;A1:A52;"fixed";B1:B52)')
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.table = get_range(sheet, "J1:P25")
 
     def test_overall_f_is_not_available_with_a_note(self):
@@ -358,7 +310,8 @@ class TooFewGroupsTest(PanelTestCase):
         result = dummy_regression(y, x, [r["state"] for r in self.rows], cluster=True)
         errors, _ = nested_cluster_inference(result, 3)
         for j, label in enumerate(["pcap", "pc", "emp", "unemp (control)"]):
-            self.assert_relative(row_of(self.table, label)[2], errors[1 + j], STATSMODELS_RELATIVE, label + " CR1 error")
+            self.assert_relative(row_of(self.table, label)[2], errors[1 + j], STATSMODELS_RELATIVE,
+                                 label + " CR1 error")
         self.assert_relative(row_of(self.table, "technical change per period")[2], errors[5], STATSMODELS_RELATIVE,
                              "trend CR1 error")
 
@@ -373,14 +326,14 @@ class IncompleteRowsTest(PanelTestCase):
         values[3][1] = None      # a blank labour cell in the 3rd year
         values[10][2] = "n.a."   # a text capital cell in the 10th year
         complete = [row for i, row in enumerate(values) if i not in (3, 10)]
-        cls.sheet = sheet = new_sheet("Incomplete")
+        cls.sheet = sheet = CALC.new_sheet("Incomplete")
         set_values(sheet, "A1", values)
         set_values(sheet, "E1", complete)
         # 2 inputs: 17 rows + incomplete rows dropped 1 = 18.
         set_array_formula(sheet, "I1:O18", "=PRODFIT(A1:A25;B1:C25;;;;;;;;;TRUE())")
         set_array_formula(sheet, "I21:O37", "=PRODFIT(E1:E23;F1:G23)")
         set_formula(sheet, "Q1", "=PRODSTAT(A1:A25;B1:C25;\"R2\")")
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.dropped = get_range(sheet, "I1:O18")
         cls.complete = get_range(sheet, "I21:O37")
 
@@ -401,7 +354,7 @@ class PanelErrorsTest(PanelTestCase):
     @classmethod
     def setUpClass(cls):
         rows = read_rows("cobb_douglas_1928.csv")
-        cls.sheet = sheet = new_sheet("PanelErrors")
+        cls.sheet = sheet = CALC.new_sheet("PanelErrors")
         plants = ["north", "south", "east"] * 8
         set_values(sheet, "A1", [["P", "L", "C", "plant", "year", "fixed year"]] +
                    [[float(r["P"]), float(r["L"]), float(r["C"]), plants[i], float(r["year"]), 2000.0]
@@ -430,7 +383,7 @@ class PanelErrorsTest(PanelTestCase):
         }
         for cell, (formula, _) in cases.items():
             set_formula(sheet, cell, formula)
-        recalc(DOC)
+        recalc(CALC.doc)
         cls.cases = cases
 
     def test_messages(self):

@@ -1,23 +1,23 @@
 """The committed sample workbooks are what their generator builds, compute without a problem,
 and the demo (README command 1) prints its summary and writes a PDF for each.
 
-Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_sample_workbooks.py
+The extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
 import glob
 import os
 import subprocess
-import sys
 import tempfile
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
-SAMPLES = os.path.join(ROOT, "sample-sheets")
-EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
-sys.path.insert(0, HERE)
+from isoquant_office import HeadlessOffice, recalc  # first: it imports uno, which makes com.sun.star importable
+from com.sun.star.sheet.CellFlags import FORMULA, VALUE, STRING
 
-from office import HeadlessOffice, recalc  # noqa: E402
-from com.sun.star.sheet.CellFlags import FORMULA, VALUE, STRING  # noqa: E402
+from .support import EXTENSION, REPO
+
+SAMPLES = os.path.join(REPO, "sample-sheets")
 
 
 def cell_contents(doc):

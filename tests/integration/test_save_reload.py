@@ -1,28 +1,20 @@
 """A workbook saved with Isoquant formulas reopens with identical values, in both OpenDocument
 formats (the add-in cells recompute on load; nothing is cached in the file for them).
 
-Run with /usr/bin/python3; the extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_save_reload.py
+The extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
-import csv
 import os
-import sys
 import tempfile
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-ROOT = os.path.normpath(os.path.join(HERE, "..", ".."))
-EXTENSION = os.environ.get("ISOQUANT_OXT", os.path.join(ROOT, "build", "isoquant.oxt"))
-sys.path.insert(0, HERE)
+from isoquant_office import HeadlessOffice, get_range, recalc, set_array_formula, set_formula, set_values
 
-from office import HeadlessOffice, get_range, recalc, set_array_formula, set_formula, set_values  # noqa: E402
+from .support import EXTENSION, cobb_douglas_rows
 
 FORMATS = {".ods": "calc8", ".fods": "OpenDocument Spreadsheet Flat XML"}
-
-
-def cobb_douglas_1928_rows():
-    # Cobb & Douglas (1928) indexes, tests/data/cobb_douglas_1928.csv; only the round trip is checked here.
-    with open(os.path.join(ROOT, "tests", "data", "cobb_douglas_1928.csv"), newline="") as handle:
-        return [["P", "L", "C"]] + [[float(row["P"]), float(row["L"]), float(row["C"])] for row in csv.DictReader(handle)]
 
 
 class SaveAndReload(unittest.TestCase):
@@ -30,7 +22,8 @@ class SaveAndReload(unittest.TestCase):
         with HeadlessOffice(extension_path=EXTENSION) as office, tempfile.TemporaryDirectory() as folder:
             doc = office.new_calc()
             sheet = doc.Sheets.getByIndex(0)
-            set_values(sheet, "A1", cobb_douglas_1928_rows())
+            # Cobb & Douglas (1928) indexes, tests/data/cobb_douglas_1928.csv; only the round trip is checked here.
+            set_values(sheet, "A1", [["P", "L", "C"]] + cobb_douglas_rows())
             set_array_formula(sheet, "F1:L16", "=PRODFIT(A1:A25;B1:C25)")
             set_array_formula(sheet, "N2:N25", "=PRODMARGINAL($F$1:$L$16;B2:C25;\"L\")")
             set_formula(sheet, "O1", "=PRODSTAT(A1:A25;B1:C25;\"returns to scale\";\"p-value\";;;\"hc3\")")

@@ -2,8 +2,9 @@
 array results in IF, COUNTIF, MATCH, VLOOKUP and =; the orientation of list results; the Function
 Wizard's names and flags read back through com.sun.star.sheet.FunctionDescriptions.
 
-Run from the repository root with Debian's Python (the only one that imports uno):
-    /usr/bin/python3 -m unittest -v tests/integration/test_sheet_behaviour.py
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_sheet_behaviour.py
 ISOQUANT_TEXT_TIMING=1 adds the timing of 1,000,000-row text columns (printed, not asserted;
 several minutes on LibreOffice 7.4; recorded in tests/benchmarks/RESULTS.md).
 
@@ -21,37 +22,15 @@ Sources of the expected values, named beside each check:
 """
 
 import os
-import sys
 import time
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, set_array_formula, set_formula, set_values
 
-from office import (  # noqa: E402  (needs the path above)
-    get_cell, get_range, set_array_formula, set_formula, set_values, start_module_office,
-    stop_module_office)
-
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
-DATA = os.path.join(HERE, "..", "data", "cobb_douglas_1928.csv")
+from .support import cobb_douglas_rows, module_session
 
 ROWS = 40  # bundles in G2:H41, under a header in G1:H1
 BUNDLES = [(20.0 + 3 * k, 5.0 + (k % 7)) for k in range(ROWS)]
-
-OFFICE = None
-DOC = None
-SHEET = None
-
-
-def setUpModule():
-    global OFFICE, DOC, SHEET
-    OFFICE, DOC = start_module_office(OXT, lambda doc: write_sheet(doc.Sheets.getByIndex(0)))
-    SHEET = DOC.Sheets.getByIndex(0)
-
-
-def tearDownModule():
-    stop_module_office(OFFICE)
 
 
 def write_sheet(sheet):
@@ -60,17 +39,19 @@ def write_sheet(sheet):
     set_values(sheet, "D1", [[18.0, 45.0]])       # prices in a row
     set_values(sheet, "D3", [[18.0], [45.0]])     # the same prices in a column
     set_values(sheet, "G1", [["bakers", "ovens"]] + [list(b) for b in BUNDLES])
-    with open(DATA) as handle:
-        lines = [line.strip().split(",") for line in handle if line.strip()]
-    set_values(sheet, "Q1", [lines[0][1:]] + [[float(v) for v in line[1:]] for line in lines[1:]])
+    set_values(sheet, "Q1", [["P", "L", "C"]] + cobb_douglas_rows())
+
+
+CALC = module_session(write_sheet)
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def formula_results(formulas, column="Z"):
     """Each formula in its own cell of `column` (rows 1..), then their values."""
     for row, formula in enumerate(formulas, start=1):
-        set_formula(SHEET, "%s%d" % (column, row), formula)
-    DOC.calculateAll()
-    return [get_cell(SHEET, "%s%d" % (column, row)) for row in range(1, len(formulas) + 1)]
+        set_formula(CALC.sheet, "%s%d" % (column, row), formula)
+    CALC.doc.calculateAll()
+    return [get_cell(CALC.sheet, "%s%d" % (column, row)) for row in range(1, len(formulas) + 1)]
 
 
 class TextsOfArrayResultsTest(unittest.TestCase):
@@ -79,7 +60,7 @@ class TextsOfArrayResultsTest(unittest.TestCase):
     def check_column(self, formula, word, column):
         """`formula` over <column>2:<column>41 must show `word` in every row; the user's steps on it."""
         cells = "%s2:%s%d" % (column, column, ROWS + 1)
-        set_array_formula(SHEET, cells, formula)
+        set_array_formula(CALC.sheet, cells, formula)
         first = "%s2" % column
         results = formula_results([
             '=%s="%s"' % (first, word),
@@ -89,7 +70,7 @@ class TextsOfArrayResultsTest(unittest.TestCase):
             '=VLOOKUP("%s";%s;1;0)' % (word, cells),
             '=%s&""="%s"' % (first, word),
         ], column="Y")
-        self.assertEqual(get_range(SHEET, cells), [[word]] * ROWS, formula)
+        self.assertEqual(get_range(CALC.sheet, cells), [[word]] * ROWS, formula)
         self.assertEqual(results, [True, "cut back", float(ROWS), 1.0, word, True], formula)
 
     def test_regular_column(self):
@@ -107,9 +88,9 @@ class TextsOfArrayResultsTest(unittest.TestCase):
     def test_messages_compare(self):
         # The message wording of core/src/decision_arguments.cpp, prefixed with "Error: ".
         message = "Error: input prices: the price of input 2 is 0; prices must be positive"
-        set_values(SHEET, "D6", [[18.0, 0.0]])
-        set_array_formula(SHEET, "N2:O2", "=PRODLEASTCOST($A$1:$B$4;1500;D6:E6)")
-        self.assertEqual(get_cell(SHEET, "N2"), message)
+        set_values(CALC.sheet, "D6", [[18.0, 0.0]])
+        set_array_formula(CALC.sheet, "N2:O2", "=PRODLEASTCOST($A$1:$B$4;1500;D6:E6)")
+        self.assertEqual(get_cell(CALC.sheet, "N2"), message)
         results = formula_results([
             '=N2="%s"' % message,
             '=COUNTIF(N2:O2;"%s")' % message,
@@ -126,18 +107,18 @@ class TextsOfMixedTablesTest(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "AA1:AG17", "=PRODFIT(Q1:Q25;R1:S25)")
-        DOC.calculateAll()
-        labels = [row[0] for row in get_range(SHEET, "AA1:AA17")]
+        set_array_formula(CALC.sheet, "AA1:AG17", "=PRODFIT(Q1:Q25;R1:S25)")
+        CALC.doc.calculateAll()
+        labels = [row[0] for row in get_range(CALC.sheet, "AA1:AA17")]
         cls.verdict_row = labels.index("verdict") + 1
-        cls.verdict = get_cell(SHEET, "AB%d" % cls.verdict_row)
+        cls.verdict = get_cell(CALC.sheet, "AB%d" % cls.verdict_row)
 
     def test_verdict_is_a_word(self):
         self.assertIn(self.verdict, ("increasing", "constant", "decreasing"))
 
     def test_workarounds(self):
         cell = "AB%d" % self.verdict_row
-        set_array_formula(SHEET, "W1", '=MATCH("verdict";AA1:AA17&"";0)')
+        set_array_formula(CALC.sheet, "W1", '=MATCH("verdict";AA1:AA17&"";0)')
         results = formula_results([
             '=%s&""="%s"' % (cell, self.verdict),
             '=IF(T(%s)&""="%s";1;0)' % (cell, self.verdict),
@@ -146,7 +127,7 @@ class TextsOfMixedTablesTest(unittest.TestCase):
             '=SUMPRODUCT(AA1:AA17&""="verdict")',
         ], column="V")
         self.assertEqual(results, [True, 1.0, True, True, 1.0])
-        self.assertEqual(get_cell(SHEET, "W1"), float(self.verdict_row))
+        self.assertEqual(get_cell(CALC.sheet, "W1"), float(self.verdict_row))
 
     def test_plain_comparison_still_fails_in_this_office(self):
         # A platform fact of LibreOffice 7.4, not a wish: when this starts to fail, the office pools
@@ -161,11 +142,11 @@ class OrientationTest(unittest.TestCase):
     """Item 3: a list result follows the orientation of its prices."""
 
     def check(self, formula_of, prices_row, prices_column, row_range, column_range):
-        set_array_formula(SHEET, row_range, formula_of(prices_row))
-        set_array_formula(SHEET, column_range, formula_of(prices_column))
-        DOC.calculateAll()
-        as_row = get_range(SHEET, row_range)[0]
-        as_column = [row[0] for row in get_range(SHEET, column_range)]
+        set_array_formula(CALC.sheet, row_range, formula_of(prices_row))
+        set_array_formula(CALC.sheet, column_range, formula_of(prices_column))
+        CALC.doc.calculateAll()
+        as_row = get_range(CALC.sheet, row_range)[0]
+        as_column = [row[0] for row in get_range(CALC.sheet, column_range)]
         self.assertTrue(all(isinstance(v, float) for v in as_row), as_row)
         # The same computation, so the same numbers exactly; and not the first value repeated.
         self.assertEqual(as_column, as_row)
@@ -209,11 +190,8 @@ class FunctionWizardTest(unittest.TestCase):
 
     @classmethod
     def setUpClass(cls):
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
         cls.functions = {}
-        for k in range(descriptions.getCount()):
-            properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
+        for properties in CALC.office.function_descriptions():
             if str(properties.get("Name", "")).startswith("PROD") and properties["Category"] == ADD_IN:
                 cls.functions[properties["Name"]] = properties
 
@@ -249,13 +227,13 @@ class ExtensionManagerTextTest(unittest.TestCase):
     """Item 14: what the Extension Manager shows of the installed extension."""
 
     def test_description_names_every_function_and_no_placeholder(self):
-        manager = OFFICE.context.getValueByName("/singletons/com.sun.star.deployment.ExtensionManager")
+        manager = CALC.office.context.getValueByName("/singletons/com.sun.star.deployment.ExtensionManager")
         packages = [p for p in manager.getDeployedExtensions("user", None, None)
                     if p is not None and p.getIdentifier().Value == "org.isoquant.calc"]
         self.assertEqual(len(packages), 1)
         description = packages[0].getDescription()
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
+        descriptions = CALC.office.service_manager.createInstanceWithContext(
+            "com.sun.star.sheet.FunctionDescriptions", CALC.office.context)
         names = set()
         for k in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
@@ -276,8 +254,8 @@ class TextColumnTimingTest(unittest.TestCase):
 
     def test_time_text_columns(self):
         from com.sun.star.sheet.FillDirection import TO_BOTTOM
-        DOC.Sheets.insertNewByName("timing", 1)
-        sheet = DOC.Sheets.getByName("timing")
+        CALC.doc.Sheets.insertNewByName("timing", 1)
+        sheet = CALC.doc.Sheets.getByName("timing")
         set_values(sheet, "D1", [["form", "cobb-douglas"], ["A", 12.0], ["bakers", 0.7], ["ovens", 0.5]])
         chunk = 50000
         for start in range(0, self.ROWS, chunk):
@@ -291,7 +269,7 @@ class TextColumnTimingTest(unittest.TestCase):
             ("PRODREGULAR, one array formula", "array", "=PRODREGULAR($D$1:$E$4;A1:B%d)" % last),
         ]
         for what, how, formula in cases:
-            DOC.enableAutomaticCalculation(False)
+            CALC.doc.enableAutomaticCalculation(False)
             if how == "fill":
                 set_formula(sheet, "G1", formula)
                 sheet.getCellRangeByName("G1:G%d" % last).fillAuto(TO_BOTTOM, 1)
@@ -299,10 +277,10 @@ class TextColumnTimingTest(unittest.TestCase):
                 set_array_formula(sheet, "G1:G%d" % last, formula)
             load = os.getloadavg()[0]
             start = time.perf_counter()
-            DOC.calculateAll()
+            CALC.doc.calculateAll()
             seconds = time.perf_counter() - start
             set_formula(sheet, "H1", '=COUNTIF(G1:G%d;"regular")' % last)
-            DOC.calculateAll()
+            CALC.doc.calculateAll()
             print("\n%d rows, %s: %.1f s (load %.1f before); COUNTIF finds %d"
                   % (last, what, seconds, load, get_cell(sheet, "H1")), flush=True)
             sheet.getCellRangeByName("G1:H%d" % last).clearContents(1 | 2 | 4 | 16 | 32 | 64 | 128 | 256)

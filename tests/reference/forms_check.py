@@ -34,7 +34,6 @@ import csv
 import os
 import sys
 
-import reference_script  # this folder: command line, skip code, writing the figures
 LEVEL = 0.95
 
 # dataset: (file, output, CES inputs, translog inputs)
@@ -208,6 +207,10 @@ def translog_figures(np, sm, put, y, inputs, form="translog", covariance="nonrob
 
 
 def main():
+    # Imported here, not at the top: run as a script, reference_script.py sits beside this file on
+    # the path; tests/integration/test_forms_in_calc.py imports this module for its figures alone.
+    import reference_script  # command line, skip code, writing the figures
+
     data_dir, output_path = reference_script.paths(__doc__)
     try:
         import numpy as np
