@@ -35,8 +35,10 @@ CAUTION_GROWTH = ("Caution: TFP growth is a residual. It carries every error in 
                   "not professional advice: check them with qualified practice before they steer costly "
                   "decisions.")
 SHARING = ("Sharing: a colleague without the Isoquant extension sees #NAME? in every function cell, because "
-           "LibreOffice keeps no stored results for add-in functions. Send a PDF (File > Export as PDF), or "
-           "save a copy and paste the results into it as values (Edit > Paste Special > Paste Only Values).")
+           "LibreOffice keeps no stored results for add-in functions. Isoquant > Save a Copy for Colleagues "
+           "writes a copy (.ods or .xlsx) in which those cells hold the values they show now, with a first "
+           "sheet listing them; this workbook stays as it is. Isoquant > Fit the Array to Its Result sizes a "
+           "table typed into one cell to exactly its rows and columns.")
 
 
 def about_sheet(doc, title, paragraphs):
