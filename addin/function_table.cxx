@@ -86,6 +86,14 @@ const std::vector<FunctionInfo>& functionTable()
           {"column label", "value (default), std. error, t, p-value, lower bound or upper bound."},
           formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
           effectsArgument, trendArgument, incompleteRowsArgument}},
+        {"prodValue", "PRODVALUE",
+         "One value of a table already on the sheet (PRODFIT, PRODCOSTFIT, …), looked up by row and column label: "
+         "the quick way to show figures of one fit in many cells.",
+         {{"table", "The whole table as the fitting function returned it, header row included, e.g. $I$1:$O$17."},
+          {"row label", "A row of the table: ln A, an input's label, R2, residual SD, F, AIC, returns to scale, "
+                        "verdict, observations, smearing factor…"},
+          {"column label", "A word of the table's header row: value (default), std. error, t, p-value, lower bound "
+                           "or upper bound."}}},
         {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
          {modelArgument, bundlesArgument,
           {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "

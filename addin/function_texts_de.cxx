@@ -98,6 +98,15 @@ const Translation& germanTranslation()
           {"Spaltenbezeichnung", "value (Standard), std. error, t, p-value, lower bound oder upper bound."},
           formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
           effectsArgument, trendArgument, incompleteRowsArgument}},
+        {"prodValue",
+         "Ein Wert einer Tabelle, die schon auf dem Blatt steht (PRODFIT, PRODCOSTFIT, …), gesucht nach Zeilen- "
+         "und Spaltenbezeichnung: der schnelle Weg, Zahlen einer Schätzung in vielen Zellen zu zeigen.",
+         {{"Tabelle", "Die ganze Tabelle, wie die Schätzfunktion sie ausgab, mit ihrer Kopfzeile, z. B. $I$1:$O$17."},
+          {"Zeilenbezeichnung", "Eine Zeile der Tabelle, mit ihrer englischen Bezeichnung: ln A, die Bezeichnung "
+                                "eines Faktors, R2, residual SD, F, AIC, returns to scale, verdict, observations, "
+                                "smearing factor…"},
+          {"Spaltenbezeichnung", "Ein Wort der Kopfzeile der Tabelle: value (Standard), std. error, t, p-value, "
+                                 "lower bound oder upper bound."}}},
         {"prodOutput", "Ausbringung, die das Modell für jede Zeile von Faktormengen vorhersagt.",
          {modelArgument, bundlesArgument,
           {"Mittelwert", "WAHR für die Vorhersage des Mittelwerts (der Median, multipliziert mit dem "

@@ -144,6 +144,14 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
     });
 }
 
+Any ProductionFunctions::prodValue(const AnyTable& table, const AnyTable& rowLabel, const Any& columnLabel)
+{
+    return guardedValue([&] {
+        return tableValue(toCellTable(table, "table"), toSingleCell(Any(rowLabel), "row label"),
+                          toSingleCell(columnLabel, "column label"));
+    });
+}
+
 Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
 {
     return guardedTable([&] {

@@ -49,6 +49,8 @@ public:
                                     const css::uno::Any& level, const css::uno::Any& controls,
                                     const css::uno::Any& groups, const css::uno::Any& effects,
                                     const css::uno::Any& trend, const css::uno::Any& incompleteRows) override;
+    css::uno::Any SAL_CALL prodValue(const AnyTable& table, const AnyTable& rowLabel,
+                                     const css::uno::Any& columnLabel) override;
     css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs,
                                       const css::uno::Any& mean) override;
     css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;

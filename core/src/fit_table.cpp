@@ -150,4 +150,38 @@ Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& co
     return table.at(row, column);
 }
 
+namespace {
+
+// A table's header row: a title, then a word over every column (a range that starts one row lower
+// starts with a row of numbers).
+bool startsWithHeader(const CellTable& table)
+{
+    if (table.rows() < 2 || table.columns() < 2) return false;
+    for (std::size_t column = 0; column < table.columns(); ++column)
+        if (!table.isText(0, column) || table.text(0, column).empty()) return false;
+    return true;
+}
+
+} // namespace
+
+Cell tableValue(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel)
+{
+    if (!startsWithHeader(table))
+        throw InputError("table: give the whole table, its header row included (such as $I$1:$O$17 for a "
+                         "PRODFIT of two inputs)");
+    if (!isText(columnLabel) || std::get<std::string>(columnLabel).empty())
+        return lookUpFitTable(table, rowLabel, columnLabel);
+    if (!isText(rowLabel) || std::get<std::string>(rowLabel).empty())
+        return lookUpFitTable(table, rowLabel, Cell{}); // the row label's own message
+    const std::size_t row = findRow(table, std::get<std::string>(rowLabel));
+    const std::string wanted = comparableLabel(std::get<std::string>(columnLabel));
+    std::string known;
+    for (std::size_t column = 1; column < table.columns(); ++column) {
+        if (!table.isText(0, column) || table.text(0, column).empty()) continue;
+        if (equalsIgnoringCase(comparableLabel(table.text(0, column)), wanted)) return table.at(row, column);
+        known += (known.empty() ? "" : ", ") + quoted(table.text(0, column));
+    }
+    throw InputError("column label: " + quoted(wanted) + " is not a column of the table; its columns are " + known);
+}
+
 } // namespace isoquant

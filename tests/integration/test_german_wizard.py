@@ -42,7 +42,7 @@ ENGLISH_NAME = {
     "Spaltenbezeichnung": "column label", "Modell": "model", "Mittelwert": "mean", "Faktor": "input",
     "Perioden": "periods", "Gewichte": "weights", "Methode": "method", "Mengen": "quantities",
     "Kostenanteile": "shares", "Basis": "base", "Faktor i": "input i", "Faktor j": "input j", "Art": "kind",
-    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost",
+    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost", "Tabelle": "table",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
     "Mengen von Faktor i": "values of input i",
 }
@@ -53,6 +53,7 @@ AT_BUNDLES = ["Modell", "Faktormengen"]
 GERMAN_ARGUMENTS = {
     "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS,
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
+    "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
     "PRODOUTPUT": AT_BUNDLES + ["Mittelwert"],
     "PRODMARGINAL": AT_BUNDLES + ["Faktor"],
     "PRODELASTICITY": AT_BUNDLES + ["Faktor"],

@@ -281,4 +281,38 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(messageOf([&] { look("pcap", 3.0); }) == "column label: give a column's label, such as \"p-value\"");
 }
 
+// PRODVALUE reads the table as the sheet holds it: the same answers as PRODSTAT's lookup for every
+// row and column of a fitted table, and column words from the table's own header row.
+BOOST_AUTO_TEST_CASE(table_values_match_the_lookup_and_read_any_header)
+{
+    const auto table = isoquant::fitTable(statePanelFit());
+    const Cell none;
+    for (std::size_t row = 1; row < table.rows(); ++row) {
+        if (!table.isText(row, 0) || table.text(row, 0).empty()) continue;
+        const Cell label = table.at(row, 0);
+        BOOST_TEST((isoquant::tableValue(table, label, none) == isoquant::lookUpFitTable(table, label, none)));
+        for (std::size_t column = 1; column < table.columns(); ++column)
+            BOOST_TEST((isoquant::tableValue(table, label, table.at(0, column)) == table.at(row, column)));
+    }
+
+    CellTable other(2, 3);
+    other.set(0, 0, std::string("price test"));
+    other.set(0, 1, std::string("chi-squared"));
+    other.set(0, 2, std::string("p"));
+    other.set(1, 0, std::string("shift"));
+    other.set(1, 1, 4.5);
+    other.set(1, 2, 0.03);
+    BOOST_TEST((isoquant::tableValue(other, std::string(" Shift "), std::string("P")) == Cell(0.03)));
+    BOOST_TEST(messageOf([&] { isoquant::tableValue(other, std::string("shift"), std::string("value")); }) ==
+               "column label: 'value' is not a column of the table; its columns are 'chi-squared', 'p'");
+
+    CellTable headless(2, 2);
+    headless.set(0, 0, 1.0);
+    BOOST_TEST(messageOf([&] { isoquant::tableValue(headless, std::string("R2"), none); }) ==
+               "table: give the whole table, its header row included (such as $I$1:$O$17 for a PRODFIT of two "
+               "inputs)");
+    BOOST_TEST(messageOf([&] { isoquant::tableValue(table, 2.0, std::string("t")); }) ==
+               "row label: give the label of a row of the table, such as \"R2\" or an input's label");
+}
+
 BOOST_AUTO_TEST_SUITE_END()

@@ -55,6 +55,12 @@ std::size_t fitTableRows(const ProductionFit& fit);
 // Throws InputError naming the argument when a label is not in the table.
 Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel);
 
+// PRODVALUE: the cell of a whole table range (its header row included: a PRODFIT, PRODCOSTFIT or
+// other table in the 7-column layout, as the sheet holds it) at `rowLabel` and `columnLabel`, with
+// PRODSTAT's rules for rows; a column label is matched against the table's own header row, so that
+// any table with a header row of column words answers.
+Cell tableValue(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel);
+
 // As lookUpFitTable on fitTable(fit), and also "effect of group <label>" (under effects) and
 // "effect of period <period>" (two-way, relative to the first period, whose effect is 0): the
 // estimate, and "n/a" in the other columns (no standard errors are reported for effects).
