@@ -215,6 +215,20 @@ BOOST_AUTO_TEST_CASE(wrong_skew_table_and_efficiency)
     BOOST_TEST((efficiency.array() == 1.0).all());
 }
 
+// 40 invented rows (seed 15) whose half-normal likelihood rises toward σᵥ = 0 (scipy's BFGS from 9
+// starts ends at σᵥ below 1e-5 on the same rows, checked by hand, not at test time): the fit says
+// "boundary", never "converged", and PRODEFFICIENCY refuses the table.
+BOOST_AUTO_TEST_CASE(likelihood_rising_toward_no_noise_is_reported_as_boundary)
+{
+    const Invented data = invent(40, isoquant::InefficiencyDistribution::halfNormal, 0.4, 15);
+    const isoquant::ProductionFrontier frontier = isoquant::frontierFromArguments(argumentsOf(data, ""));
+    BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.convergence) == "boundary");
+    const isoquant::CellTable table = isoquant::frontierTable(frontier);
+    BOOST_TEST(messageOf([&] {
+                   isoquant::efficiencyColumn(table, numberRange(data.output), numberRange(data.inputs), {});
+               }) == "model: the frontier did not converge; its estimates are not a maximum, so they are not used");
+}
+
 BOOST_AUTO_TEST_CASE(bad_input_names_argument_and_row)
 {
     Invented data = invent(40, isoquant::InefficiencyDistribution::halfNormal, 0.4, 15);

@@ -13,7 +13,9 @@ namespace {
 
 constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 constexpr double pi = 3.14159265358979323846;
-constexpr long evaluationLimit = 2000;
+constexpr long evaluationLimit = 200; // per run of the solver
+constexpr int solverRuns = 4;         // per start
+constexpr double newtonGainTolerance = 1e-8;
 
 // The score equations for Eigen's HybridNonLinearSolver, divided by n so that their size does not
 // grow with the rows; the Jacobian (the Hessian of ℓ/n) by central differences of the score.
@@ -123,25 +125,44 @@ Attempt maximiseFrom(Eigen::VectorXd theta, ScoreEquations& equations)
 {
     Attempt attempt;
     const double startLikelihood = frontierLogLikelihood(equations.distribution, equations.data, theta);
-    Eigen::HybridNonLinearSolver<ScoreEquations> solver(equations);
-    solver.parameters.maxfev = evaluationLimit;
-    const auto status = solver.solve(theta);
+    // Restarted from where it stopped, with a fresh Jacobian and trust region, when it runs out of
+    // evaluations or progress: the Broyden updates between Jacobians go stale on flat likelihoods.
+    auto status = Eigen::HybridNonLinearSolverSpace::Running;
+    for (int run = 0; run < solverRuns; ++run) {
+        Eigen::HybridNonLinearSolver<ScoreEquations> solver(equations);
+        solver.parameters.maxfev = evaluationLimit;
+        status = solver.solve(theta);
+        if (status == Eigen::HybridNonLinearSolverSpace::RelativeErrorTooSmall ||
+            status == Eigen::HybridNonLinearSolverSpace::TolTooSmall ||
+            status == Eigen::HybridNonLinearSolverSpace::UserAsked || !theta.allFinite())
+            break;
+    }
     attempt.theta = theta;
     attempt.stopReason = solverReason(status);
-    if (status == Eigen::HybridNonLinearSolverSpace::TooManyFunctionEvaluation) {
-        attempt.convergence = FrontierConvergence::notConverged;
+    const bool solved = status == Eigen::HybridNonLinearSolverSpace::RelativeErrorTooSmall ||
+                        status == Eigen::HybridNonLinearSolverSpace::TolTooSmall;
+    if (!theta.allFinite()) return attempt;
+    attempt.logLikelihood = frontierLogLikelihood(equations.distribution, equations.data, theta);
+    const auto n = static_cast<double>(equations.data.response.size());
+    const Eigen::MatrixXd information = -equations.hessian(theta) * n;
+    const Eigen::LLT<Eigen::MatrixXd> factor(information);
+    const bool maximum = factor.info() == Eigen::Success &&
+                         attempt.logLikelihood >= startLikelihood - 1e-9 * std::fabs(startLikelihood);
+    // Where ℓ is flat in one direction (σᵤ small beside σᵥ, say) the solver's steps may keep
+    // wandering below any visible change in ℓ: a point is also accepted when the gain a Newton step
+    // predicts, ½ gᵀ(−∇²ℓ)⁻¹g (the Newton decrement, Boyd and Vandenberghe 2004, 9.5.1), is below 1e-8.
+    const Eigen::VectorXd score = equations.score(theta) * n;
+    const bool flatEnough = maximum && 0.5 * score.dot(factor.solve(score)) < newtonGainTolerance;
+    if (!solved && !flatEnough) {
+        if (status == Eigen::HybridNonLinearSolverSpace::TooManyFunctionEvaluation)
+            attempt.convergence = FrontierConvergence::notConverged;
         return attempt;
     }
-    if (status != Eigen::HybridNonLinearSolverSpace::RelativeErrorTooSmall &&
-        status != Eigen::HybridNonLinearSolverSpace::TolTooSmall)
-        return attempt;
-    attempt.logLikelihood = frontierLogLikelihood(equations.distribution, equations.data, theta);
-    const Eigen::MatrixXd information = -equations.hessian(theta) * static_cast<double>(equations.data.response.size());
-    const Eigen::LLT<Eigen::MatrixXd> factor(information);
-    if (factor.info() != Eigen::Success || !(attempt.logLikelihood >= startLikelihood - 1e-9 * std::fabs(startLikelihood))) {
+    if (!maximum) {
         attempt.stopReason = "the score vanished at a point that is not a maximum";
         return attempt;
     }
+    if (!solved) attempt.stopReason = "a Newton step would raise the log-likelihood by less than 1e-8";
     attempt.covariance = factor.solve(Eigen::MatrixXd::Identity(theta.size(), theta.size()));
     attempt.convergence = FrontierConvergence::converged;
     return attempt;
@@ -201,6 +222,11 @@ StochasticFrontierFit fitStochasticFrontier(const Eigen::MatrixXd& design, const
     fit.evaluations = equations.evaluations;
     fit.convergence = best.convergence;
     fit.stopReason = best.stopReason;
+    if (best.convergence != FrontierConvergence::converged && best.theta.allFinite() &&
+        frontierScore(distribution, equations.data, best.theta)(p) < 0) {
+        fit.convergence = FrontierConvergence::boundary;
+        fit.stopReason = "the likelihood still rises as noise SD falls toward 0";
+    }
     fit.coefficients = best.theta.head(p);
     fit.noiseSd = std::exp(best.theta(p));
     fit.inefficiencySd = std::exp(best.theta(p + 1));

@@ -30,6 +30,9 @@ std::vector<std::string> parameterLabels(const ProductionFrontier& frontier)
 std::string formNote(const ProductionFrontier& frontier)
 {
     if (frontier.fit.wrongSkew) return wrongSkewNote;
+    if (frontier.fit.convergence == FrontierConvergence::boundary)
+        return "note: no maximum with noise: the likelihood keeps rising toward noise SD = 0; the estimates "
+               "are where the solver stopped (try the other inefficiency distribution or more rows)";
     if (frontier.fit.convergence != FrontierConvergence::converged)
         return "note: the likelihood was not maximised; the estimates are where the solver stopped";
     return "";
@@ -48,6 +51,7 @@ std::string frontierStatusWord(FrontierConvergence convergence)
     case FrontierConvergence::converged: return convergedText;
     case FrontierConvergence::notConverged: return "not converged";
     case FrontierConvergence::stopped: return "stopped";
+    case FrontierConvergence::boundary: return boundaryText;
     }
     return "stopped";
 }

@@ -24,7 +24,9 @@ namespace isoquant {
 enum class FrontierConvergence {
     converged,    // the score vanished within tolerance at a maximum (or the wrong-skew least squares)
     notConverged, // the evaluation limit came first
-    stopped       // the solver made no progress, or its root is not a maximum
+    stopped,      // the solver made no progress, or its root is not a maximum
+    boundary      // stopped where ℓ still rises as σᵥ falls: the supremum lies toward σᵥ = 0, a
+                  // frontier without noise, which the model does not reach
 };
 
 struct StochasticFrontierFit {

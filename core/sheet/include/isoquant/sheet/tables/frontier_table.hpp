@@ -8,7 +8,7 @@
 //   inefficiency test | | | LR | p-value       LR of σᵤ = 0, p from ½χ²(0) + ½χ²(1) (Kodde and Palm 1986)
 //   mean efficiency                            the mean of E[exp(−u)|ε] over the rows
 //   returns to scale | ν | se | z of ν = 1 | p-value,  verdict
-//   convergence | converged (or not converged, stopped) | "<n> evaluations; <reason>"
+//   convergence | converged (or not converged, stopped, boundary) | "<n> evaluations; <reason>"
 //   form | cobb-douglas (or translog) | notes
 // so k + q + m + 16 rows: two inputs, Cobb-Douglas, no controls: 18 rows. The header's title is
 // "exponential frontier" under exponential inefficiency.
