@@ -201,6 +201,37 @@ BOOST_AUTO_TEST_CASE(efficiency_column_follows_the_header_rules)
     BOOST_TEST(std::get<double>(single.at(0, 0)) > 0.0);
 }
 
+// A control enters the frontier as it is; PRODEFFICIENCY then takes it after the inputs, by position
+// or by its header label. Its coefficient is near the 0.5 it was drawn with (within 4 standard
+// errors: common practice, no source), and the efficiencies equal those from the columns reordered.
+BOOST_AUTO_TEST_CASE(controls_enter_the_frontier_and_the_efficiency_column)
+{
+    Invented data = invent(400, isoquant::InefficiencyDistribution::halfNormal, 0.4, 21);
+    Eigen::MatrixXd control(400, 1);
+    for (Eigen::Index row = 0; row < 400; ++row) {
+        control(row, 0) = row % 2;
+        data.output(row, 0) *= std::exp(0.5 * control(row, 0));
+    }
+    isoquant::FrontierArguments arguments = argumentsOf(data, "");
+    arguments.controls = numberRange(control, {"night shift"});
+    const isoquant::ProductionFrontier frontier = isoquant::frontierFromArguments(arguments);
+    const isoquant::CellTable table = isoquant::frontierTable(frontier);
+    BOOST_TEST(table.rows() == 19u); // k + m + 16 = 2 + 1 + 16
+    BOOST_TEST(table.text(4, 0) == "night shift (control)");
+    BOOST_TEST(std::fabs(frontier.coefficients[3].estimate - 0.5) <= 4 * frontier.coefficients[3].standardError);
+    Eigen::MatrixXd columns(400, 3), reordered(400, 3);
+    columns << data.inputs, control;
+    reordered << control, data.inputs.col(1), data.inputs.col(0);
+    const Eigen::VectorXd byPosition = isoquant::testing::columnValues(
+        isoquant::efficiencyColumn(table, numberRange(data.output), numberRange(columns), {}));
+    const Eigen::VectorXd byLabel = isoquant::testing::columnValuesUnder(
+        isoquant::efficiencyColumn(table, numberRange(data.output, {"output"}),
+                                   numberRange(reordered, {"night shift", "capital", "labour"}), {}),
+        "efficiency");
+    BOOST_TEST((byPosition - byLabel).cwiseAbs().maxCoeff() == 0.0);
+    BOOST_TEST(byPosition.maxCoeff() <= 1.0);
+}
+
 BOOST_AUTO_TEST_CASE(wrong_skew_table_and_efficiency)
 {
     const Invented data = invent(300, isoquant::InefficiencyDistribution::halfNormal, 0.4, 13, +1);
