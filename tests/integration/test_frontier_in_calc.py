@@ -126,6 +126,10 @@ class FrontierTableTest(FrontierTestCase):
         self.assertEqual(rows["form"][1], "cobb-douglas")
         self.assertEqual(self.exponential[0][0], "exponential frontier")
         self.assertEqual(self.exponential[16][1], "converged")
+        # The README's example shows this table rounded to 4 digits: it must stay what Calc computes.
+        for row, shown in ((1, 1.845), (2, 0.5771), (3, 0.3499), (5, 0.1578), (6, 0.3195), (13, 0.7549)):
+            self.assertAlmostEqual(self.exponential[row][1], shown, delta=5e-4 * abs(shown),
+                                   msg="README example, row %s" % self.exponential[row][0])
 
     def test_maximum_against_scipy(self):
         import numpy as np
