@@ -240,6 +240,28 @@ const std::vector<FunctionInfo>& functionTable()
           {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
           {"input j", "Optional: the input solved for, its number or its label (default: the first other "
                       "input)."}}},
+        {"prodFrontier", "PRODFRONTIER",
+         "Fits a stochastic production frontier by maximum likelihood: ln output = frontier + noise - "
+         "inefficiency. Returns a table (enter as an array formula): the frontier's estimates, noise SD, "
+         "inefficiency SD and lambda with standard errors, the likelihood, a test that there is inefficiency at "
+         "all, the mean efficiency, returns to scale and convergence. The result depends on the assumed "
+         "distribution of inefficiency; it measures how far a row lags, not why.",
+         {outputArgument, inputsArgument,
+          {"form", "\"cobb-douglas\" (default) or \"translog\"."},
+          {"inefficiency", "Distribution of inefficiency: \"half-normal\" (default) or \"exponential\"."},
+          levelArgument, controlsArgument}},
+        {"prodEfficiency", "PRODEFFICIENCY",
+         "Technical efficiency of each row from a PRODFRONTIER table: the expected share of frontier output the "
+         "row reaches (1 = on the frontier), or its inefficiency or the bounds of its efficiency. A column, one "
+         "value per row.",
+         {{"model", "A PRODFRONTIER table, whole (its first cell reads \"half-normal frontier\" or "
+                    "\"exponential frontier\")."},
+          outputArgument,
+          {"inputs", "Inputs of each row in the table's order (then its controls, if it has any), as many rows as "
+                     "output. A first row of text names the columns, which are then matched by label."},
+          {"what", "\"efficiency\" (default: E[exp(-u) | residual], Battese and Coelli), \"inefficiency\" "
+                   "(E[u | residual], Jondrow et al.), \"lower bound\" or \"upper bound\" (of efficiency, at "
+                   "the table's confidence level, Horrace and Schmidt)."}}},
 #ifdef ISOQUANT_BENCHMARK_FLOOR
         // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
         {"benchFloor", "ISOQUANTFLOOR",

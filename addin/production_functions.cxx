@@ -10,6 +10,8 @@
 #include "isoquant/fit_table.hpp"
 #include "isoquant/growth_cell_functions.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/frontier_functions.hpp"
+#include "isoquant/sheet/tables/frontier_table.hpp"
 
 #include <new>
 
@@ -333,6 +335,26 @@ Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outpu
         const CellTable prices = toCellTable(inputPrices, "input prices");
         return orientedLike(
             profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
+    });
+}
+
+Any ProductionFunctions::prodFrontier(const AnyTable& output, const AnyTable& inputs, const Any& form,
+                                      const Any& inefficiency, const Any& level, const Any& controls)
+{
+    return guardedTable([&] {
+        return frontierTable(frontierFromArguments(
+            {toCellTable(output, "output"), toCellTable(inputs, "inputs"), toSingleCell(form, "form"),
+             toSingleCell(inefficiency, "inefficiency"), toSingleCell(level, "level"),
+             toOptionalTable(controls, "controls")}));
+    });
+}
+
+Any ProductionFunctions::prodEfficiency(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+                                        const Any& what)
+{
+    return guardedTable([&] {
+        return efficiencyColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+                                toCellTable(inputs, "inputs"), toSingleCell(what, "what"));
     });
 }
 

@@ -93,6 +93,11 @@ public:
                                  const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
                                    const css::uno::Any& inputI, const css::uno::Any& inputJ) override;
+    css::uno::Any SAL_CALL prodFrontier(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
+                                        const css::uno::Any& inefficiency, const css::uno::Any& level,
+                                        const css::uno::Any& controls) override;
+    css::uno::Any SAL_CALL prodEfficiency(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
+                                          const css::uno::Any& what) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

@@ -25,6 +25,23 @@ std::string translogPairLabel(const std::vector<std::string>& labels, Eigen::Ind
     return labels[static_cast<std::size_t>(first)] + "*" + labels[static_cast<std::size_t>(second)];
 }
 
+Eigen::MatrixXd translogDesign(const Eigen::MatrixXd& logInputs, const Eigen::MatrixXd& controls)
+{
+    const Eigen::Index k = logInputs.cols();
+    const auto pairs = translogPairs(k);
+    const auto q = static_cast<Eigen::Index>(pairs.size());
+    Eigen::MatrixXd design(logInputs.rows(), 1 + k + q + controls.cols());
+    design.col(0).setOnes();
+    design.middleCols(1, k) = logInputs;
+    for (Eigen::Index c = 0; c < q; ++c) {
+        const auto [i, j] = pairs[static_cast<std::size_t>(c)];
+        // ½βᵢᵢ(ln xᵢ)² and, for i < j, ½(βᵢⱼ + βⱼᵢ)·ln xᵢ·ln xⱼ = βᵢⱼ·ln xᵢ·ln xⱼ
+        design.col(1 + k + c) = ((i == j ? 0.5 : 1.0) * logInputs.col(i).array() * logInputs.col(j).array()).matrix();
+    }
+    design.rightCols(controls.cols()) = controls;
+    return design;
+}
+
 namespace {
 
 std::vector<std::string> termLabels(const ProductionData& data)
@@ -94,15 +111,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), "inputs",
                     "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
     const Eigen::MatrixXd logs = exactLog(data.inputs.array()).matrix();
-    Eigen::MatrixXd design(n, p);
-    design.col(0).setOnes();
-    design.middleCols(1, k) = logs;
-    for (Eigen::Index c = 0; c < q; ++c) {
-        const auto [i, j] = pairs[static_cast<std::size_t>(c)];
-        // ½βᵢᵢ(ln xᵢ)² and, for i < j, ½(βᵢⱼ + βⱼᵢ)·ln xᵢ·ln xⱼ = βᵢⱼ·ln xᵢ·ln xⱼ
-        design.col(1 + k + c) = ((i == j ? 0.5 : 1.0) * logs.col(i).array() * logs.col(j).array()).matrix();
-    }
-    design.rightCols(m) = data.controls;
+    const Eigen::MatrixXd design = translogDesign(logs, data.controls);
 
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;

@@ -31,6 +31,9 @@ struct TranslogDetails {
 // The (i, j), i ≤ j, of the βᵢⱼ in parameter order.
 std::vector<std::pair<Eigen::Index, Eigen::Index>> translogPairs(Eigen::Index inputs);
 
+// The regressors 1, ln xᵢ, ½(ln xᵢ)², ln xᵢ·ln xⱼ (i < j), then the controls, in parameter order.
+Eigen::MatrixXd translogDesign(const Eigen::MatrixXd& logInputs, const Eigen::MatrixXd& controls);
+
 // The table label of βᵢⱼ: "<label i>*<label j>".
 std::string translogPairLabel(const std::vector<std::string>& labels, Eigen::Index first, Eigen::Index second);
 

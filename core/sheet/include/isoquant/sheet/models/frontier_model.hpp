@@ -1,0 +1,31 @@
+// A PRODFRONTIER table read back for PRODEFFICIENCY.
+#pragma once
+
+#include "isoquant/cells.hpp"
+#include "isoquant/math/frontier/frontier_likelihood.hpp"
+#include "isoquant/production_form.hpp"
+
+#include <Eigen/Dense>
+
+#include <string>
+#include <vector>
+
+namespace isoquant {
+
+struct FrontierModel {
+    InefficiencyDistribution distribution = InefficiencyDistribution::halfNormal; // from the title
+    ProductionForm form = ProductionForm::cobbDouglas;
+    std::vector<std::string> inputLabels;
+    std::vector<std::string> controlLabels; // without " (control)"
+    Eigen::VectorXd coefficients;           // the parameter rows, in table order
+    double noiseSd = 0;
+    double inefficiencySd = 0;
+    // The level of the table's bounds, (2Φ(c) − 1) for c = (upper bound − value)/std. error of its
+    // first parameter row; 0.95 when that row has no finite bounds.
+    double confidenceLevel = 0.95;
+};
+
+// Throws InputError naming "model" and the row.
+FrontierModel readFrontierModel(const CellTable& table);
+
+} // namespace isoquant

@@ -1,0 +1,162 @@
+#include "isoquant/sheet/functions/frontier_functions.hpp"
+
+#include "isoquant/cell_functions.hpp"
+#include "isoquant/exact_elementwise.hpp"
+#include "isoquant/input_error.hpp"
+#include "isoquant/math/frontier/normal_tail.hpp"
+#include "isoquant/numeric_range.hpp"
+#include "isoquant/option_arguments.hpp"
+#include "isoquant/production_fit.hpp"
+#include "isoquant/text.hpp"
+#include "isoquant/translog_fit.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+InefficiencyDistribution readInefficiencyArgument(const Cell& cell)
+{
+    if (isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()))
+        return InefficiencyDistribution::halfNormal;
+    if (isText(cell)) {
+        const std::string& word = std::get<std::string>(cell);
+        if (equalsIgnoringCase(word, "half-normal")) return InefficiencyDistribution::halfNormal;
+        if (equalsIgnoringCase(word, "exponential")) return InefficiencyDistribution::exponential;
+    }
+    const std::string shown = isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
+    throw InputError("inefficiency: " + shown + " is not a distribution; use \"half-normal\" or \"exponential\"");
+}
+
+ProductionForm readFrontierForm(const Cell& cell)
+{
+    const ProductionForm form = readFormArgument(cell);
+    if (form == ProductionForm::ces)
+        throw InputError("form: a frontier takes \"cobb-douglas\" or \"translog\"; the ces form is not offered");
+    return form;
+}
+
+double twoSidedNormalPValue(double z)
+{
+    if (std::isnan(z)) return z;
+    return 2.0 * std::exp(logNormalCdf(-std::fabs(z)));
+}
+
+FrontierEstimate normalEstimate(double estimate, double standardError, double critical)
+{
+    const double z = estimate / standardError;
+    return {estimate, standardError, z, twoSidedNormalPValue(z), estimate - critical * standardError,
+            estimate + critical * standardError};
+}
+
+// σ = exp(s) with s estimated: se(σ) = σ·se(s), bounds exp(s ± z·se(s)).
+FrontierEstimate scaleEstimate(double logValue, double logStandardError, double critical)
+{
+    const double value = std::exp(logValue);
+    const double nan = std::nan("");
+    return {value, value * logStandardError, nan, nan, std::exp(logValue - critical * logStandardError),
+            std::exp(logValue + critical * logStandardError)};
+}
+
+// ν as gᵀβ: the exponents' sum, or for translog Σᵢ(αᵢ + Σⱼ βᵢⱼ l̄ⱼ) at the mean logs l̄.
+Eigen::VectorXd returnsGradient(ProductionForm form, Eigen::Index k, Eigen::Index parameters,
+                                const Eigen::VectorXd& meanLogs)
+{
+    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(parameters);
+    gradient.segment(1, k).setOnes();
+    if (form != ProductionForm::translog) return gradient;
+    Eigen::Index column = 1 + k;
+    for (const auto& [i, j] : translogPairs(k)) gradient(column++) = i == j ? meanLogs(i) : meanLogs(i) + meanLogs(j);
+    return gradient;
+}
+
+void setInference(ProductionFrontier& frontier, const Eigen::MatrixXd& logInputs)
+{
+    const StochasticFrontierFit& fit = frontier.fit;
+    const Eigen::Index p = fit.coefficients.size();
+    const double critical = normalQuantile((1 + frontier.confidenceLevel) / 2);
+    const Eigen::MatrixXd& v = fit.covariance;
+    for (Eigen::Index j = 0; j < p; ++j)
+        frontier.coefficients.push_back(normalEstimate(fit.coefficients(j), std::sqrt(v(j, j)), critical));
+    frontier.noiseSd = scaleEstimate(std::log(fit.noiseSd), std::sqrt(v(p, p)), critical);
+    if (fit.wrongSkew) {
+        const double nan = std::nan("");
+        frontier.inefficiencySd = {0, nan, nan, nan, nan, nan};
+        frontier.lambda = {0, nan, nan, nan, nan, nan};
+    } else {
+        frontier.inefficiencySd = scaleEstimate(std::log(fit.inefficiencySd), std::sqrt(v(p + 1, p + 1)), critical);
+        // ln λ = ln σᵤ − ln σᵥ
+        const double logLambdaVariance = v(p, p) + v(p + 1, p + 1) - 2 * v(p, p + 1);
+        frontier.lambda =
+            scaleEstimate(std::log(fit.inefficiencySd / fit.noiseSd), std::sqrt(logLambdaVariance), critical);
+    }
+    const auto k = static_cast<Eigen::Index>(frontier.inputLabels.size());
+    const Eigen::VectorXd gradient =
+        returnsGradient(frontier.form, k, p, logInputs.colwise().mean().transpose());
+    const double nu = gradient.dot(fit.coefficients);
+    const double se = std::sqrt(gradient.dot(v.topLeftCorner(p, p) * gradient));
+    frontier.returns = normalEstimate(nu, se, critical);
+    frontier.returns.statistic = (nu - 1) / se;
+    frontier.returns.pValue = twoSidedNormalPValue(frontier.returns.statistic);
+    frontier.verdict = classifyReturnsToScale(nu, frontier.returns.pValue, frontier.confidenceLevel, false);
+}
+
+// The parameters of the frontier: the least-squares ones, σᵥ and σᵤ.
+Eigen::Index frontierParameters(ProductionForm form, Eigen::Index k, Eigen::Index m)
+{
+    return 1 + k + (form == ProductionForm::translog ? k * (k + 1) / 2 : 0) + m + 2;
+}
+
+} // namespace
+
+Eigen::MatrixXd frontierDesign(ProductionForm form, const Eigen::MatrixXd& inputs, const Eigen::MatrixXd& controls)
+{
+    const Eigen::MatrixXd logs = exactLog(inputs.array()).matrix();
+    if (form == ProductionForm::translog) return translogDesign(logs, controls);
+    Eigen::MatrixXd design(inputs.rows(), 1 + inputs.cols() + controls.cols());
+    design.col(0).setOnes();
+    design.middleCols(1, inputs.cols()) = logs;
+    design.rightCols(controls.cols()) = controls;
+    return design;
+}
+
+ProductionFrontier frontierFromArguments(const FrontierArguments& arguments)
+{
+    ProductionFrontier frontier;
+    frontier.form = readFrontierForm(arguments.form);
+    const InefficiencyDistribution distribution = readInefficiencyArgument(arguments.inefficiency);
+    frontier.confidenceLevel = readLevelArgument(arguments.level, "level");
+
+    FitArguments leastSquares;
+    leastSquares.output = arguments.output;
+    leastSquares.inputs = arguments.inputs;
+    leastSquares.controls = arguments.controls;
+    leastSquares.form = arguments.form;
+    leastSquares.level = arguments.level;
+    leastSquares = withoutTrailingEmptyRows(std::move(leastSquares));
+    // Read here to count the rows before the least-squares fit, whose own minimum is lower.
+    const NumericColumns output = readNumericColumns(leastSquares.output, "output", ValueRule::positive, "output");
+    const NumericColumns inputs = readNumericColumns(leastSquares.inputs, "inputs", ValueRule::positive, "input");
+    const Eigen::Index n = output.values.rows();
+    const Eigen::Index parameters = frontierParameters(frontier.form, inputs.values.cols(),
+                                                       leastSquares.controls.empty() ? 0 : leastSquares.controls.columns());
+    if (n == inputs.values.rows() && n < parameters + 1)
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
+                         std::to_string(parameters) + " parameters of the frontier (with noise SD and inefficiency "
+                         "SD); need at least " + std::to_string(parameters + 1));
+    const ProductionFit fit = fitFromArguments(leastSquares); // checks shapes, labels, collinearity
+
+    frontier.inputLabels = fit.inputLabels;
+    frontier.controlLabels = fit.controlLabels;
+    Eigen::MatrixXd controls(n, 0);
+    if (!leastSquares.controls.empty())
+        controls = readNumericColumns(leastSquares.controls, "controls", ValueRule::finite, "control").values;
+    const Eigen::MatrixXd design = frontierDesign(frontier.form, inputs.values, controls);
+    const Eigen::VectorXd response = exactLog(output.values.col(0).array()).matrix();
+    frontier.fit = fitStochasticFrontier(design, response, fit.estimates, distribution);
+    setInference(frontier, exactLog(inputs.values.array()).matrix());
+    return frontier;
+}
+
+} // namespace isoquant

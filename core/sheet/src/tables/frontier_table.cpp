@@ -1,0 +1,97 @@
+#include "isoquant/sheet/tables/frontier_table.hpp"
+
+#include "isoquant/table_labels.hpp"
+#include "isoquant/translog_fit.hpp"
+#include "table_writer.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+void estimateRow(TableWriter& writer, const std::string& label, const FrontierEstimate& estimate)
+{
+    writer.put(label, {estimate.estimate, estimate.standardError, estimate.statistic, estimate.pValue,
+                       estimate.lowerBound, estimate.upperBound});
+}
+
+std::vector<std::string> parameterLabels(const ProductionFrontier& frontier)
+{
+    std::vector<std::string> labels{logScaleLabel};
+    for (const auto& label : frontier.inputLabels) labels.push_back(label);
+    if (frontier.form == ProductionForm::translog)
+        for (const auto& [i, j] : translogPairs(static_cast<Eigen::Index>(frontier.inputLabels.size())))
+            labels.push_back(translogPairLabel(frontier.inputLabels, i, j));
+    for (const auto& label : frontier.controlLabels) labels.push_back(label + controlSuffix);
+    return labels;
+}
+
+std::string formNote(const ProductionFrontier& frontier)
+{
+    if (frontier.fit.wrongSkew) return wrongSkewNote;
+    if (frontier.fit.convergence == FrontierConvergence::boundary)
+        return "note: no maximum with noise: the likelihood keeps rising toward noise SD = 0; the estimates "
+               "are where the solver stopped (try the other inefficiency distribution or more rows)";
+    if (frontier.fit.convergence != FrontierConvergence::converged)
+        return "note: the likelihood was not maximised; the estimates are where the solver stopped";
+    return "";
+}
+
+} // namespace
+
+std::string inefficiencyWord(InefficiencyDistribution distribution)
+{
+    return distribution == InefficiencyDistribution::halfNormal ? "half-normal" : "exponential";
+}
+
+std::string frontierStatusWord(FrontierConvergence convergence)
+{
+    switch (convergence) {
+    case FrontierConvergence::converged: return convergedText;
+    case FrontierConvergence::notConverged: return "not converged";
+    case FrontierConvergence::stopped: return "stopped";
+    case FrontierConvergence::boundary: return boundaryText;
+    }
+    return "stopped";
+}
+
+std::size_t frontierTableRows(ProductionForm form, std::size_t inputs, std::size_t controls)
+{
+    const std::size_t secondOrder = form == ProductionForm::translog ? inputs * (inputs + 1) / 2 : 0;
+    return inputs + secondOrder + controls + 16;
+}
+
+CellTable frontierTable(const ProductionFrontier& frontier)
+{
+    const StochasticFrontierFit& fit = frontier.fit;
+    TableWriter writer(frontierTableRows(frontier.form, frontier.inputLabels.size(), frontier.controlLabels.size()),
+                       false);
+    writer.headerRow(fit.distribution == InefficiencyDistribution::halfNormal ? halfNormalFrontierTitle
+                                                                              : exponentialFrontierTitle);
+    const std::vector<std::string> labels = parameterLabels(frontier);
+    for (std::size_t j = 0; j < labels.size(); ++j) estimateRow(writer, labels[j], frontier.coefficients[j]);
+    writer.skipRow();
+
+    estimateRow(writer, noiseSdLabel, frontier.noiseSd);
+    estimateRow(writer, inefficiencySdLabel, frontier.inefficiencySd);
+    estimateRow(writer, lambdaLabel, frontier.lambda);
+    const auto n = static_cast<double>(fit.residuals.size());
+    const auto parameters = static_cast<double>(fit.coefficients.size() + 2);
+    writer.valueRow(observationsLabel, n);
+    writer.valueRow(logLikelihoodLabel, fit.logLikelihood);
+    writer.valueRow(aicLabel, -2 * fit.logLikelihood + 2 * parameters);
+    writer.valueRow(bicLabel, -2 * fit.logLikelihood + parameters * std::log(n));
+    const double statistic = inefficiencyTestStatistic(fit);
+    writer.put(inefficiencyTestLabel, {Cell{}, Cell{}, statistic, inefficiencyTestPValue(statistic)});
+    writer.valueRow(meanEfficiencyLabel, meanEfficiency(fit));
+    const FrontierEstimate& returns = frontier.returns;
+    writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.statistic, returns.pValue});
+    writer.textRow(verdictLabel, {frontier.verdict});
+    writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
+                                      std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});
+    writer.textRow(formLabel, {formWord(frontier.form), formNote(frontier)});
+    return writer.finish();
+}
+
+} // namespace isoquant
