@@ -282,6 +282,31 @@ const Translation& germanTranslation()
                        "(Standard: der erste)."},
           {"Faktor j", "Optional: der Faktor, nach dem aufgelöst wird, seine Nummer oder seine Bezeichnung "
                        "(Standard: der erste andere Faktor)."}}},
+        {"prodFrontier",
+         "Schätzt eine stochastische Produktionsgrenze nach der Maximum-Likelihood-Methode: ln Ausbringung = "
+         "Grenze + Störterm - Ineffizienz. Gibt eine Tabelle zurück (als Matrixformel eingeben): die Schätzwerte "
+         "der Grenze, Standardabweichung von Störterm und Ineffizienz und lambda mit Standardfehlern, die "
+         "Likelihood, einen Test, ob es überhaupt Ineffizienz gibt, die mittlere Effizienz, die Skalenerträge und "
+         "die Konvergenz. Das Ergebnis hängt von der angenommenen Verteilung der Ineffizienz ab; es misst, wie weit "
+         "eine Zeile zurückliegt, nicht warum.",
+         {outputArgument, inputsArgument,
+          {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
+          {"Ineffizienz", "Verteilung der Ineffizienz: \"half-normal\" (Standard, halbnormal) oder \"exponential\" "
+                          "(exponentialverteilt)."},
+          levelArgument, controlsArgument}},
+        {"prodEfficiency",
+         "Technische Effizienz jeder Zeile aus einer PRODFRONTIER-Tabelle: der erwartete Anteil der Ausbringung an "
+         "der Grenze, den die Zeile erreicht (1 = auf der Grenze), oder ihre Ineffizienz oder die Grenzen ihrer "
+         "Effizienz. Eine Spalte, ein Wert je Zeile.",
+         {{"Modell", "Eine ganze PRODFRONTIER-Tabelle (ihre erste Zelle lautet \"half-normal frontier\" oder "
+                     "\"exponential frontier\")."},
+          outputArgument,
+          {"Faktormengen", "Faktormengen jeder Zeile in der Reihenfolge der Tabelle (danach ihre Kontrollvariablen, "
+                           "falls sie welche hat), so viele Zeilen wie die Ausbringung. Eine erste Textzeile benennt "
+                           "die Spalten, die dann nach Bezeichnung zugeordnet werden."},
+          {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
+                       "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
+                       "zum Konfidenzniveau der Tabelle, Horrace und Schmidt)."}}},
     }};
     return translation;
 }

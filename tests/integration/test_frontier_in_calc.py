@@ -27,19 +27,13 @@ Sources of the expected figures, named beside each check:
 """
 
 import math
-import os
 import random
-import sys
 import unittest
 
-HERE = os.path.dirname(os.path.abspath(__file__))
-sys.path.insert(0, HERE)
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_values
 
-from office import (  # noqa: E402  (needs the path above)
-    get_cell, get_range, recalc, set_array_formula, set_values, start_module_office, stop_module_office)
+from .support import module_session
 
-REPO = os.path.normpath(os.path.join(HERE, "..", ".."))
-OXT = os.environ.get("ISOQUANT_OXT", os.path.join(REPO, "build", "isoquant.oxt"))
 
 FORMULA_TOLERANCE = 1e-12
 LSTSQ_TOLERANCE = 1e-8
@@ -47,9 +41,6 @@ MAXIMUM_TOLERANCE = 1e-8
 ROWS, WRONG_ROWS = 80, 40
 LABELS = ["crew hours", "machine hours"]
 
-OFFICE = None
-DOC = None
-SHEET = None
 
 
 def bottling_lines(rows, sign, seed, exponential=False):
@@ -69,21 +60,23 @@ EXPONENTIAL = bottling_lines(ROWS, -1, 11, exponential=True)
 WRONG = bottling_lines(WRONG_ROWS, +1, 7)
 
 
+def prepare(sheet):
+    set_values(sheet, "A1", [["bottles"] + LABELS] + DATA)   # A1:C81
+    set_values(sheet, "A101", [["bottles"] + LABELS] + WRONG)  # A101:C141
+    set_values(sheet, "Z1", [["bottles"] + LABELS] + EXPONENTIAL)  # Z1:AB81
+
+
+CALC = module_session(prepare)
+
+
 def setUpModule():
-    global OFFICE, DOC, SHEET
-
-    def prepare(doc):
-        sheet = doc.Sheets.getByIndex(0)
-        set_values(sheet, "A1", [["bottles"] + LABELS] + DATA)   # A1:C81
-        set_values(sheet, "A101", [["bottles"] + LABELS] + WRONG)  # A101:C141
-        set_values(sheet, "Z1", [["bottles"] + LABELS] + EXPONENTIAL)  # Z1:AB81
-
-    OFFICE, DOC = start_module_office(OXT, prepare)
-    SHEET = DOC.Sheets.getByIndex(0)
+    global SHEET, DOC, OFFICE
+    CALC.start()
+    SHEET, DOC, OFFICE = CALC.sheet, CALC.doc, CALC.office
 
 
 def tearDownModule():
-    stop_module_office(OFFICE)
+    CALC.stop()
 
 
 def design_and_response(data):

@@ -42,7 +42,7 @@ ENGLISH_NAME = {
     "Spaltenbezeichnung": "column label", "Modell": "model", "Mittelwert": "mean", "Faktor": "input",
     "Perioden": "periods", "Gewichte": "weights", "Methode": "method", "Mengen": "quantities",
     "Kostenanteile": "shares", "Basis": "base", "Faktor i": "input i", "Faktor j": "input j", "Art": "kind",
-    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost", "Tabelle": "table",
+    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost", "Tabelle": "table", "Ineffizienz": "inefficiency",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
     "Mengen von Faktor i": "values of input i",
 }
@@ -54,6 +54,9 @@ GERMAN_ARGUMENTS = {
     "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS,
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
     "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
+    "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
+                     "Kontrollvariablen"],
+    "PRODEFFICIENCY": ["Modell", "Ausbringung", "Faktormengen", "Kennzahl"],
     "PRODOUTPUT": AT_BUNDLES + ["Mittelwert"],
     "PRODMARGINAL": AT_BUNDLES + ["Faktor"],
     "PRODELASTICITY": AT_BUNDLES + ["Faktor"],

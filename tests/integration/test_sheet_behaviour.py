@@ -167,6 +167,7 @@ class OrientationTest(unittest.TestCase):
 REQUIRED = {
     "PRODFIT": ["output", "inputs"],
     "PRODSTAT": ["output", "inputs", "row label"],
+    "PRODVALUE": ["table", "row label"],
     "PRODOUTPUT": ["model", "inputs"],
     "PRODMARGINAL": ["model", "inputs", "input"],
     "PRODELASTICITY": ["model", "inputs", "input"],
@@ -242,7 +243,7 @@ class ExtensionManagerTextTest(unittest.TestCase):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
             if str(properties.get("Name", "")).startswith("PROD") and properties["Category"] == ADD_IN:
                 names.add(properties["Name"])
-        self.assertEqual(len(names), 25)
+        self.assertEqual(len(names), 26)
         self.assertEqual([n for n in sorted(names) if n not in description], [])
         publisher = packages[0].getPublisherInfo()  # StringPair: First the name, Second the link
         self.assertEqual(publisher.First, "The Isoquant developers")
