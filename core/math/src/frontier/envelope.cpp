@@ -1,0 +1,184 @@
+#include "isoquant/math/frontier/envelope.hpp"
+
+#include <ClpSimplex.hpp>
+#include <CoinPackedMatrix.hpp>
+
+#include <cmath>
+#include <limits>
+
+namespace isoquant {
+
+namespace {
+
+constexpr double infinity = std::numeric_limits<double>::infinity();
+
+// Each column divided by its mean (an all-zero column is left as it is): the LP then works on
+// values near 1, where Clp's absolute tolerances (1e-7) mean the same for every unit. Scores and
+// intensities λ do not change, since every constraint is scaled row by row.
+Eigen::MatrixXd scaledByColumnMeans(const Eigen::MatrixXd& values)
+{
+    Eigen::MatrixXd scaled = values;
+    for (Eigen::Index column = 0; column < values.cols(); ++column) {
+        const double mean = values.col(column).mean();
+        if (mean > 0) scaled.col(column) /= mean;
+    }
+    return scaled;
+}
+
+} // namespace
+
+struct EnvelopeSolver::Models {
+    Eigen::MatrixXd outputs, inputs;     // as given, for the targets
+    Eigen::MatrixXd scaledOutputs, scaledInputs;
+    EnvelopeOrientation orientation;
+    ClpSimplex scoreModel;  // stage one: min θ (or max φ)
+    ClpSimplex slackModel;  // stage two: θ fixed, max Σ slacks
+    Eigen::Index plants() const { return inputs.rows(); }
+    int intensityColumns() const { return static_cast<int>(inputs.rows()); }
+    int scoreColumn() const { return intensityColumns(); } // θ or φ, after the λ columns
+    int inputRows() const { return static_cast<int>(inputs.cols()); }
+    int outputRows() const { return static_cast<int>(outputs.cols()); }
+    // Plant o's θ coefficients and right-hand sides in `model` (see envelope.hpp).
+    void setPlant(ClpSimplex& model, Eigen::Index plant) const;
+};
+
+namespace {
+
+// Columns λ₁…λₙ, then θ (or φ); rows: inputs, outputs, Σ λ. θ's coefficients are placeholders
+// (−1) in the rows that change plant by plant, so the matrix's structure never changes.
+CoinPackedMatrix envelopeMatrix(const Eigen::MatrixXd& outputs, const Eigen::MatrixXd& inputs,
+                                EnvelopeOrientation orientation)
+{
+    const auto m = static_cast<int>(inputs.cols()), s = static_cast<int>(outputs.cols());
+    CoinPackedMatrix matrix(true, m + s + 1, 0);
+    std::vector<int> rows;
+    std::vector<double> values;
+    for (Eigen::Index plant = 0; plant < inputs.rows(); ++plant) {
+        rows.clear();
+        values.clear();
+        for (int i = 0; i < m; ++i)
+            if (inputs(plant, i) != 0) rows.push_back(i), values.push_back(inputs(plant, i));
+        for (int r = 0; r < s; ++r)
+            if (outputs(plant, r) != 0) rows.push_back(m + r), values.push_back(outputs(plant, r));
+        rows.push_back(m + s);
+        values.push_back(1.0);
+        matrix.appendCol(static_cast<int>(rows.size()), rows.data(), values.data());
+    }
+    rows.clear();
+    values.clear();
+    const bool input = orientation == EnvelopeOrientation::input;
+    for (int row = input ? 0 : m; row < (input ? m : m + s); ++row) rows.push_back(row), values.push_back(-1.0);
+    matrix.appendCol(static_cast<int>(rows.size()), rows.data(), values.data());
+    return matrix;
+}
+
+void loadModel(ClpSimplex& model, const CoinPackedMatrix& matrix, const std::vector<double>& objective,
+               EnvelopeReturns returns)
+{
+    const int columns = matrix.getNumCols(), rows = matrix.getNumRows();
+    std::vector<double> columnLower(static_cast<std::size_t>(columns), 0.0),
+        columnUpper(static_cast<std::size_t>(columns), infinity);
+    std::vector<double> rowLower(static_cast<std::size_t>(rows), -infinity), rowUpper(static_cast<std::size_t>(rows), infinity);
+    // Σ λ: free under constant returns, = 1 under variable, ≤ 1 under non-increasing returns.
+    if (returns == EnvelopeReturns::variable) rowLower.back() = 1.0;
+    if (returns != EnvelopeReturns::constant) rowUpper.back() = 1.0;
+    model.setLogLevel(0);
+    model.loadProblem(matrix, columnLower.data(), columnUpper.data(), objective.data(), rowLower.data(),
+                      rowUpper.data());
+    model.scaling(0); // the values are scaled already (scaledByColumnMeans)
+}
+
+} // namespace
+
+void EnvelopeSolver::Models::setPlant(ClpSimplex& model, Eigen::Index plant) const
+{
+    const int m = inputRows(), s = outputRows(), score = scoreColumn();
+    const bool input = orientation == EnvelopeOrientation::input;
+    for (int i = 0; i < m; ++i) {
+        const double x = scaledInputs(plant, i);
+        if (input) model.modifyCoefficient(i, score, -x, true);
+        model.setRowBounds(i, -infinity, input ? 0.0 : x);
+    }
+    for (int r = 0; r < s; ++r) {
+        const double y = scaledOutputs(plant, r);
+        if (!input) model.modifyCoefficient(m + r, score, -y, true);
+        model.setRowBounds(m + r, input ? y : 0.0, infinity);
+    }
+    // modifyCoefficient changes only the column copy: drop the row copy the last solve kept.
+    model.setNewRowCopy(nullptr);
+}
+
+namespace {
+
+// Warm start from the current basis by the dual simplex; should that end without a verdict, once
+// more from the slack basis by the primal simplex.
+EnvelopeStatus solveModel(ClpSimplex& model)
+{
+    model.dual();
+    if (!model.isProvenOptimal() && !model.isProvenDualInfeasible()) {
+        model.allSlackBasis(true);
+        model.primal();
+    }
+    if (model.isProvenOptimal()) return EnvelopeStatus::solved;
+    if (model.isProvenDualInfeasible()) return EnvelopeStatus::unbounded;
+    return EnvelopeStatus::failed;
+}
+
+} // namespace
+
+EnvelopeSolver::EnvelopeSolver(const Eigen::MatrixXd& outputs, const Eigen::MatrixXd& inputs,
+                               EnvelopeReturns returns, EnvelopeOrientation orientation)
+    : models_(std::make_unique<Models>())
+{
+    Models& models = *models_;
+    models.outputs = outputs;
+    models.inputs = inputs;
+    models.scaledOutputs = scaledByColumnMeans(outputs);
+    models.scaledInputs = scaledByColumnMeans(inputs);
+    models.orientation = orientation;
+    const CoinPackedMatrix matrix = envelopeMatrix(models.scaledOutputs, models.scaledInputs, orientation);
+    const auto n = static_cast<std::size_t>(inputs.rows());
+
+    // Stage one minimises θ, or −φ.
+    std::vector<double> scoreObjective(n + 1, 0.0);
+    scoreObjective[n] = orientation == EnvelopeOrientation::input ? 1.0 : -1.0;
+    loadModel(models.scoreModel, matrix, scoreObjective, returns);
+
+    // Stage two maximises Σᵢ sᵢ⁻ + Σᵣ sᵣ⁺ = const − Σⱼ λⱼ (Σᵢ xᵢⱼ − Σᵣ yᵣⱼ) in the data's units,
+    // so it minimises Σⱼ λⱼ cⱼ with cⱼ = Σᵢ xᵢⱼ − Σᵣ yᵣⱼ, divided by max |cⱼ| (the same optimum,
+    // coefficients near 1).
+    const Eigen::VectorXd slackCost = inputs.rowwise().sum() - outputs.rowwise().sum();
+    const double largest = slackCost.cwiseAbs().maxCoeff();
+    std::vector<double> slackObjective(n + 1, 0.0);
+    for (std::size_t j = 0; j < n; ++j)
+        slackObjective[j] = largest > 0 ? slackCost(static_cast<Eigen::Index>(j)) / largest : 0.0;
+    loadModel(models.slackModel, matrix, slackObjective, returns);
+}
+
+EnvelopeSolver::~EnvelopeSolver() = default;
+
+PlantEnvelope EnvelopeSolver::solve(Eigen::Index plant, bool secondStage)
+{
+    Models& models = *models_;
+    PlantEnvelope result;
+    models.setPlant(models.scoreModel, plant);
+    result.status = solveModel(models.scoreModel);
+    if (result.status != EnvelopeStatus::solved) return result;
+    const double optimum = models.scoreModel.primalColumnSolution()[models.scoreColumn()];
+    result.score = models.orientation == EnvelopeOrientation::input ? optimum : 1.0 / optimum;
+    if (!secondStage) return result;
+
+    ClpSimplex& slacks = models.slackModel;
+    models.setPlant(slacks, plant);
+    slacks.setColumnBounds(models.scoreColumn(), optimum, optimum);
+    result.status = solveModel(slacks);
+    if (result.status != EnvelopeStatus::solved) return result;
+    const Eigen::Map<const Eigen::VectorXd> intensities(slacks.primalColumnSolution(), models.plants());
+    for (Eigen::Index j = 0; j < models.plants(); ++j)
+        if (intensities(j) > peerWeightThreshold) result.peers.emplace_back(j, intensities(j));
+    result.inputTargets = models.inputs.transpose() * intensities;
+    result.outputTargets = models.outputs.transpose() * intensities;
+    return result;
+}
+
+} // namespace isoquant
