@@ -19,15 +19,13 @@ std::string rowText(const EnvelopeData& data, Eigen::Index plant)
     return "row " + std::to_string(static_cast<std::size_t>(plant) + data.outputs.firstDataRow());
 }
 
-// A solved plant, or the message for one without an optimum.
+// A solved plant. With every plant using a positive amount of some input, both LPs have an
+// optimum: λⱼ > 0 only where plant j uses no input that plant o lacks, and then λⱼ ≤ xᵢₒ/xᵢⱼ;
+// anything else is the solver's failure, not the user's.
 PlantEnvelope solved(EnvelopeSolver& solver, const EnvelopeData& data, Eigen::Index plant, bool secondStage)
 {
     PlantEnvelope result = solver.solve(plant, secondStage);
-    if (result.status == EnvelopeStatus::unbounded)
-        throw InputError("inputs: " + rowText(data, plant) + " has no output-oriented score: other plants produce "
-                         "with none of the inputs it uses, so its outputs could grow without bound; use "
-                         "orientation \"input\" or check the zeros in inputs");
-    if (result.status == EnvelopeStatus::failed)
+    if (result.status != EnvelopeStatus::solved)
         throw std::runtime_error("the LP solver found no optimum for " + rowText(data, plant));
     return result;
 }

@@ -26,7 +26,7 @@ enum class EnvelopeOrientation { input, output };
 
 enum class EnvelopeStatus {
     solved,
-    unbounded, // output orientation: φ has no bound (other plants produce without the inputs o uses)
+    unbounded, // no finite optimum (impossible when every plant has a positive input)
     failed     // the LP solver stopped without an optimum
 };
 
