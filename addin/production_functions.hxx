@@ -83,6 +83,9 @@ public:
                                  const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
                                    const css::uno::Any& inputI, const css::uno::Any& inputJ) override;
+    css::uno::Any SAL_CALL prodEnvelope(const AnyTable& outputs, const AnyTable& inputs, const css::uno::Any& returns,
+                                        const css::uno::Any& orientation, const css::uno::Any& what,
+                                        const css::uno::Any& names) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

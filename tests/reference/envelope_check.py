@@ -101,8 +101,7 @@ def stage_two(np, linprog, outputs, inputs, plant, returns, orientation, optimum
                      bounds=[(0, None)] * columns, method="highs")
     if result.status != 0:
         raise RuntimeError(f"linprog stage two, plant {plant}: {result.message}")
-    weights = result.x[:n]
-    return inputs.T @ weights, outputs.T @ weights
+    return result.x[:n]  # lambda; the targets are X'lambda and Y'lambda
 
 
 def main():
@@ -124,8 +123,8 @@ def main():
                     optimum = stage_one(np, linprog, outputs, inputs, plant, returns, orientation)
                     score = optimum if orientation == "input" else 1.0 / optimum
                     rows.append([name, "score", returns, orientation, plant, 0, repr(float(score))])
-                    input_targets, output_targets = stage_two(np, linprog, outputs, inputs, plant, returns,
-                                                              orientation, optimum)
+                    weights = stage_two(np, linprog, outputs, inputs, plant, returns, orientation, optimum)
+                    input_targets, output_targets = inputs.T @ weights, outputs.T @ weights
                     for quantity, targets in (("input_target", input_targets), ("output_target", output_targets)):
                         for column, value in enumerate(targets):
                             rows.append([name, quantity, returns, orientation, plant, column, repr(float(value))])
