@@ -92,6 +92,10 @@ BOOST_AUTO_TEST_CASE(shapes_and_an_empty_frontier)
     BOOST_TEST(messageFor(isoquant::testing::typedRange({{Cell("visits")}}), clinicInputs()) ==
                "outputs: holds a header row but no data");
     BOOST_TEST(messageFor(CellTable(), clinicInputs()) == "outputs: the range is empty");
+    // The work cap (isoquant/sheet/functions/envelope_functions.hpp), checked before any LP.
+    const CellTable many = numberRange(Eigen::MatrixXd::Ones(2001, 1));
+    BOOST_TEST(messageFor(many, many) == "outputs: has 2,001 rows of data; an envelope solves a linear program over "
+                                         "all rows for every row, so one call compares at most 2,000 rows");
 }
 
 BOOST_AUTO_TEST_CASE(option_words_and_names)

@@ -110,11 +110,16 @@ void EnvelopeSolver::Models::setPlant(ClpSimplex& model, Eigen::Index plant) con
 
 namespace {
 
-// Warm start from the current basis by the dual simplex; should that end without a verdict, once
-// more from the slack basis by the primal simplex.
-EnvelopeStatus solveModel(ClpSimplex& model)
+// Warm start from the current basis: by the dual simplex after a change of plant (the old basis
+// stays dual feasible for the same objective), by the primal simplex for the second stage started
+// from the first stage's optimal basis (primal feasible with θ fixed at its optimum). Should that
+// end without a verdict, once more from the slack basis.
+EnvelopeStatus solveModel(ClpSimplex& model, bool primalFirst)
 {
-    model.dual();
+    if (primalFirst)
+        model.primal();
+    else
+        model.dual();
     if (!model.isProvenOptimal() && !model.isProvenDualInfeasible()) {
         model.allSlackBasis(true);
         model.primal();
@@ -162,7 +167,7 @@ PlantEnvelope EnvelopeSolver::solve(Eigen::Index plant, bool secondStage)
     Models& models = *models_;
     PlantEnvelope result;
     models.setPlant(models.scoreModel, plant);
-    result.status = solveModel(models.scoreModel);
+    result.status = solveModel(models.scoreModel, false);
     if (result.status != EnvelopeStatus::solved) return result;
     const double optimum = models.scoreModel.primalColumnSolution()[models.scoreColumn()];
     result.score = models.orientation == EnvelopeOrientation::input ? optimum : 1.0 / optimum;
@@ -171,7 +176,8 @@ PlantEnvelope EnvelopeSolver::solve(Eigen::Index plant, bool secondStage)
     ClpSimplex& slacks = models.slackModel;
     models.setPlant(slacks, plant);
     slacks.setColumnBounds(models.scoreColumn(), optimum, optimum);
-    result.status = solveModel(slacks);
+    slacks.copyinStatus(models.scoreModel.statusArray());
+    result.status = solveModel(slacks, true);
     if (result.status != EnvelopeStatus::solved) return result;
     const Eigen::Map<const Eigen::VectorXd> intensities(slacks.primalColumnSolution(), models.plants());
     for (Eigen::Index j = 0; j < models.plants(); ++j)

@@ -3,6 +3,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/model_inputs.hpp"
 #include "isoquant/text.hpp"
+#include "isoquant/work_limits.hpp"
 #include "isoquant/sheet/arguments/envelope_arguments.hpp"
 
 #include <cmath>
@@ -66,9 +67,9 @@ CellTable envelopeColumn(const CellTable& outputs, const CellTable& inputs, cons
     const std::vector<std::string> plantNames = readPlantNames(names, data.outputs);
     const Eigen::Index plants = data.outputs.values.rows();
     if (static_cast<std::size_t>(plants) > maximumEnvelopePlants)
-        throw InputError("outputs: has " + std::to_string(plants) + " rows of data; an envelope solves one linear "
-                         "program over all rows for every row, so at most " + std::to_string(maximumEnvelopePlants) +
-                         " rows are compared in one call");
+        throw InputError("outputs: has " + groupedCount(static_cast<std::size_t>(plants)) +
+                         " rows of data; an envelope solves a linear program over all rows for every row, so one "
+                         "call compares at most " + groupedCount(maximumEnvelopePlants) + " rows");
 
     const bool scale = request.measure == EnvelopeMeasure::scaleEfficiency;
     const bool secondStage = request.measure != EnvelopeMeasure::score && !scale;
