@@ -6,7 +6,16 @@ Usage: /usr/bin/python3 envelope_check.py DATA_DIR OUTPUT_CSV   (DATA_DIR is not
 Two invented data sets, drawn here with numpy's default_rng:
 - "random" (seed 17): 40 plants, 2 outputs and 3 inputs, each log-uniform on [1, 100];
 - "zeros" (seed 29): 30 plants, 2 outputs and 2 inputs log-uniform on [1, 100], then the second
-  output and the second input set to 0 in about a fifth of the plants each (amounts may be 0).
+  output and the second input set to 0 in about a fifth of the plants each (amounts may be 0);
+- "wide" (seed 41): 40 plants, 2 outputs and 3 inputs log-uniform on [1, 1e6], plants of very
+  different sizes: scores only.
+The score's LP is solved on the columns divided by the plant's own amounts (by the column's mean
+where it has 0): the score is the same, and HiGHS's absolute tolerances then apply relative to the
+plant's own amounts (on the raw "wide" data HiGHS misses a small plant's score by a third). The
+second stage is solved on the data as they are, theta fixed exactly: on the "wide" data HiGHS
+finds some plants' second stage infeasible within its tolerances, and relaxing theta by even 1e-9
+moves the targets of the others by up to 3e-7 (the slacks' optimum is sensitive to theta), so the
+"wide" set has no targets here.
 For each, under constant, variable and non-increasing returns and in both orientations:
 - the score: input orientation min theta s.t. X'lambda <= theta x_o, Y'lambda >= y_o; output
   orientation max phi s.t. X'lambda <= x_o, Y'lambda >= phi y_o, reported as 1/phi; lambda >= 0,
@@ -39,7 +48,9 @@ def invented_data(np):
     inputs = np.exp(rng.uniform(0, np.log(100), (30, 2)))
     outputs[rng.uniform(size=30) < 0.2, 1] = 0.0
     inputs[rng.uniform(size=30) < 0.2, 1] = 0.0
-    return {"random": random, "zeros": (outputs, inputs)}
+    rng = np.random.default_rng(41)
+    wide = (np.exp(rng.uniform(0, np.log(1e6), (40, 2))), np.exp(rng.uniform(0, np.log(1e6), (40, 3))))
+    return {"random": random, "zeros": (outputs, inputs), "wide": wide}
 
 
 def returns_rows(np, n, columns, returns):
@@ -53,7 +64,17 @@ def returns_rows(np, n, columns, returns):
     return [], [], [], []
 
 
+def own_units(np, values, plant):
+    """Each column divided by plant o's own amount (by the column's mean where that is 0), so that
+    HiGHS's absolute tolerances are relative to plant o; the scores and lambda do not change.
+    Returns (scaled values, factors)."""
+    factors = np.where(values[plant] > 0, values[plant], values.mean(axis=0))
+    return values / factors, factors
+
+
 def stage_one(np, linprog, outputs, inputs, plant, returns, orientation):
+    outputs, _ = own_units(np, outputs, plant)
+    inputs, _ = own_units(np, inputs, plant)
     n, s = outputs.shape
     m = inputs.shape[1]
     x_o, y_o = inputs[plant], outputs[plant]
@@ -123,6 +144,8 @@ def main():
                     optimum = stage_one(np, linprog, outputs, inputs, plant, returns, orientation)
                     score = optimum if orientation == "input" else 1.0 / optimum
                     rows.append([name, "score", returns, orientation, plant, 0, repr(float(score))])
+                    if name == "wide":
+                        continue
                     weights = stage_two(np, linprog, outputs, inputs, plant, returns, orientation, optimum)
                     input_targets, output_targets = inputs.T @ weights, outputs.T @ weights
                     for quantity, targets in (("input_target", input_targets), ("output_target", output_targets)):

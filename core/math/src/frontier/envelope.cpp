@@ -3,6 +3,7 @@
 #include <ClpSimplex.hpp>
 #include <CoinPackedMatrix.hpp>
 
+#include <algorithm>
 #include <cmath>
 #include <limits>
 
@@ -31,6 +32,7 @@ struct EnvelopeSolver::Models {
     Eigen::MatrixXd outputs, inputs;     // as given, for the targets
     Eigen::MatrixXd scaledOutputs, scaledInputs;
     EnvelopeOrientation orientation;
+    EnvelopeReturns returns;
     ClpSimplex scoreModel;  // stage one: min θ (or max φ)
     ClpSimplex slackModel;  // stage two: θ fixed, max Σ slacks
     Eigen::Index plants() const { return inputs.rows(); }
@@ -38,7 +40,9 @@ struct EnvelopeSolver::Models {
     int scoreColumn() const { return intensityColumns(); } // θ or φ, after the λ columns
     int inputRows() const { return static_cast<int>(inputs.cols()); }
     int outputRows() const { return static_cast<int>(outputs.cols()); }
-    // Plant o's θ coefficients and right-hand sides in `model` (see envelope.hpp).
+    // The factor c of plant o: the largest of its scaled inputs and outputs.
+    double plantScale(Eigen::Index plant) const;
+    // Plant o's θ coefficients and right-hand sides in `model` (see envelope.hpp), divided by c.
     void setPlant(ClpSimplex& model, Eigen::Index plant) const;
 };
 
@@ -72,38 +76,48 @@ CoinPackedMatrix envelopeMatrix(const Eigen::MatrixXd& outputs, const Eigen::Mat
     return matrix;
 }
 
-void loadModel(ClpSimplex& model, const CoinPackedMatrix& matrix, const std::vector<double>& objective,
-               EnvelopeReturns returns)
+// The Σ λ row is free here; setPlant gives it its bounds.
+void loadModel(ClpSimplex& model, const CoinPackedMatrix& matrix, const std::vector<double>& objective)
 {
     const int columns = matrix.getNumCols(), rows = matrix.getNumRows();
     std::vector<double> columnLower(static_cast<std::size_t>(columns), 0.0),
         columnUpper(static_cast<std::size_t>(columns), infinity);
     std::vector<double> rowLower(static_cast<std::size_t>(rows), -infinity), rowUpper(static_cast<std::size_t>(rows), infinity);
-    // Σ λ: free under constant returns, = 1 under variable, ≤ 1 under non-increasing returns.
-    if (returns == EnvelopeReturns::variable) rowLower.back() = 1.0;
-    if (returns != EnvelopeReturns::constant) rowUpper.back() = 1.0;
     model.setLogLevel(0);
     model.loadProblem(matrix, columnLower.data(), columnUpper.data(), objective.data(), rowLower.data(),
                       rowUpper.data());
-    model.scaling(0); // the values are scaled already (scaledByColumnMeans)
+    model.scaling(0); // the values are scaled already (scaledByColumnMeans, plantScale)
 }
 
 } // namespace
 
+double EnvelopeSolver::Models::plantScale(Eigen::Index plant) const
+{
+    return std::max(scaledInputs.row(plant).maxCoeff(), scaledOutputs.row(plant).maxCoeff());
+}
+
+// The LP of plant o is solved for μ = λ / c, every row divided by c: its right-hand sides and θ's
+// coefficients are then at most 1 in size, one of them 1, so Clp's absolute tolerance (1e-7) is
+// relative to plant o's own amounts. Without it a plant a millionth of the mean size would have
+// its constraints met to within 10 % only. Σ λ = 1 becomes Σ μ = 1/c.
 void EnvelopeSolver::Models::setPlant(ClpSimplex& model, Eigen::Index plant) const
 {
     const int m = inputRows(), s = outputRows(), score = scoreColumn();
     const bool input = orientation == EnvelopeOrientation::input;
+    const double scale = plantScale(plant);
     for (int i = 0; i < m; ++i) {
-        const double x = scaledInputs(plant, i);
+        const double x = scaledInputs(plant, i) / scale;
         if (input) model.modifyCoefficient(i, score, -x, true);
         model.setRowBounds(i, -infinity, input ? 0.0 : x);
     }
     for (int r = 0; r < s; ++r) {
-        const double y = scaledOutputs(plant, r);
+        const double y = scaledOutputs(plant, r) / scale;
         if (!input) model.modifyCoefficient(m + r, score, -y, true);
         model.setRowBounds(m + r, input ? y : 0.0, infinity);
     }
+    // Σ λ: free under constant returns, = 1 under variable, ≤ 1 under non-increasing returns.
+    model.setRowBounds(m + s, returns == EnvelopeReturns::variable ? 1.0 / scale : -infinity,
+                       returns == EnvelopeReturns::constant ? infinity : 1.0 / scale);
     // modifyCoefficient changes only the column copy: drop the row copy the last solve kept.
     model.setNewRowCopy(nullptr);
 }
@@ -141,13 +155,14 @@ EnvelopeSolver::EnvelopeSolver(const Eigen::MatrixXd& outputs, const Eigen::Matr
     models.scaledOutputs = scaledByColumnMeans(outputs);
     models.scaledInputs = scaledByColumnMeans(inputs);
     models.orientation = orientation;
+    models.returns = returns;
     const CoinPackedMatrix matrix = envelopeMatrix(models.scaledOutputs, models.scaledInputs, orientation);
     const auto n = static_cast<std::size_t>(inputs.rows());
 
     // Stage one minimises θ, or −φ.
     std::vector<double> scoreObjective(n + 1, 0.0);
     scoreObjective[n] = orientation == EnvelopeOrientation::input ? 1.0 : -1.0;
-    loadModel(models.scoreModel, matrix, scoreObjective, returns);
+    loadModel(models.scoreModel, matrix, scoreObjective);
 
     // Stage two maximises Σᵢ sᵢ⁻ + Σᵣ sᵣ⁺ = const − Σⱼ λⱼ (Σᵢ xᵢⱼ − Σᵣ yᵣⱼ) in the data's units,
     // so it minimises Σⱼ λⱼ cⱼ with cⱼ = Σᵢ xᵢⱼ − Σᵣ yᵣⱼ, divided by max |cⱼ| (the same optimum,
@@ -157,7 +172,7 @@ EnvelopeSolver::EnvelopeSolver(const Eigen::MatrixXd& outputs, const Eigen::Matr
     std::vector<double> slackObjective(n + 1, 0.0);
     for (std::size_t j = 0; j < n; ++j)
         slackObjective[j] = largest > 0 ? slackCost(static_cast<Eigen::Index>(j)) / largest : 0.0;
-    loadModel(models.slackModel, matrix, slackObjective, returns);
+    loadModel(models.slackModel, matrix, slackObjective);
 }
 
 EnvelopeSolver::~EnvelopeSolver() = default;
@@ -179,9 +194,11 @@ PlantEnvelope EnvelopeSolver::solve(Eigen::Index plant, bool secondStage)
     slacks.copyinStatus(models.scoreModel.statusArray());
     result.status = solveModel(slacks, true);
     if (result.status != EnvelopeStatus::solved) return result;
-    const Eigen::Map<const Eigen::VectorXd> intensities(slacks.primalColumnSolution(), models.plants());
+    // λ = c·μ; μ is what the solver's tolerances apply to, so the threshold is taken on it.
+    const Eigen::Map<const Eigen::VectorXd> solved(slacks.primalColumnSolution(), models.plants());
+    const Eigen::VectorXd intensities = models.plantScale(plant) * solved;
     for (Eigen::Index j = 0; j < models.plants(); ++j)
-        if (intensities(j) > peerWeightThreshold) result.peers.emplace_back(j, intensities(j));
+        if (solved(j) > peerWeightThreshold) result.peers.emplace_back(j, intensities(j));
     result.inputTargets = models.inputs.transpose() * intensities;
     result.outputTargets = models.outputs.transpose() * intensities;
     return result;

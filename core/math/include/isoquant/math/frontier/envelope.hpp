@@ -58,8 +58,9 @@ private:
     std::unique_ptr<Models> models_;
 };
 
-// λ below this counts as zero when peers are listed (the solver's own tolerance is 1e-7 on
-// values scaled to a mean of 1).
+// A plant's LP is solved for μ = λ/c, c the largest of its own amounts after each column is divided
+// by its mean (envelope.cpp); μ at or below this counts as zero when peers are listed: the solver's
+// own tolerance.
 inline constexpr double peerWeightThreshold = 1e-7;
 
 } // namespace isoquant
