@@ -158,6 +158,23 @@ BOOST_AUTO_TEST_CASE(scores_do_not_depend_on_units)
                        returns << ", " << orientation);
 }
 
+// Property: under constant returns a plant's score does not depend on its size: scaling all its
+// inputs and outputs by 1e-6 (a plant a millionth of the others' size) or 1e6 leaves every score
+// as it was (the frontier is a cone, and the plant's own ray is the same).
+BOOST_AUTO_TEST_CASE(constant_returns_scores_do_not_depend_on_a_plants_size)
+{
+    const Plants plants = randomPlants(30, 5);
+    for (const double factor : {1e-6, 1e6})
+        for (const char* orientation : allOrientations) {
+            Plants resized = plants;
+            resized.outputs.row(12) *= factor;
+            resized.inputs.row(12) *= factor;
+            BOOST_TEST(allClose(scores(resized.outputs, resized.inputs, "constant", orientation),
+                                scores(plants.outputs, plants.inputs, "constant", orientation), lpTolerance),
+                       factor << ", " << orientation);
+        }
+}
+
 // The result's header cell, the peers text by row number and by name, and targets of an output.
 BOOST_AUTO_TEST_CASE(header_peers_and_names)
 {
