@@ -8,7 +8,7 @@
 namespace isoquant {
 
 // Plants one call compares: each of the n rows solves an LP over all n rows, so the work grows
-// with n² (1,000 rows of 2 outputs and 3 inputs: about 0.7 s in Calc, the peers about 2.6 s;
+// with n² (1,000 rows of 2 outputs and 3 inputs: about 0.5 s in Calc, the peers about 1.6 s;
 // tests/benchmarks/RESULTS.md). Beyond this a call would keep Calc busy for many seconds.
 inline constexpr std::size_t maximumEnvelopePlants = 2000;
 
