@@ -65,6 +65,10 @@ BOOST_AUTO_TEST_CASE(negative_and_zero_amounts)
     CellTable zeroBeds = clinicInputs();
     for (std::size_t row = 1; row <= 4; ++row) zeroBeds.set(row, 1, 0.0);
     BOOST_TEST(messageFor(clinicOutputs(), zeroBeds) == "inputs: the column 'beds' is 0 in every row; leave it out");
+    // Twelve orders of magnitude within a column is an error of units (maximumAmountRatio).
+    BOOST_TEST(messageFor(clinicOutputs(), with(clinicInputs(), 2, 0, Cell(1.2e14))) ==
+               "inputs: the column 'nurses' holds 9 and 1.2e+14, more than 1e12 times as much; check the units (or "
+               "enter 0 for none)");
     CellTable idleClinic = clinicOutputs();
     idleClinic.set(3, 0, 0.0);
     idleClinic.set(3, 1, 0.0);

@@ -13,15 +13,16 @@ namespace {
 
 constexpr double infinity = std::numeric_limits<double>::infinity();
 
-// Each column divided by its mean (an all-zero column is left as it is): the LP then works on
-// values near 1, where Clp's absolute tolerances (1e-7) mean the same for every unit. Scores and
-// intensities λ do not change, since every constraint is scaled row by row.
-Eigen::MatrixXd scaledByColumnMeans(const Eigen::MatrixXd& values)
+// Each column divided by its largest value (an all-zero column is left as it is; the largest, not
+// the mean, since a sum of values near 1e308 overflows): the columns are then on one scale, and
+// with the per-plant factor below Clp's absolute tolerances (1e-7) mean the same in every unit.
+// Scores and intensities λ do not change, since every constraint is scaled row by row.
+Eigen::MatrixXd scaledByColumnMaxima(const Eigen::MatrixXd& values)
 {
     Eigen::MatrixXd scaled = values;
     for (Eigen::Index column = 0; column < values.cols(); ++column) {
-        const double mean = values.col(column).mean();
-        if (mean > 0) scaled.col(column) /= mean;
+        const double largest = values.col(column).maxCoeff();
+        if (largest > 0) scaled.col(column) /= largest;
     }
     return scaled;
 }
@@ -86,7 +87,7 @@ void loadModel(ClpSimplex& model, const CoinPackedMatrix& matrix, const std::vec
     model.setLogLevel(0);
     model.loadProblem(matrix, columnLower.data(), columnUpper.data(), objective.data(), rowLower.data(),
                       rowUpper.data());
-    model.scaling(0); // the values are scaled already (scaledByColumnMeans, plantScale)
+    model.scaling(0); // the values are scaled already (scaledByColumnMaxima, plantScale)
 }
 
 } // namespace
@@ -98,7 +99,7 @@ double EnvelopeSolver::Models::plantScale(Eigen::Index plant) const
 
 // The LP of plant o is solved for μ = λ / c, every row divided by c: its right-hand sides and θ's
 // coefficients are then at most 1 in size, one of them 1, so Clp's absolute tolerance (1e-7) is
-// relative to plant o's own amounts. Without it a plant a millionth of the mean size would have
+// relative to plant o's own amounts. Without it a plant a millionth of the largest one's size would have
 // its constraints met to within 10 % only. Σ λ = 1 becomes Σ μ = 1/c.
 void EnvelopeSolver::Models::setPlant(ClpSimplex& model, Eigen::Index plant) const
 {
@@ -152,8 +153,8 @@ EnvelopeSolver::EnvelopeSolver(const Eigen::MatrixXd& outputs, const Eigen::Matr
     Models& models = *models_;
     models.outputs = outputs;
     models.inputs = inputs;
-    models.scaledOutputs = scaledByColumnMeans(outputs);
-    models.scaledInputs = scaledByColumnMeans(inputs);
+    models.scaledOutputs = scaledByColumnMaxima(outputs);
+    models.scaledInputs = scaledByColumnMaxima(inputs);
     models.orientation = orientation;
     models.returns = returns;
     const CoinPackedMatrix matrix = envelopeMatrix(models.scaledOutputs, models.scaledInputs, orientation);

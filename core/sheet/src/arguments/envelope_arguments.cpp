@@ -42,6 +42,14 @@ NumericColumns readAmounts(const CellTable& range, const std::string& argument, 
         if ((read.values.col(column).array() == 0).all())
             throw InputError(argument + ": the column " + quoted(read.labels[static_cast<std::size_t>(column)]) +
                              " is 0 in every row; leave it out");
+    for (Eigen::Index column = 0; column < read.values.cols(); ++column) {
+        const auto values = read.values.col(column).array();
+        const double largest = values.maxCoeff(), smallest = (values > 0).select(values, largest).minCoeff();
+        if (largest / smallest > maximumAmountRatio)
+            throw InputError(argument + ": the column " + quoted(read.labels[static_cast<std::size_t>(column)]) +
+                             " holds " + formatNumber(smallest) + " and " + formatNumber(largest) +
+                             ", more than 1e12 times as much; check the units (or enter 0 for none)");
+    }
     for (Eigen::Index row = 0; row < read.values.rows(); ++row)
         if ((read.values.row(row).array() == 0).all())
             throw InputError(argument + ": row " + std::to_string(static_cast<std::size_t>(row) + read.firstDataRow()) +

@@ -9,8 +9,9 @@
 // Σᵢ sᵢ⁻ + Σᵣ sᵣ⁺ in the data's own units (the textbook two-stage model); its λ gives the peers and
 // the targets Σⱼ λⱼ xᵢⱼ and Σⱼ λⱼ yᵣⱼ, slacks included.
 //
-// Values must be finite and non-negative, every plant with a positive input and a positive output
-// (the sheet layer checks this and names the cell).
+// Values must be finite and non-negative, every plant with a positive input and a positive output,
+// and the positive values of a column within a ratio of maximumAmountRatio (the sheet layer checks
+// this and names the cell): the scaled values then stay far from underflow.
 #pragma once
 
 #include <Eigen/Dense>
@@ -20,6 +21,11 @@
 #include <vector>
 
 namespace isoquant {
+
+// Largest ratio of two positive values in one column: beyond it the smaller amounts are below the
+// LP solver's tolerance relative to the larger (1e-7 × 1e-5 of slack for rounding), and real data
+// spanning more than twelve orders of magnitude in one column is an error of units.
+inline constexpr double maximumAmountRatio = 1e12;
 
 enum class EnvelopeReturns { constant, variable, nonIncreasing };
 enum class EnvelopeOrientation { input, output };
@@ -59,7 +65,7 @@ private:
 };
 
 // A plant's LP is solved for μ = λ/c, c the largest of its own amounts after each column is divided
-// by its mean (envelope.cpp); μ at or below this counts as zero when peers are listed: the solver's
+// by its largest value (envelope.cpp); μ at or below this counts as zero when peers are listed: the solver's
 // own tolerance.
 inline constexpr double peerWeightThreshold = 1e-7;
 
