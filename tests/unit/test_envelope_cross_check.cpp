@@ -68,9 +68,9 @@ std::map<std::string, Plants> dataSets(const std::vector<Figure>& figures)
         }
     std::map<std::string, Plants> sets;
     for (const auto& [name, shape] : shapes) {
-        const auto size = [&](const char* q) { return shape.at(q); };
-        sets[name] = {Eigen::MatrixXd(size("output").first, size("output").second),
-                      Eigen::MatrixXd(size("input").first, size("input").second)};
+        const auto& outputs = shape.at("output");
+        const auto& inputs = shape.at("input");
+        sets[name] = {Eigen::MatrixXd(outputs.first, outputs.second), Eigen::MatrixXd(inputs.first, inputs.second)};
     }
     for (const auto& f : figures) {
         const auto row = static_cast<Eigen::Index>(f.plant), column = static_cast<Eigen::Index>(f.column);
