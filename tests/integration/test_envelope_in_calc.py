@@ -238,6 +238,9 @@ class FunctionWizardTest(unittest.TestCase):
         arguments = listed["PRODENVELOPE"]["Arguments"]
         self.assertEqual([a.Name for a in arguments], ["outputs", "inputs", "returns", "orientation", "what", "names"])
         self.assertEqual([a.IsOptional for a in arguments], [i >= 2 for i in range(6)])
+        self.assertTrue(all(a.Description.strip() for a in arguments))
+        # Filed under Add-In (com.sun.star.sheet.FunctionCategory.ADDIN = 11), as every function.
+        self.assertEqual(listed["PRODENVELOPE"]["Category"], 11)
 
 
 if __name__ == "__main__":
