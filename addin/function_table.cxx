@@ -262,6 +262,23 @@ const std::vector<FunctionInfo>& functionTable()
           {"what", "\"efficiency\" (default: E[exp(-u) | residual], Battese and Coelli), \"inefficiency\" "
                    "(E[u | residual], Jondrow et al.), \"lower bound\" or \"upper bound\" (of efficiency, at "
                    "the table's confidence level, Horrace and Schmidt)."}}},
+        {"prodEnvelope", "PRODENVELOPE",
+         "Data envelopment: each row's (plant's) efficiency against the best practice of all rows, by linear "
+         "programming; several outputs allowed. A column, one value per row (1 = on the frontier). A score is "
+         "relative to the rows given: few rows and many inputs make scores high.",
+         {{"outputs", "Outputs of each row, one column per output, numbers of zero or more, each row with a "
+                      "positive one. A first row of text names the outputs."},
+          {"inputs", "Inputs of each row, one column per input, numbers of zero or more, each row with a positive "
+                     "one, as many rows as outputs. A first row of text names the inputs."},
+          {"returns", "Returns to scale of the frontier: \"constant\" (default), \"variable\" or "
+                      "\"non-increasing\"."},
+          {"orientation", "\"input\" (default: the share of its inputs a row would need) or \"output\" (its "
+                          "output as a share of what it could produce, 1/phi)."},
+          {"what", "\"score\" (default), \"scale efficiency\" (constant-returns score / variable-returns "
+                   "score), \"peers\" (the rows it is compared with and their weights) or \"target <label>\" "
+                   "(the amount of that input or output on the frontier, slacks included)."},
+          {"names", "Optional column naming each row (a plant or branch), as many rows as outputs, a header row "
+                    "allowed: peers are then listed by these names instead of row numbers."}}},
 #ifdef ISOQUANT_BENCHMARK_FLOOR
         // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
         {"benchFloor", "ISOQUANTFLOOR",

@@ -307,6 +307,27 @@ const Translation& germanTranslation()
           {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
                        "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
                        "zum Konfidenzniveau der Tabelle, Horrace und Schmidt)."}}},
+        {"prodEnvelope",
+         "Data Envelopment Analysis: die Effizienz jeder Zeile (jedes Betriebs) gegenüber der besten Praxis aller "
+         "Zeilen, durch lineare Optimierung; mehrere Ausbringungen erlaubt. Eine Spalte, ein Wert je Zeile (1 = auf "
+         "dem Rand). Ein Wert gilt nur relativ zu den gegebenen Zeilen: wenige Zeilen und viele Faktoren machen die "
+         "Werte hoch.",
+         {{"Ausbringungen", "Ausbringungen jeder Zeile, eine Spalte je Ausbringung, Zahlen von null an, jede Zeile "
+                            "mit einer positiven. Eine erste Textzeile benennt die Ausbringungen."},
+          {"Faktormengen", "Faktormengen jeder Zeile, eine Spalte je Faktor, Zahlen von null an, jede Zeile mit einer "
+                           "positiven, so viele Zeilen wie die Ausbringungen. Eine erste Textzeile benennt die "
+                           "Faktoren."},
+          {"Skalenerträge", "Skalenerträge des Randes: \"constant\" (Standard, konstant), \"variable\" (variabel) "
+                            "oder \"non-increasing\" (nicht steigend)."},
+          {"Orientierung", "\"input\" (Standard: der Anteil ihrer Faktormengen, den eine Zeile bräuchte) oder "
+                           "\"output\" (ihre Ausbringung als Anteil dessen, was sie erzeugen könnte, 1/phi)."},
+          {"Kennzahl", "\"score\" (Standard: der Effizienzwert), \"scale efficiency\" (Skaleneffizienz: Wert bei "
+                       "konstanten / Wert bei variablen Skalenerträgen), \"peers\" (die Vergleichszeilen und ihre "
+                       "Gewichte) oder \"target <Bezeichnung>\" (die Menge dieses Faktors oder dieser Ausbringung "
+                       "auf dem Rand, Schlupf eingeschlossen)."},
+          {"Namen", "Optionale Spalte mit dem Namen jeder Zeile (Betrieb oder Filiale), so viele Zeilen wie die "
+                    "Ausbringungen, eine Kopfzeile erlaubt: Vergleichszeilen werden dann mit diesen Namen statt mit "
+                    "Zeilennummern genannt."}}},
     }};
     return translation;
 }

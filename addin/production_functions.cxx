@@ -12,6 +12,7 @@
 #include "isoquant/input_error.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
+#include "isoquant/sheet/functions/envelope_functions.hpp"
 
 #include <new>
 
@@ -365,6 +366,16 @@ Any ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& out
         return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
                               toCellTable(values, "values of input i"), toSingleCell(inputI, "input i"),
                               toSingleCell(inputJ, "input j"));
+    });
+}
+
+Any ProductionFunctions::prodEnvelope(const AnyTable& outputs, const AnyTable& inputs, const Any& returns,
+                                      const Any& orientation, const Any& what, const Any& names)
+{
+    return guardedTable([&] {
+        return envelopeColumn(toCellTable(outputs, "outputs"), toCellTable(inputs, "inputs"),
+                              toSingleCell(returns, "returns"), toSingleCell(orientation, "orientation"),
+                              toSingleCell(what, "what"), toOptionalTable(names, "names"));
     });
 }
 

@@ -98,6 +98,9 @@ public:
                                         const css::uno::Any& controls) override;
     css::uno::Any SAL_CALL prodEfficiency(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                                           const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodEnvelope(const AnyTable& outputs, const AnyTable& inputs, const css::uno::Any& returns,
+                                        const css::uno::Any& orientation, const css::uno::Any& what,
+                                        const css::uno::Any& names) override;
 
     // XAddIn
     OUString SAL_CALL getProgrammaticFuntionName(const OUString& displayName) override;

@@ -42,7 +42,9 @@ ENGLISH_NAME = {
     "Spaltenbezeichnung": "column label", "Modell": "model", "Mittelwert": "mean", "Faktor": "input",
     "Perioden": "periods", "Gewichte": "weights", "Methode": "method", "Mengen": "quantities",
     "Kostenanteile": "shares", "Basis": "base", "Faktor i": "input i", "Faktor j": "input j", "Art": "kind",
-    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost", "Tabelle": "table", "Ineffizienz": "inefficiency",
+    "Zielausbringung": "target output", "Faktorpreise": "input prices", "Kennzahl": "what", "Kosten": "cost",
+    "Tabelle": "table", "Ineffizienz": "inefficiency", "Ausbringungen": "outputs", "Skalenerträge": "returns",
+    "Orientierung": "orientation", "Namen": "names",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
     "Mengen von Faktor i": "values of input i",
 }
@@ -57,6 +59,7 @@ GERMAN_ARGUMENTS = {
     "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
                      "Kontrollvariablen"],
     "PRODEFFICIENCY": ["Modell", "Ausbringung", "Faktormengen", "Kennzahl"],
+    "PRODENVELOPE": ["Ausbringungen", "Faktormengen", "Skalenerträge", "Orientierung", "Kennzahl", "Namen"],
     "PRODOUTPUT": AT_BUNDLES + ["Mittelwert"],
     "PRODMARGINAL": AT_BUNDLES + ["Faktor"],
     "PRODELASTICITY": AT_BUNDLES + ["Faktor"],

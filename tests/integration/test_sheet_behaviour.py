@@ -182,6 +182,7 @@ REQUIRED = {
     "PRODPROFIT": ["model", "output price", "input prices"],
     "PRODFRONTIER": ["output", "inputs"],
     "PRODEFFICIENCY": ["model", "output", "inputs"],
+    "PRODENVELOPE": ["outputs", "inputs"],
 }
 ADD_IN = 11  # com.sun.star.sheet.FunctionCategory.ADDIN (the built-in PRODUCT also starts with PROD)
 # Names that must not appear: the other spelling of a name used elsewhere.
@@ -243,7 +244,7 @@ class ExtensionManagerTextTest(unittest.TestCase):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
             if str(properties.get("Name", "")).startswith("PROD") and properties["Category"] == ADD_IN:
                 names.add(properties["Name"])
-        self.assertEqual(len(names), 26)
+        self.assertEqual(len(names), 27)
         self.assertEqual([n for n in sorted(names) if n not in description], [])
         publisher = packages[0].getPublisherInfo()  # StringPair: First the name, Second the link
         self.assertEqual(publisher.First, "The Isoquant developers")

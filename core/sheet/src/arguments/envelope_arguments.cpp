@@ -1,0 +1,146 @@
+#include "isoquant/sheet/arguments/envelope_arguments.hpp"
+
+#include "isoquant/input_error.hpp"
+#include "isoquant/text.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
+
+std::string describe(const Cell& cell)
+{
+    return isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
+}
+
+std::string rowsOf(Eigen::Index count)
+{
+    return std::to_string(count) + " row" + (count == 1 ? "" : "s");
+}
+
+std::string cellPlace(const std::string& argument, const NumericColumns& read, Eigen::Index row, Eigen::Index column)
+{
+    std::string text = argument + ": row " + std::to_string(static_cast<std::size_t>(row) + read.firstDataRow());
+    if (read.values.cols() > 1) text += ", column " + std::to_string(column + 1);
+    return text;
+}
+
+// Amounts may be 0 (a plant without one of the inputs) but never negative, and a plant needs a
+// positive input and a positive output: the LPs compare amounts, they take no logs.
+NumericColumns readAmounts(const CellTable& range, const std::string& argument, const std::string& noun)
+{
+    NumericColumns read = readNumericColumns(range, argument, ValueRule::finite, noun);
+    for (Eigen::Index row = 0; row < read.values.rows(); ++row)
+        for (Eigen::Index column = 0; column < read.values.cols(); ++column)
+            if (read.values(row, column) < 0)
+                throw InputError(cellPlace(argument, read, row, column) + " is " + formatNumber(read.values(row, column)) +
+                                 "; amounts must be zero or positive");
+    for (Eigen::Index column = 0; column < read.values.cols(); ++column)
+        if ((read.values.col(column).array() == 0).all())
+            throw InputError(argument + ": the column " + quoted(read.labels[static_cast<std::size_t>(column)]) +
+                             " is 0 in every row; leave it out");
+    for (Eigen::Index column = 0; column < read.values.cols(); ++column) {
+        const auto values = read.values.col(column).array();
+        const double largest = values.maxCoeff(), smallest = (values > 0).select(values, largest).minCoeff();
+        if (largest / smallest > maximumAmountRatio)
+            throw InputError(argument + ": the column " + quoted(read.labels[static_cast<std::size_t>(column)]) +
+                             " holds " + formatNumber(smallest) + " and " + formatNumber(largest) +
+                             ", more than 1e12 times as much; check the units (or enter 0 for none)");
+    }
+    for (Eigen::Index row = 0; row < read.values.rows(); ++row)
+        if ((read.values.row(row).array() == 0).all())
+            throw InputError(argument + ": row " + std::to_string(static_cast<std::size_t>(row) + read.firstDataRow()) +
+                             " is 0 in every column; every plant needs a positive " + noun);
+    return read;
+}
+
+std::string optionWord(const Cell& cell) { return isText(cell) ? std::get<std::string>(cell) : std::string(); }
+
+} // namespace
+
+EnvelopeData readEnvelopeData(const CellTable& outputs, const CellTable& inputs)
+{
+    EnvelopeData data;
+    data.outputs = readAmounts(outputs, "outputs", "output");
+    data.inputs = readAmounts(inputs, "inputs", "input");
+    const Eigen::Index plants = data.outputs.values.rows();
+    if (data.inputs.values.rows() != plants)
+        throw InputError("inputs: has " + rowsOf(data.inputs.values.rows()) + " of data but outputs has " +
+                         rowsOf(plants) + "; give one row per plant in both");
+    if (plants < 2)
+        throw InputError("outputs: has 1 row of data, so the frontier is that plant alone; an envelope compares at "
+                         "least 2 plants");
+    return data;
+}
+
+EnvelopeReturns readEnvelopeReturns(const Cell& cell)
+{
+    if (isOmitted(cell)) return EnvelopeReturns::constant;
+    const std::string word = optionWord(cell);
+    if (equalsIgnoringCase(word, "constant")) return EnvelopeReturns::constant;
+    if (equalsIgnoringCase(word, "variable")) return EnvelopeReturns::variable;
+    if (equalsIgnoringCase(word, "non-increasing")) return EnvelopeReturns::nonIncreasing;
+    throw InputError("returns: " + describe(cell) +
+                     " is not a kind of returns to scale; use \"constant\", \"variable\" or \"non-increasing\"");
+}
+
+EnvelopeOrientation readEnvelopeOrientation(const Cell& cell)
+{
+    if (isOmitted(cell)) return EnvelopeOrientation::input;
+    const std::string word = optionWord(cell);
+    if (equalsIgnoringCase(word, "input")) return EnvelopeOrientation::input;
+    if (equalsIgnoringCase(word, "output")) return EnvelopeOrientation::output;
+    throw InputError("orientation: " + describe(cell) + " is not an orientation; use \"input\" or \"output\"");
+}
+
+EnvelopeRequest readEnvelopeRequest(const Cell& cell, const EnvelopeData& data)
+{
+    if (isOmitted(cell)) return {EnvelopeMeasure::score, 0, "efficiency"};
+    const std::string word = optionWord(cell);
+    if (equalsIgnoringCase(word, "score")) return {EnvelopeMeasure::score, 0, "efficiency"};
+    if (equalsIgnoringCase(word, "scale efficiency")) return {EnvelopeMeasure::scaleEfficiency, 0, "scale efficiency"};
+    if (equalsIgnoringCase(word, "peers")) return {EnvelopeMeasure::peers, 0, "peers"};
+    const std::string prefix = "target ";
+    if (word.size() > prefix.size() && equalsIgnoringCase(word.substr(0, prefix.size()), prefix)) {
+        const std::string label = word.substr(prefix.size());
+        const auto find = [&](const std::vector<std::string>& labels) -> Eigen::Index {
+            for (std::size_t i = 0; i < labels.size(); ++i)
+                if (equalsIgnoringCase(labels[i], label)) return static_cast<Eigen::Index>(i);
+            return -1;
+        };
+        if (const Eigen::Index input = find(data.inputs.labels); input >= 0)
+            return {EnvelopeMeasure::inputTarget, input, "target " + data.inputs.labels[static_cast<std::size_t>(input)]};
+        if (const Eigen::Index output = find(data.outputs.labels); output >= 0)
+            return {EnvelopeMeasure::outputTarget, output,
+                    "target " + data.outputs.labels[static_cast<std::size_t>(output)]};
+        std::string known;
+        for (const auto& name : data.inputs.labels) known += (known.empty() ? "" : ", ") + quoted(name);
+        throw InputError("what: " + quoted(label) + " is not an input or output label; the inputs are " + known);
+    }
+    throw InputError("what: " + describe(cell) +
+                     " is not known; use \"score\", \"scale efficiency\", \"peers\" or \"target <input label>\"");
+}
+
+std::vector<std::string> readPlantNames(const CellTable& names, const NumericColumns& outputs)
+{
+    if (names.empty()) return {};
+    const auto plants = static_cast<std::size_t>(outputs.values.rows());
+    if (names.columns() != 1) throw InputError("names: must be one column; it has " + std::to_string(names.columns()));
+    if (names.rows() != plants && names.rows() != plants + 1)
+        throw InputError("names: has " + rowsOf(static_cast<Eigen::Index>(names.rows())) + " but outputs has " +
+                         rowsOf(static_cast<Eigen::Index>(plants)) + " of data; give one name per plant (a header "
+                         "row may come first)");
+    std::vector<std::string> read;
+    for (std::size_t row = names.rows() - plants; row < names.rows(); ++row) {
+        const Cell cell = names.at(row, 0);
+        if (isOmitted(cell) || (isNumber(cell) && !std::isfinite(std::get<double>(cell))))
+            throw InputError("names: row " + std::to_string(row + 1) + " holds no name");
+        read.push_back(isText(cell) ? std::get<std::string>(cell) : formatNumber(std::get<double>(cell)));
+    }
+    return read;
+}
+
+} // namespace isoquant
