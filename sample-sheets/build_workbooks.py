@@ -14,8 +14,10 @@ import sys
 
 from isoquant_office import HeadlessOffice, extension_and_output, set_array_formula, set_formula, set_values
 
+import efficiency_workbook
 import scenarios  # this folder's modules: on the path as the script's own
 import workbook_style as style
+from workbook_about import SHARING, about_sheet
 from workbook_checks import formula_problems, named_range
 
 HERE = os.path.dirname(os.path.abspath(__file__))
@@ -34,27 +36,6 @@ CAUTION_GROWTH = ("Caution: TFP growth is a residual. It carries every error in 
                   "year's figure as a question to look into, not a verdict. These are statistical accounts, "
                   "not professional advice: check them with qualified practice before they steer costly "
                   "decisions.")
-SHARING = ("Sharing: a colleague without the Isoquant extension sees #NAME? in every function cell, because "
-           "LibreOffice keeps no stored results for add-in functions. Isoquant > Save a Copy for Colleagues "
-           "writes a copy (.ods or .xlsx) in which those cells hold the values they show now, with a first "
-           "sheet listing them; this workbook stays as it is. Isoquant > Fit the Array to Its Result sizes a "
-           "table typed into one cell to exactly its rows and columns.")
-
-
-def about_sheet(doc, title, paragraphs):
-    sheet = doc.Sheets.getByIndex(0)
-    sheet.Name = "About this workbook"
-    rows = [[title]]
-    for text in paragraphs:
-        rows += [[None], [text]]
-    set_values(sheet, "A1", rows)
-    style.title(sheet.getCellRangeByName("A1"))
-    style.wrapped_column(sheet, 0, width_mm=170)
-    # Heights were set for the narrow default column; fit them to the wrapped text again.
-    sheet.getCellRangeByName("A1:A%d" % len(rows)).Rows.OptimalHeight = True
-    return sheet
-
-
 def furniture_workshops(office, path):
     truth = scenarios.WORKSHOPS
     rows = scenarios.workshop_rows()
@@ -501,7 +482,8 @@ def check_workbook(doc, path, true_values):
 WORKBOOKS = {"furniture-workshops.fods": furniture_workshops,
              "dairy-creameries.fods": dairy_creameries,
              "glassworks-growth.fods": glassworks_growth,
-             "bakery-planning.fods": bakery_planning}
+             "bakery-planning.fods": bakery_planning,
+             "print-shop-efficiency.fods": efficiency_workbook.print_shop_efficiency}
 
 
 def main():

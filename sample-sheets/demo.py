@@ -74,9 +74,22 @@ def summarise_plan(doc, name):
             table["least cost: oven hours"][column], table["total cost a day"][column]))
 
 
+def summarise_efficiency(doc, name):
+    table = {row[0]: row[1] for row in named_range(doc, "efficiency_frontier").getDataArray()}
+    sheet = named_range(doc, "efficiency_frontier").Spreadsheet
+    rows = [row for row in sheet.getCellRangeByName("A2:F200").getDataArray() if row[0]]
+    print("\n%s: distance from best practice" % name)
+    print("  -> stochastic frontier: mean efficiency %.3f, inefficiency SD %.3f, noise SD %.3f (%s)" % (
+        table["mean efficiency"], table["inefficiency SD"], table["noise SD"], table["convergence"]))
+    for label, column in (("frontier efficiency", 4), ("envelope score", 5)):
+        lowest = sorted(rows, key=lambda row: row[column])[:3]
+        print("  -> lowest %s: %s" % (label, ", ".join("%s %.3f" % (row[0], row[column]) for row in lowest)))
+
+
 # One summary per named table a workbook carries.
 SUMMARIES = {"fitted_technology": summarise_fit, "form_comparison": summarise_comparison,
-             "growth_accounting": summarise_growth, "least_cost_plan": summarise_plan}
+             "growth_accounting": summarise_growth, "least_cost_plan": summarise_plan,
+             "efficiency_frontier": summarise_efficiency}
 
 
 def summarise(doc, name):
