@@ -144,8 +144,12 @@ const std::vector<FunctionInfo>& functionTable()
           periodNamesArgument}},
         {"prodRegular", "PRODREGULAR",
          "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
-         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
-         {modelArgument, bundlesArgument}},
+         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails. With a cost "
+         "model (as for PRODCOST) each row holds the output then one price per input: \"regular\" when every "
+         "fitted cost share is positive and cost is concave in prices.",
+         {modelArgument,
+          {"inputs", "One row of input values in the model's input order, or several rows: the result is then a "
+                     "column with one value per row. With a cost model: the output, then the prices."}}},
         {"prodCompare", "PRODCOMPARE",
          "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
          "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
@@ -181,7 +185,8 @@ const std::vector<FunctionInfo>& functionTable()
                    "given)."}}},
         {"prodLeastCost", "PRODLEASTCOST",
          "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
-         "a row or a column like the prices (enter as an array formula).",
+         "a row or a column like the prices (enter as an array formula). With a cost model (as for PRODCOST) by "
+         "Shephard's lemma: amount = fitted cost share x cost / price.",
          {modelArgument, targetArgument, pricesArgument}},
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
@@ -195,6 +200,24 @@ const std::vector<FunctionInfo>& functionTable()
                            "column of outputs, one row of prices per output (or one row for all)."},
           {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
                    "per percent of output) or \"returns to scale\" (its inverse)."}}},
+        {"prodEfficientScale", "PRODEFFICIENTSCALE",
+         "Output at which average cost is lowest at the given input prices (the efficient scale), from a cost "
+         "model (PRODCOSTFIT table or typed rows, as for PRODCOST) or a production model whose returns to scale "
+         "fall with size. Says so when average cost falls or rises at every output in the model.",
+         {modelArgument,
+          {"input prices", "One positive price per input, in the model's order, as a row or a column."}}},
+        {"prodPriceElasticity", "PRODPRICEELASTICITY",
+         "Price elasticity between inputs i and j at the least-cost plan for the output: \"demand\" (percent change "
+         "of the cost-minimising amount of i per percent change in the price of j, output held), \"allen\" or "
+         "\"morishima\". From a cost model (as for PRODCOST) or, by duality, from a production model.",
+         {modelArgument,
+          {"output", "The output, a positive number, or a column of outputs (the result is then a column)."},
+          {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
+                           "column of outputs, one row of prices per output (or one row for all)."},
+          {"input i", "The input whose amount responds: its number (1 for the first) or its label."},
+          {"input j", "The input whose price moves: its number or its label."},
+          {"kind", "\"demand\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order given, as "
+                   "PRODSUBSTITUTION)."}}},
         {"prodCostFit", "PRODCOSTFIT",
          "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
          "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "

@@ -9,6 +9,7 @@
 #include "isoquant/fit_table.hpp"
 #include "isoquant/growth_cell_functions.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 
 #include <new>
 
@@ -202,7 +203,7 @@ Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& s
 Any ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
     return guardedTable(
-        [&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
+        [&] { return regularityAnyColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
 Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
@@ -264,7 +265,7 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
         return orientedLike(
-            leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
+            leastCostAnyRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
             prices);
     });
 }
@@ -275,6 +276,24 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
     return guardedTable([&] {
         return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
                           toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+    });
+}
+
+Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices)
+{
+    return guardedTable([&] {
+        const CellTable prices = toCellTable(inputPrices, "input prices");
+        return efficientScaleCell(*models_.cells(model, "model"), prices);
+    });
+}
+
+Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTable& output, const AnyTable& inputPrices,
+                                             const AnyTable& inputI, const AnyTable& inputJ, const Any& kind)
+{
+    return guardedTable([&] {
+        return priceElasticityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+                                     toCellTable(inputPrices, "input prices"), toSingleCell(Any(inputI), "input i"),
+                                     toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"));
     });
 }
 

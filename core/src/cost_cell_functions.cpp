@@ -125,9 +125,10 @@ double costFigure(const CostModel& model, double level, const Eigen::VectorXd& p
     return std::nan("");
 }
 
-// The prices of every output row: one vector for a single output (a row or a column), else one
-// row per output or one row for all.
-Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs)
+} // namespace
+
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
+                              const std::string& outputArgument)
 {
     if (outputs == 1) return readPrices(range, "input prices", inputs).transpose();
     const NumericColumns prices = readNumericColumns(range, "input prices", ValueRule::positive, "price");
@@ -135,12 +136,10 @@ Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eige
         throw InputError("input prices: has " + std::to_string(prices.values.cols()) + " columns, but the model has " +
                          std::to_string(inputs) + " prices; give one column per input");
     if (prices.values.rows() != 1 && prices.values.rows() != outputs)
-        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but target output has " +
+        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but " + outputArgument + " has " +
                          rowsText(outputs) + "; give one row of prices per output, or one row for all");
     return prices.values;
 }
-
-} // namespace
 
 CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
@@ -148,7 +147,7 @@ CellTable costModelColumn(const CellTable& model, const CellTable& target, const
     const CostMeasure measure = readCostMeasure(what);
     const NumericColumns outputs = readOneColumn(target, "target output");
     const Eigen::Index n = outputs.values.rows();
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size(), "target output");
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
@@ -171,7 +170,7 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
     const NumericColumns outputs = readOneColumn(target, "target output");
     const Eigen::Index n = outputs.values.rows();
     const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs);
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, "target output");
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         CellTable rowPrices(1, static_cast<std::size_t>(inputs));

@@ -34,6 +34,11 @@ CostFit costFitFromArguments(const CostFitArguments& arguments);
 // "marginal" ε·C/y, "average" C/y, "cost elasticity" ε, "returns to scale" 1/ε. A column.
 CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
 
+// The prices of every output row: one vector for a single output (a row or a column), else one row
+// per output or one row for all; `outputArgument` names the outputs in a message.
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
+                              const std::string& outputArgument);
+
 // PRODCOST for any model: a cost model as above; a production model as costCell
 // (decision_cell_functions.hpp) for one output, and for a column of outputs one least-cost figure
 // per row, with prices as above.
