@@ -1,5 +1,6 @@
 """The cost functions computed by a real headless LibreOffice Calc with the extension: PRODCOSTFIT's
-tables, PRODCOST over a fitted and a typed cost model, a bad input, and the Function Wizard's entry.
+tables, PRODCOST over a fitted and a typed cost model, PRODLEASTCOST, PRODEFFICIENTSCALE,
+PRODPRICEELASTICITY and PRODREGULAR over cost models, bad input, and the Function Wizard's entries.
 
 Run from the repository root with Debian's Python (the only one that imports uno):
     /usr/bin/python3 -m unittest -v tests/integration/test_cost_in_calc.py
@@ -16,6 +17,12 @@ Sources of the expected figures, named beside each check:
 - "dual of Cobb-Douglas (derived in tests/unit/test_cost_functions.cpp)":
   C = nu (y/A)^(1/nu) prod (w_i/b_i)^(b_i/nu); the marginal cost C/(nu y), elasticity 1/nu.
 - "cost-model formula": exp(b0 + by ln y + sum bi ln wi) from the table's own cells.
+- "Cobb-Douglas demand elasticities": with cost shares s_j = b_j/nu and Allen elasticity 1, the
+  conditional demand elasticities are s_j (i != j) and s_i - 1 (own) (Binswanger 1974, from memory).
+- "scipy minimize_scalar": the average cost exp(ln C(y, w))/y of a typed translog cost model minimised
+  over ln y by scipy.optimize.minimize_scalar (python3-scipy, bounded Brent, xatol 1e-12), recomputed
+  here; Brent's minimum of a smooth function is located to about sqrt(machine epsilon) in ln y, so
+  the output agrees to 1e-6 relative.
 Formula recomputations agree to 1e-12 relative (the same logs and exponentials in another order).
 - Error messages: the wording in core/src/cost_cell_functions.cpp and numeric_range.cpp, which the
   add-in prefixes with "Error: ".
@@ -72,6 +79,12 @@ TYPED_COST = [["form", "cobb-douglas cost"],
               ["constant", math.log(NU) - math.log(SCALE) / NU - sum(b / NU * math.log(b) for b in EXPONENTS)],
               ["output", 1 / NU]] + [[label, b / NU] for label, b in zip(LABELS, EXPONENTS)]
 TYPED_PRODUCTION = [["form", "cobb-douglas"], ["A", SCALE]] + [[label, b] for label, b in zip(LABELS, EXPONENTS)]
+# An invented translog cost function of the chain, homogeneous in prices, average cost U-shaped.
+TRANSLOG_COST = [["form", "translog cost"], ["constant", -1.5], ["output", 0.4], ["labour", 0.35], ["machines", 0.3],
+                 ["energy", 0.35], ["output*output", 0.06], ["labour*labour", 0.04], ["labour*machines", -0.02],
+                 ["labour*energy", -0.02], ["machines*machines", 0.03], ["machines*energy", -0.01],
+                 ["energy*energy", 0.03], ["labour*output", 0.005], ["machines*output", -0.002],
+                 ["energy*output", -0.003]]
 WORDS = ["total", "marginal", "average", "cost elasticity", "returns to scale"]
 
 
@@ -83,6 +96,7 @@ def setUpModule():
         set_values(sheet, "A1", [["cost", "washes"] + LABELS] + DATA)  # A1:E31
         set_values(sheet, "G1", TYPED_COST)                            # G1:H6
         set_values(sheet, "G11", TYPED_PRODUCTION)                     # G11:H15
+        set_values(sheet, "G21", TRANSLOG_COST)                        # G21:H36
 
     OFFICE, DOC = start_module_office(OXT, prepare)
     SHEET = DOC.Sheets.getByIndex(0)
@@ -203,6 +217,91 @@ class CostBadInputTest(CostTestCase):
         self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
 
 
+def translog_log_cost(y, prices):
+    """ln C of TRANSLOG_COST, written out from its rows (the cost-model formula)."""
+    rows = dict((label, value) for label, value in TRANSLOG_COST[1:])
+    ly, lw = math.log(y), [math.log(w) for w in prices]
+    value = rows["constant"] + rows["output"] * ly + 0.5 * rows["output*output"] * ly * ly
+    for i, a in enumerate(LABELS):
+        value += rows[a] * lw[i] + rows[a + "*output"] * lw[i] * ly
+        for j, b in enumerate(LABELS):
+            key = "%s*%s" % (a, b) if i <= j else "%s*%s" % (b, a)
+            value += 0.5 * rows[key] * lw[i] * lw[j]
+    return value
+
+
+class CostDecisionsTest(CostTestCase):
+    """PRODLEASTCOST, PRODEFFICIENTSCALE, PRODPRICEELASTICITY and PRODREGULAR with cost models."""
+
+    @classmethod
+    def setUpClass(cls):
+        set_array_formula(SHEET, "R21:T21", "=PRODLEASTCOST($G$1:$H$6;B2;C2:E2)")
+        set_array_formula(SHEET, "R22:T22", "=PRODLEASTCOST($G$11:$H$15;B2;C2:E2)")
+        set_values(SHEET, "Y21", [[p] for p in DATA[0][2:]])  # Y21:Y23, the same prices as a column
+        set_array_formula(SHEET, "Z21:Z23", "=PRODLEASTCOST($G$1:$H$6;B2;Y21:Y23)")
+        set_array_formula(SHEET, "R24", "=PRODEFFICIENTSCALE($G$21:$H$36;C2:E2)")
+        set_array_formula(SHEET, "R25", "=PRODEFFICIENTSCALE($G$1:$H$6;C2:E2)")
+        set_array_formula(SHEET, "R26", "=PRODEFFICIENTSCALE($G$11:$H$15;C2:E2)")
+        for column, (i, j) in zip("RSTUVW", [(1, 1), (1, 2), (1, 3), (2, 1), (2, 2), (3, 3)]):
+            set_array_formula(SHEET, "%s28" % column, '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;%d;%d)' % (i, j))
+        set_array_formula(SHEET, "R29", '=PRODPRICEELASTICITY($G$11:$H$15;B2;C2:E2;"labour";"energy";"allen")')
+        set_array_formula(SHEET, "S29", '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;"labour";"energy";"morishima")')
+        set_array_formula(SHEET, "R30:R34", '=PRODPRICEELASTICITY($G$21:$H$36;B2:B6;C2:E6;1;2;"allen")')
+        set_array_formula(SHEET, "R36:R41", "=PRODREGULAR($G$21:$H$36;B1:E6)")
+        set_array_formula(SHEET, "T36", '=PRODPRICEELASTICITY($G$21:$H$36;B2;C2:E2;1;2;"cross")')
+        set_array_formula(SHEET, "T37", "=PRODREGULAR($G$21:$H$36;C2:E6)")
+        recalc(DOC)
+
+    def test_least_cost_from_a_cost_model_follows_the_prices(self):
+        via_cost, via_production = get_range(SHEET, "R21:T21")[0], get_range(SHEET, "R22:T22")[0]
+        y, prices = DATA[0][1], DATA[0][2:]
+        for i, b in enumerate(EXPONENTS):
+            expected = b / NU * dual_cost(y, prices) / prices[i]  # Shephard: share x cost / price, dual of Cobb-Douglas
+            self.assert_close(via_cost[i], expected, FORMULA_TOLERANCE, "cost model, " + LABELS[i])
+            self.assert_close(via_production[i], expected, FORMULA_TOLERANCE, "production model, " + LABELS[i])
+            self.assert_close(get_cell(SHEET, "Z%d" % (21 + i)), expected, FORMULA_TOLERANCE, "prices as a column")
+
+    def test_efficient_scale_against_scipy(self):
+        import numpy as np  # python3-numpy
+        from scipy.optimize import minimize_scalar  # python3-scipy
+        prices = DATA[0][2:]
+        result = minimize_scalar(lambda ly: math.exp(translog_log_cost(math.exp(ly), prices) - ly),
+                                 bounds=(-20.0, 40.0), method="bounded", options={"xatol": 1e-12})
+        self.assertTrue(result.success)
+        self.assert_close(get_cell(SHEET, "R24"), float(np.exp(result.x)), 1e-6, "efficient scale")  # scipy
+        # NU = 1.2: increasing returns, the cost elasticity 1/NU < 1 at every output.
+        falls = "No efficient scale: average cost falls at every output in this model (increasing returns throughout)"
+        self.assertEqual(get_cell(SHEET, "R25"), falls)
+        self.assertEqual(get_cell(SHEET, "R26"), falls)
+
+    def test_price_elasticities_of_the_cobb_douglas_dual(self):
+        shares = [b / NU for b in EXPONENTS]
+        expected = [shares[0] - 1, shares[1], shares[2], shares[0], shares[1] - 1, shares[2] - 1]
+        for column, value in zip("RSTUVW", expected):  # Cobb-Douglas demand elasticities
+            self.assert_close(get_cell(SHEET, "%s28" % column), value, FORMULA_TOLERANCE, "demand " + column)
+        self.assert_close(get_cell(SHEET, "R29"), 1.0, 1e-10, "Allen from the production model")
+        self.assert_close(get_cell(SHEET, "S29"), 1.0, FORMULA_TOLERANCE, "Morishima from the cost model")
+
+    def test_translog_allen_and_regularity(self):
+        rows = dict((label, value) for label, value in TRANSLOG_COST[1:])
+        for row in range(5):
+            y, prices = DATA[row][1], DATA[row][2:]
+            ly, lw = math.log(y), [math.log(w) for w in prices]
+            s = [rows[a] + rows[a + "*output"] * ly + sum(
+                rows["%s*%s" % ((a, b) if i <= j else (b, a))] * lw[j] for j, b in enumerate(LABELS))
+                for i, a in enumerate(LABELS)]
+            allen = (rows["labour*machines"] + s[0] * s[1]) / (s[0] * s[1])  # translog Allen, cost-model formula
+            self.assert_close(get_cell(SHEET, "R%d" % (30 + row)), allen, FORMULA_TOLERANCE, "Allen, row %d" % row)
+        self.assertEqual(get_cell(SHEET, "R36"), "regularity")
+        self.assertEqual([get_cell(SHEET, "R%d" % r) for r in range(37, 42)], ["regular"] * 5)
+
+    def test_bad_input(self):
+        self.assertEqual(get_cell(SHEET, "T36"), "Error: kind: 'cross' is not a kind; use \"demand\", \"allen\" or "
+                                                 "\"morishima\"")
+        self.assertEqual(get_cell(SHEET, "T37"), "Error: inputs: has 3 columns; with a cost model give the output and "
+                                                 "then one price per input (4 columns)")
+
+
 class FunctionWizardTest(unittest.TestCase):
 
     def test_prodcostfit_is_listed_with_its_arguments(self):
@@ -211,9 +310,13 @@ class FunctionWizardTest(unittest.TestCase):
         listed = {}
         for i in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}
-            if properties.get("Name") in ("PRODCOSTFIT", "PRODCOST"):
+            if properties.get("Name") in ("PRODCOSTFIT", "PRODCOST", "PRODEFFICIENTSCALE", "PRODPRICEELASTICITY"):
                 listed[properties["Name"]] = properties
-        self.assertEqual(sorted(listed), ["PRODCOST", "PRODCOSTFIT"])
+        self.assertEqual(sorted(listed), ["PRODCOST", "PRODCOSTFIT", "PRODEFFICIENTSCALE", "PRODPRICEELASTICITY"])
+        self.assertEqual([a.Name for a in listed["PRODEFFICIENTSCALE"]["Arguments"]], ["model", "input prices"])
+        elasticity = listed["PRODPRICEELASTICITY"]["Arguments"]
+        self.assertEqual([a.Name for a in elasticity], ["model", "output", "input prices", "input i", "input j", "kind"])
+        self.assertEqual([a.IsOptional for a in elasticity], [False] * 5 + [True])
         self.assertIn("cost function", listed["PRODCOSTFIT"]["Description"])
         arguments = listed["PRODCOSTFIT"]["Arguments"]
         self.assertEqual([a.Name for a in arguments],
