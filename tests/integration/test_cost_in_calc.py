@@ -250,6 +250,9 @@ class CostDecisionsTest(CostTestCase):
         set_array_formula(SHEET, "R36:R41", "=PRODREGULAR($G$21:$H$36;B1:E6)")
         set_array_formula(SHEET, "T36", '=PRODPRICEELASTICITY($G$21:$H$36;B2;C2:E2;1;2;"cross")')
         set_array_formula(SHEET, "T37", "=PRODREGULAR($G$21:$H$36;C2:E6)")
+        set_array_formula(SHEET, "AB1:AH31", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog")')
+        set_values(SHEET, "AJ1", [[math.exp(sum(math.log(row[2 + i]) for row in DATA) / ROWS) for i in range(3)]])
+        set_array_formula(SHEET, "AJ2", "=PRODEFFICIENTSCALE(AB1:AH31;AJ1:AL1)")
         recalc(DOC)
 
     def test_least_cost_from_a_cost_model_follows_the_prices(self):
@@ -273,6 +276,10 @@ class CostDecisionsTest(CostTestCase):
         falls = "No efficient scale: average cost falls at every output in this model (increasing returns throughout)"
         self.assertEqual(get_cell(SHEET, "R25"), falls)
         self.assertEqual(get_cell(SHEET, "R26"), falls)
+
+    def test_efficient_scale_at_geometric_mean_prices_is_the_table_row(self):
+        row = [r for r in get_range(SHEET, "AB1:AH31") if r[0] == "efficient scale"][0]
+        self.assert_close(get_cell(SHEET, "AJ2"), row[1], 1e-10, "efficient scale")  # the same formula, other logs
 
     def test_price_elasticities_of_the_cobb_douglas_dual(self):
         shares = [b / NU for b in EXPONENTS]
