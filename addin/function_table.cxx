@@ -228,8 +228,11 @@ const std::vector<FunctionInfo>& functionTable()
           {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
                      "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
           {"form", "\"cobb-douglas\" (default) or \"translog\"."},
-          {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},
-          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."},
+          {"shares", "Optional cost shares of the inputs, one column per price in the same order, as many rows as "
+                     "cost, each row summing to 1 within 0.01 (fractions). Given, the cost equation and all but the "
+                     "last share equation are fitted jointly by iterated GLS (seemingly unrelated regressions)."},
+          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity; "
+                     "without shares only)."},
           levelArgument,
           {"controls", "Not available yet for cost fits; leave empty."},
           {"groups", "Not available yet for cost fits; leave empty."},

@@ -8,6 +8,7 @@
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
+#include "isoquant/period_range.hpp"
 #include "isoquant/production_model.hpp"
 #include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
@@ -60,7 +61,6 @@ void refuseLaterArguments(const CostFitArguments& arguments)
     auto refuse = [](const std::string& name) {
         throw InputError(name + ": not available yet for cost fits; leave it empty");
     };
-    if (!arguments.shares.empty()) refuse("shares");
     if (!arguments.controls.empty()) refuse("controls");
     if (!arguments.groups.empty()) refuse("groups");
     if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
@@ -77,6 +77,27 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
             throw InputError("input prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
                              "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
     }
+}
+
+// One column per price, as many rows as cost, each row summing to 1 within 0.01 (rescaled to 1,
+// as PRODINDEX does; the same tolerance).
+Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices)
+{
+    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share");
+    if (shares.values.cols() != prices)
+        throw InputError("shares: has " + std::to_string(shares.values.cols()) + " columns but input prices has " +
+                         std::to_string(prices) + "; give one share column per price, in the same order");
+    requireSameRows(cost, shares, "shares");
+    Eigen::MatrixXd rescaled = shares.values;
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row) {
+        const double sum = rescaled.row(row).sum();
+        if (!(std::fabs(sum - 1) <= shareSumTolerance * (1 + 1e-6)))
+            throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                             ": the shares sum to " + formatNumber(sum) +
+                             "; each row's cost shares must sum to 1 within 0.01 (0.99 to 1.01; fractions, not percent)");
+        rescaled.row(row) /= sum;
+    }
+    return rescaled;
 }
 
 } // namespace
@@ -103,6 +124,12 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     data.output = output.values.col(0);
     data.prices = prices.values;
     data.priceLabels = prices.labels;
+    if (!arguments.shares.empty()) {
+        if (options.covariance != CovarianceKind::classical)
+            throw InputError("errors: with shares the system is fitted by iterated GLS, whose errors are classical; "
+                             "leave errors empty or fit without shares");
+        data.shares = readCostShares(arguments.shares, cost, prices.values.cols());
+    }
     try {
         return fitCost(data, options);
     } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row

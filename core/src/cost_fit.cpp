@@ -3,6 +3,7 @@
 #include "isoquant/distributions.hpp"
 #include "isoquant/exact_elementwise.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/math/fits/cost_share_system.hpp"
 #include "isoquant/text.hpp"
 #include "isoquant/translog_fit.hpp"
 #include "isoquant/work_limits.hpp"
@@ -28,6 +29,8 @@ struct NormalisedRegression {
     Eigen::MatrixXd design;
     Eigen::VectorXd response;
     std::vector<std::string> termNames;
+    Eigen::MatrixXd relativeLogPrices; // ln(wᵢ/w_k), i < k: the share equations' terms
+    Eigen::VectorXd logOutput;
 };
 
 NormalisedRegression normalisedRegression(const CostData& data, CostForm form)
@@ -39,6 +42,8 @@ NormalisedRegression normalisedRegression(const CostData& data, CostForm form)
     const Eigen::MatrixXd relative = logPrices.leftCols(k - 1).colwise() - logPrices.col(k - 1); // ln(wᵢ/w_k)
     const auto lastLabel = data.priceLabels.back();
     NormalisedRegression regression;
+    regression.relativeLogPrices = relative;
+    regression.logOutput = logOutput;
     regression.response = exactLog(data.cost.array()).matrix() - logPrices.col(k - 1);
     std::vector<Eigen::VectorXd> columns{Eigen::VectorXd::Ones(n), logOutput};
     regression.termNames = {"the constant", "ln output"};
@@ -230,7 +235,12 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     fit.priceLabels = data.priceLabels;
     ProductionFit& summary = fit.summary;
     try {
-        summary.regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
+        if (data.shares.size() == 0)
+            summary.regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
+        else
+            summary.regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
+                                                    normalised.logOutput, data.shares, options.form,
+                                                    options.confidenceLevel);
     } catch (const CollinearColumns& collinear) {
         std::string names;
         const auto& columns = collinear.columns();

@@ -24,6 +24,9 @@ Sources of the expected figures, named beside each check:
   here; Brent's minimum of a smooth function is located to about sqrt(machine epsilon) in ln y, so
   the output agrees to 1e-6 relative.
 Formula recomputations agree to 1e-12 relative (the same logs and exponentials in another order).
+- "numpy SUR": tests/reference/cost_sur_check.py's own restricted iterated SUR (numpy, restrictions
+  through the bordered normal equations, in the unnormalised parameters), run here on the sheet's
+  data; both iterations stop at 1e-10 relative change, so 1e-7 relative (as the C++ cross-check).
 - Error messages: the wording in core/src/cost_cell_functions.cpp and numeric_range.cpp, which the
   add-in prefixes with "Error: ".
 """
@@ -75,6 +78,20 @@ def laundries():
 
 
 DATA = laundries()
+
+
+def laundry_shares():
+    """Cost shares of each branch: the Cobb-Douglas dual's b_i/nu plus noise (SD 0.01, seeded), the
+    last one 1 minus the others."""
+    generator = random.Random(20261203)
+    rows = []
+    for _ in range(ROWS):
+        first = [b / NU + generator.gauss(0, 0.01) for b in EXPONENTS[:2]]
+        rows.append(first + [1 - sum(first)])
+    return rows
+
+
+SHARES = laundry_shares()
 TYPED_COST = [["form", "cobb-douglas cost"],
               ["constant", math.log(NU) - math.log(SCALE) / NU - sum(b / NU * math.log(b) for b in EXPONENTS)],
               ["output", 1 / NU]] + [[label, b / NU] for label, b in zip(LABELS, EXPONENTS)]
@@ -97,6 +114,7 @@ def setUpModule():
         set_values(sheet, "G1", TYPED_COST)                            # G1:H6
         set_values(sheet, "G11", TYPED_PRODUCTION)                     # G11:H15
         set_values(sheet, "G21", TRANSLOG_COST)                        # G21:H36
+        set_values(sheet, "AN1", [[label + " share" for label in LABELS]] + SHARES)  # AN1:AP31
 
     OFFICE, DOC = start_module_office(OXT, prepare)
     SHEET = DOC.Sheets.getByIndex(0)
@@ -161,6 +179,36 @@ class CostFitTableTest(CostTestCase):
         self.assertEqual([row[0] for row in self.translog[-6:]],
                          ["cost elasticity", "returns to scale", "verdict", "efficient scale", "form", "smearing factor"])
         self.assertEqual(self.translog[-2][1], "translog cost")
+
+
+class CostSharesTest(CostTestCase):
+    """PRODCOSTFIT with shares: the cost and share equations by iterated SUR."""
+
+    @classmethod
+    def setUpClass(cls):
+        set_array_formula(SHEET, "AR1:AX31", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AP31)')
+        set_array_formula(SHEET, "AR41", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AO31)')
+        recalc(DOC)
+        cls.table = get_range(SHEET, "AR1:AX31")
+
+    def test_estimates_against_numpy_sur(self):
+        import numpy as np  # python3-numpy
+        sys.path.insert(0, os.path.join(REPO, "tests", "reference"))
+        import cost_sur_check
+        data, shares = np.array(DATA), np.array(SHARES)
+        design, share_designs, restrictions, targets = cost_sur_check.system(
+            np, True, np.log(data[:, 1]), np.log(data[:, 2:5]))
+        theta, covariance, _, llf = cost_sur_check.iterated_sur(
+            np, [design] + share_designs[:2], [np.log(data[:, 0])] + [shares[:, 0], shares[:, 1]], restrictions, targets)
+        for row, value, variance in zip(self.table[1:17], theta, np.diag(covariance)):
+            self.assert_close(row[1], float(value), 1e-7, row[0])  # numpy SUR
+            self.assert_close(row[2], math.sqrt(variance), 1e-7, row[0] + " std. error")  # numpy SUR
+        rows = {row[0]: row for row in self.table[17:] if row[0]}
+        self.assert_close(rows["log-likelihood"][1], llf, 1e-7, "system log-likelihood")  # numpy SUR
+
+    def test_shares_must_match_the_prices(self):
+        self.assertEqual(get_cell(SHEET, "AR41"), "Error: shares: has 2 columns but input prices has 3; give one share "
+                                                  "column per price, in the same order")
 
 
 class CostModelTest(CostTestCase):

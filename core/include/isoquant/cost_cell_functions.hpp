@@ -7,9 +7,10 @@
 
 namespace isoquant {
 
-// The arguments of PRODCOSTFIT as the user gave them. `shares`, `controls`, `groups`, `effects`,
-// `trend` and `incomplete rows` are part of the signature but not yet available: given, they are
-// refused with a message saying so.
+// The arguments of PRODCOSTFIT as the user gave them. `controls`, `groups`, `effects`, `trend` and
+// `incomplete rows` are part of the signature but not yet available: given, they are refused with a
+// message saying so. `shares` (one column per price, rows summing to 1 within 0.01, rescaled to 1)
+// fits the cost and share equations jointly (cost_share_system.hpp), with classical errors only.
 struct CostFitArguments {
     CellTable cost;
     CellTable output;

@@ -48,6 +48,9 @@ struct CostData {
     Eigen::VectorXd output; // n values, positive
     Eigen::MatrixXd prices; // n × k, positive
     std::vector<std::string> priceLabels; // the inputs' labels
+    // n × k cost shares, rows summing to 1: the share equations join the cost equation
+    // (cost_share_system.hpp); empty: least squares on the cost equation alone.
+    Eigen::MatrixXd shares;
 };
 
 struct CostFitOptions {

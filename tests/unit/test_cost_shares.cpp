@@ -1,0 +1,132 @@
+// PRODCOSTFIT with `shares`: invariance of the iterated SUR estimate to the share left out (shown
+// here by reordering the inputs, so that another share is last and another price the numeraire;
+// the estimate is maximum likelihood, which does not depend on either: Barten 1969, from memory),
+// and the messages for bad shares. The agreement with an independent numpy implementation on
+// published data is in test_cost_sur_cross_check.cpp. Invented data, seeded.
+#include "isoquant/cost_cell_functions.hpp"
+#include "cell_tables.hpp"
+#include "input_error_message.hpp"
+#include "relative_error.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+#include <cmath>
+#include <random>
+
+using isoquant::CellTable;
+using isoquant::testing::closeTo;
+using isoquant::testing::messageOf;
+using isoquant::testing::numberRange;
+
+namespace {
+
+const std::vector<std::string> labels{"labour", "machines", "energy"};
+
+// 60 laundries from an invented translog cost function (homogeneous in prices), ln C and each
+// share with normal noise (SD 0.03 and 0.01; the last share is 1 minus the others).
+isoquant::CostFitArguments laundries(const std::vector<int>& order)
+{
+    const Eigen::Vector3d first(0.35, 0.3, 0.35), byOutput(0.005, -0.002, -0.003);
+    Eigen::Matrix3d pairs;
+    pairs << 0.04, -0.02, -0.02, -0.02, 0.03, -0.01, -0.02, -0.01, 0.03;
+    std::mt19937 engine(20261202);
+    std::uniform_real_distribution<double> logOutput(std::log(2000.0), std::log(60000.0)), logPrice(-1.0, 1.5);
+    std::normal_distribution<double> costNoise(0.0, 0.03), shareNoise(0.0, 0.01);
+    const int n = 60;
+    Eigen::MatrixXd cost(n, 1), output(n, 1), prices(n, 3), shares(n, 3);
+    for (int row = 0; row < n; ++row) {
+        const double ly = logOutput(engine);
+        Eigen::Vector3d lw;
+        for (int i = 0; i < 3; ++i) lw(i) = logPrice(engine);
+        Eigen::Vector3d s = first + pairs * lw + byOutput * ly;
+        s(0) += shareNoise(engine);
+        s(1) += shareNoise(engine);
+        s(2) = 1 - s(0) - s(1);
+        const double logCost = -1.5 + 0.4 * ly + 0.03 * ly * ly + first.dot(lw) + 0.5 * lw.dot(pairs * lw) + ly * byOutput.dot(lw);
+        cost(row, 0) = std::exp(logCost + costNoise(engine));
+        output(row, 0) = std::exp(ly);
+        for (int i = 0; i < 3; ++i) {
+            prices(row, i) = std::exp(lw(order[static_cast<std::size_t>(i)]));
+            shares(row, i) = s(order[static_cast<std::size_t>(i)]);
+        }
+    }
+    std::vector<std::string> ordered, shareLabels;
+    for (const int i : order) {
+        ordered.push_back(labels[static_cast<std::size_t>(i)]);
+        shareLabels.push_back(labels[static_cast<std::size_t>(i)] + " share");
+    }
+    isoquant::CostFitArguments arguments;
+    arguments.cost = numberRange(cost, {"cost"});
+    arguments.output = numberRange(output, {"washes"});
+    arguments.prices = numberRange(prices, ordered);
+    arguments.shares = numberRange(shares, shareLabels);
+    arguments.form = std::string("translog");
+    return arguments;
+}
+
+// The value in the row labelled `label`, or `a*b` written `b*a`.
+double rowValue(const CellTable& table, const std::string& label, std::size_t column = 1)
+{
+    const auto star = label.find('*');
+    const std::string swapped = star == std::string::npos ? label : label.substr(star + 1) + "*" + label.substr(0, star);
+    for (std::size_t row = 0; row < table.rows(); ++row)
+        if (table.isText(row, 0) && (table.text(row, 0) == label || table.text(row, 0) == swapped) &&
+            table.isNumber(row, column))
+            return table.number(row, column);
+    return std::nan("");
+}
+
+CellTable fittedTable(const isoquant::CostFitArguments& arguments)
+{
+    return isoquant::costFitTable(isoquant::costFitFromArguments(arguments));
+}
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(cost_shares)
+
+// Iterated to 1e-10 relative change, the two fits meet to about 1e-9; 1e-7 relative on every
+// estimate and standard error, and on the log-likelihood.
+BOOST_AUTO_TEST_CASE(share_system_does_not_depend_on_the_share_left_out)
+{
+    const CellTable original = fittedTable(laundries({0, 1, 2}));
+    const CellTable reordered = fittedTable(laundries({2, 0, 1}));
+    std::vector<std::string> rows{"constant", "output", "output*output", "log-likelihood", "R2", "cost elasticity"};
+    for (const auto& a : labels) {
+        rows.push_back(a);
+        rows.push_back(a + "*output");
+        for (const auto& b : labels) rows.push_back(a + "*" + b);
+    }
+    for (const auto& label : rows) {
+        BOOST_TEST(closeTo(rowValue(reordered, label), rowValue(original, label), 1e-7), label);
+        if (label.find('*') != std::string::npos || label == "constant")
+            BOOST_TEST(closeTo(rowValue(reordered, label, 2), rowValue(original, label, 2), 1e-7), label << " se");
+    }
+    // The shares carry information: the system's standard error of a price coefficient is below
+    // that of least squares on the cost equation alone (the point of adding them).
+    isoquant::CostFitArguments alone = laundries({0, 1, 2});
+    alone.shares = CellTable();
+    BOOST_TEST(rowValue(original, "labour", 2) < rowValue(fittedTable(alone), "labour", 2));
+}
+
+BOOST_AUTO_TEST_CASE(bad_shares_name_the_argument_and_row)
+{
+    auto arguments = laundries({0, 1, 2});
+    arguments.shares = numberRange(Eigen::MatrixXd::Constant(60, 2, 0.5));
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
+               "shares: has 2 columns but input prices has 3; give one share column per price, in the same order");
+    arguments = laundries({0, 1, 2});
+    arguments.shares.set(4, 1, 0.9); // row 5 of the range: header, then data row 4
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }).rfind("shares: row 5: the shares sum to ", 0) == 0);
+    arguments = laundries({0, 1, 2});
+    arguments.shares = numberRange(Eigen::MatrixXd::Constant(59, 3, 1.0 / 3));
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
+               "shares: has 59 rows of data but cost has 60 rows");
+    arguments = laundries({0, 1, 2});
+    arguments.errors = std::string("hc1");
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
+               "errors: with shares the system is fitted by iterated GLS, whose errors are classical; leave errors "
+               "empty or fit without shares");
+}
+
+BOOST_AUTO_TEST_SUITE_END()
