@@ -131,7 +131,9 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         data.shares = readCostShares(arguments.shares, cost, prices.values.cols());
     }
     try {
-        return fitCost(data, options);
+        CostFit fit = fitCost(data, options);
+        fit.firstDataRow = cost.firstDataRow();
+        return fit;
     } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
         throw InputError("errors: row " + std::to_string(static_cast<std::size_t>(leverage.row()) + cost.firstDataRow()) +
                          " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");

@@ -214,6 +214,24 @@ void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
     returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, level, false);
 }
 
+// sᵢ = βᵢ + Σⱼ βᵢⱼ ln wⱼ + βᵢ_y ln y at every row, from θ in table order.
+CostRegularityTally regularityOf(const CostFit& fit, const CostData& data)
+{
+    const Eigen::Index k = data.prices.cols();
+    const Eigen::VectorXd& theta = fit.summary.estimates;
+    Eigen::MatrixXd interactions = Eigen::MatrixXd::Zero(k, k);
+    Eigen::VectorXd byOutput = Eigen::VectorXd::Zero(k);
+    if (fit.form == CostForm::translog) {
+        Eigen::Index at = 3 + k;
+        for (const auto& [i, j] : translogPairs(k)) interactions(i, j) = interactions(j, i) = theta(at++);
+        byOutput = theta.tail(k);
+    }
+    const Eigen::MatrixXd logPrices = exactLog(data.prices.array()).matrix();
+    Eigen::MatrixXd shares = logPrices * interactions + exactLog(data.output.array()).matrix() * byOutput.transpose();
+    shares.rowwise() += theta.segment(2, k).transpose();
+    return tallyCostRegularity(shares, interactions, data.priceLabels);
+}
+
 } // namespace
 
 CostFit fitCost(const CostData& data, const CostFitOptions& options)
@@ -267,6 +285,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     fit.meanLogPrices = exactLog(data.prices.array()).matrix().colwise().mean().transpose();
     setReturnsToScale(fit, degreesOfFreedom, options.confidenceLevel);
     fit.efficientScale = efficientScaleOf(fit, degreesOfFreedom, options.confidenceLevel);
+    fit.regularity = regularityOf(fit, data);
     return fit;
 }
 

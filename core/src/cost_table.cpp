@@ -7,7 +7,7 @@ namespace isoquant {
 std::size_t costFitTableRows(CostForm form, std::size_t prices)
 {
     const std::size_t secondOrder = form == CostForm::translog ? 1 + prices * (prices + 1) / 2 + prices : 0;
-    return prices + 18 + secondOrder;
+    return prices + 19 + secondOrder;
 }
 
 namespace {
@@ -23,6 +23,14 @@ std::string costFormNote(const CostFit& fit)
         add("note: the cost elasticity does not rise with output (output*output is not positive), so average cost "
             "has no lowest point and there is no efficient scale");
     return note;
+}
+
+// "regular at every row", or the first irregular row and what fails there.
+std::string regularityNote(const CostFit& fit)
+{
+    if (!fit.regularity.firstRow) return "regular at every row";
+    return "first: row " + std::to_string(static_cast<std::size_t>(*fit.regularity.firstRow) + fit.firstDataRow) + " (" +
+           fit.regularity.firstPhrase + ")";
 }
 
 } // namespace
@@ -57,6 +65,7 @@ CellTable costFitTable(const CostFit& fit)
     } else {
         writer.textRow(efficientScaleLabel, {notAvailableText});
     }
+    writer.put(costRegularityLabel, {static_cast<double>(fit.regularity.irregularRows), regularityNote(fit)});
     writer.textRow(formLabel, {translog ? translogCostWord : cobbDouglasCostWord, costFormNote(fit)});
     writer.valueRow(smearingLabel, summary.smearingFactor);
     return writer.finish();

@@ -133,15 +133,15 @@ class CostTestCase(unittest.TestCase):
 
 
 class CostFitTableTest(CostTestCase):
-    """PRODCOSTFIT over 7 columns: Cobb-Douglas k + 18 = 21 rows, translog 2k + k(k+1)/2 + 19 = 31."""
+    """PRODCOSTFIT over 7 columns: Cobb-Douglas k + 19 = 22 rows, translog 2k + k(k+1)/2 + 20 = 32."""
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J1:P21", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
-        set_array_formula(SHEET, "J31:P61", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
+        set_array_formula(SHEET, "J1:P22", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(SHEET, "J31:P62", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
         recalc(DOC)
-        cls.table = get_range(SHEET, "J1:P21")
-        cls.translog = get_range(SHEET, "J31:P61")
+        cls.table = get_range(SHEET, "J1:P22")
+        cls.translog = get_range(SHEET, "J31:P62")
 
     def test_cobb_douglas_layout(self):
         self.assertEqual(self.table[0], ["Cobb-Douglas cost fit", "value", "std. error", "t", "p-value",
@@ -149,13 +149,15 @@ class CostFitTableTest(CostTestCase):
         self.assertEqual([row[0] for row in self.table[1:]],
                          ["constant", "output"] + LABELS + ["", "observations", "R2", "adjusted R2", "residual SD",
                           "F (slopes = 0)", "log-likelihood", "AIC", "BIC", "cost elasticity", "returns to scale",
-                          "verdict", "efficient scale", "form", "smearing factor"])
+                          "verdict", "efficient scale", "regularity", "form", "smearing factor"])
         rows = {row[0]: row for row in self.table[1:] if row[0]}
         self.assertEqual(rows["observations"][1], float(ROWS))
         self.assertEqual(rows["efficient scale"][1], "n/a")
         self.assertEqual(rows["form"][1], "cobb-douglas cost")
         self.assertIn("no efficient scale", rows["form"][2])
         self.assertIn(rows["verdict"][1], ("increasing", "constant", "decreasing"))
+        # Positive price coefficients: every fitted share positive, M = s s' - diag(s) negative semidefinite.
+        self.assertEqual(rows["regularity"][1:3], [0.0, "regular at every row"])
 
     def test_cobb_douglas_estimates_against_numpy(self):
         import numpy as np  # python3-numpy
@@ -176,8 +178,9 @@ class CostFitTableTest(CostTestCase):
         self.assertEqual([row[0] for row in self.translog[1:17]],
                          ["constant", "output"] + LABELS + ["output*output"] + pairs +
                          ["%s*output" % label for label in LABELS] + [""])
-        self.assertEqual([row[0] for row in self.translog[-6:]],
-                         ["cost elasticity", "returns to scale", "verdict", "efficient scale", "form", "smearing factor"])
+        self.assertEqual([row[0] for row in self.translog[-7:]],
+                         ["cost elasticity", "returns to scale", "verdict", "efficient scale", "regularity", "form",
+                          "smearing factor"])
         self.assertEqual(self.translog[-2][1], "translog cost")
 
 
@@ -186,10 +189,10 @@ class CostSharesTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "AR1:AX31", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AP31)')
+        set_array_formula(SHEET, "AR1:AX32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AP31)')
         set_array_formula(SHEET, "AR41", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AO31)')
         recalc(DOC)
-        cls.table = get_range(SHEET, "AR1:AX31")
+        cls.table = get_range(SHEET, "AR1:AX32")
 
     def test_estimates_against_numpy_sur(self):
         import numpy as np  # python3-numpy
@@ -216,9 +219,9 @@ class CostModelTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J81:P101", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(SHEET, "J81:P102", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
         for column, word in zip("RSTUV", WORDS):
-            set_array_formula(SHEET, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$101;B2:B6;C2:E6;"%s")' % word)
+            set_array_formula(SHEET, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$102;B2:B6;C2:E6;"%s")' % word)
             set_array_formula(SHEET, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
             set_array_formula(SHEET, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
         set_array_formula(SHEET, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
@@ -255,9 +258,9 @@ class CostBadInputTest(CostTestCase):
     def test_messages_name_argument_and_row(self):
         set_values(SHEET, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
         set_values(SHEET, "A44", [[0.0]])
-        set_array_formula(SHEET, "J111:P131", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
-        set_array_formula(SHEET, "J141:P161", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
-        set_array_formula(SHEET, "J171:P191", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
+        set_array_formula(SHEET, "J111:P132", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
+        set_array_formula(SHEET, "J141:P162", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
+        set_array_formula(SHEET, "J171:P192", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
         recalc(DOC)
         self.assertEqual(get_cell(SHEET, "J111"), "Error: cost: row 4 is 0; logs need positive values")
         self.assertEqual(get_cell(SHEET, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
@@ -298,9 +301,9 @@ class CostDecisionsTest(CostTestCase):
         set_array_formula(SHEET, "R36:R41", "=PRODREGULAR($G$21:$H$36;B1:E6)")
         set_array_formula(SHEET, "T36", '=PRODPRICEELASTICITY($G$21:$H$36;B2;C2:E2;1;2;"cross")')
         set_array_formula(SHEET, "T37", "=PRODREGULAR($G$21:$H$36;C2:E6)")
-        set_array_formula(SHEET, "AB1:AH31", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog")')
+        set_array_formula(SHEET, "AB1:AH32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog")')
         set_values(SHEET, "AJ1", [[math.exp(sum(math.log(row[2 + i]) for row in DATA) / ROWS) for i in range(3)]])
-        set_array_formula(SHEET, "AJ2", "=PRODEFFICIENTSCALE(AB1:AH31;AJ1:AL1)")
+        set_array_formula(SHEET, "AJ2", "=PRODEFFICIENTSCALE(AB1:AH32;AJ1:AL1)")
         recalc(DOC)
 
     def test_least_cost_from_a_cost_model_follows_the_prices(self):
@@ -326,7 +329,7 @@ class CostDecisionsTest(CostTestCase):
         self.assertEqual(get_cell(SHEET, "R26"), falls)
 
     def test_efficient_scale_at_geometric_mean_prices_is_the_table_row(self):
-        row = [r for r in get_range(SHEET, "AB1:AH31") if r[0] == "efficient scale"][0]
+        row = [r for r in get_range(SHEET, "AB1:AH32") if r[0] == "efficient scale"][0]
         self.assert_close(get_cell(SHEET, "AJ2"), row[1], 1e-10, "efficient scale")  # the same formula, other logs
 
     def test_price_elasticities_of_the_cobb_douglas_dual(self):

@@ -4,6 +4,7 @@
 // and the messages for bad shares. The agreement with an independent numpy implementation on
 // published data is in test_cost_sur_cross_check.cpp. Invented data, seeded.
 #include "isoquant/cost_cell_functions.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "relative_error.hpp"
@@ -127,6 +128,49 @@ BOOST_AUTO_TEST_CASE(bad_shares_name_the_argument_and_row)
     BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
                "errors: with shares the system is fitted by iterated GLS, whose errors are classical; leave errors "
                "empty or fit without shares");
+}
+
+BOOST_AUTO_TEST_SUITE_END()
+
+BOOST_AUTO_TEST_SUITE(cost_table_regularity)
+
+// The table's `regularity` row counts the rows that PRODREGULAR over the same table calls
+// irregular, and names the first. Data (invented, seeded) from a two-price translog cost function
+// with βᵢᵢ = 0.2, s₁ = 0.5 + 0.2·ln(w₁/w₂): concave in prices where s₁s₂ ≥ 0.2 (shares near
+// equal), not concave (or a share negative) where the prices differ much, so some rows pass and
+// some fail.
+BOOST_AUTO_TEST_CASE(regularity_row_agrees_with_prodregular)
+{
+    std::mt19937 engine(7);
+    std::uniform_real_distribution<double> logOutput(0.0, 5.0), logPrice(-2.5, 2.5);
+    std::normal_distribution<double> noise(0.0, 0.005);
+    const int n = 40;
+    Eigen::MatrixXd cost(n, 1), output(n, 1), prices(n, 2), rows(n, 3);
+    for (int row = 0; row < n; ++row) {
+        const double ly = logOutput(engine), l1 = logPrice(engine), l2 = logPrice(engine);
+        const double logCost = 0.2 + 0.9 * ly + 0.05 * ly * ly + 0.5 * l1 + 0.5 * l2 + 0.5 * 0.2 * (l1 - l2) * (l1 - l2);
+        cost(row, 0) = std::exp(logCost + noise(engine));
+        output(row, 0) = std::exp(ly);
+        prices(row, 0) = std::exp(l1);
+        prices(row, 1) = std::exp(l2);
+        rows.row(row) << output(row, 0), prices(row, 0), prices(row, 1);
+    }
+    isoquant::CostFitArguments arguments;
+    arguments.cost = numberRange(cost, {"cost"});
+    arguments.output = numberRange(output, {"washes"});
+    arguments.prices = numberRange(prices, {"labour", "energy"});
+    arguments.form = std::string("translog");
+    const CellTable table = fittedTable(arguments);
+    const CellTable perRow = isoquant::regularityAnyColumn(table, numberRange(rows, {"washes", "labour", "energy"}));
+    std::size_t irregular = 0, first = 0;
+    for (std::size_t row = 1; row < perRow.rows(); ++row)
+        if (perRow.text(row, 0) != "regular" && irregular++ == 0) first = row + 1; // range row, header = 1
+    BOOST_TEST_REQUIRE(irregular > 0u);
+    BOOST_TEST_REQUIRE(irregular < static_cast<std::size_t>(n));
+    BOOST_TEST(rowValue(table, "regularity") == static_cast<double>(irregular));
+    for (std::size_t row = 0; row < table.rows(); ++row)
+        if (table.isText(row, 0) && table.text(row, 0) == "regularity")
+            BOOST_TEST(table.text(row, 2).rfind("first: row " + std::to_string(first) + " (", 0) == 0u);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -21,6 +21,7 @@
 #pragma once
 
 #include "isoquant/cells.hpp"
+#include "isoquant/math/forms/cost_duality.hpp"
 #include "isoquant/production_fit.hpp"
 
 #include <Eigen/Dense>
@@ -42,6 +43,7 @@ inline constexpr const char* costConstantLabel = "constant";
 inline constexpr const char* costOutputLabel = "output";
 inline constexpr const char* costElasticityLabel = "cost elasticity";
 inline constexpr const char* efficientScaleLabel = "efficient scale";
+inline constexpr const char* costRegularityLabel = "regularity";
 
 struct CostData {
     Eigen::VectorXd cost;   // n values, positive
@@ -71,6 +73,10 @@ struct CostFit {
     double meanLogOutput = 0;
     // Translog with β_yy > 0: y* and its standard error; empty otherwise.
     std::optional<ParameterEstimate> efficientScale;
+    // The rows (of the data) whose fitted shares sᵢ = ∂ln C/∂ln wᵢ are not all positive or whose
+    // cost is not concave in prices (cost_duality.hpp); the first row counted from the range's top.
+    CostRegularityTally regularity;
+    std::size_t firstDataRow = 1; // of the ranges, 1-based, for naming the first irregular row
 };
 
 // The labels of the translog's second-order rows: "output*output", "<i>*<j>" (i ≤ j), "<i>*output".
@@ -82,8 +88,8 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options);
 // PRODCOSTFIT's table (7 columns). Rows: the header; constant; output; one per price (k); for the
 // translog output*output, k(k+1)/2 price pairs and k price*output rows; an empty row; observations,
 // R2, adjusted R2, residual SD, F (slopes = 0), log-likelihood, AIC, BIC; cost elasticity; returns
-// to scale; verdict; efficient scale; form; smearing factor. Cobb-Douglas: k + 18 rows; translog:
-// 2k + k(k+1)/2 + 19 rows.
+// to scale; verdict; efficient scale; regularity; form; smearing factor. Cobb-Douglas: k + 19 rows;
+// translog: 2k + k(k+1)/2 + 20 rows.
 std::size_t costFitTableRows(CostForm form, std::size_t prices);
 CellTable costFitTable(const CostFit& fit);
 

@@ -80,6 +80,21 @@ std::string costRegularityPhrase(const Eigen::VectorXd& shares, const Eigen::Mat
     return phrase.empty() ? "regular" : phrase;
 }
 
+CostRegularityTally tallyCostRegularity(const Eigen::MatrixXd& fittedShares, const Eigen::MatrixXd& interactions,
+                                        const std::vector<std::string>& labels)
+{
+    CostRegularityTally tally;
+    for (Eigen::Index row = 0; row < fittedShares.rows(); ++row) {
+        const std::string phrase = costRegularityPhrase(fittedShares.row(row).transpose(), interactions, labels);
+        if (phrase == "regular") continue;
+        if (tally.irregularRows++ == 0) {
+            tally.firstRow = row;
+            tally.firstPhrase = phrase;
+        }
+    }
+    return tally;
+}
+
 EfficientScale efficientScaleOfLogQuadratic(double elasticityAtUnitOutput, double elasticitySlope)
 {
     if (elasticitySlope > 0) {

@@ -43,6 +43,16 @@ struct CostRegularityOptions {
 std::string costRegularityPhrase(const Eigen::VectorXd& shares, const Eigen::MatrixXd& interactions,
                                  const std::vector<std::string>& labels, const CostRegularityOptions& options = {});
 
+// PRODCOSTFIT's `regularity` row: how many rows of fitted shares (n × k) are not regular, and the
+// first such row (0-based) with its phrase.
+struct CostRegularityTally {
+    std::size_t irregularRows = 0;
+    std::optional<Eigen::Index> firstRow;
+    std::string firstPhrase;
+};
+CostRegularityTally tallyCostRegularity(const Eigen::MatrixXd& fittedShares, const Eigen::MatrixXd& interactions,
+                                        const std::vector<std::string>& labels);
+
 // The output where average cost is lowest for ln C with cost elasticity ε(y) = a + b·ln y
 // (a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy): ε = 1 at ln y* = (1 − a)/b, a minimum of C/y when b > 0.
 // Otherwise the sentence saying why there is none.
