@@ -122,11 +122,17 @@ constexpr double lowestLogOutput = -9 * 2.302585092994046, highestLogOutput = 9 
 constexpr int gridSteps = 72;
 constexpr int bisections = 80; // halves a step of 0.58 in ln y to below 1e-16 relative
 
+// ε of the least-cost plan for output e^logOutput; empty where there is none (no solution, or a
+// plan beyond what a cell holds at the ends of the grid).
 std::optional<double> planElasticity(const CellTable& model, double logOutput, const CellTable& prices)
 {
-    const CellTable figure = costCell(model, Cell(std::exp(logOutput)), prices, Cell(std::string("cost elasticity")));
-    if (!figure.isNumber(0, 0) || !std::isfinite(figure.number(0, 0))) return std::nullopt;
-    return figure.number(0, 0);
+    try {
+        const CellTable figure = costCell(model, Cell(std::exp(logOutput)), prices, Cell(std::string("cost elasticity")));
+        if (!figure.isNumber(0, 0) || !std::isfinite(figure.number(0, 0))) return std::nullopt;
+        return figure.number(0, 0);
+    } catch (const InputError&) {
+        return std::nullopt;
+    }
 }
 
 CellTable productionEfficientScale(const CellTable& model, const CellTable& priceRange)
