@@ -89,6 +89,12 @@ Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cos
                          std::to_string(prices) + "; give one share column per price, in the same order");
     requireSameRows(cost, shares, "shares");
     Eigen::MatrixXd rescaled = shares.values;
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row)
+        for (Eigen::Index column = 0; column < prices; ++column)
+            if (rescaled(row, column) < 0)
+                throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                                 ", column " + std::to_string(column + 1) + " is " + formatNumber(rescaled(row, column)) +
+                                 "; a cost share cannot be negative");
     for (Eigen::Index row = 0; row < rescaled.rows(); ++row) {
         const double sum = rescaled.row(row).sum();
         if (!(std::fabs(sum - 1) <= shareSumTolerance * (1 + 1e-6)))

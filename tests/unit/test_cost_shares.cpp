@@ -124,6 +124,11 @@ BOOST_AUTO_TEST_CASE(bad_shares_name_the_argument_and_row)
     BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
                "shares: has 59 rows of data but cost has 60 rows");
     arguments = laundries({0, 1, 2});
+    arguments.shares.set(3, 0, -0.2);
+    arguments.shares.set(3, 2, 1.2 - arguments.shares.number(3, 1));
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
+               "shares: row 4, column 1 is -0.2; a cost share cannot be negative");
+    arguments = laundries({0, 1, 2});
     arguments.errors = std::string("hc1");
     BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(arguments); }) ==
                "errors: with shares the system is fitted by iterated GLS, whose errors are classical; leave errors "

@@ -84,8 +84,9 @@ SystemFit iteratedSeeminglyUnrelated(const std::vector<Eigen::MatrixXd>& designs
     fit.disturbanceCovariance = fit.residuals.transpose() * fit.residuals / n;
     normal = normalEquations(designs, responses, fit.disturbanceCovariance.inverse());
     fit.covariance = normal.matrix.inverse();
-    fit.logLikelihood = -0.5 * n * static_cast<double>(m) * (1.0 + std::log(twoPi)) -
-                        0.5 * n * std::log(fit.disturbanceCovariance.determinant());
+    // ln|Σ| as the sum of the logs of LDLᵀ's pivots: a determinant of tiny residuals' Σ could underflow.
+    const double logDeterminant = fit.disturbanceCovariance.ldlt().vectorD().array().log().sum();
+    fit.logLikelihood = -0.5 * n * static_cast<double>(m) * (1.0 + std::log(twoPi)) - 0.5 * n * logDeterminant;
     return fit;
 }
 
