@@ -188,6 +188,20 @@ BOOST_AUTO_TEST_CASE(allen_and_morishima_agree_across_duality)
     BOOST_TEST(closeTo(cesMorishima, 2.0 / 3.0, 1e-9));
 }
 
+// Demand elasticities by duality from the Cobb-Douglas production model: with cost shares
+// sⱼ = bⱼ/ν and Allen elasticity 1, ηᵢⱼ = sⱼ and ηᵢᵢ = sᵢ − 1, as from its exact dual cost model.
+BOOST_AUTO_TEST_CASE(demand_elasticities_by_duality_from_a_production_model)
+{
+    const Eigen::Vector2d prices(18.0, 45.0);
+    const double shares[2] = {0.45 / 0.8, 0.35 / 0.8};
+    for (int i = 1; i <= 2; ++i)
+        for (int j = 1; j <= 2; ++j) {
+            const double expected = shares[j - 1] - (i == j ? 1.0 : 0.0);
+            BOOST_TEST(closeTo(elasticity(cobbDouglasProduction(), 250.0, prices, i, j, "demand"), expected, dualityTolerance));
+            BOOST_TEST(closeTo(elasticity(cobbDouglasDual(), 250.0, prices, i, j, "demand"), expected, dualityTolerance));
+        }
+}
+
 // The efficient scale of a translog cost model is where the cost elasticity is 1, and average cost
 // is higher 1% either side; for a translog production model whose returns fall with size, the same.
 BOOST_AUTO_TEST_CASE(efficient_scale_is_the_bottom_of_average_cost)
