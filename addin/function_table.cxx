@@ -238,7 +238,8 @@ const std::vector<FunctionInfo>& functionTable()
           {"groups", "Not available yet for cost fits; leave empty."},
           {"effects", "Not available yet for cost fits; leave empty."},
           {"trend", "Not available yet for cost fits; leave empty."},
-          {"incomplete rows", "Not available yet for cost fits; leave empty."}}},
+          {"incomplete rows", "TRUE to leave out rows with a blank or text cell in cost, output, input prices or "
+                              "shares (the table counts them); FALSE or empty: such a cell is an error."}}},
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",

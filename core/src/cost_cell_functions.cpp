@@ -9,10 +9,12 @@
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
 #include "isoquant/period_range.hpp"
+#include "isoquant/sheet/arguments/incomplete_rows.hpp"
 #include "isoquant/production_model.hpp"
 #include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 namespace isoquant {
@@ -36,9 +38,10 @@ void requireSameRows(const NumericColumns& cost, const NumericColumns& other, co
                          rowsText(cost.values.rows()));
 }
 
-NumericColumns readOneColumn(const CellTable& range, const std::string& name)
+NumericColumns readOneColumn(const CellTable& range, const std::string& name,
+                             const std::vector<bool>* skippedRows = nullptr)
 {
-    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name);
+    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name, skippedRows);
     if (column.values.cols() != 1)
         throw InputError(name + ": must be one column; it has " + std::to_string(column.values.cols()));
     return column;
@@ -65,7 +68,6 @@ void refuseLaterArguments(const CostFitArguments& arguments)
     if (!arguments.groups.empty()) refuse("groups");
     if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
     if (!arguments.trend.empty()) refuse("trend");
-    if (readSwitchArgument(arguments.incompleteRows, "incomplete rows")) refuse("incomplete rows");
 }
 
 void refuseReservedLabels(const std::vector<std::string>& labels)
@@ -81,9 +83,10 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
 
 // One column per price, as many rows as cost, each row summing to 1 within 0.01 (rescaled to 1,
 // as PRODINDEX does; the same tolerance).
-Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices)
+Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices,
+                               const std::vector<bool>* skippedRows)
 {
-    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share");
+    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share", skippedRows);
     if (shares.values.cols() != prices)
         throw InputError("shares: has " + std::to_string(shares.values.cols()) + " columns but input prices has " +
                          std::to_string(prices) + "; give one share column per price, in the same order");
@@ -117,11 +120,19 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         throw InputError("errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
     options.confidenceLevel = readLevelArgument(arguments.level, "level");
     refuseLaterArguments(arguments);
+    // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
+    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    std::vector<bool> incomplete;
+    if (dropIncomplete && !arguments.cost.empty())
+        incomplete = findIncompleteRowsIn({{&arguments.cost, "cost"}, {&arguments.output, "output"},
+                                           {&arguments.prices, "input prices"}, {&arguments.shares, "shares"}});
+    const std::vector<bool>* skipped = dropIncomplete ? &incomplete : nullptr;
 
-    const NumericColumns cost = readOneColumn(arguments.cost, "cost");
-    const NumericColumns output = readOneColumn(arguments.output, "output");
+    const NumericColumns cost = readOneColumn(arguments.cost, "cost", skipped);
+    const NumericColumns output = readOneColumn(arguments.output, "output", skipped);
     requireSameRows(cost, output, "output");
-    const NumericColumns prices = readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input");
+    const NumericColumns prices =
+        readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input", skipped);
     requireSameRows(cost, prices, "input prices");
     refuseReservedLabels(prices.labels);
 
@@ -134,14 +145,20 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         if (options.covariance != CovarianceKind::classical)
             throw InputError("errors: with shares the system is fitted by iterated GLS, whose errors are classical; "
                              "leave errors empty or fit without shares");
-        data.shares = readCostShares(arguments.shares, cost, prices.values.cols());
+        data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
     }
     try {
         CostFit fit = fitCost(data, options);
         fit.firstDataRow = cost.firstDataRow();
+        if (fit.regularity.firstRow) // counted among the kept rows; named among all
+            fit.regularity.firstRow =
+                static_cast<Eigen::Index>(dataRowOfKept(static_cast<std::size_t>(*fit.regularity.firstRow), incomplete));
+        fit.dropsIncompleteRows = dropIncomplete;
+        fit.incompleteRowsDropped = static_cast<std::size_t>(std::count(incomplete.begin(), incomplete.end(), true));
         return fit;
     } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
-        throw InputError("errors: row " + std::to_string(static_cast<std::size_t>(leverage.row()) + cost.firstDataRow()) +
+        const std::size_t row = dataRowOfKept(static_cast<std::size_t>(leverage.row()), incomplete);
+        throw InputError("errors: row " + std::to_string(row + cost.firstDataRow()) +
                          " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
     }
 }

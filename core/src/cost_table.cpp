@@ -4,10 +4,10 @@
 
 namespace isoquant {
 
-std::size_t costFitTableRows(CostForm form, std::size_t prices)
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows)
 {
     const std::size_t secondOrder = form == CostForm::translog ? 1 + prices * (prices + 1) / 2 + prices : 0;
-    return prices + 19 + secondOrder;
+    return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0);
 }
 
 namespace {
@@ -39,7 +39,8 @@ CellTable costFitTable(const CostFit& fit)
 {
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
-    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size()), summary.status == FitStatus::perfectFit);
+    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows),
+                       summary.status == FitStatus::perfectFit);
     writer.headerRow(translog ? translogCostTitle : cobbDouglasCostTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);
@@ -50,6 +51,7 @@ CellTable costFitTable(const CostFit& fit)
     writer.skipRow();
 
     writer.fitStatisticRows(summary, true);
+    if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
     const ParameterEstimate& elasticity = fit.costElasticity;
     writer.put(costElasticityLabel, {elasticity.estimate, writer.undefinedIfExact(elasticity.standardError),
                                      writer.undefinedIfExact(elasticity.tStatistic),

@@ -209,6 +209,17 @@ class CostSharesTest(CostTestCase):
         rows = {row[0]: row for row in self.table[17:] if row[0]}
         self.assert_close(rows["log-likelihood"][1], llf, 1e-7, "system log-likelihood")  # numpy SUR
 
+    def test_incomplete_rows_are_left_out(self):
+        set_values(SHEET, "AZ1", [["cost", "washes"] + LABELS] + [row[:] for row in DATA])  # AZ1:BD31
+        set_values(SHEET, "BA4", [[None]])  # row 4: a blank output
+        set_array_formula(SHEET, "BF1:BL23", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31;;;;;;;;;TRUE())")
+        set_array_formula(SHEET, "BF31", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31)")
+        recalc(DOC)
+        rows = {row[0]: row for row in get_range(SHEET, "BF1:BL23") if row[0]}
+        self.assertEqual(rows["observations"][1], float(ROWS - 1))
+        self.assertEqual(rows["incomplete rows dropped"][1], 1.0)
+        self.assertEqual(get_cell(SHEET, "BF31"), "Error: output: row 4 is empty; every cell must hold a number")
+
     def test_shares_must_match_the_prices(self):
         self.assertEqual(get_cell(SHEET, "AR41"), "Error: shares: has 2 columns but input prices has 3; give one share "
                                                   "column per price, in the same order")

@@ -12,6 +12,7 @@
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
+#include <algorithm>
 #include <random>
 
 using isoquant::CellTable;
@@ -176,6 +177,44 @@ BOOST_AUTO_TEST_CASE(regularity_row_agrees_with_prodregular)
     for (std::size_t row = 0; row < table.rows(); ++row)
         if (table.isText(row, 0) && table.text(row, 0) == "regularity")
             BOOST_TEST(table.text(row, 2).rfind("first: row " + std::to_string(first) + " (", 0) == 0u);
+}
+
+BOOST_AUTO_TEST_SUITE_END()
+
+BOOST_AUTO_TEST_SUITE(cost_incomplete_rows)
+
+// With `incomplete rows` on, a row with a blank or a text cell in any range is left out: the fit
+// equals the fit of the other rows (to the last bit: the same numbers in the same order), and the
+// table says how many rows it left out.
+BOOST_AUTO_TEST_CASE(incomplete_rows_are_left_out_and_counted)
+{
+    isoquant::CostFitArguments arguments = laundries({0, 1, 2});
+    isoquant::CostFitArguments withGaps = arguments;
+    withGaps.prices.set(5, 1, isoquant::Cell{});                  // data row 5: a blank price
+    withGaps.shares.set(9, 0, isoquant::Cell(std::string("n/a"))); // data row 9: a text share
+    withGaps.incompleteRows = 1.0; // TRUE in a cell
+    auto without = [](const CellTable& range, std::initializer_list<std::size_t> rows) {
+        CellTable kept(range.rows() - rows.size(), range.columns());
+        for (std::size_t row = 0, to = 0; row < range.rows(); ++row) {
+            if (std::find(rows.begin(), rows.end(), row) != rows.end()) continue;
+            for (std::size_t column = 0; column < range.columns(); ++column) kept.set(to, column, range.at(row, column));
+            ++to;
+        }
+        return kept;
+    };
+    isoquant::CostFitArguments kept = arguments;
+    kept.cost = without(arguments.cost, {5, 9});
+    kept.output = without(arguments.output, {5, 9});
+    kept.prices = without(arguments.prices, {5, 9});
+    kept.shares = without(arguments.shares, {5, 9});
+    const CellTable gapped = fittedTable(withGaps), reference = fittedTable(kept);
+    BOOST_TEST_REQUIRE(gapped.rows() == reference.rows() + 1);
+    BOOST_TEST(rowValue(gapped, "incomplete rows dropped") == 2.0);
+    BOOST_TEST(rowValue(gapped, "observations") == 58.0);
+    for (const std::string label : {"constant", "output", "labour", "labour*energy", "log-likelihood", "R2"})
+        BOOST_TEST(rowValue(gapped, label) == rowValue(reference, label), label);
+    withGaps.incompleteRows = 0.0;
+    BOOST_TEST(messageOf([&] { isoquant::costFitFromArguments(withGaps); }).rfind("input prices: row 6", 0) == 0);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

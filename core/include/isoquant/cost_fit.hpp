@@ -77,6 +77,9 @@ struct CostFit {
     // cost is not concave in prices (cost_duality.hpp); the first row counted from the range's top.
     CostRegularityTally regularity;
     std::size_t firstDataRow = 1; // of the ranges, 1-based, for naming the first irregular row
+    // `incomplete rows` on: the table shows how many rows were left out.
+    bool dropsIncompleteRows = false;
+    std::size_t incompleteRowsDropped = 0;
 };
 
 // The labels of the translog's second-order rows: "output*output", "<i>*<j>" (i ≤ j), "<i>*output".
@@ -89,8 +92,9 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options);
 // translog output*output, k(k+1)/2 price pairs and k price*output rows; an empty row; observations,
 // R2, adjusted R2, residual SD, F (slopes = 0), log-likelihood, AIC, BIC; cost elasticity; returns
 // to scale; verdict; efficient scale; regularity; form; smearing factor. Cobb-Douglas: k + 19 rows;
-// translog: 2k + k(k+1)/2 + 20 rows.
-std::size_t costFitTableRows(CostForm form, std::size_t prices);
+// translog: 2k + k(k+1)/2 + 20 rows; one more (`incomplete rows dropped`, after BIC) with
+// `incomplete rows` on.
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows = false);
 CellTable costFitTable(const CostFit& fit);
 
 } // namespace isoquant
