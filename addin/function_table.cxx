@@ -152,8 +152,12 @@ const std::vector<FunctionInfo>& functionTable()
           periodNamesArgument}},
         {"prodRegular", "PRODREGULAR",
          "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
-         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
-         {modelArgument, bundlesArgument}},
+         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails. With a cost "
+         "model (as for PRODCOST) each row holds the output then one price per input: \"regular\" when every "
+         "fitted cost share is positive and cost is concave in prices.",
+         {modelArgument,
+          {"inputs", "One row of input values in the model's input order, or several rows: the result is then a "
+                     "column with one value per row. With a cost model: the output, then the prices."}}},
         {"prodCompare", "PRODCOMPARE",
          "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
          "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
@@ -189,7 +193,8 @@ const std::vector<FunctionInfo>& functionTable()
                    "given)."}}},
         {"prodLeastCost", "PRODLEASTCOST",
          "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
-         "a row or a column like the prices (enter as an array formula).",
+         "a row or a column like the prices (enter as an array formula). With a cost model (as for PRODCOST) by "
+         "Shephard's lemma: amount = fitted cost share x cost / price.",
          {modelArgument, targetArgument, pricesArgument}},
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
@@ -203,6 +208,24 @@ const std::vector<FunctionInfo>& functionTable()
                            "column of outputs, one row of prices per output (or one row for all)."},
           {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
                    "per percent of output) or \"returns to scale\" (its inverse)."}}},
+        {"prodEfficientScale", "PRODEFFICIENTSCALE",
+         "Output at which average cost is lowest at the given input prices (the efficient scale), from a cost "
+         "model (PRODCOSTFIT table or typed rows, as for PRODCOST) or a production model whose returns to scale "
+         "fall with size. Says so when average cost falls or rises at every output in the model.",
+         {modelArgument,
+          {"input prices", "One positive price per input, in the model's order, as a row or a column."}}},
+        {"prodPriceElasticity", "PRODPRICEELASTICITY",
+         "Price elasticity between inputs i and j at the least-cost plan for the output: \"demand\" (percent change "
+         "of the cost-minimising amount of i per percent change in the price of j, output held), \"allen\" or "
+         "\"morishima\". From a cost model (as for PRODCOST) or, by duality, from a production model.",
+         {modelArgument,
+          {"output", "The output, a positive number, or a column of outputs (the result is then a column)."},
+          {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
+                           "column of outputs, one row of prices per output (or one row for all)."},
+          {"input i", "The input whose amount responds: its number (1 for the first) or its label."},
+          {"input j", "The input whose price moves: its number or its label."},
+          {"kind", "\"demand\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order given, as "
+                   "PRODSUBSTITUTION)."}}},
         {"prodCostFit", "PRODCOSTFIT",
          "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
          "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "
@@ -213,14 +236,18 @@ const std::vector<FunctionInfo>& functionTable()
           {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
                      "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
           {"form", "\"cobb-douglas\" (default) or \"translog\"."},
-          {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},
-          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."},
+          {"shares", "Optional cost shares of the inputs, one column per price in the same order, as many rows as "
+                     "cost, each row summing to 1 within 0.01 (fractions). Given, the cost equation and all but the "
+                     "last share equation are fitted jointly by iterated GLS (seemingly unrelated regressions)."},
+          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity; "
+                     "without shares only)."},
           levelArgument,
           {"controls", "Not available yet for cost fits; leave empty."},
           {"groups", "Not available yet for cost fits; leave empty."},
           {"effects", "Not available yet for cost fits; leave empty."},
           {"trend", "Not available yet for cost fits; leave empty."},
-          {"incomplete rows", "Not available yet for cost fits; leave empty."}}},
+          {"incomplete rows", "TRUE to leave out rows with a blank or text cell in cost, output, input prices or "
+                              "shares (the table counts them); FALSE or empty: such a cell is an error."}}},
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",

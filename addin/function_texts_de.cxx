@@ -282,6 +282,29 @@ const Translation& germanTranslation()
                        "(Standard: der erste)."},
           {"Faktor j", "Optional: der Faktor, nach dem aufgelöst wird, seine Nummer oder seine Bezeichnung "
                        "(Standard: der erste andere Faktor)."}}},
+        {"prodEfficientScale",
+         "Ausbringung, bei der die Durchschnittskosten zu den gegebenen Faktorpreisen am niedrigsten sind (die "
+         "effiziente Betriebsgröße), aus einem Kostenmodell (PRODCOSTFIT-Tabelle oder eingetippte Zeilen, wie bei "
+         "PRODCOST) oder einem Produktionsmodell, dessen Skalenerträge mit der Größe fallen. Meldet, wenn die "
+         "Durchschnittskosten im Modell bei jeder Ausbringung fallen oder steigen.",
+         {modelArgument,
+          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte."}}},
+        {"prodPriceElasticity",
+         "Preiselastizität zwischen den Faktoren i und j im kostenminimalen Plan für die Ausbringung: \"demand\" "
+         "(Nachfrageelastizität: prozentuale Änderung der kostenminimalen Menge von i je Prozent Preisänderung "
+         "von j, bei gleicher Ausbringung), \"allen\" oder \"morishima\". Aus einem Kostenmodell (wie bei "
+         "PRODCOST) oder, über die Dualität, aus einem Produktionsmodell.",
+         {modelArgument,
+          {"Ausbringung", "Die Ausbringung, eine positive Zahl, oder eine Spalte von Ausbringungen (das Ergebnis "
+                          "ist dann eine Spalte)."},
+          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte; "
+                           "bei einer Spalte von Ausbringungen eine Zeile Preise je Ausbringung (oder eine für "
+                           "alle)."},
+          {"Faktor i", "Der Faktor, dessen Menge reagiert: seine Nummer (1 für den ersten) oder seine "
+                       "Bezeichnung."},
+          {"Faktor j", "Der Faktor, dessen Preis sich ändert: seine Nummer oder seine Bezeichnung."},
+          {"Art", "\"demand\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
+                  "gegebenen Reihenfolge, wie bei PRODSUBSTITUTION)."}}},
         {"prodFrontier",
          "Schätzt eine stochastische Produktionsgrenze nach der Maximum-Likelihood-Methode: ln Ausbringung = "
          "Grenze + Störterm - Ineffizienz. Gibt eine Tabelle zurück (als Matrixformel eingeben): die Schätzwerte "

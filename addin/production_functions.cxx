@@ -13,6 +13,7 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/functions/envelope_functions.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 
 #include <new>
 
@@ -222,7 +223,7 @@ Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& s
 Any ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
     return guardedTable(
-        [&] { return regularityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
+        [&] { return regularityAnyColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
 Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
@@ -284,7 +285,7 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
         return orientedLike(
-            leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
+            leastCostAnyRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
             prices);
     });
 }
@@ -295,6 +296,24 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
     return guardedTable([&] {
         return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
                           toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+    });
+}
+
+Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices)
+{
+    return guardedTable([&] {
+        const CellTable prices = toCellTable(inputPrices, "input prices");
+        return efficientScaleCell(*models_.cells(model, "model"), prices);
+    });
+}
+
+Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTable& output, const AnyTable& inputPrices,
+                                             const AnyTable& inputI, const AnyTable& inputJ, const Any& kind)
+{
+    return guardedTable([&] {
+        return priceElasticityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+                                     toCellTable(inputPrices, "input prices"), toSingleCell(Any(inputI), "input i"),
+                                     toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"));
     });
 }
 

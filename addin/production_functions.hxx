@@ -87,6 +87,10 @@ public:
                                        const css::uno::Any& incompleteRows) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodPriceElasticity(const AnyTable& model, const AnyTable& output,
+                                               const AnyTable& inputPrices, const AnyTable& inputI,
+                                               const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,
                                       const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,

@@ -152,6 +152,46 @@ BAKERY = dict(
 )
 
 
+# Lathergate Laundries: a chain of 36 laundries, one year, from the books.
+#   cost   = total cost of running the branch, thousand EUR a year
+#   loads  = loads washed and dried, thousand a year
+#   prices = the wage an hour (EUR), the price of a machine hour (EUR, leasing and upkeep) and of a
+#            kWh (EUR) each branch paid
+# True cost function: ln cost = constant + output ln loads + 1/2 output_squared (ln loads)^2
+#                               + sum_i share_i ln price_i + noise,
+# the shares summing to 1 (homogeneous in prices), noise ~ Normal(0, NOISE_SD). The cost elasticity
+# output + output_squared ln loads is 1 where ln loads = (1 - output)/output_squared: average cost is
+# lowest at exp(4.5) = 90.0 thousand loads a year, whatever the prices.
+LAUNDRIES = dict(
+    seed=20261204,
+    count=36,
+    constant=0.5,
+    output=0.46,
+    output_squared=0.12,
+    shares=(0.5, 0.3, 0.2),
+    price_ranges=((12.0, 20.0), (3.0, 7.0), (0.18, 0.40)),
+    loads_range=(12.0, 450.0),
+    noise_sd=0.04,
+    efficient_scale=math.exp((1 - 0.46) / 0.12),
+)
+
+
+def laundry_rows(truth=LAUNDRIES):
+    """Rows of (branch, cost, loads, wage, machine hour, kWh), rounded as the books keep them."""
+    draw = random.Random(truth["seed"])
+    rows = []
+    for number in range(1, truth["count"] + 1):
+        loads = round(math.exp(draw.uniform(*(math.log(v) for v in truth["loads_range"]))), 1)
+        prices = [round(math.exp(draw.uniform(math.log(low), math.log(high))), 3 if high < 1 else 2)
+                  for low, high in truth["price_ranges"]]
+        log_loads = math.log(loads)
+        log_cost = (truth["constant"] + truth["output"] * log_loads + 0.5 * truth["output_squared"] * log_loads ** 2
+                    + sum(share * math.log(price) for share, price in zip(truth["shares"], prices))
+                    + draw.gauss(0.0, truth["noise_sd"]))
+        rows.append((f"Branch {number:02d}", round(math.exp(log_cost), 2), loads) + tuple(prices))
+    return rows
+
+
 if __name__ == "__main__":
     for row in workshop_rows() + creamery_rows() + glassworks_rows()[0]:
         print(row)

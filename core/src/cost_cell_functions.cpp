@@ -8,10 +8,13 @@
 #include "isoquant/numeric_range.hpp"
 #include "isoquant/option_arguments.hpp"
 #include "isoquant/panel_arguments.hpp"
+#include "isoquant/period_range.hpp"
+#include "isoquant/sheet/arguments/incomplete_rows.hpp"
 #include "isoquant/production_model.hpp"
 #include "isoquant/table_labels.hpp"
 #include "isoquant/text.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 namespace isoquant {
@@ -35,9 +38,10 @@ void requireSameRows(const NumericColumns& cost, const NumericColumns& other, co
                          rowsText(cost.values.rows()));
 }
 
-NumericColumns readOneColumn(const CellTable& range, const std::string& name)
+NumericColumns readOneColumn(const CellTable& range, const std::string& name,
+                             const std::vector<bool>* skippedRows = nullptr)
 {
-    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name);
+    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name, skippedRows);
     if (column.values.cols() != 1)
         throw InputError(name + ": must be one column; it has " + std::to_string(column.values.cols()));
     return column;
@@ -60,12 +64,10 @@ void refuseLaterArguments(const CostFitArguments& arguments)
     auto refuse = [](const std::string& name) {
         throw InputError(name + ": not available yet for cost fits; leave it empty");
     };
-    if (!arguments.shares.empty()) refuse("shares");
     if (!arguments.controls.empty()) refuse("controls");
     if (!arguments.groups.empty()) refuse("groups");
     if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
     if (!arguments.trend.empty()) refuse("trend");
-    if (readSwitchArgument(arguments.incompleteRows, "incomplete rows")) refuse("incomplete rows");
 }
 
 void refuseReservedLabels(const std::vector<std::string>& labels)
@@ -79,6 +81,34 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
     }
 }
 
+// One column per price, as many rows as cost, each row summing to 1 within 0.01 (rescaled to 1,
+// as PRODINDEX does; the same tolerance).
+Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices,
+                               const std::vector<bool>* skippedRows)
+{
+    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share", skippedRows);
+    if (shares.values.cols() != prices)
+        throw InputError("shares: has " + std::to_string(shares.values.cols()) + " columns but input prices has " +
+                         std::to_string(prices) + "; give one share column per price, in the same order");
+    requireSameRows(cost, shares, "shares");
+    Eigen::MatrixXd rescaled = shares.values;
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row)
+        for (Eigen::Index column = 0; column < prices; ++column)
+            if (rescaled(row, column) < 0)
+                throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                                 ", column " + std::to_string(column + 1) + " is " + formatNumber(rescaled(row, column)) +
+                                 "; a cost share cannot be negative");
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row) {
+        const double sum = rescaled.row(row).sum();
+        if (!(std::fabs(sum - 1) <= shareSumTolerance * (1 + 1e-6)))
+            throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                             ": the shares sum to " + formatNumber(sum) +
+                             "; each row's cost shares must sum to 1 within 0.01 (0.99 to 1.01; fractions, not percent)");
+        rescaled.row(row) /= sum;
+    }
+    return rescaled;
+}
+
 } // namespace
 
 CostFit costFitFromArguments(const CostFitArguments& arguments)
@@ -90,11 +120,19 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         throw InputError("errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
     options.confidenceLevel = readLevelArgument(arguments.level, "level");
     refuseLaterArguments(arguments);
+    // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
+    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    std::vector<bool> incomplete;
+    if (dropIncomplete && !arguments.cost.empty())
+        incomplete = findIncompleteRowsIn({{&arguments.cost, "cost"}, {&arguments.output, "output"},
+                                           {&arguments.prices, "input prices"}, {&arguments.shares, "shares"}});
+    const std::vector<bool>* skipped = dropIncomplete ? &incomplete : nullptr;
 
-    const NumericColumns cost = readOneColumn(arguments.cost, "cost");
-    const NumericColumns output = readOneColumn(arguments.output, "output");
+    const NumericColumns cost = readOneColumn(arguments.cost, "cost", skipped);
+    const NumericColumns output = readOneColumn(arguments.output, "output", skipped);
     requireSameRows(cost, output, "output");
-    const NumericColumns prices = readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input");
+    const NumericColumns prices =
+        readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input", skipped);
     requireSameRows(cost, prices, "input prices");
     refuseReservedLabels(prices.labels);
 
@@ -103,10 +141,24 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     data.output = output.values.col(0);
     data.prices = prices.values;
     data.priceLabels = prices.labels;
+    if (!arguments.shares.empty()) {
+        if (options.covariance != CovarianceKind::classical)
+            throw InputError("errors: with shares the system is fitted by iterated GLS, whose errors are classical; "
+                             "leave errors empty or fit without shares");
+        data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
+    }
     try {
-        return fitCost(data, options);
+        CostFit fit = fitCost(data, options);
+        fit.firstDataRow = cost.firstDataRow();
+        if (fit.regularity.firstRow) // counted among the kept rows; named among all
+            fit.regularity.firstRow =
+                static_cast<Eigen::Index>(dataRowOfKept(static_cast<std::size_t>(*fit.regularity.firstRow), incomplete));
+        fit.dropsIncompleteRows = dropIncomplete;
+        fit.incompleteRowsDropped = static_cast<std::size_t>(std::count(incomplete.begin(), incomplete.end(), true));
+        return fit;
     } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
-        throw InputError("errors: row " + std::to_string(static_cast<std::size_t>(leverage.row()) + cost.firstDataRow()) +
+        const std::size_t row = dataRowOfKept(static_cast<std::size_t>(leverage.row()), incomplete);
+        throw InputError("errors: row " + std::to_string(row + cost.firstDataRow()) +
                          " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
     }
 }
@@ -125,9 +177,10 @@ double costFigure(const CostModel& model, double level, const Eigen::VectorXd& p
     return std::nan("");
 }
 
-// The prices of every output row: one vector for a single output (a row or a column), else one
-// row per output or one row for all.
-Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs)
+} // namespace
+
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
+                              const std::string& outputArgument)
 {
     if (outputs == 1) return readPrices(range, "input prices", inputs).transpose();
     const NumericColumns prices = readNumericColumns(range, "input prices", ValueRule::positive, "price");
@@ -135,12 +188,10 @@ Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eige
         throw InputError("input prices: has " + std::to_string(prices.values.cols()) + " columns, but the model has " +
                          std::to_string(inputs) + " prices; give one column per input");
     if (prices.values.rows() != 1 && prices.values.rows() != outputs)
-        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but target output has " +
+        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but " + outputArgument + " has " +
                          rowsText(outputs) + "; give one row of prices per output, or one row for all");
     return prices.values;
 }
-
-} // namespace
 
 CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
@@ -148,7 +199,7 @@ CellTable costModelColumn(const CellTable& model, const CellTable& target, const
     const CostMeasure measure = readCostMeasure(what);
     const NumericColumns outputs = readOneColumn(target, "target output");
     const Eigen::Index n = outputs.values.rows();
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size(), "target output");
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
@@ -171,7 +222,7 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
     const NumericColumns outputs = readOneColumn(target, "target output");
     const Eigen::Index n = outputs.values.rows();
     const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs);
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, "target output");
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         CellTable rowPrices(1, static_cast<std::size_t>(inputs));

@@ -3,6 +3,7 @@
 #include "isoquant/distributions.hpp"
 #include "isoquant/exact_elementwise.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/math/fits/cost_share_system.hpp"
 #include "isoquant/text.hpp"
 #include "isoquant/translog_fit.hpp"
 #include "isoquant/work_limits.hpp"
@@ -28,6 +29,8 @@ struct NormalisedRegression {
     Eigen::MatrixXd design;
     Eigen::VectorXd response;
     std::vector<std::string> termNames;
+    Eigen::MatrixXd relativeLogPrices; // ln(wᵢ/w_k), i < k: the share equations' terms
+    Eigen::VectorXd logOutput;
 };
 
 NormalisedRegression normalisedRegression(const CostData& data, CostForm form)
@@ -39,6 +42,8 @@ NormalisedRegression normalisedRegression(const CostData& data, CostForm form)
     const Eigen::MatrixXd relative = logPrices.leftCols(k - 1).colwise() - logPrices.col(k - 1); // ln(wᵢ/w_k)
     const auto lastLabel = data.priceLabels.back();
     NormalisedRegression regression;
+    regression.relativeLogPrices = relative;
+    regression.logOutput = logOutput;
     regression.response = exactLog(data.cost.array()).matrix() - logPrices.col(k - 1);
     std::vector<Eigen::VectorXd> columns{Eigen::VectorXd::Ones(n), logOutput};
     regression.termNames = {"the constant", "ln output"};
@@ -209,6 +214,24 @@ void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
     returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, level, false);
 }
 
+// sᵢ = βᵢ + Σⱼ βᵢⱼ ln wⱼ + βᵢ_y ln y at every row, from θ in table order.
+CostRegularityTally regularityOf(const CostFit& fit, const CostData& data)
+{
+    const Eigen::Index k = data.prices.cols();
+    const Eigen::VectorXd& theta = fit.summary.estimates;
+    Eigen::MatrixXd interactions = Eigen::MatrixXd::Zero(k, k);
+    Eigen::VectorXd byOutput = Eigen::VectorXd::Zero(k);
+    if (fit.form == CostForm::translog) {
+        Eigen::Index at = 3 + k;
+        for (const auto& [i, j] : translogPairs(k)) interactions(i, j) = interactions(j, i) = theta(at++);
+        byOutput = theta.tail(k);
+    }
+    const Eigen::MatrixXd logPrices = exactLog(data.prices.array()).matrix();
+    Eigen::MatrixXd shares = logPrices * interactions + exactLog(data.output.array()).matrix() * byOutput.transpose();
+    shares.rowwise() += theta.segment(2, k).transpose();
+    return tallyCostRegularity(shares, interactions, data.priceLabels);
+}
+
 } // namespace
 
 CostFit fitCost(const CostData& data, const CostFitOptions& options)
@@ -230,7 +253,12 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     fit.priceLabels = data.priceLabels;
     ProductionFit& summary = fit.summary;
     try {
-        summary.regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
+        if (data.shares.size() == 0)
+            summary.regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
+        else
+            summary.regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
+                                                    normalised.logOutput, data.shares, options.form,
+                                                    options.confidenceLevel);
     } catch (const CollinearColumns& collinear) {
         std::string names;
         const auto& columns = collinear.columns();
@@ -257,6 +285,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     fit.meanLogPrices = exactLog(data.prices.array()).matrix().colwise().mean().transpose();
     setReturnsToScale(fit, degreesOfFreedom, options.confidenceLevel);
     fit.efficientScale = efficientScaleOf(fit, degreesOfFreedom, options.confidenceLevel);
+    fit.regularity = regularityOf(fit, data);
     return fit;
 }
 

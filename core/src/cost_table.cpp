@@ -4,10 +4,10 @@
 
 namespace isoquant {
 
-std::size_t costFitTableRows(CostForm form, std::size_t prices)
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows)
 {
     const std::size_t secondOrder = form == CostForm::translog ? 1 + prices * (prices + 1) / 2 + prices : 0;
-    return prices + 18 + secondOrder;
+    return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0);
 }
 
 namespace {
@@ -25,13 +25,22 @@ std::string costFormNote(const CostFit& fit)
     return note;
 }
 
+// "regular at every row", or the first irregular row and what fails there.
+std::string regularityNote(const CostFit& fit)
+{
+    if (!fit.regularity.firstRow) return "regular at every row";
+    return "first: row " + std::to_string(static_cast<std::size_t>(*fit.regularity.firstRow) + fit.firstDataRow) + " (" +
+           fit.regularity.firstPhrase + ")";
+}
+
 } // namespace
 
 CellTable costFitTable(const CostFit& fit)
 {
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
-    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size()), summary.status == FitStatus::perfectFit);
+    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows),
+                       summary.status == FitStatus::perfectFit);
     writer.headerRow(translog ? translogCostTitle : cobbDouglasCostTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);
@@ -42,6 +51,7 @@ CellTable costFitTable(const CostFit& fit)
     writer.skipRow();
 
     writer.fitStatisticRows(summary, true);
+    if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
     const ParameterEstimate& elasticity = fit.costElasticity;
     writer.put(costElasticityLabel, {elasticity.estimate, writer.undefinedIfExact(elasticity.standardError),
                                      writer.undefinedIfExact(elasticity.tStatistic),
@@ -57,6 +67,7 @@ CellTable costFitTable(const CostFit& fit)
     } else {
         writer.textRow(efficientScaleLabel, {notAvailableText});
     }
+    writer.put(costRegularityLabel, {static_cast<double>(fit.regularity.irregularRows), regularityNote(fit)});
     writer.textRow(formLabel, {translog ? translogCostWord : cobbDouglasCostWord, costFormNote(fit)});
     writer.valueRow(smearingLabel, summary.smearingFactor);
     return writer.finish();

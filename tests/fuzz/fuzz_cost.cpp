@@ -1,9 +1,12 @@
-// Cost fits and PRODCOST over their tables with arbitrary shapes, values and options: every call
-// must end in a table of finite numbers or an InputError; anything else is a finding.
+// Cost fits (with and without shares, incomplete rows) and the evaluators over their tables
+// (PRODCOST, PRODLEASTCOST, PRODEFFICIENTSCALE, PRODPRICEELASTICITY, PRODREGULAR) with arbitrary
+// shapes, values and options: every call must end in a table of finite numbers (or texts) or an
+// InputError; anything else is a finding.
 #include "fuzzed_cells.hpp"
 
 #include "isoquant/cost_cell_functions.hpp"
 #include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;
@@ -22,6 +25,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
     arguments.form = fuzzedCell(data, options);
     arguments.errors = fuzzedCell(data, options);
     arguments.level = fuzzedCell(data, options);
+    if (data.ConsumeBool()) arguments.shares = fuzzedTable(data, rows, prices, words);
+    arguments.incompleteRows = fuzzedCell(data, {"TRUE", ""});
     const std::vector<std::string> measures{"total", "marginal", "average", "cost elasticity", "returns to scale"};
     try {
         const CellTable table = costFitTable(costFitFromArguments(arguments));
@@ -29,6 +34,14 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
         const std::size_t outputs = data.ConsumeIntegralInRange<std::size_t>(1, 4);
         requireFiniteNumbers(costColumn(table, fuzzedTable(data, outputs, 1), fuzzedTable(data, 1, prices),
                                         fuzzedCell(data, measures)));
+        const CellTable pricesRow = fuzzedTable(data, 1, prices);
+        requireFiniteNumbers(leastCostAnyRow(table, fuzzedCell(data, measures), pricesRow));
+        requireFiniteNumbers(efficientScaleCell(table, pricesRow));
+        const std::vector<std::string> kinds{"demand", "allen", "morishima", "labour", "1"};
+        requireFiniteNumbers(priceElasticityColumn(table, fuzzedTable(data, outputs, 1), pricesRow,
+                                                   fuzzedCell(data, kinds), fuzzedCell(data, kinds),
+                                                   fuzzedCell(data, kinds)));
+        requireFiniteNumbers(regularityAnyColumn(table, fuzzedTable(data, outputs, prices + 1)));
     } catch (const InputError&) {
     }
     return 0;

@@ -56,6 +56,8 @@ GERMAN_ARGUMENTS = {
     "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS,
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
     "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
+    "PRODEFFICIENTSCALE": ["Modell", "Faktorpreise"],
+    "PRODPRICEELASTICITY": ["Modell", "Ausbringung", "Faktorpreise", "Faktor i", "Faktor j", "Art"],
     "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
                      "Kontrollvariablen"],
     "PRODEFFICIENCY": ["Modell", "Ausbringung", "Faktormengen", "Kennzahl"],

@@ -183,6 +183,8 @@ REQUIRED = {
     "PRODFRONTIER": ["output", "inputs"],
     "PRODEFFICIENCY": ["model", "output", "inputs"],
     "PRODENVELOPE": ["outputs", "inputs"],
+    "PRODEFFICIENTSCALE": ["model", "input prices"],
+    "PRODPRICEELASTICITY": ["model", "output", "input prices", "input i", "input j"],
 }
 ADD_IN = 11  # com.sun.star.sheet.FunctionCategory.ADDIN (the built-in PRODUCT also starts with PROD)
 # Names that must not appear: the other spelling of a name used elsewhere.
@@ -244,7 +246,7 @@ class ExtensionManagerTextTest(unittest.TestCase):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(k)}
             if str(properties.get("Name", "")).startswith("PROD") and properties["Category"] == ADD_IN:
                 names.add(properties["Name"])
-        self.assertEqual(len(names), 27)
+        self.assertEqual(len(names), 29)
         self.assertEqual([n for n in sorted(names) if n not in description], [])
         publisher = packages[0].getPublisherInfo()  # StringPair: First the name, Second the link
         self.assertEqual(publisher.First, "The Isoquant developers")

@@ -87,7 +87,8 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     BOOST_TEST(fitMessage(arguments) == "controls: not available yet for cost fits; leave it empty");
     arguments = sixLaundries();
     arguments.shares = numberRange(Eigen::MatrixXd::Constant(6, 2, 0.5));
-    BOOST_TEST(fitMessage(arguments) == "shares: not available yet for cost fits; leave it empty");
+    BOOST_TEST(fitMessage(arguments) == "shares: a share equation fits exactly (or two equations' errors move "
+                                        "together exactly), so the system cannot weigh them; fit without shares");
     arguments = sixLaundries();
     arguments.prices = numberRange(Eigen::MatrixXd::Constant(6, 2, 3.0), {"labour", "output"});
     BOOST_TEST(fitMessage(arguments) == "input prices: column 2 is labelled 'output'; the cost table uses \"constant\", "

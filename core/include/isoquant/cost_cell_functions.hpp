@@ -7,9 +7,10 @@
 
 namespace isoquant {
 
-// The arguments of PRODCOSTFIT as the user gave them. `shares`, `controls`, `groups`, `effects`,
-// `trend` and `incomplete rows` are part of the signature but not yet available: given, they are
-// refused with a message saying so.
+// The arguments of PRODCOSTFIT as the user gave them. `controls`, `groups`, `effects`, `trend` and
+// `incomplete rows` are part of the signature but not yet available: given, they are refused with a
+// message saying so. `shares` (one column per price, rows summing to 1 within 0.01, rescaled to 1)
+// fits the cost and share equations jointly (cost_share_system.hpp), with classical errors only.
 struct CostFitArguments {
     CellTable cost;
     CellTable output;
@@ -33,6 +34,11 @@ CostFit costFitFromArguments(const CostFitArguments& arguments);
 // serves every output). Figures: "total" exp(ln C) (the median prediction: no smearing factor),
 // "marginal" ε·C/y, "average" C/y, "cost elasticity" ε, "returns to scale" 1/ε. A column.
 CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
+
+// The prices of every output row: one vector for a single output (a row or a column), else one row
+// per output or one row for all; `outputArgument` names the outputs in a message.
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
+                              const std::string& outputArgument);
 
 // PRODCOST for any model: a cost model as above; a production model as costCell
 // (decision_cell_functions.hpp) for one output, and for a column of outputs one least-cost figure

@@ -21,6 +21,7 @@
 #pragma once
 
 #include "isoquant/cells.hpp"
+#include "isoquant/math/forms/cost_duality.hpp"
 #include "isoquant/production_fit.hpp"
 
 #include <Eigen/Dense>
@@ -42,12 +43,16 @@ inline constexpr const char* costConstantLabel = "constant";
 inline constexpr const char* costOutputLabel = "output";
 inline constexpr const char* costElasticityLabel = "cost elasticity";
 inline constexpr const char* efficientScaleLabel = "efficient scale";
+inline constexpr const char* costRegularityLabel = "regularity";
 
 struct CostData {
     Eigen::VectorXd cost;   // n values, positive
     Eigen::VectorXd output; // n values, positive
     Eigen::MatrixXd prices; // n × k, positive
     std::vector<std::string> priceLabels; // the inputs' labels
+    // n × k cost shares, rows summing to 1: the share equations join the cost equation
+    // (cost_share_system.hpp); empty: least squares on the cost equation alone.
+    Eigen::MatrixXd shares;
 };
 
 struct CostFitOptions {
@@ -68,6 +73,13 @@ struct CostFit {
     double meanLogOutput = 0;
     // Translog with β_yy > 0: y* and its standard error; empty otherwise.
     std::optional<ParameterEstimate> efficientScale;
+    // The rows (of the data) whose fitted shares sᵢ = ∂ln C/∂ln wᵢ are not all positive or whose
+    // cost is not concave in prices (cost_duality.hpp); the first row counted from the range's top.
+    CostRegularityTally regularity;
+    std::size_t firstDataRow = 1; // of the ranges, 1-based, for naming the first irregular row
+    // `incomplete rows` on: the table shows how many rows were left out.
+    bool dropsIncompleteRows = false;
+    std::size_t incompleteRowsDropped = 0;
 };
 
 // The labels of the translog's second-order rows: "output*output", "<i>*<j>" (i ≤ j), "<i>*output".
@@ -79,9 +91,10 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options);
 // PRODCOSTFIT's table (7 columns). Rows: the header; constant; output; one per price (k); for the
 // translog output*output, k(k+1)/2 price pairs and k price*output rows; an empty row; observations,
 // R2, adjusted R2, residual SD, F (slopes = 0), log-likelihood, AIC, BIC; cost elasticity; returns
-// to scale; verdict; efficient scale; form; smearing factor. Cobb-Douglas: k + 18 rows; translog:
-// 2k + k(k+1)/2 + 19 rows.
-std::size_t costFitTableRows(CostForm form, std::size_t prices);
+// to scale; verdict; efficient scale; regularity; form; smearing factor. Cobb-Douglas: k + 19 rows;
+// translog: 2k + k(k+1)/2 + 20 rows; one more (`incomplete rows dropped`, after BIC) with
+// `incomplete rows` on.
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows = false);
 CellTable costFitTable(const CostFit& fit);
 
 } // namespace isoquant
