@@ -5,7 +5,7 @@
 
 #include "model_ranges.hxx"
 
-#include "isoquant/fit_cache.hpp"
+#include "isoquant/sheet/caches/fit_cache.hpp"
 
 #include <org/isoquant/calc/XProductionFunctions.hpp>
 

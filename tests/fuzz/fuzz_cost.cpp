@@ -2,8 +2,9 @@
 // must end in a table of finite numbers or an InputError; anything else is a finding.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;

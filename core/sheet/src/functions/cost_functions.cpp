@@ -1,0 +1,202 @@
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
+
+#include "isoquant/sheet/models/cost_model.hpp"
+#include "isoquant/sheet/arguments/decision_arguments.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/caches/model_cache.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/sheet/arguments/panel_arguments.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
+#include "isoquant/sheet/tables/table_labels.hpp"
+#include "isoquant/math/messages/text.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
+
+std::string describe(const Cell& cell)
+{
+    if (isText(cell)) return quoted(std::get<std::string>(cell));
+    return isNumber(cell) ? formatNumber(std::get<double>(cell)) : std::string("an empty cell");
+}
+
+std::string rowsText(Eigen::Index rows) { return std::to_string(rows) + (rows == 1 ? " row" : " rows"); }
+
+void requireSameRows(const NumericColumns& cost, const NumericColumns& other, const std::string& name)
+{
+    if (other.values.rows() != cost.values.rows())
+        throw InputError(name + ": has " + rowsText(other.values.rows()) + " of data but cost has " +
+                         rowsText(cost.values.rows()));
+}
+
+NumericColumns readOneColumn(const CellTable& range, const std::string& name)
+{
+    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name);
+    if (column.values.cols() != 1)
+        throw InputError(name + ": must be one column; it has " + std::to_string(column.values.cols()));
+    return column;
+}
+
+CostForm readCostForm(const Cell& cell)
+{
+    if (isOmitted(cell)) return CostForm::cobbDouglas;
+    if (isText(cell)) {
+        const std::string& word = std::get<std::string>(cell);
+        if (equalsIgnoringCase(word, "cobb-douglas")) return CostForm::cobbDouglas;
+        if (equalsIgnoringCase(word, "translog")) return CostForm::translog;
+    }
+    throw InputError("form: " + describe(cell) + " is not a cost form; use \"cobb-douglas\" or \"translog\"");
+}
+
+// The arguments this slice declares but does not yet use.
+void refuseLaterArguments(const CostFitArguments& arguments)
+{
+    auto refuse = [](const std::string& name) {
+        throw InputError(name + ": not available yet for cost fits; leave it empty");
+    };
+    if (!arguments.shares.empty()) refuse("shares");
+    if (!arguments.controls.empty()) refuse("controls");
+    if (!arguments.groups.empty()) refuse("groups");
+    if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
+    if (!arguments.trend.empty()) refuse("trend");
+    if (readSwitchArgument(arguments.incompleteRows, "incomplete rows")) refuse("incomplete rows");
+}
+
+void refuseReservedLabels(const std::vector<std::string>& labels)
+{
+    for (std::size_t column = 0; column < labels.size(); ++column) {
+        const std::string& label = labels[column];
+        if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
+            equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
+            throw InputError("input prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+                             "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
+    }
+}
+
+} // namespace
+
+CostFit costFitFromArguments(const CostFitArguments& arguments)
+{
+    CostFitOptions options;
+    options.form = readCostForm(arguments.form);
+    options.covariance = readErrorsArgument(arguments.errors);
+    if (options.covariance == CovarianceKind::cluster)
+        throw InputError("errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
+    options.confidenceLevel = readLevelArgument(arguments.level, "level");
+    refuseLaterArguments(arguments);
+
+    const NumericColumns cost = readOneColumn(arguments.cost, "cost");
+    const NumericColumns output = readOneColumn(arguments.output, "output");
+    requireSameRows(cost, output, "output");
+    const NumericColumns prices = readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input");
+    requireSameRows(cost, prices, "input prices");
+    refuseReservedLabels(prices.labels);
+
+    CostData data;
+    data.cost = cost.values.col(0);
+    data.output = output.values.col(0);
+    data.prices = prices.values;
+    data.priceLabels = prices.labels;
+    try {
+        return fitCost(data, options);
+    } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
+        throw InputError("errors: row " + std::to_string(static_cast<std::size_t>(leverage.row()) + cost.firstDataRow()) +
+                         " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
+    }
+}
+
+namespace {
+
+double costFigure(const CostModel& model, double level, const Eigen::VectorXd& prices, CostMeasure measure)
+{
+    switch (measure) {
+    case CostMeasure::total: return std::exp(model.logCost(level, prices));
+    case CostMeasure::marginal: return model.costElasticity(level, prices) * std::exp(model.logCost(level, prices)) / level;
+    case CostMeasure::average: return std::exp(model.logCost(level, prices)) / level;
+    case CostMeasure::costElasticity: return model.costElasticity(level, prices);
+    case CostMeasure::returnsToScale: return 1.0 / model.costElasticity(level, prices);
+    }
+    return std::nan("");
+}
+
+// The prices of every output row: one vector for a single output (a row or a column), else one
+// row per output or one row for all.
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs)
+{
+    if (outputs == 1) return readPrices(range, "input prices", inputs).transpose();
+    const NumericColumns prices = readNumericColumns(range, "input prices", ValueRule::positive, "price");
+    if (prices.values.cols() != inputs)
+        throw InputError("input prices: has " + std::to_string(prices.values.cols()) + " columns, but the model has " +
+                         std::to_string(inputs) + " prices; give one column per input");
+    if (prices.values.rows() != 1 && prices.values.rows() != outputs)
+        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but target output has " +
+                         rowsText(outputs) + "; give one row of prices per output, or one row for all");
+    return prices.values;
+}
+
+} // namespace
+
+CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    const CostModel cost = readCostModel(model);
+    const CostMeasure measure = readCostMeasure(what);
+    const NumericColumns outputs = readOneColumn(target, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size());
+    CellTable column(static_cast<std::size_t>(n), 1);
+    for (Eigen::Index row = 0; row < n; ++row) {
+        const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
+        const double figure = costFigure(cost, outputs.values(row, 0), rowPrices, measure);
+        if (!std::isfinite(figure))
+            throw InputError("target output: row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                             " gives a result that cannot be represented");
+        column.set(static_cast<std::size_t>(row), 0, figure);
+    }
+    return column;
+}
+
+
+namespace {
+
+// PRODCOST over a production model, one least-cost plan per output (costCell); a row without an
+// answer shows its sentence, a message names its row.
+CellTable productionCostColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    const NumericColumns outputs = readOneColumn(target, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs);
+    CellTable column(static_cast<std::size_t>(n), 1);
+    for (Eigen::Index row = 0; row < n; ++row) {
+        CellTable rowPrices(1, static_cast<std::size_t>(inputs));
+        for (Eigen::Index i = 0; i < inputs; ++i)
+            rowPrices.set(0, static_cast<std::size_t>(i), priceRows(priceRows.rows() == 1 ? 0 : row, i));
+        try {
+            column.set(static_cast<std::size_t>(row), 0, costCell(model, outputs.values(row, 0), rowPrices, what).at(0, 0));
+        } catch (const InputError& error) {
+            const std::string argument = "target output: ", message = error.what();
+            if (message.compare(0, argument.size(), argument) != 0) throw;
+            throw InputError(argument + "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                             ": " + message.substr(argument.size()));
+        }
+    }
+    return column;
+}
+
+} // namespace
+
+CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    if (isCostModel(model)) return costModelColumn(model, target, prices, what);
+    if (target.rows() == 1 && target.columns() == 1) return costCell(model, target.at(0, 0), prices, what);
+    return productionCostColumn(model, target, prices, what);
+}
+
+} // namespace isoquant
