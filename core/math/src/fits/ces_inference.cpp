@@ -2,6 +2,7 @@
 
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/least_squares.hpp"
+#include "isoquant/math/fits/returns_to_scale.hpp"
 #include "fits/fit_inference.hpp"
 
 #include <boost/math/constants/constants.hpp>

@@ -6,6 +6,7 @@
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/math/fits/returns_to_scale.hpp"
 
 #include <algorithm>
 #include <cmath>

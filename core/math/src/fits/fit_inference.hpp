@@ -2,7 +2,7 @@
 // LeastSquaresResult and NonlinearInference carry these fields under the same names.
 #pragma once
 
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 
 namespace isoquant {
 

@@ -6,6 +6,7 @@
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/fits/returns_to_scale.hpp"
 #include "fits/fit_inference.hpp"
 
 #include <cmath>

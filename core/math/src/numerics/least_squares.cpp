@@ -164,11 +164,6 @@ ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions&
 
 } // namespace
 
-CollinearColumns::CollinearColumns(std::vector<Eigen::Index> columns)
-    : std::runtime_error("design columns are collinear"), columns_(std::move(columns))
-{
-}
-
 UnitLeverage::UnitLeverage(Eigen::Index row)
     : std::runtime_error("a row has leverage 1; HC3 errors are undefined"), row_(row)
 {

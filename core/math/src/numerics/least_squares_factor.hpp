@@ -3,7 +3,7 @@
 // Householder QR in long double on the whole design. Internal to the core.
 #pragma once
 
-#include "isoquant/math/numerics/least_squares.hpp"
+#include "isoquant/math/numerics/regression_rows.hpp"
 
 #include <Eigen/Core>
 

@@ -1,6 +1,6 @@
 #include "isoquant/sheet/functions/form_comparison.hpp"
 
-#include "isoquant/math/fits/ces_fit.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -58,12 +58,13 @@ std::string cesUnusable(const ProductionFit& ces)
 CellTable compareForms(const FitArguments& arguments)
 {
     const double level = readLevelArgument(arguments.level, "level");
+    // Read once; each form is fitted to the same data (the Cobb-Douglas first: its errors are the call's).
+    FitInput input = readFitInput(arguments);
     std::array<Candidate, 3> candidates;
     for (std::size_t f = 0; f < forms.size(); ++f) {
-        FitArguments formArguments = arguments;
-        formArguments.form = formWord(forms[f]);
+        input.options.form = forms[f];
         try {
-            candidates[f].fit = fitFromArguments(formArguments);
+            candidates[f].fit = fitProduction(input.data, input.options);
         } catch (const InputError& error) {
             if (forms[f] == ProductionForm::cobbDouglas) throw;
             candidates[f].reason = std::string("not fitted: ") + error.what();

@@ -130,22 +130,23 @@ FitArguments withoutTrailingEmptyRows(FitArguments arguments)
     return arguments;
 }
 
-ProductionFit fitFromArguments(const FitArguments& arguments)
+FitInput readFitInput(const FitArguments& arguments)
 {
     // Whole columns (B:B) end at their last value; only the cut ranges are copied.
     if (rowsBeforeEmptyTail(arguments) != arguments.output.rows())
-        return fitFromArguments(withoutTrailingEmptyRows(arguments));
-    ProductionFitOptions options;
+        return readFitInput(withoutTrailingEmptyRows(arguments));
+    FitInput input;
+    ProductionFitOptions& options = input.options;
     options.form = readFormArgument(arguments.form);
     options.constantReturns = readSwitchArgument(arguments.constantReturns, "constant returns");
     options.covariance = readErrorsArgument(arguments.errors);
     options.confidenceLevel = readLevelArgument(arguments.level, "level");
     options.effects = readEffectsArgument(arguments.effects);
-    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    input.dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
 
     // Empty ranges are left to the readers below, which say so.
-    std::vector<bool> incomplete;
-    const bool filtering = dropIncomplete && !arguments.output.empty() && !arguments.inputs.empty();
+    std::vector<bool>& incomplete = input.incomplete;
+    const bool filtering = input.dropIncomplete && !arguments.output.empty() && !arguments.inputs.empty();
     if (filtering)
         incomplete = findIncompleteRows(
             {arguments.output, arguments.inputs, arguments.controls, arguments.groups, arguments.trend});
@@ -160,7 +161,8 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     refuseControlLabels(inputs);
     refuseTotalsRow(output, inputs.values, skipped);
 
-    ProductionData data;
+    ProductionData& data = input.data;
+    input.firstDataRow = output.firstDataRow();
     data.output = output.values.col(0);
     data.inputs = std::move(inputs.values); // a million rows: a copy costs page faults, not only time
     data.inputLabels = inputs.labels;
@@ -183,15 +185,21 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
         data.panel.periods = trend.values.col(0);
     }
 
+    return input;
+}
+
+ProductionFit fitFromArguments(const FitArguments& arguments)
+{
+    const FitInput input = readFitInput(arguments);
     ProductionFit fit;
     try {
-        fit = fitProduction(data, options);
+        fit = fitProduction(input.data, input.options);
     } catch (const UnitLeverage& leverage) {
-        throw InputError(unitLeverageMessage(leverage.row(), incomplete, output.firstDataRow(), data.panel));
+        throw InputError(unitLeverageMessage(leverage.row(), input.incomplete, input.firstDataRow, input.data.panel));
     }
-    fit.panel.dropsIncompleteRows = dropIncomplete;
+    fit.panel.dropsIncompleteRows = input.dropIncomplete;
     fit.panel.incompleteRowsDropped =
-        static_cast<Eigen::Index>(std::count(incomplete.begin(), incomplete.end(), true));
+        static_cast<Eigen::Index>(std::count(input.incomplete.begin(), input.incomplete.end(), true));
     return fit;
 }
 

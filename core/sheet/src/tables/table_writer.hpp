@@ -2,7 +2,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/math/messages/text.hpp"

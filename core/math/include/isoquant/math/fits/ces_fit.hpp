@@ -24,7 +24,7 @@
 #pragma once
 
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 
 #include <optional>
 #include <string>

@@ -20,7 +20,7 @@
 // log-likelihood, AIC and BIC are those of the regression run.
 #pragma once
 
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 
 #include <Eigen/Dense>
 

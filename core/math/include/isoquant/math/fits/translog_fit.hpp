@@ -10,7 +10,7 @@
 // Cobb-Douglas (all βᵢⱼ = 0) by the Wald F on F(k(k+1)/2, n−p).
 #pragma once
 
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 
 #include <utility>
 #include <vector>

@@ -4,6 +4,8 @@
 // NIST StRD linear checks call directly (any design matrix, with or without a constant column).
 #pragma once
 
+#include "isoquant/math/numerics/regression_rows.hpp"
+
 #include <Eigen/Dense>
 
 #include <optional>
@@ -110,46 +112,6 @@ struct LeastSquaresResult {
     CovarianceKind covarianceKind = CovarianceKind::classical;
     double confidenceLevel = 0.95;
     FitStatus status = FitStatus::ok;
-};
-
-// The rows of a regression, produced a block at a time, so that a fit over a million rows never
-// holds its design in memory (the Cobb-Douglas fit takes logs block by block).
-class RegressionRows {
-public:
-    virtual ~RegressionRows() = default;
-    virtual Eigen::Index rows() const = 0;
-    virtual Eigen::Index columns() const = 0;
-    // Writes rows first … first + design.rows() − 1 of the design and of the response.
-    virtual void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design,
-                      Eigen::Ref<Eigen::VectorXd> response) const = 0;
-};
-
-// A design and response held in memory, as rows.
-class MatrixRows : public RegressionRows {
-public:
-    MatrixRows(const Eigen::MatrixXd& design, const Eigen::VectorXd& response) : design_(design), response_(response) {}
-    Eigen::Index rows() const override { return design_.rows(); }
-    Eigen::Index columns() const override { return design_.cols(); }
-    void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
-    {
-        design = design_.middleRows(first, design.rows());
-        response = response_.segment(first, response.size());
-    }
-
-private:
-    const Eigen::MatrixXd& design_;
-    const Eigen::VectorXd& response_;
-};
-
-// Thrown when the design is numerically rank deficient. `columns` lists the design columns with a
-// non-negligible weight in the (near) null-space direction: those that are collinear together.
-class CollinearColumns : public std::runtime_error {
-public:
-    explicit CollinearColumns(std::vector<Eigen::Index> columns);
-    const std::vector<Eigen::Index>& columns() const { return columns_; }
-
-private:
-    std::vector<Eigen::Index> columns_;
 };
 
 // Thrown for HC3 errors when row `row` (0-based in the regression) has leverage 1: its weight

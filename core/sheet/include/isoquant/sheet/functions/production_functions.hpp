@@ -6,7 +6,9 @@
 #include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
 
+#include <cstddef>
 #include <string>
+#include <vector>
 
 namespace isoquant {
 
@@ -39,6 +41,17 @@ struct FitArguments {
 // the data are not cut (they still need the incomplete-rows switch). Ranges of different heights
 // are returned as they are, for the shape check to name.
 FitArguments withoutTrailingEmptyRows(FitArguments arguments);
+
+// The data and options of a fit as read from its arguments (after withoutTrailingEmptyRows).
+// Throws InputError naming the argument (and row) at fault.
+struct FitInput {
+    ProductionData data;
+    ProductionFitOptions options;
+    bool dropIncomplete = false;
+    std::vector<bool> incomplete; // the rows dropped, when dropIncomplete
+    std::size_t firstDataRow = 1; // 1-based, as in messages
+};
+FitInput readFitInput(const FitArguments& arguments);
 
 // Fits after withoutTrailingEmptyRows.
 ProductionFit fitFromArguments(const FitArguments& arguments);

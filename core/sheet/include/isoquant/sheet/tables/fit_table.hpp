@@ -37,7 +37,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
-#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
 
 #include <string>
 
