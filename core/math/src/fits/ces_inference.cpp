@@ -3,6 +3,7 @@
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/least_squares.hpp"
 #include "isoquant/math/fits/returns_to_scale.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 #include "fits/fit_inference.hpp"
 
 #include <boost/math/constants/constants.hpp>
@@ -26,8 +27,6 @@ std::string cesStatusWord(NonlinearStatus status)
 namespace ces_fit {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 // Why there is no test at the point kept; empty when there is one.
 std::string untestedReason(const CesDetails& details)

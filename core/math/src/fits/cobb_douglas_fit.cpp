@@ -6,6 +6,7 @@
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -14,8 +15,6 @@
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 // The regression behind a Cobb-Douglas fit, its rows taken a block at a time (logs included), so
 // that a million-row fit never holds a log design:

@@ -2,6 +2,7 @@
 
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -10,8 +11,6 @@
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 // A column that is constant within every group is zero after demeaning, up to the rounding of the
 // group means (about n·ε of the column's size); what is left below this fraction of the column's

@@ -1,15 +1,10 @@
 #include "isoquant/math/fits/returns_to_scale.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <cmath>
 #include <limits>
 
 namespace isoquant {
-
-namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
-
-} // namespace
 
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed)
 {

@@ -58,4 +58,9 @@ std::string quoted(std::string_view text)
     return "'" + std::string(text) + "'";
 }
 
+std::string plural(std::size_t count, const std::string& noun)
+{
+    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
+}
+
 } // namespace isoquant

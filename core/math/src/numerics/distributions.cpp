@@ -1,4 +1,5 @@
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <boost/math/distributions/chi_squared.hpp>
 #include <boost/math/distributions/fisher_f.hpp>
@@ -10,7 +11,6 @@
 namespace isoquant {
 
 namespace {
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 }
 
 double studentTwoSidedPValue(double t, double degreesOfFreedom)

@@ -1,6 +1,7 @@
 #include "isoquant/math/numerics/least_squares.hpp"
 
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include "numerics/least_squares_factor.hpp"
 
@@ -13,8 +14,6 @@
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 // A leverage this close to 1 counts as 1: hᵢᵢ = ‖Aᵢ‖² carries rounding of a few p·ε (1e-14 at
 // most here), and a true 1 − 1e-10 would already scale its row's HC3 weight by 1e20 (common

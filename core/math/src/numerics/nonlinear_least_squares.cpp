@@ -1,6 +1,7 @@
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <Eigen/SVD>
 #include <unsupported/Eigen/NonLinearOptimization>
@@ -13,8 +14,6 @@
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 // Stands in for a residual outside the model's domain: finite, so the solver's norms stay finite,
 // and far above any real residual, so the step is rejected (MINPACK rejects a step whose residual

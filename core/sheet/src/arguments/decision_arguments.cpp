@@ -1,6 +1,7 @@
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 
 #include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -10,17 +11,7 @@ namespace isoquant {
 
 namespace {
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
-std::string describe(const Cell& cell)
-{
-    return isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-}
-
-std::string inputCountText(Eigen::Index count)
-{
-    return std::to_string(count) + (count == 1 ? " input" : " inputs");
-}
+std::string inputCountText(Eigen::Index count) { return plural(static_cast<std::size_t>(count), "input"); }
 
 } // namespace
 
@@ -54,30 +45,22 @@ Eigen::VectorXd readPrices(const CellTable& range, const std::string& argument, 
 
 SubstitutionKind readSubstitutionKind(const Cell& cell)
 {
-    if (isOmitted(cell)) return SubstitutionKind::direct;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "direct")) return SubstitutionKind::direct;
-        if (equalsIgnoringCase(word, "allen")) return SubstitutionKind::allen;
-        if (equalsIgnoringCase(word, "morishima")) return SubstitutionKind::morishima;
-    }
-    throw InputError("kind: " + describe(cell) + " is not a kind; use \"direct\", \"allen\" or \"morishima\"");
+    return readChoice<SubstitutionKind>(cell, "kind", "a kind",
+                                        {{"direct", SubstitutionKind::direct},
+                                         {"allen", SubstitutionKind::allen},
+                                         {"morishima", SubstitutionKind::morishima}},
+                                        SubstitutionKind::direct);
 }
 
 CostMeasure readCostMeasure(const Cell& cell)
 {
-    if (isOmitted(cell)) return CostMeasure::total;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "total")) return CostMeasure::total;
-        if (equalsIgnoringCase(word, "marginal")) return CostMeasure::marginal;
-        if (equalsIgnoringCase(word, "average")) return CostMeasure::average;
-        if (equalsIgnoringCase(word, "cost elasticity")) return CostMeasure::costElasticity;
-        if (equalsIgnoringCase(word, "returns to scale")) return CostMeasure::returnsToScale;
-    }
-    throw InputError("what: " + describe(cell) +
-                     " is not a cost measure; use \"total\", \"marginal\", \"average\", \"cost elasticity\" or "
-                     "\"returns to scale\"");
+    return readChoice<CostMeasure>(cell, "what", "a cost measure",
+                                   {{"total", CostMeasure::total},
+                                    {"marginal", CostMeasure::marginal},
+                                    {"average", CostMeasure::average},
+                                    {"cost elasticity", CostMeasure::costElasticity},
+                                    {"returns to scale", CostMeasure::returnsToScale}},
+                                   CostMeasure::total);
 }
 
 } // namespace isoquant

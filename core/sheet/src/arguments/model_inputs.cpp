@@ -7,11 +7,6 @@ namespace isoquant {
 
 namespace {
 
-std::string countOf(Eigen::Index count, const std::string& noun)
-{
-    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
-}
-
 // Whether the model's input labels are the defaults of a fit without a header row.
 bool namesNoInputs(const ProductionModel& model)
 {
@@ -64,8 +59,8 @@ NumericColumns readModelInputs(const CellTable& inputs, const ProductionModel& m
     }
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     if (read.values.cols() != k)
-        throw InputError("inputs: has " + countOf(read.values.cols(), "column") + " but the model has " +
-                         countOf(k, "input"));
+        throw InputError("inputs: has " + plural(static_cast<std::size_t>(read.values.cols()), "column") + " but the model has " +
+                         plural(static_cast<std::size_t>(k), "input"));
     return read;
 }
 

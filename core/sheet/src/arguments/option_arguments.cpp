@@ -7,19 +7,22 @@
 
 namespace isoquant {
 
-namespace {
-
-bool isDefault(const Cell& cell)
-{
-    return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty());
-}
-
 std::string describe(const Cell& cell)
 {
-    return isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
+    if (isText(cell)) return quoted(std::get<std::string>(cell));
+    return isNumber(cell) ? formatNumber(std::get<double>(cell)) : std::string("an empty cell");
 }
 
-} // namespace
+std::string unknownChoiceMessage(const Cell& cell, const std::string& argument, const std::string& what,
+                                 const std::vector<std::string>& words)
+{
+    std::string offered;
+    for (std::size_t i = 0; i < words.size(); ++i) {
+        if (i > 0) offered += i + 1 == words.size() ? " or " : ", ";
+        offered += "\"" + words[i] + "\"";
+    }
+    return argument + ": " + describe(cell) + " is not " + what + "; use " + offered;
+}
 
 std::string formWord(ProductionForm form)
 {
@@ -33,18 +36,16 @@ std::string formWord(ProductionForm form)
 
 ProductionForm readFormArgument(const Cell& cell)
 {
-    if (isDefault(cell)) return ProductionForm::cobbDouglas;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        for (const auto form : {ProductionForm::cobbDouglas, ProductionForm::ces, ProductionForm::translog})
-            if (equalsIgnoringCase(word, formWord(form))) return form;
-    }
-    throw InputError("form: " + describe(cell) + " is not a form; use \"cobb-douglas\", \"ces\" or \"translog\"");
+    return readChoice<ProductionForm>(cell, "form", "a form",
+                                      {{"cobb-douglas", ProductionForm::cobbDouglas},
+                                       {"ces", ProductionForm::ces},
+                                       {"translog", ProductionForm::translog}},
+                                      ProductionForm::cobbDouglas);
 }
 
 bool readSwitchArgument(const Cell& cell, const std::string& argument)
 {
-    if (isDefault(cell)) return false;
+    if (isOmitted(cell)) return false;
     if (isNumber(cell)) {
         const double value = std::get<double>(cell);
         if (value == 0 || value == 1) return value == 1;
@@ -54,21 +55,17 @@ bool readSwitchArgument(const Cell& cell, const std::string& argument)
 
 CovarianceKind readErrorsArgument(const Cell& cell)
 {
-    if (isDefault(cell)) return CovarianceKind::classical;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "classical")) return CovarianceKind::classical;
-        if (equalsIgnoringCase(word, "hc1")) return CovarianceKind::hc1;
-        if (equalsIgnoringCase(word, "hc3")) return CovarianceKind::hc3;
-        if (equalsIgnoringCase(word, "cluster")) return CovarianceKind::cluster;
-    }
-    throw InputError("errors: " + describe(cell) +
-                     " is not a kind of standard error; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"");
+    return readChoice<CovarianceKind>(cell, "errors", "a kind of standard error",
+                                      {{"classical", CovarianceKind::classical},
+                                       {"hc1", CovarianceKind::hc1},
+                                       {"hc3", CovarianceKind::hc3},
+                                       {"cluster", CovarianceKind::cluster}},
+                                      CovarianceKind::classical);
 }
 
 double readLevelArgument(const Cell& cell, const std::string& argument)
 {
-    if (isDefault(cell)) return 0.95;
+    if (isOmitted(cell)) return 0.95;
     if (isNumber(cell)) {
         const double level = std::get<double>(cell);
         if (level > 0 && level < 1) return level;

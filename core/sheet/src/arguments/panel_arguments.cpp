@@ -1,5 +1,7 @@
 #include "isoquant/sheet/arguments/panel_arguments.hpp"
 
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -12,8 +14,6 @@
 namespace isoquant {
 
 namespace {
-
-bool isBlank(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
 
 std::string rowsOfData(std::size_t count) { return std::to_string(count) + (count == 1 ? " row" : " rows") + " of data"; }
 
@@ -32,14 +32,10 @@ std::size_t groupsHeaderRows(const CellTable& groups, std::size_t dataRows)
 
 EffectsKind readEffectsArgument(const Cell& cell)
 {
-    if (isBlank(cell)) return EffectsKind::none;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        for (const auto effects : {EffectsKind::none, EffectsKind::fixed, EffectsKind::twoWay})
-            if (equalsIgnoringCase(word, effectsWord(effects))) return effects;
-    }
-    const std::string given = isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-    throw InputError("effects: " + given + " is not a kind of effects; use \"none\", \"fixed\" or \"two-way\"");
+    return readChoice<EffectsKind>(cell, "effects", "a kind of effects",
+                                   {{"none", EffectsKind::none}, {"fixed", EffectsKind::fixed},
+                                    {"two-way", EffectsKind::twoWay}},
+                                   EffectsKind::none);
 }
 
 std::vector<bool> findIncompleteRows(const RowRanges& ranges)
@@ -82,7 +78,7 @@ void readGroups(const CellTable& groups, std::size_t dataRows, const std::vector
         if (skippedRows && (*skippedRows)[row]) continue;
         const Cell& cell = groups.at(row + headerRows, 0);
         const std::string place = "groups: row " + std::to_string(row + headerRows + 1);
-        if (isBlank(cell)) throw InputError(place + " is empty; every row needs the identifier of its plant or firm");
+        if (isOmitted(cell)) throw InputError(place + " is empty; every row needs the identifier of its plant or firm");
         if (isNumber(cell) && !std::isfinite(std::get<double>(cell))) throw InputError(place + " is not a finite number");
         const bool isNumberId = isNumber(cell);
         const std::string label = isNumberId ? formatNumber(std::get<double>(cell)) : std::get<std::string>(cell);

@@ -19,11 +19,6 @@ std::string cellPlace(const std::string& argument, std::size_t period, std::size
     return text;
 }
 
-std::string plural(Eigen::Index count, const std::string& noun)
-{
-    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
-}
-
 // The label's words, lower-cased: runs of letters and digits (and of any non-ASCII byte, so that
 // "Arbeit" and "Lohnanteil" stay whole words in any language).
 std::vector<std::string> wordsOf(const std::string& label)
@@ -110,8 +105,8 @@ std::vector<Cell> readPeriodNames(const CellTable& periods, const NumericColumns
     if (periods.columns() != 1)
         throw InputError("periods: must be one column; it has " + std::to_string(periods.columns()));
     if (periods.rows() != dataRows && periods.rows() != dataRows + 1)
-        throw InputError("periods: has " + plural(static_cast<Eigen::Index>(periods.rows()), "row") + " but " +
-                         rowsArgument + " has " + plural(static_cast<Eigen::Index>(dataRows), "period") +
+        throw InputError("periods: has " + plural(static_cast<std::size_t>(periods.rows()), "row") + " but " +
+                         rowsArgument + " has " + plural(static_cast<std::size_t>(dataRows), "period") +
                          "; give one year or name per period (a header row may come first)");
     const std::size_t first = periods.rows() - dataRows;
     std::vector<Cell> names;
@@ -154,8 +149,8 @@ void requireSamePeriods(const NumericColumns& reference, const std::string& refe
     if (reference.hasHeader != other.hasHeader)
         hint = " (a header row of text was found in " + (reference.hasHeader ? referenceArgument : otherArgument) +
                " only)";
-    throw InputError(otherArgument + ": has " + plural(other.values.rows(), "period") + " but " + referenceArgument +
-                     " has " + plural(reference.values.rows(), "period") + hint);
+    throw InputError(otherArgument + ": has " + plural(static_cast<std::size_t>(other.values.rows()), "period") + " but " + referenceArgument +
+                     " has " + plural(static_cast<std::size_t>(reference.values.rows()), "period") + hint);
 }
 
 void requireShareLabels(const std::string& argument, const std::vector<std::string>& shareLabels,

@@ -19,15 +19,7 @@ namespace isoquant {
 
 namespace {
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
-std::string describe(const Cell& cell)
-{
-    if (isText(cell)) return quoted(std::get<std::string>(cell));
-    return isNumber(cell) ? formatNumber(std::get<double>(cell)) : std::string("an empty cell");
-}
-
-std::string rowsText(Eigen::Index rows) { return std::to_string(rows) + (rows == 1 ? " row" : " rows"); }
+std::string rowsText(Eigen::Index rows) { return plural(static_cast<std::size_t>(rows), "row"); }
 
 void requireSameRows(const NumericColumns& cost, const NumericColumns& other, const std::string& name)
 {
@@ -46,13 +38,9 @@ NumericColumns readOneColumn(const CellTable& range, const std::string& name)
 
 CostForm readCostForm(const Cell& cell)
 {
-    if (isOmitted(cell)) return CostForm::cobbDouglas;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "cobb-douglas")) return CostForm::cobbDouglas;
-        if (equalsIgnoringCase(word, "translog")) return CostForm::translog;
-    }
-    throw InputError("form: " + describe(cell) + " is not a cost form; use \"cobb-douglas\" or \"translog\"");
+    return readChoice<CostForm>(cell, "form", "a cost form",
+                                {{"cobb-douglas", CostForm::cobbDouglas}, {"translog", CostForm::translog}},
+                                CostForm::cobbDouglas);
 }
 
 // The arguments this slice declares but does not yet use.

@@ -26,8 +26,6 @@ namespace isoquant {
 
 namespace {
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
 std::string inputName(const ProductionModel& model, Eigen::Index input)
 {
     return quoted(model.inputLabels[static_cast<std::size_t>(input)]);

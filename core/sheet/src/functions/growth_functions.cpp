@@ -4,6 +4,7 @@
 #include "isoquant/sheet/tables/growth_table.hpp"
 #include "isoquant/math/growth/index_numbers.hpp"
 #include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
@@ -20,42 +21,25 @@ namespace {
 
 enum class GrowthMethod { tornqvist, fixed };
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
-std::string describe(const Cell& cell)
-{
-    return isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-}
-
 // "tornqvist" may also be written with its ö.
-bool isTornqvistWord(const std::string& word)
-{
-    return equalsIgnoringCase(word, "tornqvist") || equalsIgnoringCase(word, "törnqvist");
-}
-
 GrowthMethod readGrowthMethod(const Cell& cell)
 {
-    if (isOmitted(cell)) return GrowthMethod::tornqvist;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (isTornqvistWord(word)) return GrowthMethod::tornqvist;
-        if (equalsIgnoringCase(word, "fixed")) return GrowthMethod::fixed;
-    }
-    throw InputError("method: " + describe(cell) + " is not a method; use \"tornqvist\" or \"fixed\"");
+    return readChoice<GrowthMethod>(cell, "method", "a method",
+                                    {{"tornqvist", GrowthMethod::tornqvist},
+                                     {"törnqvist", GrowthMethod::tornqvist, false},
+                                     {"fixed", GrowthMethod::fixed}},
+                                    GrowthMethod::tornqvist);
 }
 
 IndexFormula readIndexFormula(const Cell& cell)
 {
-    if (isOmitted(cell)) return IndexFormula::tornqvist;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (isTornqvistWord(word)) return IndexFormula::tornqvist;
-        if (equalsIgnoringCase(word, "laspeyres")) return IndexFormula::laspeyres;
-        if (equalsIgnoringCase(word, "paasche")) return IndexFormula::paasche;
-        if (equalsIgnoringCase(word, "fisher")) return IndexFormula::fisher;
-    }
-    throw InputError("method: " + describe(cell) +
-                     " is not an index method; use \"tornqvist\", \"laspeyres\", \"paasche\" or \"fisher\"");
+    return readChoice<IndexFormula>(cell, "method", "an index method",
+                                    {{"tornqvist", IndexFormula::tornqvist},
+                                     {"törnqvist", IndexFormula::tornqvist, false},
+                                     {"laspeyres", IndexFormula::laspeyres},
+                                     {"paasche", IndexFormula::paasche},
+                                     {"fisher", IndexFormula::fisher}},
+                                    IndexFormula::tornqvist);
 }
 
 double readIndexBase(const Cell& cell)
@@ -66,11 +50,6 @@ double readIndexBase(const Cell& cell)
         if (std::isfinite(base) && base > 0) return base;
     }
     throw InputError("base: " + describe(cell) + " is not a base value; give a positive number such as 1 or 100");
-}
-
-std::string plural(std::size_t count, const std::string& noun)
-{
-    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
 }
 
 void requireColumns(const NumericColumns& columns, const std::string& argument, std::size_t wanted,

@@ -19,19 +19,14 @@ namespace isoquant {
 
 namespace {
 
-std::string countOf(Eigen::Index count, const std::string& noun)
-{
-    return std::to_string(count) + " " + noun + (count == 1 ? "" : "s");
-}
-
 void requireSameRows(const NumericColumns& output, const NumericColumns& other, const std::string& name)
 {
     if (other.values.rows() == output.values.rows()) return;
     std::string hint;
     if (output.hasHeader != other.hasHeader)
         hint = " (a header row of text was found in " + std::string(output.hasHeader ? "output" : name) + " only)";
-    throw InputError(name + ": has " + countOf(other.values.rows(), "row") + " of data but output has " +
-                     countOf(output.values.rows(), "row") + hint);
+    throw InputError(name + ": has " + plural(static_cast<std::size_t>(other.values.rows()), "row") + " of data but output has " +
+                     plural(static_cast<std::size_t>(output.values.rows()), "row") + hint);
 }
 
 // The fitted table marks a control's row by this ending; an input so labelled would read back as one.
@@ -221,26 +216,43 @@ CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Ce
                        bundles, meanOutput ? "mean output" : "output");
 }
 
-CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+namespace {
+
+// One column of a derivative with respect to the chosen input, per row of inputs; the header is
+// `heading` and the chosen input's label.
+template <typename Derivative>
+CellTable inputDerivativeColumn(const CellTable& model, const CellTable& inputs, const Cell& input,
+                                Derivative derivative, const std::string& heading)
 {
     const ProductionModel technology = cachedProductionModel(model);
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
-                           return technology.technology->marginalProduct(bundle, chosen);
+                           return derivative(*technology.technology, bundle, chosen);
                        }),
-                       bundles, "marginal product of " + technology.inputLabels[static_cast<std::size_t>(chosen)]);
+                       bundles, heading + technology.inputLabels[static_cast<std::size_t>(chosen)]);
+}
+
+} // namespace
+
+CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+{
+    return inputDerivativeColumn(
+        model, inputs, input,
+        [](const Technology& technology, const Eigen::VectorXd& bundle, Eigen::Index chosen) {
+            return technology.marginalProduct(bundle, chosen);
+        },
+        "marginal product of ");
 }
 
 CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index chosen = readInputSelector(input, technology, "input");
-    const NumericColumns bundles = readModelInputs(inputs, technology);
-    return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
-                           return technology.technology->elasticity(bundle, chosen);
-                       }),
-                       bundles, "output elasticity of " + technology.inputLabels[static_cast<std::size_t>(chosen)]);
+    return inputDerivativeColumn(
+        model, inputs, input,
+        [](const Technology& technology, const Eigen::VectorXd& bundle, Eigen::Index chosen) {
+            return technology.elasticity(bundle, chosen);
+        },
+        "output elasticity of ");
 }
 
 CellTable scaleColumn(const CellTable& model, const CellTable& inputs)

@@ -9,6 +9,7 @@
 #include "isoquant/math/fits/production_fit.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <cmath>
 #include <limits>
@@ -16,8 +17,6 @@
 namespace isoquant {
 
 namespace {
-
-constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 std::string rowPlace(std::size_t row) { return "model: row " + std::to_string(row + 1); }
 

@@ -6,14 +6,13 @@
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <cmath>
 #include <limits>
 #include <string>
 
 namespace isoquant {
-
-inline constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 inline Cell numberCell(double value)
 {

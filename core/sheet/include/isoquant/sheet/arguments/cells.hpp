@@ -16,6 +16,8 @@ using Cell = std::variant<std::monostate, double, std::string>;
 inline bool isEmpty(const Cell& cell) { return std::holds_alternative<std::monostate>(cell); }
 inline bool isNumber(const Cell& cell) { return std::holds_alternative<double>(cell); }
 inline bool isText(const Cell& cell) { return std::holds_alternative<std::string>(cell); }
+// An optional argument left out: an empty cell or an empty text (what Calc passes for a skipped one).
+inline bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
 
 // In the order of Cell's alternatives, so that kind == Cell::index().
 enum class CellKind : std::uint8_t { empty = 0, number = 1, text = 2 };
