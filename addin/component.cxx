@@ -1,8 +1,5 @@
 // The shared library's entry points: LibreOffice asks for a factory by implementation name.
 #include "production_functions.hxx"
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-#include "benchmark_floor.hxx"
-#endif
 
 #include <com/sun/star/lang/XSingleComponentFactory.hpp>
 #include <cppuhelper/factory.hxx>
@@ -14,11 +11,7 @@ namespace {
 css::uno::Reference<css::uno::XInterface> SAL_CALL createProductionFunctions(
     const css::uno::Reference<css::uno::XComponentContext>&)
 {
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::BenchmarkProductionFunctions);
-#else
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::ProductionFunctions);
-#endif
+    return isoquant::addin::createAddIn();
 }
 
 } // namespace

@@ -1,18 +1,12 @@
 #include "function_table.hxx"
 
 #include "isoquant/math/messages/text.hpp"
+#include <utility>
 
 namespace isoquant::addin {
 
 namespace {
 
-// Arguments shared by PRODFIT and PRODSTAT.
-constexpr ArgumentInfo outputArgument{
-    "output", "Output of each row (plant, branch or period): one column of positive numbers. A first row of text is "
-              "read as a header."};
-constexpr ArgumentInfo inputsArgument{
-    "inputs", "Inputs of each row, one column per input (labour, capital, …), positive numbers, as many rows as "
-              "output. A first row of text names the inputs."};
 constexpr ArgumentInfo formArgument{
     "form", "Functional form: \"cobb-douglas\" (default), \"ces\" (exactly two inputs, by nonlinear least "
             "squares) or \"translog\"."};
@@ -66,11 +60,17 @@ constexpr ArgumentInfo pricesArgument{
     "input prices", "One positive price per input, in the model's input order: a row of prices gives a row of "
                     "results, a column of prices a column."};
 
+std::vector<FunctionInfo> withBuildSpecificFunctions(std::vector<FunctionInfo> functions)
+{
+    for (FunctionInfo& function : buildSpecificFunctions()) functions.push_back(std::move(function));
+    return functions;
+}
+
 } // namespace
 
 const std::vector<FunctionInfo>& functionTable()
 {
-    static const std::vector<FunctionInfo> table{
+    static const std::vector<FunctionInfo> table = withBuildSpecificFunctions({
         {"prodFit", "PRODFIT",
          "Fits a production function to output and inputs by least squares on logs. Returns a table (enter as an "
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
@@ -232,13 +232,7 @@ const std::vector<FunctionInfo>& functionTable()
           {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
           {"input j", "Optional: the input solved for, its number or its label (default: the first other "
                       "input)."}}},
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-        // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
-        {"benchFloor", "ISOQUANTFLOOR",
-         "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
-         {outputArgument, inputsArgument}},
-#endif
-    };
+    });
     return table;
 }
 

@@ -117,4 +117,8 @@ private:
     css::lang::Locale locale_;
 };
 
+// The add-in object of this build: ProductionFunctions in isoquant.oxt (extension.cxx), the
+// benchmark extension's BenchmarkProductionFunctions there (benchmark_floor.cxx).
+cppu::OWeakObject* createAddIn();
+
 } // namespace isoquant::addin
