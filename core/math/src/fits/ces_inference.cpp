@@ -6,7 +6,6 @@
 #include "isoquant/math/numerics/not_a_number.hpp"
 #include "fits/fit_inference.hpp"
 
-#include <boost/math/constants/constants.hpp>
 
 #include <cmath>
 #include <limits>
@@ -75,10 +74,11 @@ void setSummary(ProductionFit& fit, const CesLogs& logs, const NonlinearInferenc
     summary.residualStandardDeviation = inference.residualStandardDeviation;
     summary.fStatistic = notANumber;
     summary.fPValue = notANumber;
-    const double count = static_cast<double>(n);
-    summary.logLikelihood = -count / 2 * (std::log(boost::math::constants::two_pi<double>()) + std::log(rss / count) + 1);
-    summary.aic = -2 * summary.logLikelihood + 2 * parameterCount;
-    summary.bic = -2 * summary.logLikelihood + parameterCount * std::log(count);
+    const LikelihoodCriteria likelihood =
+        gaussianLikelihood(rss, static_cast<double>(n), static_cast<double>(parameterCount));
+    summary.logLikelihood = likelihood.logLikelihood;
+    summary.aic = likelihood.aic;
+    summary.bic = likelihood.bic;
     summary.interceptColumn = 0;
     summary.confidenceLevel = level;
     const bool exact = std::sqrt(rss) <= LeastSquaresOptions{}.perfectFitTolerance * logs.logOutput.norm();

@@ -7,6 +7,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <utility>
 
 namespace isoquant {
 
@@ -124,6 +125,44 @@ Eigen::Index panelParameterCount(const PanelColumns& panel, EffectsKind effects)
     return count;
 }
 
+namespace {
+
+// The extended design of a panel regression held in full: the base columns, then the trend (its
+// origin and column recorded in `result`) or the period dummies (the periods and first column).
+std::pair<Eigen::MatrixXd, Eigen::VectorXd> extendedDesign(const RegressionRows& base, const PanelColumns& panel,
+                                                           EffectsKind effects, Eigen::Index n, PanelRegression& result)
+{
+    Eigen::MatrixXd extended(n, base.columns());
+    Eigen::VectorXd response(n);
+    base.fill(0, extended, response);
+    auto append = [&extended](const Eigen::MatrixXd& columns) {
+        Eigen::MatrixXd wider(extended.rows(), extended.cols() + columns.cols());
+        wider << extended, columns;
+        extended = std::move(wider);
+    };
+    if (panel.hasPeriods() && effects != EffectsKind::twoWay) {
+        result.trendOrigin = panel.periods.minCoeff();
+        if (panel.periods.maxCoeff() == result.trendOrigin)
+            throw InputError("trend: every row holds the same period; a trend needs at least two different periods");
+        result.trendColumn = extended.cols();
+        append((panel.periods.array() - result.trendOrigin).matrix());
+    }
+    if (effects == EffectsKind::twoWay) {
+        result.periodValues = distinctPeriods(panel.periods);
+        if (result.periodValues.size() < 2)
+            throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
+        result.firstPeriodColumn = extended.cols();
+        const auto later = static_cast<std::size_t>(result.periodValues.size() - 1);
+        checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(extended.cols()) + later, "trend",
+                        "two-way effects with " + groupedCount(later + 1) + " periods",
+                        "use a trend instead of two-way effects, or fewer periods");
+        append(periodDummies(panel.periods, result.periodValues));
+    }
+    return {std::move(extended), std::move(response)};
+}
+
+} // namespace
+
 PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumns& panel, EffectsKind effects,
                                    LeastSquaresOptions options)
 {
@@ -154,33 +193,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
     if (!panel.hasPeriods() && effects == EffectsKind::none) {
         fitRows(base);
     } else {
-        // The extended design: base columns, then the trend or the period dummies.
-        Eigen::MatrixXd extended(n, base.columns());
-        Eigen::VectorXd response(n);
-        base.fill(0, extended, response);
-        auto append = [&extended](const Eigen::MatrixXd& columns) {
-            Eigen::MatrixXd wider(extended.rows(), extended.cols() + columns.cols());
-            wider << extended, columns;
-            extended = std::move(wider);
-        };
-        if (panel.hasPeriods() && effects != EffectsKind::twoWay) {
-            result.trendOrigin = panel.periods.minCoeff();
-            if (panel.periods.maxCoeff() == result.trendOrigin)
-                throw InputError("trend: every row holds the same period; a trend needs at least two different periods");
-            result.trendColumn = extended.cols();
-            append((panel.periods.array() - result.trendOrigin).matrix());
-        }
-        if (effects == EffectsKind::twoWay) {
-            result.periodValues = distinctPeriods(panel.periods);
-            if (result.periodValues.size() < 2)
-                throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
-            result.firstPeriodColumn = extended.cols();
-            const auto later = static_cast<std::size_t>(result.periodValues.size() - 1);
-            checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(extended.cols()) + later, "trend",
-                            "two-way effects with " + groupedCount(later + 1) + " periods",
-                            "use a trend instead of two-way effects, or fewer periods");
-            append(periodDummies(panel.periods, result.periodValues));
-        }
+        auto [extended, response] = extendedDesign(base, panel, effects, n, result);
 
         if (result.effectsAbsorbConstant) {
             const Eigen::MatrixXd slopes = extended.rightCols(extended.cols() - 1);

@@ -161,11 +161,37 @@ ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions&
     return chosen;
 }
 
+// Standard errors √diag(V), t = b/se, two-sided p on t(df) and the bounds b ± t_crit·se, from the
+// coefficients and covariance already in `result`.
+void addCoefficientInference(LeastSquaresResult& result, double inferenceDf)
+{
+    const Eigen::Index p = result.coefficients.size();
+    result.standardErrors = result.covariance.diagonal().cwiseSqrt();
+    result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
+    result.pValues.resize(p);
+    for (Eigen::Index j = 0; j < p; ++j)
+        result.pValues(j) = studentTwoSidedPValue(result.tStatistics(j), inferenceDf);
+    const double critical = studentCriticalValue(result.confidenceLevel, inferenceDf);
+    result.lowerBounds = result.coefficients - critical * result.standardErrors;
+    result.upperBounds = result.coefficients + critical * result.standardErrors;
+}
+
 } // namespace
 
 UnitLeverage::UnitLeverage(Eigen::Index row)
     : std::runtime_error("a row has leverage 1; HC3 errors are undefined"), row_(row)
 {
+}
+
+LikelihoodCriteria gaussianLikelihood(double residualSumOfSquares, double observations, double parameters)
+{
+    const double pi = 3.14159265358979323846;
+    LikelihoodCriteria criteria;
+    criteria.logLikelihood =
+        -observations / 2.0 * (std::log(2.0 * pi) + std::log(residualSumOfSquares / observations) + 1.0);
+    criteria.aic = -2.0 * criteria.logLikelihood + 2.0 * parameters;
+    criteria.bic = -2.0 * criteria.logLikelihood + parameters * std::log(observations);
+    return criteria;
 }
 
 LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
@@ -243,22 +269,13 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     else
         result.covariance = (result.residualSumOfSquares / df) * (bread * bread.transpose());
 
-    result.standardErrors = result.covariance.diagonal().cwiseSqrt();
-    result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
-    result.pValues.resize(p);
-    for (Eigen::Index j = 0; j < p; ++j)
-        result.pValues(j) = studentTwoSidedPValue(result.tStatistics(j), inferenceDf);
-    const double critical = studentCriticalValue(options.confidenceLevel, inferenceDf);
-    result.lowerBounds = result.coefficients - critical * result.standardErrors;
-    result.upperBounds = result.coefficients + critical * result.standardErrors;
-
+    addCoefficientInference(result, inferenceDf);
     addOverallTest(result);
-
-    const double nd = static_cast<double>(n);
-    const double pi = 3.14159265358979323846;
-    result.logLikelihood = -nd / 2.0 * (std::log(2.0 * pi) + std::log(result.residualSumOfSquares / nd) + 1.0);
-    result.aic = -2.0 * result.logLikelihood + 2.0 * static_cast<double>(allParameters);
-    result.bic = -2.0 * result.logLikelihood + static_cast<double>(allParameters) * std::log(nd);
+    const LikelihoodCriteria likelihood =
+        gaussianLikelihood(result.residualSumOfSquares, static_cast<double>(n), static_cast<double>(allParameters));
+    result.logLikelihood = likelihood.logLikelihood;
+    result.aic = likelihood.aic;
+    result.bic = likelihood.bic;
 
     if (std::sqrt(result.residualSumOfSquares) <= options.perfectFitTolerance * std::sqrt(chosen.response.sumOfSquares))
         result.status = FitStatus::perfectFit;

@@ -125,6 +125,17 @@ private:
     Eigen::Index row_;
 };
 
+// The Gaussian log-likelihood of a least-squares fit with n residuals and sum of squares RSS (σ²
+// estimated as RSS/n and not counted among the parameters):
+//   LL = −n/2·(ln 2π + ln(RSS/n) + 1),   AIC = −2LL + 2p,   BIC = −2LL + p·ln n.
+// The one formula of every form (least squares, ces, translog), so their criteria compare.
+struct LikelihoodCriteria {
+    double logLikelihood = 0;
+    double aic = 0;
+    double bic = 0;
+};
+LikelihoodCriteria gaussianLikelihood(double residualSumOfSquares, double observations, double parameters);
+
 // Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
 // estimate allows, else with column pivoting in long double (see LeastSquaresOptions).
 // `interceptColumn` names the constant column, if any: it decides how TSS, R² and the overall F
