@@ -1,6 +1,7 @@
 #include "function_table.hxx"
 
 #include "isoquant/math/messages/text.hpp"
+
 #include <utility>
 
 namespace isoquant::addin {
@@ -64,40 +65,40 @@ constexpr ArgumentInfo pricesArgument{
 std::vector<FunctionInfo> productionFitFunctions()
 {
     return {
-    {"prodFit", "PRODFIT",
-     "Fits a production function to output and inputs by least squares on logs. Returns a table (enter as an "
-     "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
-     "returns to scale with the test that it equals 1, and a verdict.",
-     {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-      controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
-    {"prodStat", "PRODSTAT",
-     "One value of the PRODFIT table, looked up by row and column label, without an array formula.",
-     {outputArgument, inputsArgument,
-      {"row label", "A row of the table: ln A, an input's label, R2, adjusted R2, residual SD, F, "
-                    "log-likelihood, AIC, BIC, returns to scale, verdict, observations, smearing factor…; "
-                    "with effects also \"effect of group <label>\" (and \"effect of period <year>\")."},
-      {"column label", "value (default), std. error, t, p-value, lower bound or upper bound."},
-      formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
-      effectsArgument, trendArgument, incompleteRowsArgument}},
-    {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
-     {modelArgument, bundlesArgument,
-      {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "
-               "for the median prediction, exp of the fitted log."}}},
-    {"prodMarginal", "PRODMARGINAL",
-     "Marginal product of one input for each row of inputs: the extra output from one more unit of it.",
-     {modelArgument, bundlesArgument, inputArgument}},
-    {"prodElasticity", "PRODELASTICITY",
-     "Output elasticity of one input for each row of inputs: the % change in output per 1% more of it.",
-     {modelArgument, bundlesArgument, inputArgument}},
-    {"prodScale", "PRODSCALE",
-     "Returns to scale: the % change in output when every input rises by 1% (the sum of the elasticities).",
-     {modelArgument,
-      {"inputs", "Optional rows of input values: the result is then a column with one value per row."}}},
-    {"prodReturns", "PRODRETURNS",
-     "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
-     "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "
-     "table without a test (boundary, not converged, not identified) gives its own \"not tested (...)\".",
-     {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
+        {"prodFit", "PRODFIT",
+         "Fits a production function to output and inputs by least squares on logs. Returns a table (enter as an "
+         "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
+         "returns to scale with the test that it equals 1, and a verdict.",
+         {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
+        {"prodStat", "PRODSTAT",
+         "One value of the PRODFIT table, looked up by row and column label, without an array formula.",
+         {outputArgument, inputsArgument,
+          {"row label", "A row of the table: ln A, an input's label, R2, adjusted R2, residual SD, F, "
+                        "log-likelihood, AIC, BIC, returns to scale, verdict, observations, smearing factor…; "
+                        "with effects also \"effect of group <label>\" (and \"effect of period <year>\")."},
+          {"column label", "value (default), std. error, t, p-value, lower bound or upper bound."},
+          formArgument, constantReturnsArgument, errorsArgument, levelArgument, controlsArgument, groupsArgument,
+          effectsArgument, trendArgument, incompleteRowsArgument}},
+        {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
+         {modelArgument, bundlesArgument,
+          {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "
+                   "for the median prediction, exp of the fitted log."}}},
+        {"prodMarginal", "PRODMARGINAL",
+         "Marginal product of one input for each row of inputs: the extra output from one more unit of it.",
+         {modelArgument, bundlesArgument, inputArgument}},
+        {"prodElasticity", "PRODELASTICITY",
+         "Output elasticity of one input for each row of inputs: the % change in output per 1% more of it.",
+         {modelArgument, bundlesArgument, inputArgument}},
+        {"prodScale", "PRODSCALE",
+         "Returns to scale: the % change in output when every input rises by 1% (the sum of the elasticities).",
+         {modelArgument,
+          {"inputs", "Optional rows of input values: the result is then a column with one value per row."}}},
+        {"prodReturns", "PRODRETURNS",
+         "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
+         "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "
+         "table without a test (boundary, not converged, not identified) gives its own \"not tested (...)\".",
+         {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
     };
 }
 
@@ -105,43 +106,43 @@ std::vector<FunctionInfo> productionFitFunctions()
 std::vector<FunctionInfo> growthFunctions()
 {
     return {
-    {"prodTfp", "PRODTFP",
-     "Total factor productivity of each row: observed output divided by the output the model predicts from that "
-     "row's inputs (1 = exactly as predicted). A column, one value per row. On the rows a PRODFIT table was "
-     "fitted to, the geometric mean is 1 (with a trend, when periods is given).",
-     {modelArgument, outputArgument,
-      {"inputs", "Inputs of each row in the model's input order, as many rows as output. A first row of text "
-                 "names the inputs."},
-      {"periods", "Optional, for a model with a trend: the period (year) of each row, as many rows as output. "
-                  "Each row is then compared with its own period's technology: ln A + technical change per "
-                  "period × (period - latest period)."}}},
-    {"prodGrowth", "PRODGROWTH",
-     "Growth accounting from one period to the next: output growth split into each input's contribution, a "
-     "scale effect and TFP growth (the residual), in log differences, plus a total row. Returns a table (enter "
-     "as an array formula). TFP growth excludes the scale effect: the Solow residual (output growth minus the "
-     "contributions) = scale effect + TFP growth.",
-     {{"output", "Output of each period, in time order: one column of positive numbers. A first row of text is "
-                 "read as a header."},
-      {"inputs", "Input quantities of each period, one column per input, positive, as many periods as output. "
-                 "A first row of text names the inputs."},
-      {"weights", "A model (a PRODFIT table or a typed model: its elasticities at each period's inputs) or cost "
-                  "shares of the inputs, one column per input and one row per period, each row summing to 1 "
-                  "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
-                  "share\" names the input."},
-      {"method", "\"tornqvist\" (default: weights averaged over adjacent periods) or \"fixed\" (the constant "
-                 "elasticities of a cobb-douglas model)."},
-      periodNamesArgument}},
-    {"prodIndex", "PRODINDEX",
-     "Chained quantity index of several inputs weighted by their cost shares: one value per period, the first "
-     "period = 1 unless a base is given.",
-     {{"quantities", "Quantities of each period, one column per input, positive. A first row of text names "
-                     "them."},
-      {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
-                 "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
-                 "share\" names the input."},
-      {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
-      {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."},
-      periodNamesArgument}},
+        {"prodTfp", "PRODTFP",
+         "Total factor productivity of each row: observed output divided by the output the model predicts from that "
+         "row's inputs (1 = exactly as predicted). A column, one value per row. On the rows a PRODFIT table was "
+         "fitted to, the geometric mean is 1 (with a trend, when periods is given).",
+         {modelArgument, outputArgument,
+          {"inputs", "Inputs of each row in the model's input order, as many rows as output. A first row of text "
+                     "names the inputs."},
+          {"periods", "Optional, for a model with a trend: the period (year) of each row, as many rows as output. "
+                      "Each row is then compared with its own period's technology: ln A + technical change per "
+                      "period × (period - latest period)."}}},
+        {"prodGrowth", "PRODGROWTH",
+         "Growth accounting from one period to the next: output growth split into each input's contribution, a "
+         "scale effect and TFP growth (the residual), in log differences, plus a total row. Returns a table (enter "
+         "as an array formula). TFP growth excludes the scale effect: the Solow residual (output growth minus the "
+         "contributions) = scale effect + TFP growth.",
+         {{"output", "Output of each period, in time order: one column of positive numbers. A first row of text is "
+                     "read as a header."},
+          {"inputs", "Input quantities of each period, one column per input, positive, as many periods as output. "
+                     "A first row of text names the inputs."},
+          {"weights", "A model (a PRODFIT table or a typed model: its elasticities at each period's inputs) or cost "
+                      "shares of the inputs, one column per input and one row per period, each row summing to 1 "
+                      "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
+                      "share\" names the input."},
+          {"method", "\"tornqvist\" (default: weights averaged over adjacent periods) or \"fixed\" (the constant "
+                     "elasticities of a cobb-douglas model)."},
+          periodNamesArgument}},
+        {"prodIndex", "PRODINDEX",
+         "Chained quantity index of several inputs weighted by their cost shares: one value per period, the first "
+         "period = 1 unless a base is given.",
+         {{"quantities", "Quantities of each period, one column per input, positive. A first row of text names "
+                         "them."},
+          {"shares", "Cost shares of the inputs in each period, the same shape as quantities, each row summing to 1 "
+                     "within 0.01 (rescaled to exactly 1; fractions, not percent). A header such as \"labour "
+                     "share\" names the input."},
+          {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
+          {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."},
+          periodNamesArgument}},
     };
 }
 
@@ -149,43 +150,43 @@ std::vector<FunctionInfo> growthFunctions()
 std::vector<FunctionInfo> shapeFunctions()
 {
     return {
-    {"prodRegular", "PRODREGULAR",
-     "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
-     "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
-     {modelArgument, bundlesArgument}},
-    {"prodCompare", "PRODCOMPARE",
-     "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
-     "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
-     "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0). AIC = -2LL + 2p and "
-     "BIC = -2LL + p ln n, p the parameters column (sigma squared not counted).",
-     {outputArgument, inputsArgument,
-      {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
-    {"prodSecond", "PRODSECOND",
-     "Second partial derivative of output for each row of inputs: how the marginal product of input i changes "
-     "with one more unit of input j (of input i itself when j is omitted).",
-     {modelArgument, bundlesArgument, firstInputArgument,
-      {"input j", "Optional second input: its number or its label. Omitted: the same as input i."}}},
-    {"prodInputReturns", "PRODINPUTRETURNS",
-     "Returns to one input alone for each row of inputs: diminishing, constant or increasing, by whether its "
-     "marginal product falls, stays or rises as more of it is used, the other inputs held. Says so where the "
-     "marginal product is not positive.",
-     {modelArgument, bundlesArgument, inputArgument}},
-    {"prodPair", "PRODPAIR",
-     "Technical relation of two inputs for each row of inputs: complements when more of one raises the "
-     "marginal product of the other, substitutes when it lowers it, independent when it leaves it unchanged. "
-     "Not the Allen notion: two-input Cobb-Douglas inputs are technical complements yet Allen substitutes "
-     "(elasticity 1).",
-     {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
-    {"prodMrts", "PRODMRTS",
-     "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
-     "of input i replaces at unchanged output (marginal product of i over that of j).",
-     {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
-    {"prodSubstitution", "PRODSUBSTITUTION",
-     "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
-     "the two inputs per 1% change in their relative price along the isoquant.",
-     {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
-      {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
-               "given)."}}},
+        {"prodRegular", "PRODREGULAR",
+         "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
+         "and the isoquants are convex (bordered Hessian test), otherwise which condition fails.",
+         {modelArgument, bundlesArgument}},
+        {"prodCompare", "PRODCOMPARE",
+         "Fits the cobb-douglas, ces and translog forms to the same rows and returns a table (enter as an array "
+         "formula, 8 rows by 7 columns): log-likelihood, AIC and BIC with ranks, the F test of cobb-douglas within "
+         "translog and the likelihood-ratio test of cobb-douglas within ces (rho = 0). AIC = -2LL + 2p and "
+         "BIC = -2LL + p ln n, p the parameters column (sigma squared not counted).",
+         {outputArgument, inputsArgument,
+          {"level", "Level of the verdicts on the nested tests, between 0 and 1 (default 0.95)."}}},
+        {"prodSecond", "PRODSECOND",
+         "Second partial derivative of output for each row of inputs: how the marginal product of input i changes "
+         "with one more unit of input j (of input i itself when j is omitted).",
+         {modelArgument, bundlesArgument, firstInputArgument,
+          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."}}},
+        {"prodInputReturns", "PRODINPUTRETURNS",
+         "Returns to one input alone for each row of inputs: diminishing, constant or increasing, by whether its "
+         "marginal product falls, stays or rises as more of it is used, the other inputs held. Says so where the "
+         "marginal product is not positive.",
+         {modelArgument, bundlesArgument, inputArgument}},
+        {"prodPair", "PRODPAIR",
+         "Technical relation of two inputs for each row of inputs: complements when more of one raises the "
+         "marginal product of the other, substitutes when it lowers it, independent when it leaves it unchanged. "
+         "Not the Allen notion: two-input Cobb-Douglas inputs are technical complements yet Allen substitutes "
+         "(elasticity 1).",
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+        {"prodMrts", "PRODMRTS",
+         "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
+         "of input i replaces at unchanged output (marginal product of i over that of j).",
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+        {"prodSubstitution", "PRODSUBSTITUTION",
+         "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
+         "the two inputs per 1% change in their relative price along the isoquant.",
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
+          {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
+                   "given)."}}},
     };
 }
 
@@ -193,59 +194,59 @@ std::vector<FunctionInfo> shapeFunctions()
 std::vector<FunctionInfo> decisionFunctions()
 {
     return {
-    {"prodLeastCost", "PRODLEASTCOST",
-     "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
-     "a row or a column like the prices (enter as an array formula).",
-     {modelArgument, targetArgument, pricesArgument}},
-    {"prodCost", "PRODCOST",
-     "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
-     "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
-     "function: a PRODCOSTFIT table, or typed rows form | cobb-douglas cost, constant | value, output | value, "
-     "then one row per input, its label | its price coefficient. A column of outputs gives a column of figures.",
-     {modelArgument,
-      {"target output", "The output to be produced, a positive number, or a column of outputs (the result is "
-                        "then a column)."},
-      {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
-                       "column of outputs, one row of prices per output (or one row for all)."},
-      {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
-               "per percent of output) or \"returns to scale\" (its inverse)."}}},
-    {"prodCostFit", "PRODCOSTFIT",
-     "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
-     "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "
-     "fit statistics, cost elasticity, returns to scale with its test and verdict, efficient scale.",
-     {{"cost", "Total cost of each row (plant, branch or period): one column of positive numbers. A first row "
-               "of text is read as a header."},
-      {"output", "Output of each row: one column of positive numbers, as many rows as cost."},
-      {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
-                 "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
-      {"form", "\"cobb-douglas\" (default) or \"translog\"."},
-      {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},
-      {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."},
-      levelArgument,
-      {"controls", "Not available yet for cost fits; leave empty."},
-      {"groups", "Not available yet for cost fits; leave empty."},
-      {"effects", "Not available yet for cost fits; leave empty."},
-      {"trend", "Not available yet for cost fits; leave empty."},
-      {"incomplete rows", "Not available yet for cost fits; leave empty."}}},
-    {"prodBudget", "PRODBUDGET",
-     "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
-     "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
-     {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
-    {"prodProfit", "PRODPROFIT",
-     "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
-     "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
-     "increasing returns to scale there is no finite maximum, and the cell says so.",
-     {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
-      pricesArgument}},
-    {"prodIsoquant", "PRODISOQUANT",
-     "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
-     "level, a column (for an XY chart). A row without such an amount says so.",
-     {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
-      {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
-                            "per input, the others held at each row's values (input j's column is not read)."},
-      {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
-      {"input j", "Optional: the input solved for, its number or its label (default: the first other "
-                  "input)."}}},
+        {"prodLeastCost", "PRODLEASTCOST",
+         "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
+         "a row or a column like the prices (enter as an array formula).",
+         {modelArgument, targetArgument, pricesArgument}},
+        {"prodCost", "PRODCOST",
+         "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
+         "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
+         "function: a PRODCOSTFIT table, or typed rows form | cobb-douglas cost, constant | value, output | value, "
+         "then one row per input, its label | its price coefficient. A column of outputs gives a column of figures.",
+         {modelArgument,
+          {"target output", "The output to be produced, a positive number, or a column of outputs (the result is "
+                            "then a column)."},
+          {"input prices", "One positive price per input, in the model's order, as a row or a column; with a "
+                           "column of outputs, one row of prices per output (or one row for all)."},
+          {"what", "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
+                   "per percent of output) or \"returns to scale\" (its inverse)."}}},
+        {"prodCostFit", "PRODCOSTFIT",
+         "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
+         "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "
+         "fit statistics, cost elasticity, returns to scale with its test and verdict, efficient scale.",
+         {{"cost", "Total cost of each row (plant, branch or period): one column of positive numbers. A first row "
+                   "of text is read as a header."},
+          {"output", "Output of each row: one column of positive numbers, as many rows as cost."},
+          {"input prices", "The prices each row paid for its inputs, one column per input, positive numbers, as many rows as cost. A "
+                     "first row of text names the inputs; homogeneity is imposed by dividing by the last price."},
+          {"form", "\"cobb-douglas\" (default) or \"translog\"."},
+          {"shares", "Cost shares of the inputs (not available yet for cost fits; leave empty)."},
+          {"errors", "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity)."},
+          levelArgument,
+          {"controls", "Not available yet for cost fits; leave empty."},
+          {"groups", "Not available yet for cost fits; leave empty."},
+          {"effects", "Not available yet for cost fits; leave empty."},
+          {"trend", "Not available yet for cost fits; leave empty."},
+          {"incomplete rows", "Not available yet for cost fits; leave empty."}}},
+        {"prodBudget", "PRODBUDGET",
+         "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
+         "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
+         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
+        {"prodProfit", "PRODPROFIT",
+         "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
+         "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
+         "increasing returns to scale there is no finite maximum, and the cell says so.",
+         {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
+          pricesArgument}},
+        {"prodIsoquant", "PRODISOQUANT",
+         "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
+         "level, a column (for an XY chart). A row without such an amount says so.",
+         {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
+          {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
+                                "per input, the others held at each row's values (input j's column is not read)."},
+          {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
+          {"input j", "Optional: the input solved for, its number or its label (default: the first other "
+                      "input)."}}},
     };
 }
 
