@@ -1,6 +1,21 @@
 #include "benchmark_floor.hxx"
 
+#include "function_table.hxx"
+
 namespace isoquant::addin {
+
+std::vector<FunctionInfo> buildSpecificFunctions()
+{
+    // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
+    return {{"benchFloor", "ISOQUANTFLOOR",
+             "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
+             {outputArgument, inputsArgument}}};
+}
+
+cppu::OWeakObject* createAddIn(const css::uno::Reference<css::uno::XComponentContext>& context)
+{
+    return new BenchmarkProductionFunctions(context);
+}
 
 double BenchmarkProductionFunctions::benchFloor(const AnyTable& output, const AnyTable&)
 {

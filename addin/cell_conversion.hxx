@@ -1,7 +1,7 @@
 // Converts Calc's arguments to the core's cells and the core's results back to Calc's values.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 #include <com/sun/star/uno/Any.hxx>
 #include <com/sun/star/uno/Sequence.hxx>

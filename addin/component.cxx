@@ -1,9 +1,6 @@
 // The shared library's entry points: LibreOffice asks for a factory by implementation name.
 #include "commands.hxx"
 #include "production_functions.hxx"
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-#include "benchmark_floor.hxx"
-#endif
 
 #include <com/sun/star/lang/XSingleComponentFactory.hpp>
 #include <cppuhelper/factory.hxx>
@@ -15,11 +12,7 @@ namespace {
 css::uno::Reference<css::uno::XInterface> SAL_CALL createProductionFunctions(
     const css::uno::Reference<css::uno::XComponentContext>& context)
 {
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::BenchmarkProductionFunctions(context));
-#else
-    return static_cast<cppu::OWeakObject*>(new isoquant::addin::ProductionFunctions(context));
-#endif
+    return isoquant::addin::createAddIn(context);
 }
 
 css::uno::Reference<css::uno::XInterface> SAL_CALL createCommands(

@@ -1,18 +1,13 @@
 #include "function_table.hxx"
 
-#include "isoquant/text.hpp"
+#include "isoquant/math/messages/text.hpp"
+
+#include <utility>
 
 namespace isoquant::addin {
 
 namespace {
 
-// Arguments shared by PRODFIT and PRODSTAT.
-constexpr ArgumentInfo outputArgument{
-    "output", "Output of each row (plant, branch or period): one column of positive numbers. A first row of text is "
-              "read as a header."};
-constexpr ArgumentInfo inputsArgument{
-    "inputs", "Inputs of each row, one column per input (labour, capital, …), positive numbers, as many rows as "
-              "output. A first row of text names the inputs."};
 constexpr ArgumentInfo formArgument{
     "form", "Functional form: \"cobb-douglas\" (default), \"ces\" (exactly two inputs, by nonlinear least "
             "squares) or \"translog\"."};
@@ -66,11 +61,10 @@ constexpr ArgumentInfo pricesArgument{
     "input prices", "One positive price per input, in the model's input order: a row of prices gives a row of "
                     "results, a column of prices a column."};
 
-} // namespace
-
-const std::vector<FunctionInfo>& functionTable()
+// PRODFIT, PRODSTAT and the evaluators of a model.
+std::vector<FunctionInfo> productionFitFunctions()
 {
-    static const std::vector<FunctionInfo> table{
+    return {
         {"prodFit", "PRODFIT",
          "Fits a production function to output and inputs by least squares on logs. Returns a table (enter as an "
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
@@ -113,6 +107,13 @@ const std::vector<FunctionInfo>& functionTable()
          "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "
          "table without a test (boundary, not converged, not identified) gives its own \"not tested (...)\".",
          {modelArgument, {"level", "Confidence level of the test, between 0 and 1 (default 0.95)."}}},
+    };
+}
+
+// Productivity and growth.
+std::vector<FunctionInfo> growthFunctions()
+{
+    return {
         {"prodTfp", "PRODTFP",
          "Total factor productivity of each row: observed output divided by the output the model predicts from that "
          "row's inputs (1 = exactly as predicted). A column, one value per row. On the rows a PRODFIT table was "
@@ -150,6 +151,13 @@ const std::vector<FunctionInfo>& functionTable()
           {"method", "\"tornqvist\" (default), \"laspeyres\", \"paasche\" or \"fisher\"."},
           {"base", "Value of the index in the first period, a positive number (default 1; 100 for percentages)."},
           periodNamesArgument}},
+    };
+}
+
+// The shape of a technology: regularity, form comparison, second derivatives, substitution.
+std::vector<FunctionInfo> shapeFunctions()
+{
+    return {
         {"prodRegular", "PRODREGULAR",
          "Whether the model is regular at each row of inputs: \"regular\" when every marginal product is positive "
          "and the isoquants are convex (bordered Hessian test), otherwise which condition fails. With a cost "
@@ -191,11 +199,44 @@ const std::vector<FunctionInfo>& functionTable()
          {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
                    "given)."}}},
+    };
+}
+
+// The producer's decisions.
+std::vector<FunctionInfo> decisionFunctions()
+{
+    return {
         {"prodLeastCost", "PRODLEASTCOST",
          "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
          "a row or a column like the prices (enter as an array formula). With a cost model (as for PRODCOST) by "
          "Shephard's lemma: amount = fitted cost share x cost / price.",
          {modelArgument, targetArgument, pricesArgument}},
+        {"prodBudget", "PRODBUDGET",
+         "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
+         "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
+         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
+        {"prodProfit", "PRODPROFIT",
+         "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
+         "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
+         "increasing returns to scale there is no finite maximum, and the cell says so.",
+         {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
+          pricesArgument}},
+        {"prodIsoquant", "PRODISOQUANT",
+         "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
+         "level, a column (for an XY chart). A row without such an amount says so.",
+         {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
+          {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
+                                "per input, the others held at each row's values (input j's column is not read)."},
+          {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
+          {"input j", "Optional: the input solved for, its number or its label (default: the first other "
+                      "input)."}}},
+    };
+}
+
+// Cost functions: fitted from the books, or a production model's dual.
+std::vector<FunctionInfo> costFunctions()
+{
+    return {
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
          "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "
@@ -248,25 +289,13 @@ const std::vector<FunctionInfo>& functionTable()
           {"trend", "Not available yet for cost fits; leave empty."},
           {"incomplete rows", "TRUE to leave out rows with a blank or text cell in cost, output, input prices or "
                               "shares (the table counts them); FALSE or empty: such a cell is an error."}}},
-        {"prodBudget", "PRODBUDGET",
-         "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
-         "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
-         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
-        {"prodProfit", "PRODPROFIT",
-         "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
-         "profit, a row or a column like the input prices (enter as an array formula). Under constant or "
-         "increasing returns to scale there is no finite maximum, and the cell says so.",
-         {modelArgument, {"output price", "The price one unit of output sells for, a positive number."},
-          pricesArgument}},
-        {"prodIsoquant", "PRODISOQUANT",
-         "Points of an isoquant: for each value of input i, the amount of input j that keeps output at the given "
-         "level, a column (for an XY chart). A row without such an amount says so.",
-         {modelArgument, {"output level", "The output the isoquant keeps, a positive number."},
-          {"values of input i", "A column of values of input i; for a model of more than two inputs one column "
-                                "per input, the others held at each row's values (input j's column is not read)."},
-          {"input i", "Optional: the input whose values are given, its number or its label (default: the first)."},
-          {"input j", "Optional: the input solved for, its number or its label (default: the first other "
-                      "input)."}}},
+    };
+}
+
+// How far each row is from best practice.
+std::vector<FunctionInfo> efficiencyFunctions()
+{
+    return {
         {"prodFrontier", "PRODFRONTIER",
          "Fits a stochastic production frontier by maximum likelihood: ln output = frontier + noise - "
          "inefficiency. Returns a table (enter as an array formula): the frontier's estimates, noise SD, "
@@ -306,13 +335,21 @@ const std::vector<FunctionInfo>& functionTable()
                    "(the amount of that input or output on the frontier, slacks included)."},
           {"names", "Optional column naming each row (a plant or branch), as many rows as outputs, a header row "
                     "allowed: peers are then listed by these names instead of row numbers."}}},
-#ifdef ISOQUANT_BENCHMARK_FLOOR
-        // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
-        {"benchFloor", "ISOQUANTFLOOR",
-         "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
-         {outputArgument, inputsArgument}},
-#endif
     };
+}
+
+} // namespace
+
+const std::vector<FunctionInfo>& functionTable()
+{
+    static const std::vector<FunctionInfo> table = [] {
+        std::vector<FunctionInfo> functions;
+        for (auto family :
+             {productionFitFunctions, growthFunctions, shapeFunctions, decisionFunctions, costFunctions,
+              efficiencyFunctions, buildSpecificFunctions})
+            for (FunctionInfo& function : family()) functions.push_back(std::move(function));
+        return functions;
+    }();
     return table;
 }
 

@@ -9,10 +9,10 @@ namespace isoquant::addin {
 namespace {
 
 // Arguments shared by PRODFIT and PRODSTAT.
-constexpr ArgumentInfo outputArgument{
+constexpr ArgumentInfo germanOutputArgument{
     "Ausbringung", "Ausbringungsmenge jeder Zeile (Betrieb, Filiale oder Periode): eine Spalte positiver Zahlen. "
                    "Eine erste Zeile mit Text gilt als Überschrift."};
-constexpr ArgumentInfo inputsArgument{
+constexpr ArgumentInfo germanInputsArgument{
     "Faktormengen", "Faktoreinsatzmengen jeder Zeile, eine Spalte je Produktionsfaktor (Arbeit, Kapital, …), positive "
                     "Zahlen, so viele Zeilen wie bei der Ausbringung. Eine erste Zeile mit Text benennt die Faktoren."};
 constexpr ArgumentInfo formArgument{
@@ -86,11 +86,11 @@ const Translation& germanTranslation()
          "Schätzt eine Produktionsfunktion aus Ausbringung und Faktoreinsatz nach der Methode der kleinsten Quadrate "
          "in Logarithmen. Liefert eine Tabelle (als Matrixformel eingeben): Schätzwerte mit Standardfehlern, t- und "
          "p-Werten und Konfidenzgrenzen, Gütemaße, die Skalenerträge mit dem Test auf den Wert 1 und ein Urteil.",
-         {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
+         {germanOutputArgument, germanInputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
           controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
         {"prodStat",
          "Ein Wert der PRODFIT-Tabelle, gesucht nach Zeilen- und Spaltenbezeichnung, ohne Matrixformel.",
-         {outputArgument, inputsArgument,
+         {germanOutputArgument, germanInputsArgument,
           {"Zeilenbezeichnung", "Eine Zeile der Tabelle, mit ihrer englischen Bezeichnung: ln A, die Bezeichnung "
                                 "eines Faktors, R2, adjusted R2, residual SD, F, log-likelihood, AIC, BIC, returns to "
                                 "scale, verdict, observations, smearing factor…; mit Effekten auch \"effect of group "
@@ -138,7 +138,7 @@ const Translation& germanTranslation()
          "Modell aus den Faktormengen dieser Zeile vorhersagt (1 = genau wie vorhergesagt). Eine Spalte, ein Wert je "
          "Zeile. Auf den Zeilen, an die eine PRODFIT-Tabelle angepasst wurde, ist das geometrische Mittel 1 (bei "
          "einem Trend, wenn Perioden angegeben sind).",
-         {modelArgument, outputArgument,
+         {modelArgument, germanOutputArgument,
           {"Faktormengen", "Faktormengen jeder Zeile in der Faktorreihenfolge des Modells, so viele Zeilen wie bei der "
                            "Ausbringung. Eine erste Zeile mit Text benennt die Faktoren."},
           {"Perioden", "Optional, für ein Modell mit Trend: die Periode (das Jahr) jeder Zeile, so viele Zeilen wie "
@@ -182,7 +182,7 @@ const Translation& germanTranslation()
          "cobb-douglas innerhalb von translog und den Likelihood-Quotienten-Test von cobb-douglas innerhalb von ces "
          "(rho = 0). AIC = -2LL + 2p und BIC = -2LL + p ln n, p aus der Spalte der Parameterzahl (sigma² nicht "
          "mitgezählt).",
-         {outputArgument, inputsArgument,
+         {germanOutputArgument, germanInputsArgument,
           {"Konfidenzniveau", "Niveau der Urteile über die verschachtelten Tests, zwischen 0 und 1 (Standard "
                               "0,95)."}}},
         {"prodSecond",
@@ -312,7 +312,7 @@ const Translation& germanTranslation()
          "Likelihood, einen Test, ob es überhaupt Ineffizienz gibt, die mittlere Effizienz, die Skalenerträge und "
          "die Konvergenz. Das Ergebnis hängt von der angenommenen Verteilung der Ineffizienz ab; es misst, wie weit "
          "eine Zeile zurückliegt, nicht warum.",
-         {outputArgument, inputsArgument,
+         {germanOutputArgument, germanInputsArgument,
           {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
           {"Ineffizienz", "Verteilung der Ineffizienz: \"half-normal\" (Standard, halbnormal) oder \"exponential\" "
                           "(exponentialverteilt)."},
@@ -323,7 +323,7 @@ const Translation& germanTranslation()
          "Effizienz. Eine Spalte, ein Wert je Zeile.",
          {{"Modell", "Eine ganze PRODFRONTIER-Tabelle (ihre erste Zelle lautet \"half-normal frontier\" oder "
                      "\"exponential frontier\")."},
-          outputArgument,
+          germanOutputArgument,
           {"Faktormengen", "Faktormengen jeder Zeile in der Reihenfolge der Tabelle (danach ihre Kontrollvariablen, "
                            "falls sie welche hat), so viele Zeilen wie die Ausbringung. Eine erste Textzeile benennt "
                            "die Spalten, die dann nach Bezeichnung zugeordnet werden."},

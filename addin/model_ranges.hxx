@@ -5,7 +5,7 @@
 
 #include "cell_conversion.hxx"
 
-#include "isoquant/recently_used.hpp"
+#include "isoquant/sheet/caches/recently_used.hpp"
 
 #include <cstddef>
 #include <memory>

@@ -2,7 +2,7 @@
 
 #include "cell_conversion.hxx"
 
-#include "isoquant/text.hpp"
+#include "isoquant/math/messages/text.hpp"
 
 #include <com/sun/star/beans/NamedValue.hpp>
 #include <com/sun/star/configuration/theDefaultProvider.hpp>

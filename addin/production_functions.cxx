@@ -4,16 +4,17 @@
 #include "function_table.hxx"
 #include "wizard_texts.hxx"
 
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/decision_cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/growth_cell_functions.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
 
 #include <new>
 

@@ -6,7 +6,7 @@
 #include "model_ranges.hxx"
 #include "office_locale.hxx"
 
-#include "isoquant/fit_cache.hpp"
+#include "isoquant/sheet/caches/fit_cache.hpp"
 
 #include <org/isoquant/calc/XProductionFunctions.hpp>
 
@@ -140,5 +140,9 @@ private:
     const Translation* wizardTranslation_ = nullptr; // Function Wizard texts; null: English
     rtl::Reference<LocalePunctuation> punctuation_;
 };
+
+// The add-in object of this build: ProductionFunctions in isoquant.oxt (extension.cxx), the
+// benchmark extension's BenchmarkProductionFunctions there (benchmark_floor.cxx).
+cppu::OWeakObject* createAddIn(const css::uno::Reference<css::uno::XComponentContext>& context);
 
 } // namespace isoquant::addin

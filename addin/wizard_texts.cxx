@@ -1,6 +1,6 @@
 #include "wizard_texts.hxx"
 
-#include "isoquant/text.hpp"
+#include "isoquant/math/messages/text.hpp"
 
 namespace isoquant::addin {
 

@@ -1,12 +1,12 @@
 // Times the core alone on invented, seeded data and prints one line per measurement:
 //   <name> <rows> <median seconds> <runs> [extra]
 // run_benchmarks.py reads these lines and sets them beside the reference sides. Nothing is asserted.
-#include "isoquant/ces_fit.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_cache.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/least_squares.hpp"
-#include "isoquant/production_fit.hpp"
+#include "isoquant/math/fits/ces_fit.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/caches/fit_cache.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
 #include "median_seconds.hpp"
 
 #include <algorithm>

@@ -4,9 +4,10 @@
 // InputError; anything else is a finding.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;

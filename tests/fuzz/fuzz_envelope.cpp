@@ -2,7 +2,7 @@
 // finite numbers (or texts) or an InputError; anything else is a finding.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/input_error.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 
 using namespace isoquant;

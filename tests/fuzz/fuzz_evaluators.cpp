@@ -2,8 +2,8 @@
 // gives a column of finite numbers or an InputError.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;

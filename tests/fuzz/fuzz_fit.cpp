@@ -3,9 +3,9 @@
 // InputError; anything else (a crash, another exception, a non-finite number) is a finding.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;

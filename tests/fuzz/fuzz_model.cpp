@@ -2,8 +2,8 @@
 // give a model or an InputError.
 #include "fuzzed_cells.hpp"
 
-#include "isoquant/input_error.hpp"
-#include "isoquant/production_model.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
 
 using namespace isoquant;
 using namespace isoquant::fuzzing;

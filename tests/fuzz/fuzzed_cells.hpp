@@ -2,7 +2,7 @@
 // that nearly make sense (so that the fuzzer reaches the numerical code, not only the first check).
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 #include <fuzzer/FuzzedDataProvider.h>
 

@@ -1,7 +1,7 @@
 // Builds the cell ranges the core's cell functions take, as a user would select them in a sheet.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 #include <Eigen/Dense>
 

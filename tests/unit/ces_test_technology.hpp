@@ -6,8 +6,8 @@
 // against the CES closed forms; the derivatives themselves are checked by finite differences.
 #pragma once
 
-#include "isoquant/ces_closed_forms.hpp"
-#include "isoquant/technology.hpp"
+#include "isoquant/math/decisions/ces_closed_forms.hpp"
+#include "isoquant/math/forms/technology.hpp"
 
 #include <cmath>
 

@@ -1,7 +1,7 @@
 // Invented data from a known technology, for property tests of the fits (seeded, so deterministic).
 #pragma once
 
-#include "isoquant/production_fit.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
 
 #include <cmath>
 #include <cstdint>

@@ -3,8 +3,8 @@
 // TFP path, Y_t = A_t·f(x_t), with no noise, so the TFP path is there to be recovered.
 #pragma once
 
-#include "isoquant/cells.hpp"
-#include "isoquant/technology.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/math/forms/technology.hpp"
 
 #include <Eigen/Dense>
 

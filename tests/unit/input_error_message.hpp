@@ -1,7 +1,7 @@
 // The message of the InputError an action throws, for comparing with the exact wording.
 #pragma once
 
-#include "isoquant/input_error.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 
 #include <string>
 

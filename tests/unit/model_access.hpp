@@ -1,8 +1,8 @@
 // The Cobb-Douglas technology inside a model read back from cells (the tests know its form).
 #pragma once
 
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/production_model.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
 
 namespace isoquant::testing {
 

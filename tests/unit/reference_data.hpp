@@ -2,7 +2,7 @@
 // file's column names (sources in tests/data/README.md).
 #pragma once
 
-#include "isoquant/cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
 
 namespace isoquant::testing {
 

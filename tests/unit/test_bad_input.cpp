@@ -2,7 +2,7 @@
 // where there is one, the row (and column) of the user's selection, counted from 1 with the
 // header row included (numeric_range.hpp). The data are the Cobb & Douglas (1928) ranges
 // (tests/data/cobb_douglas_1928.csv) with one cell or option spoiled.
-#include "isoquant/cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"

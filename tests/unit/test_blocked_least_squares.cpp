@@ -1,6 +1,6 @@
 // The blocked (TSQR) factorisation against itself: results must not depend on the block size or
 // on the units of the data. Invented data (property tests).
-#include "isoquant/least_squares.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
 
 #include <boost/test/data/test_case.hpp>
 #include <boost/test/unit_test.hpp>

@@ -1,6 +1,6 @@
 // Properties of the Cobb-Douglas calculus on seeded random technologies and bundles: the analytic
 // derivatives agree with finite differences of the function itself, and Euler's theorem holds.
-#include "isoquant/cobb_douglas.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
 #include "relative_error.hpp"
 
 #include <boost/test/unit_test.hpp>

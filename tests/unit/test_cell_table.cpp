@@ -1,9 +1,9 @@
 // CellTable: each cell keeps its kind (empty, number, text) and value through any sequence of
 // writes; equality is by shape and content, whatever order the texts were written in; the rows
 // and columns of readNumericColumns' messages are those of the range. Invented cells.
-#include "isoquant/cells.hpp"
-#include "isoquant/numeric_range.hpp"
-#include "isoquant/text.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/math/messages/text.hpp"
 #include "input_error_message.hpp"
 
 #include <boost/test/unit_test.hpp>

@@ -2,13 +2,13 @@
 // not identified) and the bounds of σ; the data the ces fit refuses as the other forms do.
 // Property tests on invented data (seeded, generated_data.hpp): what is checked is the report's
 // logic, so no outside figures (scipy's optimum near fixed proportions is in test_forms_cross_check).
-#include "isoquant/ces.hpp"
-#include "isoquant/ces_fit.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/form_comparison.hpp"
-#include "isoquant/production_model.hpp"
+#include "isoquant/math/forms/ces.hpp"
+#include "isoquant/math/fits/ces_fit.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/functions/form_comparison.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
 #include "cell_tables.hpp"
 #include "generated_data.hpp"
 #include "input_error_message.hpp"

@@ -3,7 +3,7 @@
 // Cobb & Douglas (1928), AER 18(1) Suppl., Tables II and III; the "computed" figures are from
 // R 4.2.2 lm (statsmodels 0.13.5 agrees); all figures are listed in tests/data/README.md.
 // Each figure is compared at the digits it is given to (half a unit in its last digit).
-#include "isoquant/cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
 #include "published_digits.hpp"
 #include "reference_data.hpp"
 #include "relative_error.hpp"

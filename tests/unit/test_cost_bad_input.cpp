@@ -1,7 +1,7 @@
 // PRODCOSTFIT and PRODCOST over a cost model with bad input: each message names the argument and,
 // where there is one, the row (counted from the top of the range, header included). Invented data.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/cost_cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 

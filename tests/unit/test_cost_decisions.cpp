@@ -6,8 +6,8 @@
 // relative: truncation O(h²) ≈ 1e-8, rounding ≈ 1e-16/h = 1e-12; tolerance 1e-6 relative). The
 // efficient scale against a scipy minimisation is checked in tests/integration/test_cost_in_calc.py.
 // Invented models.
-#include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/decision_cell_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"

@@ -8,9 +8,10 @@
 // C = λ·ν·y; putting xᵢ = λbᵢy/wᵢ into the constraint gives y = A·(λy)^ν·Π(bᵢ/wᵢ)^bᵢ, so
 //   C(y, w) = ν·(y/A)^(1/ν)·Πᵢ (wᵢ/bᵢ)^(bᵢ/ν),
 //   ln C = [ln ν − (ln A)/ν − Σᵢ (bᵢ/ν) ln bᵢ] + (1/ν) ln y + Σᵢ (bᵢ/ν) ln wᵢ.
-#include "isoquant/cost_cell_functions.hpp"
-#include "isoquant/cost_model.hpp"
-#include "isoquant/decision_cell_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
+#include "isoquant/sheet/models/cost_model.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "relative_error.hpp"

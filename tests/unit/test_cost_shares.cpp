@@ -3,8 +3,9 @@
 // the estimate is maximum likelihood, which does not depend on either: Barten 1969, from memory),
 // and the messages for bad shares. The agreement with an independent numpy implementation on
 // published data is in test_cost_sur_cross_check.cpp. Invented data, seeded.
-#include "isoquant/cost_cell_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "relative_error.hpp"

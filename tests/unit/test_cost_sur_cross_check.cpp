@@ -14,7 +14,7 @@
 //
 // CTest runs the script first (test cost_sur_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_COST_SUR_FIGURES; without that file this test is skipped.
-#include "isoquant/cost_cell_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "cell_tables.hpp"
 #include "csv_table.hpp"
 #include "reference_figures.hpp"

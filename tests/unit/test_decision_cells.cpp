@@ -1,9 +1,9 @@
 // The decision cell functions on cells as a user would type them: layouts, agreement with the
 // core they call, the isoquant through PRODOUTPUT, and the exact messages for bad input. The
 // models and prices are invented (a bakery's labour and ovens).
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/decision_cell_functions.hpp"
-#include "isoquant/homogeneous_cost.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/math/forms/homogeneous_cost.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "relative_error.hpp"

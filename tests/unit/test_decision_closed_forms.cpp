@@ -1,8 +1,8 @@
 // The closed-form least cost, budget split and profit maximum of Cobb-Douglas and CES against
 // textbook formulas, duality and optimality properties. Parameters and prices are invented
 // (seeded draws), as property tests need; the formulas are named beside each check.
-#include "isoquant/ces_closed_forms.hpp"
-#include "isoquant/homogeneous_cost.hpp"
+#include "isoquant/math/decisions/ces_closed_forms.hpp"
+#include "isoquant/math/forms/homogeneous_cost.hpp"
 #include "ces_test_technology.hpp"
 #include "relative_error.hpp"
 

@@ -2,7 +2,7 @@
 // source), checked on the core's calculus: diminishing returns to each input can coexist with
 // increasing returns to scale; inputs are complements (positive cross partials); exponents summing
 // to 1 mean output scales exactly with the inputs.
-#include "isoquant/cobb_douglas.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
 #include "relative_error.hpp"
 
 #include <boost/test/unit_test.hpp>

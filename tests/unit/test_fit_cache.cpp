@@ -1,8 +1,8 @@
 // FitCache: a fit is computed once for equal arguments, again for different ones; the least
 // recently used fit is evicted beyond the capacity; errors are not cached.
 // Arguments are the Cobb & Douglas (1928) ranges (tests/data/cobb_douglas_1928.csv).
-#include "isoquant/fit_cache.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/caches/fit_cache.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "reference_data.hpp"
 
 #include <boost/test/unit_test.hpp>

@@ -2,9 +2,9 @@
 // Fits are of the published data sets (sources in tests/data/README.md); what is checked here is
 // the layout fit_table.hpp and production_model.hpp document, not the figures themselves.
 #include "model_access.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/production_model.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "csv_table.hpp"

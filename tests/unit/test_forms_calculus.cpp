@@ -3,9 +3,9 @@
 // CES composite's parameter derivatives equal differences of the composite (on both sides of its
 // series switch and for large |ρ·d|), CES tends to Cobb-Douglas as ρ → 0, and a translog with all
 // βᵢⱼ = 0 is the Cobb-Douglas with the same exponents.
-#include "isoquant/ces.hpp"
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/translog.hpp"
+#include "isoquant/math/forms/ces.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/math/forms/translog.hpp"
 #include "relative_error.hpp"
 
 #include <boost/test/unit_test.hpp>

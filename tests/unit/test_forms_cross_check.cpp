@@ -31,10 +31,10 @@
 //
 // CTest runs the script first (test forms_figures) and passes the file it wrote in the environment
 // variable ISOQUANT_FORMS_FIGURES; without that file this test is skipped.
-#include "isoquant/ces_fit.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/form_comparison.hpp"
-#include "isoquant/translog_fit.hpp"
+#include "isoquant/math/fits/ces_fit.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/functions/form_comparison.hpp"
+#include "isoquant/math/fits/translog_fit.hpp"
 #include "reference_data.hpp"
 
 #include "reference_figures.hpp"

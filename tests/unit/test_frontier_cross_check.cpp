@@ -25,7 +25,7 @@
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
-#include "isoquant/numeric_range.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "cell_tables.hpp"
 #include "reference_data.hpp"
 #include "reference_figures.hpp"

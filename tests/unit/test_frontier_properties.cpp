@@ -2,7 +2,7 @@
 // test_frontier_cross_check.cpp): the analytic score against differences of the log-likelihood,
 // E[exp(−u)|ε] on 100,000 rows against the true mean efficiency, the table's layout and lookups,
 // the efficiency column's header rules, and bad input.
-#include "isoquant/fit_table.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
 #include "isoquant/math/frontier/normal_tail.hpp"
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"

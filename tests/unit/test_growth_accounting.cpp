@@ -11,12 +11,12 @@
 //   exactly.
 // - "least squares": the residuals of a least-squares fit with a constant sum to zero (normal
 //   equation of the constant), so on the fitting sample the mean of ln(Y/f(x)) is 0.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/growth_accounting.hpp"
-#include "isoquant/growth_cell_functions.hpp"
-#include "isoquant/growth_table.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/math/growth/growth_accounting.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/sheet/tables/growth_table.hpp"
 #include "cell_tables.hpp"
 #include "growth_checks.hpp"
 #include "growth_series.hpp"

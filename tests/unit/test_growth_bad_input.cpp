@@ -2,7 +2,7 @@
 // argument and the period (with its row in the selection, header included) or the row; the exact
 // wording is that of core/src/period_range.cpp and core/src/growth_cell_functions.cpp. The data
 // are small invented ranges with one cell, shape or option spoiled.
-#include "isoquant/growth_cell_functions.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
 #include "cell_tables.hpp"
 #include "growth_series.hpp"
 #include "input_error_message.hpp"

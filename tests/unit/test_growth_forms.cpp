@@ -8,10 +8,10 @@
 // - "least squares": the residuals of a least-squares fit with a constant sum to zero (normal
 //   equation of the constant), so on the fitting sample the mean of ln(Y/f(x)) is 0.
 // Tolerances: recoveryTolerance (growth_checks.hpp).
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/growth_cell_functions.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "ces_test_technology.hpp"
 #include "cell_tables.hpp"
 #include "growth_checks.hpp"

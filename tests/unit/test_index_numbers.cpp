@@ -12,8 +12,8 @@
 // of numbers of order 1, formed in double precision; rounding stays below 1e-13 relative, and
 // 1e-12 leaves margin while any formula slip (a share of the wrong period, a missing ½) moves the
 // figures by 1e-3 or more.
-#include "isoquant/growth_cell_functions.hpp"
-#include "isoquant/index_numbers.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/math/growth/index_numbers.hpp"
 #include "cell_tables.hpp"
 #include "growth_series.hpp"
 #include "relative_error.hpp"

@@ -3,9 +3,9 @@
 // not kept; the least recently used model goes beyond the capacity; huge ranges are not kept.
 // Models are invented (typed Cobb-Douglas tables); the expected marginal products are
 // b_K·A·K^b_K·L^b_L / K computed here.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/input_error.hpp"
-#include "isoquant/model_cache.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/caches/model_cache.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "model_access.hpp"

@@ -6,7 +6,7 @@
 // the automatic choice of route, with two rows per block and by the long double route alone. The
 // double route alone is checked on the sets the automatic choice sends it (Norris, Pontius, NoInt1,
 // NoInt2); forced onto Wampler5 it reaches only 6.4, which is why the error estimate exists.
-#include "isoquant/least_squares.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
 #include "nist_dataset.hpp"
 #include "test_data.hpp"
 

@@ -5,7 +5,7 @@
 // parameters, the residual sum of squares, the residual SD and the certified standard deviations
 // (the CES table's standard errors come from the same inference code); lowest reached 9.50 (SD of
 // b1 from start 1).
-#include "isoquant/nonlinear_least_squares.hpp"
+#include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 #include "csv_table.hpp"
 #include "nist_dataset.hpp"
 #include "test_data.hpp"

@@ -1,10 +1,10 @@
 // The numerical least-cost, budget and profit solves (numerical_decisions.hpp), which serve any
 // smooth technology, against the closed forms on Cobb-Douglas and on the test CES, and against
 // their own optimality conditions on the test translog. Parameters and prices are seeded draws.
-#include "isoquant/ces_closed_forms.hpp"
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/homogeneous_cost.hpp"
-#include "isoquant/numerical_decisions.hpp"
+#include "isoquant/math/decisions/ces_closed_forms.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/math/forms/homogeneous_cost.hpp"
+#include "isoquant/math/decisions/numerical_decisions.hpp"
 #include "ces_test_technology.hpp"
 #include "relative_error.hpp"
 #include "translog_test_technology.hpp"

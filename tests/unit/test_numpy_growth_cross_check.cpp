@@ -16,7 +16,7 @@
 //
 // CTest runs the script first (test numpy_growth_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_NUMPY_GROWTH_FIGURES; without that file this test is skipped.
-#include "isoquant/growth_cell_functions.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
 #include "cell_tables.hpp"
 #include "csv_table.hpp"
 #include "growth_series.hpp"

@@ -13,8 +13,8 @@
 //   two-way F: the same with one dummy per year after 1970, f_test of the four slopes (classical).
 // They are compared at the digits printed (half a unit in the last); a wrong CR1 factor (3% here),
 // HC3 turned into HC2 or stripped of the 1/n_g leverage of the state means (about 6%) is caught.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
 #include "input_error_message.hpp"
 #include "published_digits.hpp"
 #include "reference_data.hpp"

@@ -1,9 +1,9 @@
 // Properties of the estimation options on invented seeded data (a trend recovered, group effects
 // recovered) and checks against formulas: Duan's smearing factor as the mean of exp(residual) on
 // Cobb & Douglas (1928) (tests/data/README.md), and dropping incomplete rows.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/text.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/math/messages/text.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"

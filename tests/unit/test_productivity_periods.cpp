@@ -8,9 +8,9 @@
 // 20 in magnitude, each row's log TFP carries a few units in the last place of 20 (about 4e-15) and
 // the least-squares normal equations hold to a few 1e-15 relative; the effects this corrects move
 // the mean by 0.01 or more (checked below). Data: an invented, seeded, unbalanced panel.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/growth_cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 

@@ -1,9 +1,9 @@
 // Fits to data generated from a known Cobb-Douglas technology with small seeded noise, for every
 // number of inputs from 1 to 20, through the PRODFIT argument path (ranges without a header).
 #include "model_access.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
-#include "isoquant/production_model.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
 #include "cell_tables.hpp"
 #include "relative_error.hpp"
 

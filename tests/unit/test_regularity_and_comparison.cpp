@@ -3,11 +3,11 @@
 // nearby points of the isoquant must give at least as much output (convex isoquants); the
 // technologies are invented. The comparison uses Cobb & Douglas (1928) and the rice-farm panel
 // (tests/data/README.md); its figures are cross-checked in test_forms_cross_check.cpp.
-#include "isoquant/ces.hpp"
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/regularity.hpp"
-#include "isoquant/translog.hpp"
+#include "isoquant/math/forms/ces.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/math/forms/regularity.hpp"
+#include "isoquant/math/forms/translog.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"

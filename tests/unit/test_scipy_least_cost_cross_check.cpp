@@ -9,9 +9,9 @@
 //
 // CTest runs the script first (test scipy_least_cost_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_SCIPY_LEAST_COST; without that file this test is skipped.
-#include "isoquant/ces_closed_forms.hpp"
-#include "isoquant/decision_cell_functions.hpp"
-#include "isoquant/numerical_decisions.hpp"
+#include "isoquant/math/decisions/ces_closed_forms.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/math/decisions/numerical_decisions.hpp"
 #include "ces_test_technology.hpp"
 #include "cell_tables.hpp"
 #include "relative_error.hpp"

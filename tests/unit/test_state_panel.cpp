@@ -5,7 +5,7 @@
 // R 4.2.2 lm / plm 2.6 (statsmodels agrees); all figures are listed in tests/data/README.md.
 // Computed figures are compared at the digits they are given to (six decimals, so 4 to 7
 // significant digits); the statsmodels cross-check covers the same fit to 1e-8 relative.
-#include "isoquant/cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
 #include "published_digits.hpp"
 #include "reference_data.hpp"
 

@@ -5,8 +5,8 @@
 // -0.026150 (0.029002), 0.292007 (0.025120), 0.768159 (0.030092), -0.005298 (0.000989);
 // within R² 0.941336, RSS 1.111189. Compared at the six decimals given (half a unit in the sixth
 // decimal). Cluster-robust errors are compared with statsmodels in test_statsmodels_cross_check.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/fit_table.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
 #include "published_digits.hpp"
 #include "reference_data.hpp"
 

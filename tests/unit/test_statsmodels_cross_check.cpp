@@ -16,7 +16,7 @@
 //
 // CTest runs the script first (test statsmodels_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_STATSMODELS_FIGURES; without that file this test is skipped.
-#include "isoquant/cell_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
 #include "reference_data.hpp"
 
 #include "reference_figures.hpp"

@@ -1,11 +1,11 @@
 // Curvature verdicts and elasticities of substitution: facts of the trade on Cobb-Douglas and CES,
 // and the generic formulas against finite differences and the literal cofactor definitions, on
 // seeded random technologies (Cobb-Douglas, the test CES and the test translog) and bundles.
-#include "isoquant/cobb_douglas.hpp"
-#include "isoquant/level_roots.hpp"
-#include "isoquant/local_shape.hpp"
-#include "isoquant/numerical_decisions.hpp"
-#include "isoquant/substitution_elasticity.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+#include "isoquant/math/numerics/level_roots.hpp"
+#include "isoquant/math/forms/local_shape.hpp"
+#include "isoquant/math/decisions/numerical_decisions.hpp"
+#include "isoquant/math/forms/substitution_elasticity.hpp"
 #include "ces_test_technology.hpp"
 #include "relative_error.hpp"
 #include "translog_test_technology.hpp"

@@ -9,8 +9,8 @@
 // inputs when i ≠ j), and fit.t_test(Σᵢ gᵢ) for ν; printed with "%.7g" (estimates) and "%.6g"
 // (standard errors), classical covariance. Each figure is compared at the digits printed (half a
 // unit in the last one).
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/translog_fit.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/fits/translog_fit.hpp"
 #include "published_digits.hpp"
 #include "reference_data.hpp"
 

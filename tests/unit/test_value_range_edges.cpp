@@ -3,10 +3,10 @@
 // translog isoquants whose level is reached only away from the old search's start, and typed
 // models with a repeated row. Data: the Cobb & Douglas (1928) ranges (tests/data) with values moved
 // to the edge; the typed models are invented.
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/decision_cell_functions.hpp"
-#include "isoquant/exact_elementwise.hpp"
-#include "isoquant/production_fit.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
 #include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"

@@ -1,8 +1,8 @@
 // The cap on work per call (work_limits.hpp): beyond it a message naming the argument, never an
 // allocation of gigabytes inside the user's office. Sizes are the limits themselves, plus one.
-#include "isoquant/numeric_range.hpp"
-#include "isoquant/production_fit.hpp"
-#include "isoquant/work_limits.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/numerics/work_limits.hpp"
 
 #include "input_error_message.hpp"
 

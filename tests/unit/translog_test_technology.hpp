@@ -6,7 +6,7 @@
 // the generic calculus and solvers are checked on (the derivatives themselves by finite differences).
 #pragma once
 
-#include "isoquant/technology.hpp"
+#include "isoquant/math/forms/technology.hpp"
 
 #include <cmath>
 

@@ -1,8 +1,8 @@
 #include "isoquant/math/fits/cost_share_system.hpp"
 
-#include "isoquant/distributions.hpp"
-#include "isoquant/input_error.hpp"
-#include "isoquant/translog_fit.hpp"
+#include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/fits/translog_fit.hpp"
 
 #include <cmath>
 #include <string>

@@ -1,7 +1,8 @@
 #include "isoquant/sheet/arguments/envelope_arguments.hpp"
 
-#include "isoquant/input_error.hpp"
-#include "isoquant/text.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 
 #include <cmath>
 
@@ -9,17 +10,7 @@ namespace isoquant {
 
 namespace {
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
-std::string describe(const Cell& cell)
-{
-    return isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-}
-
-std::string rowsOf(Eigen::Index count)
-{
-    return std::to_string(count) + " row" + (count == 1 ? "" : "s");
-}
+std::string rowsOf(Eigen::Index count) { return plural(static_cast<std::size_t>(count), "row"); }
 
 std::string cellPlace(const std::string& argument, const NumericColumns& read, Eigen::Index row, Eigen::Index column)
 {
@@ -78,22 +69,18 @@ EnvelopeData readEnvelopeData(const CellTable& outputs, const CellTable& inputs)
 
 EnvelopeReturns readEnvelopeReturns(const Cell& cell)
 {
-    if (isOmitted(cell)) return EnvelopeReturns::constant;
-    const std::string word = optionWord(cell);
-    if (equalsIgnoringCase(word, "constant")) return EnvelopeReturns::constant;
-    if (equalsIgnoringCase(word, "variable")) return EnvelopeReturns::variable;
-    if (equalsIgnoringCase(word, "non-increasing")) return EnvelopeReturns::nonIncreasing;
-    throw InputError("returns: " + describe(cell) +
-                     " is not a kind of returns to scale; use \"constant\", \"variable\" or \"non-increasing\"");
+    return readChoice<EnvelopeReturns>(cell, "returns", "a kind of returns to scale",
+                                       {{"constant", EnvelopeReturns::constant},
+                                        {"variable", EnvelopeReturns::variable},
+                                        {"non-increasing", EnvelopeReturns::nonIncreasing}},
+                                       EnvelopeReturns::constant);
 }
 
 EnvelopeOrientation readEnvelopeOrientation(const Cell& cell)
 {
-    if (isOmitted(cell)) return EnvelopeOrientation::input;
-    const std::string word = optionWord(cell);
-    if (equalsIgnoringCase(word, "input")) return EnvelopeOrientation::input;
-    if (equalsIgnoringCase(word, "output")) return EnvelopeOrientation::output;
-    throw InputError("orientation: " + describe(cell) + " is not an orientation; use \"input\" or \"output\"");
+    return readChoice<EnvelopeOrientation>(
+        cell, "orientation", "an orientation",
+        {{"input", EnvelopeOrientation::input}, {"output", EnvelopeOrientation::output}}, EnvelopeOrientation::input);
 }
 
 EnvelopeRequest readEnvelopeRequest(const Cell& cell, const EnvelopeData& data)

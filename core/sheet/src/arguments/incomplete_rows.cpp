@@ -1,7 +1,7 @@
 #include "isoquant/sheet/arguments/incomplete_rows.hpp"
 
-#include "isoquant/input_error.hpp"
-#include "isoquant/numeric_range.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
 
 #include <algorithm>
 

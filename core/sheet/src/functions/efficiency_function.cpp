@@ -1,11 +1,11 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 
-#include "isoquant/exact_elementwise.hpp"
-#include "isoquant/input_error.hpp"
-#include "isoquant/model_inputs.hpp"
-#include "isoquant/numeric_range.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/model_inputs.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/models/frontier_model.hpp"
-#include "isoquant/text.hpp"
+#include "isoquant/math/messages/text.hpp"
 
 #include <cmath>
 

@@ -1,9 +1,9 @@
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 
-#include "isoquant/input_error.hpp"
-#include "isoquant/model_inputs.hpp"
-#include "isoquant/text.hpp"
-#include "isoquant/work_limits.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/model_inputs.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/numerics/work_limits.hpp"
 #include "isoquant/sheet/arguments/envelope_arguments.hpp"
 
 #include <cmath>

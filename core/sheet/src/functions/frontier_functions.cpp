@@ -1,14 +1,14 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 
-#include "isoquant/cell_functions.hpp"
-#include "isoquant/exact_elementwise.hpp"
-#include "isoquant/input_error.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/frontier/normal_tail.hpp"
-#include "isoquant/numeric_range.hpp"
-#include "isoquant/option_arguments.hpp"
-#include "isoquant/production_fit.hpp"
-#include "isoquant/text.hpp"
-#include "isoquant/translog_fit.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/fits/translog_fit.hpp"
 
 #include <cmath>
 

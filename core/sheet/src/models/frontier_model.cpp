@@ -1,11 +1,12 @@
 #include "isoquant/sheet/models/frontier_model.hpp"
 
-#include "isoquant/input_error.hpp"
+#include "isoquant/math/fits/ces_fit.hpp" // convergedText, the word every fit's convergence row uses
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/frontier/normal_tail.hpp"
-#include "isoquant/option_arguments.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
-#include "isoquant/table_labels.hpp"
-#include "isoquant/text.hpp"
+#include "isoquant/sheet/tables/table_labels.hpp"
+#include "isoquant/math/messages/text.hpp"
 
 #include <cmath>
 #include <optional>

@@ -1,8 +1,9 @@
 #include "isoquant/sheet/tables/frontier_table.hpp"
 
-#include "isoquant/table_labels.hpp"
-#include "isoquant/translog_fit.hpp"
-#include "table_writer.hpp"
+#include "isoquant/sheet/tables/table_labels.hpp"
+#include "isoquant/math/fits/ces_fit.hpp" // convergedText
+#include "isoquant/math/fits/translog_fit.hpp"
+#include "tables/table_writer.hpp"
 
 #include <cmath>
 

@@ -15,8 +15,8 @@
 //                              practice for system estimators, no source)
 #pragma once
 
-#include "isoquant/cost_fit.hpp"
-#include "isoquant/least_squares.hpp"
+#include "isoquant/math/fits/cost_fit.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
 #include "isoquant/math/fits/seemingly_unrelated.hpp"
 
 namespace isoquant {

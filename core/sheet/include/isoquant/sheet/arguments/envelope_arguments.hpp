@@ -4,8 +4,8 @@
 // Throws InputError.
 #pragma once
 
-#include "isoquant/cells.hpp"
-#include "isoquant/numeric_range.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/frontier/envelope.hpp"
 
 #include <string>

@@ -2,7 +2,7 @@
 // rows to leave out, and where a kept row lies in the ranges the user selected.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 #include <string>
 #include <utility>

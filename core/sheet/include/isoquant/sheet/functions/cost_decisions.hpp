@@ -5,7 +5,7 @@
 // naming the argument (and row) at fault; a well-posed question without an answer gives a sentence.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 namespace isoquant {
 

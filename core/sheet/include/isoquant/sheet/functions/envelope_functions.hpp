@@ -1,7 +1,7 @@
 // PRODENVELOPE: data envelopment on plain cells (the LPs in isoquant/math/frontier/envelope.hpp).
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 
 #include <cstddef>
 

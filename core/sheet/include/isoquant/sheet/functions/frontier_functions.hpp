@@ -2,9 +2,9 @@
 // isoquant/math/frontier/stochastic_frontier.hpp fitted to ranges, and the efficiency of each row.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
-#include "isoquant/production_form.hpp"
+#include "isoquant/math/forms/production_form.hpp"
 
 #include <Eigen/Dense>
 

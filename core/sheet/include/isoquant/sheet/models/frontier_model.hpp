@@ -1,9 +1,9 @@
 // A PRODFRONTIER table read back for PRODEFFICIENCY.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/math/frontier/frontier_likelihood.hpp"
-#include "isoquant/production_form.hpp"
+#include "isoquant/math/forms/production_form.hpp"
 
 #include <Eigen/Dense>
 

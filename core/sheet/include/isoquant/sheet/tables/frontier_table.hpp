@@ -14,7 +14,7 @@
 // "exponential frontier" under exponential inefficiency.
 #pragma once
 
-#include "isoquant/cells.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 
 #include <array>

@@ -1,0 +1,167 @@
+// General linear least squares with classical or heteroskedasticity-robust inference.
+//
+// This is the numerical engine under every log-linear production fit, and the entry point the
+// NIST StRD linear checks call directly (any design matrix, with or without a constant column).
+#pragma once
+
+#include "isoquant/math/numerics/regression_rows.hpp"
+
+#include <Eigen/Dense>
+
+#include <optional>
+#include <stdexcept>
+#include <vector>
+
+namespace isoquant {
+
+enum class CovarianceKind {
+    classical, // σ²·(XᵀX)⁻¹ with σ² = RSS/(n−p)
+    hc1,       // White's sandwich scaled by n/(n−p)
+    hc3,       // sandwich with squared residuals divided by (1−hᵢᵢ)²
+    cluster    // CR1: Σ_g (X_gᵀe_g)(X_gᵀe_g)ᵀ in the sandwich, scaled by G/(G−1)·(n−1)/(n−p), p less
+               // the absorbed parameters nested in the clusters (LeastSquaresOptions)
+};
+
+struct LeastSquaresOptions {
+    CovarianceKind covariance = CovarianceKind::classical;
+    // Bounds are b ∓ t_{(1+level)/2}(n−p)·se.
+    double confidenceLevel = 0.95;
+    // The design counts as rank deficient when the smallest singular value of the column-scaled
+    // design (every column scaled to unit Euclidean norm) is at most this fraction of the largest.
+    double rankTolerance = 1e-13;
+    // Above this 2-norm condition number of the column-scaled design the status becomes
+    // illConditioned; the numbers are still returned.
+    double conditionWarning = 1e10;
+    // The QR factorisation runs in double (vectorised; 2.7× faster at 1M rows in the benchmark) when
+    // the first-order error estimate of that solution, u·(κ + κ²·‖r‖/(‖X‖₂·‖b‖)) with u = 2⁻⁵³ and κ
+    // the 2-norm condition number of the column-scaled design X (Golub and Van Loan, Matrix
+    // Computations, §5.3.8), is at most this; otherwise, and for every rank decision, in long double
+    // with column pivoting. The estimate leaves out the growth factors in n and p: with 1e-12,
+    // NIST Wampler1 and Wampler3 took the double route and reached only LRE 9.5 and 9.6, so the
+    // limit is 1e-13. 0 sends every fit the extended way.
+    double doublePrecisionErrorLimit = 1e-13;
+    // The fit counts as perfect when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
+    double perfectFitTolerance = 1e-12;
+    // Parameters removed before the fit by demeaning within groups (the group means of a within
+    // estimator): they count in p, so n − p, σ² and the HC1 factor are those of the regression
+    // with one dummy per group (the CR1 factor: see the next option). 0 for an ordinary regression.
+    Eigen::Index absorbedParameters = 0;
+    // Of the absorbed parameters, those nested within the clusters beyond one overall level (the
+    // G − 1 group effects beyond the mean when the clusters are the groups). They use up no
+    // cluster degrees of freedom, so the CR1 factor leaves them out of p (Cameron and Miller,
+    // "A Practitioner's Guide to Cluster-Robust Inference", J. Human Resources 50(2), 2015, on
+    // fixed effects nested in clusters; from memory): G/(G−1)·(n−1)/(n − p + nested). σ², n − p
+    // and every other figure still count them.
+    Eigen::Index absorbedNestedInClusters = 0;
+    // Leverage of the absorbed parameters, added to every row's hᵢᵢ for HC3 (1/n_g for the
+    // group means: the leverage of the dummy-variable regression is that of the within one plus
+    // 1/n_g). Empty means none.
+    Eigen::VectorXd absorbedLeverage;
+    // For CovarianceKind::cluster: the cluster (0 … G−1) of every row; ignored otherwise.
+    std::vector<Eigen::Index> clusters;
+    // Rows factorised at a time by the double route (a TSQR: each block is stacked under the
+    // triangular factor so far), and visited at a time by the passes for residuals and robust
+    // errors. Memory beyond the results stays O(rowsPerBlock·p) for any n; results do not depend
+    // on it beyond rounding. At least 1.
+    Eigen::Index rowsPerBlock = 512;
+};
+
+enum class FitStatus {
+    ok,
+    illConditioned, // full rank, but the scaled condition number exceeds conditionWarning
+    perfectFit      // every residual is zero: standard errors are zero and tests are undefined
+};
+
+struct LeastSquaresResult {
+    bool factorisedInDouble = false; // which route doublePrecisionErrorLimit chose
+    Eigen::VectorXd coefficients;
+    Eigen::VectorXd standardErrors;
+    Eigen::VectorXd tStatistics;
+    Eigen::VectorXd pValues; // two-sided, Student t with inferenceDegreesOfFreedom
+    Eigen::VectorXd lowerBounds;
+    Eigen::VectorXd upperBounds;
+    Eigen::MatrixXd covariance;
+    Eigen::VectorXd residuals;
+
+    Eigen::Index observations = 0;
+    Eigen::Index parameters = 0;         // columns of the design
+    Eigen::Index absorbedParameters = 0; // as in the options; p = parameters + absorbedParameters
+    double residualDegreesOfFreedom = 0; // n − p
+    // Of the t and F distributions used for inference: n − p, or G − 1 under cluster errors.
+    double inferenceDegreesOfFreedom = 0;
+    Eigen::Index clusterCount = 0;       // G under cluster errors, else 0
+    double residualSumOfSquares = 0;
+    // Centred about the mean of y when the design has a constant column, uncentred otherwise.
+    double totalSumOfSquares = 0;
+    double rSquared = 0;          // 1 − RSS/TSS
+    double adjustedRSquared = 0;  // 1 − (1 − R²)·(n − c)/(n − p), c = 1 with a constant, else 0
+    double residualStandardDeviation = 0; // √(RSS/(n−p))
+    // Wald F of all coefficients but the constant being zero, on F(q, inferenceDegreesOfFreedom)
+    // with the chosen covariance; NaN when there is nothing to test or the test is undefined
+    // (overallTestExceedsClusters).
+    double fStatistic = 0;
+    double fPValue = 0;
+    Eigen::Index overallRestrictions = 0;   // q of that test
+    bool overallTestExceedsClusters = false; // q > G − 1 under cluster errors (WaldTest)
+    // Gaussian: −n/2·(ln 2π + ln(RSS/n) + 1); AIC = −2LL + 2p; BIC = −2LL + p·ln n (p excludes σ²).
+    double logLikelihood = 0;
+    double aic = 0;
+    double bic = 0;
+    double conditionNumber = 0; // of the column-scaled design
+    std::optional<Eigen::Index> interceptColumn;
+    CovarianceKind covarianceKind = CovarianceKind::classical;
+    double confidenceLevel = 0.95;
+    FitStatus status = FitStatus::ok;
+};
+
+// Thrown for HC3 errors when row `row` (0-based in the regression) has leverage 1: its weight
+// e²/(1 − h)² is 0/0, and the HC3 covariance is undefined.
+class UnitLeverage : public std::runtime_error {
+public:
+    explicit UnitLeverage(Eigen::Index row);
+    Eigen::Index row() const { return row_; }
+
+private:
+    Eigen::Index row_;
+};
+
+// The Gaussian log-likelihood of a least-squares fit with n residuals and sum of squares RSS (σ²
+// estimated as RSS/n and not counted among the parameters):
+//   LL = −n/2·(ln 2π + ln(RSS/n) + 1),   AIC = −2LL + 2p,   BIC = −2LL + p·ln n.
+// The one formula of every form (least squares, ces, translog), so their criteria compare.
+struct LikelihoodCriteria {
+    double logLikelihood = 0;
+    double aic = 0;
+    double bic = 0;
+};
+LikelihoodCriteria gaussianLikelihood(double residualSumOfSquares, double observations, double parameters);
+
+// Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
+// estimate allows, else with column pivoting in long double (see LeastSquaresOptions).
+// `interceptColumn` names the constant column, if any: it decides how TSS, R² and the overall F
+// are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1, finite data and, for
+// cluster errors, a cluster for every row and at least 2 clusters (std::invalid_argument
+// otherwise); throws CollinearColumns at numerical rank deficiency and UnitLeverage (HC3 only).
+LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eigen::Index> interceptColumn,
+                                   const LeastSquaresOptions& options = {});
+LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
+                                   std::optional<Eigen::Index> interceptColumn,
+                                   const LeastSquaresOptions& options = {});
+
+struct WaldTest {
+    double fStatistic = 0;
+    double numeratorDegreesOfFreedom = 0;
+    double denominatorDegreesOfFreedom = 0;
+    double pValue = 0; // upper tail of F(q, inferenceDegreesOfFreedom)
+    // Under cluster errors the G cluster scores sum to zero (Xᵀe = 0), so the covariance has rank
+    // at most G − 1: with q > G − 1 restrictions R V Rᵀ is singular and F (a ratio of rounding
+    // errors) is undefined. Then this is set and the statistic and p-value are NaN.
+    bool exceedsClusters = false;
+};
+
+// Wald F test of the q linear restrictions R·b = r with the fit's own covariance:
+// F = (Rb − r)ᵀ (R V Rᵀ)⁻¹ (Rb − r) / q; NaN when R V Rᵀ is singular (see WaldTest).
+WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::MatrixXd& restrictions,
+                                const Eigen::VectorXd& values);
+
+} // namespace isoquant

@@ -1,0 +1,55 @@
+// The rows of a regression as the least-squares solvers read them (least_squares.hpp).
+#pragma once
+
+#include <Eigen/Dense>
+
+#include <stdexcept>
+#include <utility>
+#include <vector>
+
+namespace isoquant {
+
+// The rows of a regression, produced a block at a time, so that a fit over a million rows never
+// holds its design in memory (the Cobb-Douglas fit takes logs block by block).
+class RegressionRows {
+public:
+    virtual ~RegressionRows() = default;
+    virtual Eigen::Index rows() const = 0;
+    virtual Eigen::Index columns() const = 0;
+    // Writes rows first … first + design.rows() − 1 of the design and of the response.
+    virtual void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design,
+                      Eigen::Ref<Eigen::VectorXd> response) const = 0;
+};
+
+// A design and response held in memory, as rows.
+class MatrixRows : public RegressionRows {
+public:
+    MatrixRows(const Eigen::MatrixXd& design, const Eigen::VectorXd& response) : design_(design), response_(response) {}
+    Eigen::Index rows() const override { return design_.rows(); }
+    Eigen::Index columns() const override { return design_.cols(); }
+    void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
+    {
+        design = design_.middleRows(first, design.rows());
+        response = response_.segment(first, response.size());
+    }
+
+private:
+    const Eigen::MatrixXd& design_;
+    const Eigen::VectorXd& response_;
+};
+
+// Thrown when the design is numerically rank deficient. `columns` lists the design columns with a
+// non-negligible weight in the (near) null-space direction: those that are collinear together.
+class CollinearColumns : public std::runtime_error {
+public:
+    explicit CollinearColumns(std::vector<Eigen::Index> columns)
+        : std::runtime_error("design columns are collinear"), columns_(std::move(columns))
+    {
+    }
+    const std::vector<Eigen::Index>& columns() const { return columns_; }
+
+private:
+    std::vector<Eigen::Index> columns_;
+};
+
+} // namespace isoquant

@@ -1,0 +1,42 @@
+// Limits on the work of one cell-function call.
+//
+// Calc runs add-in calls on its main thread, inside the user's office: a call that allocates
+// gigabytes can take the office down with every unsaved document, and one that runs for minutes
+// freezes it. Beyond these limits a call returns a message naming the argument instead. Within
+// them a 1,048,575-row Cobb-Douglas fit takes about a second (tests/benchmarks/RESULTS.md).
+#pragma once
+
+#include "isoquant/math/messages/text.hpp" // groupedCount, used with the limits
+
+#include <cstddef>
+#include <string>
+
+namespace isoquant {
+
+// Rows of one range argument: 2²⁰ = 1,048,576, a whole column of a Calc 7.4 sheet.
+constexpr std::size_t maximumRangeRows = std::size_t{1} << 20;
+// Cells of one range argument: 2²⁴ ≈ 16.8 million (16 full columns); the core's copy of them is
+// about 9 bytes a cell, beside Calc's own.
+constexpr std::size_t maximumRangeCells = std::size_t{1} << 24;
+// Values of a regression design held in memory at once (rows × columns): 2²⁵ ≈ 33.6 million, or
+// 268 MB in doubles. A full-column translog of 6 inputs (28 columns) fits; of 7 (36) does not.
+constexpr std::size_t maximumDesignValues = std::size_t{1} << 25;
+
+// Rows × residual evaluations that the nonlinear (ces) runs on all rows share: 2²⁷ ≈ 134 million,
+// about 10 s. Beyond it a run stops with the status "not converged", which the table reports as
+// for any run that reaches its evaluation limit; at 10,000 rows the limit is never reached.
+constexpr std::size_t maximumRowEvaluations = std::size_t{1} << 27;
+
+// The evaluation limit of each of `runs` runs over `rows` rows: the `requested` limit, lowered so
+// that all runs together stay within maximumRowEvaluations, but at least 1.
+std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested);
+
+// Throws InputError naming `argument` when a range has more rows or cells than allowed.
+void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument);
+
+// Throws InputError naming `argument` when `rows` × `columns` design values exceed the limit;
+// `what` says what the columns are ("the translog form of 7 inputs"), `advice` what to do.
+void checkDesignSize(std::size_t rows, std::size_t columns, const std::string& argument, const std::string& what,
+                     const std::string& advice = "use fewer inputs or a sample of the rows");
+
+} // namespace isoquant

@@ -1,0 +1,56 @@
+// The ces fit's model as the solver sees it (internal to the core; see ces_fit.hpp for the method).
+// The solver works on (ln A, t, s, ν) with δ = 1/(1 + e^(−t)) and ρ = −1 + eˢ, so that every
+// iterate is a CES with δ ∈ (0, 1) and ρ > −1; "raw" is (ln A, δ, ρ, ν).
+#pragma once
+
+#include "isoquant/math/numerics/nonlinear_least_squares.hpp"
+#include "isoquant/math/fits/fit_result.hpp"
+
+#include <Eigen/Dense>
+
+namespace isoquant::ces_fit {
+
+inline constexpr Eigen::Index parameterCount = 4;
+
+inline double logistic(double z)
+{
+    return z >= 0 ? 1.0 / (1.0 + std::exp(-z)) : std::exp(z) / (1.0 + std::exp(z));
+}
+
+// ln Y, ln x₂ and d = ln x₁ − ln x₂ of every row.
+struct CesLogs {
+    Eigen::VectorXd logOutput;
+    Eigen::VectorXd logSecond;
+    Eigen::VectorXd logRatio;
+};
+
+CesLogs logsOf(const ProductionData& data);
+
+// b + H(d) for every row.
+Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature);
+
+Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw);
+
+// The second column of the Jacobian: by δ itself (inference) or by its logit t (the solver).
+enum class WeightColumn { byWeight, byLogit };
+
+// ∂r/∂(ln A, δ or t, ρ, ν) at raw = (ln A, δ, ρ, ν).
+Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn);
+
+// (ln A, t, s, ν) ↔ (ln A, δ, ρ, ν)
+Eigen::Vector4d toRaw(const Eigen::VectorXd& solver);
+Eigen::Vector4d toSolver(const Eigen::Vector4d& raw);
+
+class CesModel : public NonlinearModel {
+public:
+    explicit CesModel(const CesLogs& logs) : logs_(logs) {}
+    Eigen::Index observationCount() const override { return logs_.logOutput.size(); }
+    Eigen::Index parameterCount() const override { return ces_fit::parameterCount; }
+    Eigen::VectorXd residuals(const Eigen::VectorXd& solver) const override;
+    Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override;
+
+private:
+    const CesLogs& logs_;
+};
+
+} // namespace isoquant::ces_fit

@@ -1,0 +1,17 @@
+// The ces fit's report at the point kept (internal to the core; the formulas are in ces_fit.hpp):
+// classical inference where the optimum is interior, converged and identified; σ and its bounds;
+// the fit statistics; the returns to scale and their verdict.
+#pragma once
+
+#include "fits/ces_fit_model.hpp"
+#include "isoquant/math/fits/ces_fit.hpp"
+
+namespace isoquant::ces_fit {
+
+// `raw` is the point kept, with a boundary parameter already set to its boundary value; `details`
+// its convergence, stop reason, evaluations and boundary. A converged interior point whose
+// Jacobian is rank deficient (rankTolerance) is marked NonlinearStatus::notIdentified here.
+ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Eigen::Vector4d& raw, CesDetails details,
+                       const ProductionFitOptions& options, double rankTolerance);
+
+} // namespace isoquant::ces_fit

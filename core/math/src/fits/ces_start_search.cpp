@@ -1,0 +1,148 @@
+#include "fits/ces_start_search.hpp"
+
+#include "isoquant/math/numerics/least_squares.hpp"
+
+#include <boost/math/tools/minima.hpp>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+#include <optional>
+
+namespace isoquant::ces_fit {
+
+namespace {
+
+// Curvatures ρ at which δ is searched for start values: σ from 10 down to about 0.06.
+constexpr double gridCurvatures[] = {-0.9, -0.75, -0.5, -0.25, 0.0, 0.25, 0.5, 1.0, 2.0, 4.0, 8.0, 16.0};
+// Logits of δ tried before Brent's search refines the best of them (δ from about 0.0025 to 0.9975).
+constexpr double gridWeightLogits[] = {-6, -4.5, -3, -2, -1, 0, 1, 2, 3, 4.5, 6};
+// Bounds a Kmenta start is clamped to: δ in [0.01, 0.99], ρ in [−0.9, 20].
+constexpr double kmentaWeightLimit = 0.01;
+constexpr double kmentaCurvatureLimit = 20.0;
+// Starts taken from the grid besides the Kmenta one.
+constexpr std::size_t gridStartsTried = 2;
+// Bits of precision Brent's search aims at on the logit of δ (enough for a start value).
+constexpr int brentBits = 20;
+
+struct ConcentratedFit {
+    double sumOfSquares = std::numeric_limits<double>::infinity();
+    Eigen::Vector4d raw = Eigen::Vector4d::Zero();
+};
+
+// For fixed δ and ρ the model is linear in ln A and ν: a simple regression of ln Y on b + H.
+ConcentratedFit concentrated(const CesLogs& logs, double weight, double curvature)
+{
+    const Eigen::VectorXd composite = compositeColumn(logs, weight, curvature);
+    const Eigen::ArrayXd centredX = composite.array() - composite.mean();
+    const Eigen::ArrayXd centredY = logs.logOutput.array() - logs.logOutput.mean();
+    const double sxx = centredX.square().sum();
+    ConcentratedFit fit;
+    if (!(sxx > 0) || !std::isfinite(sxx)) return fit;
+    const double slope = (centredX * centredY).sum() / sxx;
+    fit.sumOfSquares = (centredY - slope * centredX).square().sum();
+    fit.raw = {logs.logOutput.mean() - slope * composite.mean(), weight, curvature, slope};
+    return fit;
+}
+
+// Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its neighbours.
+ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
+{
+    const auto sumOfSquares = [&](double logit) { return concentrated(logs, logistic(logit), curvature).sumOfSquares; };
+    std::size_t best = 0;
+    double bestValue = std::numeric_limits<double>::infinity();
+    constexpr std::size_t count = std::size(gridWeightLogits);
+    for (std::size_t i = 0; i < count; ++i) {
+        const double value = sumOfSquares(gridWeightLogits[i]);
+        if (value < bestValue) bestValue = value, best = i;
+    }
+    const double low = gridWeightLogits[best == 0 ? 0 : best - 1];
+    const double high = gridWeightLogits[best + 1 == count ? best : best + 1];
+    const auto [logit, value] = boost::math::tools::brent_find_minima(sumOfSquares, low, high, brentBits);
+    return concentrated(logs, logistic(value <= bestValue ? logit : gridWeightLogits[best]), curvature);
+}
+
+// ln Y = β₀ + β₁ ln x₁ + β₂ ln x₂ + β₃ d², the second-order expansion of ln Y about ρ = 0:
+// ν = β₁ + β₂, δ = β₁/ν, ρ = −2β₃/(ν·δ(1−δ)); empty when ν ≤ 0.
+std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
+{
+    const Eigen::Index n = logs.logOutput.size();
+    Eigen::MatrixXd design(n, 4);
+    design.col(0).setOnes();
+    design.col(1) = logs.logRatio + logs.logSecond;
+    design.col(2) = logs.logSecond;
+    design.col(3) = logs.logRatio.array().square().matrix();
+    LeastSquaresResult kmenta;
+    try {
+        kmenta = fitLeastSquares(design, logs.logOutput, 0);
+    } catch (const CollinearColumns&) {
+        return std::nullopt;
+    }
+    const Eigen::VectorXd& b = kmenta.coefficients;
+    const double nu = b(1) + b(2);
+    if (!(nu > 0)) return std::nullopt;
+    // Kept inside the domain, where a start must lie, when the approximation strays outside it.
+    const double weight = std::clamp(b(1) / nu, kmentaWeightLimit, 1 - kmentaWeightLimit);
+    const double curvature = -2 * b(3) / (nu * weight * (1 - weight));
+    if (!std::isfinite(curvature)) return std::nullopt;
+    return Eigen::Vector4d(b(0), weight, std::clamp(curvature, gridCurvatures[0], kmentaCurvatureLimit), nu);
+}
+
+} // namespace
+
+// Rows ⌊k·n/m⌋, k = 0, …, m − 1: every (n/m)-th row, from the first; all n rows when n ≤ m.
+CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m)
+{
+    const Eigen::Index n = logs.logOutput.size();
+    if (n <= m) return logs;
+    CesLogs sample;
+    for (Eigen::VectorXd* column : {&sample.logOutput, &sample.logSecond, &sample.logRatio}) column->resize(m);
+    for (Eigen::Index k = 0; k < m; ++k) {
+        const Eigen::Index row = static_cast<Eigen::Index>(static_cast<long double>(k) * n / m);
+        sample.logOutput(k) = logs.logOutput(row);
+        sample.logSecond(k) = logs.logSecond(row);
+        sample.logRatio(k) = logs.logRatio(row);
+    }
+    return sample;
+}
+
+// The Kmenta start from all rows, then the best grid points from the rows of evenlySpacedRows.
+std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows)
+{
+    std::vector<Eigen::Vector4d> starts;
+    if (const auto kmenta = kmentaStart(logs)) starts.push_back(*kmenta);
+    const CesLogs searched = evenlySpacedRows(logs, searchRows);
+    std::vector<ConcentratedFit> grid;
+    for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, curvature));
+    std::sort(grid.begin(), grid.end(),
+              [](const ConcentratedFit& a, const ConcentratedFit& b) { return a.sumOfSquares < b.sumOfSquares; });
+    for (std::size_t i = 0; i < std::min(gridStartsTried, grid.size()); ++i)
+        if (std::isfinite(grid[i].sumOfSquares)) starts.push_back(grid[i].raw);
+    return starts;
+}
+
+// Each start moved to the optimum the solver reaches from it on the sample rows, so that the runs on
+// all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
+// coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
+// distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
+// not finite is replaced by the start itself.
+std::vector<Eigen::VectorXd> movedOnSample(const CesLogs& logs, const CesLogs& sample,
+                                           const std::vector<Eigen::VectorXd>& starts,
+                                           const NonlinearLeastSquaresOptions& options)
+{
+    constexpr double sameMinimum = 1e-6;
+    const CesModel sampleModel(sample);
+    std::vector<Eigen::VectorXd> moved;
+    for (const Eigen::VectorXd& start : starts) {
+        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, options).parameters;
+        const auto same = [&](const Eigen::VectorXd& other) {
+            return ((reached - other).array().abs() <= sameMinimum * (1 + other.array().abs())).all();
+        };
+        if (std::any_of(moved.begin(), moved.end(), same)) continue;
+        if (!rawResiduals(logs, toRaw(reached)).allFinite()) reached = start;
+        moved.push_back(reached);
+    }
+    return moved;
+}
+
+} // namespace isoquant::ces_fit

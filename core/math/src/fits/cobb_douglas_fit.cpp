@@ -1,0 +1,294 @@
+#include "isoquant/math/fits/cobb_douglas_fit.hpp"
+
+#include "isoquant/math/fits/returns_to_scale.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+namespace isoquant {
+
+namespace {
+
+// The regression behind a Cobb-Douglas fit, its rows taken a block at a time (logs included), so
+// that a million-row fit never holds a log design:
+//   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ,   or with constant returns imposed
+//   ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + Σⱼ cⱼ zⱼ,  b_k = 1 − Σ_{i<k} bᵢ.
+class CobbDouglasRows : public RegressionRows {
+public:
+    CobbDouglasRows(const ProductionData& data, bool constantReturns) : data_(data), constantReturns_(constantReturns) {}
+
+    Eigen::Index rows() const override { return data_.output.size(); }
+    Eigen::Index columns() const override { return 1 + slopes() + data_.controls.cols(); }
+
+    void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
+    {
+        const Eigen::Index count = design.rows();
+        const Eigen::Index k = data_.inputs.cols();
+        design.col(0).setOnes();
+        response = exactLog(data_.output.segment(first, count).array()).matrix();
+        design.middleCols(1, slopes()) = exactLog(data_.inputs.block(first, 0, count, slopes()).array()).matrix();
+        if (constantReturns_) {
+            const Eigen::VectorXd lastLog = exactLog(data_.inputs.col(k - 1).segment(first, count).array()).matrix();
+            response -= lastLog;
+            design.middleCols(1, slopes()).colwise() -= lastLog;
+        }
+        // Without controls their matrix has no storage: a block of it would offset a null pointer.
+        if (data_.controls.cols() > 0) design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
+    }
+
+private:
+    Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
+
+    const ProductionData& data_;
+    bool constantReturns_;
+};
+
+// How the regression's parameters θ map back to β = (ln A, b₁…b_k, c₁…c_m):  β = transform·θ + offset.
+struct ParameterMap {
+    Eigen::MatrixXd transform;
+    Eigen::VectorXd offset;
+};
+
+ParameterMap parameterMap(Eigen::Index k, Eigen::Index m, bool constantReturns)
+{
+    const Eigen::Index slopes = constantReturns ? k - 1 : k;
+    ParameterMap map;
+    map.transform = Eigen::MatrixXd::Zero(1 + k + m, 1 + slopes + m);
+    map.offset = Eigen::VectorXd::Zero(1 + k + m);
+    map.transform(0, 0) = 1.0;
+    for (Eigen::Index j = 0; j < m; ++j) map.transform(1 + k + j, 1 + slopes + j) = 1.0;
+    for (Eigen::Index i = 0; i < slopes; ++i) map.transform(1 + i, 1 + i) = 1.0;
+    if (constantReturns) {
+        map.transform.block(k, 1, 1, slopes).setConstant(-1.0);
+        map.offset(k) = 1.0;
+    }
+    return map;
+}
+
+// Σ(ln Y − mean ln Y)², by two passes over Y (no vector of logs is kept).
+double centredSumOfSquaresOfLogs(const Eigen::VectorXd& output)
+{
+    const double mean = exactLog(output.array()).mean();
+    return (exactLog(output.array()) - mean).square().sum();
+}
+
+// TSS of ln Y: the regression's own when its response is ln Y with a constant column (no
+// constant returns imposed, no group effects), else counted apart.
+double totalSumOfSquaresOfLogs(const ProductionData& data, const ProductionFitOptions& options,
+                               const LeastSquaresResult& regression)
+{
+    const bool responseIsLogOutput = !options.constantReturns && options.effects == EffectsKind::none;
+    return responseIsLogOutput ? regression.totalSumOfSquares : centredSumOfSquaresOfLogs(data.output);
+}
+
+std::string listOfNames(const std::vector<std::string>& names)
+{
+    std::string text;
+    for (std::size_t i = 0; i < names.size(); ++i) {
+        if (i > 0) text += i + 1 == names.size() ? " and " : ", ";
+        text += names[i];
+    }
+    return text;
+}
+
+// Names the inputs, controls, trend or period effects behind collinear design columns (in the
+// panel regression's extended column space), in the user's labels.
+std::string collinearityMessage(const ProductionData& data, bool constantReturns, EffectsKind effects,
+                                const std::vector<Eigen::Index>& columns)
+{
+    const auto k = static_cast<Eigen::Index>(data.inputLabels.size());
+    const auto m = static_cast<Eigen::Index>(data.controlLabels.size());
+    const Eigen::Index slopes = constantReturns ? k - 1 : k;
+    const bool hasTrend = data.panel.hasPeriods() && effects != EffectsKind::twoWay;
+    bool withConstant = false;
+    std::vector<std::string> names;
+    std::vector<std::string> arguments;
+    auto involve = [&arguments](const std::string& argument) {
+        if (std::find(arguments.begin(), arguments.end(), argument) == arguments.end()) arguments.push_back(argument);
+    };
+    for (const Eigen::Index column : columns) {
+        if (column == 0) {
+            withConstant = true;
+        } else if (column <= slopes) {
+            names.push_back(quoted(data.inputLabels[static_cast<std::size_t>(column - 1)]));
+            involve("inputs");
+        } else if (column <= slopes + m) {
+            names.push_back("control " + quoted(data.controlLabels[static_cast<std::size_t>(column - 1 - slopes)]));
+            involve("controls");
+        } else if (hasTrend && column == 1 + slopes + m) {
+            names.push_back("the trend");
+            involve("trend");
+        } else if (std::find(names.begin(), names.end(), "the period effects") == names.end()) {
+            names.push_back("the period effects");
+            involve("trend");
+        }
+    }
+    const std::string argument = arguments.empty() ? "inputs" : listOfNames(arguments);
+    const std::string note =
+        constantReturns ? " (as ratios to " + quoted(data.inputLabels.back()) + ", since constant returns are imposed)" : "";
+    const bool groupEffects = effects != EffectsKind::none;
+    const std::string constant = groupEffects ? "the group effects" : "ln A";
+    if (names.empty()) return "inputs: the data cannot identify " + constant + note;
+    if (withConstant && names.size() == 1) {
+        const bool plural = names.front() == "the period effects";
+        return argument + ": " + names.front() + note + (plural ? " do not vary" : " does not vary") +
+               (groupEffects ? " within any group" : "") + ", so " + (plural ? "they" : "it") +
+               " cannot be told apart from " + constant;
+    }
+    return argument + ": " + listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
+           " are collinear (inputs taken in logs); drop one of them";
+}
+
+// The panel options need their columns; errors name the argument to fix.
+void requirePanelColumns(const ProductionData& data, const ProductionFitOptions& options)
+{
+    const PanelColumns& panel = data.panel;
+    const auto n = static_cast<std::size_t>(data.output.size());
+    if (panel.hasGroups() && panel.groupOfRow.size() != n)
+        throw InputError("groups: has " + std::to_string(panel.groupOfRow.size()) + " rows of data but output has " +
+                         std::to_string(n));
+    if (panel.hasPeriods() && static_cast<std::size_t>(panel.periods.size()) != n)
+        throw InputError("trend: has " + std::to_string(panel.periods.size()) + " rows of data but output has " +
+                         std::to_string(n));
+    if (options.effects != EffectsKind::none && !panel.hasGroups())
+        throw InputError("effects: \"" + effectsWord(options.effects) +
+                         "\" needs the groups argument, a column naming each row's plant or firm");
+    if (options.effects == EffectsKind::twoWay && !panel.hasPeriods())
+        throw InputError("effects: \"two-way\" needs the trend argument, the column of periods (years)");
+    if (options.covariance == CovarianceKind::cluster) {
+        if (!panel.hasGroups())
+            throw InputError("errors: \"cluster\" needs the groups argument, a column naming each row's plant or firm");
+        if (panel.groupLabels.size() < 2)
+            throw InputError("groups: every row is in the same group; cluster-robust errors need at least 2 groups");
+    }
+}
+
+ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index column)
+{
+    return {regression.coefficients(column), regression.standardErrors(column), regression.tStatistics(column),
+            regression.pValues(column),      regression.lowerBounds(column),    regression.upperBounds(column)};
+}
+
+// `regression` is run.regression, moved into the fit.
+PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, const PanelRegression& run,
+                            const LeastSquaresResult& regression, double logScaleAtControlMeans)
+{
+    PanelSummary summary;
+    summary.effects = effects;
+    summary.groups = static_cast<Eigen::Index>(panel.groupLabels.size());
+    summary.groupLabels = panel.groupLabels;
+    if (effects != EffectsKind::none) {
+        summary.withinRSquared = run.withinRSquared;
+        summary.groupEffects = run.groupEffects;
+    }
+    if (effects == EffectsKind::twoWay) {
+        summary.periods = run.periodValues;
+        const auto later = static_cast<Eigen::Index>(run.periodValues.size()) - 1;
+        summary.periodEffects.resize(later + 1);
+        summary.periodEffects << 0.0, regression.coefficients.segment(run.firstPeriodColumn, later);
+    }
+    if (run.trendColumn) {
+        summary.technicalChange = parameterAt(regression, *run.trendColumn);
+        summary.latestPeriod = panel.periods.maxCoeff();
+        summary.trendLooksLikeDates = trendCountsDays(panel.periods);
+    }
+    summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
+    summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;
+    if (effects != EffectsKind::none) {
+        // ln A at the control means holds the plain mean of the group effects; predictions use the
+        // mean over rows, Σ_g n_g·α_g / n.
+        double rowWeighted = 0;
+        for (const Eigen::Index group : panel.groupOfRow) rowWeighted += run.groupEffects(group);
+        rowWeighted /= static_cast<double>(panel.groupOfRow.size());
+        summary.logScaleForPredictions += rowWeighted - run.groupEffects.mean();
+    }
+    return summary;
+}
+
+} // namespace
+
+ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOptions& options)
+{
+    const Eigen::Index n = data.output.size();
+    const Eigen::Index k = data.inputs.cols();
+    const Eigen::Index m = data.controls.cols();
+    if (k < 1) throw InputError("inputs: needs at least one column");
+    requirePanelColumns(data, options);
+
+
+    const CobbDouglasRows rows(data, options.constantReturns);
+    const ParameterMap map = parameterMap(k, m, options.constantReturns);
+    const Eigen::Index baseColumns = rows.columns();
+    const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
+    // The design is held in full with a trend or effects, or when it needs the long double route.
+    const Eigen::Index trendColumns = data.panel.hasPeriods() && options.effects != EffectsKind::twoWay ? 1 : 0;
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(baseColumns + trendColumns), "inputs",
+                    "the cobb-douglas form with " + std::to_string(baseColumns + trendColumns) + " regression columns");
+    if (n < p + 1) {
+        const std::string groupNote = options.effects == EffectsKind::none
+                                          ? ""
+                                          : " (" + std::to_string(data.panel.groupLabels.size()) + " group effects included)";
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) + (n == 1 ? " row" : " rows") +
+                         " of data for " + std::to_string(p) + " parameters to estimate" + groupNote +
+                         "; need at least " + std::to_string(p + 1));
+    }
+    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
+    if (data.output.maxCoeff() == data.output.minCoeff())
+        throw InputError("output: every row holds the same value; there is no variation to explain");
+
+    LeastSquaresOptions regressionOptions;
+    regressionOptions.covariance = options.covariance;
+    regressionOptions.confidenceLevel = options.confidenceLevel;
+    ProductionFit fit;
+    PanelRegression run;
+    try {
+        run = fitPanelRegression(rows, data.panel, options.effects, regressionOptions);
+    } catch (const CollinearColumns& collinear) {
+        throw InputError(collinearityMessage(data, options.constantReturns, options.effects, collinear.columns()));
+    }
+    fit.regression = std::move(run.regression);
+    const LeastSquaresResult& regression = fit.regression;
+
+    fit.form = options.form;
+    fit.inputLabels = data.inputLabels;
+    fit.controlLabels = data.controlLabels;
+    fit.status = regression.status;
+    // The form's parameters come from the base columns; the trend and period effects are reported apart.
+    fit.estimates = map.transform * regression.coefficients.head(baseColumns) + map.offset;
+    fit.covariance = map.transform * regression.covariance.topLeftCorner(baseColumns, baseColumns) *
+                     map.transform.transpose();
+    if (run.effectsAbsorbConstant) {
+        // ln A is the mean group effect, reported without a standard error (panel_regression.hpp).
+        fit.covariance.row(0).setConstant(notANumber);
+        fit.covariance.col(0).setConstant(notANumber);
+    }
+    fit.standardErrors = fit.covariance.diagonal().cwiseSqrt();
+    fit.tStatistics = fit.estimates.cwiseQuotient(fit.standardErrors);
+    const double df = regression.residualDegreesOfFreedom;
+    const double inferenceDf = regression.inferenceDegreesOfFreedom;
+    const double critical = studentCriticalValue(options.confidenceLevel, inferenceDf);
+    fit.pValues.resize(fit.estimates.size());
+    for (Eigen::Index j = 0; j < fit.estimates.size(); ++j)
+        fit.pValues(j) = studentTwoSidedPValue(fit.tStatistics(j), inferenceDf);
+    fit.lowerBounds = fit.estimates - critical * fit.standardErrors;
+    fit.upperBounds = fit.estimates + critical * fit.standardErrors;
+
+    fit.rSquared = 1.0 - regression.residualSumOfSquares / totalSumOfSquaresOfLogs(data, options, regression);
+    fit.adjustedRSquared = 1.0 - (1.0 - fit.rSquared) * static_cast<double>(n - 1) / df;
+
+    fit.returns = testReturnsToScale(fit, regression, k, options.constantReturns, options.confidenceLevel);
+    fit.logScaleAtControlMeans = fit.estimates(0);
+    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
+    fit.smearingFactor = run.smearingFactor;
+    fit.panel = summarisePanel(data.panel, options.effects, run, fit.regression, fit.logScaleAtControlMeans);
+    return fit;
+}
+
+} // namespace isoquant

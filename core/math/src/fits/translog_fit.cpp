@@ -1,0 +1,170 @@
+#include "isoquant/math/fits/translog_fit.hpp"
+
+#include "isoquant/math/numerics/work_limits.hpp"
+
+#include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/fits/returns_to_scale.hpp"
+#include "fits/fit_inference.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+std::vector<std::pair<Eigen::Index, Eigen::Index>> translogPairs(Eigen::Index inputs)
+{
+    std::vector<std::pair<Eigen::Index, Eigen::Index>> pairs;
+    for (Eigen::Index i = 0; i < inputs; ++i)
+        for (Eigen::Index j = i; j < inputs; ++j) pairs.emplace_back(i, j);
+    return pairs;
+}
+
+std::string translogPairLabel(const std::vector<std::string>& labels, Eigen::Index first, Eigen::Index second)
+{
+    return labels[static_cast<std::size_t>(first)] + "*" + labels[static_cast<std::size_t>(second)];
+}
+
+Eigen::MatrixXd translogDesign(const Eigen::MatrixXd& logInputs, const Eigen::MatrixXd& controls)
+{
+    const Eigen::Index k = logInputs.cols();
+    const auto pairs = translogPairs(k);
+    const auto q = static_cast<Eigen::Index>(pairs.size());
+    Eigen::MatrixXd design(logInputs.rows(), 1 + k + q + controls.cols());
+    design.col(0).setOnes();
+    design.middleCols(1, k) = logInputs;
+    for (Eigen::Index c = 0; c < q; ++c) {
+        const auto [i, j] = pairs[static_cast<std::size_t>(c)];
+        // ½βᵢᵢ(ln xᵢ)² and, for i < j, ½(βᵢⱼ + βⱼᵢ)·ln xᵢ·ln xⱼ = βᵢⱼ·ln xᵢ·ln xⱼ
+        design.col(1 + k + c) = ((i == j ? 0.5 : 1.0) * logInputs.col(i).array() * logInputs.col(j).array()).matrix();
+    }
+    design.rightCols(controls.cols()) = controls;
+    return design;
+}
+
+namespace {
+
+std::vector<std::string> termLabels(const ProductionData& data)
+{
+    const auto k = static_cast<Eigen::Index>(data.inputLabels.size());
+    std::vector<std::string> labels{"ln A"};
+    for (const auto& label : data.inputLabels) labels.push_back(quoted(label));
+    for (const auto& [i, j] : translogPairs(k)) labels.push_back(quoted(translogPairLabel(data.inputLabels, i, j)));
+    for (const auto& label : data.controlLabels) labels.push_back("control " + quoted(label));
+    return labels;
+}
+
+std::string collinearTerms(const ProductionData& data, const std::vector<Eigen::Index>& columns)
+{
+    const std::vector<std::string> labels = termLabels(data);
+    std::string names;
+    for (std::size_t c = 0; c < columns.size(); ++c)
+        names += (c == 0 ? "" : c + 1 == columns.size() ? " and " : ", ") + labels[static_cast<std::size_t>(columns[c])];
+    return "inputs: the translog terms " + names +
+           " are collinear (inputs taken in logs); use fewer inputs or more varied data";
+}
+
+void requireTranslogData(const ProductionData& data, const ProductionFitOptions& options)
+{
+    if (data.inputs.cols() < 1) throw InputError("inputs: needs at least one column");
+    if (options.constantReturns)
+        throw InputError("constant returns: cannot be imposed on the translog form; leave the argument empty");
+    for (std::size_t column = 0; column < data.inputLabels.size(); ++column)
+        if (data.inputLabels[column].find('*') != std::string::npos)
+            throw InputError("inputs: column " + std::to_string(column + 1) + " is labelled " +
+                             quoted(data.inputLabels[column]) +
+                             "; the translog table joins labels with \"*\", so rename it");
+    if (data.output.maxCoeff() == data.output.minCoeff())
+        throw InputError("output: every row holds the same value; there is no variation to explain");
+}
+
+// εᵢ at l̄ and ν = Σ εᵢ as linear functions gᵀθ of the parameters.
+Eigen::MatrixXd elasticityGradients(Eigen::Index k, Eigen::Index parameters, const Eigen::VectorXd& meanLogs)
+{
+    Eigen::MatrixXd gradients = Eigen::MatrixXd::Zero(k + 1, parameters);
+    for (Eigen::Index i = 0; i < k; ++i) gradients(i, 1 + i) = 1.0;
+    Eigen::Index column = 1 + k;
+    for (const auto& [i, j] : translogPairs(k)) {
+        gradients(i, column) += meanLogs(j);
+        if (i != j) gradients(j, column) += meanLogs(i);
+        ++column;
+    }
+    gradients.row(k) = gradients.topRows(k).colwise().sum();
+    return gradients;
+}
+
+} // namespace
+
+ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions& options)
+{
+    requireTranslogData(data, options);
+    const Eigen::Index n = data.output.size();
+    const Eigen::Index k = data.inputs.cols();
+    const Eigen::Index m = data.controls.cols();
+    const auto pairs = translogPairs(k);
+    const auto q = static_cast<Eigen::Index>(pairs.size());
+    const Eigen::Index p = 1 + k + q + m;
+    if (n < p + 1)
+        throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
+                         std::to_string(p) + " parameters of the translog form; need at least " + std::to_string(p + 1));
+
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), "inputs",
+                    "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
+    const Eigen::MatrixXd logs = exactLog(data.inputs.array()).matrix();
+    const Eigen::MatrixXd design = translogDesign(logs, data.controls);
+
+    LeastSquaresOptions regressionOptions;
+    regressionOptions.covariance = options.covariance;
+    regressionOptions.confidenceLevel = options.confidenceLevel;
+    ProductionFit fit;
+    try {
+        fit.regression = fitLeastSquares(design, exactLog(data.output.array()).matrix(), 0, regressionOptions);
+    } catch (const CollinearColumns& collinear) {
+        throw InputError(collinearTerms(data, collinear.columns()));
+    }
+    const LeastSquaresResult& regression = fit.regression;
+    fit.form = ProductionForm::translog;
+    fit.inputLabels = data.inputLabels;
+    fit.controlLabels = data.controlLabels;
+    fit.status = regression.status;
+    setParameterInference(fit, regression.coefficients, regression);
+    fit.rSquared = regression.rSquared;
+    fit.adjustedRSquared = regression.adjustedRSquared;
+    fit.logScaleAtControlMeans = fit.estimates(0);
+    fit.smearingFactor = regression.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
+    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
+
+    auto details = std::make_shared<TranslogDetails>();
+    details->meanLogInputs = logs.colwise().mean().transpose();
+    const Eigen::MatrixXd gradients = elasticityGradients(k, p, details->meanLogInputs);
+    const Eigen::VectorXd values = gradients * fit.estimates;
+    const Eigen::VectorXd errors = (gradients * fit.covariance * gradients.transpose()).diagonal().cwiseSqrt();
+    const double df = regression.residualDegreesOfFreedom;
+    const double critical = studentCriticalValue(options.confidenceLevel, df);
+    details->elasticities = values.head(k);
+    details->elasticityStandardErrors = errors.head(k);
+    details->elasticityTStatistics = details->elasticities.cwiseQuotient(details->elasticityStandardErrors);
+    details->elasticityPValues.resize(k);
+    for (Eigen::Index i = 0; i < k; ++i)
+        details->elasticityPValues(i) = studentTwoSidedPValue(details->elasticityTStatistics(i), df);
+    details->elasticityLowerBounds = details->elasticities - critical * details->elasticityStandardErrors;
+    details->elasticityUpperBounds = details->elasticities + critical * details->elasticityStandardErrors;
+
+    Eigen::MatrixXd interactionsZero = Eigen::MatrixXd::Zero(q, p);
+    interactionsZero.middleCols(1 + k, q).setIdentity();
+    details->cobbDouglasTest = testLinearRestrictions(regression, interactionsZero, Eigen::VectorXd::Zero(q));
+    fit.translog = details;
+
+    const bool testable = regression.status != FitStatus::perfectFit;
+    const WaldTest scaleTest = testLinearRestrictions(regression, gradients.bottomRows(1), Eigen::VectorXd::Ones(1));
+    fit.returns.estimate = values(k);
+    fit.returns.standardError = errors(k);
+    fit.returns.fStatistic = testable ? scaleTest.fStatistic : std::nan("");
+    fit.returns.pValue = testable ? scaleTest.pValue : std::nan("");
+    fit.returns.verdict =
+        classifyReturnsToScale(fit.returns.estimate, fit.returns.pValue, options.confidenceLevel, false);
+    return fit;
+}
+
+} // namespace isoquant

@@ -1,0 +1,189 @@
+#include "isoquant/math/numerics/nonlinear_least_squares.hpp"
+
+#include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
+
+#include <Eigen/SVD>
+#include <unsupported/Eigen/NonLinearOptimization>
+
+#include <cmath>
+#include <limits>
+#include <optional>
+#include <stdexcept>
+
+namespace isoquant {
+
+namespace {
+
+// Stands in for a residual outside the model's domain: finite, so the solver's norms stay finite,
+// and far above any real residual, so the step is rejected (MINPACK rejects a step whose residual
+// norm exceeds ten times the current one outright).
+constexpr double outsideDomainResidual = 1e100;
+
+// The functor shape Eigen's LevenbergMarquardt expects.
+class SolverFunctor {
+public:
+    explicit SolverFunctor(const NonlinearModel& model) : model_(model) {}
+
+    int values() const { return static_cast<int>(model_.observationCount()); }
+
+    int operator()(const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) const
+    {
+        residuals = model_.residuals(parameters);
+        for (Eigen::Index i = 0; i < residuals.size(); ++i)
+            if (!std::isfinite(residuals(i))) residuals(i) = outsideDomainResidual;
+        return 0;
+    }
+
+    int df(const Eigen::VectorXd& parameters, Eigen::MatrixXd& jacobian) const
+    {
+        jacobian = model_.jacobian(parameters);
+        return jacobian.allFinite() ? 0 : -1; // −1 stops the solver (status "user asked")
+    }
+
+private:
+    const NonlinearModel& model_;
+};
+
+std::string describeStop(Eigen::LevenbergMarquardtSpace::Status code)
+{
+    using namespace Eigen::LevenbergMarquardtSpace;
+    switch (code) {
+    case RelativeReductionTooSmall: return "relative reduction of the sum of squares below tolerance";
+    case RelativeErrorTooSmall: return "relative step below tolerance";
+    case RelativeErrorAndReductionTooSmall: return "relative reduction and step below tolerance";
+    case CosinusTooSmall: return "residuals orthogonal to the Jacobian";
+    case TooManyFunctionEvaluation: return "evaluation limit reached";
+    case FtolTooSmall:
+    case XtolTooSmall:
+    case GtolTooSmall: return "no further reduction possible at machine precision";
+    case UserAsked: return "Jacobian not finite";
+    default: return "stopped";
+    }
+}
+
+NonlinearStatus statusOf(Eigen::LevenbergMarquardtSpace::Status code)
+{
+    using namespace Eigen::LevenbergMarquardtSpace;
+    switch (code) {
+    case TooManyFunctionEvaluation: return NonlinearStatus::evaluationLimit;
+    case UserAsked: return NonlinearStatus::stopped;
+    default: return NonlinearStatus::converged;
+    }
+}
+
+struct GaussNewtonStep {
+    Eigen::VectorXd direction; // −J⁺·r
+    double length = 0;         // ‖J·direction‖
+};
+
+std::optional<GaussNewtonStep> gaussNewtonStep(const NonlinearModel& model, const Eigen::VectorXd& parameters,
+                                               double rankTolerance)
+{
+    const Eigen::VectorXd residuals = model.residuals(parameters);
+    const Eigen::MatrixXd jacobian = model.jacobian(parameters);
+    if (!residuals.allFinite() || !jacobian.allFinite()) return std::nullopt;
+    Eigen::ColPivHouseholderQR<Eigen::MatrixXd> qr(jacobian);
+    qr.setThreshold(rankTolerance);
+    if (qr.rank() < jacobian.cols()) return std::nullopt;
+    GaussNewtonStep step;
+    step.direction = qr.solve(-residuals);
+    step.length = (jacobian * step.direction).norm();
+    return step;
+}
+
+} // namespace
+
+Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& parameters, int maximumSteps,
+                                     double rankTolerance)
+{
+    Eigen::VectorXd refined = parameters;
+    std::optional<GaussNewtonStep> step = gaussNewtonStep(model, refined, rankTolerance);
+    for (int k = 0; step && k < maximumSteps; ++k) {
+        const Eigen::VectorXd next = refined + step->direction;
+        std::optional<GaussNewtonStep> following = gaussNewtonStep(model, next, rankTolerance);
+        if (!following || !(following->length < step->length)) break;
+        refined = next;
+        step = std::move(following);
+    }
+    return refined;
+}
+
+NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+                                      const Eigen::VectorXd& parameters, double confidenceLevel,
+                                      double rankTolerance)
+{
+    const Eigen::Index n = jacobian.rows();
+    const Eigen::Index p = jacobian.cols();
+    NonlinearInference inference;
+    inference.residualSumOfSquares = residuals.squaredNorm();
+    inference.residualDegreesOfFreedom = static_cast<double>(n - p);
+    const double variance = inference.residualSumOfSquares / inference.residualDegreesOfFreedom;
+    inference.residualStandardDeviation = std::sqrt(variance);
+
+    // (JᵀJ)⁻¹ from the SVD of the column-scaled Jacobian J·S: (JᵀJ)⁻¹ = S·V·Σ⁻²·Vᵀ·S.
+    Eigen::VectorXd columnNorms = jacobian.colwise().norm().transpose();
+    bool deficient = (columnNorms.array() == 0).any() || !jacobian.allFinite();
+    if (!deficient) {
+        const Eigen::MatrixXd scaled = jacobian * columnNorms.cwiseInverse().asDiagonal();
+        const Eigen::JacobiSVD<Eigen::MatrixXd> svd(scaled, Eigen::ComputeThinV);
+        const Eigen::VectorXd singular = svd.singularValues();
+        deficient = singular(p - 1) <= rankTolerance * singular(0);
+        if (!deficient) {
+            const Eigen::MatrixXd root = columnNorms.cwiseInverse().asDiagonal() * svd.matrixV() *
+                                         singular.cwiseInverse().asDiagonal();
+            inference.covariance = variance * root * root.transpose();
+        }
+    }
+    if (deficient) inference.covariance = Eigen::MatrixXd::Constant(p, p, notANumber);
+
+    inference.standardErrors = inference.covariance.diagonal().cwiseSqrt();
+    inference.tStatistics = parameters.cwiseQuotient(inference.standardErrors);
+    inference.pValues.resize(p);
+    for (Eigen::Index j = 0; j < p; ++j)
+        inference.pValues(j) = studentTwoSidedPValue(inference.tStatistics(j), inference.residualDegreesOfFreedom);
+    const double critical = studentCriticalValue(confidenceLevel, inference.residualDegreesOfFreedom);
+    inference.lowerBounds = parameters - critical * inference.standardErrors;
+    inference.upperBounds = parameters + critical * inference.standardErrors;
+    return inference;
+}
+
+NonlinearLeastSquaresResult minimizeSumOfSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                 const NonlinearLeastSquaresOptions& options)
+{
+    const Eigen::Index n = model.observationCount();
+    const Eigen::Index p = model.parameterCount();
+    if (p < 1 || start.size() != p) throw std::invalid_argument("start: needs one value per parameter");
+    if (n <= p) throw std::invalid_argument("model: needs more observations than parameters");
+    if (!start.allFinite() || !model.residuals(start).allFinite())
+        throw std::invalid_argument("start: the model is not defined there");
+
+    SolverFunctor functor(model);
+    Eigen::LevenbergMarquardt<SolverFunctor> solver(functor);
+    solver.parameters.ftol = options.relativeReductionTolerance;
+    solver.parameters.xtol = options.relativeStepTolerance;
+    solver.parameters.gtol = options.gradientTolerance;
+    solver.parameters.maxfev = options.maximumEvaluations;
+
+    NonlinearLeastSquaresResult result;
+    result.parameters = start;
+    const auto code = solver.minimize(result.parameters);
+    result.status = statusOf(code);
+    result.stopReason = describeStop(code);
+    result.evaluations = solver.nfev;
+    result.jacobianEvaluations = solver.njev;
+    result.observations = n;
+    result.residuals = model.residuals(result.parameters);
+    return result;
+}
+
+NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                     const NonlinearLeastSquaresOptions& options)
+{
+    NonlinearLeastSquaresResult result = minimizeSumOfSquares(model, start, options);
+    result.inference = nonlinearInference(model.jacobian(result.parameters), result.residuals, result.parameters,
+                                          options.confidenceLevel, options.rankTolerance);
+    return result;
+}
+
+} // namespace isoquant

@@ -1,0 +1,36 @@
+#include "isoquant/math/numerics/work_limits.hpp"
+
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/messages/text.hpp"
+
+#include <algorithm>
+
+namespace isoquant {
+
+std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested)
+{
+    if (rows == 0 || runs == 0) return requested;
+    return std::max<std::size_t>(1, std::min(requested, maximumRowEvaluations / rows / runs));
+}
+
+void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument)
+{
+    if (rows > maximumRangeRows)
+        throw InputError(argument + ": the range has " + groupedCount(rows) + " rows; one call takes at most " +
+                         groupedCount(maximumRangeRows) + " (a whole sheet column)");
+    // Checked as rows > cells / columns, so that the product cannot overflow.
+    if (columns > 0 && rows > maximumRangeCells / columns)
+        throw InputError(argument + ": the range has " + groupedCount(rows) + " rows × " + groupedCount(columns) +
+                         " columns; one call takes at most " + groupedCount(maximumRangeCells) + " cells");
+}
+
+void checkDesignSize(std::size_t rows, std::size_t columns, const std::string& argument, const std::string& what,
+                     const std::string& advice)
+{
+    if (columns > 0 && rows > maximumDesignValues / columns)
+        throw InputError(argument + ": " + what + " on " + groupedCount(rows) + " rows needs " + groupedCount(rows) +
+                         " × " + groupedCount(columns) + " design values, more than the " +
+                         groupedCount(maximumDesignValues) + " one call may hold; " + advice);
+}
+
+} // namespace isoquant

@@ -1,0 +1,43 @@
+// A cost function read from cells, for PRODCOST: a PRODCOSTFIT table, or one typed by hand with the
+// rows `form | cobb-douglas cost` (or `translog cost`), `constant`, `output`, one row per input
+// price's coefficient, labelled by the input; a translog also `output*output`, `<i>*<j>` (i ≤ j)
+// and `<i>*output`. Evaluates
+//   ln C = β₀ + β_y ln y + ½β_yy (ln y)² + Σᵢ βᵢ ln wᵢ + ½ΣᵢΣⱼ βᵢⱼ ln wᵢ ln wⱼ + Σᵢ βᵢ_y ln wᵢ ln y
+// (the second-order terms zero for Cobb-Douglas) and its cost elasticity
+//   ε = ∂ln C/∂ln y = β_y + β_yy ln y + Σᵢ βᵢ_y ln wᵢ.
+// The model is used as given: a typed model whose price coefficients do not sum to 1 is not
+// homogeneous in prices, and no check corrects it.
+#pragma once
+
+#include "isoquant/sheet/arguments/cells.hpp"
+
+#include <Eigen/Dense>
+
+#include <string>
+#include <vector>
+
+namespace isoquant {
+
+struct CostModel {
+    bool translog = false;
+    std::vector<std::string> priceLabels;
+    double constant = 0;
+    double output = 0;
+    double outputSquared = 0;          // β_yy
+    Eigen::VectorXd prices;            // βᵢ
+    Eigen::MatrixXd priceInteractions; // βᵢⱼ, symmetric k × k
+    Eigen::VectorXd priceOutput;       // βᵢ_y
+
+    double logCost(double output, const Eigen::VectorXd& prices) const;
+    double costElasticity(double output, const Eigen::VectorXd& prices) const;
+};
+
+// Whether `model` is a cost model: its first cell is a cost table's title, or it has a `form` row
+// whose word is a cost form ("cobb-douglas cost", "translog cost").
+bool isCostModel(const CellTable& model);
+
+// Throws InputError naming the row at fault (a missing number, an unknown price label in a
+// second-order row, a missing `constant` or `output` row, second-order rows in a Cobb-Douglas model).
+CostModel readCostModel(const CellTable& model);
+
+} // namespace isoquant

@@ -1,0 +1,241 @@
+#include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
+
+#include "isoquant/sheet/models/cost_model.hpp"
+#include "isoquant/sheet/arguments/decision_arguments.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/caches/model_cache.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/sheet/arguments/panel_arguments.hpp"
+#include "isoquant/sheet/arguments/period_range.hpp"
+#include "isoquant/sheet/arguments/incomplete_rows.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
+#include "isoquant/sheet/tables/table_labels.hpp"
+#include "isoquant/math/messages/text.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+namespace isoquant {
+
+namespace {
+
+std::string rowsText(Eigen::Index rows) { return plural(static_cast<std::size_t>(rows), "row"); }
+
+void requireSameRows(const NumericColumns& cost, const NumericColumns& other, const std::string& name)
+{
+    if (other.values.rows() != cost.values.rows())
+        throw InputError(name + ": has " + rowsText(other.values.rows()) + " of data but cost has " +
+                         rowsText(cost.values.rows()));
+}
+
+NumericColumns readOneColumn(const CellTable& range, const std::string& name,
+                             const std::vector<bool>* skippedRows = nullptr)
+{
+    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name, skippedRows);
+    if (column.values.cols() != 1)
+        throw InputError(name + ": must be one column; it has " + std::to_string(column.values.cols()));
+    return column;
+}
+
+CostForm readCostForm(const Cell& cell)
+{
+    return readChoice<CostForm>(cell, "form", "a cost form",
+                                {{"cobb-douglas", CostForm::cobbDouglas}, {"translog", CostForm::translog}},
+                                CostForm::cobbDouglas);
+}
+
+// The arguments this slice declares but does not yet use.
+void refuseLaterArguments(const CostFitArguments& arguments)
+{
+    auto refuse = [](const std::string& name) {
+        throw InputError(name + ": not available yet for cost fits; leave it empty");
+    };
+    if (!arguments.controls.empty()) refuse("controls");
+    if (!arguments.groups.empty()) refuse("groups");
+    if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
+    if (!arguments.trend.empty()) refuse("trend");
+}
+
+void refuseReservedLabels(const std::vector<std::string>& labels)
+{
+    for (std::size_t column = 0; column < labels.size(); ++column) {
+        const std::string& label = labels[column];
+        if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
+            equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
+            throw InputError("input prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+                             "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
+    }
+}
+
+// One column per price, as many rows as cost, each row summing to 1 within 0.01 (rescaled to 1,
+// as PRODINDEX does; the same tolerance).
+Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices,
+                               const std::vector<bool>* skippedRows)
+{
+    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share", skippedRows);
+    if (shares.values.cols() != prices)
+        throw InputError("shares: has " + std::to_string(shares.values.cols()) + " columns but input prices has " +
+                         std::to_string(prices) + "; give one share column per price, in the same order");
+    requireSameRows(cost, shares, "shares");
+    Eigen::MatrixXd rescaled = shares.values;
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row)
+        for (Eigen::Index column = 0; column < prices; ++column)
+            if (rescaled(row, column) < 0)
+                throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                                 ", column " + std::to_string(column + 1) + " is " + formatNumber(rescaled(row, column)) +
+                                 "; a cost share cannot be negative");
+    for (Eigen::Index row = 0; row < rescaled.rows(); ++row) {
+        const double sum = rescaled.row(row).sum();
+        if (!(std::fabs(sum - 1) <= shareSumTolerance * (1 + 1e-6)))
+            throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                             ": the shares sum to " + formatNumber(sum) +
+                             "; each row's cost shares must sum to 1 within 0.01 (0.99 to 1.01; fractions, not percent)");
+        rescaled.row(row) /= sum;
+    }
+    return rescaled;
+}
+
+} // namespace
+
+CostFit costFitFromArguments(const CostFitArguments& arguments)
+{
+    CostFitOptions options;
+    options.form = readCostForm(arguments.form);
+    options.covariance = readErrorsArgument(arguments.errors);
+    if (options.covariance == CovarianceKind::cluster)
+        throw InputError("errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
+    options.confidenceLevel = readLevelArgument(arguments.level, "level");
+    refuseLaterArguments(arguments);
+    // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
+    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    std::vector<bool> incomplete;
+    if (dropIncomplete && !arguments.cost.empty())
+        incomplete = findIncompleteRowsIn({{&arguments.cost, "cost"}, {&arguments.output, "output"},
+                                           {&arguments.prices, "input prices"}, {&arguments.shares, "shares"}});
+    const std::vector<bool>* skipped = dropIncomplete ? &incomplete : nullptr;
+
+    const NumericColumns cost = readOneColumn(arguments.cost, "cost", skipped);
+    const NumericColumns output = readOneColumn(arguments.output, "output", skipped);
+    requireSameRows(cost, output, "output");
+    const NumericColumns prices =
+        readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input", skipped);
+    requireSameRows(cost, prices, "input prices");
+    refuseReservedLabels(prices.labels);
+
+    CostData data;
+    data.cost = cost.values.col(0);
+    data.output = output.values.col(0);
+    data.prices = prices.values;
+    data.priceLabels = prices.labels;
+    if (!arguments.shares.empty()) {
+        if (options.covariance != CovarianceKind::classical)
+            throw InputError("errors: with shares the system is fitted by iterated GLS, whose errors are classical; "
+                             "leave errors empty or fit without shares");
+        data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
+    }
+    try {
+        CostFit fit = fitCost(data, options);
+        fit.firstDataRow = cost.firstDataRow();
+        if (fit.regularity.firstRow) // counted among the kept rows; named among all
+            fit.regularity.firstRow =
+                static_cast<Eigen::Index>(dataRowOfKept(static_cast<std::size_t>(*fit.regularity.firstRow), incomplete));
+        fit.dropsIncompleteRows = dropIncomplete;
+        fit.incompleteRowsDropped = static_cast<std::size_t>(std::count(incomplete.begin(), incomplete.end(), true));
+        return fit;
+    } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
+        const std::size_t row = dataRowOfKept(static_cast<std::size_t>(leverage.row()), incomplete);
+        throw InputError("errors: row " + std::to_string(row + cost.firstDataRow()) +
+                         " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
+    }
+}
+
+namespace {
+
+double costFigure(const CostModel& model, double level, const Eigen::VectorXd& prices, CostMeasure measure)
+{
+    switch (measure) {
+    case CostMeasure::total: return std::exp(model.logCost(level, prices));
+    case CostMeasure::marginal: return model.costElasticity(level, prices) * std::exp(model.logCost(level, prices)) / level;
+    case CostMeasure::average: return std::exp(model.logCost(level, prices)) / level;
+    case CostMeasure::costElasticity: return model.costElasticity(level, prices);
+    case CostMeasure::returnsToScale: return 1.0 / model.costElasticity(level, prices);
+    }
+    return std::nan("");
+}
+
+} // namespace
+
+Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
+                              const std::string& outputArgument)
+{
+    if (outputs == 1) return readPrices(range, "input prices", inputs).transpose();
+    const NumericColumns prices = readNumericColumns(range, "input prices", ValueRule::positive, "price");
+    if (prices.values.cols() != inputs)
+        throw InputError("input prices: has " + std::to_string(prices.values.cols()) + " columns, but the model has " +
+                         std::to_string(inputs) + " prices; give one column per input");
+    if (prices.values.rows() != 1 && prices.values.rows() != outputs)
+        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but " + outputArgument + " has " +
+                         rowsText(outputs) + "; give one row of prices per output, or one row for all");
+    return prices.values;
+}
+
+CellTable costModelColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    const CostModel cost = readCostModel(model);
+    const CostMeasure measure = readCostMeasure(what);
+    const NumericColumns outputs = readOneColumn(target, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size(), "target output");
+    CellTable column(static_cast<std::size_t>(n), 1);
+    for (Eigen::Index row = 0; row < n; ++row) {
+        const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
+        const double figure = costFigure(cost, outputs.values(row, 0), rowPrices, measure);
+        if (!std::isfinite(figure))
+            throw InputError("target output: row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                             " gives a result that cannot be represented");
+        column.set(static_cast<std::size_t>(row), 0, figure);
+    }
+    return column;
+}
+
+
+namespace {
+
+// PRODCOST over a production model, one least-cost plan per output (costCell); a row without an
+// answer shows its sentence, a message names its row.
+CellTable productionCostColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    const NumericColumns outputs = readOneColumn(target, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, "target output");
+    CellTable column(static_cast<std::size_t>(n), 1);
+    for (Eigen::Index row = 0; row < n; ++row) {
+        CellTable rowPrices(1, static_cast<std::size_t>(inputs));
+        for (Eigen::Index i = 0; i < inputs; ++i)
+            rowPrices.set(0, static_cast<std::size_t>(i), priceRows(priceRows.rows() == 1 ? 0 : row, i));
+        try {
+            column.set(static_cast<std::size_t>(row), 0, costCell(model, outputs.values(row, 0), rowPrices, what).at(0, 0));
+        } catch (const InputError& error) {
+            const std::string argument = "target output: ", message = error.what();
+            if (message.compare(0, argument.size(), argument) != 0) throw;
+            throw InputError(argument + "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                             ": " + message.substr(argument.size()));
+        }
+    }
+    return column;
+}
+
+} // namespace
+
+CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+{
+    if (isCostModel(model)) return costModelColumn(model, target, prices, what);
+    if (target.rows() == 1 && target.columns() == 1) return costCell(model, target.at(0, 0), prices, what);
+    return productionCostColumn(model, target, prices, what);
+}
+
+} // namespace isoquant

@@ -1,0 +1,76 @@
+#include "isoquant/sheet/tables/cost_table.hpp"
+
+#include "tables/table_writer.hpp"
+
+namespace isoquant {
+
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows)
+{
+    const std::size_t secondOrder = form == CostForm::translog ? 1 + prices * (prices + 1) / 2 + prices : 0;
+    return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0);
+}
+
+namespace {
+
+// Why there is no efficient scale, when there is none; and the fit's own note.
+std::string costFormNote(const CostFit& fit)
+{
+    std::string note = fitStatusNote(fit.summary);
+    auto add = [&note](const std::string& more) { note += (note.empty() ? "" : "; ") + more; };
+    if (fit.form == CostForm::cobbDouglas)
+        add("note: a Cobb-Douglas cost function has the same cost elasticity at every output, so no efficient scale");
+    else if (!fit.efficientScale)
+        add("note: the cost elasticity does not rise with output (output*output is not positive), so average cost "
+            "has no lowest point and there is no efficient scale");
+    return note;
+}
+
+// "regular at every row", or the first irregular row and what fails there.
+std::string regularityNote(const CostFit& fit)
+{
+    if (!fit.regularity.firstRow) return "regular at every row";
+    return "first: row " + std::to_string(static_cast<std::size_t>(*fit.regularity.firstRow) + fit.firstDataRow) + " (" +
+           fit.regularity.firstPhrase + ")";
+}
+
+} // namespace
+
+CellTable costFitTable(const CostFit& fit)
+{
+    const ProductionFit& summary = fit.summary;
+    const bool translog = fit.form == CostForm::translog;
+    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows),
+                       summary.status == FitStatus::perfectFit);
+    writer.headerRow(translog ? translogCostTitle : cobbDouglasCostTitle);
+    Eigen::Index parameter = 0;
+    writer.parameterRow(costConstantLabel, summary, parameter++);
+    writer.parameterRow(costOutputLabel, summary, parameter++);
+    for (const auto& label : fit.priceLabels) writer.parameterRow(label, summary, parameter++);
+    if (translog)
+        for (const auto& label : costSecondOrderLabels(fit.priceLabels)) writer.parameterRow(label, summary, parameter++);
+    writer.skipRow();
+
+    writer.fitStatisticRows(summary, true);
+    if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
+    const ParameterEstimate& elasticity = fit.costElasticity;
+    writer.put(costElasticityLabel, {elasticity.estimate, writer.undefinedIfExact(elasticity.standardError),
+                                     writer.undefinedIfExact(elasticity.tStatistic),
+                                     writer.undefinedIfExact(elasticity.pValue),
+                                     writer.undefinedIfExact(elasticity.lowerBound),
+                                     writer.undefinedIfExact(elasticity.upperBound)});
+    writer.returnsRows(summary.returns);
+    if (fit.efficientScale) {
+        const ParameterEstimate& scale = *fit.efficientScale;
+        writer.put(efficientScaleLabel, {scale.estimate, writer.undefinedIfExact(scale.standardError), Cell{}, Cell{},
+                                         writer.undefinedIfExact(scale.lowerBound),
+                                         writer.undefinedIfExact(scale.upperBound)});
+    } else {
+        writer.textRow(efficientScaleLabel, {notAvailableText});
+    }
+    writer.put(costRegularityLabel, {static_cast<double>(fit.regularity.irregularRows), regularityNote(fit)});
+    writer.textRow(formLabel, {translog ? translogCostWord : cobbDouglasCostWord, costFormNote(fit)});
+    writer.valueRow(smearingLabel, summary.smearingFactor);
+    return writer.finish();
+}
+
+} // namespace isoquant
