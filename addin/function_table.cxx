@@ -76,7 +76,11 @@ const std::vector<FunctionInfo>& functionTable()
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
          "returns to scale with the test that it equals 1, and a verdict.",
          {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument,
+          {"covariance", "TRUE to add below the table the estimated covariance matrix of the parameters (of the "
+                         "kind chosen by errors), one row per parameter, for bounds on derived numbers; the table is "
+                         "then max(7, p + 1) columns wide and 1 + p rows longer, p parameters. Cobb-douglas form "
+                         "only. FALSE or empty: no block."}}},
         {"prodStat", "PRODSTAT",
          "One value of the PRODFIT table, looked up by row and column label, without an array formula.",
          {outputArgument, inputsArgument,

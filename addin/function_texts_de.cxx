@@ -87,7 +87,11 @@ const Translation& germanTranslation()
          "in Logarithmen. Liefert eine Tabelle (als Matrixformel eingeben): Schätzwerte mit Standardfehlern, t- und "
          "p-Werten und Konfidenzgrenzen, Gütemaße, die Skalenerträge mit dem Test auf den Wert 1 und ein Urteil.",
          {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument,
+          {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Parameter anzufügen (der unter "
+                        "Standardfehler gewählten Art), eine Zeile je Parameter, für Grenzen abgeleiteter Größen; die "
+                        "Tabelle ist dann max(7, p + 1) Spalten breit und 1 + p Zeilen länger, p Parameter. Nur für "
+                        "die Form cobb-douglas. FALSCH oder leer: kein Block."}}},
         {"prodStat",
          "Ein Wert der PRODFIT-Tabelle, gesucht nach Zeilen- und Spaltenbezeichnung, ohne Matrixformel.",
          {outputArgument, inputsArgument,

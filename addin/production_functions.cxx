@@ -13,6 +13,7 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/functions/envelope_functions.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 
 #include <new>
 
@@ -124,13 +125,14 @@ FitArguments ProductionFunctions::withPanelArguments(FitArguments arguments, con
 Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                       const Any& constantReturns, const Any& errors, const Any& level,
                                       const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                      const Any& incompleteRows)
+                                      const Any& incompleteRows, const Any& covariance)
 {
     return guardedTable([&] {
         // Cut before the cache: a whole column's empty tail is neither hashed nor kept.
-        return fitTable(*fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
+        const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
-            incompleteRows))));
+            incompleteRows)));
+        return fitTableWithCovariance(fitTable(*fit), *fit, toSingleCell(covariance, "covariance"));
     });
 }
 

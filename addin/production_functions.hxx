@@ -42,7 +42,7 @@ public:
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
                               const css::uno::Any& level, const css::uno::Any& controls,
                               const css::uno::Any& groups, const css::uno::Any& effects, const css::uno::Any& trend,
-                              const css::uno::Any& incompleteRows) override;
+                              const css::uno::Any& incompleteRows, const css::uno::Any& covariance) override;
     css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const AnyTable& rowLabel,
                                     const css::uno::Any& columnLabel, const css::uno::Any& form,
                                     const css::uno::Any& constantReturns, const css::uno::Any& errors,

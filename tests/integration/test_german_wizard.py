@@ -46,14 +46,14 @@ ENGLISH_NAME = {
     "Tabelle": "table", "Ineffizienz": "inefficiency", "Ausbringungen": "outputs", "Skalenerträge": "returns",
     "Orientierung": "orientation", "Namen": "names",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
-    "Mengen von Faktor i": "values of input i",
+    "Mengen von Faktor i": "values of input i", "Kovarianz": "covariance",
 }
 FIT_ARGUMENTS = ["Funktionsform", "konstante Skalenerträge", "Standardfehler", "Konfidenzniveau",
                  "Kontrollvariablen", "Gruppen", "Effekte", "Trend", "unvollständige Zeilen"]
 AT_BUNDLES = ["Modell", "Faktormengen"]
 # German argument names of every function on this branch (German table).
 GERMAN_ARGUMENTS = {
-    "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS,
+    "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS + ["Kovarianz"],
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
     "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
     "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
