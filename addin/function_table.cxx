@@ -57,6 +57,11 @@ constexpr ArgumentInfo bundlesArgument{
     "inputs", "One row of input values in the model's input order, or several rows: the result is then a column "
               "with one value per row."};
 constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for the first) or its label."};
+// The evaluators' optional last argument (issue 20).
+constexpr ArgumentInfo boundsArgument{
+    "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
+            "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output "
+            "and marginal products get bounds on the log scale. Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -101,17 +106,21 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
          {modelArgument, bundlesArgument,
           {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "
-                   "for the median prediction, exp of the fitted log."}}},
+                   "for the median prediction, exp of the fitted log."},
+          {"what", "As for PRODMARGINAL (\"value\", \"std. error\", \"lower bound\", \"upper bound\"), and "
+                   "\"prediction lower\" or \"prediction upper\": the interval for one new plant's output, adding the "
+                   "residual variance."}}},
         {"prodMarginal", "PRODMARGINAL",
          "Marginal product of one input for each row of inputs: the extra output from one more unit of it.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodElasticity", "PRODELASTICITY",
          "Output elasticity of one input for each row of inputs: the % change in output per 1% more of it.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodScale", "PRODSCALE",
          "Returns to scale: the % change in output when every input rises by 1% (the sum of the elasticities).",
          {modelArgument,
-          {"inputs", "Optional rows of input values: the result is then a column with one value per row."}}},
+          {"inputs", "Optional rows of input values: the result is then a column with one value per row."},
+          boundsArgument}},
         {"prodReturns", "PRODRETURNS",
          "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
          "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "

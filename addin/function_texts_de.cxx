@@ -65,6 +65,11 @@ constexpr ArgumentInfo bundlesArgument{
                     "Ergebnis ist dann eine Spalte mit einem Wert je Zeile."};
 constexpr ArgumentInfo inputArgument{"Faktor",
                                      "Welcher Faktor: seine Nummer (1 für den ersten) oder seine Bezeichnung."};
+constexpr ArgumentInfo boundsArgument{
+    "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
+                "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
+                "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung und "
+                "Grenzprodukte erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -115,21 +120,25 @@ const Translation& germanTranslation()
          {modelArgument, bundlesArgument,
           {"Mittelwert", "WAHR für die Vorhersage des Mittelwerts (der Median, multipliziert mit dem "
                          "Smearing-Faktor der Tabelle); FALSCH oder leer für die Vorhersage des Medians, exp des "
-                         "geschätzten Logarithmus."}}},
+                         "geschätzten Logarithmus."},
+          {"Kennzahl", "Wie bei PRODMARGINAL (\"value\", \"std. error\", \"lower bound\", \"upper bound\"), dazu "
+                       "\"prediction lower\" oder \"prediction upper\": das Intervall für die Ausbringung eines "
+                       "neuen Betriebs, mit der Residualvarianz."}}},
         {"prodMarginal",
          "Grenzprodukt eines Faktors für jede Zeile von Faktormengen: die zusätzliche Ausbringung aus einer weiteren "
          "Einheit dieses Faktors.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodElasticity",
          "Produktionselastizität eines Faktors für jede Zeile von Faktormengen: die prozentuale Änderung der "
          "Ausbringung bei 1 % mehr von diesem Faktor.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodScale",
          "Skalenelastizität, das Maß der Skalenerträge: die prozentuale Änderung der Ausbringung, wenn alle Faktoren "
          "um 1 % steigen (die Summe der Produktionselastizitäten).",
          {modelArgument,
           {"Faktormengen", "Optionale Zeilen von Faktormengen: das Ergebnis ist dann eine Spalte mit einem Wert je "
-                           "Zeile."}}},
+                           "Zeile."},
+          boundsArgument}},
         {"prodReturns",
          "Urteil über die Skalenerträge: steigend, konstant oder sinkend (die Zelle zeigt increasing, constant oder "
          "decreasing), nach dem Test, ob die Skalenelastizität gleich 1 ist, auf dem gegebenen Konfidenzniveau. Ein "

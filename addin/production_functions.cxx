@@ -14,6 +14,7 @@
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
+#include "isoquant/sheet/functions/bound_functions.hpp"
 
 #include <new>
 
@@ -157,33 +158,38 @@ Any ProductionFunctions::prodValue(const AnyTable& table, const AnyTable& rowLab
     });
 }
 
-Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
+Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean, const Any& what)
 {
     return guardedTable([&] {
-        return outputColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
+        return outputColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                      toSingleCell(mean, "mean"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
+Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                      const Any& what)
 {
     return guardedTable([&] {
-        return marginalProductColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                     toSingleCell(Any(input), "input"));
+        return marginalProductColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                               toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
+Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                        const Any& what)
 {
     return guardedTable([&] {
-        return elasticityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                toSingleCell(Any(input), "input"));
+        return elasticityColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                          toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
+Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs, const Any& what)
 {
-    return guardedTable(
-        [&] { return scaleColumn(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs")); });
+    return guardedTable([&] {
+        return scaleColumnWithBounds(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs"),
+                                     toSingleCell(what, "what"));
+    });
 }
 
 Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)

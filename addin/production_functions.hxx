@@ -52,11 +52,13 @@ public:
     css::uno::Any SAL_CALL prodValue(const AnyTable& table, const AnyTable& rowLabel,
                                      const css::uno::Any& columnLabel) override;
     css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs,
-                                      const css::uno::Any& mean) override;
-    css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
-    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs,
-                                          const AnyTable& input) override;
-    css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
+                                      const css::uno::Any& mean, const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                        const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                          const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs,
+                                     const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                               const css::uno::Any& periods) override;

@@ -1,5 +1,5 @@
 """Issue 20 in a real headless LibreOffice Calc with the extension: PRODFIT's covariance block, read
-back by the evaluators and PRODVALUE.
+back by the evaluators and PRODVALUE, and the evaluators' `what` (std. error, bounds).
 
 Run from the repository root with Debian's Python, the package isoquant_office on the path (see
 tests/integration/README.md):
@@ -84,6 +84,62 @@ class CovarianceBlockTest(CalcTestCase):
         self.assert_message(get_cell(self.sheet, "N7"),
                             "Error: covariance: the block is written for the cobb-douglas form only so far; leave "
                             "covariance empty or FALSE for the translog form", "translog with covariance")
+
+
+class BoundsTest(CalcTestCase):
+    """`what` of PRODMARGINAL, PRODOUTPUT, PRODELASTICITY and PRODSCALE on the table with its block.
+    Expected: statsmodels' cov_params of the same fit and the gradient of ln MP = ln bL + ln A +
+    bL ln L + bC ln C - ln L in numpy (1, ln L, ln C) + (0, 1/bL, 0); se = MP sqrt(g'Vg), bounds
+    MP exp(-+ t s) with scipy's t(21) quantile; to 1e-7 relative (the issue's tolerance)."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Bounds of values")
+        set_values(cls.sheet, "P90", [["L", "C"], [150.0, 200.0], [250.0, 400.0]])
+        set_array_formula(cls.sheet, "F1:L21", "=PRODFIT(B1:B25;C1:D25;;;;;;;;;;TRUE())")
+        for column, what in zip("NOPQ", ["value", "std. error", "lower bound", "upper bound"]):
+            set_array_formula(cls.sheet, "%s1:%s3" % (column, column),
+                              '=PRODMARGINAL($F$1:$L$21;$P$90:$Q$92;"L";"%s")' % what)
+        set_formula(cls.sheet, "N10", '=PRODSCALE($F$1:$L$21;;"std. error")')
+        set_formula(cls.sheet, "N11", '=PRODELASTICITY($F$1:$L$21;$P$91:$Q$91;"C";"upper bound")')
+        set_formula(cls.sheet, "N12", '=PRODOUTPUT($F$1:$L$21;$P$91:$Q$91;;"prediction upper")')
+        set_formula(cls.sheet, "N13", '=PRODOUTPUT($F$1:$L$21;$P$91:$Q$91;;"upper bound")')
+        set_formula(cls.sheet, "N14", '=PRODMARGINAL($F$1:$L$17;$P$91:$Q$91;"L";"std. error")')
+        set_formula(cls.sheet, "N15", '=PRODMARGINAL($F$1:$L$21;$P$91:$Q$91;"L";"bounds")')
+        recalc(CALC.doc)
+
+    def test_marginal_product_against_statsmodels(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        import scipy.stats
+        y = logs(self.data["P"])
+        result = statsmodels_fit(y, [logs(self.data["L"]), logs(self.data["C"])])
+        theta, cov = np.asarray(result.params), np.asarray(result.cov_params())
+        t = scipy.stats.t.ppf(0.975, result.df_resid)
+        self.assertEqual(get_cell(self.sheet, "N1"), "marginal product of L")
+        for row, (labour, capital) in enumerate([(150.0, 200.0), (250.0, 400.0)]):
+            gradient = np.array([1.0, np.log(labour) + 1.0 / theta[1], np.log(capital)])
+            marginal = theta[1] * np.exp(theta[0] + theta[1] * np.log(labour) + theta[2] * np.log(capital)) / labour
+            spread = float(np.sqrt(gradient @ cov @ gradient))
+            expected = [marginal, marginal * spread, marginal * np.exp(-t * spread), marginal * np.exp(t * spread)]
+            for column, figure in zip("NOPQ", expected):
+                with self.subTest(row=row, column=column):
+                    self.assert_relative(get_cell(self.sheet, "%s%d" % (column, row + 2)), figure, 1e-7,
+                                         "PRODMARGINAL column %s" % column)
+        self.assert_relative(get_cell(self.sheet, "N10"), float(np.sqrt(cov[1:, 1:].sum())), 1e-7, "PRODSCALE se")
+        self.assert_relative(get_cell(self.sheet, "N11"), theta[2] + t * float(np.sqrt(cov[2, 2])), 1e-7,
+                             "PRODELASTICITY upper bound")
+
+    def test_prediction_bounds_are_wider(self):
+        self.assertGreater(get_cell(self.sheet, "N12"), get_cell(self.sheet, "N13"))
+
+    def test_messages_name_the_argument(self):
+        self.assert_message(get_cell(self.sheet, "N14"),
+                            "Error: what: \"std. error\" needs the model's covariance block; this model has none (a "
+                            "typed model, or a PRODFIT table made without covariance TRUE)", "no block")
+        self.assert_message(get_cell(self.sheet, "N15"),
+                            "Error: what: give \"value\", \"std. error\", \"lower bound\" or \"upper bound\"",
+                            "unknown word")
 
 
 if __name__ == "__main__":

@@ -21,8 +21,8 @@ setUpModule, tearDownModule = CALC.start, CALC.stop
 # -- 9: Function Wizard metadata ---------------------------------------------------------------------
 
 # Display names and argument counts, as the issues state the functions.
-ARGUMENT_COUNTS = {"PRODFIT": 12, "PRODSTAT": 13, "PRODOUTPUT": 3, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
-                   "PRODSCALE": 2, "PRODRETURNS": 2}
+ARGUMENT_COUNTS = {"PRODFIT": 12, "PRODSTAT": 13, "PRODOUTPUT": 4, "PRODMARGINAL": 4, "PRODELASTICITY": 4,
+                   "PRODSCALE": 3, "PRODRETURNS": 2}
 # Required arguments lead; the rest are optional (declared `any` in idl/, which Calc marks optional).
 REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 3, "PRODOUTPUT": 2, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
                       "PRODSCALE": 1, "PRODRETURNS": 1}

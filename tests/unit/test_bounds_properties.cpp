@@ -1,0 +1,106 @@
+// Bounds of derived numbers (issue 20, bound_functions.hpp): coverage on invented data from a known
+// technology (a property test, seeded), and the messages for the words `what` cannot answer.
+#include "isoquant/cobb_douglas.hpp"
+#include "isoquant/cell_functions.hpp"
+#include "isoquant/fit_table.hpp"
+#include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
+#include "generated_data.hpp"
+#include "input_error_message.hpp"
+#include "reference_data.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+using isoquant::testing::messageOf;
+
+namespace {
+
+isoquant::CellTable oneBundle(double first, double second)
+{
+    isoquant::CellTable bundle(1, 2);
+    bundle.set(0, 0, first);
+    bundle.set(0, 1, second);
+    return bundle;
+}
+
+isoquant::CellTable tableWithBlock(const isoquant::ProductionFit& fit)
+{
+    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+}
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(bounds_properties)
+
+// 2,000 data sets of 30 rows from Y = e^0.5·x₁^0.6·x₂^0.3 with N(0, 0.1²) noise on ln Y (inputs
+// log-uniform on [1, 100], generated_data.hpp, seeds 1 … 2000). The 95 % bounds of the marginal
+// product of x₁ at (20, 50) must cover its true value 0.6·Y/20 in 93.5–96.5 % of them (the issue's
+// band: about ±3 binomial standard errors, √(0.95·0.05/2000) = 0.49 %, around 95 %).
+BOOST_AUTO_TEST_CASE(marginal_product_bounds_cover_the_true_value)
+{
+    const isoquant::CobbDouglas technology(0.5, Eigen::Vector2d(0.6, 0.3));
+    const Eigen::Vector2d point(20.0, 50.0);
+    const double truth = technology.marginalProduct(point, 0);
+    const auto bundle = oneBundle(point(0), point(1));
+    isoquant::ProductionFitOptions options;
+    int covered = 0;
+    const int dataSets = 2000;
+    for (int seed = 1; seed <= dataSets; ++seed) {
+        const auto fit = isoquant::fitProduction(
+            isoquant::testing::generate(technology, 30, static_cast<std::uint32_t>(seed), 0.1), options);
+        const auto table = tableWithBlock(fit);
+        const double lower =
+            isoquant::marginalProductColumnWithBounds(table, bundle, 1.0, std::string("lower bound")).number(0, 0);
+        const double upper =
+            isoquant::marginalProductColumnWithBounds(table, bundle, 1.0, std::string("upper bound")).number(0, 0);
+        if (lower <= truth && truth <= upper) ++covered;
+    }
+    const double coverage = static_cast<double>(covered) / dataSets;
+    BOOST_TEST_MESSAGE("coverage of the 95 % bounds: " << coverage);
+    BOOST_TEST(coverage >= 0.935);
+    BOOST_TEST(coverage <= 0.965);
+}
+
+BOOST_AUTO_TEST_CASE(words_without_a_covariance_block_get_a_message)
+{
+    isoquant::CellTable typed(4, 2);
+    typed.set(0, 0, "form");
+    typed.set(0, 1, "cobb-douglas");
+    typed.set(1, 0, "ln A");
+    typed.set(1, 1, 0.1);
+    typed.set(2, 0, "L");
+    typed.set(2, 1, 0.7);
+    typed.set(3, 0, "C");
+    typed.set(3, 1, 0.3);
+    const auto bundle = oneBundle(150, 200);
+    BOOST_TEST(messageOf([&] {
+                   isoquant::marginalProductColumnWithBounds(typed, bundle, 1.0, std::string("std. error"));
+               }) == "what: \"std. error\" needs the model's covariance block; this model has none (a typed model, or "
+                     "a PRODFIT table made without covariance TRUE)");
+    // "value" answers as before, also for a typed model.
+    BOOST_TEST(isoquant::marginalProductColumnWithBounds(typed, bundle, 1.0, std::string("value")).number(0, 0) ==
+               isoquant::marginalProductColumn(typed, bundle, 1.0).number(0, 0));
+    BOOST_TEST(messageOf([&] { isoquant::scaleColumnWithBounds(typed, {}, std::string("upper")); }) ==
+               "what: give \"value\", \"std. error\", \"lower bound\" or \"upper bound\"");
+    BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(typed, bundle, {}, 2.0); }) ==
+               "what: give \"value\", \"std. error\", \"lower bound\", \"upper bound\", \"prediction lower\" or "
+               "\"prediction upper\"");
+}
+
+BOOST_AUTO_TEST_CASE(a_shifted_ln_a_gets_a_message_where_it_matters)
+{
+    // Cobb & Douglas (1928) with a trend: the evaluators' ln A is "ln A for predictions".
+    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
+    isoquant::CellTable years(24, 1);
+    for (std::size_t row = 0; row < 24; ++row) years.set(row, 0, 1899.0 + static_cast<double>(row));
+    arguments.trend = years;
+    const auto table = tableWithBlock(isoquant::fitFromArguments(arguments));
+    const auto bundle = oneBundle(150, 200);
+    BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(table, bundle, {}, std::string("lower bound")); }) ==
+               "what: \"lower bound\" is not available when the model's ln A is shifted (controls at their means, "
+               "effects or a trend): the covariance block does not cover that ln A");
+    // The elasticities do not involve ln A: answered.
+    BOOST_TEST(isoquant::elasticityColumnWithBounds(table, bundle, 2.0, std::string("std. error")).number(0, 0) > 0);
+}
+
+BOOST_AUTO_TEST_SUITE_END()
