@@ -60,8 +60,8 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 // The evaluators' optional last argument (issue 20).
 constexpr ArgumentInfo boundsArgument{
     "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
-            "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output "
-            "and marginal products get bounds on the log scale. Cobb-douglas form."};
+            "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
+            "marginal products and least-cost amounts get bounds on the log scale. Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -203,7 +203,7 @@ const std::vector<FunctionInfo>& functionTable()
         {"prodLeastCost", "PRODLEASTCOST",
          "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
          "a row or a column like the prices (enter as an array formula).",
-         {modelArgument, targetArgument, pricesArgument}},
+         {modelArgument, targetArgument, pricesArgument, boundsArgument}},
         {"prodCost", "PRODCOST",
          "Cost of producing the target output in the cheapest way at the given input prices: total, marginal "
          "(of one more unit of output), average, cost elasticity or returns to scale. The model may also be a cost "

@@ -68,8 +68,8 @@ constexpr ArgumentInfo inputArgument{"Faktor",
 constexpr ArgumentInfo boundsArgument{
     "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
-                "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung und "
-                "Grenzprodukte erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
+                "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
+                "Grenzprodukte und kostenminimale Mengen erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -232,7 +232,7 @@ const Translation& germanTranslation()
         {"prodLeastCost",
          "Kostenminimale Faktormengen, mit denen die Zielausbringung zu den gegebenen Faktorpreisen produziert wird: "
          "eine Menge je Faktor, als Zeile oder Spalte wie die Preise (als Matrixformel eingeben).",
-         {modelArgument, targetArgument, pricesArgument}},
+         {modelArgument, targetArgument, pricesArgument, boundsArgument}},
         {"prodCost",
          "Kosten der kostenminimalen Produktion der Zielausbringung zu den gegebenen Faktorpreisen: Gesamtkosten, "
          "Grenzkosten (einer weiteren Einheit der Ausbringung), Durchschnittskosten, Kostenelastizität oder "

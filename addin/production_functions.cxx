@@ -287,13 +287,14 @@ Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable&
 }
 
 Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                       const AnyTable& inputPrices)
+                                       const AnyTable& inputPrices, const Any& what)
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(
-            leastCostRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
-            prices);
+        return orientedLike(leastCostRowWithBounds(*models_.cells(model, "model"),
+                                                   toSingleCell(Any(targetOutput), "target output"), prices,
+                                                   toSingleCell(what, "what")),
+                            prices);
     });
 }
 

@@ -80,7 +80,7 @@ public:
     css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                             const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                    const AnyTable& inputPrices) override;
+                                    const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
                                        const css::uno::Any& form, const css::uno::Any& shares,
                                        const css::uno::Any& errors, const css::uno::Any& level,

@@ -106,6 +106,10 @@ class BoundsTest(CalcTestCase):
         set_formula(cls.sheet, "N13", '=PRODOUTPUT($F$1:$L$21;$P$91:$Q$91;;"upper bound")')
         set_formula(cls.sheet, "N14", '=PRODMARGINAL($F$1:$L$17;$P$91:$Q$91;"L";"std. error")')
         set_formula(cls.sheet, "N15", '=PRODMARGINAL($F$1:$L$21;$P$91:$Q$91;"L";"bounds")')
+        set_values(cls.sheet, "P95", [[2.0, 3.0]])  # input prices, invented
+        for row, what in zip((20, 21, 22), ("value", "lower bound", "upper bound")):
+            set_array_formula(cls.sheet, "N%d:O%d" % (row, row), '=PRODLEASTCOST($F$1:$L$21;180;$P$95:$Q$95;"%s")' % what)
+        set_array_formula(cls.sheet, "N23:O23", "=PRODLEASTCOST($F$1:$L$21;180;$P$95:$Q$95)")
         recalc(CALC.doc)
 
     def test_marginal_product_against_statsmodels(self):
@@ -129,6 +133,16 @@ class BoundsTest(CalcTestCase):
         self.assert_relative(get_cell(self.sheet, "N10"), float(np.sqrt(cov[1:, 1:].sum())), 1e-7, "PRODSCALE se")
         self.assert_relative(get_cell(self.sheet, "N11"), theta[2] + t * float(np.sqrt(cov[2, 2])), 1e-7,
                              "PRODELASTICITY upper bound")
+
+    def test_least_cost_amounts_lie_within_their_bounds(self):
+        # The figures themselves are checked against numpy in tests/reference/bounds_check.py.
+        amounts, lower, upper, plain = (get_range(self.sheet, "N%d:O%d" % (r, r))[0] for r in (20, 21, 22, 23))
+        self.assertEqual(amounts, plain)
+        for i in range(2):
+            self.assert_number(amounts[i], "least-cost amount")
+            self.assertLess(lower[i], amounts[i])
+            self.assertLess(amounts[i], upper[i])
+            self.assertGreater(lower[i], 0)
 
     def test_prediction_bounds_are_wider(self):
         self.assertGreater(get_cell(self.sheet, "N12"), get_cell(self.sheet, "N13"))

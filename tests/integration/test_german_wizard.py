@@ -75,7 +75,7 @@ GERMAN_ARGUMENTS = {
     "PRODPAIR": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art"],
-    "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise"],
+    "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",

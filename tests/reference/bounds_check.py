@@ -12,7 +12,10 @@ max(1, |theta_j|); its error, about 1e-10 relative here, is far below the checke
 se = sqrt(grad' V grad) with V = cov_params(). Bounds at 0.95 with scipy.stats.t(df_resid): for
 output and marginal products (positive) exp(ln q -+ t se(ln q)) with se(ln q) from the gradient of
 ln q; for the elasticities and scale q -+ t se. Prediction bounds of one new plant's output:
-exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p).
+exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). Least-cost amounts (PLANS, numbered as
+the bundles): solved numerically for each theta by minimising cost on the isoquant in numpy's terms,
+x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
+cost minimisation, solved for lam in logs), bounds on the log scale as for output.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -25,6 +28,7 @@ import sys
 
 LEVEL = 0.95
 BUNDLES = [(150.0, 200.0), (250.0, 400.0), (100.0, 100.0)]  # (L, C), invented
+PLANS = [(180.0, 2.0, 3.0), (300.0, 1.0, 1.0), (120.0, 5.0, 2.0)]  # (target output, wL, wC), invented
 
 
 def main():
@@ -85,6 +89,17 @@ def main():
             log_se = se(lambda p: p @ logs)
             put("prediction_lower", output(theta) * math.exp(-t * math.sqrt(log_se ** 2 + result.scale)))
             put("prediction_upper", output(theta) * math.exp(t * math.sqrt(log_se ** 2 + result.scale)))
+            target, wage_l, wage_c = PLANS[number]
+            wages = np.array([wage_l, wage_c])
+
+            def amount(p, i):
+                # ln y = ln A + sum b_j (ln b_j + ln lam - ln w_j)  =>  ln lam
+                b = p[1:]
+                log_lam = (math.log(target) - p[0] - float(b @ (np.log(b) - np.log(wages)))) / float(b.sum())
+                return b[i] / wages[i] * math.exp(log_lam)
+
+            positive("least_cost_L", lambda p: amount(p, 0))
+            positive("least_cost_C", lambda p: amount(p, 1))
             for name, function in (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2])):
                 put(name + "_se", se(function))
                 put(name + "_lower", function(theta) - t * se(function))

@@ -3,6 +3,7 @@
 #include "isoquant/cobb_douglas.hpp"
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
+#include "isoquant/homogeneous_cost.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "generated_data.hpp"
@@ -35,12 +36,19 @@ BOOST_AUTO_TEST_SUITE(bounds_properties)
 // 2,000 data sets of 30 rows from Y = e^0.5·x₁^0.6·x₂^0.3 with N(0, 0.1²) noise on ln Y (inputs
 // log-uniform on [1, 100], generated_data.hpp, seeds 1 … 2000). The 95 % bounds of the marginal
 // product of x₁ at (20, 50) must cover its true value 0.6·Y/20 in 93.5–96.5 % of them (the issue's
-// band: about ±3 binomial standard errors, √(0.95·0.05/2000) = 0.49 %, around 95 %).
-BOOST_AUTO_TEST_CASE(marginal_product_bounds_cover_the_true_value)
+// band: about ±3 binomial standard errors, √(0.95·0.05/2000) = 0.49 %, around 95 %); so must the
+// bounds of the least-cost amount of x₁ for 200 units at prices (2, 3) (PRODLEASTCOST).
+BOOST_AUTO_TEST_CASE(marginal_product_and_least_cost_bounds_cover_the_true_value)
 {
+    isoquant::CellTable prices(1, 2);
+    prices.set(0, 0, 2.0);
+    prices.set(0, 1, 3.0);
+    int amountCovered = 0;
     const isoquant::CobbDouglas technology(0.5, Eigen::Vector2d(0.6, 0.3));
     const Eigen::Vector2d point(20.0, 50.0);
     const double truth = technology.marginalProduct(point, 0);
+    const double trueAmount =
+        isoquant::leastCostPlan(isoquant::cobbDouglasCost(technology, Eigen::Vector2d(2.0, 3.0)), 200.0).inputs(0);
     const auto bundle = oneBundle(point(0), point(1));
     isoquant::ProductionFitOptions options;
     int covered = 0;
@@ -54,7 +62,16 @@ BOOST_AUTO_TEST_CASE(marginal_product_bounds_cover_the_true_value)
         const double upper =
             isoquant::marginalProductColumnWithBounds(table, bundle, 1.0, std::string("upper bound")).number(0, 0);
         if (lower <= truth && truth <= upper) ++covered;
+        const double lowest =
+            isoquant::leastCostRowWithBounds(table, 200.0, prices, std::string("lower bound")).number(0, 0);
+        const double highest =
+            isoquant::leastCostRowWithBounds(table, 200.0, prices, std::string("upper bound")).number(0, 0);
+        if (lowest <= trueAmount && trueAmount <= highest) ++amountCovered;
     }
+    const double amountCoverage = static_cast<double>(amountCovered) / dataSets;
+    BOOST_TEST_MESSAGE("coverage of the least-cost amount's 95 % bounds: " << amountCoverage);
+    BOOST_TEST(amountCoverage >= 0.935);
+    BOOST_TEST(amountCoverage <= 0.965);
     const double coverage = static_cast<double>(covered) / dataSets;
     BOOST_TEST_MESSAGE("coverage of the 95 % bounds: " << coverage);
     BOOST_TEST(coverage >= 0.935);

@@ -2,6 +2,8 @@
 
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/cobb_douglas.hpp"
+#include "isoquant/decision_arguments.hpp"
+#include "isoquant/decision_cell_functions.hpp"
 #include "isoquant/distributions.hpp"
 #include "isoquant/input_error.hpp"
 #include "isoquant/model_cache.hpp"
@@ -131,7 +133,42 @@ Eigen::VectorXd logOutputGradient(const BoundsModel& read, const Eigen::VectorXd
     return gradient;
 }
 
+// ln xᵢ of the least-cost plan for y at prices w (homogeneous_cost.hpp, Cobb-Douglas):
+//   ln xᵢ = ln bᵢ − ln wᵢ + S/ν,  S = ln y − ln A + Σⱼ bⱼ ln(wⱼ/bⱼ),  ν = Σⱼ bⱼ,
+// so ∂/∂ln A = −1/ν and ∂/∂bₖ = [k = i]/bᵢ − S/ν² + (ln(wₖ/bₖ) − 1)/ν.
+Linearised leastCostAmount(const BoundsModel& read, const Eigen::VectorXd& prices, double target, Eigen::Index input)
+{
+    const Eigen::VectorXd& exponents = read.form->exponents;
+    const double nu = exponents.sum();
+    const Eigen::ArrayXd logRatios = (prices.array() / exponents.array()).log();
+    const double sum = std::log(target) - read.form->logScale + (exponents.array() * logRatios).sum();
+    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(read.block->matrix.rows());
+    gradient(0) = -1 / nu;
+    for (Eigen::Index k = 0; k < exponents.size(); ++k)
+        gradient(1 + k) = (k == input ? 1 / exponents(input) : 0.0) - sum / (nu * nu) + (logRatios(k) - 1) / nu;
+    const double logAmount = std::log(exponents(input)) - std::log(prices(input)) + sum / nu;
+    return Linearised{std::exp(logAmount), gradient, true};
+}
+
 } // namespace
+
+CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    if (statistic == Statistic::value) return leastCostRow(model, target, prices);
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    if ((read.form->exponents.array() <= 0).any())
+        throw InputError("what: \"" + word(statistic) + "\" needs every exponent positive, as the least-cost plan does");
+    const Eigen::VectorXd wages = readPrices(prices, "input prices", read.form->exponents.size());
+    const double level = readPositiveNumber(target, "target output");
+    CellTable row(1, static_cast<std::size_t>(wages.size()));
+    for (Eigen::Index input = 0; input < wages.size(); ++input) {
+        const double result = answer(leastCostAmount(read, wages, level, input), read, statistic, 0);
+        if (!std::isfinite(result)) throw InputError("target output: gives amounts too large to represent");
+        row.set(0, static_cast<std::size_t>(input), result);
+    }
+    return row;
+}
 
 CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& mean, const Cell& what)
 {

@@ -13,6 +13,8 @@
 //   for its mean, so no smearing factor).
 // - marginal product MPᵢ = bᵢ·Y/xᵢ: g of ln MPᵢ adds 1/bᵢ at bᵢ; se = MPᵢ·s; bounds on the log scale
 //   when bᵢ > 0 (positive by nature), else MPᵢ ± t·se.
+// - least-cost amount xᵢ of target y at prices w (PRODLEASTCOST; every bᵢ > 0): g of ln xᵢ in
+//   bound_functions.cpp (leastCostAmount); bounds on the log scale.
 // - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
@@ -29,5 +31,7 @@ CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTabl
 CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
                                      const Cell& what);
 CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what);
+// PRODLEASTCOST: a row of the amounts' standard errors or bounds (positive: log scale).
+CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
 
 } // namespace isoquant
