@@ -4,6 +4,7 @@
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/homogeneous_cost.hpp"
+#include "isoquant/production_model.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "generated_data.hpp"
@@ -118,6 +119,33 @@ BOOST_AUTO_TEST_CASE(a_shifted_ln_a_gets_a_message_where_it_matters)
                "effects or a trend): the covariance block does not cover that ln A");
     // The elasticities do not involve ln A: answered.
     BOOST_TEST(isoquant::elasticityColumnWithBounds(table, bundle, 2.0, std::string("std. error")).number(0, 0) > 0);
+}
+
+// Under cluster errors the block carries t(G − 1): the rice farms (Feng and Horrace 2012, 171 farms,
+// tests/data) with errors "cluster" by farm. An elasticity's bounds by `what` are then the table's
+// own bounds of that exponent (the same estimate, variance and t quantile; 1e-12 relative for the
+// order of evaluation), and the block's degrees of freedom are G − 1 = 170.
+BOOST_AUTO_TEST_CASE(cluster_errors_give_the_tables_own_bounds)
+{
+    auto arguments = isoquant::testing::riceFarmsArguments();
+    arguments.errors = std::string("cluster");
+    const auto fit = isoquant::fitFromArguments(arguments);
+    const auto table = tableWithBlock(fit);
+    const auto model = isoquant::readProductionModel(table);
+    BOOST_REQUIRE(model.parameterCovariance.has_value());
+    BOOST_TEST(model.parameterCovariance->degreesOfFreedom == 170.0);
+    BOOST_TEST(isoquant::covarianceKindWord(model.parameterCovariance->kind) == "cluster");
+    isoquant::CellTable bundle(1, 4);
+    for (std::size_t i = 0; i < 4; ++i) bundle.set(0, i, 10.0);
+    for (Eigen::Index input = 0; input < 4; ++input) {
+        const isoquant::Cell selector = static_cast<double>(input + 1);
+        const double lower =
+            isoquant::elasticityColumnWithBounds(table, bundle, selector, std::string("lower bound")).number(0, 0);
+        const double upper =
+            isoquant::elasticityColumnWithBounds(table, bundle, selector, std::string("upper bound")).number(0, 0);
+        BOOST_TEST(std::fabs(lower - fit.lowerBounds(1 + input)) <= 1e-12 * std::fabs(fit.lowerBounds(1 + input)));
+        BOOST_TEST(std::fabs(upper - fit.upperBounds(1 + input)) <= 1e-12 * std::fabs(fit.upperBounds(1 + input)));
+    }
 }
 
 BOOST_AUTO_TEST_SUITE_END()
