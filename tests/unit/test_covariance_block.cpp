@@ -5,6 +5,7 @@
 #include "isoquant/cell_functions.hpp"
 #include "isoquant/fit_table.hpp"
 #include "isoquant/production_model.hpp"
+#include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
@@ -151,6 +152,30 @@ BOOST_AUTO_TEST_CASE(block_typed_wrongly_gets_a_message)
     noLevel.set(row, 3, 1.5);
     BOOST_TEST(messageOf([&] { isoquant::readProductionModel(noLevel); }) ==
                blockPlace + " (covariance) needs a confidence level between 0 and 1 in its fourth column");
+}
+
+// Constant returns imposed (a singular V: the last exponent is 1 minus the others) and fixed effects
+// (ln A without a variance: its row and column "n/a") are read back; an elasticity's bounds by
+// `what` are then the table's own bounds of that exponent (1e-12 relative, order of evaluation).
+BOOST_AUTO_TEST_CASE(singular_and_partly_missing_blocks_are_read_back)
+{
+    auto imposed = isoquant::testing::cobbDouglas1928Arguments();
+    imposed.constantReturns = 1.0;
+    auto effects = isoquant::testing::riceFarmsArguments();
+    effects.effects = std::string("fixed");
+    for (const auto& arguments : {imposed, effects}) {
+        const auto fit = isoquant::fitFromArguments(arguments);
+        const auto table = tableWithBlock(fit);
+        const auto model = isoquant::readProductionModel(table);
+        BOOST_REQUIRE(model.parameterCovariance.has_value());
+        isoquant::CellTable bundle(1, static_cast<std::size_t>(fit.inputLabels.size()));
+        for (std::size_t i = 0; i < bundle.columns(); ++i) bundle.set(0, i, 10.0);
+        const double upper =
+            isoquant::elasticityColumnWithBounds(table, bundle, 1.0, std::string("upper bound")).number(0, 0);
+        BOOST_TEST(std::fabs(upper - fit.upperBounds(1)) <= 1e-12 * std::fabs(fit.upperBounds(1)));
+    }
+    const auto withEffects = tableWithBlock(isoquant::fitFromArguments(effects));
+    BOOST_TEST(withEffects.text(blockRow(withEffects) + 1, 1) == "n/a"); // ln A's variance under effects
 }
 
 BOOST_AUTO_TEST_CASE(other_forms_answer_a_message)

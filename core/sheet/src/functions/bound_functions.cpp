@@ -84,7 +84,13 @@ double residualSd(const CellTable& range)
 
 double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance)
 {
-    const double variance = quantity.gradient.dot(read.block->matrix * quantity.gradient);
+    // gᵀVg over the parameters the quantity depends on: a parameter without a variance ("n/a", ln A
+    // under effects) may stand in V where g is 0.
+    double variance = 0;
+    const Eigen::VectorXd& g = quantity.gradient;
+    for (Eigen::Index i = 0; i < g.size(); ++i)
+        for (Eigen::Index j = 0; j < g.size(); ++j)
+            if (g(i) != 0 && g(j) != 0) variance += g(i) * read.block->matrix(i, j) * g(j);
     if (!std::isfinite(variance))
         throw InputError("what: the covariance block has no variance for a parameter this quantity uses");
     const double spread = std::sqrt(variance);

@@ -155,6 +155,8 @@ CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fi
     CovarianceBlock block;
     block.labels = cobbDouglasParameterLabels(fit.inputLabels, fit.controlLabels);
     block.matrix = fit.covariance;
+    // As the table's standard errors: an exact fit has none, only the rounding left in V.
+    if (fit.status == FitStatus::perfectFit) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());
     block.kind = fit.regression.covarianceKind;
     block.degreesOfFreedom = fit.regression.inferenceDegreesOfFreedom;
     block.level = fit.regression.confidenceLevel;
