@@ -52,6 +52,11 @@ constexpr ArgumentInfo bundlesArgument{
     "inputs", "One row of input values in the model's input order, or several rows: the result is then a column "
               "with one value per row."};
 constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for the first) or its label."};
+// The evaluators' optional last argument (issue 20).
+constexpr ArgumentInfo boundsArgument{
+    "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
+            "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
+            "marginal products and least-cost amounts get bounds on the log scale. Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -70,7 +75,11 @@ std::vector<FunctionInfo> productionFitFunctions()
          "array formula): estimates with standard errors, t, p-values and confidence bounds, fit statistics, "
          "returns to scale with the test that it equals 1, and a verdict.",
          {outputArgument, inputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument,
+          {"covariance", "TRUE to add below the table the estimated covariance matrix of the parameters (of the "
+                         "kind chosen by errors), one row per parameter, for bounds on derived numbers; the table is "
+                         "then max(7, p + 1) columns wide and 1 + p rows longer, p parameters. Cobb-douglas form "
+                         "only. FALSE or empty: no block."}}},
         {"prodStat", "PRODSTAT",
          "One value of the PRODFIT table, looked up by row and column label, without an array formula.",
          {outputArgument, inputsArgument,
@@ -91,17 +100,21 @@ std::vector<FunctionInfo> productionFitFunctions()
         {"prodOutput", "PRODOUTPUT", "Output the model predicts for each row of inputs.",
          {modelArgument, bundlesArgument,
           {"mean", "TRUE for the mean prediction (the median times the table's smearing factor); FALSE or empty "
-                   "for the median prediction, exp of the fitted log."}}},
+                   "for the median prediction, exp of the fitted log."},
+          {"what", "As for PRODMARGINAL (\"value\", \"std. error\", \"lower bound\", \"upper bound\"), and "
+                   "\"prediction lower\" or \"prediction upper\": the interval for one new plant's output, adding the "
+                   "residual variance."}}},
         {"prodMarginal", "PRODMARGINAL",
          "Marginal product of one input for each row of inputs: the extra output from one more unit of it.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodElasticity", "PRODELASTICITY",
          "Output elasticity of one input for each row of inputs: the % change in output per 1% more of it.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodScale", "PRODSCALE",
          "Returns to scale: the % change in output when every input rises by 1% (the sum of the elasticities).",
          {modelArgument,
-          {"inputs", "Optional rows of input values: the result is then a column with one value per row."}}},
+          {"inputs", "Optional rows of input values: the result is then a column with one value per row."},
+          boundsArgument}},
         {"prodReturns", "PRODRETURNS",
          "Verdict on returns to scale: increasing, constant or decreasing, by the test of returns to scale = 1 at "
          "the given level. A typed model without standard errors is judged by its returns to scale alone; a ces "
@@ -210,7 +223,7 @@ std::vector<FunctionInfo> decisionFunctions()
          "Cheapest input amounts that produce the target output at the given input prices: one amount per input, "
          "a row or a column like the prices (enter as an array formula). With a cost model (as for PRODCOST) by "
          "Shephard's lemma: amount = fitted cost share x cost / price.",
-         {modelArgument, targetArgument, pricesArgument}},
+         {modelArgument, targetArgument, pricesArgument, boundsArgument}},
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",

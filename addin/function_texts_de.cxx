@@ -65,6 +65,11 @@ constexpr ArgumentInfo bundlesArgument{
                     "Ergebnis ist dann eine Spalte mit einem Wert je Zeile."};
 constexpr ArgumentInfo inputArgument{"Faktor",
                                      "Welcher Faktor: seine Nummer (1 für den ersten) oder seine Bezeichnung."};
+constexpr ArgumentInfo boundsArgument{
+    "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
+                "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
+                "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
+                "Grenzprodukte und kostenminimale Mengen erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -87,7 +92,11 @@ const Translation& germanTranslation()
          "in Logarithmen. Liefert eine Tabelle (als Matrixformel eingeben): Schätzwerte mit Standardfehlern, t- und "
          "p-Werten und Konfidenzgrenzen, Gütemaße, die Skalenerträge mit dem Test auf den Wert 1 und ein Urteil.",
          {germanOutputArgument, germanInputsArgument, formArgument, constantReturnsArgument, errorsArgument, levelArgument,
-          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument}},
+          controlsArgument, groupsArgument, effectsArgument, trendArgument, incompleteRowsArgument,
+          {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Parameter anzufügen (der unter "
+                        "Standardfehler gewählten Art), eine Zeile je Parameter, für Grenzen abgeleiteter Größen; die "
+                        "Tabelle ist dann max(7, p + 1) Spalten breit und 1 + p Zeilen länger, p Parameter. Nur für "
+                        "die Form cobb-douglas. FALSCH oder leer: kein Block."}}},
         {"prodStat",
          "Ein Wert der PRODFIT-Tabelle, gesucht nach Zeilen- und Spaltenbezeichnung, ohne Matrixformel.",
          {germanOutputArgument, germanInputsArgument,
@@ -111,21 +120,25 @@ const Translation& germanTranslation()
          {modelArgument, bundlesArgument,
           {"Mittelwert", "WAHR für die Vorhersage des Mittelwerts (der Median, multipliziert mit dem "
                          "Smearing-Faktor der Tabelle); FALSCH oder leer für die Vorhersage des Medians, exp des "
-                         "geschätzten Logarithmus."}}},
+                         "geschätzten Logarithmus."},
+          {"Kennzahl", "Wie bei PRODMARGINAL (\"value\", \"std. error\", \"lower bound\", \"upper bound\"), dazu "
+                       "\"prediction lower\" oder \"prediction upper\": das Intervall für die Ausbringung eines "
+                       "neuen Betriebs, mit der Residualvarianz."}}},
         {"prodMarginal",
          "Grenzprodukt eines Faktors für jede Zeile von Faktormengen: die zusätzliche Ausbringung aus einer weiteren "
          "Einheit dieses Faktors.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodElasticity",
          "Produktionselastizität eines Faktors für jede Zeile von Faktormengen: die prozentuale Änderung der "
          "Ausbringung bei 1 % mehr von diesem Faktor.",
-         {modelArgument, bundlesArgument, inputArgument}},
+         {modelArgument, bundlesArgument, inputArgument, boundsArgument}},
         {"prodScale",
          "Skalenelastizität, das Maß der Skalenerträge: die prozentuale Änderung der Ausbringung, wenn alle Faktoren "
          "um 1 % steigen (die Summe der Produktionselastizitäten).",
          {modelArgument,
           {"Faktormengen", "Optionale Zeilen von Faktormengen: das Ergebnis ist dann eine Spalte mit einem Wert je "
-                           "Zeile."}}},
+                           "Zeile."},
+          boundsArgument}},
         {"prodReturns",
          "Urteil über die Skalenerträge: steigend, konstant oder sinkend (die Zelle zeigt increasing, constant oder "
          "decreasing), nach dem Test, ob die Skalenelastizität gleich 1 ist, auf dem gegebenen Konfidenzniveau. Ein "
@@ -219,7 +232,7 @@ const Translation& germanTranslation()
         {"prodLeastCost",
          "Kostenminimale Faktormengen, mit denen die Zielausbringung zu den gegebenen Faktorpreisen produziert wird: "
          "eine Menge je Faktor, als Zeile oder Spalte wie die Preise (als Matrixformel eingeben).",
-         {modelArgument, targetArgument, pricesArgument}},
+         {modelArgument, targetArgument, pricesArgument, boundsArgument}},
         {"prodCost",
          "Kosten der kostenminimalen Produktion der Zielausbringung zu den gegebenen Faktorpreisen: Gesamtkosten, "
          "Grenzkosten (einer weiteren Einheit der Ausbringung), Durchschnittskosten, Kostenelastizität oder "

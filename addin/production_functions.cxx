@@ -15,6 +15,8 @@
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
+#include "isoquant/sheet/functions/bound_functions.hpp"
 
 #include <new>
 
@@ -126,13 +128,14 @@ FitArguments ProductionFunctions::withPanelArguments(FitArguments arguments, con
 Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                       const Any& constantReturns, const Any& errors, const Any& level,
                                       const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                      const Any& incompleteRows)
+                                      const Any& incompleteRows, const Any& covariance)
 {
     return guardedTable([&] {
         // Cut before the cache: a whole column's empty tail is neither hashed nor kept.
-        return fitTable(*fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
+        const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
-            incompleteRows))));
+            incompleteRows)));
+        return fitTableWithCovariance(fitTable(*fit), *fit, toSingleCell(covariance, "covariance"));
     });
 }
 
@@ -157,33 +160,38 @@ Any ProductionFunctions::prodValue(const AnyTable& table, const AnyTable& rowLab
     });
 }
 
-Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean)
+Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean, const Any& what)
 {
     return guardedTable([&] {
-        return outputColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"), toSingleCell(mean, "mean"));
+        return outputColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                      toSingleCell(mean, "mean"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
+Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                      const Any& what)
 {
     return guardedTable([&] {
-        return marginalProductColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                     toSingleCell(Any(input), "input"));
+        return marginalProductColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                               toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
+Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                        const Any& what)
 {
     return guardedTable([&] {
-        return elasticityColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                toSingleCell(Any(input), "input"));
+        return elasticityColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                          toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
 
-Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs)
+Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs, const Any& what)
 {
-    return guardedTable(
-        [&] { return scaleColumn(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs")); });
+    return guardedTable([&] {
+        return scaleColumnWithBounds(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs"),
+                                     toSingleCell(what, "what"));
+    });
 }
 
 Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
@@ -281,13 +289,14 @@ Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable&
 }
 
 Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                       const AnyTable& inputPrices)
+                                       const AnyTable& inputPrices, const Any& what)
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(
-            leastCostAnyRow(*models_.cells(model, "model"), toSingleCell(Any(targetOutput), "target output"), prices),
-            prices);
+        return orientedLike(leastCostRowWithBounds(*models_.cells(model, "model"),
+                                                   toSingleCell(Any(targetOutput), "target output"), prices,
+                                                   toSingleCell(what, "what")),
+                            prices);
     });
 }
 

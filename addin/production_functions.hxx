@@ -42,7 +42,7 @@ public:
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
                               const css::uno::Any& level, const css::uno::Any& controls,
                               const css::uno::Any& groups, const css::uno::Any& effects, const css::uno::Any& trend,
-                              const css::uno::Any& incompleteRows) override;
+                              const css::uno::Any& incompleteRows, const css::uno::Any& covariance) override;
     css::uno::Any SAL_CALL prodStat(const AnyTable& output, const AnyTable& inputs, const AnyTable& rowLabel,
                                     const css::uno::Any& columnLabel, const css::uno::Any& form,
                                     const css::uno::Any& constantReturns, const css::uno::Any& errors,
@@ -52,11 +52,13 @@ public:
     css::uno::Any SAL_CALL prodValue(const AnyTable& table, const AnyTable& rowLabel,
                                      const css::uno::Any& columnLabel) override;
     css::uno::Any SAL_CALL prodOutput(const AnyTable& model, const AnyTable& inputs,
-                                      const css::uno::Any& mean) override;
-    css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input) override;
-    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs,
-                                          const AnyTable& input) override;
-    css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs) override;
+                                      const css::uno::Any& mean, const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodMarginal(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                        const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodElasticity(const AnyTable& model, const AnyTable& inputs, const AnyTable& input,
+                                          const css::uno::Any& what) override;
+    css::uno::Any SAL_CALL prodScale(const AnyTable& model, const css::uno::Any& inputs,
+                                     const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                               const css::uno::Any& periods) override;
@@ -78,7 +80,7 @@ public:
     css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                             const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                    const AnyTable& inputPrices) override;
+                                    const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
                                        const css::uno::Any& form, const css::uno::Any& shares,
                                        const css::uno::Any& errors, const css::uno::Any& level,

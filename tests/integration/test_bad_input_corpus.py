@@ -82,6 +82,12 @@ def build_fixture(sheet):
     # output is 7.39e-26 (y* = (nu*p/c)^(nu/(1-nu)), c = nu*A^(-1/nu)*prod (w_i/b_i)^(b_i/nu)).
     set_values(sheet, "BF1", [["form", "cobb-douglas"], ["A", 1.0], ["L", 0.5], ["C", 0.45]])
     set_values(sheet, "BI1", [[1.0, 1.0]])
+    # Typed models with a covariance block (issue 20): not symmetric (L, C 0.5 against C, L 0.2), and
+    # symmetric but not positive semidefinite (covariance 0.5 between variances of 0.01).
+    typed = [["form", "cobb-douglas", None, None], ["ln A", 0.1, None, None], ["L", 0.7, None, None],
+             ["C", 0.3, None, None], ["covariance", "classical", 21.0, 0.95]]
+    set_values(sheet, "DA1", typed + [["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.5], ["C", 0.0, 0.2, 0.01]])
+    set_values(sheet, "DA12", typed + [["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.5], ["C", 0.0, 0.5, 0.01]])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

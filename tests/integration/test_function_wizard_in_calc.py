@@ -21,8 +21,8 @@ setUpModule, tearDownModule = CALC.start, CALC.stop
 # -- 9: Function Wizard metadata ---------------------------------------------------------------------
 
 # Display names and argument counts, as the issues state the functions.
-ARGUMENT_COUNTS = {"PRODFIT": 11, "PRODSTAT": 13, "PRODOUTPUT": 3, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
-                   "PRODSCALE": 2, "PRODRETURNS": 2}
+ARGUMENT_COUNTS = {"PRODFIT": 12, "PRODSTAT": 13, "PRODOUTPUT": 4, "PRODMARGINAL": 4, "PRODELASTICITY": 4,
+                   "PRODSCALE": 3, "PRODRETURNS": 2}
 # Required arguments lead; the rest are optional (declared `any` in idl/, which Calc marks optional).
 REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 3, "PRODOUTPUT": 2, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
                       "PRODSCALE": 1, "PRODRETURNS": 1}
@@ -33,7 +33,7 @@ REQUIRED_ARGUMENTS.update({"PRODTFP": 3, "PRODGROWTH": 3, "PRODINDEX": 2})
 ARGUMENT_COUNTS.update({"PRODREGULAR": 2, "PRODCOMPARE": 3})
 REQUIRED_ARGUMENTS.update({"PRODREGULAR": 2, "PRODCOMPARE": 2})
 ARGUMENT_COUNTS.update({"PRODSECOND": 4, "PRODINPUTRETURNS": 3, "PRODPAIR": 4, "PRODMRTS": 4, "PRODSUBSTITUTION": 5,
-                        "PRODLEASTCOST": 3, "PRODCOST": 4, "PRODBUDGET": 3, "PRODPROFIT": 3, "PRODISOQUANT": 5})
+                        "PRODLEASTCOST": 4, "PRODCOST": 4, "PRODBUDGET": 3, "PRODPROFIT": 3, "PRODISOQUANT": 5})
 REQUIRED_ARGUMENTS.update({"PRODSECOND": 3, "PRODINPUTRETURNS": 3, "PRODPAIR": 4, "PRODMRTS": 4, "PRODSUBSTITUTION": 4,
                            "PRODLEASTCOST": 3, "PRODCOST": 3, "PRODBUDGET": 3, "PRODPROFIT": 3, "PRODISOQUANT": 3})
 FUNCTION_CATEGORY_NAMES = ["DATABASE", "DATETIME", "FINANCIAL", "INFORMATION", "LOGICAL", "MATHEMATICAL",

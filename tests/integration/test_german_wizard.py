@@ -46,14 +46,14 @@ ENGLISH_NAME = {
     "Tabelle": "table", "Ineffizienz": "inefficiency", "Ausbringungen": "outputs", "Skalenerträge": "returns",
     "Orientierung": "orientation", "Namen": "names",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
-    "Mengen von Faktor i": "values of input i",
+    "Mengen von Faktor i": "values of input i", "Kovarianz": "covariance",
 }
 FIT_ARGUMENTS = ["Funktionsform", "konstante Skalenerträge", "Standardfehler", "Konfidenzniveau",
                  "Kontrollvariablen", "Gruppen", "Effekte", "Trend", "unvollständige Zeilen"]
 AT_BUNDLES = ["Modell", "Faktormengen"]
 # German argument names of every function on this branch (German table).
 GERMAN_ARGUMENTS = {
-    "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS,
+    "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS + ["Kovarianz"],
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
     "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
     "PRODEFFICIENTSCALE": ["Modell", "Faktorpreise"],
@@ -62,10 +62,10 @@ GERMAN_ARGUMENTS = {
                      "Kontrollvariablen"],
     "PRODEFFICIENCY": ["Modell", "Ausbringung", "Faktormengen", "Kennzahl"],
     "PRODENVELOPE": ["Ausbringungen", "Faktormengen", "Skalenerträge", "Orientierung", "Kennzahl", "Namen"],
-    "PRODOUTPUT": AT_BUNDLES + ["Mittelwert"],
-    "PRODMARGINAL": AT_BUNDLES + ["Faktor"],
-    "PRODELASTICITY": AT_BUNDLES + ["Faktor"],
-    "PRODSCALE": ["Modell", "Faktormengen"],
+    "PRODOUTPUT": AT_BUNDLES + ["Mittelwert", "Kennzahl"],
+    "PRODMARGINAL": AT_BUNDLES + ["Faktor", "Kennzahl"],
+    "PRODELASTICITY": AT_BUNDLES + ["Faktor", "Kennzahl"],
+    "PRODSCALE": ["Modell", "Faktormengen", "Kennzahl"],
     "PRODRETURNS": ["Modell", "Konfidenzniveau"],
     "PRODTFP": ["Modell", "Ausbringung", "Faktormengen", "Perioden"],
     "PRODGROWTH": ["Ausbringung", "Faktormengen", "Gewichte", "Methode", "Perioden"],
@@ -77,7 +77,7 @@ GERMAN_ARGUMENTS = {
     "PRODPAIR": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art"],
-    "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise"],
+    "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",

@@ -10,6 +10,7 @@
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 
 #include <cmath>
 #include <limits>
@@ -72,6 +73,8 @@ struct ModelRows {
     std::vector<ParameterRow> parameters;
     std::optional<std::vector<std::string>> inputsRow; // the labels of an "inputs" row
     std::optional<std::string> convergence;
+    std::vector<std::string> controlLabels;   // without " (control)"
+    std::optional<std::size_t> covarianceRow; // the row a covariance block starts at
 };
 
 bool isFormStatisticLabel(const std::string& label)
@@ -151,6 +154,11 @@ ModelRows readRows(const CellTable& range)
         const std::string& label = range.text(row, 0);
         const bool isFormRow = equalsIgnoringCase(label, formLabel) && range.isText(row, 1);
         if (section == Section::beforeScale && isTableTitle(label)) continue;
+        if (section != Section::beforeScale && equalsIgnoringCase(label, covarianceBlockLabel) &&
+            range.isText(row, 1)) {
+            rows.covarianceRow = row; // the block ends the table (covariance_block.hpp)
+            break;
+        }
         if (isFormRow) {
             readFormRow(range, row, rows);
             continue;
@@ -177,6 +185,8 @@ ModelRows readRows(const CellTable& range)
         case Section::parameters:
             if (!endsWithIgnoringCase(label, controlSuffix))
                 rows.parameters.push_back(ParameterRow{label, row, optionalNumber(range, row, 1)});
+            else
+                rows.controlLabels.push_back(label.substr(0, label.size() - std::string(controlSuffix).size()));
             break;
         case Section::statistics:
             if (!isStatisticLabel(label) && !isFormStatisticLabel(label))
@@ -258,6 +268,13 @@ ProductionModel readProductionModel(const CellTable& range)
     model.technicalChange = rows.technicalChange;
     model.latestPeriod = rows.latestPeriod;
     model.hasPeriodEffects = rows.hasPeriodEffects;
+    model.logScaleShifted = rows.logScaleForPredictions || rows.logScaleAtControlMeans;
+    if (rows.covarianceRow) {
+        if (model.form != ProductionForm::cobbDouglas)
+            throw InputError("model: a covariance block is read for the cobb-douglas form only so far");
+        model.parameterCovariance = readCovarianceBlock(
+            range, *rows.covarianceRow, cobbDouglasParameterLabels(model.inputLabels, rows.controlLabels));
+    }
     // The table's ν must be the model's own (for translog it is taken at the sample mean, unknown here).
     const auto scale = model.technology->constantScaleElasticity();
     if (model.scaleTest && scale && model.form != ProductionForm::translog &&

@@ -3,7 +3,8 @@
 // `model` is either a PRODFIT table or a small table the user types: two or more columns, labels
 // in the first and values in the second, with a row "form" (e.g. cobb-douglas), a row "ln A" (or
 // "A") and one exponent row per input, in input order. Rows up to the first empty row are
-// parameters; rows after it must be statistic rows of a PRODFIT table. A row labelled
+// parameters; rows after it must be statistic rows of a PRODFIT table, up to a "covariance" row that
+// starts the covariance block (covariance_block.hpp), read back and checked to the table's end. A row labelled
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
 // "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
 // is one (fixed effects or a trend: the mean group effect over rows, at the latest period).
@@ -23,6 +24,7 @@
 #include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/math/forms/technology.hpp"
 #include "isoquant/math/forms/production_form.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 
 #include <memory>
 #include <optional>
@@ -55,6 +57,11 @@ struct ProductionModel {
     std::optional<double> latestPeriod;
     // The "effects" row says "two-way": period effects, which the table does not hold.
     bool hasPeriodEffects = false;
+    // ln A is shifted (controls at their means, effects or a trend): the evaluators' ln A is then
+    // not a parameter of the covariance block.
+    bool logScaleShifted = false;
+    // The covariance block of a PRODFIT table made with covariance TRUE (covariance_block.hpp).
+    std::optional<CovarianceBlock> parameterCovariance;
 };
 
 // Throws InputError naming "model" and the row of the range.

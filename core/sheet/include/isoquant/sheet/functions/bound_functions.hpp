@@ -1,0 +1,37 @@
+// The evaluators' optional last argument `what` (issue 20): a derived number with its standard
+// error or its bounds, from the covariance block of a PRODFIT table (covariance_block.hpp).
+//
+// "value" (default) answers as before. "std. error", "lower bound" and "upper bound" come by the
+// delta method with the analytic gradient of the quantity in the parameters θ = (ln A, b₁ … b_k,
+// controls) of the Cobb-Douglas form: se = √(gᵀ V g), bounds at the block's level with its t
+// distribution (t(n − p), or t(G − 1) under cluster errors: the block's degrees of freedom).
+// - output Y = exp(ln A + Σ bᵢ ln xᵢ): g of ln Y = (1, ln x₁ … ln x_k, 0 …); se(Y) = Y·s with
+//   s = √(gᵀVg); bounds exp(ln Y ± t·s), on the log scale so that they never cross 0. The mean
+//   prediction (mean TRUE) is S·Y with the smearing factor S taken as known: every figure times S.
+//   "prediction lower"/"prediction upper": one new plant's output, exp(ln Y ± t·√(s² + σ²)) with
+//   σ the table's residual SD; the same for mean TRUE or FALSE (an interval for one plant's Y, not
+//   for its mean, so no smearing factor).
+// - marginal product MPᵢ = bᵢ·Y/xᵢ: g of ln MPᵢ adds 1/bᵢ at bᵢ; se = MPᵢ·s; bounds on the log scale
+//   when bᵢ > 0 (positive by nature), else MPᵢ ± t·se.
+// - least-cost amount xᵢ of target y at prices w (PRODLEASTCOST; every bᵢ > 0): g of ln xᵢ in
+//   bound_functions.cpp (leastCostAmount); bounds on the log scale.
+// - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
+// Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
+// (controls at their means, effects or a trend) answers a message for these words, as does a
+// model without a covariance block (a typed model). Every message names "what".
+#pragma once
+
+#include "isoquant/sheet/arguments/cells.hpp"
+
+namespace isoquant {
+
+CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& mean, const Cell& what);
+CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+                                          const Cell& what);
+CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+                                     const Cell& what);
+CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what);
+// PRODLEASTCOST: a row of the amounts' standard errors or bounds (positive: log scale).
+CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+
+} // namespace isoquant

@@ -1,0 +1,64 @@
+// The covariance block a fitted table carries on request (PRODFIT's `covariance` argument, issue 20).
+//
+// After the table's last row come 1 + p rows (p estimated parameters, in the table's order):
+//   covariance | <errors word> | <degrees of freedom> | <confidence level>
+//   <label of parameter 1> | V₁₁ | V₁₂ | … | V₁ₚ
+//   …
+//   <label of parameter p> | Vₚ₁ | … | Vₚₚ
+// V is the estimated covariance matrix of the kind chosen by `errors` ("classical", "hc1", "hc3",
+// "cluster"); the degrees of freedom are those of the table's reference t distribution (n − p, or
+// G − 1 under cluster errors) and the level that of its bounds, so that an evaluator reading the
+// table back states bounds as the table does. A cell of V that has no value (ln A under effects)
+// reads "n/a". The table is then max(7, p + 1) columns wide and has 1 + p rows more; the header
+// cells over columns 8 … p + 1 (six or more inputs and controls) hold the label of the parameter
+// whose covariances the column holds.
+#pragma once
+
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
+#include "isoquant/math/fits/production_fit.hpp"
+
+#include <Eigen/Dense>
+
+#include <string>
+#include <vector>
+
+namespace isoquant {
+
+inline constexpr const char* covarianceBlockLabel = "covariance";
+
+struct CovarianceBlock {
+    std::vector<std::string> labels; // the parameters' row labels, in order
+    Eigen::MatrixXd matrix;          // p × p; NaN where the table says "n/a"
+    CovarianceKind kind = CovarianceKind::classical;
+    double degreesOfFreedom = 0;
+    double level = 0.95;
+};
+
+std::string covarianceKindWord(CovarianceKind kind);
+
+// Columns of a table of `columns` columns once a block of `parameters` parameters is added:
+// max(columns, p + 1).
+std::size_t widthWithCovariance(std::size_t columns, std::size_t parameters);
+
+// The table with the block appended below its last row.
+CellTable withCovarianceBlock(const CellTable& table, const CovarianceBlock& block);
+
+// The parameters of a Cobb-Douglas table, as its rows label them: ln A, the inputs, the controls
+// with " (control)".
+std::vector<std::string> cobbDouglasParameterLabels(const std::vector<std::string>& inputLabels,
+                                                    const std::vector<std::string>& controlLabels);
+
+// PRODFIT's table `table` of `fit`, with the block when `covariance` is TRUE (read as a switch
+// naming "covariance"); the cobb-douglas form only for now, the others answer a message.
+CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance);
+
+// The block whose "covariance" row is row `headerRow` of `range` (a model argument). Throws
+// InputError naming "model" and the row when: the row's degrees of freedom or level are missing
+// or out of range; the block has not one row per parameter, labelled as `expectedLabels`; a cell
+// is not a number; the matrix is not symmetric (relative 1e-8 of the larger diagonal entry) or not
+// positive semidefinite (an eigenvalue below −1e-10 times the largest).
+CovarianceBlock readCovarianceBlock(const CellTable& range, std::size_t headerRow,
+                                    const std::vector<std::string>& expectedLabels);
+
+} // namespace isoquant

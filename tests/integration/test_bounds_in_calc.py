@@ -1,0 +1,160 @@
+"""Issue 20 in a real headless LibreOffice Calc with the extension: PRODFIT's covariance block, read
+back by the evaluators and PRODVALUE, and the evaluators' `what` (std. error, bounds).
+
+Run from the repository root with Debian's Python, the package isoquant_office on the path (see
+tests/integration/README.md):
+    PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_bounds_in_calc.py
+
+Sources of the expected figures: Cobb & Douglas (1928) data (tests/data); the covariance matrix of
+the same least squares recomputed by python3-statsmodels (cov_params of OLS, classical and HC1) at
+test time, to 1e-8 relative (STATSMODELS_RELATIVE: two implementations of the same least squares in
+double precision); the table's own cells where the block must not change them (equal exactly).
+"""
+
+import unittest
+
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
+
+from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, statsmodels_fit
+from .support import CalcTestCase, module_session
+
+CALC = module_session()
+setUpModule, tearDownModule = CALC.start, CALC.stop
+
+LABELS = ["ln A", "L", "C"]
+
+
+class CovarianceBlockTest(CalcTestCase):
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Bounds")
+        # 17 rows + 1 + p = 4 rows of the block, max(7, p + 1) = 7 columns.
+        set_values(cls.sheet, "P90", [[150.0, 200.0]])  # one bundle: L = 150, C = 200
+        set_array_formula(cls.sheet, "F1:L21", "=PRODFIT(B1:B25;C1:D25;;;;;;;;;;TRUE())")
+        set_array_formula(cls.sheet, "F30:L50", '=PRODFIT(B1:B25;C1:D25;;;"hc1";;;;;;;TRUE())')
+        set_array_formula(cls.sheet, "F60:L76", "=PRODFIT(B1:B25;C1:D25)")
+        recalc(CALC.doc)
+        cls.table = get_range(cls.sheet, "F1:L21")
+        cls.robust = get_range(cls.sheet, "F30:L50")
+        cls.plain = get_range(cls.sheet, "F60:L76")
+
+    def test_the_table_is_unchanged_above_the_block(self):
+        self.assertEqual(self.table[:17], self.plain)
+
+    def test_the_block_rows(self):
+        self.assertEqual(list(self.table[17][:4]), ["covariance", "classical", 21.0, 0.95])
+        self.assertEqual([row[0] for row in self.table[18:21]], LABELS)
+        self.assertEqual(self.robust[17][1], "hc1")
+
+    def test_the_block_is_statsmodels_covariance(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        y = logs(self.data["P"])
+        regressors = [logs(self.data["L"]), logs(self.data["C"])]
+        for table, kind in ((self.table, "nonrobust"), (self.robust, "HC1")):
+            expected = statsmodels_fit(y, regressors, kind).cov_params()
+            for i in range(3):
+                for j in range(3):
+                    with self.subTest(kind=kind, i=i, j=j):
+                        self.assert_relative(table[18 + i][1 + j], expected[i][j], STATSMODELS_RELATIVE,
+                                             "covariance %s, %s" % (LABELS[i], LABELS[j]))
+
+    def test_evaluators_and_lookups_read_the_table_with_its_block(self):
+        set_formula(self.sheet, "N1", "=PRODMARGINAL(F1:L21;$P$90:$Q$90;1)")
+        set_formula(self.sheet, "N2", "=PRODMARGINAL(F60:L76;$P$90:$Q$90;1)")
+        set_formula(self.sheet, "N3", '=PRODVALUE(F1:L21;"C";"std. error")')
+        set_formula(self.sheet, "N4", "=PRODOUTPUT(F1:L21;$P$90:$Q$90;TRUE())")
+        set_formula(self.sheet, "N5", "=PRODOUTPUT(F60:L76;$P$90:$Q$90;TRUE())")
+        recalc(CALC.doc)
+        self.assert_number(get_cell(self.sheet, "N1"), "marginal product with the block")
+        self.assertEqual(get_cell(self.sheet, "N1"), get_cell(self.sheet, "N2"))
+        self.assertEqual(get_cell(self.sheet, "N3"), self.plain[3][2])
+        self.assertEqual(get_cell(self.sheet, "N4"), get_cell(self.sheet, "N5"))
+
+    def test_a_block_typed_wrongly_gets_a_message(self):
+        # A copy of the table by value, with one covariance made asymmetric.
+        set_values(self.sheet, "P101", [list(row) for row in get_range(self.sheet, "F1:L21")])
+        set_formula(self.sheet, "R119", "=Q120+0.01")
+        set_formula(self.sheet, "N6", "=PRODMARGINAL(P101:V121;$P$90:$Q$90;1)")
+        set_formula(self.sheet, "N7", "=PRODFIT(B1:B25;C1:D25;\"translog\";;;;;;;;;TRUE())")
+        recalc(CALC.doc)
+        self.assert_message(get_cell(self.sheet, "N6"),
+                            "Error: model: row 20: the covariance block is not symmetric (column 2 differs from row 19, "
+                            "column 3)", "asymmetric block")
+        self.assert_message(get_cell(self.sheet, "N7"),
+                            "Error: covariance: the block is written for the cobb-douglas form only so far; leave "
+                            "covariance empty or FALSE for the translog form", "translog with covariance")
+
+
+class BoundsTest(CalcTestCase):
+    """`what` of PRODMARGINAL, PRODOUTPUT, PRODELASTICITY and PRODSCALE on the table with its block.
+    Expected: statsmodels' cov_params of the same fit and the gradient of ln MP = ln bL + ln A +
+    bL ln L + bC ln C - ln L in numpy (1, ln L, ln C) + (0, 1/bL, 0); se = MP sqrt(g'Vg), bounds
+    MP exp(-+ t s) with scipy's t(21) quantile; to 1e-7 relative (the issue's tolerance)."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Bounds of values")
+        set_values(cls.sheet, "P90", [["L", "C"], [150.0, 200.0], [250.0, 400.0]])
+        set_array_formula(cls.sheet, "F1:L21", "=PRODFIT(B1:B25;C1:D25;;;;;;;;;;TRUE())")
+        for column, what in zip("NOPQ", ["value", "std. error", "lower bound", "upper bound"]):
+            set_array_formula(cls.sheet, "%s1:%s3" % (column, column),
+                              '=PRODMARGINAL($F$1:$L$21;$P$90:$Q$92;"L";"%s")' % what)
+        set_formula(cls.sheet, "N10", '=PRODSCALE($F$1:$L$21;;"std. error")')
+        set_formula(cls.sheet, "N11", '=PRODELASTICITY($F$1:$L$21;$P$91:$Q$91;"C";"upper bound")')
+        set_formula(cls.sheet, "N12", '=PRODOUTPUT($F$1:$L$21;$P$91:$Q$91;;"prediction upper")')
+        set_formula(cls.sheet, "N13", '=PRODOUTPUT($F$1:$L$21;$P$91:$Q$91;;"upper bound")')
+        set_formula(cls.sheet, "N14", '=PRODMARGINAL($F$1:$L$17;$P$91:$Q$91;"L";"std. error")')
+        set_formula(cls.sheet, "N15", '=PRODMARGINAL($F$1:$L$21;$P$91:$Q$91;"L";"bounds")')
+        set_values(cls.sheet, "P95", [[2.0, 3.0]])  # input prices, invented
+        for row, what in zip((20, 21, 22), ("value", "lower bound", "upper bound")):
+            set_array_formula(cls.sheet, "N%d:O%d" % (row, row), '=PRODLEASTCOST($F$1:$L$21;180;$P$95:$Q$95;"%s")' % what)
+        set_array_formula(cls.sheet, "N23:O23", "=PRODLEASTCOST($F$1:$L$21;180;$P$95:$Q$95)")
+        recalc(CALC.doc)
+
+    def test_marginal_product_against_statsmodels(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        import scipy.stats
+        y = logs(self.data["P"])
+        result = statsmodels_fit(y, [logs(self.data["L"]), logs(self.data["C"])])
+        theta, cov = np.asarray(result.params), np.asarray(result.cov_params())
+        t = scipy.stats.t.ppf(0.975, result.df_resid)
+        self.assertEqual(get_cell(self.sheet, "N1"), "marginal product of L")
+        for row, (labour, capital) in enumerate([(150.0, 200.0), (250.0, 400.0)]):
+            gradient = np.array([1.0, np.log(labour) + 1.0 / theta[1], np.log(capital)])
+            marginal = theta[1] * np.exp(theta[0] + theta[1] * np.log(labour) + theta[2] * np.log(capital)) / labour
+            spread = float(np.sqrt(gradient @ cov @ gradient))
+            expected = [marginal, marginal * spread, marginal * np.exp(-t * spread), marginal * np.exp(t * spread)]
+            for column, figure in zip("NOPQ", expected):
+                with self.subTest(row=row, column=column):
+                    self.assert_relative(get_cell(self.sheet, "%s%d" % (column, row + 2)), figure, 1e-7,
+                                         "PRODMARGINAL column %s" % column)
+        self.assert_relative(get_cell(self.sheet, "N10"), float(np.sqrt(cov[1:, 1:].sum())), 1e-7, "PRODSCALE se")
+        self.assert_relative(get_cell(self.sheet, "N11"), theta[2] + t * float(np.sqrt(cov[2, 2])), 1e-7,
+                             "PRODELASTICITY upper bound")
+
+    def test_least_cost_amounts_lie_within_their_bounds(self):
+        # The figures themselves are checked against numpy in tests/reference/bounds_check.py.
+        amounts, lower, upper, plain = (get_range(self.sheet, "N%d:O%d" % (r, r))[0] for r in (20, 21, 22, 23))
+        self.assertEqual(amounts, plain)
+        for i in range(2):
+            self.assert_number(amounts[i], "least-cost amount")
+            self.assertLess(lower[i], amounts[i])
+            self.assertLess(amounts[i], upper[i])
+            self.assertGreater(lower[i], 0)
+
+    def test_prediction_bounds_are_wider(self):
+        self.assertGreater(get_cell(self.sheet, "N12"), get_cell(self.sheet, "N13"))
+
+    def test_messages_name_the_argument(self):
+        self.assert_message(get_cell(self.sheet, "N14"),
+                            "Error: what: \"std. error\" needs the model's covariance block; this model has none (a "
+                            "typed model, or a PRODFIT table made without covariance TRUE)", "no block")
+        self.assert_message(get_cell(self.sheet, "N15"),
+                            "Error: what: give \"value\", \"std. error\", \"lower bound\" or \"upper bound\"",
+                            "unknown word")
+
+
+if __name__ == "__main__":
+    unittest.main()

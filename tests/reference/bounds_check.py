@@ -1,0 +1,113 @@
+#!/usr/bin/python3
+"""Recomputes the standard errors and bounds of derived numbers (issue 20) with statsmodels and numpy.
+
+Usage: /usr/bin/python3 bounds_check.py DATA_DIR OUTPUT_CSV
+
+Data: Cobb & Douglas (1928), tests/data/cobb_douglas_1928.csv. The fit: statsmodels OLS of ln P on a
+constant, ln L and ln C, classical ("nonrobust") and HC1 covariance (use_t, as the core). For each
+bundle in BUNDLES, each quantity q(theta) of the parameters theta = (ln A, bL, bC) (output, the two
+marginal products, the mean output times the smearing factor mean(exp(residual)), the elasticities
+and returns to scale) gets a numerical gradient in numpy by central differences (step 1e-6 times
+max(1, |theta_j|); its error, about 1e-10 relative here, is far below the checked 1e-7), and
+se = sqrt(grad' V grad) with V = cov_params(). Bounds at 0.95 with scipy.stats.t(df_resid): for
+output and marginal products (positive) exp(ln q -+ t se(ln q)) with se(ln q) from the gradient of
+ln q; for the elasticities and scale q -+ t se. Prediction bounds of one new plant's output:
+exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). Least-cost amounts (PLANS, numbered as
+the bundles): solved numerically for each theta by minimising cost on the isoquant in numpy's terms,
+x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
+cost minimisation, solved for lam in logs), bounds on the log scale as for output.
+
+Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
+the libraries cannot be imported, leaving no OUTPUT_CSV behind.
+"""
+
+import csv
+import math
+import os
+import sys
+
+LEVEL = 0.95
+BUNDLES = [(150.0, 200.0), (250.0, 400.0), (100.0, 100.0)]  # (L, C), invented
+PLANS = [(180.0, 2.0, 3.0), (300.0, 1.0, 1.0), (120.0, 5.0, 2.0)]  # (target output, wL, wC), invented
+
+
+def main():
+    sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+    import reference_script
+
+    data_dir, output_path = reference_script.paths(__doc__)
+    try:
+        import numpy as np
+        import statsmodels.api as sm
+        from scipy import stats
+    except ImportError as error:
+        return reference_script.skipped("numpy, scipy or statsmodels", error)
+
+    with open(os.path.join(data_dir, "cobb_douglas_1928.csv"), newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    y = np.log([float(r["P"]) for r in rows])
+    design = sm.add_constant(np.column_stack([np.log([float(r["L"]) for r in rows]),
+                                              np.log([float(r["C"]) for r in rows])]))
+    figures = []
+    for errors, cov_type in (("classical", "nonrobust"), ("hc1", "HC1")):
+        model = sm.OLS(y, design)
+        result = model.fit() if cov_type == "nonrobust" else model.fit(cov_type=cov_type, use_t=True)
+        theta = np.asarray(result.params)
+        cov = np.asarray(result.cov_params())
+        t = stats.t.ppf(0.5 + LEVEL / 2, result.df_resid)
+        smearing = float(np.mean(np.exp(result.resid)))
+
+        def se(function):
+            gradient = np.zeros(3)
+            for j in range(3):
+                step = 1e-6 * max(1.0, abs(theta[j]))
+                up, down = theta.copy(), theta.copy()
+                up[j] += step
+                down[j] -= step
+                gradient[j] = (function(up) - function(down)) / (2 * step)
+            return math.sqrt(gradient @ cov @ gradient)
+
+        for number, (labour, capital) in enumerate(BUNDLES):
+            logs = np.array([1.0, math.log(labour), math.log(capital)])
+
+            def output(p):
+                return math.exp(p @ logs)
+
+            def put(quantity, value):
+                figures.append([errors, quantity, number, repr(float(value))])
+
+            def positive(name, function):
+                value, log_se = function(theta), se(lambda p: math.log(function(p)))
+                put(name + "_se", se(function))
+                put(name + "_lower", value * math.exp(-t * log_se))
+                put(name + "_upper", value * math.exp(t * log_se))
+
+            positive("output", output)
+            positive("mean_output", lambda p: smearing * output(p))
+            positive("marginal_L", lambda p: p[1] * output(p) / labour)
+            positive("marginal_C", lambda p: p[2] * output(p) / capital)
+            log_se = se(lambda p: p @ logs)
+            put("prediction_lower", output(theta) * math.exp(-t * math.sqrt(log_se ** 2 + result.scale)))
+            put("prediction_upper", output(theta) * math.exp(t * math.sqrt(log_se ** 2 + result.scale)))
+            target, wage_l, wage_c = PLANS[number]
+            wages = np.array([wage_l, wage_c])
+
+            def amount(p, i):
+                # ln y = ln A + sum b_j (ln b_j + ln lam - ln w_j)  =>  ln lam
+                b = p[1:]
+                log_lam = (math.log(target) - p[0] - float(b @ (np.log(b) - np.log(wages)))) / float(b.sum())
+                return b[i] / wages[i] * math.exp(log_lam)
+
+            positive("least_cost_L", lambda p: amount(p, 0))
+            positive("least_cost_C", lambda p: amount(p, 1))
+            for name, function in (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2])):
+                put(name + "_se", se(function))
+                put(name + "_lower", function(theta) - t * se(function))
+                put(name + "_upper", function(theta) + t * se(function))
+
+    reference_script.write_figures(output_path, ["errors", "quantity", "bundle", "value"], figures)
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
