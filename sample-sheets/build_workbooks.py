@@ -14,11 +14,14 @@ import sys
 
 from isoquant_office import HeadlessOffice, extension_and_output, set_array_formula, set_formula, set_values
 
+import cost_workbook
 import efficiency_workbook
+import panel_workbook
 import scenarios  # this folder's modules: on the path as the script's own
 import workbook_style as style
 from workbook_about import SHARING, about_sheet
-from workbook_checks import formula_problems, named_range
+from workbook_checks import check_workbook, named_range, refuse_formula_problems
+from workbook_style import add_name, new_sheet
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 
@@ -27,10 +30,6 @@ FLAT_ODS_FILTER = "OpenDocument Spreadsheet Flat XML"
 CAUTION = ("Caution: the fitted figures are statistical estimates from a small sample. They depend on the "
            "quality of the data and on the Cobb-Douglas form being a fair description. They are not "
            "professional advice: check them with qualified practice before they steer costly decisions.")
-CAUTION_FORMS = ("Caution: the fitted figures are statistical estimates from a small panel. They depend on the "
-                 "quality of the data and on the form fitted; a better AIC says which form fits these rows, "
-                 "not that it holds elsewhere. They are not professional advice: check them with qualified "
-                 "practice before they steer costly decisions.")
 CAUTION_GROWTH = ("Caution: TFP growth is a residual. It carries every error in the output, input and cost "
                   "figures and everything the inputs leave out (quality, capacity use, measurement): read a "
                   "year's figure as a question to look into, not a verdict. These are statistical accounts, "
@@ -97,153 +96,6 @@ def furniture_workshops(office, path):
                                  sheet.getCellRangeByName("A1").CellAddress, 0)
     doc.calculateAll()
     check_workbook(doc, path, {"labour": truth["labour_exponent"], "capital": truth["capital_exponent"]})
-    office.store(doc, path, FLAT_ODS_FILTER)
-    doc.close(True)
-
-
-def new_sheet(doc, name):
-    doc.Sheets.insertNewByName(name, doc.Sheets.Count)
-    return doc.Sheets.getByName(name)
-
-
-def add_name(doc, name, sheet, cell_range):
-    doc.NamedRanges.addNewByName(name, "$'%s'.%s" % (sheet.Name, cell_range),
-                                 sheet.getCellRangeByName("A1").CellAddress, 0)
-
-
-def dairy_creameries(office, path):
-    truth = scenarios.CREAMERIES
-    rows = scenarios.creamery_rows()
-    last = len(rows) + 1
-    first_year = rows[0][1]
-    data = "$Creameries."
-    output, inputs = data + "$C$1:$C$%d" % last, data + "$D$1:$E$%d" % last
-    groups, years = data + "$A$1:$A$%d" % last, data + "$B$1:$B$%d" % last
-    translog = "$Forms.$A$34:$G$56"
-    doc = office.new_calc()
-    about_sheet(doc, "Marrow Valley Dairies: six years of eight creameries", [
-        "What it shows: a Cobb-Douglas production function fitted to %d years of output, labour and capital "
-        "of the cooperative's %d creameries, with one effect per creamery (fixed effects: each creamery's own "
-        "level of efficiency, whatever its cause) and a trend (technical change per year), standard errors "
-        "robust within creameries. The sheet Forms compares Cobb-Douglas, CES and translog on the same rows, "
-        "and the sheet Creameries flags, row by row, where the fitted translog is not a well-behaved "
-        "production function (PRODREGULAR)." % (truth["years"], len(truth["names"])),
-        "Which cells to change: the yellow data cells on the sheet Creameries (C2:E%d). Everything else "
-        "recalculates. The fixed-effects table is the array formula in A1:G23 of the sheet Fixed effects; "
-        "the comparison of forms, the CES and the translog tables are on the sheet Forms." % last,
-        "Units: output in thousand EUR at %d prices, labour in thousand hours worked, capital (plant and "
-        "equipment at replacement value) in thousand EUR at %d prices." % (first_year, first_year),
-        "Where the data came from: invented. sample-sheets/scenarios.py draws the creameries with seed %d "
-        "from ln output = ln %.1f + creamery effect + %.3f x (year - %d) + %.2f ln labour + %.2f ln capital "
-        "+ noise, the creamery effects normal with SD %.2f (independent of the inputs), the noise normal "
-        "with SD %.2f. So the true technology is Cobb-Douglas with returns to scale %.2f and %.1f%% more "
-        "output a year from the same inputs." % (
-            truth["seed"], truth["scale"], truth["trend"], first_year, truth["labour_exponent"],
-            truth["capital_exponent"], truth["effect_sd"], truth["noise_sd"],
-            truth["labour_exponent"] + truth["capital_exponent"], 100 * truth["trend"]),
-        "Reading the comparison: PRODCOMPARE fits the three forms to the pooled rows, without creamery "
-        "effects or trend; with only %d creameries the cluster-robust bounds are wide (%d degrees of "
-        "freedom). The true technology is Cobb-Douglas, yet the pooled rows may reject it: they leave out "
-        "the creameries' own levels and the yearly technical change, and the flexible forms bend to absorb "
-        "them (here the CES runs to an extreme weight and the translog's marginal product of capital turns "
-        "negative on some rows: see the flags). A Cobb-Douglas rejected on pooled rows is a reason to look at "
-        "effects and trends before reaching for a more flexible form." % (len(truth["names"]),
-                                                                          len(truth["names"]) - 1),
-        CAUTION_FORMS,
-        SHARING,
-    ])
-
-    # All sheets first: formulas refer across them.
-    for name in ("Creameries", "Fixed effects", "Forms"):
-        new_sheet(doc, name)
-    sheet = doc.Sheets.getByName("Creameries")
-    set_values(sheet, "A1", [["creamery", "year", "output", "labour", "capital"]] + [list(row) for row in rows])
-    set_values(sheet, "F1", [["translog fitted", "translog regularity"]])
-    style.header(sheet.getCellRangeByName("A1:G1"))
-    style.input_cells(sheet.getCellRangeByName("C2:E%d" % last))
-    for row in range(2, last + 1):
-        set_formula(sheet, "F%d" % row, "=PRODOUTPUT(%s;D%d:E%d)" % (translog, row, row))
-        set_formula(sheet, "G%d" % row, "=PRODREGULAR(%s;D%d:E%d)" % (translog, row, row))
-    style.number_format(doc, sheet.getCellRangeByName("C2:D%d" % last), "0.0")
-    style.number_format(doc, sheet.getCellRangeByName("E2:E%d" % last), "0")
-    style.number_format(doc, sheet.getCellRangeByName("F2:F%d" % last), "0.0")
-    style.align_right(sheet.getCellRangeByName("B1:F1"))
-    style.column_widths(sheet, {"A": 26, "B": 14, "C": 18, "D": 18, "E": 18, "F": 26, "G": 70, "H": 6})
-    style.wrapped_column(sheet, 6, width_mm=70)
-    style.align_left(sheet.getCellRangeByName("G1:G%d" % last))  # an indent needs explicit left alignment
-    sheet.getCellRangeByName("G1:G%d" % last).ParaIndent = 300  # 3 mm off the numbers beside
-    style.one_page_wide(doc, sheet, landscape=True)
-    style.scatter_chart(sheet, "actual_vs_translog", "Actual and translog fitted output (thousand EUR)",
-                        actual_range="C1:C%d" % last, fitted_range="F1:F%d" % last, anchor="I2", size_mm=(150, 90))
-
-    sheet = doc.Sheets.getByName("Fixed effects")
-    table = "$A$1:$G$23"
-    set_array_formula(sheet, "A1:G23", '=PRODFIT(%s;%s;;;"cluster";;;%s;"fixed";%s)' % (output, inputs, groups, years))
-    style.header(sheet.getCellRangeByName("A1:G1"))
-    style.number_format(doc, sheet.getCellRangeByName("B2:G23"), "0.0000")
-    for count_cell in ("B6", "B18"):  # observations, groups
-        style.number_format(doc, sheet.getCellRangeByName(count_cell), "0")
-    style.align_right(sheet.getCellRangeByName("B1:G23"))
-    set_values(sheet, "A24", [["In short"], ["technical change per year"], ["returns to scale"],
-                              ["verdict (cluster errors)"], ["pooled fit, no effects or trend: labour"],
-                              ["pooled fit, no effects or trend: capital"]])
-    style.header(sheet.getCellRangeByName("A24:B24"))
-    set_formula(sheet, "B25", '=PRODSTAT(%s;%s;"technical change per period";;;;"cluster";;;%s;"fixed";%s)'
-                % (output, inputs, groups, years))
-    set_formula(sheet, "B26", "=PRODSCALE(%s)" % table)
-    set_formula(sheet, "B27", "=PRODRETURNS(%s)" % table)
-    set_formula(sheet, "B28", '=PRODSTAT(%s;%s;"labour")' % (output, inputs))
-    set_formula(sheet, "B29", '=PRODSTAT(%s;%s;"capital")' % (output, inputs))
-    style.number_format(doc, sheet.getCellRangeByName("B25"), "0.0000")
-    style.number_format(doc, sheet.getCellRangeByName("B26:B29"), "0.000")
-    style.align_right(sheet.getCellRangeByName("B25:B29"))
-    set_values(sheet, "D24", [["creamery", "effect (ln A)", "level vs mean"]])
-    set_values(sheet, "D25", [[name] for name in truth["names"]])
-    style.header(sheet.getCellRangeByName("D24:F24"))
-    effects_end = 24 + len(truth["names"])
-    for row in range(25, effects_end + 1):
-        set_formula(sheet, "E%d" % row, '=PRODSTAT(%s;%s;"effect of group "&D%d;;;;"cluster";;;%s;"fixed";%s)'
-                    % (output, inputs, row, groups, years))
-        set_formula(sheet, "F%d" % row, "=EXP(E%d-AVERAGE($E$25:$E$%d))" % (row, effects_end))
-    style.number_format(doc, sheet.getCellRangeByName("E25:E%d" % effects_end), "0.000")
-    style.number_format(doc, sheet.getCellRangeByName("F25:F%d" % effects_end), "0.00")
-    style.align_right(sheet.getCellRangeByName("E24:F24"))
-    style.column_widths(sheet, {"A": 62, "B": 24, "C": 22, "D": 26, "E": 22, "F": 24, "G": 22})
-    style.one_page_wide(doc, sheet, landscape=True)
-    add_name(doc, "fitted_technology", sheet, table)
-
-    sheet = doc.Sheets.getByName("Forms")
-    set_values(sheet, "A1", [["Three forms fitted to the pooled rows (no creamery effects, no trend)"]])
-    set_array_formula(sheet, "A2:G9", "=PRODCOMPARE(%s;%s)" % (output, inputs))
-    set_values(sheet, "A11", [["CES"]])
-    set_array_formula(sheet, "A12:G31", '=PRODFIT(%s;%s;"ces")' % (output, inputs))
-    set_values(sheet, "A33", [["Translog"]])
-    set_array_formula(sheet, "A34:G56", '=PRODFIT(%s;%s;"translog")' % (output, inputs))
-    for heading in ("A1", "A11", "A33"):
-        sheet.getCellRangeByName(heading).CharWeight = style.BOLD
-    for header_range in ("A2:G2", "A7:G7", "A12:G12", "A34:G34"):
-        style.header(sheet.getCellRangeByName(header_range))
-    for body in ("B2:G9", "B12:G31", "B34:G56"):
-        style.align_right(sheet.getCellRangeByName(body))
-    style.number_format(doc, sheet.getCellRangeByName("C3:E5"), "0.00")
-    style.number_format(doc, sheet.getCellRangeByName("B8:B9"), "0.000")
-    style.number_format(doc, sheet.getCellRangeByName("E8:E9"), "0.0000")
-    style.number_format(doc, sheet.getCellRangeByName("B13:G31"), "0.0000")
-    style.number_format(doc, sheet.getCellRangeByName("B35:G56"), "0.0000")
-    for count_cell in ("B19", "B42"):  # observations of the ces and the translog table
-        style.number_format(doc, sheet.getCellRangeByName(count_cell), "0")
-    # The ces convergence note is longer than its column, and its neighbours are array cells that
-    # stop it spilling over: repeat it in full in the empty row below the table.
-    set_formula(sheet, "A32", '="ces convergence: "&B29&", "&C29')
-    sheet.getCellRangeByName("A32").CharHeight = 9.0
-    style.align_left(sheet.getCellRangeByName("C29"))
-    sheet.getCellRangeByName("C29").ParaIndent = 200
-    style.column_widths(sheet, {"A": 52, "B": 22, "C": 26, "D": 22, "E": 22, "F": 26, "G": 44})
-    style.one_page_wide(doc, sheet, landscape=False)
-    add_name(doc, "form_comparison", sheet, "$A$2:$G$9")
-    doc.calculateAll()
-    check_workbook(doc, path, {"labour": truth["labour_exponent"], "capital": truth["capital_exponent"],
-                               "technical change per period": truth["trend"]})
     office.store(doc, path, FLAT_ODS_FILTER)
     doc.close(True)
 
@@ -426,108 +278,6 @@ def bakery_planning(office, path):
     doc.close(True)
 
 
-CAUTION_COSTS = ("Caution: a cost function is the cost of the cheapest way to produce, so fitting one assumes "
-                 "every branch minimises its cost at the prices it pays, and that those prices are given to it. "
-                 "Branches that waste inputs, or prices that differ from what was really paid, bias the "
-                 "figures. The fitted figures are statistical estimates from a small sample, not professional "
-                 "advice: check them with qualified practice before they steer costly decisions.")
-
-
-def laundry_costs(office, path):
-    truth = scenarios.LAUNDRIES
-    rows = scenarios.laundry_rows()
-    last = len(rows) + 1
-    doc = office.new_calc()
-    about_sheet(doc, "Lathergate Laundries: what does a load cost, and at what size is it cheapest?", [
-        "What it shows: a translog cost function fitted to last year's books of the chain's %d laundries "
-        "(each branch's total cost, the loads it washed and the prices it paid for an hour of labour, a "
-        "machine hour and a kWh) by PRODCOSTFIT, with the cost elasticity and returns to scale; at the "
-        "chain's typical (geometric mean) prices the efficient scale, where average cost is lowest "
-        "(PRODEFFICIENTSCALE), the cheapest mix of inputs there (PRODLEASTCOST, by Shephard's lemma), how "
-        "labour hours respond to the price of energy (PRODPRICEELASTICITY); and the average-cost curve "
-        "with the efficient scale marked." % len(rows),
-        "Which cells to change: the yellow data cells on the sheet Costs (B2:F%d) and the loads the curve "
-        "is drawn over (P2:P31). Everything else recalculates. The fitted table is the array formula in "
-        "H1:N32." % last,
-        "Units: cost in thousand EUR a year, loads in thousands a year, so average cost is EUR a load; the "
-        "wage and the machine hour in EUR an hour, energy in EUR a kWh.",
-        "Where the data came from: invented. sample-sheets/scenarios.py draws the branches with seed %d "
-        "from ln cost = %.1f + %.2f ln loads + 1/2 x %.2f (ln loads)^2 + %.1f ln wage + %.1f ln machine hour "
-        "+ %.1f ln kWh + noise, noise normal with SD %.2f, so the true efficient scale is %.1f thousand "
-        "loads a year at any prices." % (truth["seed"], truth["constant"], truth["output"],
-                                          truth["output_squared"], *truth["shares"], truth["noise_sd"],
-                                          truth["efficient_scale"]),
-        CAUTION_COSTS,
-        SHARING,
-    ])
-
-    sheet = new_sheet(doc, "Costs")
-    set_values(sheet, "A1", [["branch", "cost", "loads", "labour", "machines", "energy"]]
-               + [list(row) for row in rows])
-    style.header(sheet.getCellRangeByName("A1:F1"))
-    style.input_cells(sheet.getCellRangeByName("B2:F%d" % last))
-    table = "$H$1:$N$32"
-    set_array_formula(sheet, "H1:N32", '=PRODCOSTFIT(B1:B%d;C1:C%d;D1:F%d;"translog")' % (last, last, last))
-    style.header(sheet.getCellRangeByName("H1:N1"))
-
-    set_values(sheet, "H34", [["At typical prices", "labour", "machines", "energy"]])
-    set_values(sheet, "H35", [[label] for label in ("geometric mean prices", "efficient scale (thousand loads)",
-                                        "average cost there (EUR a load)",
-                                        "cheapest mix there (hours, hours, kWh; thousands)",
-                                        "labour hours per 1% dearer energy (%)")])
-    style.header(sheet.getCellRangeByName("H34:K34"))
-    for column, data in zip("IJK", "DEF"):
-        set_formula(sheet, "%s35" % column, "=GEOMEAN(%s2:%s%d)" % (data, data, last))
-    set_formula(sheet, "I36", "=PRODEFFICIENTSCALE(%s;I35:K35)" % table)
-    set_formula(sheet, "I37", '=PRODCOST(%s;I36;I35:K35;"average")' % table)
-    set_array_formula(sheet, "I38:K38", "=PRODLEASTCOST(%s;I36;I35:K35)" % table)
-    set_formula(sheet, "I39", '=PRODPRICEELASTICITY(%s;I36;I35:K35;"labour";"energy")' % table)
-
-    grid = [round(10 * 50 ** (step / 29.0), 1) for step in range(30)]  # 10 to 500 thousand loads
-    set_values(sheet, "P1", [["loads (thousand)", "average cost (EUR a load)", "efficient scale"]])
-    set_values(sheet, "P2", [[value] for value in grid])
-    style.header(sheet.getCellRangeByName("P1:R1"))
-    style.input_cells(sheet.getCellRangeByName("P2:P31"))
-    set_array_formula(sheet, "Q2:Q31", '=PRODCOST(%s;P2:P31;$I$35:$K$35;"average")' % table)
-    # The marker: a vertical segment at the efficient scale, from 0 to the lowest average cost.
-    set_formula(sheet, "P32", "=$I$36")
-    set_formula(sheet, "P33", "=$I$36")
-    set_values(sheet, "R32", [[0.0]])
-    set_formula(sheet, "R33", "=$I$37")
-
-    style.number_format(doc, sheet.getCellRangeByName("B2:C%d" % last), "0.0")
-    style.number_format(doc, sheet.getCellRangeByName("D2:E%d" % last), "0.00")
-    style.number_format(doc, sheet.getCellRangeByName("F2:F%d" % last), "0.000")
-    style.number_format(doc, sheet.getCellRangeByName("I2:N32"), "0.0000")
-    style.number_format(doc, sheet.getCellRangeByName("I35:K39"), "0.00")
-    style.number_format(doc, sheet.getCellRangeByName("P2:R33"), "0.00")
-    style.align_right(sheet.getCellRangeByName("B1:F1"))
-    style.align_right(sheet.getCellRangeByName("I1:N1"))
-    style.column_widths(sheet, {"A": 24, "B": 18, "C": 18, "D": 18, "E": 18, "F": 18, "G": 6, "H": 64, "I": 24,
-                                "J": 22, "K": 22, "L": 18, "M": 22, "N": 20, "O": 6, "P": 28, "Q": 40, "R": 28})
-    style.xy_lines_chart(sheet, "average_cost_curve", "Average cost of a load, and the efficient scale",
-                         x_range="P1:P33", y_range="Q1:R33", anchor="H42", size_mm=(170, 95),
-                         x_title="loads a year (thousand)", y_title="EUR a load")
-    add_name(doc, "cost_function", sheet, table)
-    add_name(doc, "efficient_scale", sheet, "$H$34:$K$39")
-    doc.calculateAll()
-    check_costs(doc, path, truth)
-    office.store(doc, path, FLAT_ODS_FILTER)
-    doc.close(True)
-
-
-def check_costs(doc, path, truth):
-    """No formula cell shows a problem, and the fitted efficient scale lies within 3 standard errors
-    of the true one."""
-    refuse_formula_problems(doc, path)
-    row = next(r for r in named_range(doc, "cost_function").getDataArray() if r[0] == "efficient scale")
-    estimate, error = row[1], row[2]
-    if abs(estimate - truth["efficient_scale"]) > 3 * error:
-        raise SystemExit("%s: efficient scale %.2f is more than 3 SE (%.2f) from the true %.2f"
-                         % (path, estimate, error, truth["efficient_scale"]))
-    print("  efficient scale %.2f thousand loads (SE %.2f), true %.2f" % (estimate, error, truth["efficient_scale"]))
-
-
 def check_plan(doc, path, truth):
     """No formula cell shows a problem, and in both scenarios the least-cost bundle bakes the target
     and spends on each input its exponent's share of the cost (the Cobb-Douglas first-order condition)."""
@@ -561,32 +311,12 @@ def check_growth(doc, path, true_total):
     print("  TFP growth over the years %.4f, true %.4f" % (total[-1], true_total))
 
 
-def refuse_formula_problems(doc, path):
-    problems = formula_problems(doc)
-    if problems:
-        raise SystemExit("%s: formula cells show problems: %s" % (path, problems[:10]))
-
-
-def check_workbook(doc, path, true_values):
-    """No formula cell shows an error or a message, and each labelled estimate of the table named
-    fitted_technology lies within 3 standard errors of its true value."""
-    refuse_formula_problems(doc, path)
-    table = named_range(doc, "fitted_technology").getDataArray()
-    for label, truth in true_values.items():
-        row = next(r for r in table if r[0] == label)
-        estimate, error = row[1], row[2]
-        if abs(estimate - truth) > 3 * error:
-            raise SystemExit("%s: %s %.4f is more than 3 SE (%.4f) from the true %.3f"
-                             % (path, label, estimate, error, truth))
-        print("  %s %.4f (SE %.4f), true %.3f" % (label, estimate, error, truth))
-
-
 WORKBOOKS = {"furniture-workshops.fods": furniture_workshops,
-             "dairy-creameries.fods": dairy_creameries,
+             "dairy-creameries.fods": panel_workbook.dairy_creameries,
              "glassworks-growth.fods": glassworks_growth,
              "bakery-planning.fods": bakery_planning,
              "print-shop-efficiency.fods": efficiency_workbook.print_shop_efficiency,
-             "laundry-costs.fods": laundry_costs}
+             "laundry-costs.fods": cost_workbook.laundry_costs}
 
 
 def main():

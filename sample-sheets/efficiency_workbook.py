@@ -7,7 +7,7 @@ from isoquant_office import set_array_formula, set_values
 
 import workbook_style as style
 from workbook_about import SHARING, about_sheet
-from workbook_checks import formula_problems, named_range
+from workbook_checks import named_range, refuse_formula_problems
 
 FLAT_ODS_FILTER = "OpenDocument Spreadsheet Flat XML"
 
@@ -113,9 +113,7 @@ def print_shop_efficiency(office, path):
 
 def check_efficiency(doc, path):
     """No formula cell shows a problem, the frontier converged, and its mean efficiency lies near the truth."""
-    problems = formula_problems(doc)
-    if problems:
-        raise SystemExit("%s: formula cells show problems: %s" % (path, problems[:10]))
+    refuse_formula_problems(doc, path)
     table = {row[0]: row[1] for row in named_range(doc, "efficiency_frontier").getDataArray()}
     if table["convergence"] != "converged":
         raise SystemExit("%s: the frontier did not converge (%s)" % (path, table["convergence"]))

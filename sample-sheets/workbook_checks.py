@@ -28,3 +28,23 @@ def formula_problems(doc):
 def named_range(doc, name):
     """The cell range a workbook-level name refers to."""
     return doc.NamedRanges.getByName(name).getReferredCells()
+
+
+def refuse_formula_problems(doc, path):
+    problems = formula_problems(doc)
+    if problems:
+        raise SystemExit("%s: formula cells show problems: %s" % (path, problems[:10]))
+
+
+def check_workbook(doc, path, true_values):
+    """No formula cell shows an error or a message, and each labelled estimate of the table named
+    fitted_technology lies within 3 standard errors of its true value."""
+    refuse_formula_problems(doc, path)
+    table = named_range(doc, "fitted_technology").getDataArray()
+    for label, truth in true_values.items():
+        row = next(r for r in table if r[0] == label)
+        estimate, error = row[1], row[2]
+        if abs(estimate - truth) > 3 * error:
+            raise SystemExit("%s: %s %.4f is more than 3 SE (%.4f) from the true %.3f"
+                             % (path, label, estimate, error, truth))
+        print("  %s %.4f (SE %.4f), true %.3f" % (label, estimate, error, truth))

@@ -131,3 +131,13 @@ def one_page_wide(doc, sheet, landscape, one_page_high=False):
 def plain_chart_background(chart):
     """A white plot area with the default grey grid: easier to read in print than the grey wall."""
     chart.Diagram.Wall.FillColor = 0xFFFFFF
+
+
+def new_sheet(doc, name):
+    doc.Sheets.insertNewByName(name, doc.Sheets.Count)
+    return doc.Sheets.getByName(name)
+
+
+def add_name(doc, name, sheet, cell_range):
+    doc.NamedRanges.addNewByName(name, "$'%s'.%s" % (sheet.Name, cell_range),
+                                 sheet.getCellRangeByName("A1").CellAddress, 0)
