@@ -6,6 +6,7 @@
 #include <rtl/string.hxx>
 
 #include <algorithm>
+#include <cmath>
 
 namespace isoquant::addin {
 
@@ -152,10 +153,38 @@ css::uno::Sequence<css::uno::Sequence<OUString>> toTextTable(const CellTable& ta
     return result;
 }
 
+// Every cell a finite number: the table can go as sequence<sequence<double>>, which Calc reads as
+// it reads the same numbers in `any`s (ScUnoAddInCall::SetResult puts each into the result matrix)
+// without a type test and an `any` per cell. NaN and infinities keep the `any` route they had.
+bool holdsFiniteNumbersOnly(const CellTable& table)
+{
+    for (std::size_t c = 0; c < table.columns(); ++c) {
+        const CellKind* kinds = table.columnKinds(c);
+        const double* slots = table.columnSlots(c);
+        for (std::size_t r = 0; r < table.rows(); ++r)
+            if (kinds[r] != CellKind::number || !std::isfinite(slots[r])) return false;
+    }
+    return table.rows() > 0 && table.columns() > 0;
+}
+
+css::uno::Sequence<css::uno::Sequence<double>> toNumberTable(const CellTable& table)
+{
+    css::uno::Sequence<css::uno::Sequence<double>> result(static_cast<sal_Int32>(table.rows()));
+    auto* rows = result.getArray();
+    for (std::size_t r = 0; r < table.rows(); ++r) {
+        css::uno::Sequence<double> row(static_cast<sal_Int32>(table.columns()));
+        auto* cells = row.getArray();
+        for (std::size_t c = 0; c < table.columns(); ++c) cells[c] = table.columnSlots(c)[r];
+        rows[r] = std::move(row);
+    }
+    return result;
+}
+
 } // namespace
 
 css::uno::Any toResult(const CellTable& table)
 {
+    if (holdsFiniteNumbersOnly(table)) return css::uno::Any(toNumberTable(table));
     if (holdsNumbers(table)) return css::uno::Any(toAnyTable(table));
     return css::uno::Any(toTextTable(table));
 }

@@ -35,8 +35,9 @@ AnyTable toAnyTable(const CellTable& table);
 // A table result as the `any` an array function returns. A table without numbers (verdict columns,
 // messages) goes as sequence<sequence<string>>: LibreOffice 7.4 enters those texts in the
 // document's shared-string pool, so that =, IF, COUNTIF, MATCH and VLOOKUP find them. A table
-// with numbers must go as sequence<sequence<any>>, whose texts 7.4 does not pool (DEVELOPERS.md,
-// "Texts in array results").
+// with numbers and texts or empty cells must go as sequence<sequence<any>>, whose texts 7.4 does
+// not pool (DEVELOPERS.md, "Texts in array results"); one of finite numbers only goes as
+// sequence<sequence<double>> (no `any` per cell: a million-row column of marginal products).
 css::uno::Any toResult(const CellTable& table);
 
 } // namespace isoquant::addin

@@ -93,6 +93,34 @@ isoquant::CellTable asCells(const Eigen::MatrixXd& values)
 
 volatile double sink = 0; // keeps the optimiser from dropping the timed work
 
+// CES on 1,000,000 rows near fixed proportions, Y = min(2·K, 3·L)·exp(ε): the runs need tens of
+// evaluations on all rows, more than the work cap (work_limits.hpp) allows: the time to say
+// "not converged". One run (main calls it only in the run that includes the million-row size).
+void timeCesThatStops()
+{
+    std::mt19937_64 generator(5u);
+    std::normal_distribution<double> logInput(1.5, 0.6);
+    std::normal_distribution<double> noise(0.0, 0.1);
+    isoquant::ProductionData data;
+    const Eigen::Index rows = 1000000;
+    data.output.resize(rows);
+    data.inputs.resize(rows, 2);
+    for (Eigen::Index i = 0; i < rows; ++i) {
+        data.inputs(i, 0) = std::exp(logInput(generator));
+        data.inputs(i, 1) = std::exp(logInput(generator));
+        data.output(i) = std::min(2 * data.inputs(i, 0), 3 * data.inputs(i, 1)) * std::exp(noise(generator));
+    }
+    data.inputLabels = {"capital", "labour"};
+    data.controls.resize(rows, 0);
+    isoquant::ProductionFitOptions options;
+    options.form = isoquant::ProductionForm::ces;
+    isoquant::ProductionFit fit;
+    const double seconds = medianSeconds(1, [&] { fit = isoquant::fitCes(data, options); });
+    std::printf("ces_fit_fixed_proportions %ld %.6g 1 status %s evaluations %ld\n", static_cast<long>(rows), seconds,
+                fit.ces->convergence == isoquant::NonlinearStatus::converged ? "converged" : "not-converged",
+                static_cast<long>(fit.ces->evaluations));
+}
+
 } // namespace
 
 int main(int argc, char** argv)
@@ -178,5 +206,7 @@ int main(int argc, char** argv)
         for (Eigen::Index j = 0; j < fit.estimates.size(); ++j) std::printf(" %.6f", fit.estimates(j));
         std::printf("\n");
     }
+
+    if (sizes.back() >= 1000000) timeCesThatStops();
     return 0;
 }

@@ -1,8 +1,9 @@
 // FitCache: a fit is computed once for equal arguments, again for different ones; the least
-// recently used fit is evicted beyond the capacity; errors are not cached.
+// recently used fit is evicted beyond the capacity or the byte budget; errors are not cached.
 // Arguments are the Cobb & Douglas (1928) ranges (tests/data/cobb_douglas_1928.csv).
 #include "isoquant/sheet/caches/fit_cache.hpp"
 #include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/caches/cache_footprint.hpp"
 #include "reference_data.hpp"
 
 #include <boost/test/unit_test.hpp>
@@ -93,6 +94,57 @@ BOOST_AUTO_TEST_CASE(least_recently_used_fit_is_evicted_beyond_capacity)
     cache.clear();
     cache.fit(withLevel(0.90));
     BOOST_TEST(cache.fitsComputed() == 5u);
+}
+
+BOOST_AUTO_TEST_CASE(byte_budget_holds_and_evicts_the_oldest_first)
+{
+    FitCache probe;
+    probe.fit(withLevel(0.90));
+    const std::size_t entryBytes = probe.bytesHeld();
+    // Arguments (three 25-row tables) and fit: at least a kind and a slot per cell.
+    BOOST_TEST(entryBytes > 3u * 25u * (sizeof(isoquant::CellKind) + sizeof(double)));
+
+    // Room for two entries of this size, not three.
+    const std::size_t budget = 2 * entryBytes + entryBytes / 2;
+    FitCache cache(8, isoquant::fitFromArguments, budget);
+    cache.fit(withLevel(0.90)); // A
+    cache.fit(withLevel(0.95)); // B
+    cache.fit(withLevel(0.99)); // C evicts A, the oldest
+    BOOST_TEST(cache.size() == 2u);
+    BOOST_TEST(cache.bytesHeld() <= budget);
+    cache.fit(withLevel(0.95)); // B kept
+    cache.fit(withLevel(0.99)); // C kept, now the most recent
+    BOOST_TEST(cache.fitsComputed() == 3u);
+    cache.fit(withLevel(0.90)); // A fitted again, evicting B (older than C)
+    BOOST_TEST(cache.fitsComputed() == 4u);
+    BOOST_TEST(cache.bytesHeld() <= budget);
+    cache.fit(withLevel(0.99)); // C kept
+    BOOST_TEST(cache.fitsComputed() == 4u);
+    cache.fit(withLevel(0.95)); // B was evicted
+    BOOST_TEST(cache.fitsComputed() == 5u);
+    cache.clear();
+    BOOST_TEST(cache.bytesHeld() == 0u);
+}
+
+// A budget below one entry still keeps the newest, so cells sharing one large fit fit it once.
+BOOST_AUTO_TEST_CASE(newest_entry_is_kept_over_the_budget)
+{
+    FitCache cache(8, isoquant::fitFromArguments, 1);
+    cache.fit(withLevel(0.90));
+    cache.fit(withLevel(0.90));
+    BOOST_TEST(cache.fitsComputed() == 1u);
+    cache.fit(withLevel(0.95));
+    BOOST_TEST(cache.size() == 1u);
+}
+
+// A million rows × 3 inputs count at least a kind and a slot per cell (27 MB); texts add theirs.
+BOOST_AUTO_TEST_CASE(footprint_counts_cells_and_texts)
+{
+    isoquant::CellTable inputs(1000000, 3);
+    const std::size_t numbers = isoquant::footprintBytes(inputs);
+    BOOST_TEST(numbers >= 27000000u);
+    inputs.set(7, 1, std::string(1000, 'x'));
+    BOOST_TEST(isoquant::footprintBytes(inputs) >= numbers + 1000u);
 }
 
 BOOST_AUTO_TEST_CASE(errors_are_not_cached)

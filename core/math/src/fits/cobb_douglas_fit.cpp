@@ -16,10 +16,12 @@ namespace isoquant {
 
 namespace {
 
-// The regression behind a Cobb-Douglas fit, its rows taken a block at a time (logs included), so
-// that a million-row fit never holds a log design:
+// The regression behind a Cobb-Douglas fit, its rows taken a block at a time (logs included):
 //   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ,   or with constant returns imposed
 //   ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + Σⱼ cⱼ zⱼ,  b_k = 1 − Σ_{i<k} bᵢ.
+// The logs of the first pass are kept (n × (1 + slopes) doubles, the size of the data itself), so
+// that the residual pass copies them instead of taking them again: the logs are most of a fit's
+// time (tests/benchmarks/RESULTS.md), the copy is bitwise the same numbers.
 class CobbDouglasRows : public RegressionRows {
 public:
     CobbDouglasRows(const ProductionData& data, bool constantReturns) : data_(data), constantReturns_(constantReturns) {}
@@ -30,14 +32,12 @@ public:
     void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const override
     {
         const Eigen::Index count = design.rows();
-        const Eigen::Index k = data_.inputs.cols();
         design.col(0).setOnes();
-        response = exactLog(data_.output.segment(first, count).array()).matrix();
-        design.middleCols(1, slopes()) = exactLog(data_.inputs.block(first, 0, count, slopes()).array()).matrix();
-        if (constantReturns_) {
-            const Eigen::VectorXd lastLog = exactLog(data_.inputs.col(k - 1).segment(first, count).array()).matrix();
-            response -= lastLog;
-            design.middleCols(1, slopes()).colwise() -= lastLog;
+        if (first + count <= rowsKept_) {
+            response = keptLogs_.col(0).segment(first, count);
+            design.middleCols(1, slopes()) = keptLogs_.block(first, 1, count, slopes());
+        } else {
+            takeLogs(first, design, response);
         }
         // Without controls their matrix has no storage: a block of it would offset a null pointer.
         if (data_.controls.cols() > 0) design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
@@ -46,8 +46,28 @@ public:
 private:
     Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
 
+    void takeLogs(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const
+    {
+        const Eigen::Index count = design.rows();
+        const Eigen::Index k = data_.inputs.cols();
+        response = exactLog(data_.output.segment(first, count).array()).matrix();
+        design.middleCols(1, slopes()) = exactLog(data_.inputs.block(first, 0, count, slopes()).array()).matrix();
+        if (constantReturns_) {
+            const Eigen::VectorXd lastLog = exactLog(data_.inputs.col(k - 1).segment(first, count).array()).matrix();
+            response -= lastLog;
+            design.middleCols(1, slopes()).colwise() -= lastLog;
+        }
+        if (first != rowsKept_) return; // kept only as the first pass takes the rows in order
+        if (first == 0) keptLogs_.resize(rows(), 1 + slopes());
+        keptLogs_.col(0).segment(first, count) = response;
+        keptLogs_.block(first, 1, count, slopes()) = design.middleCols(1, slopes());
+        rowsKept_ = first + count;
+    }
+
     const ProductionData& data_;
     bool constantReturns_;
+    mutable Eigen::MatrixXd keptLogs_; // ln Y (or ln(Y/x_k)), then the slopes' columns
+    mutable Eigen::Index rowsKept_ = 0;
 };
 
 // How the regression's parameters θ map back to β = (ln A, b₁…b_k, c₁…c_m):  β = transform·θ + offset.

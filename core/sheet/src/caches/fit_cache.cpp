@@ -1,4 +1,5 @@
 #include "isoquant/sheet/caches/fit_cache.hpp"
+#include "isoquant/sheet/caches/cache_footprint.hpp"
 
 #include <cstring>
 
@@ -84,7 +85,8 @@ std::shared_ptr<const ProductionFit> FitCache::fitOrReuse(const FitArguments& ar
         return kept->fit;
     auto computed = std::make_shared<const ProductionFit>(fitter_(arguments));
     ++fitsComputed_;
-    entries_.add(Entry{hash, expendable ? std::move(*expendable) : arguments, computed});
+    const std::size_t bytes = sizeof(Entry) + footprintBytes(arguments) + footprintBytes(*computed);
+    entries_.add(Entry{hash, expendable ? std::move(*expendable) : arguments, computed}, bytes);
     return computed;
 }
 
@@ -92,6 +94,18 @@ std::size_t FitCache::fitsComputed() const
 {
     const std::lock_guard<std::mutex> lock(mutex_);
     return fitsComputed_;
+}
+
+std::size_t FitCache::size() const
+{
+    const std::lock_guard<std::mutex> lock(mutex_);
+    return entries_.size();
+}
+
+std::size_t FitCache::bytesHeld() const
+{
+    const std::lock_guard<std::mutex> lock(mutex_);
+    return entries_.bytes();
 }
 
 void FitCache::clear()

@@ -1,5 +1,7 @@
 // Remembers recent fits by the full content of their arguments, so that a fit referenced from
 // many cells (PRODSTAT down a column, say) is computed once. Safe to call from several threads.
+// Bounded by entries and by bytes (each entry's arguments and fit, cache_footprint.hpp): the least
+// recently used entries go first; the newest is kept even when it alone exceeds the bytes.
 #pragma once
 
 #include "isoquant/sheet/functions/production_functions.hpp"
@@ -16,8 +18,13 @@ class FitCache {
 public:
     using Fitter = std::function<ProductionFit(const FitArguments&)>;
 
-    explicit FitCache(std::size_t capacity = 8, Fitter fitter = fitFromArguments)
-        : fitter_(std::move(fitter)), entries_(capacity) {}
+    // 256 MiB: six 1M × 3 fits with their arguments (44 MB each: 36 MB of cells, 8 MB of
+    // residuals), a small share of a desktop's memory (common practice, no source).
+    static constexpr std::size_t defaultByteBudget = std::size_t{256} << 20;
+
+    explicit FitCache(std::size_t capacity = 8, Fitter fitter = fitFromArguments,
+                      std::size_t byteBudget = defaultByteBudget)
+        : fitter_(std::move(fitter)), entries_(capacity, byteBudget) {}
 
     // The fit for these arguments: from the cache when equal arguments were fitted recently.
     // Errors (InputError) are not cached: they are cheap to find again.
@@ -27,6 +34,9 @@ public:
 
     // Fits computed since construction (clear() empties the cache, not this count).
     std::size_t fitsComputed() const;
+    // Entries held and the bytes they count against the budget.
+    std::size_t size() const;
+    std::size_t bytesHeld() const;
     void clear();
 
 private:

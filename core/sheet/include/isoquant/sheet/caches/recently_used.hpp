@@ -1,8 +1,10 @@
-// A short list of entries, most recently used first, holding at most `capacity`: what the caches
-// (FitCache, ModelCache, the add-in's ModelRanges) keep. Not synchronised: each cache locks.
+// A short list of entries, most recently used first, holding at most `capacity` entries and, when
+// the entries are added with their sizes, at most `byteBudget` bytes: what the caches (FitCache,
+// ModelCache, the add-in's ModelRanges) keep. Not synchronised: each cache locks.
 #pragma once
 
 #include <cstddef>
+#include <limits>
 #include <list>
 
 namespace isoquant {
@@ -10,33 +12,57 @@ namespace isoquant {
 template <typename Entry>
 class RecentlyUsed {
 public:
-    explicit RecentlyUsed(std::size_t capacity) : capacity_(capacity) {}
+    explicit RecentlyUsed(std::size_t capacity, std::size_t byteBudget = std::numeric_limits<std::size_t>::max())
+        : capacity_(capacity), byteBudget_(byteBudget)
+    {
+    }
 
     // The first entry `matches(entry)` accepts, made the most recent; nullptr when none does.
     template <typename Matches>
     const Entry* find(Matches matches)
     {
-        for (auto entry = entries_.begin(); entry != entries_.end(); ++entry) {
-            if (matches(*entry)) {
-                entries_.splice(entries_.begin(), entries_, entry);
-                return &entries_.front();
+        for (auto slot = slots_.begin(); slot != slots_.end(); ++slot) {
+            if (matches(slot->entry)) {
+                slots_.splice(slots_.begin(), slots_, slot);
+                return &slots_.front().entry;
             }
         }
         return nullptr;
     }
 
-    // Adds `entry` as the most recent, dropping the least recent beyond the capacity.
-    void add(Entry entry)
+    // Adds `entry`, holding `bytes`, as the most recent, dropping the least recent beyond the
+    // capacity or the byte budget. The entry just added is always kept, even alone over the
+    // budget: a cache that could not hold its newest entry would recompute it on every call.
+    void add(Entry entry, std::size_t bytes = 0)
     {
-        entries_.push_front(std::move(entry));
-        if (entries_.size() > capacity_) entries_.pop_back();
+        slots_.push_front(Slot{std::move(entry), bytes});
+        bytes_ += bytes;
+        while (slots_.size() > 1 && (slots_.size() > capacity_ || bytes_ > byteBudget_)) {
+            bytes_ -= slots_.back().bytes;
+            slots_.pop_back();
+        }
     }
 
-    void clear() { entries_.clear(); }
+    void clear()
+    {
+        slots_.clear();
+        bytes_ = 0;
+    }
+
+    std::size_t size() const { return slots_.size(); }
+    // The bytes of the entries held, as given to add().
+    std::size_t bytes() const { return bytes_; }
 
 private:
+    struct Slot {
+        Entry entry;
+        std::size_t bytes;
+    };
+
     std::size_t capacity_;
-    std::list<Entry> entries_;
+    std::size_t byteBudget_;
+    std::size_t bytes_ = 0;
+    std::list<Slot> slots_;
 };
 
 } // namespace isoquant
