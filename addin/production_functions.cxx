@@ -1,79 +1,23 @@
 #include "production_functions.hxx"
 
+#include "call_guards.hxx"
 #include "cell_conversion.hxx"
 #include "function_table.hxx"
 #include "wizard_texts.hxx"
 
 #include "isoquant/sheet/functions/production_functions.hpp"
-#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
 #include "isoquant/sheet/functions/growth_functions.hpp"
-#include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/sheet/functions/frontier_functions.hpp"
-#include "isoquant/sheet/tables/frontier_table.hpp"
-#include "isoquant/sheet/functions/envelope_functions.hpp"
-#include "isoquant/sheet/functions/cost_decisions.hpp"
-#include "isoquant/sheet/tables/cost_table.hpp"
-#include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
-
-#include <new>
+#include "isoquant/sheet/functions/cost_decisions.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 
 namespace isoquant::addin {
 
 namespace {
 
 using css::uno::Any;
-
-// Every cell function runs through here: the message of any failure becomes the cell's text.
-template <typename Compute>
-std::string failureMessage(Compute&& compute)
-{
-    try {
-        compute();
-        return {};
-    } catch (const InputError& error) {
-        return std::string("Error: ") + error.what();
-    } catch (const std::bad_alloc&) {
-        return "Error: not enough memory for a range this large";
-    } catch (const std::exception& error) {
-        return std::string("Error: internal problem (") + error.what() + "); please report it";
-    } catch (const css::uno::Exception& error) {
-        return "Error: internal problem (" + toUtf8(error.Message) + "); please report it";
-    } catch (...) {
-        return "Error: internal problem; please report it";
-    }
-}
-
-template <typename Compute>
-Any guardedTable(Compute&& compute)
-{
-    Any result;
-    const std::string message = failureMessage([&] { result = toResult(compute()); });
-    if (!message.empty()) return toResult(singleCell(message));
-    return result;
-}
-
-// A result that is a list, one value per input, then any totals (PRODLEASTCOST, PRODBUDGET,
-// PRODPROFIT), comes from the core as a row; it follows the orientation of the prices: prices in
-// a column give a column, so that the array formula can be entered over a column.
-CellTable orientedLike(const CellTable& row, const CellTable& prices)
-{
-    if (prices.rows() <= prices.columns() || row.rows() != 1) return row;
-    CellTable column(row.columns(), 1);
-    for (std::size_t c = 0; c < row.columns(); ++c) column.set(c, 0, row.at(0, c));
-    return column;
-}
-
-template <typename Compute>
-Any guardedValue(Compute&& compute)
-{
-    Any result;
-    const std::string message = failureMessage([&] { result = toAny(compute()); });
-    if (!message.empty()) return toAny(Cell(message));
-    return result;
-}
 
 // An argument's texts in the wizard's language; empty for an unknown function or argument.
 ArgumentInfo wizardArgument(const OUString& programmaticName, sal_Int32 argument, const Translation* translation)
@@ -285,126 +229,6 @@ Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable&
         return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
                                   toSingleCell(kind, "kind"));
-    });
-}
-
-Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
-                                       const AnyTable& inputPrices, const Any& what)
-{
-    return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(leastCostRowWithBounds(*models_.cells(model, "model"),
-                                                   toSingleCell(Any(targetOutput), "target output"), prices,
-                                                   toSingleCell(what, "what")),
-                            prices);
-    });
-}
-
-Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
-                                  const Any& what)
-{
-    return guardedTable([&] {
-        return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
-                          toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
-    });
-}
-
-Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices)
-{
-    return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return efficientScaleCell(*models_.cells(model, "model"), prices);
-    });
-}
-
-Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTable& output, const AnyTable& inputPrices,
-                                             const AnyTable& inputI, const AnyTable& inputJ, const Any& kind)
-{
-    return guardedTable([&] {
-        return priceElasticityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                     toCellTable(inputPrices, "input prices"), toSingleCell(Any(inputI), "input i"),
-                                     toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"));
-    });
-}
-
-Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
-                                     const Any& form, const Any& shares, const Any& errors, const Any& level,
-                                     const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                     const Any& incompleteRows)
-{
-    return guardedTable([&] {
-        CostFitArguments arguments;
-        arguments.cost = toCellTable(cost, "cost");
-        arguments.output = toCellTable(output, "output");
-        arguments.prices = toCellTable(prices, "input prices");
-        arguments.form = toSingleCell(form, "form");
-        arguments.shares = toOptionalTable(shares, "shares");
-        arguments.errors = toSingleCell(errors, "errors");
-        arguments.level = toSingleCell(level, "level");
-        arguments.controls = toOptionalTable(controls, "controls");
-        arguments.groups = toOptionalTable(groups, "groups");
-        arguments.effects = toSingleCell(effects, "effects");
-        arguments.trend = toOptionalTable(trend, "trend");
-        arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
-        return costFitTable(costFitFromArguments(arguments));
-    });
-}
-
-Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices)
-{
-    return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"), prices),
-                            prices);
-    });
-}
-
-Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
-{
-    return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(
-            profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
-    });
-}
-
-Any ProductionFunctions::prodFrontier(const AnyTable& output, const AnyTable& inputs, const Any& form,
-                                      const Any& inefficiency, const Any& level, const Any& controls)
-{
-    return guardedTable([&] {
-        return frontierTable(frontierFromArguments(
-            {toCellTable(output, "output"), toCellTable(inputs, "inputs"), toSingleCell(form, "form"),
-             toSingleCell(inefficiency, "inefficiency"), toSingleCell(level, "level"),
-             toOptionalTable(controls, "controls")}));
-    });
-}
-
-Any ProductionFunctions::prodEfficiency(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                                        const Any& what)
-{
-    return guardedTable([&] {
-        return efficiencyColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                toCellTable(inputs, "inputs"), toSingleCell(what, "what"));
-    });
-}
-
-Any ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
-                                      const Any& inputI, const Any& inputJ)
-{
-    return guardedTable([&] {
-        return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
-                              toCellTable(values, "values of input i"), toSingleCell(inputI, "input i"),
-                              toSingleCell(inputJ, "input j"));
-    });
-}
-
-Any ProductionFunctions::prodEnvelope(const AnyTable& outputs, const AnyTable& inputs, const Any& returns,
-                                      const Any& orientation, const Any& what, const Any& names)
-{
-    return guardedTable([&] {
-        return envelopeColumn(toCellTable(outputs, "outputs"), toCellTable(inputs, "inputs"),
-                              toSingleCell(returns, "returns"), toSingleCell(orientation, "orientation"),
-                              toSingleCell(what, "what"), toOptionalTable(names, "names"));
     });
 }
 
