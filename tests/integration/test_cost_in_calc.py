@@ -105,16 +105,7 @@ def prepare(sheet):
 
 
 CALC = module_session(prepare)
-
-
-def setUpModule():
-    global SHEET, DOC, OFFICE
-    CALC.start()
-    SHEET, DOC, OFFICE = CALC.sheet, CALC.doc, CALC.office
-
-
-def tearDownModule():
-    CALC.stop()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 class CostTestCase(unittest.TestCase):
@@ -130,11 +121,11 @@ class CostFitTableTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J1:P22", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
-        set_array_formula(SHEET, "J31:P62", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
-        recalc(DOC)
-        cls.table = get_range(SHEET, "J1:P22")
-        cls.translog = get_range(SHEET, "J31:P62")
+        set_array_formula(CALC.sheet, "J1:P22", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(CALC.sheet, "J31:P62", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";;"hc3")')
+        recalc(CALC.doc)
+        cls.table = get_range(CALC.sheet, "J1:P22")
+        cls.translog = get_range(CALC.sheet, "J31:P62")
 
     def test_cobb_douglas_layout(self):
         self.assertEqual(self.table[0], ["Cobb-Douglas cost fit", "value", "std. error", "t", "p-value",
@@ -182,10 +173,10 @@ class CostSharesTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "AR1:AX32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AP31)')
-        set_array_formula(SHEET, "AR41", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AO31)')
-        recalc(DOC)
-        cls.table = get_range(SHEET, "AR1:AX32")
+        set_array_formula(CALC.sheet, "AR1:AX32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AP31)')
+        set_array_formula(CALC.sheet, "AR41", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog";AN1:AO31)')
+        recalc(CALC.doc)
+        cls.table = get_range(CALC.sheet, "AR1:AX32")
 
     def test_estimates_against_numpy_sur(self):
         import numpy as np  # python3-numpy
@@ -202,18 +193,18 @@ class CostSharesTest(CostTestCase):
         self.assert_close(rows["log-likelihood"][1], llf, 1e-7, "system log-likelihood")  # numpy SUR
 
     def test_incomplete_rows_are_left_out(self):
-        set_values(SHEET, "AZ1", [["cost", "washes"] + LABELS] + [row[:] for row in DATA])  # AZ1:BD31
-        set_values(SHEET, "BA4", [[None]])  # row 4: a blank output
-        set_array_formula(SHEET, "BF1:BL23", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31;;;;;;;;;TRUE())")
-        set_array_formula(SHEET, "BF31", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31)")
-        recalc(DOC)
-        rows = {row[0]: row for row in get_range(SHEET, "BF1:BL23") if row[0]}
+        set_values(CALC.sheet, "AZ1", [["cost", "washes"] + LABELS] + [row[:] for row in DATA])  # AZ1:BD31
+        set_values(CALC.sheet, "BA4", [[None]])  # row 4: a blank output
+        set_array_formula(CALC.sheet, "BF1:BL23", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31;;;;;;;;;TRUE())")
+        set_array_formula(CALC.sheet, "BF31", "=PRODCOSTFIT(AZ1:AZ31;BA1:BA31;BB1:BD31)")
+        recalc(CALC.doc)
+        rows = {row[0]: row for row in get_range(CALC.sheet, "BF1:BL23") if row[0]}
         self.assertEqual(rows["observations"][1], float(ROWS - 1))
         self.assertEqual(rows["incomplete rows dropped"][1], 1.0)
-        self.assertEqual(get_cell(SHEET, "BF31"), "Error: output: row 4 is empty; every cell must hold a number")
+        self.assertEqual(get_cell(CALC.sheet, "BF31"), "Error: output: row 4 is empty; every cell must hold a number")
 
     def test_shares_must_match_the_prices(self):
-        self.assertEqual(get_cell(SHEET, "AR41"), "Error: shares: has 2 columns but input prices has 3; give one share "
+        self.assertEqual(get_cell(CALC.sheet, "AR41"), "Error: shares: has 2 columns but input prices has 3; give one share "
                                                   "column per price, in the same order")
 
 
@@ -222,53 +213,53 @@ class CostModelTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "J81:P102", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
+        set_array_formula(CALC.sheet, "J81:P102", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31)")
         for column, word in zip("RSTUV", WORDS):
-            set_array_formula(SHEET, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$102;B2:B6;C2:E6;"%s")' % word)
-            set_array_formula(SHEET, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
-            set_array_formula(SHEET, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
-        set_array_formula(SHEET, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
-        recalc(DOC)
+            set_array_formula(CALC.sheet, "%s2:%s6" % (column, column), '=PRODCOST($J$81:$P$102;B2:B6;C2:E6;"%s")' % word)
+            set_array_formula(CALC.sheet, "%s12" % column, '=PRODCOST($G$1:$H$6;B2;C2:E2;"%s")' % word)
+            set_array_formula(CALC.sheet, "%s14" % column, '=PRODCOST($G$11:$H$15;B2;C2:E2;"%s")' % word)
+        set_array_formula(CALC.sheet, "W2:W6", '=PRODCOST($G$11:$H$15;B2:B6;C2:E6;"marginal")')
+        recalc(CALC.doc)
 
     def test_fitted_model_total_cost_is_the_median_prediction(self):
-        fitted = get_range(SHEET, "K82:K86")
+        fitted = get_range(CALC.sheet, "K82:K86")
         for row in range(5):
             y, prices = DATA[row][1], DATA[row][2:]
             log_cost = fitted[0][0] + fitted[1][0] * math.log(y) + sum(
                 fitted[2 + i][0] * math.log(w) for i, w in enumerate(prices))
-            self.assert_close(get_cell(SHEET, "R%d" % (row + 2)), math.exp(log_cost), FORMULA_TOLERANCE,
+            self.assert_close(get_cell(CALC.sheet, "R%d" % (row + 2)), math.exp(log_cost), FORMULA_TOLERANCE,
                               "total, row %d" % row)  # cost-model formula
-            self.assert_close(get_cell(SHEET, "U%d" % (row + 2)), fitted[1][0], FORMULA_TOLERANCE, "elasticity")
+            self.assert_close(get_cell(CALC.sheet, "U%d" % (row + 2)), fitted[1][0], FORMULA_TOLERANCE, "elasticity")
 
     def test_typed_dual_and_production_model_agree(self):
         y, prices = DATA[0][1], DATA[0][2:]
         cost = dual_cost(y, prices)  # dual of Cobb-Douglas
         expected = [cost, cost / (NU * y), cost / y, 1 / NU, NU]
         for column, word, value in zip("RSTUV", WORDS, expected):
-            self.assert_close(get_cell(SHEET, "%s12" % column), value, FORMULA_TOLERANCE, "typed cost model " + word)
-            self.assert_close(get_cell(SHEET, "%s14" % column), value, FORMULA_TOLERANCE, "production model " + word)
+            self.assert_close(get_cell(CALC.sheet, "%s12" % column), value, FORMULA_TOLERANCE, "typed cost model " + word)
+            self.assert_close(get_cell(CALC.sheet, "%s14" % column), value, FORMULA_TOLERANCE, "production model " + word)
 
 
     def test_production_model_gives_a_column_of_marginal_costs(self):
         for row in range(5):
             y, prices = DATA[row][1], DATA[row][2:]
-            self.assert_close(get_cell(SHEET, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y), FORMULA_TOLERANCE,
+            self.assert_close(get_cell(CALC.sheet, "W%d" % (row + 2)), dual_cost(y, prices) / (NU * y), FORMULA_TOLERANCE,
                               "marginal cost, row %d" % row)  # dual of Cobb-Douglas
 
 
 class CostBadInputTest(CostTestCase):
 
     def test_messages_name_argument_and_row(self):
-        set_values(SHEET, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
-        set_values(SHEET, "A44", [[0.0]])
-        set_array_formula(SHEET, "J111:P132", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
-        set_array_formula(SHEET, "J141:P162", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
-        set_array_formula(SHEET, "J171:P192", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
-        recalc(DOC)
-        self.assertEqual(get_cell(SHEET, "J111"), "Error: cost: row 4 is 0; logs need positive values")
-        self.assertEqual(get_cell(SHEET, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
-        self.assertEqual(get_cell(SHEET, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
-        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+        set_values(CALC.sheet, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
+        set_values(CALC.sheet, "A44", [[0.0]])
+        set_array_formula(CALC.sheet, "J111:P132", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
+        set_array_formula(CALC.sheet, "J141:P162", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
+        set_array_formula(CALC.sheet, "J171:P192", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
+        recalc(CALC.doc)
+        self.assertEqual(get_cell(CALC.sheet, "J111"), "Error: cost: row 4 is 0; logs need positive values")
+        self.assertEqual(get_cell(CALC.sheet, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
+        self.assertEqual(get_cell(CALC.sheet, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
+        self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
 
 def translog_log_cost(y, prices):
@@ -289,34 +280,34 @@ class CostDecisionsTest(CostTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "R21:T21", "=PRODLEASTCOST($G$1:$H$6;B2;C2:E2)")
-        set_array_formula(SHEET, "R22:T22", "=PRODLEASTCOST($G$11:$H$15;B2;C2:E2)")
-        set_values(SHEET, "Y21", [[p] for p in DATA[0][2:]])  # Y21:Y23, the same prices as a column
-        set_array_formula(SHEET, "Z21:Z23", "=PRODLEASTCOST($G$1:$H$6;B2;Y21:Y23)")
-        set_array_formula(SHEET, "R24", "=PRODEFFICIENTSCALE($G$21:$H$36;C2:E2)")
-        set_array_formula(SHEET, "R25", "=PRODEFFICIENTSCALE($G$1:$H$6;C2:E2)")
-        set_array_formula(SHEET, "R26", "=PRODEFFICIENTSCALE($G$11:$H$15;C2:E2)")
+        set_array_formula(CALC.sheet, "R21:T21", "=PRODLEASTCOST($G$1:$H$6;B2;C2:E2)")
+        set_array_formula(CALC.sheet, "R22:T22", "=PRODLEASTCOST($G$11:$H$15;B2;C2:E2)")
+        set_values(CALC.sheet, "Y21", [[p] for p in DATA[0][2:]])  # Y21:Y23, the same prices as a column
+        set_array_formula(CALC.sheet, "Z21:Z23", "=PRODLEASTCOST($G$1:$H$6;B2;Y21:Y23)")
+        set_array_formula(CALC.sheet, "R24", "=PRODEFFICIENTSCALE($G$21:$H$36;C2:E2)")
+        set_array_formula(CALC.sheet, "R25", "=PRODEFFICIENTSCALE($G$1:$H$6;C2:E2)")
+        set_array_formula(CALC.sheet, "R26", "=PRODEFFICIENTSCALE($G$11:$H$15;C2:E2)")
         for column, (i, j) in zip("RSTUVW", [(1, 1), (1, 2), (1, 3), (2, 1), (2, 2), (3, 3)]):
-            set_array_formula(SHEET, "%s28" % column, '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;%d;%d)' % (i, j))
-        set_array_formula(SHEET, "R29", '=PRODPRICEELASTICITY($G$11:$H$15;B2;C2:E2;"labour";"energy";"allen")')
-        set_array_formula(SHEET, "S29", '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;"labour";"energy";"morishima")')
-        set_array_formula(SHEET, "R30:R34", '=PRODPRICEELASTICITY($G$21:$H$36;B2:B6;C2:E6;1;2;"allen")')
-        set_array_formula(SHEET, "R36:R41", "=PRODREGULAR($G$21:$H$36;B1:E6)")
-        set_array_formula(SHEET, "T36", '=PRODPRICEELASTICITY($G$21:$H$36;B2;C2:E2;1;2;"cross")')
-        set_array_formula(SHEET, "T37", "=PRODREGULAR($G$21:$H$36;C2:E6)")
-        set_array_formula(SHEET, "AB1:AH32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog")')
-        set_values(SHEET, "AJ1", [[math.exp(sum(math.log(row[2 + i]) for row in DATA) / ROWS) for i in range(3)]])
-        set_array_formula(SHEET, "AJ2", "=PRODEFFICIENTSCALE(AB1:AH32;AJ1:AL1)")
-        recalc(DOC)
+            set_array_formula(CALC.sheet, "%s28" % column, '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;%d;%d)' % (i, j))
+        set_array_formula(CALC.sheet, "R29", '=PRODPRICEELASTICITY($G$11:$H$15;B2;C2:E2;"labour";"energy";"allen")')
+        set_array_formula(CALC.sheet, "S29", '=PRODPRICEELASTICITY($G$1:$H$6;B2;C2:E2;"labour";"energy";"morishima")')
+        set_array_formula(CALC.sheet, "R30:R34", '=PRODPRICEELASTICITY($G$21:$H$36;B2:B6;C2:E6;1;2;"allen")')
+        set_array_formula(CALC.sheet, "R36:R41", "=PRODREGULAR($G$21:$H$36;B1:E6)")
+        set_array_formula(CALC.sheet, "T36", '=PRODPRICEELASTICITY($G$21:$H$36;B2;C2:E2;1;2;"cross")')
+        set_array_formula(CALC.sheet, "T37", "=PRODREGULAR($G$21:$H$36;C2:E6)")
+        set_array_formula(CALC.sheet, "AB1:AH32", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;"translog")')
+        set_values(CALC.sheet, "AJ1", [[math.exp(sum(math.log(row[2 + i]) for row in DATA) / ROWS) for i in range(3)]])
+        set_array_formula(CALC.sheet, "AJ2", "=PRODEFFICIENTSCALE(AB1:AH32;AJ1:AL1)")
+        recalc(CALC.doc)
 
     def test_least_cost_from_a_cost_model_follows_the_prices(self):
-        via_cost, via_production = get_range(SHEET, "R21:T21")[0], get_range(SHEET, "R22:T22")[0]
+        via_cost, via_production = get_range(CALC.sheet, "R21:T21")[0], get_range(CALC.sheet, "R22:T22")[0]
         y, prices = DATA[0][1], DATA[0][2:]
         for i, b in enumerate(EXPONENTS):
             expected = b / NU * dual_cost(y, prices) / prices[i]  # Shephard: share x cost / price, dual of Cobb-Douglas
             self.assert_close(via_cost[i], expected, FORMULA_TOLERANCE, "cost model, " + LABELS[i])
             self.assert_close(via_production[i], expected, FORMULA_TOLERANCE, "production model, " + LABELS[i])
-            self.assert_close(get_cell(SHEET, "Z%d" % (21 + i)), expected, FORMULA_TOLERANCE, "prices as a column")
+            self.assert_close(get_cell(CALC.sheet, "Z%d" % (21 + i)), expected, FORMULA_TOLERANCE, "prices as a column")
 
     def test_efficient_scale_against_scipy(self):
         import numpy as np  # python3-numpy
@@ -325,23 +316,23 @@ class CostDecisionsTest(CostTestCase):
         result = minimize_scalar(lambda ly: math.exp(translog_log_cost(math.exp(ly), prices) - ly),
                                  bounds=(-20.0, 40.0), method="bounded", options={"xatol": 1e-12})
         self.assertTrue(result.success)
-        self.assert_close(get_cell(SHEET, "R24"), float(np.exp(result.x)), 1e-6, "efficient scale")  # scipy
+        self.assert_close(get_cell(CALC.sheet, "R24"), float(np.exp(result.x)), 1e-6, "efficient scale")  # scipy
         # NU = 1.2: increasing returns, the cost elasticity 1/NU < 1 at every output.
         falls = "No efficient scale: average cost falls at every output in this model (increasing returns throughout)"
-        self.assertEqual(get_cell(SHEET, "R25"), falls)
-        self.assertEqual(get_cell(SHEET, "R26"), falls)
+        self.assertEqual(get_cell(CALC.sheet, "R25"), falls)
+        self.assertEqual(get_cell(CALC.sheet, "R26"), falls)
 
     def test_efficient_scale_at_geometric_mean_prices_is_the_table_row(self):
-        row = [r for r in get_range(SHEET, "AB1:AH32") if r[0] == "efficient scale"][0]
-        self.assert_close(get_cell(SHEET, "AJ2"), row[1], 1e-10, "efficient scale")  # the same formula, other logs
+        row = [r for r in get_range(CALC.sheet, "AB1:AH32") if r[0] == "efficient scale"][0]
+        self.assert_close(get_cell(CALC.sheet, "AJ2"), row[1], 1e-10, "efficient scale")  # the same formula, other logs
 
     def test_price_elasticities_of_the_cobb_douglas_dual(self):
         shares = [b / NU for b in EXPONENTS]
         expected = [shares[0] - 1, shares[1], shares[2], shares[0], shares[1] - 1, shares[2] - 1]
         for column, value in zip("RSTUVW", expected):  # Cobb-Douglas demand elasticities
-            self.assert_close(get_cell(SHEET, "%s28" % column), value, FORMULA_TOLERANCE, "demand " + column)
-        self.assert_close(get_cell(SHEET, "R29"), 1.0, 1e-10, "Allen from the production model")
-        self.assert_close(get_cell(SHEET, "S29"), 1.0, FORMULA_TOLERANCE, "Morishima from the cost model")
+            self.assert_close(get_cell(CALC.sheet, "%s28" % column), value, FORMULA_TOLERANCE, "demand " + column)
+        self.assert_close(get_cell(CALC.sheet, "R29"), 1.0, 1e-10, "Allen from the production model")
+        self.assert_close(get_cell(CALC.sheet, "S29"), 1.0, FORMULA_TOLERANCE, "Morishima from the cost model")
 
     def test_translog_allen_and_regularity(self):
         rows = dict((label, value) for label, value in TRANSLOG_COST[1:])
@@ -352,22 +343,22 @@ class CostDecisionsTest(CostTestCase):
                 rows["%s*%s" % ((a, b) if i <= j else (b, a))] * lw[j] for j, b in enumerate(LABELS))
                 for i, a in enumerate(LABELS)]
             allen = (rows["labour*machines"] + s[0] * s[1]) / (s[0] * s[1])  # translog Allen, cost-model formula
-            self.assert_close(get_cell(SHEET, "R%d" % (30 + row)), allen, FORMULA_TOLERANCE, "Allen, row %d" % row)
-        self.assertEqual(get_cell(SHEET, "R36"), "regularity")
-        self.assertEqual([get_cell(SHEET, "R%d" % r) for r in range(37, 42)], ["regular"] * 5)
+            self.assert_close(get_cell(CALC.sheet, "R%d" % (30 + row)), allen, FORMULA_TOLERANCE, "Allen, row %d" % row)
+        self.assertEqual(get_cell(CALC.sheet, "R36"), "regularity")
+        self.assertEqual([get_cell(CALC.sheet, "R%d" % r) for r in range(37, 42)], ["regular"] * 5)
 
     def test_bad_input(self):
-        self.assertEqual(get_cell(SHEET, "T36"), "Error: kind: 'cross' is not a kind; use \"demand\", \"allen\" or "
+        self.assertEqual(get_cell(CALC.sheet, "T36"), "Error: kind: 'cross' is not a kind; use \"demand\", \"allen\" or "
                                                  "\"morishima\"")
-        self.assertEqual(get_cell(SHEET, "T37"), "Error: inputs: has 3 columns; with a cost model give the output and "
+        self.assertEqual(get_cell(CALC.sheet, "T37"), "Error: inputs: has 3 columns; with a cost model give the output and "
                                                  "then one price per input (4 columns)")
 
 
 class FunctionWizardTest(unittest.TestCase):
 
     def test_prodcostfit_is_listed_with_its_arguments(self):
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
+        descriptions = CALC.office.service_manager.createInstanceWithContext(
+            "com.sun.star.sheet.FunctionDescriptions", CALC.office.context)
         listed = {}
         for i in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}

@@ -63,16 +63,7 @@ def prepare(sheet):
 
 
 CALC = module_session(prepare)
-
-
-def setUpModule():
-    global SHEET, DOC, OFFICE
-    CALC.start()
-    SHEET, DOC, OFFICE = CALC.sheet, CALC.doc, CALC.office
-
-
-def tearDownModule():
-    CALC.stop()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def formula(returns, orientation, what, names=""):
@@ -113,12 +104,12 @@ class ScoresTest(EnvelopeTestCase):
         for key, index in cls.columns.items():
             cells = "%s1:%s%d" % (cls.letter(index), cls.letter(index), LAST)
             if key == "scale":
-                set_array_formula(SHEET, cells, formula("constant", "output", "scale efficiency"))
+                set_array_formula(CALC.sheet, cells, formula("constant", "output", "scale efficiency"))
             elif key == "target":
-                set_array_formula(SHEET, cells, formula("variable", "input", "target Nurses"))
+                set_array_formula(CALC.sheet, cells, formula("variable", "input", "target Nurses"))
             else:
-                set_array_formula(SHEET, cells, formula(key[0], key[1], "score"))
-        recalc(DOC)
+                set_array_formula(CALC.sheet, cells, formula(key[0], key[1], "score"))
+        recalc(CALC.doc)
 
     @staticmethod
     def letter(index):
@@ -126,7 +117,7 @@ class ScoresTest(EnvelopeTestCase):
 
     def result(self, key):
         index = self.columns[key]
-        return [row[0] for row in get_range(SHEET, "%s1:%s%d" % (self.letter(index), self.letter(index), LAST))]
+        return [row[0] for row in get_range(CALC.sheet, "%s1:%s%d" % (self.letter(index), self.letter(index), LAST))]
 
     def test_headers(self):
         self.assertEqual(self.result(("constant", "input"))[0], "efficiency")
@@ -166,10 +157,10 @@ class PeersTest(EnvelopeTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "P1:P%d" % LAST, formula("variable", "input", "peers", ";A1:A%d" % LAST))
-        set_formula(SHEET, "R1", '=COUNTIF(P2:P%d;"*(1)")' % LAST)
-        recalc(DOC)
-        cls.peers = [row[0] for row in get_range(SHEET, "P1:P%d" % LAST)]
+        set_array_formula(CALC.sheet, "P1:P%d" % LAST, formula("variable", "input", "peers", ";A1:A%d" % LAST))
+        set_formula(CALC.sheet, "R1", '=COUNTIF(P2:P%d;"*(1)")' % LAST)
+        recalc(CALC.doc)
+        cls.peers = [row[0] for row in get_range(CALC.sheet, "P1:P%d" % LAST)]
 
     def test_peer_names_and_weights_agree_with_scipy_linprog(self):
         self.assertEqual(self.peers[0], "peers")
@@ -189,7 +180,7 @@ class PeersTest(EnvelopeTestCase):
         efficient = [text for text in self.peers[1:] if text.endswith("(1)")]
         self.assertTrue(efficient, "no agency with weight 1 on one peer")
         # COUNTIF finds the texts of a string array result (DEVELOPERS.md, "Texts in array results").
-        self.assertEqual(get_cell(SHEET, "R1"), float(len(efficient)))
+        self.assertEqual(get_cell(CALC.sheet, "R1"), float(len(efficient)))
 
     @staticmethod
     def parse(text):
@@ -203,12 +194,12 @@ class PeersTest(EnvelopeTestCase):
 class BadInputTest(EnvelopeTestCase):
 
     def test_text_in_inputs_names_the_row(self):
-        set_values(SHEET, "A40", [["visits", "nurses"], [1200, 14], [900, "n/a"], [1500, 18]])
-        set_formula(SHEET, "D40", "=PRODENVELOPE(A40:A43;B40:B43)")
-        set_formula(SHEET, "D41", '=PRODENVELOPE(A40:A43;A40:A43;"increasing")')
-        recalc(DOC)
-        self.assertEqual(get_cell(SHEET, "D40"), "Error: inputs: row 3 holds text 'n/a'; every cell must hold a number")
-        self.assertEqual(get_cell(SHEET, "D41"),
+        set_values(CALC.sheet, "A40", [["visits", "nurses"], [1200, 14], [900, "n/a"], [1500, 18]])
+        set_formula(CALC.sheet, "D40", "=PRODENVELOPE(A40:A43;B40:B43)")
+        set_formula(CALC.sheet, "D41", '=PRODENVELOPE(A40:A43;A40:A43;"increasing")')
+        recalc(CALC.doc)
+        self.assertEqual(get_cell(CALC.sheet, "D40"), "Error: inputs: row 3 holds text 'n/a'; every cell must hold a number")
+        self.assertEqual(get_cell(CALC.sheet, "D41"),
                          "Error: returns: 'increasing' is not a kind of returns to scale; use \"constant\", "
                          "\"variable\" or \"non-increasing\"")
 
@@ -216,8 +207,8 @@ class BadInputTest(EnvelopeTestCase):
 class FunctionWizardTest(unittest.TestCase):
 
     def test_prodenvelope_is_listed_with_its_arguments(self):
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
+        descriptions = CALC.office.service_manager.createInstanceWithContext(
+            "com.sun.star.sheet.FunctionDescriptions", CALC.office.context)
         listed = {}
         for i in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}

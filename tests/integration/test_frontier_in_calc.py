@@ -67,16 +67,7 @@ def prepare(sheet):
 
 
 CALC = module_session(prepare)
-
-
-def setUpModule():
-    global SHEET, DOC, OFFICE
-    CALC.start()
-    SHEET, DOC, OFFICE = CALC.sheet, CALC.doc, CALC.office
-
-
-def tearDownModule():
-    CALC.stop()
+setUpModule, tearDownModule = CALC.start, CALC.stop
 
 
 def design_and_response(data):
@@ -98,13 +89,13 @@ class FrontierTableTest(FrontierTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "E1:K18", "=PRODFRONTIER(A1:A81;B1:C81)")
-        set_array_formula(SHEET, "E21:K38", '=PRODFRONTIER(Z1:Z81;AA1:AB81;;"exponential")')
-        set_array_formula(SHEET, "E41:K58", "=PRODFRONTIER(A101:A141;B101:C141)")
-        recalc(DOC)
-        cls.table = get_range(SHEET, "E1:K18")
-        cls.exponential = get_range(SHEET, "E21:K38")
-        cls.wrong = get_range(SHEET, "E41:K58")
+        set_array_formula(CALC.sheet, "E1:K18", "=PRODFRONTIER(A1:A81;B1:C81)")
+        set_array_formula(CALC.sheet, "E21:K38", '=PRODFRONTIER(Z1:Z81;AA1:AB81;;"exponential")')
+        set_array_formula(CALC.sheet, "E41:K58", "=PRODFRONTIER(A101:A141;B101:C141)")
+        recalc(CALC.doc)
+        cls.table = get_range(CALC.sheet, "E1:K18")
+        cls.exponential = get_range(CALC.sheet, "E21:K38")
+        cls.wrong = get_range(CALC.sheet, "E41:K58")
 
     def test_layout(self):
         self.assertEqual(self.table[0], ["half-normal frontier", "value", "std. error", "t", "p-value",
@@ -164,17 +155,17 @@ class EfficiencyTest(FrontierTestCase):
 
     @classmethod
     def setUpClass(cls):
-        set_array_formula(SHEET, "M1:S18", "=PRODFRONTIER(A1:A81;B1:C81)")
-        set_array_formula(SHEET, "U1:U81", "=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81)")
-        set_array_formula(SHEET, "V1:V81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"lower bound")')
-        set_array_formula(SHEET, "W1:W81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"upper bound")')
-        set_array_formula(SHEET, "X2", "=PRODEFFICIENCY($M$1:$S$18;A2;B2:C2)")
-        recalc(DOC)
+        set_array_formula(CALC.sheet, "M1:S18", "=PRODFRONTIER(A1:A81;B1:C81)")
+        set_array_formula(CALC.sheet, "U1:U81", "=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81)")
+        set_array_formula(CALC.sheet, "V1:V81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"lower bound")')
+        set_array_formula(CALC.sheet, "W1:W81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"upper bound")')
+        set_array_formula(CALC.sheet, "X2", "=PRODEFFICIENCY($M$1:$S$18;A2;B2:C2)")
+        recalc(CALC.doc)
 
     def test_efficiency_column_against_the_formula(self):
         import numpy as np
         from scipy import special
-        table = get_range(SHEET, "M1:S18")
+        table = get_range(CALC.sheet, "M1:S18")
         b = np.array([table[1][1], table[2][1], table[3][1]])
         sv, su = table[5][1], table[6][1]
         design, response = design_and_response(DATA)
@@ -182,43 +173,43 @@ class EfficiencyTest(FrontierTestCase):
         s2 = sv * sv + su * su
         mu, s = -e * su * su / s2, su * sv / math.sqrt(s2)
         expected = np.exp(-mu + 0.5 * s * s + special.log_ndtr(mu / s - s) - special.log_ndtr(mu / s))
-        column = get_range(SHEET, "U1:W81")
+        column = get_range(CALC.sheet, "U1:W81")
         self.assertEqual(column[0], ["efficiency", "efficiency lower bound", "efficiency upper bound"])
         for row in range(ROWS):
             self.assert_close(column[row + 1][0], float(expected[row]), FORMULA_TOLERANCE, "row %d" % row)  # efficiency formula
             self.assertLessEqual(column[row + 1][1], column[row + 1][0])
             self.assertLessEqual(column[row + 1][0], column[row + 1][2])
-        self.assert_close(get_cell(SHEET, "X2"), float(expected[0]), FORMULA_TOLERANCE, "single row")
+        self.assert_close(get_cell(CALC.sheet, "X2"), float(expected[0]), FORMULA_TOLERANCE, "single row")
 
 
 class FrontierBadInputTest(FrontierTestCase):
 
     def test_messages_name_argument_and_row(self):
-        set_values(SHEET, "A201", [["bottles"] + LABELS] + [row[:] for row in DATA[:20]])
-        set_values(SHEET, "A205", [[0.0]])
-        set_values(SHEET, "A231", [["bottles"] + LABELS] + [[row[0], row[1], 0.0] for row in DATA[:20]])
-        set_array_formula(SHEET, "E201:K218", "=PRODFRONTIER(A201:A221;B201:C221)")
-        set_array_formula(SHEET, "E231:K248", "=PRODFRONTIER(A231:A251;B231:C251)")
-        set_array_formula(SHEET, "E261:K278", "=PRODFRONTIER(A1:A5;B1:C5)")
-        set_array_formula(SHEET, "E281:K298", '=PRODFRONTIER(A1:A81;B1:C81;"ces")')
-        set_array_formula(SHEET, "E301:E310", "=PRODEFFICIENCY(A1:C10;A1:A10;B1:C10)")
-        recalc(DOC)
-        self.assertEqual(get_cell(SHEET, "E201"), "Error: output: row 5 is 0; logs need positive values")
-        self.assertEqual(get_cell(SHEET, "E231"), "Error: inputs: row 2, column 2 is 0; logs need positive values")
-        self.assertEqual(get_cell(SHEET, "E261"),
+        set_values(CALC.sheet, "A201", [["bottles"] + LABELS] + [row[:] for row in DATA[:20]])
+        set_values(CALC.sheet, "A205", [[0.0]])
+        set_values(CALC.sheet, "A231", [["bottles"] + LABELS] + [[row[0], row[1], 0.0] for row in DATA[:20]])
+        set_array_formula(CALC.sheet, "E201:K218", "=PRODFRONTIER(A201:A221;B201:C221)")
+        set_array_formula(CALC.sheet, "E231:K248", "=PRODFRONTIER(A231:A251;B231:C251)")
+        set_array_formula(CALC.sheet, "E261:K278", "=PRODFRONTIER(A1:A5;B1:C5)")
+        set_array_formula(CALC.sheet, "E281:K298", '=PRODFRONTIER(A1:A81;B1:C81;"ces")')
+        set_array_formula(CALC.sheet, "E301:E310", "=PRODEFFICIENCY(A1:C10;A1:A10;B1:C10)")
+        recalc(CALC.doc)
+        self.assertEqual(get_cell(CALC.sheet, "E201"), "Error: output: row 5 is 0; logs need positive values")
+        self.assertEqual(get_cell(CALC.sheet, "E231"), "Error: inputs: row 2, column 2 is 0; logs need positive values")
+        self.assertEqual(get_cell(CALC.sheet, "E261"),
                          "Error: too few rows: output and inputs have 4 rows of data for 5 parameters of the frontier "
                          "(with noise SD and inefficiency SD); need at least 6")
-        self.assertEqual(get_cell(SHEET, "E281"),
+        self.assertEqual(get_cell(CALC.sheet, "E281"),
                          'Error: form: a frontier takes "cobb-douglas" or "translog"; the ces form is not offered')
-        self.assertTrue(get_cell(SHEET, "E301").startswith("Error: model: is not a PRODFRONTIER table"))
-        self.assertTrue(OFFICE.alive(), "the office stopped answering after the error cases")
+        self.assertTrue(get_cell(CALC.sheet, "E301").startswith("Error: model: is not a PRODFRONTIER table"))
+        self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
 
 class FunctionWizardTest(unittest.TestCase):
 
     def test_frontier_functions_are_listed_with_their_arguments(self):
-        descriptions = OFFICE.service_manager.createInstanceWithContext(
-            "com.sun.star.sheet.FunctionDescriptions", OFFICE.context)
+        descriptions = CALC.office.service_manager.createInstanceWithContext(
+            "com.sun.star.sheet.FunctionDescriptions", CALC.office.context)
         listed = {}
         for i in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}

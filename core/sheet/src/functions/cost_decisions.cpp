@@ -11,6 +11,7 @@
 #include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/models/production_model.hpp"
 #include "isoquant/math/forms/substitution_elasticity.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -37,44 +38,19 @@ Eigen::VectorXd fittedShares(const CostModel& cost, double output, const Eigen::
     return cost.prices + cost.priceInteractions * logPrices + cost.priceOutput * std::log(output);
 }
 
-std::string listedPositions(const std::vector<std::string>& labels)
-{
-    std::string known;
-    for (const auto& label : labels) known += (known.empty() ? "" : ", ") + quoted(label);
-    return known;
-}
-
 // An input of a cost model by its number or its price row's label (as readInputSelector).
 Eigen::Index readPriceSelector(const Cell& selector, const CostModel& cost, const std::string& argument)
 {
-    const auto k = static_cast<Eigen::Index>(cost.priceLabels.size());
-    if (isNumber(selector)) {
-        const double position = std::get<double>(selector);
-        if (position >= 1 && position <= static_cast<double>(k) && position == std::floor(position))
-            return static_cast<Eigen::Index>(position) - 1;
-        throw InputError(argument + ": " + formatNumber(position) + " is not an input number; the model has " +
-                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
-    }
-    if (isText(selector)) {
-        const std::string& wanted = std::get<std::string>(selector);
-        for (Eigen::Index i = 0; i < k; ++i)
-            if (equalsIgnoringCase(wanted, cost.priceLabels[static_cast<std::size_t>(i)])) return i;
-        throw InputError(argument + ": " + quoted(wanted) + " is not an input of the model; its inputs are " +
-                         listedPositions(cost.priceLabels));
-    }
-    throw InputError(argument + ": give the input's number (1 for the first) or its label");
+    return readLabelSelector(selector, cost.priceLabels, argument);
 }
 
 PriceElasticityKind readPriceElasticityKind(const Cell& cell)
 {
-    if (isOmitted(cell)) return PriceElasticityKind::demand;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "demand")) return PriceElasticityKind::demand;
-        if (equalsIgnoringCase(word, "allen")) return PriceElasticityKind::allen;
-        if (equalsIgnoringCase(word, "morishima")) return PriceElasticityKind::morishima;
-    }
-    throw InputError("kind: " + describe(cell) + " is not a kind; use \"demand\", \"allen\" or \"morishima\"");
+    return readChoice<PriceElasticityKind>(cell, "kind", "a kind",
+                                           {{"demand", PriceElasticityKind::demand},
+                                            {"allen", PriceElasticityKind::allen},
+                                            {"morishima", PriceElasticityKind::morishima}},
+                                           PriceElasticityKind::demand);
 }
 
 CellTable rowTable(const Eigen::VectorXd& values)

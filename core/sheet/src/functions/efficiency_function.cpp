@@ -4,6 +4,7 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/models/frontier_model.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -17,17 +18,12 @@ enum class EfficiencyMeasure { efficiency, inefficiency, lowerBound, upperBound 
 
 EfficiencyMeasure readWhatArgument(const Cell& cell)
 {
-    if (isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty())) return EfficiencyMeasure::efficiency;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "efficiency")) return EfficiencyMeasure::efficiency;
-        if (equalsIgnoringCase(word, "inefficiency")) return EfficiencyMeasure::inefficiency;
-        if (equalsIgnoringCase(word, "lower bound")) return EfficiencyMeasure::lowerBound;
-        if (equalsIgnoringCase(word, "upper bound")) return EfficiencyMeasure::upperBound;
-    }
-    const std::string shown = isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-    throw InputError("what: " + shown +
-                     " is not a measure; use \"efficiency\", \"inefficiency\", \"lower bound\" or \"upper bound\"");
+    return readChoice<EfficiencyMeasure>(cell, "what", "a measure",
+                                         {{"efficiency", EfficiencyMeasure::efficiency},
+                                          {"inefficiency", EfficiencyMeasure::inefficiency},
+                                          {"lower bound", EfficiencyMeasure::lowerBound},
+                                          {"upper bound", EfficiencyMeasure::upperBound}},
+                                         EfficiencyMeasure::efficiency);
 }
 
 const char* measureTitle(EfficiencyMeasure measure)

@@ -18,15 +18,10 @@ namespace {
 
 InefficiencyDistribution readInefficiencyArgument(const Cell& cell)
 {
-    if (isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()))
-        return InefficiencyDistribution::halfNormal;
-    if (isText(cell)) {
-        const std::string& word = std::get<std::string>(cell);
-        if (equalsIgnoringCase(word, "half-normal")) return InefficiencyDistribution::halfNormal;
-        if (equalsIgnoringCase(word, "exponential")) return InefficiencyDistribution::exponential;
-    }
-    const std::string shown = isText(cell) ? quoted(std::get<std::string>(cell)) : formatNumber(std::get<double>(cell));
-    throw InputError("inefficiency: " + shown + " is not a distribution; use \"half-normal\" or \"exponential\"");
+    return readChoice<InefficiencyDistribution>(cell, "inefficiency", "a distribution",
+                                                {{"half-normal", InefficiencyDistribution::halfNormal},
+                                                 {"exponential", InefficiencyDistribution::exponential}},
+                                                InefficiencyDistribution::halfNormal);
 }
 
 ProductionForm readFrontierForm(const Cell& cell)

@@ -286,25 +286,30 @@ ProductionModel readProductionModel(const CellTable& range)
     return model;
 }
 
-Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& model, const std::string& argument)
+Eigen::Index readLabelSelector(const Cell& selector, const std::vector<std::string>& labels, const std::string& argument)
 {
-    const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
+    const auto k = static_cast<Eigen::Index>(labels.size());
     if (isNumber(selector)) {
         const double position = std::get<double>(selector);
         if (position >= 1 && position <= static_cast<double>(k) && position == std::floor(position))
             return static_cast<Eigen::Index>(position) - 1;
         throw InputError(argument + ": " + formatNumber(position) + " is not an input number; the model has " +
-                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
+                         plural(labels.size(), "input"));
     }
     if (isText(selector)) {
         const std::string& wanted = std::get<std::string>(selector);
         for (Eigen::Index i = 0; i < k; ++i)
-            if (equalsIgnoringCase(wanted, model.inputLabels[static_cast<std::size_t>(i)])) return i;
+            if (equalsIgnoringCase(wanted, labels[static_cast<std::size_t>(i)])) return i;
         std::string known;
-        for (const auto& label : model.inputLabels) known += (known.empty() ? "" : ", ") + quoted(label);
+        for (const auto& label : labels) known += (known.empty() ? "" : ", ") + quoted(label);
         throw InputError(argument + ": " + quoted(wanted) + " is not an input of the model; its inputs are " + known);
     }
     throw InputError(argument + ": give the input's number (1 for the first) or its label");
+}
+
+Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& model, const std::string& argument)
+{
+    return readLabelSelector(selector, model.inputLabels, argument);
 }
 
 std::string returnsVerdict(const ProductionModel& model, double level)

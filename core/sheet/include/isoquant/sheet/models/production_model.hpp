@@ -69,6 +69,8 @@ ProductionModel readProductionModel(const CellTable& range);
 
 // Position (0-based) of the input a user named by 1-based number or by label.
 Eigen::Index readInputSelector(const Cell& selector, const ProductionModel& model, const std::string& argument);
+// The same over any list of input labels (a cost model's price rows, say).
+Eigen::Index readLabelSelector(const Cell& selector, const std::vector<std::string>& labels, const std::string& argument);
 
 // "increasing", "constant", "decreasing" or "constant (imposed)": by the Wald test at
 // α = 1 − level when the model carries one, else by ν alone.
