@@ -16,7 +16,7 @@ Sources of the expected figures, named beside each check in those modules:
   the libraries cannot be imported.
 - "function formula": Y = exp(ln A) * prod x_i^b_i, MP_i = b_i * Y / x_i, elasticity b_i,
   returns to scale = sum of b_i, computed from the table's own numbers (1e-12 relative).
-- Error messages: the wording in core/src/*.cpp, which the add-in prefixes with "Error: ".
+- Error messages: the wording in core/sheet/src/ and core/math/src/, which the add-in prefixes with "Error: ".
 """
 
 import math
@@ -59,7 +59,7 @@ def state_panel_data():
 
 
 def layout(input_labels, verdict, control_labels=(), imposed=False, note=""):
-    """The PRODFIT table expected by core/include/isoquant/fit_table.hpp: each cell a text (blank
+    """The PRODFIT table expected by core/sheet/include/isoquant/sheet/tables/fit_table.hpp: each cell a text (blank
     cells are formula results "" in Calc) or NUMBER."""
     blank = [""] * 5
     rows = [list(HEADER), ["ln A"] + [NUMBER] * 6]

@@ -13,7 +13,7 @@ Sources of the expected figures, named beside each check:
   unrestricted fit's figures listed in tests/data/README.md (R 4.2.2 lm), to the digits printed.
 - "same sheet": a cell compared with another cell of the same fit (PRODSTAT against the table).
 - "Cobb-Douglas calculus": MP_L = b_L * Y / L from the table's own numbers (1e-12 relative).
-- Error messages: the wording in core/src/*.cpp, prefixed "Error: " by the add-in.
+- Error messages: the wording in core/sheet/src/ and core/math/src/, prefixed "Error: " by the add-in.
 - "ces profit formula": y* = (nu*p/c)^(nu/(1-nu)) with the textbook ces unit cost
   c = A^(-1/nu) * (d^s w1^(1-s) + (1-d)^s w2^(1-s))^(1/(1-s)), s = 1/(1+rho), computed here.
 """

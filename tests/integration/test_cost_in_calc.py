@@ -28,7 +28,7 @@ Formula recomputations agree to 1e-12 relative (the same logs and exponentials i
 - "numpy SUR": tests/reference/cost_sur_check.py's own restricted iterated SUR (numpy, restrictions
   through the bordered normal equations, in the unnormalised parameters), run here on the sheet's
   data; both iterations stop at 1e-10 relative change, so 1e-7 relative (as the C++ cross-check).
-- Error messages: the wording in core/src/cost_cell_functions.cpp and numeric_range.cpp, which the
+- Error messages: the wording in core/sheet/src/functions/cost_functions.cpp and numeric_range.cpp, which the
   add-in prefixes with "Error: ".
 """
 

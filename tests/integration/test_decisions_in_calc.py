@@ -21,7 +21,7 @@ Sources of the expected figures, named beside each check:
 - "first-order conditions": p*f_i = w_i at the profit maximum; MRTS = w1/w2 at the least-cost bundle.
 Formula recomputations agree to 1e-12 relative (the same powers and products in another order);
 isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the issue's rule).
-- Error messages: the wording in core/src/decision_arguments.cpp, decision_cell_functions.cpp,
+- Error messages: the wording in core/sheet/src/arguments/decision_arguments.cpp, decision_cell_functions.cpp,
   homogeneous_cost.cpp and production_model.cpp, which the add-in prefixes with "Error: ".
 """
 
@@ -95,7 +95,7 @@ class CurvatureTest(CalcTestCase):
         recalc(CALC.doc)
 
     def test_each_result_has_its_own_header_cell(self):
-        # the words of core/src/decision_cell_functions.cpp
+        # the words of core/sheet/src/functions/decision_functions.cpp
         self.assertEqual(get_range(CALC.sheet, "J1:R1")[0],
                          ["second derivative in bakers", "cross derivative in bakers and ovens", "returns to bakers",
                           "returns to ovens", "bakers with ovens", "MRTS of bakers for ovens",

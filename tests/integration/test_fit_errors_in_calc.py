@@ -67,7 +67,7 @@ CD_ROW_LIST = ("'ln A', 'L', 'C', 'observations', 'R2', 'adjusted R2', 'residual
 LEVEL_HINT = "is not a confidence level; give a number between 0 and 1, such as 0.95"
 
 # (what, change of a copy of the data or None, formula, entered as, message) -- each message as
-# written in core/src/*.cpp, which name the argument and the row (counting a header row).
+# written in core/sheet/src/ and core/math/src/, which name the argument and the row (counting a header row).
 # Placeholders: {out} and {inp} are the case's own copy of P and L, C (header in the first row);
 # {inp_short} lacks the last row, {inp_bare_short} lacks the header and the last row, {out2} is
 # P and L; the rest are in BASE.

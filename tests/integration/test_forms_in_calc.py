@@ -14,7 +14,7 @@ beside each check:
   tests/unit/test_forms_cross_check.cpp, where they are justified.
 - "function formula": the CES and translog formulas evaluated here from the table's own numbers
   (1e-12 relative: the same expression in another order).
-- Error messages: the wording in core/src/*.cpp, which the add-in prefixes with "Error: ".
+- Error messages: the wording in core/sheet/src/ and core/math/src/, which the add-in prefixes with "Error: ".
 - "invented": seeded data made here (invented_rows) to reach a ces boundary and a fit that is not
   identified; the checks there are the words of the report, not figures.
 """
@@ -106,7 +106,7 @@ class CesTest(FormsTestCase):
         cls.data = read_columns("cobb_douglas_1928.csv", ["P", "L", "C"])
         cls.sheet = CALC.new_sheet("Ces")
         write_columns(cls.sheet, "A1", cls.data, ["P", "L", "C"])
-        # The ces table is always 20 x 7 (core/include/isoquant/form_tables.hpp).
+        # The ces table is always 20 x 7 (core/sheet/include/isoquant/sheet/tables/form_tables.hpp).
         set_array_formula(cls.sheet, "F1:L20", '=PRODFIT(A1:A25;B1:C25;"ces")')
         for column, formula in zip("NOPQR", ['PRODOUTPUT($F$1:$L$20;B{r}:C{r})',
                                              'PRODMARGINAL($F$1:$L$20;B{r}:C{r};"L")',
@@ -345,7 +345,7 @@ def near_fixed_proportions(x1, x2):
 
 class CesWithoutTestTest(FormsTestCase):
     """Where the ces fit has no test of nu = 1, its verdict and PRODRETURNS say so; a constant
-    input is refused as Cobb-Douglas refuses it. Expected words: core/src/ces_inference.cpp,
+    input is refused as Cobb-Douglas refuses it. Expected words: core/math/src/fits/ces_inference.cpp,
     ces_table.cpp and production_fit.cpp."""
 
     @classmethod

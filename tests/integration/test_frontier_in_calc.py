@@ -22,7 +22,7 @@ Sources of the expected figures, named beside each check:
 - "efficiency formula": E[exp(-u)|e] = exp(-mu + s^2/2) Phi(mu/s - s) / Phi(mu/s) with
   mu = -e su^2/(su^2 + sv^2), s = su sv / sqrt(su^2 + sv^2) (Battese and Coelli 1988) from the table's
   own cells, by scipy.special.log_ndtr: 1e-12 relative (the same formula in another order).
-- Error messages: the wording in core/src/numeric_range.cpp and
+- Error messages: the wording in core/sheet/src/arguments/numeric_range.cpp and
   core/sheet/src/functions/frontier_functions.cpp, which the add-in prefixes with "Error: ".
 """
 

@@ -9,7 +9,7 @@ tile plant (output in thousand square metres; labour, kiln capital and energy; t
 the three from its books), the scenario of the README's worked example.
 
 Sources of the expected figures, named beside each check:
-- "formula": the definitions in core/include/isoquant/growth_accounting.hpp and index_numbers.hpp
+- "formula": the definitions in core/math/include/isoquant/math/growth/growth_accounting.hpp and index_numbers.hpp
   (those of the issue), recomputed here in Python from the sheet's own numbers. Agreement to 1e-12
   (absolute for log growth, which may be near 0; relative for index values): the same few
   operations on numbers of order 1 in double precision, in another order.
@@ -22,7 +22,7 @@ Sources of the expected figures, named beside each check:
   revisited", Journal of Productivity Analysis 3, 211–248: the identity test (constant quantities
   give a constant index) and proportionality (from memory).
 - "Fisher (1922)": the Fisher index is the geometric mean of Laspeyres and Paasche (from memory).
-- Error messages: the wording in core/src/period_range.cpp and core/src/growth_cell_functions.cpp,
+- Error messages: the wording in core/sheet/src/arguments/period_range.cpp and core/sheet/src/functions/growth_functions.cpp,
   which the add-in prefixes with "Error: ".
 The reference-library recomputation (numpy) of these functions is the CTest pair
 numpy_growth_figures / numpy_growth_cross_check.
@@ -128,7 +128,7 @@ class GrowthTableTest(GrowthTestCase):
 
     @classmethod
     def setUpClass(cls):
-        # 8 periods, 3 inputs: 8 + 1 rows, 3 + 4 columns (core/include/isoquant/growth_table.hpp).
+        # 8 periods, 3 inputs: 8 + 1 rows, 3 + 4 columns (core/sheet/include/isoquant/sheet/tables/growth_table.hpp).
         set_array_formula(CALC.sheet, "J1:P9", "=PRODGROWTH(B1:B9;C1:E9;F1:H9)")
         set_array_formula(CALC.sheet, "J11:P19", '=PRODGROWTH(B1:B9;C1:E9;F1:H9;"tornqvist")')
         set_values(CALC.sheet, "R1", [["form", "cobb-douglas"], ["A", 2.5], ["labour", 0.55], ["capital", 0.3],

@@ -123,7 +123,7 @@ class MillionRows(unittest.TestCase):
                              "Error: inputs: row 777778, column 1 holds text 'n/a'; every cell must hold a number")
             self.assertTrue(office.alive())
 
-            # Beyond the cap on work per call (core/include/isoquant/work_limits.hpp): a message,
+            # Beyond the cap on work per call (core/math/include/isoquant/math/numerics/work_limits.hpp): a message,
             # before any copy of the range is made.
             doc.Sheets.insertNewByName("empty", 1)
             empty = doc.Sheets.getByName("empty")

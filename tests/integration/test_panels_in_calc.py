@@ -18,7 +18,7 @@ One office serves the whole module. Sources of the expected figures, named besid
   left out of the factor (README, "Estimation options").
 - "function formula": Y = exp(ln A) * prod x_i^b_i and the smearing factor times it, computed here
   from the table's own numbers (1e-12 relative).
-- Error messages: the wording in core/src/*.cpp, prefixed "Error: " by the add-in.
+- Error messages: the wording in core/sheet/src/ and core/math/src/, prefixed "Error: " by the add-in.
 """
 
 import math

@@ -16,7 +16,7 @@ Sources of the expected values, named beside each check:
 - "Cobb-Douglas calculus": with Y = A * x1^a * x2^b and a, b > 0: f_i > 0 and the isoquants are
   convex at every positive bundle (regular); f_ii = a(a - 1)Y/x_i^2 < 0 for a < 1 (diminishing);
   f_12 = a*b*Y/(x1*x2) > 0 (complements).
-- Messages: the wording in core/src/decision_cell_functions.cpp and decision_arguments.cpp, which the
+- Messages: the wording in core/sheet/src/functions/decision_functions.cpp and decision_arguments.cpp, which the
   add-in prefixes with "Error: ".
 - The issue's own statement of which Function Wizard arguments are required and of their names.
 """
@@ -86,7 +86,7 @@ class TextsOfArrayResultsTest(unittest.TestCase):
         self.check_column('=PRODPAIR($A$1:$B$4;G2:H41;"bakers";"ovens")', "complements", "M")
 
     def test_messages_compare(self):
-        # The message wording of core/src/decision_arguments.cpp, prefixed with "Error: ".
+        # The message wording of core/sheet/src/arguments/decision_arguments.cpp, prefixed with "Error: ".
         message = "Error: input prices: the price of input 2 is 0; prices must be positive"
         set_values(CALC.sheet, "D6", [[18.0, 0.0]])
         set_array_formula(CALC.sheet, "N2:O2", "=PRODLEASTCOST($A$1:$B$4;1500;D6:E6)")

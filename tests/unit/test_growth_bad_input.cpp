@@ -1,6 +1,6 @@
 // Bad input to PRODGROWTH, PRODINDEX and PRODTFP gets an InputError whose message names the
 // argument and the period (with its row in the selection, header included) or the row; the exact
-// wording is that of core/src/period_range.cpp and core/src/growth_cell_functions.cpp. The data
+// wording is that of core/sheet/src/arguments/period_range.cpp and core/sheet/src/functions/growth_functions.cpp. The data
 // are small invented ranges with one cell, shape or option spoiled.
 #include "isoquant/sheet/functions/growth_functions.hpp"
 #include "cell_tables.hpp"

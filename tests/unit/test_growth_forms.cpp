@@ -192,7 +192,7 @@ BOOST_AUTO_TEST_CASE(translog_fit_productivity_has_geometric_mean_one)
 // is 0 and the geometric mean is 1 to the fit's convergence. Invented plants (seeded) from
 // CesTestTechnology with noise of SD 0.05 on ln Y. Tolerance 1e-9 on the mean of ln TFP: the fit
 // ends with Gauss–Newton steps that bring the estimates to within about 2e-10 of the optimum
-// (core/src/ces_fit.cpp), and the mean residual moves by at most that much per unit of parameter
+// (core/math/src/fits/ces_fit.cpp), and the mean residual moves by at most that much per unit of parameter
 // (its derivatives in ln A, δ, ρ and ν are of order 1 here).
 BOOST_AUTO_TEST_CASE(ces_fit_productivity_has_geometric_mean_one)
 {
