@@ -86,10 +86,21 @@ def summarise_efficiency(doc, name):
         print("  -> lowest %s: %s" % (label, ", ".join("%s %.3f" % (row[0], row[column]) for row in lowest)))
 
 
+def summarise_costs(doc, name):
+    table = {row[0]: row[1:] for row in named_range(doc, "cost_function").getDataArray()}
+    scale = {row[0]: row[1] for row in named_range(doc, "efficient_scale").getDataArray()}
+    print("\n%s: cost function from the books" % name)
+    print("  -> cost elasticity %.3f (SE %.3f), returns to scale %.3f: %s" % (
+        table["cost elasticity"][0], table["cost elasticity"][1], table["returns to scale"][0],
+        table["verdict"][0]))
+    print("  -> efficient scale %s thousand loads at typical prices, where a load costs %s EUR" % (
+        show(scale["efficient scale (thousand loads)"]), show(scale["average cost there (EUR a load)"])))
+
+
 # One summary per named table a workbook carries.
 SUMMARIES = {"fitted_technology": summarise_fit, "form_comparison": summarise_comparison,
              "growth_accounting": summarise_growth, "least_cost_plan": summarise_plan,
-             "efficiency_frontier": summarise_efficiency}
+             "efficiency_frontier": summarise_efficiency, "cost_function": summarise_costs}
 
 
 def summarise(doc, name):
