@@ -38,7 +38,7 @@ double twoSidedNormalPValue(double z)
     return 2.0 * std::exp(logNormalCdf(-std::fabs(z)));
 }
 
-FrontierEstimate normalEstimate(double estimate, double standardError, double critical)
+ParameterEstimate normalEstimate(double estimate, double standardError, double critical)
 {
     const double z = estimate / standardError;
     return {estimate, standardError, z, twoSidedNormalPValue(z), estimate - critical * standardError,
@@ -46,7 +46,7 @@ FrontierEstimate normalEstimate(double estimate, double standardError, double cr
 }
 
 // σ = exp(s) with s estimated: se(σ) = σ·se(s), bounds exp(s ± z·se(s)).
-FrontierEstimate scaleEstimate(double logValue, double logStandardError, double critical)
+ParameterEstimate scaleEstimate(double logValue, double logStandardError, double critical)
 {
     const double value = std::exp(logValue);
     const double nan = std::nan("");
@@ -92,8 +92,8 @@ void setInference(ProductionFrontier& frontier, const Eigen::MatrixXd& logInputs
     const double nu = gradient.dot(fit.coefficients);
     const double se = std::sqrt(gradient.dot(v.topLeftCorner(p, p) * gradient));
     frontier.returns = normalEstimate(nu, se, critical);
-    frontier.returns.statistic = (nu - 1) / se;
-    frontier.returns.pValue = twoSidedNormalPValue(frontier.returns.statistic);
+    frontier.returns.tStatistic = (nu - 1) / se;
+    frontier.returns.pValue = twoSidedNormalPValue(frontier.returns.tStatistic);
     frontier.verdict = classifyReturnsToScale(nu, frontier.returns.pValue, frontier.confidenceLevel, false);
 }
 

@@ -11,9 +11,9 @@ namespace isoquant {
 
 namespace {
 
-void estimateRow(TableWriter& writer, const std::string& label, const FrontierEstimate& estimate)
+void estimateRow(TableWriter& writer, const std::string& label, const ParameterEstimate& estimate)
 {
-    writer.put(label, {estimate.estimate, estimate.standardError, estimate.statistic, estimate.pValue,
+    writer.put(label, {estimate.estimate, estimate.standardError, estimate.tStatistic, estimate.pValue,
                        estimate.lowerBound, estimate.upperBound});
 }
 
@@ -86,8 +86,8 @@ CellTable frontierTable(const ProductionFrontier& frontier)
     const double statistic = inefficiencyTestStatistic(fit);
     writer.put(inefficiencyTestLabel, {Cell{}, Cell{}, statistic, inefficiencyTestPValue(statistic)});
     writer.valueRow(meanEfficiencyLabel, meanEfficiency(fit));
-    const FrontierEstimate& returns = frontier.returns;
-    writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.statistic, returns.pValue});
+    const ParameterEstimate& returns = frontier.returns;
+    writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.tStatistic, returns.pValue});
     writer.textRow(verdictLabel, {frontier.verdict});
     writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
                                       std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});

@@ -3,6 +3,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/math/fits/fit_result.hpp" // ParameterEstimate
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
 #include "isoquant/math/forms/production_form.hpp"
 
@@ -22,30 +23,21 @@ struct FrontierArguments {
     CellTable controls; // empty when omitted
 };
 
-// A parameter's estimate with its standard error, z = estimate / se, two-sided normal p-value
-// and bounds at the confidence level (maximum likelihood inference: normal, not t).
-struct FrontierEstimate {
-    double estimate = 0;
-    double standardError = 0;
-    double statistic = 0;
-    double pValue = 0;
-    double lowerBound = 0;
-    double upperBound = 0;
-};
-
 struct ProductionFrontier {
     ProductionForm form = ProductionForm::cobbDouglas;
     std::vector<std::string> inputLabels;
     std::vector<std::string> controlLabels;
     StochasticFrontierFit fit;
     double confidenceLevel = 0.95;
-    std::vector<FrontierEstimate> coefficients; // in the order of the design's columns
+    // Maximum likelihood inference throughout: the statistic is z = estimate / se, its p-value two-sided
+    // normal, the bounds at the table's level on the normal (not t).
+    std::vector<ParameterEstimate> coefficients; // in the order of the design's columns
     // σᵥ, σᵤ and λ: standard errors by the delta method from ln σ (se(σ) = σ·se(ln σ)), bounds
     // exp(ln σ ± z·se(ln σ)), which stay positive; no test (σᵤ = 0 lies on the boundary: see the
     // inefficiency test).
-    FrontierEstimate noiseSd, inefficiencySd, lambda;
+    ParameterEstimate noiseSd, inefficiencySd, lambda;
     // ν = Σ εᵢ (translog: at the sample means of the logs) with z = (ν − 1)/se and its p-value.
-    FrontierEstimate returns;
+    ParameterEstimate returns;
     std::string verdict;
 };
 
