@@ -1,4 +1,5 @@
 #include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 
 #include "isoquant/sheet/models/cost_model.hpp"
@@ -220,7 +221,7 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
         try {
             column.set(static_cast<std::size_t>(row), 0, costCell(model, outputs.values(row, 0), rowPrices, what).at(0, 0));
         } catch (const InputError& error) {
-            const std::string argument = "target output: ", message = error.what();
+            const std::string argument = "target output: ", message = sheetMessage(error);
             if (message.compare(0, argument.size(), argument) != 0) throw;
             throw InputError(argument + "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
                              ": " + message.substr(argument.size()));

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/growth_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/growth/growth_accounting.hpp"
 #include "isoquant/sheet/tables/growth_table.hpp"
 #include "isoquant/math/growth/index_numbers.hpp"
@@ -79,7 +80,7 @@ ProductionModel readModelArgument(const CellTable& range, const std::string& arg
     try {
         return cachedProductionModel(range);
     } catch (const InputError& error) {
-        const std::string message = error.what();
+        const std::string message = sheetMessage(error);
         const std::string prefix = "model:";
         if (argument != "model" && message.rfind(prefix, 0) == 0)
             throw InputError(argument + ":" + message.substr(prefix.size()));
