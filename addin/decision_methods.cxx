@@ -21,7 +21,7 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(leastCostRowWithBounds(*models_.cells(model, "model"),
+        return orientedLike(leastCostRowWithBounds(models_.table(model, "model"),
                                                    toSingleCell(Any(targetOutput), "target output"), prices,
                                                    toSingleCell(what, "what")),
                             prices);
@@ -32,7 +32,7 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
                                   const Any& what)
 {
     return guardedTable([&] {
-        return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
+        return costColumn(models_.table(model, "model"), toCellTable(targetOutput, "target output"),
                           toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
     });
 }
@@ -41,7 +41,7 @@ Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTabl
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return efficientScaleCell(*models_.cells(model, "model"), prices);
+        return efficientScaleCell(models_.table(model, "model"), prices);
     });
 }
 
@@ -49,7 +49,7 @@ Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTab
                                              const AnyTable& inputI, const AnyTable& inputJ, const Any& kind)
 {
     return guardedTable([&] {
-        return priceElasticityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+        return priceElasticityColumn(models_.table(model, "model"), toCellTable(output, "output"),
                                      toCellTable(inputPrices, "input prices"), toSingleCell(Any(inputI), "input i"),
                                      toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"));
     });
@@ -82,7 +82,7 @@ Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budge
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"), prices),
+        return orientedLike(budgetRow(models_.table(model, "model"), toSingleCell(Any(budget), "budget"), prices),
                             prices);
     });
 }
@@ -92,7 +92,7 @@ Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outpu
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
         return orientedLike(
-            profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
+            profitRow(models_.table(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
     });
 }
 
@@ -111,7 +111,7 @@ Any ProductionFunctions::prodEfficiency(const AnyTable& model, const AnyTable& o
                                         const Any& what)
 {
     return guardedTable([&] {
-        return efficiencyColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+        return efficiencyColumn(models_.table(model, "model").cells(), toCellTable(output, "output"),
                                 toCellTable(inputs, "inputs"), toSingleCell(what, "what"));
     });
 }
@@ -120,7 +120,7 @@ Any ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& out
                                       const Any& inputI, const Any& inputJ)
 {
     return guardedTable([&] {
-        return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
+        return isoquantColumn(models_.table(model, "model"), toSingleCell(Any(outputLevel), "output level"),
                               toCellTable(values, "values of input i"), toSingleCell(inputI, "input i"),
                               toSingleCell(inputJ, "input j"));
     });

@@ -107,7 +107,7 @@ Any ProductionFunctions::prodValue(const AnyTable& table, const AnyTable& rowLab
 Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean, const Any& what)
 {
     return guardedTable([&] {
-        return outputColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return outputColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                       toSingleCell(mean, "mean"), toSingleCell(what, "what"));
     });
 }
@@ -116,7 +116,7 @@ Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inp
                                       const Any& what)
 {
     return guardedTable([&] {
-        return marginalProductColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return marginalProductColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                                toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
@@ -125,7 +125,7 @@ Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& i
                                         const Any& what)
 {
     return guardedTable([&] {
-        return elasticityColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return elasticityColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                           toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
     });
 }
@@ -133,7 +133,7 @@ Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& i
 Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs, const Any& what)
 {
     return guardedTable([&] {
-        return scaleColumnWithBounds(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs"),
+        return scaleColumnWithBounds(models_.table(model, "model"), toOptionalTable(inputs, "inputs"),
                                      toSingleCell(what, "what"));
     });
 }
@@ -141,14 +141,14 @@ Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs, con
 Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 {
     return guardedValue(
-        [&] { return Cell(returnsVerdictCell(*models_.cells(model, "model"), toSingleCell(level, "level"))); });
+        [&] { return Cell(returnsVerdictCell(models_.table(model, "model"), toSingleCell(level, "level"))); });
 }
 
 Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                                       const Any& periods)
 {
     return guardedTable([&] {
-        return productivityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
+        return productivityColumn(models_.table(model, "model"), toCellTable(output, "output"),
                                   toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"));
     });
 }
@@ -176,7 +176,7 @@ Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& s
 Any ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
     return guardedTable(
-        [&] { return regularityAnyColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
+        [&] { return regularityAnyColumn(models_.table(model, "model"), toCellTable(inputs, "inputs")); });
 }
 
 Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
@@ -191,7 +191,7 @@ Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& input
                                     const Any& inputJ)
 {
     return guardedTable([&] {
-        return secondPartialColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return secondPartialColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                    toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"));
     });
 }
@@ -199,7 +199,7 @@ Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& input
 Any ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
 {
     return guardedTable([&] {
-        return inputReturnsColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return inputReturnsColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                   toSingleCell(Any(input), "input"));
     });
 }
@@ -208,7 +208,7 @@ Any ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs,
                                   const AnyTable& inputJ)
 {
     return guardedTable([&] {
-        return inputPairColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return inputPairColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
     });
 }
@@ -217,7 +217,7 @@ Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs,
                                   const AnyTable& inputJ)
 {
     return guardedTable([&] {
-        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return technicalRateColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                    toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
     });
 }
@@ -226,7 +226,7 @@ Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable&
                                           const AnyTable& inputJ, const Any& kind)
 {
     return guardedTable([&] {
-        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+        return substitutionColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
                                   toSingleCell(kind, "kind"));
     });

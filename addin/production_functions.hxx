@@ -136,6 +136,8 @@ private:
                                            const css::uno::Any& effects, const css::uno::Any& trend,
                                            const css::uno::Any& incompleteRows);
 
+    // Every cache of the cell functions lives here, owned by this instance: fits by their
+    // arguments, models by their ranges. The core keeps none of its own.
     FitCache fits_;
     ModelRanges models_;
     css::lang::Locale locale_;

@@ -7,7 +7,6 @@
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/models/production_model.hpp"
@@ -56,9 +55,9 @@ struct BoundsModel {
     double critical = 0;
 };
 
-BoundsModel readBoundsModel(const CellTable& range, Statistic statistic, bool needsLogScale)
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale)
 {
-    BoundsModel read{cachedProductionModel(range)};
+    BoundsModel read{range.production()};
     const std::string asked = "what: \"" + word(statistic) + "\" ";
     if (!read.model.parameterCovariance)
         throw InputError(asked + "needs the model's covariance block; this model has none (a typed model, or a "
@@ -159,7 +158,7 @@ Linearised leastCostAmount(const BoundsModel& read, const Eigen::VectorXd& price
 
 } // namespace
 
-CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what)
+CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what)
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return leastCostAnyRow(model, target, prices); // production or cost model
@@ -177,7 +176,7 @@ CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, con
     return row;
 }
 
-CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& mean, const Cell& what)
+CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& mean, const Cell& what)
 {
     const Statistic statistic = readWhat(what, true);
     if (statistic == Statistic::value) return outputColumn(model, inputs, mean);
@@ -188,7 +187,7 @@ CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs
         if (!read.model.smearingFactor) throw InputError("mean: the model has no \"smearing factor\" row");
         factor = *read.model.smearingFactor;
     }
-    const double sigma = prediction ? residualSd(model) : 0;
+    const double sigma = prediction ? residualSd(model.cells()) : 0;
     return columnOfBounds(inputs, read, statistic, sigma * sigma, factor == 1 ? "output" : "mean output",
                           [&](const Eigen::VectorXd& bundle) {
                               return Linearised{factor * read.form->output(bundle), logOutputGradient(read, bundle),
@@ -196,7 +195,7 @@ CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs
                           });
 }
 
-CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                           const Cell& what)
 {
     const Statistic statistic = readWhat(what, false);
@@ -221,7 +220,7 @@ CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTabl
         });
 }
 
-CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                      const Cell& what)
 {
     const Statistic statistic = readWhat(what, false);
@@ -235,7 +234,7 @@ CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& in
                           [&](const Eigen::VectorXd&) { return Linearised{read.form->exponents(chosen), gradient}; });
 }
 
-CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what)
+CellTable scaleColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& what)
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return scaleColumn(model, inputs);

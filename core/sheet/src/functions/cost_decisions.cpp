@@ -8,7 +8,6 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/forms/local_shape.hpp"
 #include "isoquant/math/forms/cost_duality.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -84,9 +83,9 @@ CellTable costModelLeastCost(const CellTable& model, const Cell& target, const C
 
 } // namespace
 
-CellTable leastCostAnyRow(const CellTable& model, const Cell& target, const CellTable& prices)
+CellTable leastCostAnyRow(const ModelTable& model, const Cell& target, const CellTable& prices)
 {
-    if (isCostModel(model)) return costModelLeastCost(model, target, prices);
+    if (isCostModel(model.cells())) return costModelLeastCost(model.cells(), target, prices);
     return leastCostRow(model, target, prices);
 }
 
@@ -100,7 +99,7 @@ constexpr int bisections = 80; // halves a step of 0.58 in ln y to below 1e-16 r
 
 // ε of the least-cost plan for output e^logOutput; empty where there is none (no solution, or a
 // plan beyond what a cell holds at the ends of the grid).
-std::optional<double> planElasticity(const CellTable& model, double logOutput, const CellTable& prices)
+std::optional<double> planElasticity(const ModelTable& model, double logOutput, const CellTable& prices)
 {
     try {
         const CellTable figure = costCell(model, Cell(std::exp(logOutput)), prices, Cell(std::string("cost elasticity")));
@@ -111,9 +110,9 @@ std::optional<double> planElasticity(const CellTable& model, double logOutput, c
     }
 }
 
-CellTable productionEfficientScale(const CellTable& model, const CellTable& priceRange)
+CellTable productionEfficientScale(const ModelTable& model, const CellTable& priceRange)
 {
-    const ProductionModel production = cachedProductionModel(model);
+    const ProductionModel& production = model.production();
     const Eigen::VectorXd prices =
         readPrices(priceRange, "input prices", static_cast<Eigen::Index>(production.inputLabels.size()));
     if (const auto scale = production.technology->constantScaleElasticity())
@@ -149,10 +148,10 @@ CellTable productionEfficientScale(const CellTable& model, const CellTable& pric
 
 } // namespace
 
-CellTable efficientScaleCell(const CellTable& model, const CellTable& priceRange)
+CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRange)
 {
-    if (!isCostModel(model)) return productionEfficientScale(model, priceRange);
-    const CostModel cost = readCostModel(model);
+    if (!isCostModel(model.cells())) return productionEfficientScale(model, priceRange);
+    const CostModel cost = readCostModel(model.cells());
     const Eigen::VectorXd prices = readPrices(priceRange, "input prices", cost.prices.size());
     // ε(y) = a + b·ln y with a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy
     const double atUnitOutput = cost.output + cost.priceOutput.dot(prices.array().log().matrix());
@@ -165,7 +164,7 @@ namespace {
 
 std::string undefinedElasticity() { return "elasticity undefined here: a cost share is 0, or the substitution matrix is singular"; }
 
-Cell productionPriceElasticity(const CellTable& model, const ProductionModel& production, double level,
+Cell productionPriceElasticity(const ModelTable& model, const ProductionModel& production, double level,
                                const Eigen::VectorXd& prices, Eigen::Index i, Eigen::Index j, PriceElasticityKind kind,
                                const std::string& place)
 {
@@ -185,12 +184,12 @@ Cell productionPriceElasticity(const CellTable& model, const ProductionModel& pr
 
 } // namespace
 
-CellTable priceElasticityColumn(const CellTable& model, const CellTable& outputRange, const CellTable& priceRange,
+CellTable priceElasticityColumn(const ModelTable& model, const CellTable& outputRange, const CellTable& priceRange,
                                 const Cell& first, const Cell& second, const Cell& kind)
 {
-    const bool costModel = isCostModel(model);
-    const CostModel cost = costModel ? readCostModel(model) : CostModel{};
-    const ProductionModel production = costModel ? ProductionModel{} : cachedProductionModel(model);
+    const bool costModel = isCostModel(model.cells());
+    const CostModel cost = costModel ? readCostModel(model.cells()) : CostModel{};
+    const ProductionModel production = costModel ? ProductionModel{} : model.production();
     Eigen::Index i = 0, j = 0;
     if (costModel) {
         i = readPriceSelector(first, cost, "input i");
@@ -225,10 +224,10 @@ CellTable priceElasticityColumn(const CellTable& model, const CellTable& outputR
     return column;
 }
 
-CellTable regularityAnyColumn(const CellTable& model, const CellTable& rows)
+CellTable regularityAnyColumn(const ModelTable& model, const CellTable& rows)
 {
-    if (!isCostModel(model)) return regularityColumn(model, rows);
-    const CostModel cost = readCostModel(model);
+    if (!isCostModel(model.cells())) return regularityColumn(model, rows);
+    const CostModel cost = readCostModel(model.cells());
     const NumericColumns values = readNumericColumns(rows, "inputs", ValueRule::positive, "column");
     const Eigen::Index k = cost.prices.size();
     if (values.values.cols() != k + 1)

@@ -5,7 +5,6 @@
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -207,11 +206,11 @@ namespace {
 
 // PRODCOST over a production model, one least-cost plan per output (costCell); a row without an
 // answer shows its sentence, a message names its row.
-CellTable productionCostColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+CellTable productionCostColumn(const ModelTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
     const NumericColumns outputs = readOneColumn(target, "target output");
     const Eigen::Index n = outputs.values.rows();
-    const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
+    const auto inputs = static_cast<Eigen::Index>(model.production().inputLabels.size());
     const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, "target output");
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
@@ -232,9 +231,9 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
 
 } // namespace
 
-CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+CellTable costColumn(const ModelTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
-    if (isCostModel(model)) return costModelColumn(model, target, prices, what);
+    if (isCostModel(model.cells())) return costModelColumn(model.cells(), target, prices, what);
     if (target.rows() == 1 && target.columns() == 1) return costCell(model, target.at(0, 0), prices, what);
     return productionCostColumn(model, target, prices, what);
 }

@@ -8,7 +8,6 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/numerics/level_roots.hpp"
 #include "isoquant/math/forms/local_shape.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/decisions/numerical_decisions.hpp"
@@ -171,9 +170,9 @@ struct DecisionSetup {
     Eigen::VectorXd prices;
 };
 
-DecisionSetup readDecision(const CellTable& model, const CellTable& prices, const std::string& pricesName)
+DecisionSetup readDecision(const ModelTable& model, const CellTable& prices, const std::string& pricesName)
 {
-    DecisionSetup setup{cachedProductionModel(model), {}};
+    DecisionSetup setup{model.production(), {}};
     setup.prices = readPrices(prices, pricesName, static_cast<Eigen::Index>(setup.model.inputLabels.size()));
     return setup;
 }
@@ -186,9 +185,9 @@ ProductionPlan leastCostOf(const DecisionSetup& setup, double target)
 
 } // namespace
 
-CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable secondPartialColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, "input j");
     const NumericColumns bundles = readModelInputs(inputs, technology);
@@ -198,9 +197,9 @@ CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, c
                        bundles, secondPartialTitle(technology, i, j));
 }
 
-CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable inputReturnsColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
@@ -209,9 +208,9 @@ CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, co
                        bundles, "returns to " + labelOf(technology, chosen));
 }
 
-CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable inputPairColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     const NumericColumns bundles = readModelInputs(inputs, technology);
@@ -221,9 +220,9 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
                        bundles, labelOf(technology, i) + " with " + labelOf(technology, j));
 }
 
-CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable technicalRateColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     const NumericColumns bundles = readModelInputs(inputs, technology);
@@ -238,10 +237,10 @@ CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, c
                        bundles, "MRTS of " + labelOf(technology, i) + " for " + labelOf(technology, j));
 }
 
-CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
+CellTable substitutionColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
                              const Cell& kind)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index i = readInputSelector(first, technology, "input i");
     const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
     const SubstitutionKind chosen = readSubstitutionKind(kind);
@@ -257,7 +256,7 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
                        bundles, "elasticity of substitution, " + labelOf(technology, i) + " and " + labelOf(technology, j));
 }
 
-CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTable& prices)
+CellTable leastCostRow(const ModelTable& model, const Cell& target, const CellTable& prices)
 {
     const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double level = readPositiveNumber(target, "target output");
@@ -268,7 +267,7 @@ CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTab
                    });
 }
 
-CellTable costCell(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what)
+CellTable costCell(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what)
 {
     const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double level = readPositiveNumber(target, "target output");
@@ -282,7 +281,7 @@ CellTable costCell(const CellTable& model, const Cell& target, const CellTable& 
                    });
 }
 
-CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable& prices)
+CellTable budgetRow(const ModelTable& model, const Cell& budget, const CellTable& prices)
 {
     const DecisionSetup setup = readDecision(model, prices, "input prices");
     const double spending = readPositiveNumber(budget, "budget");
@@ -299,7 +298,7 @@ CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable&
         });
 }
 
-CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellTable& inputPrices)
+CellTable profitRow(const ModelTable& model, const Cell& outputPrice, const CellTable& inputPrices)
 {
     const DecisionSetup setup = readDecision(model, inputPrices, "input prices");
     const double price = readPositiveNumber(outputPrice, "output price");
@@ -319,10 +318,10 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
         });
 }
 
-CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTable& values, const Cell& first,
+CellTable isoquantColumn(const ModelTable& model, const Cell& level, const CellTable& values, const Cell& first,
                          const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
     if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
     const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "input i");

@@ -6,7 +6,6 @@
 #include "isoquant/math/growth/index_numbers.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/period_range.hpp"
@@ -75,10 +74,10 @@ void requireSameLabels(const std::string& argument, const std::string& ownNoun, 
 }
 
 // The model reader names its argument "model"; in PRODGROWTH the model is the argument "weights".
-ProductionModel readModelArgument(const CellTable& range, const std::string& argument)
+ProductionModel readModelArgument(const ModelTable& range, const std::string& argument)
 {
     try {
-        return cachedProductionModel(range);
+        return range.production();
     } catch (const InputError& error) {
         const std::string message = sheetMessage(error);
         const std::string prefix = "model:";
@@ -196,7 +195,7 @@ Eigen::VectorXd periodShifts(const ProductionModel& model, const CellTable& peri
 
 } // namespace
 
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+CellTable productivityColumn(const ModelTable& model, const CellTable& output, const CellTable& inputs,
                              const CellTable& periods)
 {
     const ProductionModel technology = readModelArgument(model, "model");

@@ -2,7 +2,6 @@
 
 #include "isoquant/sheet/functions/form_comparison.hpp"
 #include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -198,9 +197,9 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     return fit;
 }
 
-CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean)
+CellTable outputColumn(const ModelTable& model, const CellTable& inputs, const Cell& mean)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     double factor = 1.0;
     const bool meanOutput = readSwitchArgument(mean, "mean");
     if (meanOutput) {
@@ -221,10 +220,10 @@ namespace {
 // One column of a derivative with respect to the chosen input, per row of inputs; the header is
 // `heading` and the chosen input's label.
 template <typename Derivative>
-CellTable inputDerivativeColumn(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable inputDerivativeColumn(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                 Derivative derivative, const std::string& heading)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const Eigen::Index chosen = readInputSelector(input, technology, "input");
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
@@ -235,7 +234,7 @@ CellTable inputDerivativeColumn(const CellTable& model, const CellTable& inputs,
 
 } // namespace
 
-CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable marginalProductColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
     return inputDerivativeColumn(
         model, inputs, input,
@@ -245,7 +244,7 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
         "marginal product of ");
 }
 
-CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable elasticityColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
     return inputDerivativeColumn(
         model, inputs, input,
@@ -255,9 +254,9 @@ CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, cons
         "output elasticity of ");
 }
 
-CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
+CellTable scaleColumn(const ModelTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     if (inputs.empty()) {
         const auto scale = technology.technology->constantScaleElasticity();
         if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
@@ -271,16 +270,16 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
                        bundles, "returns to scale");
 }
 
-std::string returnsVerdictCell(const CellTable& model, const Cell& level)
+std::string returnsVerdictCell(const ModelTable& model, const Cell& level)
 {
     const double confidence = readLevelArgument(level, "level");
-    if (const auto untested = untestedVerdict(model)) return *untested;
-    return returnsVerdict(cachedProductionModel(model), confidence);
+    if (const auto untested = untestedVerdict(model.cells())) return *untested;
+    return returnsVerdict(model.production(), confidence);
 }
 
-CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
+CellTable regularityColumn(const ModelTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const NumericColumns bundles = readModelInputs(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)

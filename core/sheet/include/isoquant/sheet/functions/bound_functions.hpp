@@ -22,16 +22,17 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 
 namespace isoquant {
 
-CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& mean, const Cell& what);
-CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& mean, const Cell& what);
+CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                           const Cell& what);
-CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                      const Cell& what);
-CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what);
+CellTable scaleColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& what);
 // PRODLEASTCOST: a row of the amounts' standard errors or bounds (positive: log scale).
-CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what);
 
 } // namespace isoquant
