@@ -56,7 +56,7 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 constexpr ArgumentInfo boundsArgument{
     "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
             "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
-            "marginal products and least-cost amounts get bounds on the log scale. Cobb-douglas form."};
+            "marginal products, least-cost amounts and TFP get bounds on the log scale. Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -136,7 +136,8 @@ std::vector<FunctionInfo> growthFunctions()
                      "names the inputs."},
           {"periods", "Optional, for a model with a trend: the period (year) of each row, as many rows as output. "
                       "Each row is then compared with its own period's technology: ln A + technical change per "
-                      "period × (period - latest period)."}}},
+                      "period × (period - latest period)."},
+          boundsArgument}},
         {"prodGrowth", "PRODGROWTH",
          "Growth accounting from one period to the next: output growth split into each input's contribution, a "
          "scale effect and TFP growth (the residual), in log differences, plus a total row. Returns a table (enter "

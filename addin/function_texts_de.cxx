@@ -69,7 +69,7 @@ constexpr ArgumentInfo boundsArgument{
     "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
                 "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
-                "Grenzprodukte und kostenminimale Mengen erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
+                "Grenzprodukte, kostenminimale Mengen und TFP erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -156,7 +156,8 @@ const Translation& germanTranslation()
                            "Ausbringung. Eine erste Zeile mit Text benennt die Faktoren."},
           {"Perioden", "Optional, für ein Modell mit Trend: die Periode (das Jahr) jeder Zeile, so viele Zeilen wie "
                        "bei der Ausbringung. Jede Zeile wird dann mit der Technologie ihrer eigenen Periode "
-                       "verglichen: ln A + technischer Fortschritt je Periode × (Periode - letzte Periode)."}}},
+                       "verglichen: ln A + technischer Fortschritt je Periode × (Periode - letzte Periode)."},
+          boundsArgument}},
         {"prodGrowth",
          "Wachstumszerlegung von einer Periode zur nächsten: das Wachstum der Ausbringung, aufgeteilt in den Beitrag "
          "jedes Faktors, einen Skaleneffekt und das TFP-Wachstum (den Rest), in Log-Differenzen, dazu eine "

@@ -145,11 +145,12 @@ Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 }
 
 Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                                      const Any& periods)
+                                      const Any& periods, const Any& what)
 {
     return guardedTable([&] {
-        return productivityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                  toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"));
+        return productivityColumnWithBounds(*models_.cells(model, "model"), toCellTable(output, "output"),
+                                            toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"),
+                                            toSingleCell(what, "what"));
     });
 }
 

@@ -61,7 +61,7 @@ public:
                                      const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                              const css::uno::Any& periods) override;
+                              const css::uno::Any& periods, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
                                       const css::uno::Any& method, const css::uno::Any& periods) override;
     css::uno::Any SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,

@@ -27,7 +27,7 @@ ARGUMENT_COUNTS = {"PRODFIT": 12, "PRODSTAT": 13, "PRODOUTPUT": 4, "PRODMARGINAL
 REQUIRED_ARGUMENTS = {"PRODFIT": 2, "PRODSTAT": 3, "PRODOUTPUT": 2, "PRODMARGINAL": 3, "PRODELASTICITY": 3,
                       "PRODSCALE": 1, "PRODRETURNS": 1}
 # Productivity and growth (their own checks: test_growth_in_calc.py).
-ARGUMENT_COUNTS.update({"PRODTFP": 4, "PRODGROWTH": 5, "PRODINDEX": 5})
+ARGUMENT_COUNTS.update({"PRODTFP": 5, "PRODGROWTH": 5, "PRODINDEX": 5})
 REQUIRED_ARGUMENTS.update({"PRODTFP": 3, "PRODGROWTH": 3, "PRODINDEX": 2})
 # The regularity test and the comparison of forms (test_forms_in_calc.py computes them).
 ARGUMENT_COUNTS.update({"PRODREGULAR": 2, "PRODCOMPARE": 3})

@@ -67,7 +67,7 @@ GERMAN_ARGUMENTS = {
     "PRODELASTICITY": AT_BUNDLES + ["Faktor", "Kennzahl"],
     "PRODSCALE": ["Modell", "Faktormengen", "Kennzahl"],
     "PRODRETURNS": ["Modell", "Konfidenzniveau"],
-    "PRODTFP": ["Modell", "Ausbringung", "Faktormengen", "Perioden"],
+    "PRODTFP": ["Modell", "Ausbringung", "Faktormengen", "Perioden", "Kennzahl"],
     "PRODGROWTH": ["Ausbringung", "Faktormengen", "Gewichte", "Methode", "Perioden"],
     "PRODINDEX": ["Mengen", "Kostenanteile", "Methode", "Basis", "Perioden"],
     "PRODREGULAR": AT_BUNDLES,

@@ -15,7 +15,8 @@ ln q; for the elasticities and scale q -+ t se. Prediction bounds of one new pla
 exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). Least-cost amounts (PLANS, numbered as
 the bundles): solved numerically for each theta by minimising cost on the isoquant in numpy's terms,
 x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
-cost minimisation, solved for lam in logs), bounds on the log scale as for output.
+cost minimisation, solved for lam in logs), bounds on the log scale as for output. TFP of an observed
+output (OBSERVED, numbered as the bundles): Y / (A L^bL C^bC), positive, on the log scale.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -29,6 +30,7 @@ import sys
 LEVEL = 0.95
 BUNDLES = [(150.0, 200.0), (250.0, 400.0), (100.0, 100.0)]  # (L, C), invented
 PLANS = [(180.0, 2.0, 3.0), (300.0, 1.0, 1.0), (120.0, 5.0, 2.0)]  # (target output, wL, wC), invented
+OBSERVED = [170.0, 260.0, 105.0]  # one plant's output at each bundle (PRODTFP), invented
 
 
 def main():
@@ -100,6 +102,7 @@ def main():
 
             positive("least_cost_L", lambda p: amount(p, 0))
             positive("least_cost_C", lambda p: amount(p, 1))
+            positive("tfp", lambda p: OBSERVED[number] / output(p))
             for name, function in (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2])):
                 put(name + "_se", se(function))
                 put(name + "_lower", function(theta) - t * se(function))

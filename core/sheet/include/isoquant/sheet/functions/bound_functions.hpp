@@ -16,6 +16,7 @@
 // - least-cost amount xᵢ of target y at prices w (PRODLEASTCOST; every bᵢ > 0): g of ln xᵢ in
 //   bound_functions.cpp (leastCostAmount); bounds on the log scale.
 // - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
+// - TFP = Y/f(x) of an observed Y (PRODTFP): g of ln TFP = −(1, ln x₁ … ln x_k, 0 …); log scale.
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
@@ -33,5 +34,11 @@ CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& in
 CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what);
 // PRODLEASTCOST: a row of the amounts' standard errors or bounds (positive: log scale).
 CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+
+// The decisions and productivity (derived_bounds.cpp): the plain function's answer, each number
+// replaced by the word's figure; a text it gives (a value undefined at a bundle) stays.
+// PRODTFP: as productivityColumn (growth_functions.hpp), then `what`.
+CellTable productivityColumnWithBounds(const CellTable& model, const CellTable& output, const CellTable& inputs,
+                                       const CellTable& periods, const Cell& what);
 
 } // namespace isoquant

@@ -1,0 +1,105 @@
+// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION (issue 20,
+// bound_functions.hpp) on the Cobb & Douglas (1928) data (tests/data/README.md) with a covariance
+// block: "value" is the plain function's answer; log-scale bounds are symmetric around the value in
+// logs (lower·upper = value², exactly so up to rounding: 1e-12 relative) and linear ones around the
+// value itself; the words a model cannot answer get a message naming "what". The figures themselves
+// are checked against statsmodels and numpy in test_bounds_cross_check.cpp.
+#include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+#include "input_error_message.hpp"
+#include "reference_data.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+#include <cmath>
+#include <string>
+
+using isoquant::testing::messageOf;
+
+namespace {
+
+isoquant::CellTable tableWithBlock()
+{
+    const auto fit = isoquant::fitFromArguments(isoquant::testing::cobbDouglas1928Arguments());
+    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+}
+
+isoquant::CellTable typedModel()
+{
+    isoquant::CellTable typed(4, 2);
+    typed.set(0, 0, "form");
+    typed.set(0, 1, "cobb-douglas");
+    typed.set(1, 0, "ln A");
+    typed.set(1, 1, 0.1);
+    typed.set(2, 0, "L");
+    typed.set(2, 1, 0.7);
+    typed.set(3, 0, "C");
+    typed.set(3, 1, 0.3);
+    return typed;
+}
+
+// A header row and two bundles (L, C), invented.
+isoquant::CellTable twoBundles()
+{
+    isoquant::CellTable bundles(3, 2);
+    bundles.set(0, 0, "L");
+    bundles.set(0, 1, "C");
+    bundles.set(1, 0, 150.0);
+    bundles.set(1, 1, 200.0);
+    bundles.set(2, 0, 250.0);
+    bundles.set(2, 1, 400.0);
+    return bundles;
+}
+
+const std::string noBlock = "needs the model's covariance block; this model has none (a typed model, or a PRODFIT "
+                            "table made without covariance TRUE)";
+
+bool close(double actual, double expected) { return std::fabs(actual - expected) <= 1e-12 * std::fabs(expected); }
+
+// Each data row (below the header) of the three columns: lower < value < upper, and on the log scale
+// lower·upper = value², else lower + upper = 2·value.
+void checkAround(const isoquant::CellTable& value, const isoquant::CellTable& lower, const isoquant::CellTable& upper,
+                 bool logScale)
+{
+    BOOST_REQUIRE(value.rows() == lower.rows() && value.rows() == upper.rows());
+    for (std::size_t row = 0; row < value.rows(); ++row) {
+        if (!value.isNumber(row, 0)) continue;
+        const double v = value.number(row, 0), l = lower.number(row, 0), u = upper.number(row, 0);
+        BOOST_TEST_CONTEXT("row " << row)
+        {
+            BOOST_TEST(l < v);
+            BOOST_TEST(v < u);
+            BOOST_TEST((logScale ? close(l * u, v * v) : close(l + u, 2 * v)));
+        }
+    }
+}
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(derived_bounds)
+
+BOOST_AUTO_TEST_CASE(tfp_bounds_on_the_log_scale)
+{
+    const auto table = tableWithBlock();
+    isoquant::CellTable output(3, 1);
+    output.set(0, 0, "P");
+    output.set(1, 0, 170.0); // invented
+    output.set(2, 0, 260.0);
+    const auto bundles = twoBundles();
+    const auto plain = isoquant::productivityColumn(table, output, bundles);
+    const auto at = [&](const char* word) {
+        return isoquant::productivityColumnWithBounds(table, output, bundles, {}, std::string(word));
+    };
+    BOOST_TEST((at("value") == plain));
+    BOOST_TEST(at("std. error").text(0, 0) == "std. error of TFP");
+    checkAround(plain, at("lower bound"), at("upper bound"), true);
+    BOOST_TEST(messageOf([&] {
+                   isoquant::productivityColumnWithBounds(typedModel(), output, bundles, {}, std::string("std. error"));
+               }) == "what: \"std. error\" " + noBlock);
+}
+
+BOOST_AUTO_TEST_SUITE_END()
