@@ -191,7 +191,8 @@ std::vector<FunctionInfo> shapeFunctions()
          "Second partial derivative of output for each row of inputs: how the marginal product of input i changes "
          "with one more unit of input j (of input i itself when j is omitted).",
          {modelArgument, bundlesArgument, firstInputArgument,
-          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."}}},
+          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."},
+          boundsArgument}},
         {"prodInputReturns", "PRODINPUTRETURNS",
          "Returns to one input alone for each row of inputs: diminishing, constant or increasing, by whether its "
          "marginal product falls, stays or rises as more of it is used, the other inputs held. Says so where the "

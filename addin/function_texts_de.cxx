@@ -205,7 +205,8 @@ const Translation& germanTranslation()
          "fehlt).",
          {modelArgument, bundlesArgument, firstInputArgument,
           {"Faktor j", "Optionaler zweiter Faktor: seine Nummer oder seine Bezeichnung. Weggelassen: derselbe wie "
-                       "Faktor i."}}},
+                       "Faktor i."},
+          boundsArgument}},
         {"prodInputReturns",
          "Ertragsverlauf eines einzelnen Faktors für jede Zeile von Faktormengen: abnehmend, konstant oder zunehmend "
          "(die Zelle zeigt diminishing, constant oder increasing), je nachdem, ob sein Grenzprodukt fällt, gleich "

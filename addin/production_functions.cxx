@@ -189,11 +189,12 @@ Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inp
 }
 
 Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                    const Any& inputJ)
+                                    const Any& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return secondPartialColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"));
+        return secondPartialColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                             toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"),
+                                             toSingleCell(what, "what"));
     });
 }
 

@@ -70,7 +70,7 @@ public:
     css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs,
                                        const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                 const css::uno::Any& inputJ) override;
+                                 const css::uno::Any& inputJ, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs,
                                             const AnyTable& input) override;
     css::uno::Any SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,

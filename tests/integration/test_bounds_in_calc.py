@@ -211,10 +211,14 @@ class DerivedBoundsTest(CalcTestCase):
     def test_tfp(self):
         self.check("tfp", lambda p: 170.0 / output(p), True)
 
+    def test_second_partial(self):
+        self.check("second", lambda p: p[1] * p[2] * output(p) / (150.0 * 200.0), False)
+
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P).
 FORMULAS = {
     "tfp": (30, '=PRODTFP($F$1:$L$21;$R$91;$P$91:$Q$91;;"%s")'),
+    "second": (31, '=PRODSECOND($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
 }
 
 

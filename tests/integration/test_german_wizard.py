@@ -72,7 +72,7 @@ GERMAN_ARGUMENTS = {
     "PRODINDEX": ["Mengen", "Kostenanteile", "Methode", "Basis", "Perioden"],
     "PRODREGULAR": AT_BUNDLES,
     "PRODCOMPARE": ["Ausbringung", "Faktormengen", "Konfidenzniveau"],
-    "PRODSECOND": AT_BUNDLES + ["Faktor i", "Faktor j"],
+    "PRODSECOND": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
     "PRODINPUTRETURNS": AT_BUNDLES + ["Faktor"],
     "PRODPAIR": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j"],

@@ -16,7 +16,8 @@ exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). Least-cost amounts
 the bundles): solved numerically for each theta by minimising cost on the isoquant in numpy's terms,
 x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
 cost minimisation, solved for lam in logs), bounds on the log scale as for output. TFP of an observed
-output (OBSERVED, numbered as the bundles): Y / (A L^bL C^bC), positive, on the log scale.
+output (OBSERVED, numbered as the bundles): Y / (A L^bL C^bC), positive, on the log scale. The cross
+and own second partials bL bC Y/(L C) and bL (bL - 1) Y/L^2, of either sign: q -+ t se.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -103,7 +104,10 @@ def main():
             positive("least_cost_L", lambda p: amount(p, 0))
             positive("least_cost_C", lambda p: amount(p, 1))
             positive("tfp", lambda p: OBSERVED[number] / output(p))
-            for name, function in (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2])):
+            linear = (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2]),
+                      ("second_LC", lambda p: p[1] * p[2] * output(p) / (labour * capital)),
+                      ("second_LL", lambda p: p[1] * (p[1] - 1) * output(p) / labour ** 2))
+            for name, function in linear:
                 put(name + "_se", se(function))
                 put(name + "_lower", function(theta) - t * se(function))
                 put(name + "_upper", function(theta) + t * se(function))

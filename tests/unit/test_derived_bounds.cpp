@@ -102,4 +102,24 @@ BOOST_AUTO_TEST_CASE(tfp_bounds_on_the_log_scale)
                }) == "what: \"std. error\" " + noBlock);
 }
 
+BOOST_AUTO_TEST_CASE(second_partials_bounds_around_the_value)
+{
+    const auto table = tableWithBlock();
+    const auto bundles = twoBundles();
+    const isoquant::Cell labour = std::string("L"), capital = std::string("C");
+    for (const isoquant::Cell& other : {isoquant::Cell{}, capital}) {
+        const auto plain = isoquant::secondPartialColumn(table, bundles, labour, other);
+        const auto at = [&](const char* word) {
+            return isoquant::secondPartialColumnWithBounds(table, bundles, labour, other, std::string(word));
+        };
+        BOOST_TEST((at("value") == plain));
+        BOOST_TEST(at("upper bound").text(0, 0) == "upper bound of " + plain.text(0, 0));
+        checkAround(plain, at("lower bound"), at("upper bound"), false);
+    }
+    BOOST_TEST(messageOf([&] {
+                   isoquant::secondPartialColumnWithBounds(typedModel(), bundles, labour, capital,
+                                                           std::string("lower bound"));
+               }) == "what: \"lower bound\" " + noBlock);
+}
+
 BOOST_AUTO_TEST_SUITE_END()

@@ -6,6 +6,7 @@
 
 #include "functions/delta_method.hpp"
 
+#include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/growth_functions.hpp"
 
 #include <cmath>
@@ -25,6 +26,28 @@ CellTable productivityColumnWithBounds(const CellTable& model, const CellTable& 
     const BoundsModel read = readBoundsModel(model, statistic, true);
     return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
         return Linearised{tfp, -logOutputGradient(read, bundle), true};
+    });
+}
+
+CellTable secondPartialColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = secondPartialColumn(model, inputs, first, second);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const Eigen::Index i = readInputSelector(first, read.model, "input i");
+    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, "input j");
+    const Eigen::VectorXd& b = read.form->exponents;
+    // fᵢⱼ = c·Y/(xᵢxⱼ) with c = bᵢ(bⱼ − δᵢⱼ): g = fᵢⱼ·(g of ln Y) + Y/(xᵢxⱼ)·∂c/∂θ, where
+    // ∂c/∂bᵢ = bⱼ − δᵢⱼ and ∂c/∂bⱼ = bᵢ (together 2bᵢ − 1 when i = j). Its sign varies with the
+    // exponents (an own second partial is negative for bᵢ < 1): bounds fᵢⱼ ∓ t·se.
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double partial) {
+        const double scaled = std::exp(read.form->logOutput(bundle) - std::log(bundle(i)) - std::log(bundle(j)));
+        Eigen::VectorXd gradient = partial * logOutputGradient(read, bundle);
+        gradient(1 + i) += scaled * (b(j) - (i == j ? 1.0 : 0.0));
+        gradient(1 + j) += scaled * b(i);
+        return Linearised{partial, gradient, false};
     });
 }
 

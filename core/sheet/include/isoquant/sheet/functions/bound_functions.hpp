@@ -17,6 +17,7 @@
 //   bound_functions.cpp (leastCostAmount); bounds on the log scale.
 // - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
 // - TFP = Y/f(x) of an observed Y (PRODTFP): g of ln TFP = −(1, ln x₁ … ln x_k, 0 …); log scale.
+// - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
@@ -40,5 +41,8 @@ CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, con
 // PRODTFP: as productivityColumn (growth_functions.hpp), then `what`.
 CellTable productivityColumnWithBounds(const CellTable& model, const CellTable& output, const CellTable& inputs,
                                        const CellTable& periods, const Cell& what);
+// PRODSECOND: as secondPartialColumn (decision_functions.hpp), then `what`.
+CellTable secondPartialColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what);
 
 } // namespace isoquant
