@@ -56,7 +56,8 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 constexpr ArgumentInfo boundsArgument{
     "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
             "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
-            "marginal products, least-cost amounts and TFP get bounds on the log scale. Cobb-douglas form."};
+            "marginal products, least-cost amounts, TFP and rates of substitution get bounds on the log scale. "
+            "Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -207,7 +208,7 @@ std::vector<FunctionInfo> shapeFunctions()
         {"prodMrts", "PRODMRTS",
          "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
          "of input i replaces at unchanged output (marginal product of i over that of j).",
-         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument, boundsArgument}},
         {"prodSubstitution", "PRODSUBSTITUTION",
          "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
          "the two inputs per 1% change in their relative price along the isoquant.",

@@ -69,7 +69,8 @@ constexpr ArgumentInfo boundsArgument{
     "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
                 "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
-                "Grenzprodukte, kostenminimale Mengen und TFP erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
+                "Grenzprodukte, kostenminimale Mengen, TFP und Grenzraten der Substitution erhalten Grenzen auf der "
+                "Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -223,7 +224,7 @@ const Translation& germanTranslation()
          "Grenzrate der technischen Substitution für jede Zeile von Faktormengen: die Einheiten von Faktor j, die "
          "eine weitere Einheit von Faktor i bei unveränderter Ausbringung ersetzt (Grenzprodukt von i geteilt durch "
          "das von j).",
-         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument, boundsArgument}},
         {"prodSubstitution",
          "Substitutionselastizität zwischen den Faktoren i und j für jede Zeile von Faktormengen: die prozentuale "
          "Änderung des Einsatzverhältnisses der beiden Faktoren je 1 % Änderung ihres Preisverhältnisses entlang der "

@@ -216,11 +216,12 @@ Any ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs,
 }
 
 Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                  const AnyTable& inputJ)
+                                  const AnyTable& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
+        return technicalRateColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                             toSingleCell(Any(inputI), "input i"),
+                                             toSingleCell(Any(inputJ), "input j"), toSingleCell(what, "what"));
     });
 }
 

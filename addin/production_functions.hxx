@@ -76,7 +76,7 @@ public:
     css::uno::Any SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                     const AnyTable& inputJ) override;
     css::uno::Any SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                    const AnyTable& inputJ) override;
+                                    const AnyTable& inputJ, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                             const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,

@@ -214,11 +214,15 @@ class DerivedBoundsTest(CalcTestCase):
     def test_second_partial(self):
         self.check("second", lambda p: p[1] * p[2] * output(p) / (150.0 * 200.0), False)
 
+    def test_rate_of_substitution(self):
+        self.check("mrts", lambda p: (p[1] / 150.0) / (p[2] / 200.0), True)
+
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P).
 FORMULAS = {
     "tfp": (30, '=PRODTFP($F$1:$L$21;$R$91;$P$91:$Q$91;;"%s")'),
     "second": (31, '=PRODSECOND($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
+    "mrts": (32, '=PRODMRTS($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
 }
 
 

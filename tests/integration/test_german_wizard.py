@@ -75,7 +75,7 @@ GERMAN_ARGUMENTS = {
     "PRODSECOND": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
     "PRODINPUTRETURNS": AT_BUNDLES + ["Faktor"],
     "PRODPAIR": AT_BUNDLES + ["Faktor i", "Faktor j"],
-    "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j"],
+    "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
     "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art"],
     "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],

@@ -17,7 +17,8 @@ the bundles): solved numerically for each theta by minimising cost on the isoqua
 x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
 cost minimisation, solved for lam in logs), bounds on the log scale as for output. TFP of an observed
 output (OBSERVED, numbered as the bundles): Y / (A L^bL C^bC), positive, on the log scale. The cross
-and own second partials bL bC Y/(L C) and bL (bL - 1) Y/L^2, of either sign: q -+ t se.
+and own second partials bL bC Y/(L C) and bL (bL - 1) Y/L^2, of either sign: q -+ t se. The marginal
+rate of technical substitution of L for C, (bL/L)/(bC/C), positive: on the log scale.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -104,6 +105,7 @@ def main():
             positive("least_cost_L", lambda p: amount(p, 0))
             positive("least_cost_C", lambda p: amount(p, 1))
             positive("tfp", lambda p: OBSERVED[number] / output(p))
+            positive("mrts_LC", lambda p: (p[1] / labour) / (p[2] / capital))
             linear = (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2]),
                       ("second_LC", lambda p: p[1] * p[2] * output(p) / (labour * capital)),
                       ("second_LL", lambda p: p[1] * (p[1] - 1) * output(p) / labour ** 2))

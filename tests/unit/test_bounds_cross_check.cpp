@@ -1,5 +1,5 @@
 // Standard errors and bounds of derived numbers (issue 20: PRODOUTPUT, PRODMARGINAL,
-// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND with `what`) from a PRODFIT table with its covariance
+// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS with `what`) from a PRODFIT table with its covariance
 // block, against python3-statsmodels 0.13.5 (the covariance of the same OLS fit, classical and HC1)
 // and a numerical gradient of the same quantity in numpy, recomputed at test time by
 // tests/reference/bounds_check.py on the Cobb & Douglas (1928) data (tests/data/README.md) at three
@@ -85,6 +85,9 @@ double coreFigure(const isoquant::CellTable& model, const std::string& quantity,
                                                          words.at(suffix));
     else if (name == "second_LL")
         result = isoquant::secondPartialColumnWithBounds(model, inputs, std::string("L"), {}, words.at(suffix));
+    else if (name == "mrts_LC")
+        result = isoquant::technicalRateColumnWithBounds(model, inputs, std::string("L"), std::string("C"),
+                                                         words.at(suffix));
     else if (name == "scale")
         result = isoquant::scaleColumnWithBounds(model, inputs, words.at(suffix));
     else
@@ -101,8 +104,8 @@ BOOST_AUTO_TEST_CASE(standard_errors_and_bounds_agree_with_statsmodels_and_numpy
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_BOUNDS_FIGURES"));
-    // 2 kinds of errors × 3 bundles × (7 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 35u);
+    // 2 kinds of errors × 3 bundles × (8 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 38u);
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string& errors = fields.at(0);

@@ -122,4 +122,30 @@ BOOST_AUTO_TEST_CASE(second_partials_bounds_around_the_value)
                }) == "what: \"lower bound\" " + noBlock);
 }
 
+BOOST_AUTO_TEST_CASE(rate_of_substitution_bounds_and_an_undefined_rate)
+{
+    auto table = tableWithBlock();
+    const auto bundles = twoBundles();
+    const isoquant::Cell labour = std::string("L"), capital = std::string("C");
+    const auto plain = isoquant::technicalRateColumn(table, bundles, labour, capital);
+    const auto at = [&](const char* word) {
+        return isoquant::technicalRateColumnWithBounds(table, bundles, labour, capital, std::string(word));
+    };
+    BOOST_TEST((at("value") == plain));
+    checkAround(plain, at("lower bound"), at("upper bound"), true); // both exponents positive
+    // The capital exponent's cell (row 4, column 2) set to 0, and returns to scale with it: the
+    // marginal product of capital is 0, the rate undefined; the plain function's text stays.
+    BOOST_REQUIRE(table.text(3, 0) == "C");
+    table.set(3, 1, 0.0);
+    for (std::size_t row = 0; row < table.rows(); ++row)
+        if (table.isText(row, 0) && table.text(row, 0) == "returns to scale") table.set(row, 1, table.number(2, 1));
+    const auto undefined = isoquant::technicalRateColumnWithBounds(table, bundles, labour, capital,
+                                                                   std::string("std. error"));
+    BOOST_TEST(undefined.text(1, 0) == isoquant::technicalRateColumn(table, bundles, labour, capital).text(1, 0));
+    BOOST_TEST(messageOf([&] {
+                   isoquant::technicalRateColumnWithBounds(typedModel(), bundles, labour, capital,
+                                                           std::string("std. error"));
+               }) == "what: \"std. error\" " + noBlock);
+}
+
 BOOST_AUTO_TEST_SUITE_END()

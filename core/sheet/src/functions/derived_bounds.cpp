@@ -51,4 +51,31 @@ CellTable secondPartialColumnWithBounds(const CellTable& model, const CellTable&
     });
 }
 
+CellTable technicalRateColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = technicalRateColumn(model, inputs, first, second);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const Eigen::Index i = readInputSelector(first, read.model, "input i");
+    const Eigen::Index j = readInputSelector(second, read.model, "input j");
+    const double bi = read.form->exponents(i), bj = read.form->exponents(j);
+    // MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ), free of ln A. With both exponents positive (both marginal products
+    // positive) it is positive by nature: ln MRTS = ln bᵢ − ln bⱼ + ln(xⱼ/xᵢ), g = 1/bᵢ at bᵢ and
+    // −1/bⱼ at bⱼ, bounds on the log scale. Else the gradient of MRTS itself, (xⱼ/xᵢ)/bⱼ at bᵢ and
+    // −MRTS/bⱼ at bⱼ, bounds MRTS ∓ t·se (bⱼ = 0 leaves the plain function's text).
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double rate) {
+        Eigen::VectorXd gradient = zeroGradient(read);
+        if (bi > 0 && bj > 0) {
+            gradient(1 + i) = 1 / bi;
+            gradient(1 + j) = -1 / bj;
+            return Linearised{rate, gradient, true};
+        }
+        gradient(1 + i) = bundle(j) / (bundle(i) * bj);
+        gradient(1 + j) = -rate / bj;
+        return Linearised{rate, gradient, false};
+    });
+}
+
 } // namespace isoquant

@@ -18,6 +18,7 @@
 // - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
 // - TFP = Y/f(x) of an observed Y (PRODTFP): g of ln TFP = −(1, ln x₁ … ln x_k, 0 …); log scale.
 // - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
+// - MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ) (PRODMRTS): log scale when bᵢ, bⱼ > 0 (positive by nature), else ∓ t·se.
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
@@ -43,6 +44,9 @@ CellTable productivityColumnWithBounds(const CellTable& model, const CellTable& 
                                        const CellTable& periods, const Cell& what);
 // PRODSECOND: as secondPartialColumn (decision_functions.hpp), then `what`.
 CellTable secondPartialColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what);
+// PRODMRTS: as technicalRateColumn (decision_functions.hpp), then `what`.
+CellTable technicalRateColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
                                         const Cell& second, const Cell& what);
 
 } // namespace isoquant
