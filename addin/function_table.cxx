@@ -56,7 +56,8 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 constexpr ArgumentInfo boundsArgument{
     "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
             "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
-            "marginal products, least-cost amounts, TFP and rates of substitution get bounds on the log scale. "
+            "marginal products, least-cost and budget amounts, TFP and rates of substitution get bounds on the log "
+            "scale. "
             "Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
@@ -230,7 +231,8 @@ std::vector<FunctionInfo> decisionFunctions()
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
-         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
+         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument,
+          boundsArgument}},
         {"prodProfit", "PRODPROFIT",
          "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
          "profit, a row or a column like the input prices (enter as an array formula). Under constant or "

@@ -69,8 +69,8 @@ constexpr ArgumentInfo boundsArgument{
     "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
                 "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
-                "Grenzprodukte, kostenminimale Mengen, TFP und Grenzraten der Substitution erhalten Grenzen auf der "
-                "Log-Skala. Form cobb-douglas."};
+                "Grenzprodukte, kostenminimale und budgetoptimale Mengen, TFP und Grenzraten der Substitution "
+                "erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -278,7 +278,7 @@ const Translation& germanTranslation()
          "Ausgaben die größte Ausbringung ergibt, dann diese Ausbringung; als Zeile oder Spalte wie die Preise (als "
          "Matrixformel eingeben).",
          {modelArgument, {"Budget", "Das Geld, das für die Faktoren ausgegeben wird, eine positive Zahl."},
-          pricesArgument}},
+          pricesArgument, boundsArgument}},
         {"prodProfit",
          "Gewinnmaximierender Plan zu den gegebenen Produkt- und Faktorpreisen: die Menge jedes Faktors, dann "
          "Ausbringung und Gewinn, als Zeile oder Spalte wie die Faktorpreise (als Matrixformel eingeben). Bei "

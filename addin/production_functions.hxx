@@ -94,7 +94,7 @@ public:
                                                const AnyTable& inputPrices, const AnyTable& inputI,
                                                const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,
-                                      const AnyTable& inputPrices) override;
+                                      const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
                                  const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,

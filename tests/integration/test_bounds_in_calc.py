@@ -217,12 +217,25 @@ class DerivedBoundsTest(CalcTestCase):
     def test_rate_of_substitution(self):
         self.check("mrts", lambda p: (p[1] / 150.0) / (p[2] / 200.0), True)
 
+    def test_budget_plan(self):
+        # The plan spends 1000 at prices (2, 3): x_L = bL / (bL + bC) * 1000 / 2.
+        def labour(p):
+            return p[1] / (p[1] + p[2]) * 1000.0 / 2.0
+
+        def made(p):
+            capital = p[2] / (p[1] + p[2]) * 1000.0 / 3.0
+            return np.exp(p[0] + p[1] * np.log(labour(p)) + p[2] * np.log(capital))
+        self.check("budget labour", labour, True)
+        self.check("budget output", made, True)
+
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P).
 FORMULAS = {
     "tfp": (30, '=PRODTFP($F$1:$L$21;$R$91;$P$91:$Q$91;;"%s")'),
     "second": (31, '=PRODSECOND($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
     "mrts": (32, '=PRODMRTS($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
+    "budget labour": (33, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;1)'),
+    "budget output": (34, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;3)'),
 }
 
 

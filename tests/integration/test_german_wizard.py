@@ -82,7 +82,7 @@ GERMAN_ARGUMENTS = {
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",
                     "unvollständige Zeilen"],
-    "PRODBUDGET": ["Modell", "Budget", "Faktorpreise"],
+    "PRODBUDGET": ["Modell", "Budget", "Faktorpreise", "Kennzahl"],
     "PRODPROFIT": ["Modell", "Produktpreis", "Faktorpreise"],
     "PRODISOQUANT": ["Modell", "Ausbringungsniveau", "Mengen von Faktor i", "Faktor i", "Faktor j"],
 }

@@ -1,5 +1,5 @@
 // Standard errors and bounds of derived numbers (issue 20: PRODOUTPUT, PRODMARGINAL,
-// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS with `what`) from a PRODFIT table with its covariance
+// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`) from a PRODFIT table with its covariance
 // block, against python3-statsmodels 0.13.5 (the covariance of the same OLS fit, classical and HC1)
 // and a numerical gradient of the same quantity in numpy, recomputed at test time by
 // tests/reference/bounds_check.py on the Cobb & Douglas (1928) data (tests/data/README.md) at three
@@ -38,6 +38,8 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 constexpr std::array<std::array<double, 2>, 3> bundles{{{150.0, 200.0}, {250.0, 400.0}, {100.0, 100.0}}};
 // bounds_check.py's PLANS: (target output, wL, wC), numbered as the bundles.
 constexpr std::array<std::array<double, 3>, 3> plans{{{180.0, 2.0, 3.0}, {300.0, 1.0, 1.0}, {120.0, 5.0, 2.0}}};
+// bounds_check.py's BUDGETS: (budget, wL, wC), numbered as the bundles.
+constexpr std::array<std::array<double, 3>, 3> budgets{{{1000.0, 2.0, 3.0}, {500.0, 1.0, 4.0}, {2000.0, 5.0, 2.0}}};
 // bounds_check.py's OBSERVED: one plant's output at each bundle, for its TFP.
 constexpr std::array<double, 3> observed{170.0, 260.0, 105.0};
 
@@ -77,6 +79,12 @@ double coreFigure(const isoquant::CellTable& model, const std::string& quantity,
         prices.set(0, 1, plans[bundle][2]);
         return isoquant::leastCostRowWithBounds(model, plans[bundle][0], prices, words.at(suffix))
             .number(0, name == "least_cost_L" ? 0 : 1);
+    } else if (name == "budget_L" || name == "budget_C" || name == "budget_output") {
+        isoquant::CellTable prices(1, 2);
+        prices.set(0, 0, budgets[bundle][1]);
+        prices.set(0, 1, budgets[bundle][2]);
+        const std::size_t cell = name == "budget_L" ? 0 : name == "budget_C" ? 1 : 2;
+        return isoquant::budgetRowWithBounds(model, budgets[bundle][0], prices, words.at(suffix)).number(0, cell);
     } else if (name == "tfp")
         result = isoquant::productivityColumnWithBounds(model, isoquant::singleCell(observed[bundle]), inputs, {},
                                                         words.at(suffix));
@@ -104,8 +112,8 @@ BOOST_AUTO_TEST_CASE(standard_errors_and_bounds_agree_with_statsmodels_and_numpy
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_BOUNDS_FIGURES"));
-    // 2 kinds of errors × 3 bundles × (8 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 38u);
+    // 2 kinds of errors × 3 bundles × (11 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 47u);
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string& errors = fields.at(0);

@@ -148,4 +148,30 @@ BOOST_AUTO_TEST_CASE(rate_of_substitution_bounds_and_an_undefined_rate)
                }) == "what: \"std. error\" " + noBlock);
 }
 
+BOOST_AUTO_TEST_CASE(budget_plan_bounds_on_the_log_scale)
+{
+    const auto table = tableWithBlock();
+    isoquant::CellTable prices(1, 2);
+    prices.set(0, 0, 2.0); // invented
+    prices.set(0, 1, 3.0);
+    const auto plain = isoquant::budgetRow(table, 1000.0, prices);
+    const auto at = [&](const char* word) {
+        return isoquant::budgetRowWithBounds(table, 1000.0, prices, std::string(word));
+    };
+    BOOST_TEST((at("value") == plain));
+    const auto lower = at("lower bound"), upper = at("upper bound");
+    BOOST_REQUIRE(plain.columns() == 3u);
+    for (std::size_t cell = 0; cell < 3; ++cell) {
+        BOOST_TEST_CONTEXT("cell " << cell)
+        {
+            BOOST_TEST(lower.number(0, cell) < plain.number(0, cell));
+            BOOST_TEST(plain.number(0, cell) < upper.number(0, cell));
+            BOOST_TEST(close(lower.number(0, cell) * upper.number(0, cell), plain.number(0, cell) * plain.number(0, cell)));
+        }
+    }
+    BOOST_TEST(messageOf([&] {
+                   isoquant::budgetRowWithBounds(typedModel(), 1000.0, prices, std::string("upper bound"));
+               }) == "what: \"upper bound\" " + noBlock);
+}
+
 BOOST_AUTO_TEST_SUITE_END()

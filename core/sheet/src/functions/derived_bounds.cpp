@@ -8,6 +8,7 @@
 
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 
 #include <cmath>
 
@@ -76,6 +77,36 @@ CellTable technicalRateColumnWithBounds(const CellTable& model, const CellTable&
         gradient(1 + j) = -rate / bj;
         return Linearised{rate, gradient, false};
     });
+}
+
+CellTable budgetRowWithBounds(const CellTable& model, const Cell& budget, const CellTable& prices, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable plan = budgetRow(model, budget, prices);
+    if (statistic == Statistic::value || !plan.isNumber(0, 0)) return plan; // a sentence (no plan) stays
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const Eigen::VectorXd& b = read.form->exponents;
+    const Eigen::Index k = b.size();
+    // The plan (every bᵢ > 0, as the plain function requires): xᵢ = (bᵢ/ν)·B/wᵢ, so g of ln xᵢ is
+    // [m = i]/bᵢ − 1/ν at each bₘ and 0 at ln A. Its output Y = A·Π xⱼ^bⱼ: g of ln Y is 1 at ln A
+    // and ln xₘ at bₘ (the amounts' own change adds Σⱼ bⱼ·([m = j]/bⱼ − 1/ν) = 0). All positive by
+    // nature: bounds on the log scale.
+    CellTable row(1, static_cast<std::size_t>(k + 1));
+    for (Eigen::Index cell = 0; cell <= k; ++cell) {
+        Eigen::VectorXd gradient = zeroGradient(read);
+        if (cell < k) {
+            gradient.segment(1, k).setConstant(-1 / b.sum());
+            gradient(1 + cell) += 1 / b(cell);
+        } else {
+            gradient(0) = 1;
+            for (Eigen::Index m = 0; m < k; ++m) gradient(1 + m) = std::log(plan.number(0, static_cast<std::size_t>(m)));
+        }
+        const auto column = static_cast<std::size_t>(cell);
+        const double result = answer(Linearised{plan.number(0, column), gradient, true}, read, statistic, 0);
+        if (!std::isfinite(result)) throw InputError("budget: gives a plan too large to represent");
+        row.set(0, column, result);
+    }
+    return row;
 }
 
 } // namespace isoquant

@@ -19,6 +19,7 @@
 // - TFP = Y/f(x) of an observed Y (PRODTFP): g of ln TFP = −(1, ln x₁ … ln x_k, 0 …); log scale.
 // - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
 // - MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ) (PRODMRTS): log scale when bᵢ, bⱼ > 0 (positive by nature), else ∓ t·se.
+// - the budget plan xᵢ = (bᵢ/ν)·B/wᵢ and its output (PRODBUDGET): log scale.
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
@@ -48,5 +49,7 @@ CellTable secondPartialColumnWithBounds(const CellTable& model, const CellTable&
 // PRODMRTS: as technicalRateColumn (decision_functions.hpp), then `what`.
 CellTable technicalRateColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
                                         const Cell& second, const Cell& what);
+// PRODBUDGET: as budgetRow (decision_functions.hpp), then `what` for the k amounts and the output.
+CellTable budgetRowWithBounds(const CellTable& model, const Cell& budget, const CellTable& prices, const Cell& what);
 
 } // namespace isoquant
