@@ -215,7 +215,9 @@ std::vector<FunctionInfo> shapeFunctions()
          "the two inputs per 1% change in their relative price along the isoquant.",
          {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
-                   "given)."}}},
+                   "given)."},
+          {"what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\", as for PRODMRTS. The "
+                   "cobb-douglas form fixes every elasticity of substitution at 1: std. error 0, both bounds 1."}}},
     };
 }
 

@@ -231,7 +231,10 @@ const Translation& germanTranslation()
          "Isoquante.",
          {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"Art", "\"direct\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
-                  "angegebenen Reihenfolge)."}}},
+                  "angegebenen Reihenfolge)."},
+          {"Kennzahl", "\"value\" (Standard), \"std. error\", \"lower bound\" oder \"upper bound\", wie bei PRODMRTS. "
+                       "Die Form cobb-douglas legt jede Substitutionselastizität auf 1 fest: Standardfehler 0, beide "
+                       "Grenzen 1."}}},
         {"prodLeastCost",
          "Kostenminimale Faktormengen, mit denen die Zielausbringung zu den gegebenen Faktorpreisen produziert wird: "
          "eine Menge je Faktor, als Zeile oder Spalte wie die Preise (als Matrixformel eingeben).",

@@ -226,12 +226,13 @@ Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs,
 }
 
 Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                          const AnyTable& inputJ, const Any& kind)
+                                          const AnyTable& inputJ, const Any& kind, const Any& what)
 {
     return guardedTable([&] {
-        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                  toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
-                                  toSingleCell(kind, "kind"));
+        return substitutionColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
+                                            toSingleCell(Any(inputI), "input i"),
+                                            toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"),
+                                            toSingleCell(what, "what"));
     });
 }
 

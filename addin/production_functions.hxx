@@ -78,7 +78,8 @@ public:
     css::uno::Any SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                     const AnyTable& inputJ, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                            const AnyTable& inputJ, const css::uno::Any& kind) override;
+                                            const AnyTable& inputJ, const css::uno::Any& kind,
+                                            const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
                                     const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,

@@ -170,7 +170,7 @@ class DerivedBoundsTest(CalcTestCase):
         set_values(cls.sheet, "P91", [[150.0, 200.0, 170.0, 2.0, 3.0]])
         set_array_formula(cls.sheet, "F1:L21", "=PRODFIT(B1:B25;C1:D25;;;;;;;;;;TRUE())")
         for name, (row, formula) in FORMULAS.items():
-            for column, what in zip("NOP", ("std. error", "lower bound", "upper bound")):
+            for column, what in zip("NOPQ", ("std. error", "lower bound", "upper bound", "value")):
                 set_formula(cls.sheet, "%s%d" % (column, row), formula % what)
         recalc(CALC.doc)
 
@@ -228,14 +228,23 @@ class DerivedBoundsTest(CalcTestCase):
         self.check("budget labour", labour, True)
         self.check("budget output", made, True)
 
+    def test_substitution_elasticity_has_no_sampling_error_under_cobb_douglas(self):
+        # Every cobb-douglas parameter gives the elasticity 1 (README), so its gradient is 0.
+        row = FORMULAS["substitution"][0]
+        self.assertEqual(get_cell(self.sheet, "N%d" % row), 0.0)
+        plain = get_cell(self.sheet, "Q%d" % row)
+        self.assert_relative(plain, 1.0, 1e-12, "PRODSUBSTITUTION of cobb-douglas")
+        self.assertEqual([get_cell(self.sheet, "%s%d" % (c, row)) for c in "OP"], [plain, plain])
 
-# Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P).
+
+# Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P, Q).
 FORMULAS = {
     "tfp": (30, '=PRODTFP($F$1:$L$21;$R$91;$P$91:$Q$91;;"%s")'),
     "second": (31, '=PRODSECOND($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
     "mrts": (32, '=PRODMRTS($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
     "budget labour": (33, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;1)'),
     "budget output": (34, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;3)'),
+    "substitution": (35, '=PRODSUBSTITUTION($F$1:$L$21;$P$91:$Q$91;"L";"C";"allen";"%s")'),
 }
 
 

@@ -76,7 +76,7 @@ GERMAN_ARGUMENTS = {
     "PRODINPUTRETURNS": AT_BUNDLES + ["Faktor"],
     "PRODPAIR": AT_BUNDLES + ["Faktor i", "Faktor j"],
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
-    "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art"],
+    "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art", "Kennzahl"],
     "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",

@@ -174,4 +174,30 @@ BOOST_AUTO_TEST_CASE(budget_plan_bounds_on_the_log_scale)
                }) == "what: \"upper bound\" " + noBlock);
 }
 
+// The cobb-douglas form fixes every elasticity of substitution at 1: no sampling error under it.
+BOOST_AUTO_TEST_CASE(substitution_elasticity_of_cobb_douglas_has_no_sampling_error)
+{
+    const auto table = tableWithBlock();
+    const auto bundles = twoBundles();
+    const isoquant::Cell labour = std::string("L"), capital = std::string("C");
+    for (const char* kind : {"direct", "allen", "morishima"}) {
+        const isoquant::Cell chosen = std::string(kind);
+        const auto plain = isoquant::substitutionColumn(table, bundles, labour, capital, chosen);
+        const auto at = [&](const char* word) {
+            return isoquant::substitutionColumnWithBounds(table, bundles, labour, capital, chosen, std::string(word));
+        };
+        BOOST_TEST_CONTEXT(kind)
+        {
+            BOOST_TEST((at("value") == plain));
+            BOOST_TEST(at("std. error").number(1, 0) == 0.0);
+            BOOST_TEST(at("lower bound").number(2, 0) == plain.number(2, 0));
+            BOOST_TEST(at("upper bound").number(2, 0) == plain.number(2, 0));
+        }
+    }
+    BOOST_TEST(messageOf([&] {
+                   isoquant::substitutionColumnWithBounds(typedModel(), bundles, labour, capital, {},
+                                                          std::string("std. error"));
+               }) == "what: \"std. error\" " + noBlock);
+}
+
 BOOST_AUTO_TEST_SUITE_END()

@@ -109,4 +109,20 @@ CellTable budgetRowWithBounds(const CellTable& model, const Cell& budget, const 
     return row;
 }
 
+CellTable substitutionColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                       const Cell& second, const Cell& kind, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = substitutionColumn(model, inputs, first, second, kind);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, false);
+    // The cobb-douglas form fixes the direct, Allen and Morishima elasticities at 1 whatever its
+    // parameters (σᵢⱼ = −fᵢfⱼ(xᵢfᵢ + xⱼfⱼ)/(xᵢxⱼ(fᵢᵢfⱼ² − 2fᵢⱼfᵢfⱼ + fⱼⱼfᵢ²)) = 1 for fᵢ = bᵢY/xᵢ):
+    // the gradient is 0, so the std. error is 0 and both bounds are the value. The form allows the
+    // data no say; only another form (ces, translog) lets them.
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd&, double elasticity) {
+        return Linearised{elasticity, zeroGradient(read), false};
+    });
+}
+
 } // namespace isoquant

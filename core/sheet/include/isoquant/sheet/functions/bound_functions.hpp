@@ -20,6 +20,8 @@
 // - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
 // - MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ) (PRODMRTS): log scale when bᵢ, bⱼ > 0 (positive by nature), else ∓ t·se.
 // - the budget plan xᵢ = (bᵢ/ν)·B/wᵢ and its output (PRODBUDGET): log scale.
+// - elasticity of substitution (PRODSUBSTITUTION): 1 for every cobb-douglas parameter, so se 0 and
+//   both bounds the value (the form, not the data, fixes it).
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
@@ -51,5 +53,8 @@ CellTable technicalRateColumnWithBounds(const CellTable& model, const CellTable&
                                         const Cell& second, const Cell& what);
 // PRODBUDGET: as budgetRow (decision_functions.hpp), then `what` for the k amounts and the output.
 CellTable budgetRowWithBounds(const CellTable& model, const Cell& budget, const CellTable& prices, const Cell& what);
+// PRODSUBSTITUTION: as substitutionColumn (decision_functions.hpp), then `what`.
+CellTable substitutionColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& first,
+                                       const Cell& second, const Cell& kind, const Cell& what);
 
 } // namespace isoquant
