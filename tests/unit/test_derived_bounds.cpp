@@ -102,6 +102,31 @@ BOOST_AUTO_TEST_CASE(tfp_bounds_on_the_log_scale)
                }) == "what: \"std. error\" " + noBlock);
 }
 
+// With a trend, PRODTFP's periods compare each row with ln A + λ·(t − t_last), a ln A the covariance
+// block does not cover (λ is not in it): the words get the message, "value" answers as before.
+BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_gets_a_message)
+{
+    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
+    isoquant::CellTable years(24, 1);
+    for (std::size_t row = 0; row < 24; ++row) years.set(row, 0, 1899.0 + static_cast<double>(row));
+    arguments.trend = years;
+    const auto fit = isoquant::fitFromArguments(arguments);
+    const auto table = isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+    isoquant::CellTable output(2, 1), bundles(2, 2), periods(2, 1);
+    for (std::size_t row = 0; row < 2; ++row) {
+        output.set(row, 0, 170.0 + 10.0 * static_cast<double>(row)); // invented
+        bundles.set(row, 0, 150.0);
+        bundles.set(row, 1, 200.0);
+        periods.set(row, 0, 1910.0 + static_cast<double>(row));
+    }
+    BOOST_TEST((isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("value")) ==
+                isoquant::productivityColumn(table, output, bundles, periods)));
+    BOOST_TEST(messageOf([&] {
+                   isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("upper bound"));
+               }) == "what: \"upper bound\" is not available when the model's ln A is shifted (controls at their "
+                     "means, effects or a trend): the covariance block does not cover that ln A");
+}
+
 BOOST_AUTO_TEST_CASE(second_partials_bounds_around_the_value)
 {
     const auto table = tableWithBlock();
