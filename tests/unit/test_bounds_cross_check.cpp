@@ -1,10 +1,11 @@
 // Standard errors and bounds of derived numbers (issue 20: PRODOUTPUT, PRODMARGINAL,
-// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`) from a PRODFIT table with its covariance
-// block, against python3-statsmodels 0.13.5 (the covariance of the same OLS fit, classical and HC1)
-// and a numerical gradient of the same quantity in numpy, recomputed at test time by
-// tests/reference/bounds_check.py on the Cobb & Douglas (1928) data (tests/data/README.md) at three
-// invented bundles and plans (the least-cost amounts solved there from the first-order conditions,
-// independently of the core's closed form).
+// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`)
+// from a PRODFIT table with its covariance block, against python3-statsmodels 0.13.5 (the
+// covariance of the same OLS fit, classical and HC1) and a numerical gradient of the same quantity
+// in numpy, recomputed at test time by tests/reference/bounds_check.py on the Cobb & Douglas (1928)
+// data (tests/data/README.md) at three invented bundles, plans, budgets and observed outputs (the
+// least-cost amounts and budget plans solved there from first-order conditions, independently of
+// the core's closed forms).
 //
 // Tolerance: 1e-7 relative on every figure (the issue's). The covariance matrices agree to about
 // 1e-12 (two factorisations of the same least squares) and the central-difference gradient to

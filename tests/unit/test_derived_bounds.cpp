@@ -191,7 +191,8 @@ BOOST_AUTO_TEST_CASE(budget_plan_bounds_on_the_log_scale)
         {
             BOOST_TEST(lower.number(0, cell) < plain.number(0, cell));
             BOOST_TEST(plain.number(0, cell) < upper.number(0, cell));
-            BOOST_TEST(close(lower.number(0, cell) * upper.number(0, cell), plain.number(0, cell) * plain.number(0, cell)));
+            const double value = plain.number(0, cell);
+            BOOST_TEST(close(lower.number(0, cell) * upper.number(0, cell), value * value));
         }
     }
     BOOST_TEST(messageOf([&] {

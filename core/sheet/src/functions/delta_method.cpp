@@ -16,7 +16,10 @@ namespace {
 constexpr std::array<const char*, 6> statisticWords{"value",       "std. error",       "lower bound",
                                                     "upper bound", "prediction lower", "prediction upper"};
 
-std::string tooLarge(std::size_t row) { return "inputs: row " + std::to_string(row) + " gives a result too large to represent"; }
+std::string tooLarge(std::size_t row)
+{
+    return "inputs: row " + std::to_string(row) + " gives a result too large to represent";
+}
 
 } // namespace
 

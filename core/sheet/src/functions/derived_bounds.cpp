@@ -99,7 +99,8 @@ CellTable budgetRowWithBounds(const CellTable& model, const Cell& budget, const 
             gradient(1 + cell) += 1 / b(cell);
         } else {
             gradient(0) = 1;
-            for (Eigen::Index m = 0; m < k; ++m) gradient(1 + m) = std::log(plan.number(0, static_cast<std::size_t>(m)));
+            for (Eigen::Index m = 0; m < k; ++m)
+                gradient(1 + m) = std::log(plan.number(0, static_cast<std::size_t>(m)));
         }
         const auto column = static_cast<std::size_t>(cell);
         const double result = answer(Linearised{plan.number(0, column), gradient, true}, read, statistic, 0);
