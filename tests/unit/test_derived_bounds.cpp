@@ -10,6 +10,7 @@
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
+#include "cell_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
@@ -30,29 +31,16 @@ isoquant::CellTable tableWithBlock()
 
 isoquant::CellTable typedModel()
 {
-    isoquant::CellTable typed(4, 2);
-    typed.set(0, 0, "form");
-    typed.set(0, 1, "cobb-douglas");
-    typed.set(1, 0, "ln A");
-    typed.set(1, 1, 0.1);
-    typed.set(2, 0, "L");
-    typed.set(2, 1, 0.7);
-    typed.set(3, 0, "C");
-    typed.set(3, 1, 0.3);
-    return typed;
+    return isoquant::testing::typedRange(
+        {{std::string("form"), std::string("cobb-douglas")}, {std::string("ln A"), 0.1}, {std::string("L"), 0.7},
+         {std::string("C"), 0.3}});
 }
 
 // A header row and two bundles (L, C), invented.
 isoquant::CellTable twoBundles()
 {
-    isoquant::CellTable bundles(3, 2);
-    bundles.set(0, 0, "L");
-    bundles.set(0, 1, "C");
-    bundles.set(1, 0, 150.0);
-    bundles.set(1, 1, 200.0);
-    bundles.set(2, 0, 250.0);
-    bundles.set(2, 1, 400.0);
-    return bundles;
+    return isoquant::testing::typedRange(
+        {{std::string("L"), std::string("C")}, {150.0, 200.0}, {250.0, 400.0}});
 }
 
 const std::string noBlock = "needs the model's covariance block; this model has none (a typed model, or a PRODFIT "
