@@ -78,11 +78,13 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
     });
 }
 
-Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices)
+Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices,
+                                    const Any& what)
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(budgetRow(models_.table(model, "model"), toSingleCell(Any(budget), "budget"), prices),
+        return orientedLike(budgetRowWithBounds(models_.table(model, "model"), toSingleCell(Any(budget), "budget"),
+                                                prices, toSingleCell(what, "what")),
                             prices);
     });
 }

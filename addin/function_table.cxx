@@ -56,7 +56,9 @@ constexpr ArgumentInfo inputArgument{"input", "Which input: its number (1 for th
 constexpr ArgumentInfo boundsArgument{
     "what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\": by the delta method from the "
             "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
-            "marginal products and least-cost amounts get bounds on the log scale. Cobb-douglas form."};
+            "marginal products, least-cost and budget amounts, TFP and rates of substitution get bounds on the log "
+            "scale. "
+            "Cobb-douglas form."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"input i", "The first input: its number (1 for the first) or its label."};
@@ -136,7 +138,8 @@ std::vector<FunctionInfo> growthFunctions()
                      "names the inputs."},
           {"periods", "Optional, for a model with a trend: the period (year) of each row, as many rows as output. "
                       "Each row is then compared with its own period's technology: ln A + technical change per "
-                      "period × (period - latest period)."}}},
+                      "period × (period - latest period)."},
+          boundsArgument}},
         {"prodGrowth", "PRODGROWTH",
          "Growth accounting from one period to the next: output growth split into each input's contribution, a "
          "scale effect and TFP growth (the residual), in log differences, plus a total row. Returns a table (enter "
@@ -190,7 +193,8 @@ std::vector<FunctionInfo> shapeFunctions()
          "Second partial derivative of output for each row of inputs: how the marginal product of input i changes "
          "with one more unit of input j (of input i itself when j is omitted).",
          {modelArgument, bundlesArgument, firstInputArgument,
-          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."}}},
+          {"input j", "Optional second input: its number or its label. Omitted: the same as input i."},
+          boundsArgument}},
         {"prodInputReturns", "PRODINPUTRETURNS",
          "Returns to one input alone for each row of inputs: diminishing, constant or increasing, by whether its "
          "marginal product falls, stays or rises as more of it is used, the other inputs held. Says so where the "
@@ -205,13 +209,15 @@ std::vector<FunctionInfo> shapeFunctions()
         {"prodMrts", "PRODMRTS",
          "Marginal rate of technical substitution for each row of inputs: the units of input j that one more unit "
          "of input i replaces at unchanged output (marginal product of i over that of j).",
-         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument, boundsArgument}},
         {"prodSubstitution", "PRODSUBSTITUTION",
          "Elasticity of substitution between inputs i and j for each row of inputs: the % change in the ratio of "
          "the two inputs per 1% change in their relative price along the isoquant.",
          {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"kind", "\"direct\" (default), \"allen\" or \"morishima\" (not symmetric: i and j in the order "
-                   "given)."}}},
+                   "given)."},
+          {"what", "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\", as for PRODMRTS. The "
+                   "cobb-douglas form fixes every elasticity of substitution at 1: std. error 0, both bounds 1."}}},
     };
 }
 
@@ -227,7 +233,8 @@ std::vector<FunctionInfo> decisionFunctions()
         {"prodBudget", "PRODBUDGET",
          "Best split of a fixed budget among the inputs: the amount of each input that gives the most output for "
          "exactly that spending, then that output; a row or a column like the prices (enter as an array formula).",
-         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument}},
+         {modelArgument, {"budget", "The money to spend on the inputs, a positive number."}, pricesArgument,
+          boundsArgument}},
         {"prodProfit", "PRODPROFIT",
          "Profit-maximising plan at the given output and input prices: the amount of each input, then output and "
          "profit, a row or a column like the input prices (enter as an array formula). Under constant or "

@@ -145,11 +145,12 @@ Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 }
 
 Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                                      const Any& periods)
+                                      const Any& periods, const Any& what)
 {
     return guardedTable([&] {
-        return productivityColumn(models_.table(model, "model"), toCellTable(output, "output"),
-                                  toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"));
+        return productivityColumnWithBounds(models_.table(model, "model"), toCellTable(output, "output"),
+                                            toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"),
+                                            toSingleCell(what, "what"));
     });
 }
 
@@ -188,11 +189,12 @@ Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inp
 }
 
 Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                    const Any& inputJ)
+                                    const Any& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return secondPartialColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"));
+        return secondPartialColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
+                                             toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"),
+                                             toSingleCell(what, "what"));
     });
 }
 
@@ -214,21 +216,23 @@ Any ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs,
 }
 
 Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                  const AnyTable& inputJ)
+                                  const AnyTable& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return technicalRateColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
+        return technicalRateColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
+                                             toSingleCell(Any(inputI), "input i"),
+                                             toSingleCell(Any(inputJ), "input j"), toSingleCell(what, "what"));
     });
 }
 
 Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                          const AnyTable& inputJ, const Any& kind)
+                                          const AnyTable& inputJ, const Any& kind, const Any& what)
 {
     return guardedTable([&] {
-        return substitutionColumn(models_.table(model, "model"), toCellTable(inputs, "inputs"),
-                                  toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
-                                  toSingleCell(kind, "kind"));
+        return substitutionColumnWithBounds(models_.table(model, "model"), toCellTable(inputs, "inputs"),
+                                            toSingleCell(Any(inputI), "input i"),
+                                            toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"),
+                                            toSingleCell(what, "what"));
     });
 }
 
