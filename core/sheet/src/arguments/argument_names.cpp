@@ -2,6 +2,11 @@
 
 namespace isoquant {
 
+InputError argumentError(const std::string& argument, const std::string& detail)
+{
+    return InputError(argument + ": " + detail);
+}
+
 std::string argumentHolding(DataPart part)
 {
     switch (part) {

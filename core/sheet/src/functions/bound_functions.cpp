@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/bound_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/delta_method.hpp"
 
 #include "isoquant/sheet/functions/production_functions.hpp"
@@ -29,7 +30,7 @@ double residualSd(const CellTable& range)
         if (range.isText(row, 0) && equalsIgnoringCase(range.text(row, 0), residualSdLabel) && range.columns() > 1 &&
             range.isNumber(row, 1) && range.number(row, 1) >= 0)
             return range.number(row, 1);
-    throw InputError("what: the prediction bounds need the table's \"residual SD\" row");
+    throw argumentError(argument::what, "the prediction bounds need the table's \"residual SD\" row");
 }
 
 // ln xᵢ of the least-cost plan for y at prices w (homogeneous_cost.hpp, Cobb-Douglas):
@@ -57,13 +58,14 @@ CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, co
     if (statistic == Statistic::value) return leastCostAnyRow(model, target, prices); // production or cost model
     const BoundsModel read = readBoundsModel(model, statistic, true);
     if ((read.form->exponents.array() <= 0).any())
-        throw InputError("what: \"" + word(statistic) + "\" needs every exponent positive, as the least-cost plan does");
-    const Eigen::VectorXd wages = readPrices(prices, "input prices", read.form->exponents.size());
-    const double level = readPositiveNumber(target, "target output");
+        throw argumentError(argument::what,
+                            "\"" + word(statistic) + "\" needs every exponent positive, as the least-cost plan does");
+    const Eigen::VectorXd wages = readPrices(prices, argument::inputPrices, read.form->exponents.size());
+    const double level = readPositiveNumber(target, argument::targetOutput);
     CellTable row(1, static_cast<std::size_t>(wages.size()));
     for (Eigen::Index input = 0; input < wages.size(); ++input) {
         const double result = answer(leastCostAmount(read, wages, level, input), read, statistic, 0);
-        if (!std::isfinite(result)) throw InputError("target output: gives amounts too large to represent");
+        if (!std::isfinite(result)) throw argumentError(argument::targetOutput, "gives amounts too large to represent");
         row.set(0, static_cast<std::size_t>(input), result);
     }
     return row;
@@ -76,8 +78,8 @@ CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& input
     const BoundsModel read = readBoundsModel(model, statistic, true);
     const bool prediction = statistic == Statistic::predictionLower || statistic == Statistic::predictionUpper;
     double factor = 1;
-    if (readSwitchArgument(mean, "mean") && !prediction) {
-        if (!read.model.smearingFactor) throw InputError("mean: the model has no \"smearing factor\" row");
+    if (readSwitchArgument(mean, argument::mean) && !prediction) {
+        if (!read.model.smearingFactor) throw argumentError(argument::mean, "the model has no \"smearing factor\" row");
         factor = *read.model.smearingFactor;
     }
     const double sigma = prediction ? residualSd(model.cells()) : 0;
@@ -94,7 +96,7 @@ CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTab
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return marginalProductColumn(model, inputs, input);
     const BoundsModel read = readBoundsModel(model, statistic, true);
-    const Eigen::Index chosen = readInputSelector(input, read.model, "input");
+    const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
     const double exponent = read.form->exponents(chosen);
     return columnOfBounds(
         inputs, read, statistic, 0, "marginal product of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
@@ -119,7 +121,7 @@ CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& i
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return elasticityColumn(model, inputs, input);
     const BoundsModel read = readBoundsModel(model, statistic, false);
-    const Eigen::Index chosen = readInputSelector(input, read.model, "input");
+    const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
     Eigen::VectorXd gradient = zeroGradient(read);
     gradient(1 + chosen) = 1;
     return columnOfBounds(inputs, read, statistic, 0,

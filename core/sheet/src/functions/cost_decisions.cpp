@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/cost_decisions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
@@ -45,7 +46,7 @@ Eigen::Index readPriceSelector(const Cell& selector, const CostModel& cost, cons
 
 PriceElasticityKind readPriceElasticityKind(const Cell& cell)
 {
-    return readChoice<PriceElasticityKind>(cell, "kind", "a kind",
+    return readChoice<PriceElasticityKind>(cell, argument::kind, "a kind",
                                            {{"demand", PriceElasticityKind::demand},
                                             {"allen", PriceElasticityKind::allen},
                                             {"morishima", PriceElasticityKind::morishima}},
@@ -62,8 +63,8 @@ CellTable rowTable(const Eigen::VectorXd& values)
 CellTable costModelLeastCost(const CellTable& model, const Cell& target, const CellTable& priceRange)
 {
     const CostModel cost = readCostModel(model);
-    const double level = readPositiveNumber(target, "target output");
-    const Eigen::VectorXd prices = readPrices(priceRange, "input prices", cost.prices.size());
+    const double level = readPositiveNumber(target, argument::targetOutput);
+    const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     const Eigen::VectorXd shares = fittedShares(cost, level, prices);
     for (Eigen::Index i = 0; i < shares.size(); ++i)
         if (!(shares(i) > 0))
@@ -75,8 +76,9 @@ CellTable costModelLeastCost(const CellTable& model, const Cell& target, const C
     for (Eigen::Index i = 0; i < shares.size(); ++i) {
         amounts(i) = std::exp(std::log(shares(i)) + logCost - std::log(prices(i)));
         if (!std::isfinite(amounts(i)) || amounts(i) == 0)
-            throw InputError("target output: the plan is not representable: the amount of " +
-                             quoted(cost.priceLabels[static_cast<std::size_t>(i)]) + " is beyond what a cell holds");
+            throw argumentError(argument::targetOutput, "the plan is not representable: the amount of " +
+                                                            quoted(cost.priceLabels[static_cast<std::size_t>(i)]) +
+                                                            " is beyond what a cell holds");
     }
     return rowTable(amounts);
 }
@@ -114,7 +116,7 @@ CellTable productionEfficientScale(const ModelTable& model, const CellTable& pri
 {
     const ProductionModel& production = model.production();
     const Eigen::VectorXd prices =
-        readPrices(priceRange, "input prices", static_cast<Eigen::Index>(production.inputLabels.size()));
+        readPrices(priceRange, argument::inputPrices, static_cast<Eigen::Index>(production.inputLabels.size()));
     if (const auto scale = production.technology->constantScaleElasticity())
         return singleCell(efficientScaleOfLogQuadratic(1.0 / *scale, 0.0).whyNone);
     const CellTable priceRow = rowTable(prices);
@@ -152,7 +154,7 @@ CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRang
 {
     if (!isCostModel(model.cells())) return productionEfficientScale(model, priceRange);
     const CostModel cost = readCostModel(model.cells());
-    const Eigen::VectorXd prices = readPrices(priceRange, "input prices", cost.prices.size());
+    const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     // ε(y) = a + b·ln y with a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy
     const double atUnitOutput = cost.output + cost.priceOutput.dot(prices.array().log().matrix());
     const EfficientScale scale = efficientScaleOfLogQuadratic(atUnitOutput, cost.outputSquared);
@@ -192,21 +194,22 @@ CellTable priceElasticityColumn(const ModelTable& model, const CellTable& output
     const ProductionModel production = costModel ? ProductionModel{} : model.production();
     Eigen::Index i = 0, j = 0;
     if (costModel) {
-        i = readPriceSelector(first, cost, "input i");
-        j = readPriceSelector(second, cost, "input j");
+        i = readPriceSelector(first, cost, argument::firstInput);
+        j = readPriceSelector(second, cost, argument::secondInput);
     } else {
-        i = readInputSelector(first, production, "input i");
-        j = readInputSelector(second, production, "input j");
+        i = readInputSelector(first, production, argument::firstInput);
+        j = readInputSelector(second, production, argument::secondInput);
     }
     const PriceElasticityKind chosen = readPriceElasticityKind(kind);
     if (chosen == PriceElasticityKind::morishima && i == j)
-        throw InputError("input j: is the same input as input i; the Morishima elasticity needs two different inputs");
-    const NumericColumns outputs = readNumericColumns(outputRange, "output", ValueRule::positive, "output");
+        throw argumentError(argument::secondInput,
+                            "is the same input as input i; the Morishima elasticity needs two different inputs");
+    const NumericColumns outputs = readNumericColumns(outputRange, argument::output, ValueRule::positive, "output");
     if (outputs.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(outputs.values.cols()));
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(outputs.values.cols()));
     const Eigen::Index n = outputs.values.rows();
     const auto k = costModel ? cost.prices.size() : static_cast<Eigen::Index>(production.inputLabels.size());
-    const Eigen::MatrixXd priceRows = readPriceRows(priceRange, n, k, "output");
+    const Eigen::MatrixXd priceRows = readPriceRows(priceRange, n, k, argument::output);
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         const std::string place = "output: row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow());
@@ -228,12 +231,13 @@ CellTable regularityAnyColumn(const ModelTable& model, const CellTable& rows)
 {
     if (!isCostModel(model.cells())) return regularityColumn(model, rows);
     const CostModel cost = readCostModel(model.cells());
-    const NumericColumns values = readNumericColumns(rows, "inputs", ValueRule::positive, "column");
+    const NumericColumns values = readNumericColumns(rows, argument::inputs, ValueRule::positive, "column");
     const Eigen::Index k = cost.prices.size();
     if (values.values.cols() != k + 1)
-        throw InputError("inputs: has " + std::to_string(values.values.cols()) +
-                         " columns; with a cost model give the output and then one price per input (" +
-                         std::to_string(k + 1) + " columns)");
+        throw argumentError(argument::inputs,
+                            "has " + std::to_string(values.values.cols()) +
+                                " columns; with a cost model give the output and then one price per input (" +
+                                std::to_string(k + 1) + " columns)");
     CellTable column(static_cast<std::size_t>(values.values.rows()), 1);
     for (Eigen::Index row = 0; row < values.values.rows(); ++row) {
         const double level = values.values(row, 0);

@@ -1,5 +1,6 @@
 #include "functions/delta_method.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
@@ -33,7 +34,7 @@ Statistic readWhat(const Cell& what, bool allowsPrediction)
     std::string list;
     for (std::size_t word = 0; word < known; ++word)
         list += std::string(word == 0 ? "" : word + 1 == known ? " or " : ", ") + "\"" + statisticWords[word] + "\"";
-    throw InputError("what: give " + list);
+    throw argumentError(argument::what, "give " + list);
 }
 
 std::string word(Statistic statistic) { return statisticWords[static_cast<std::size_t>(statistic)]; }
@@ -65,7 +66,7 @@ double answer(const Linearised& quantity, const BoundsModel& read, Statistic sta
         for (Eigen::Index j = 0; j < g.size(); ++j)
             if (g(i) != 0 && g(j) != 0) variance += g(i) * read.block->matrix(i, j) * g(j);
     if (!std::isfinite(variance))
-        throw InputError("what: the covariance block has no variance for a parameter this quantity uses");
+        throw argumentError(argument::what, "the covariance block has no variance for a parameter this quantity uses");
     const double spread = std::sqrt(variance);
     const double t = read.critical;
     if (!quantity.logScale) {

@@ -4,6 +4,7 @@
 // the Cobb-Douglas form given beside each function.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/delta_method.hpp"
 
 #include "isoquant/sheet/functions/decision_functions.hpp"
@@ -37,8 +38,8 @@ CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable
     const CellTable values = secondPartialColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
     const BoundsModel read = readBoundsModel(model, statistic, true);
-    const Eigen::Index i = readInputSelector(first, read.model, "input i");
-    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, "input j");
+    const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
     const Eigen::VectorXd& b = read.form->exponents;
     // fᵢⱼ = c·Y/(xᵢxⱼ) with c = bᵢ(bⱼ − δᵢⱼ): g = fᵢⱼ·(g of ln Y) + Y/(xᵢxⱼ)·∂c/∂θ, where
     // ∂c/∂bᵢ = bⱼ − δᵢⱼ and ∂c/∂bⱼ = bᵢ (together 2bᵢ − 1 when i = j). Its sign varies with the
@@ -59,8 +60,8 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
     const CellTable values = technicalRateColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
     const BoundsModel read = readBoundsModel(model, statistic, false);
-    const Eigen::Index i = readInputSelector(first, read.model, "input i");
-    const Eigen::Index j = readInputSelector(second, read.model, "input j");
+    const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+    const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
     const double bi = read.form->exponents(i), bj = read.form->exponents(j);
     // MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ), free of ln A. With both exponents positive (both marginal products
     // positive) it is positive by nature: ln MRTS = ln bᵢ − ln bⱼ + ln(xⱼ/xᵢ), g = 1/bᵢ at bᵢ and
@@ -104,7 +105,7 @@ CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const
         }
         const auto column = static_cast<std::size_t>(cell);
         const double result = answer(Linearised{plan.number(0, column), gradient, true}, read, statistic, 0);
-        if (!std::isfinite(result)) throw InputError("budget: gives a plan too large to represent");
+        if (!std::isfinite(result)) throw argumentError(argument::budget, "gives a plan too large to represent");
         row.set(0, column, result);
     }
     return row;

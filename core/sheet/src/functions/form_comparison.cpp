@@ -58,7 +58,7 @@ std::string cesUnusable(const ProductionFit& ces)
 
 CellTable compareForms(const FitArguments& arguments)
 {
-    const double level = readLevelArgument(arguments.level, "level");
+    const double level = readLevelArgument(arguments.level, argument::level);
     // Read once; each form is fitted to the same data (the Cobb-Douglas first: its errors are the call's).
     FitInput input = readFitInput(arguments);
     std::array<Candidate, 3> candidates;

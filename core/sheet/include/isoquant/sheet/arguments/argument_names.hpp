@@ -52,6 +52,9 @@ inline constexpr char outputs[] = "outputs";
 inline constexpr char orientation[] = "orientation";
 } // namespace argument
 
+// The error about `argument`, written by the sheet layer: "<argument>: <detail>".
+InputError argumentError(const std::string& argument, const std::string& detail);
+
 // The argument that holds `part` of the data in the fitting functions (PRODFIT, PRODCOSTFIT, …):
 // periods come from trend, the kind of standard errors from errors, prices from input prices.
 std::string argumentHolding(DataPart part);
