@@ -58,7 +58,7 @@ Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTab
 Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
                                      const Any& form, const Any& shares, const Any& errors, const Any& level,
                                      const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                     const Any& incompleteRows)
+                                     const Any& incompleteRows, const Any& inefficiency)
 {
     return guardedTable([&] {
         CostFitArguments arguments;
@@ -74,6 +74,7 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
         arguments.effects = toSingleCell(effects, "effects");
         arguments.trend = toOptionalTable(trend, "trend");
         arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
+        arguments.inefficiency = toSingleCell(inefficiency, "inefficiency");
         return costFitTable(costFitFromArguments(arguments));
     });
 }
