@@ -108,6 +108,11 @@ class CostFrontierTableTest(CostFrontierTestCase):
         self.assertEqual(self.rows["form"][1], "cobb-douglas cost")
         self.assertEqual(self.rows["R2"][1], "n/a")
         self.assertLess(self.rows["inefficiency test"][4], 0.01)  # 120 rows with sigma_u = 0.3: inefficiency found
+        # The README's example shows this table rounded to 4 digits: it must stay what Calc computes.
+        for row, shown in ((1, 0.6539), (2, 0.8419), (3, 0.4971), (7, 0.05567), (8, 0.3041), (9, 5.462),
+                           (15, 38.00), (19, 0.7946)):
+            self.assertAlmostEqual(self.table[row][1], shown, delta=5e-4 * abs(shown),
+                                   msg="README example, row %s" % self.table[row][0])
 
     def test_maximum_against_scipy(self):
         import numpy as np
