@@ -31,7 +31,7 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_values
 
-from .support import module_session
+from .support import CalcTestCase, module_session
 
 FORMULA_TOLERANCE = 1e-12
 MAXIMUM_TOLERANCE = 1e-8
@@ -74,15 +74,7 @@ def regression(data):
     return design, np.log(array[:, 0] / array[:, 4])
 
 
-class CostFrontierTestCase(unittest.TestCase):
-
-    def assert_close(self, value, expected, tolerance, what):
-        self.assertIsInstance(value, float, "%s: expected a number, the cell shows %r" % (what, value))
-        self.assertLessEqual(abs(value - expected), tolerance * abs(expected),
-                             "%s: %r, expected %r (relative tolerance %g)" % (what, value, expected, tolerance))
-
-
-class CostFrontierTableTest(CostFrontierTestCase):
+class CostFrontierTableTest(CalcTestCase):
     """PRODCOSTFIT with inefficiency over 7 columns: Cobb-Douglas k + 25 = 28 rows for three prices."""
 
     @classmethod
@@ -136,7 +128,7 @@ class CostFrontierTableTest(CostFrontierTestCase):
                                       options={"xatol": 1e-10, "fatol": 1e-12, "maxfev": 20000})
             if best is None or found.fun < best.fun:
                 best = found
-        self.assert_close(self.rows["log-likelihood"][1], -best.fun, MAXIMUM_TOLERANCE, "log-likelihood")  # scipy maximum
+        self.assert_relative(self.rows["log-likelihood"][1], -best.fun, MAXIMUM_TOLERANCE, "log-likelihood")  # scipy maximum
         self.assertAlmostEqual(self.rows["inefficiency SD"][1], math.exp(best.x[5]),
                                delta=1e-3 * self.rows["inefficiency SD"][2],
                                msg="inefficiency SD within a thousandth of its standard error")  # scipy maximum
@@ -155,12 +147,12 @@ class CostFrontierTableTest(CostFrontierTestCase):
         column = get_range(CALC.sheet, "P1:P121")
         self.assertEqual(column[0], ["cost efficiency"])
         for row in range(ROWS):
-            self.assert_close(column[row + 1][0], float(expected[row]), FORMULA_TOLERANCE, "row %d" % row)  # efficiency formula
+            self.assert_relative(column[row + 1][0], float(expected[row]), FORMULA_TOLERANCE, "row %d" % row)  # efficiency formula
             self.assertLessEqual(column[row + 1][0], 1.0)
-        self.assert_close(get_cell(CALC.sheet, "Q2"), float(expected[0]), FORMULA_TOLERANCE, "single row")
+        self.assert_relative(get_cell(CALC.sheet, "Q2"), float(expected[0]), FORMULA_TOLERANCE, "single row")
 
 
-class CostFrontierBadInputTest(CostFrontierTestCase):
+class CostFrontierBadInputTest(CalcTestCase):
 
     def test_messages_name_the_argument(self):
         # Columns AA to AO: clear of the table and columns the other tests fill.
@@ -169,11 +161,12 @@ class CostFrontierBadInputTest(CostFrontierTestCase):
         set_array_formula(CALC.sheet, "AI1:AI121", "=PRODEFFICIENCY(AA31:AG58;A1:A121;C1:E121)")
         set_array_formula(CALC.sheet, "AA61:AG88", '=PRODCOSTFIT(A1:A121;B1:B121;C1:E121;;;"hc1";;;;;;;"exponential")')
         recalc(CALC.doc)
-        self.assertEqual(get_cell(CALC.sheet, "AA1"),
-                         'Error: inefficiency: \'gamma\' is not a distribution; use "half-normal" or "exponential"')
-        self.assertEqual(get_cell(CALC.sheet, "AI1"),
-                         "Error: inputs: has 3 columns, but a cost frontier needs 4: the output column, then the 3 "
-                         "price columns in PRODCOSTFIT's order")
+        self.assert_message(get_cell(CALC.sheet, "AA1"),
+                            'Error: inefficiency: \'gamma\' is not a distribution; use "half-normal" or "exponential"',
+                            "inefficiency")
+        self.assert_message(get_cell(CALC.sheet, "AI1"),
+                            "Error: inputs: has 3 columns, but a cost frontier needs 4: the output column, then the 3 "
+                            "price columns in PRODCOSTFIT's order", "inputs")
         self.assertTrue(get_cell(CALC.sheet, "AA61").startswith("Error: errors: a cost frontier's standard errors"))
         self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 
