@@ -1,6 +1,7 @@
 // PRODCOSTFIT with `inefficiency` (the cost frontier) and PRODEFFICIENCY on its table: the table's
 // layout and size formula, the cost model PRODCOST reads from it, and the messages for bad input.
 // The cross-check against python3-scipy is in test_cost_frontier_cross_check.cpp.
+#include "isoquant/math/frontier/cost_frontier.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
@@ -154,6 +155,27 @@ BOOST_AUTO_TEST_CASE(bad_input_names_the_argument)
     BOOST_TEST(messageOf([&] {
                    isoquant::efficiencyColumn(average, arguments.cost, outputAndPrices(arguments, 2), Cell{});
                }).rfind("model: is a cost function without a frontier", 0) == 0);
+}
+
+BOOST_AUTO_TEST_CASE(bounds_of_a_row_far_on_the_efficient_side_are_finite)
+{
+    // A row whose cost lies far below the frontier (or output far above a production frontier): u
+    // given ε is N(μ*, σ*²) truncated at 0 with z = μ*/σ* ≪ 0, and Φ(z) underflows. There the
+    // truncated normal's density ∝ exp(uμ*/σ*² − u²/(2σ*²)) is that of an exponential of rate
+    // |μ*|/σ*² up to the u² term, so u's quantile q is −ln(1 − q)·σ*²/|μ*| (derived here); the neglected
+    // term, u²/(2σ*²), is below 1e-5 at these quantiles, so 1e-3 relative.
+    const isoquant::TruncatedNormal far{-50.0, 0.05}; // z = −1000
+    const double rate = 50.0 / (0.05 * 0.05);
+    const double lower = isoquant::efficiencyLowerBound(far, 0.95), upper = isoquant::efficiencyUpperBound(far, 0.95);
+    BOOST_TEST(isoquant::testing::closeTo(-std::log(lower), -std::log(0.025) / rate, 1e-3)); // u at 0.975
+    BOOST_TEST(isoquant::testing::closeTo(-std::log(upper), -std::log(0.975) / rate, 1e-3)); // u at 0.025
+    BOOST_TEST(lower <= isoquant::expectedEfficiency(far));
+    BOOST_TEST(isoquant::expectedEfficiency(far) <= upper);
+    // The same through the cost frontier: a cost 50 log points below it, σᵥ = 0.05, σᵤ = 0.3.
+    const auto conditional =
+        isoquant::costInefficiencyGivenResidual(isoquant::InefficiencyDistribution::halfNormal, -50.0, 0.05, 0.3);
+    BOOST_TEST(std::isfinite(isoquant::efficiencyLowerBound(conditional, 0.95)));
+    BOOST_TEST(isoquant::efficiencyUpperBound(conditional, 0.95) <= 1.0);
 }
 
 BOOST_AUTO_TEST_SUITE_END()
