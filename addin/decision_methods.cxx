@@ -60,7 +60,7 @@ Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTab
 Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
                                      const Any& form, const Any& shares, const Any& errors, const Any& level,
                                      const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                     const Any& incompleteRows)
+                                     const Any& incompleteRows, const Any& inefficiency)
 {
     return guardedTable([&] {
         CostFitArguments arguments;
@@ -76,6 +76,7 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
         arguments.effects = toSingleCell(effects, argument::effects);
         arguments.trend = toOptionalTable(trend, argument::trend);
         arguments.incompleteRows = toSingleCell(incompleteRows, argument::incompleteRows);
+        arguments.inefficiency = toSingleCell(inefficiency, argument::inefficiency);
         return costFitTable(costFitFromArguments(arguments));
     });
 }

@@ -373,8 +373,9 @@ std::vector<FunctionInfo> costFunctions()
         {"prodCostFit",
          "PRODCOSTFIT",
          "Fits a cost function to observed cost, output and input prices by least squares on logs, homogeneous "
-         "of degree one in prices. Returns a table (enter as an array formula): estimates with standard errors, "
-         "fit statistics, cost elasticity, returns to scale with its test and verdict, efficient scale.",
+         "of degree one in prices, or with inefficiency a stochastic cost frontier (the least cost, by maximum "
+         "likelihood). Returns a table (enter as an array formula): estimates with standard errors, fit "
+         "statistics, cost elasticity, returns to scale with its test and verdict, efficient scale.",
          {{argument::cost,
            "Total cost of each row (plant, branch or period): one column of positive numbers. A first row "
            "of text is read as a header."},
@@ -397,7 +398,12 @@ std::vector<FunctionInfo> costFunctions()
           {argument::trend, "Not available yet for cost fits; leave empty."},
           {argument::incompleteRows,
            "TRUE to leave out rows with a blank or text cell in cost, output, input prices or "
-           "shares (the table counts them); FALSE or empty: such a cell is an error."}}},
+           "shares (the table counts them); FALSE or empty: such a cell is an error."},
+          {argument::inefficiency,
+           "Empty (default): the average cost function. \"half-normal\" or \"exponential\": a "
+           "cost frontier, ln cost = frontier + noise + inefficiency, whose table adds noise SD, "
+           "inefficiency SD, lambda, the inefficiency test, mean efficiency and convergence; "
+           "PRODEFFICIENCY then gives each row's cost efficiency. Not with shares."}}},
     };
 }
 
@@ -421,14 +427,19 @@ std::vector<FunctionInfo> efficiencyFunctions()
         {"prodEfficiency",
          "PRODEFFICIENCY",
          "Technical efficiency of each row from a PRODFRONTIER table: the expected share of frontier output the "
-         "row reaches (1 = on the frontier), or its inefficiency or the bounds of its efficiency. A column, one "
-         "value per row.",
+         "row reaches (1 = on the frontier), or its inefficiency or the bounds of its efficiency. From a "
+         "PRODCOSTFIT cost frontier, cost efficiency: the expected ratio of least cost to the row's cost (at most "
+         "1). A column, one value per row.",
          {{argument::model, "A PRODFRONTIER table, whole (its first cell reads \"half-normal frontier\" or "
-                            "\"exponential frontier\")."},
-          outputArgument,
+                            "\"exponential frontier\"), or a PRODCOSTFIT table fitted with inefficiency (\"half-normal "
+                            "cost frontier\" or \"exponential cost frontier\")."},
+          {argument::output,
+           "Output of each row: one column of positive numbers. For a cost frontier, the cost of each row "
+           "instead."},
           {argument::inputs,
            "Inputs of each row in the table's order (then its controls, if it has any), as many rows as "
-           "output. A first row of text names the columns, which are then matched by label."},
+           "output. A first row of text names the columns, which are then matched by label. For a cost "
+           "frontier, the output column, then the price columns in PRODCOSTFIT's order."},
           {argument::what, "\"efficiency\" (default: E[exp(-u) | residual], Battese and Coelli), \"inefficiency\" "
                            "(E[u | residual], Jondrow et al.), \"lower bound\" or \"upper bound\" (of efficiency, at "
                            "the table's confidence level, Horrace and Schmidt)."}}},

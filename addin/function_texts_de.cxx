@@ -256,9 +256,10 @@ const Translation& germanTranslation()
                        "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."}}},
         {"prodCostFit",
          "Schätzt eine Kostenfunktion aus beobachteten Kosten, Ausbringung und Faktorpreisen nach der Methode der "
-         "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen. Liefert eine Tabelle (als Matrixformel "
-         "eingeben): Schätzwerte mit Standardfehlern, Gütemaße, Kostenelastizität, Skalenerträge mit Test und Urteil, "
-         "effiziente Betriebsgröße.",
+         "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen, oder mit Ineffizienz eine stochastische "
+         "Kostengrenze (die geringsten Kosten, nach der Maximum-Likelihood-Methode). Liefert eine Tabelle (als "
+         "Matrixformel eingeben): Schätzwerte mit Standardfehlern, Gütemaße, Kostenelastizität, Skalenerträge mit "
+         "Test und Urteil, effiziente Betriebsgröße.",
          {{"Kosten", "Gesamtkosten jeder Zeile (Betrieb, Filiale oder Periode): eine Spalte positiver Zahlen. Eine "
                      "erste Zeile mit Text gilt als Überschrift."},
           {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen, so viele Zeilen wie bei den "
@@ -275,7 +276,12 @@ const Translation& germanTranslation()
           {"Gruppen", notForCostFits},
           {"Effekte", notForCostFits},
           {"Trend", notForCostFits},
-          {"unvollständige Zeilen", notForCostFits}}},
+          {"unvollständige Zeilen", notForCostFits},
+          {"Ineffizienz", "Leer (Standard): die durchschnittliche Kostenfunktion. \"half-normal\" (halbnormal) "
+                          "oder \"exponential\" (exponentialverteilt): eine Kostengrenze, ln Kosten = Grenze + "
+                          "Störterm + Ineffizienz, deren Tabelle Standardabweichung von Störterm und Ineffizienz, "
+                          "lambda, den Ineffizienztest, die mittlere Effizienz und die Konvergenz ergänzt; "
+                          "PRODEFFICIENCY gibt dann die Kosteneffizienz jeder Zeile. Nicht mit Kostenanteilen."}}},
         {"prodBudget",
          "Beste Aufteilung eines festen Budgets auf die Faktoren: die Menge jedes Faktors, die bei genau diesen "
          "Ausgaben die größte Ausbringung ergibt, dann diese Ausbringung; als Zeile oder Spalte wie die Preise (als "
@@ -339,13 +345,17 @@ const Translation& germanTranslation()
         {"prodEfficiency",
          "Technische Effizienz jeder Zeile aus einer PRODFRONTIER-Tabelle: der erwartete Anteil der Ausbringung an "
          "der Grenze, den die Zeile erreicht (1 = auf der Grenze), oder ihre Ineffizienz oder die Grenzen ihrer "
-         "Effizienz. Eine Spalte, ein Wert je Zeile.",
+         "Effizienz. Aus einer PRODCOSTFIT-Kostengrenze die Kosteneffizienz: das erwartete Verhältnis der "
+         "geringsten Kosten zu den Kosten der Zeile (höchstens 1). Eine Spalte, ein Wert je Zeile.",
          {{"Modell", "Eine ganze PRODFRONTIER-Tabelle (ihre erste Zelle lautet \"half-normal frontier\" oder "
-                     "\"exponential frontier\")."},
-          germanOutputArgument,
+                     "\"exponential frontier\") oder eine mit Ineffizienz geschätzte PRODCOSTFIT-Tabelle "
+                     "(\"half-normal cost frontier\" oder \"exponential cost frontier\")."},
+          {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen. Bei einer Kostengrenze "
+                          "stattdessen die Kosten jeder Zeile."},
           {"Faktormengen", "Faktormengen jeder Zeile in der Reihenfolge der Tabelle (danach ihre Kontrollvariablen, "
                            "falls sie welche hat), so viele Zeilen wie die Ausbringung. Eine erste Textzeile benennt "
-                           "die Spalten, die dann nach Bezeichnung zugeordnet werden."},
+                           "die Spalten, die dann nach Bezeichnung zugeordnet werden. Bei einer Kostengrenze die "
+                           "Spalte der Ausbringung, danach die Preisspalten in der Reihenfolge von PRODCOSTFIT."},
           {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
                        "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
                        "zum Konfidenzniveau der Tabelle, Horrace und Schmidt)."}}},

@@ -1,5 +1,6 @@
-// Cost fits (with and without shares, incomplete rows) and the evaluators over their tables
-// (PRODCOST, PRODLEASTCOST, PRODEFFICIENTSCALE, PRODPRICEELASTICITY, PRODREGULAR) with arbitrary
+// Cost fits (with and without shares, incomplete rows, as cost frontiers) and the evaluators over
+// their tables (PRODCOST, PRODLEASTCOST, PRODEFFICIENTSCALE, PRODPRICEELASTICITY, PRODREGULAR,
+// PRODEFFICIENCY) with arbitrary
 // shapes, values and options: every call must end in a table of finite numbers (or texts) or an
 // InputError; anything else is a finding.
 #include "fuzzed_cells.hpp"
@@ -7,6 +8,7 @@
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
+#include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 
 using namespace isoquant;
@@ -28,6 +30,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
     arguments.level = fuzzedCell(data, options);
     if (data.ConsumeBool()) arguments.shares = fuzzedTable(data, rows, prices, words);
     arguments.incompleteRows = fuzzedCell(data, {"TRUE", ""});
+    arguments.inefficiency = fuzzedCell(data, {"half-normal", "exponential", "", "gamma"});
     const std::vector<std::string> measures{"total", "marginal", "average", "cost elasticity", "returns to scale"};
     try {
         const CellTable table = costFitTable(costFitFromArguments(arguments));
@@ -43,6 +46,9 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* bytes, std::size_t siz
                                                    fuzzedCell(data, kinds), fuzzedCell(data, kinds),
                                                    fuzzedCell(data, kinds)));
         requireFiniteNumbers(regularityAnyColumn(table, fuzzedTable(data, outputs, prices + 1)));
+        const std::vector<std::string> efficiencyMeasures{"efficiency", "inefficiency", "lower bound", "upper bound"};
+        requireFiniteNumbers(efficiencyColumn(table, fuzzedTable(data, outputs, 1), fuzzedTable(data, outputs, prices + 1),
+                                              fuzzedCell(data, efficiencyMeasures)));
     } catch (const InputError&) {
     }
     return 0;

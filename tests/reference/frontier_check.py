@@ -197,12 +197,7 @@ def main():
         return reference_script.skipped("python3-scipy", error)
 
     rows = []
-
-    def putter(dataset, form):
-        def put(quantity, values):
-            for index, value in enumerate(np.atleast_1d(values)):
-                rows.append((dataset, form, quantity, index, repr(float(value))))
-        return put
+    putter = reference_script.figure_putter(rows, np)
 
     def log_design(columns):
         return np.column_stack([np.ones(len(columns[0]))] + [np.log(c) for c in columns])

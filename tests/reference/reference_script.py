@@ -44,3 +44,14 @@ def write_figures(output_path, header, rows):
         writer = csv.writer(handle)
         writer.writerow(header)
         writer.writerows(rows)
+
+
+def figure_putter(rows, np):
+    """For (dataset, form), a function put(quantity, values) that appends one figure line per value
+    (dataset, form, quantity, index, value) to `rows`."""
+    def putter(dataset, form):
+        def put(quantity, values):
+            for index, value in enumerate(np.atleast_1d(values)):
+                rows.append((dataset, form, quantity, index, repr(float(value))))
+        return put
+    return putter

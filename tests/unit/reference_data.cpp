@@ -73,4 +73,30 @@ FitArguments riceFarmArguments(const std::vector<std::string>& inputs)
     return argumentsFrom("rice_farms_panel.csv", "goutput", inputs, {});
 }
 
+CostFitArguments riceFarmCostArguments(bool withShares)
+{
+    const auto table = CsvTable::read(dataPath("rice_farms_panel.csv"));
+    const std::vector<std::string> prices{"pseed", "purea", "wage"}, quantities{"seed", "urea", "totlabor"};
+    const auto n = static_cast<Eigen::Index>(table.rows());
+    Eigen::MatrixXd spending(n, 3), output(n, 1), priceValues(n, 3);
+    const auto goutput = table.numbers("goutput");
+    for (Eigen::Index i = 0; i < 3; ++i) {
+        const auto price = table.numbers(prices[static_cast<std::size_t>(i)]);
+        const auto quantity = table.numbers(quantities[static_cast<std::size_t>(i)]);
+        for (Eigen::Index row = 0; row < n; ++row) {
+            priceValues(row, i) = price[static_cast<std::size_t>(row)];
+            spending(row, i) = price[static_cast<std::size_t>(row)] * quantity[static_cast<std::size_t>(row)];
+        }
+    }
+    for (Eigen::Index row = 0; row < n; ++row) output(row, 0) = goutput[static_cast<std::size_t>(row)];
+    const Eigen::VectorXd cost = spending.rowwise().sum();
+    CostFitArguments arguments;
+    arguments.cost = numberRange(cost, {"cost"});
+    arguments.output = numberRange(output, {"goutput"});
+    arguments.prices = numberRange(priceValues, prices);
+    if (withShares)
+        arguments.shares = numberRange((spending.array().colwise() / cost.array()).matrix(), {"seed share", "urea share", "labour share"});
+    return arguments;
+}
+
 } // namespace isoquant::testing

@@ -2,6 +2,7 @@
 // file's column names (sources in tests/data/README.md).
 #pragma once
 
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 
 namespace isoquant::testing {
@@ -24,5 +25,10 @@ FitArguments riceFarmsArguments();
 // The rice-farm panel (Feng and Horrace 2012, as in plm 2.6 RiceFarms), 1026 rows: output goutput
 // and the named input columns (e.g. size, totlabor). Options left empty (defaults).
 FitArguments riceFarmArguments(const std::vector<std::string>& inputs);
+
+// The rice-farm panel's cost data for PRODCOSTFIT, 1026 rows: cost = pseed·seed + purea·urea +
+// wage·totlabor (under "cost"), output goutput, prices pseed, purea, wage (the last the numeraire);
+// `withShares`: also each input's share of cost (under "seed share", "urea share", "labour share").
+CostFitArguments riceFarmCostArguments(bool withShares = false);
 
 } // namespace isoquant::testing

@@ -14,10 +14,9 @@
 // variable ISOQUANT_COST_FIGURES; without that file this test is skipped.
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "cell_tables.hpp"
-#include "csv_table.hpp"
+#include "reference_data.hpp"
 #include "reference_figures.hpp"
 #include "relative_error.hpp"
-#include "test_data.hpp"
 
 #include <boost/test/unit_test.hpp>
 
@@ -34,29 +33,6 @@ constexpr double statsmodelsTolerance = 1e-8;
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
     return isoquant::testing::referenceFiguresAvailable("ISOQUANT_COST_FIGURES", "cost figures");
-}
-
-isoquant::CostFitArguments riceFarmCosts()
-{
-    const auto table = isoquant::testing::CsvTable::read(isoquant::testing::dataPath("rice_farms_panel.csv"));
-    const std::vector<std::string> prices{"pseed", "purea", "wage"}, quantities{"seed", "urea", "totlabor"};
-    const auto n = static_cast<Eigen::Index>(table.rows());
-    Eigen::MatrixXd cost = Eigen::MatrixXd::Zero(n, 1), output(n, 1), priceValues(n, 3);
-    const auto goutput = table.numbers("goutput");
-    for (Eigen::Index i = 0; i < 3; ++i) {
-        const auto price = table.numbers(prices[static_cast<std::size_t>(i)]);
-        const auto quantity = table.numbers(quantities[static_cast<std::size_t>(i)]);
-        for (Eigen::Index row = 0; row < n; ++row) {
-            priceValues(row, i) = price[static_cast<std::size_t>(row)];
-            cost(row, 0) += price[static_cast<std::size_t>(row)] * quantity[static_cast<std::size_t>(row)];
-        }
-    }
-    for (Eigen::Index row = 0; row < n; ++row) output(row, 0) = goutput[static_cast<std::size_t>(row)];
-    isoquant::CostFitArguments arguments;
-    arguments.cost = isoquant::testing::numberRange(cost, {"cost"});
-    arguments.output = isoquant::testing::numberRange(output, {"goutput"});
-    arguments.prices = isoquant::testing::numberRange(priceValues, prices);
-    return arguments;
 }
 
 double coreFigure(const isoquant::CostFit& fit, const std::string& q, Eigen::Index i)
@@ -92,7 +68,7 @@ BOOST_AUTO_TEST_CASE(cost_functions_agree_with_statsmodels, *boost::unit_test::p
     for (const auto& fields : rows) {
         const std::string& form = fields.at(1);
         if (!fits.count(form)) {
-            isoquant::CostFitArguments arguments = riceFarmCosts();
+            isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostArguments();
             const auto separator = form.find('_');
             arguments.form = form.substr(0, separator);
             if (separator != std::string::npos) arguments.errors = form.substr(separator + 1);

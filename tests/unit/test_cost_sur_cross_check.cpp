@@ -16,10 +16,9 @@
 // environment variable ISOQUANT_COST_SUR_FIGURES; without that file this test is skipped.
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "cell_tables.hpp"
-#include "csv_table.hpp"
+#include "reference_data.hpp"
 #include "reference_figures.hpp"
 #include "relative_error.hpp"
-#include "test_data.hpp"
 
 #include <boost/test/unit_test.hpp>
 
@@ -40,27 +39,7 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 
 isoquant::CostFitArguments riceFarmCostsWithShares(const std::string& form)
 {
-    const auto table = isoquant::testing::CsvTable::read(isoquant::testing::dataPath("rice_farms_panel.csv"));
-    const std::vector<std::string> prices{"pseed", "purea", "wage"}, quantities{"seed", "urea", "totlabor"};
-    const auto n = static_cast<Eigen::Index>(table.rows());
-    Eigen::MatrixXd spending(n, 3), output(n, 1), priceValues(n, 3);
-    const auto goutput = table.numbers("goutput");
-    for (Eigen::Index i = 0; i < 3; ++i) {
-        const auto price = table.numbers(prices[static_cast<std::size_t>(i)]);
-        const auto quantity = table.numbers(quantities[static_cast<std::size_t>(i)]);
-        for (Eigen::Index row = 0; row < n; ++row) {
-            priceValues(row, i) = price[static_cast<std::size_t>(row)];
-            spending(row, i) = price[static_cast<std::size_t>(row)] * quantity[static_cast<std::size_t>(row)];
-        }
-    }
-    for (Eigen::Index row = 0; row < n; ++row) output(row, 0) = goutput[static_cast<std::size_t>(row)];
-    const Eigen::VectorXd cost = spending.rowwise().sum();
-    const Eigen::MatrixXd shares = spending.array().colwise() / cost.array();
-    isoquant::CostFitArguments arguments;
-    arguments.cost = isoquant::testing::numberRange(cost, {"cost"});
-    arguments.output = isoquant::testing::numberRange(output, {"goutput"});
-    arguments.prices = isoquant::testing::numberRange(priceValues, prices);
-    arguments.shares = isoquant::testing::numberRange(shares, {"seed share", "urea share", "labour share"});
+    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostArguments(true);
     arguments.form = form;
     return arguments;
 }

@@ -27,6 +27,7 @@
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "cell_tables.hpp"
+#include "frontier_figures.hpp"
 #include "reference_data.hpp"
 #include "reference_figures.hpp"
 #include "relative_error.hpp"
@@ -34,48 +35,16 @@
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
-#include <map>
-#include <sstream>
 #include <tuple>
 
 namespace {
 
 using isoquant::testing::closeTo;
-using Key = std::tuple<std::string, std::string, std::string>;
-
-struct Figures {
-    std::map<Key, std::vector<double>> values;
-    std::map<std::string, std::vector<std::vector<double>>> data; // invented rows: y, x1, x2
-
-    const std::vector<double>& at(const std::string& dataset, const std::string& form, const std::string& quantity) const
-    {
-        const auto found = values.find({dataset, form, quantity});
-        if (found == values.end()) throw std::runtime_error("no figure " + dataset + "/" + form + "/" + quantity);
-        return found->second;
-    }
-    double one(const std::string& dataset, const std::string& form, const std::string& quantity) const
-    {
-        return at(dataset, form, quantity).front();
-    }
-};
+using Figures = isoquant::testing::FrontierFigures;
 
 const Figures& figures()
 {
-    static const Figures read = [] {
-        Figures result;
-        for (const auto& row : isoquant::testing::readReferenceRows(
-                 isoquant::testing::referenceFiguresPath("ISOQUANT_FRONTIER_FIGURES"))) {
-            if (row.at(1) == "data") {
-                std::istringstream fields(row.at(4));
-                std::vector<double> values(3);
-                fields >> values[0] >> values[1] >> values[2];
-                result.data[row.at(0)].push_back(values);
-            } else {
-                result.values[{row.at(0), row.at(1), row.at(2)}].push_back(std::stod(row.at(4)));
-            }
-        }
-        return result;
-    }();
+    static const Figures read = isoquant::testing::readFrontierFigures("ISOQUANT_FRONTIER_FIGURES");
     return read;
 }
 

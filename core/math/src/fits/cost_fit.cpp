@@ -4,6 +4,7 @@
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/fits/cost_share_system.hpp"
+#include "isoquant/math/frontier/cost_frontier.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
@@ -11,6 +12,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 namespace isoquant {
 
@@ -146,13 +148,16 @@ void setParameters(ProductionFit& summary, const Eigen::VectorXd& theta, const E
     }
 }
 
-void requireCostData(const CostData& data, Eigen::Index parameters)
+// `parameters` counts σᵥ and σᵤ for a frontier.
+void requireCostData(const CostData& data, Eigen::Index parameters, bool frontier)
 {
     const Eigen::Index n = data.cost.size();
     if (data.prices.cols() < 1) throw InputError({DataPart::prices}, "needs at least one column");
     if (n < parameters + 1)
-        throw InputError({DataPart::cost, DataPart::output, DataPart::prices}, "too few rows: {parts} have " + std::to_string(n) + " rows of data for " +
-                         std::to_string(parameters) + " parameters to estimate; need at least " +
+        throw InputError({DataPart::cost, DataPart::output, DataPart::prices},
+                         "too few rows: {parts} have " + std::to_string(n) + " rows of data for " +
+                         std::to_string(parameters) + " parameters to estimate" +
+                         (frontier ? " (with noise SD and inefficiency SD)" : "") + "; need at least " +
                          std::to_string(parameters + 1));
     if (data.output.maxCoeff() == data.output.minCoeff())
         throw InputError({DataPart::output}, "every row holds the same value; a cost function needs varied output");
@@ -211,7 +216,10 @@ void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
     const bool testable = fit.summary.status != FitStatus::perfectFit;
     const double deviation = (elasticity - 1.0) / fit.costElasticity.standardError;
     returns.fStatistic = testable ? deviation * deviation : std::nan("");
-    returns.pValue = testable ? fisherUpperPValue(returns.fStatistic, 1.0, degreesOfFreedom) : std::nan("");
+    // F(1, ∞) is χ²(1)/1: the Wald test of a maximum-likelihood fit.
+    const double pValue = std::isinf(degreesOfFreedom) ? chiSquaredUpperPValue(returns.fStatistic, 1.0)
+                                                       : fisherUpperPValue(returns.fStatistic, 1.0, degreesOfFreedom);
+    returns.pValue = testable ? pValue : std::nan("");
     returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, level, false);
 }
 
@@ -233,6 +241,16 @@ CostRegularityTally regularityOf(const CostFit& fit, const CostData& data)
     return tallyCostRegularity(shares, interactions, data.priceLabels);
 }
 
+// The frontier's β and the covariance of β, from the mirrored fit (cost_frontier.hpp).
+CostFrontierPart fitFrontierPart(const NormalisedRegression& normalised, const LeastSquaresResult& regression,
+                                 InefficiencyDistribution distribution, double level)
+{
+    CostFrontierPart part;
+    part.mirrored = fitMirroredCostFrontier(normalised.design, normalised.response, regression.coefficients, distribution);
+    part.scales = frontierScaleEstimates(part.mirrored, level);
+    return part;
+}
+
 } // namespace
 
 CostFit fitCost(const CostData& data, const CostFitOptions& options)
@@ -240,7 +258,12 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     const Eigen::Index k = data.prices.cols();
     const bool translog = options.form == CostForm::translog;
     const Eigen::Index regressors = k + 1 + (translog ? 1 + k * (k - 1) / 2 + (k - 1) : 0);
-    requireCostData(data, regressors);
+    const bool frontier = options.inefficiency.has_value();
+    requireCostData(data, regressors + (frontier ? 2 : 0), frontier);
+    if (frontier && data.shares.size() != 0)
+        throw InputError({DataPart::shares, DataPart::inefficiency},
+                         "{0}: a cost frontier is fitted to the cost equation alone; leave {0} empty, or "
+                         "{1} empty for the cost and share system");
     const Eigen::Index n = data.cost.size();
     checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), DataPart::prices,
                     translog ? "the translog cost form" : "the Cobb-Douglas cost form");
@@ -271,15 +294,27 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     const LeastSquaresResult& regression = summary.regression;
     summary.status = regression.status;
     const auto [map, shift] = restoredParameters(options.form, k, regressors);
-    const double degreesOfFreedom = regression.inferenceDegreesOfFreedom;
-    setParameters(summary, map * regression.coefficients + shift, map * regression.covariance * map.transpose(),
-                  degreesOfFreedom, options.confidenceLevel);
+    double degreesOfFreedom = regression.inferenceDegreesOfFreedom;
+    Eigen::VectorXd coefficients = regression.coefficients;
+    Eigen::MatrixXd covariance = regression.covariance;
+    if (frontier) {
+        if (summary.status == FitStatus::perfectFit)
+            throw InputError({DataPart::inefficiency}, "{0}: the cost function fits every row exactly, which "
+                                                         "leaves no noise for a frontier; leave {0} empty");
+        fit.frontier = fitFrontierPart(normalised, regression, *options.inefficiency, options.confidenceLevel);
+        coefficients = -fit.frontier->mirrored.coefficients;
+        covariance = fit.frontier->mirrored.covariance.topLeftCorner(regressors, regressors);
+        degreesOfFreedom = std::numeric_limits<double>::infinity(); // the normal: maximum likelihood
+    }
+    setParameters(summary, map * coefficients + shift, map * covariance * map.transpose(), degreesOfFreedom,
+                  options.confidenceLevel);
     const Eigen::VectorXd logCost = exactLog(data.cost.array()).matrix();
     const double totalSquares = (logCost.array() - logCost.mean()).square().sum();
     summary.rSquared = 1.0 - regression.residualSumOfSquares / totalSquares;
     summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * static_cast<double>(n - 1) /
                                          regression.residualDegreesOfFreedom;
-    summary.smearingFactor = regression.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln C)
+    // Duan: mean of exp(residual of ln C); none for a frontier, whose cost is the least, not a median.
+    summary.smearingFactor = frontier ? std::nan("") : regression.residuals.array().exp().mean();
 
     fit.meanLogOutput = exactLog(data.output.array()).mean();
     fit.meanLogPrices = exactLog(data.prices.array()).matrix().colwise().mean().transpose();

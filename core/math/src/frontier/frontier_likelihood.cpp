@@ -122,11 +122,29 @@ double expectedEfficiency(const TruncatedNormal& conditional)
 
 namespace {
 
+constexpr double lowestLogProbability = -700.0; // exp(−700) ≈ 1e−304, still a normal double
+
+// Φ⁻¹(p) from ln p. Where p would underflow (a row far on the efficient side of the frontier, where
+// Φ(z) does), Newton's method on ln Φ(x) = ln p, whose step (ln Φ(x) − ln p)/(φ(x)/Φ(x)) uses the
+// tail-accurate ln Φ and Mills ratio; from x₀ = −√(−2 ln p), left of the root since
+// ln Φ(x) < −x²/2 there, the iterates of this concave increasing function rise to it monotonically.
+double normalQuantileFromLog(double logProbability)
+{
+    if (logProbability > lowestLogProbability) return normalQuantile(std::exp(logProbability));
+    double x = -std::sqrt(-2.0 * logProbability);
+    for (int iteration = 0; iteration < 100; ++iteration) {
+        const double step = (logNormalCdf(x) - logProbability) / inverseMillsRatio(x);
+        x -= step;
+        if (std::fabs(step) <= 1e-15 * std::fabs(x)) break;
+    }
+    return x;
+}
+
 // μ* + σ* Φ⁻¹(1 − q Φ(z)) = μ* − σ* Φ⁻¹(q Φ(z)), the second form accurate when q Φ(z) is small.
 double inefficiencyQuantile(const TruncatedNormal& conditional, double tailShare)
 {
     const double z = conditional.location / conditional.scale;
-    return conditional.location - conditional.scale * normalQuantile(tailShare * std::exp(logNormalCdf(z)));
+    return conditional.location - conditional.scale * normalQuantileFromLog(std::log(tailShare) + logNormalCdf(z));
 }
 
 } // namespace

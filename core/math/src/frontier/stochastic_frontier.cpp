@@ -1,5 +1,7 @@
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
 
+#include "isoquant/math/frontier/normal_tail.hpp"
+
 #include <boost/math/distributions/chi_squared.hpp>
 #include <unsupported/Eigen/NonLinearOptimization>
 
@@ -257,6 +259,36 @@ double meanEfficiency(const StochasticFrontierFit& fit)
         sum += expectedEfficiency(
             inefficiencyGivenResidual(fit.distribution, fit.residuals(row), fit.noiseSd, fit.inefficiencySd));
     return sum / static_cast<double>(fit.residuals.size());
+}
+
+namespace {
+
+// σ = exp(s) with s estimated (stochastic_frontier.hpp).
+ParameterEstimate scaleEstimate(double logValue, double logStandardError, double critical)
+{
+    const double value = std::exp(logValue);
+    return {value, value * logStandardError, notANumber, notANumber, std::exp(logValue - critical * logStandardError),
+            std::exp(logValue + critical * logStandardError)};
+}
+
+} // namespace
+
+FrontierScaleEstimates frontierScaleEstimates(const StochasticFrontierFit& fit, double level)
+{
+    const Eigen::Index p = fit.coefficients.size();
+    const double critical = normalQuantile((1 + level) / 2);
+    const Eigen::MatrixXd& v = fit.covariance;
+    FrontierScaleEstimates scales;
+    scales.noiseSd = scaleEstimate(std::log(fit.noiseSd), std::sqrt(v(p, p)), critical);
+    if (fit.wrongSkew) {
+        scales.inefficiencySd = {0, notANumber, notANumber, notANumber, notANumber, notANumber};
+        scales.lambda = scales.inefficiencySd;
+        return scales;
+    }
+    scales.inefficiencySd = scaleEstimate(std::log(fit.inefficiencySd), std::sqrt(v(p + 1, p + 1)), critical);
+    const double logLambdaVariance = v(p, p) + v(p + 1, p + 1) - 2 * v(p, p + 1); // ln λ = ln σᵤ − ln σᵥ
+    scales.lambda = scaleEstimate(std::log(fit.inefficiencySd / fit.noiseSd), std::sqrt(logLambdaVariance), critical);
+    return scales;
 }
 
 } // namespace isoquant

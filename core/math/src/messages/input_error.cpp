@@ -46,6 +46,7 @@ std::string dataPartWord(DataPart part)
     case DataPart::cost: return "cost";
     case DataPart::prices: return "prices";
     case DataPart::shares: return "shares";
+    case DataPart::inefficiency: return "inefficiency";
     }
     return "data";
 }

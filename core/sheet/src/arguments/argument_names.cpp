@@ -21,6 +21,7 @@ std::string argumentHolding(DataPart part)
     case DataPart::cost: return argument::cost;
     case DataPart::prices: return argument::inputPrices;
     case DataPart::shares: return argument::shares;
+    case DataPart::inefficiency: return argument::inefficiency;
     case DataPart::start: break; // no cell function takes a start: the math layer's word
     }
     return dataPartWord(part);

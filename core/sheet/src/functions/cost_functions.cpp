@@ -5,6 +5,7 @@
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/functions/frontier_functions.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -115,6 +116,17 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         throw argumentError(argument::errors,
                             "\"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
     options.confidenceLevel = readLevelArgument(arguments.level, argument::level);
+    if (!isOmitted(arguments.inefficiency)) {
+        options.inefficiency = readInefficiencyArgument(arguments.inefficiency);
+        if (options.covariance != CovarianceKind::classical)
+            throw argumentError(argument::errors,
+                                "a cost frontier's standard errors come from its likelihood (the observed "
+                                "information); leave errors empty or \"classical\"");
+        if (!arguments.shares.empty())
+            throw argumentError(argument::shares,
+                                "not available with a cost frontier, which is fitted to the cost equation "
+                                "alone; leave shares empty, or inefficiency empty for the cost and share system");
+    }
     refuseLaterArguments(arguments);
     // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
     const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, argument::incompleteRows);

@@ -7,9 +7,11 @@
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/models/frontier_model.hpp"
+#include "isoquant/math/frontier/cost_frontier.hpp"
 #include "isoquant/math/messages/text.hpp"
 
 #include <cmath>
+#include <vector>
 
 namespace isoquant {
 
@@ -86,12 +88,58 @@ double measureOf(EfficiencyMeasure measure, const TruncatedNormal& conditional, 
     return std::nan("");
 }
 
+// E[exp(−u)|ε] and the rest, or 1 (0 for inefficiency) where σᵤ = 0: no inefficiency.
+CellTable measureColumn(EfficiencyMeasure measure, const std::vector<TruncatedNormal>& conditionals,
+                        double inefficiencySd, double level)
+{
+    CellTable column(conditionals.size(), 1);
+    for (std::size_t row = 0; row < conditionals.size(); ++row) {
+        double value = measure == EfficiencyMeasure::inefficiency ? 0.0 : 1.0;
+        if (inefficiencySd > 0) value = measureOf(measure, conditionals[row], level);
+        column.set(row, 0, value);
+    }
+    return column;
+}
+
+// PRODEFFICIENCY on a cost frontier: `output` holds cost, `inputs` the output then the prices in
+// PRODCOSTFIT's order; ε = ln C − c(y, w), u given ε from cost_frontier.hpp.
+CellTable costEfficiencyColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+                               EfficiencyMeasure measure)
+{
+    const CostFrontierModel frontier = readCostFrontierModel(model);
+    const NumericColumns cost = readNumericColumns(output, argument::output, ValueRule::positive, "cost");
+    if (cost.values.cols() != 1)
+        throw argumentError(argument::output,
+                            "must be one column, the cost of each row; it has " + std::to_string(cost.values.cols()));
+    const NumericColumns read = readNumericColumns(inputs, argument::inputs, ValueRule::positive, "input");
+    if (read.values.rows() != cost.values.rows())
+        throw argumentError(argument::inputs, "has " + std::to_string(read.values.rows()) +
+                                                  " rows of data but output has " + std::to_string(cost.values.rows()));
+    const auto k = static_cast<Eigen::Index>(frontier.cost.priceLabels.size());
+    if (read.values.cols() != 1 + k)
+        throw argumentError(argument::inputs, "has " + std::to_string(read.values.cols()) +
+                                                  " columns, but a cost frontier needs " + std::to_string(1 + k) +
+                                                  ": the output column, then the " + std::to_string(k) +
+                                                  " price columns in PRODCOSTFIT's order");
+    std::vector<TruncatedNormal> conditionals;
+    for (Eigen::Index row = 0; row < read.values.rows(); ++row) {
+        const double residual = std::log(cost.values(row, 0)) -
+                                frontier.cost.logCost(read.values(row, 0), read.values.row(row).tail(k).transpose());
+        conditionals.push_back(costInefficiencyGivenResidual(frontier.distribution, residual, frontier.noiseSd,
+                                                             frontier.inefficiencySd));
+    }
+    CellTable column = measureColumn(measure, conditionals, frontier.inefficiencySd,
+                                     frontier.confidenceLevel);
+    return underHeader(std::move(column), cost, std::string("cost ") + measureTitle(measure));
+}
+
 } // namespace
 
 CellTable efficiencyColumn(const CellTable& model, const CellTable& output, const CellTable& inputs, const Cell& what)
 {
-    const FrontierModel frontier = readFrontierModel(model);
     const EfficiencyMeasure measure = readWhatArgument(what);
+    if (isCostModel(model)) return costEfficiencyColumn(model, output, inputs, measure);
+    const FrontierModel frontier = readFrontierModel(model);
     const NumericColumns produced = readNumericColumns(output, argument::output, ValueRule::positive, "output");
     if (produced.values.cols() != 1)
         throw argumentError(argument::output, "must be one column; it has " + std::to_string(produced.values.cols()));
@@ -107,15 +155,12 @@ CellTable efficiencyColumn(const CellTable& model, const CellTable& output, cons
     const Eigen::VectorXd residuals =
         exactLog(produced.values.col(0).array()).matrix() - design * frontier.coefficients;
 
-    CellTable column(static_cast<std::size_t>(residuals.size()), 1);
-    for (Eigen::Index row = 0; row < residuals.size(); ++row) {
-        double value = measure == EfficiencyMeasure::inefficiency ? 0.0 : 1.0; // σᵤ = 0: no inefficiency
-        if (frontier.inefficiencySd > 0)
-            value = measureOf(measure, inefficiencyGivenResidual(frontier.distribution, residuals(row), frontier.noiseSd,
-                                                                 frontier.inefficiencySd),
-                              frontier.confidenceLevel);
-        column.set(static_cast<std::size_t>(row), 0, value);
-    }
+    std::vector<TruncatedNormal> conditionals;
+    for (Eigen::Index row = 0; row < residuals.size(); ++row)
+        conditionals.push_back(
+            inefficiencyGivenResidual(frontier.distribution, residuals(row), frontier.noiseSd, frontier.inefficiencySd));
+    CellTable column = measureColumn(measure, conditionals, frontier.inefficiencySd,
+                                     frontier.confidenceLevel);
     return underHeader(std::move(column), produced, measureTitle(measure));
 }
 

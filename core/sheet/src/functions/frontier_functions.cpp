@@ -17,14 +17,6 @@ namespace isoquant {
 
 namespace {
 
-InefficiencyDistribution readInefficiencyArgument(const Cell& cell)
-{
-    return readChoice<InefficiencyDistribution>(
-        cell, argument::inefficiency, "a distribution",
-        {{"half-normal", InefficiencyDistribution::halfNormal}, {"exponential", InefficiencyDistribution::exponential}},
-        InefficiencyDistribution::halfNormal);
-}
-
 ProductionForm readFrontierForm(const Cell& cell)
 {
     const ProductionForm form = readFormArgument(cell);
@@ -47,15 +39,6 @@ ParameterEstimate normalEstimate(double estimate, double standardError, double c
             estimate + critical * standardError};
 }
 
-// σ = exp(s) with s estimated: se(σ) = σ·se(s), bounds exp(s ± z·se(s)).
-ParameterEstimate scaleEstimate(double logValue, double logStandardError, double critical)
-{
-    const double value = std::exp(logValue);
-    const double nan = std::nan("");
-    return {value, value * logStandardError, nan, nan, std::exp(logValue - critical * logStandardError),
-            std::exp(logValue + critical * logStandardError)};
-}
-
 // ν as gᵀβ: the exponents' sum, or for translog Σᵢ(αᵢ + Σⱼ βᵢⱼ l̄ⱼ) at the mean logs l̄.
 Eigen::VectorXd returnsGradient(ProductionForm form, Eigen::Index k, Eigen::Index parameters,
                                 const Eigen::VectorXd& meanLogs)
@@ -76,18 +59,10 @@ void setInference(ProductionFrontier& frontier, const Eigen::MatrixXd& logInputs
     const Eigen::MatrixXd& v = fit.covariance;
     for (Eigen::Index j = 0; j < p; ++j)
         frontier.coefficients.push_back(normalEstimate(fit.coefficients(j), std::sqrt(v(j, j)), critical));
-    frontier.noiseSd = scaleEstimate(std::log(fit.noiseSd), std::sqrt(v(p, p)), critical);
-    if (fit.wrongSkew) {
-        const double nan = std::nan("");
-        frontier.inefficiencySd = {0, nan, nan, nan, nan, nan};
-        frontier.lambda = {0, nan, nan, nan, nan, nan};
-    } else {
-        frontier.inefficiencySd = scaleEstimate(std::log(fit.inefficiencySd), std::sqrt(v(p + 1, p + 1)), critical);
-        // ln λ = ln σᵤ − ln σᵥ
-        const double logLambdaVariance = v(p, p) + v(p + 1, p + 1) - 2 * v(p, p + 1);
-        frontier.lambda =
-            scaleEstimate(std::log(fit.inefficiencySd / fit.noiseSd), std::sqrt(logLambdaVariance), critical);
-    }
+    const FrontierScaleEstimates scales = frontierScaleEstimates(fit, frontier.confidenceLevel);
+    frontier.noiseSd = scales.noiseSd;
+    frontier.inefficiencySd = scales.inefficiencySd;
+    frontier.lambda = scales.lambda;
     const auto k = static_cast<Eigen::Index>(frontier.inputLabels.size());
     const Eigen::VectorXd gradient =
         returnsGradient(frontier.form, k, p, logInputs.colwise().mean().transpose());
@@ -106,6 +81,14 @@ Eigen::Index frontierParameters(ProductionForm form, Eigen::Index k, Eigen::Inde
 }
 
 } // namespace
+
+InefficiencyDistribution readInefficiencyArgument(const Cell& cell)
+{
+    return readChoice<InefficiencyDistribution>(
+        cell, argument::inefficiency, "a distribution",
+        {{"half-normal", InefficiencyDistribution::halfNormal}, {"exponential", InefficiencyDistribution::exponential}},
+        InefficiencyDistribution::halfNormal);
+}
 
 Eigen::MatrixXd frontierDesign(ProductionForm form, const Eigen::MatrixXd& inputs, const Eigen::MatrixXd& controls)
 {

@@ -39,7 +39,8 @@ std::string labelAt(const CellTable& model, std::size_t row)
 
 bool isCostTitle(const std::string& label)
 {
-    return equalsIgnoringCase(label, cobbDouglasCostTitle) || equalsIgnoringCase(label, translogCostTitle);
+    return equalsIgnoringCase(label, cobbDouglasCostTitle) || equalsIgnoringCase(label, translogCostTitle) ||
+           equalsIgnoringCase(label, halfNormalCostFrontierTitle) || equalsIgnoringCase(label, exponentialCostFrontierTitle);
 }
 
 // The form word of the model's `form` row, if it has one.

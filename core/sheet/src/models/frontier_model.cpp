@@ -5,6 +5,7 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/frontier/normal_tail.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/sheet/tables/cost_table.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -59,10 +60,41 @@ void readParameterRows(const CellTable& table, std::size_t& row, FrontierModel& 
     }
     model.coefficients = Eigen::Map<const Eigen::VectorXd>(values.data(), static_cast<Eigen::Index>(values.size()));
     if (model.inputLabels.empty()) throw argumentError(argument::model, "has no input rows after \"ln A\"");
-    if (table.columns() > 6 && table.isNumber(1, 2) && table.isNumber(1, 6) && table.number(1, 2) > 0) {
+}
+
+// 2Φ(c) − 1 for c = (upper bound − value)/std. error of the first parameter row (frontier_model.hpp).
+double levelOfFirstRow(const CellTable& table)
+{
+    if (table.columns() > 6 && table.rows() > 1 && table.isNumber(1, 1) && table.isNumber(1, 2) &&
+        table.isNumber(1, 6) && table.number(1, 2) > 0) {
         const double critical = (table.number(1, 6) - table.number(1, 1)) / table.number(1, 2);
-        if (std::isfinite(critical) && critical > 0) model.confidenceLevel = 2 * std::exp(logNormalCdf(critical)) - 1;
+        if (std::isfinite(critical) && critical > 0) return 2 * std::exp(logNormalCdf(critical)) - 1;
     }
+    return 0.95;
+}
+
+struct Scales {
+    double noise = 0;
+    double inefficiency = 0;
+};
+
+// noise SD and inefficiency SD from the rows from `row` on, of a converged frontier.
+Scales readScaleRows(const CellTable& table, std::size_t row, const std::string& lacking)
+{
+    std::optional<double> noise, inefficiency;
+    for (; row < table.rows(); ++row) {
+        if (labelIs(table, row, noiseSdLabel)) noise = numberAt(table, row, 1);
+        if (labelIs(table, row, inefficiencySdLabel)) inefficiency = numberAt(table, row, 1);
+        if (labelIs(table, row, convergenceLabel) &&
+            !(table.isText(row, 1) && equalsIgnoringCase(table.text(row, 1), convergedText)))
+            throw argumentError(argument::model,
+                                "the frontier did not converge; its estimates are not a maximum, so they are not used");
+    }
+    if (!noise || !inefficiency)
+        throw argumentError(argument::model, "lacks the \"noise SD\" or \"inefficiency SD\" row " + lacking);
+    if (!(*noise > 0) || !(*inefficiency >= 0))
+        throw argumentError(argument::model, "noise SD must be positive and inefficiency SD not negative");
+    return {*noise, *inefficiency};
 }
 
 } // namespace
@@ -74,37 +106,45 @@ FrontierModel readFrontierModel(const CellTable& table)
     model.distribution = readTitle(table);
     std::size_t row = 1;
     readParameterRows(table, row, model);
-    std::optional<double> noise, inefficiency;
+    model.confidenceLevel = levelOfFirstRow(table);
+    const Scales scales = readScaleRows(table, row, "of a PRODFRONTIER table");
+    model.noiseSd = scales.noise;
+    model.inefficiencySd = scales.inefficiency;
     bool formRead = false;
     for (; row < table.rows(); ++row) {
-        if (labelIs(table, row, noiseSdLabel)) noise = numberAt(table, row, 1);
-        if (labelIs(table, row, inefficiencySdLabel)) inefficiency = numberAt(table, row, 1);
-        if (labelIs(table, row, convergenceLabel) &&
-            !(table.isText(row, 1) && equalsIgnoringCase(table.text(row, 1), convergedText)))
-            throw argumentError(argument::model,
-                                "the frontier did not converge; its estimates are not a maximum, so they are not used");
-        if (labelIs(table, row, formLabel)) {
-            try {
-                model.form = readFormArgument(table.at(row, 1));
-            } catch (const InputError&) {
-                throw InputError(rowPlace(row) + " (form) must hold \"cobb-douglas\" or \"translog\"");
-            }
-            formRead = true;
+        if (!labelIs(table, row, formLabel)) continue;
+        try {
+            model.form = readFormArgument(table.at(row, 1));
+        } catch (const InputError&) {
+            throw InputError(rowPlace(row) + " (form) must hold \"cobb-douglas\" or \"translog\"");
         }
+        formRead = true;
     }
-    if (!noise || !inefficiency || !formRead)
-        throw argumentError(argument::model,
-                            "lacks the \"noise SD\", \"inefficiency SD\" or \"form\" row of a PRODFRONTIER table");
-    if (!(*noise > 0) || !(*inefficiency >= 0))
-        throw argumentError(argument::model, "noise SD must be positive and inefficiency SD not negative");
-    model.noiseSd = *noise;
-    model.inefficiencySd = *inefficiency;
+    if (!formRead) throw argumentError(argument::model, "lacks the \"form\" row of a PRODFRONTIER table");
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     const Eigen::Index expected = 1 + k + (model.form == ProductionForm::translog ? k * (k + 1) / 2 : 0) +
                                   static_cast<Eigen::Index>(model.controlLabels.size());
     if (model.coefficients.size() != expected)
         throw argumentError(argument::model, "its parameter rows do not fit the " + formWord(model.form) + " form of " +
                                                  std::to_string(k) + (k == 1 ? " input" : " inputs"));
+    return model;
+}
+
+CostFrontierModel readCostFrontierModel(const CellTable& table)
+{
+    CostFrontierModel model;
+    const std::string title = table.rows() > 0 && table.isText(0, 0) ? table.text(0, 0) : "";
+    if (equalsIgnoringCase(title, halfNormalCostFrontierTitle)) model.distribution = InefficiencyDistribution::halfNormal;
+    else if (equalsIgnoringCase(title, exponentialCostFrontierTitle)) model.distribution = InefficiencyDistribution::exponential;
+    else
+        throw argumentError(argument::model,
+                            "is a cost function without a frontier; for cost efficiency fit PRODCOSTFIT with "
+                            "inefficiency \"half-normal\" or \"exponential\" and give that whole table");
+    model.cost = readCostModel(table);
+    model.confidenceLevel = levelOfFirstRow(table);
+    const Scales scales = readScaleRows(table, 1, "of a PRODCOSTFIT cost frontier");
+    model.noiseSd = scales.noise;
+    model.inefficiencySd = scales.inefficiency;
     return model;
 }
 

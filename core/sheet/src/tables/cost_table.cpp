@@ -1,13 +1,15 @@
 #include "isoquant/sheet/tables/cost_table.hpp"
 
+#include "isoquant/sheet/tables/frontier_table.hpp"
+#include "tables/frontier_rows.hpp"
 #include "tables/table_writer.hpp"
 
 namespace isoquant {
 
-std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows)
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows, bool frontier)
 {
     const std::size_t secondOrder = form == CostForm::translog ? 1 + prices * (prices + 1) / 2 + prices : 0;
-    return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0);
+    return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0) + (frontier ? 6 : 0);
 }
 
 namespace {
@@ -15,7 +17,7 @@ namespace {
 // Why there is no efficient scale, when there is none; and the fit's own note.
 std::string costFormNote(const CostFit& fit)
 {
-    std::string note = fitStatusNote(fit.summary);
+    std::string note = fit.frontier ? frontierNote(fit.frontier->mirrored) : fitStatusNote(fit.summary);
     auto add = [&note](const std::string& more) { note += (note.empty() ? "" : "; ") + more; };
     if (fit.form == CostForm::cobbDouglas)
         add("note: a Cobb-Douglas cost function has the same cost elasticity at every output, so no efficient scale");
@@ -33,15 +35,41 @@ std::string regularityNote(const CostFit& fit)
            fit.regularity.firstPhrase + ")";
 }
 
+const char* costTitle(const CostFit& fit)
+{
+    if (!fit.frontier) return fit.form == CostForm::translog ? translogCostTitle : cobbDouglasCostTitle;
+    return fit.frontier->mirrored.distribution == InefficiencyDistribution::halfNormal ? halfNormalCostFrontierTitle
+                                                                                       : exponentialCostFrontierTitle;
+}
+
+// observations to BIC (and `incomplete rows dropped`): least squares', or a frontier's with its
+// inefficiency rows.
+void statisticRows(TableWriter& writer, const CostFit& fit)
+{
+    if (!fit.frontier) {
+        writer.fitStatisticRows(fit.summary, true);
+        if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
+        return;
+    }
+    const StochasticFrontierFit& frontier = fit.frontier->mirrored;
+    writer.valueRow(observationsLabel, static_cast<double>(frontier.residuals.size()));
+    for (const char* leastSquaresOnly : {rSquaredLabel, adjustedRSquaredLabel, residualSdLabel})
+        writer.valueRow(leastSquaresOnly, notANumber);
+    writer.put(overallTestLabel, {Cell{}, Cell{}, notANumber, notANumber});
+    frontierLikelihoodRows(writer, frontier);
+    if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
+    frontierInefficiencyRows(writer, frontier);
+}
+
 } // namespace
 
 CellTable costFitTable(const CostFit& fit)
 {
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
-    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows),
+    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows, fit.frontier.has_value()),
                        summary.status == FitStatus::perfectFit);
-    writer.headerRow(translog ? translogCostTitle : cobbDouglasCostTitle);
+    writer.headerRow(costTitle(fit));
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);
     writer.parameterRow(costOutputLabel, summary, parameter++);
@@ -50,8 +78,8 @@ CellTable costFitTable(const CostFit& fit)
         for (const auto& label : costSecondOrderLabels(fit.priceLabels)) writer.parameterRow(label, summary, parameter++);
     writer.skipRow();
 
-    writer.fitStatisticRows(summary, true);
-    if (fit.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(fit.incompleteRowsDropped));
+    if (fit.frontier) frontierScaleRows(writer, fit.frontier->scales);
+    statisticRows(writer, fit);
     const ParameterEstimate& elasticity = fit.costElasticity;
     writer.put(costElasticityLabel, {elasticity.estimate, writer.undefinedIfExact(elasticity.standardError),
                                      writer.undefinedIfExact(elasticity.tStatistic),
@@ -68,6 +96,7 @@ CellTable costFitTable(const CostFit& fit)
         writer.textRow(efficientScaleLabel, {notAvailableText});
     }
     writer.put(costRegularityLabel, {static_cast<double>(fit.regularity.irregularRows), regularityNote(fit)});
+    if (fit.frontier) frontierConvergenceRow(writer, fit.frontier->mirrored);
     writer.textRow(formLabel, {translog ? translogCostWord : cobbDouglasCostWord, costFormNote(fit)});
     writer.valueRow(smearingLabel, summary.smearingFactor);
     return writer.finish();

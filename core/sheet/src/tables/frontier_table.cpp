@@ -3,19 +3,13 @@
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/fits/ces_fit.hpp" // convergedText
 #include "isoquant/math/fits/translog_fit.hpp"
-#include "tables/table_writer.hpp"
+#include "tables/frontier_rows.hpp"
 
 #include <cmath>
 
 namespace isoquant {
 
 namespace {
-
-void estimateRow(TableWriter& writer, const std::string& label, const ParameterEstimate& estimate)
-{
-    writer.put(label, {estimate.estimate, estimate.standardError, estimate.tStatistic, estimate.pValue,
-                       estimate.lowerBound, estimate.upperBound});
-}
 
 std::vector<std::string> parameterLabels(const ProductionFrontier& frontier)
 {
@@ -28,18 +22,47 @@ std::vector<std::string> parameterLabels(const ProductionFrontier& frontier)
     return labels;
 }
 
-std::string formNote(const ProductionFrontier& frontier)
+} // namespace
+
+void frontierScaleRows(TableWriter& writer, const FrontierScaleEstimates& scales)
 {
-    if (frontier.fit.wrongSkew) return wrongSkewNote;
-    if (frontier.fit.convergence == FrontierConvergence::boundary)
+    writer.estimateRow(noiseSdLabel, scales.noiseSd);
+    writer.estimateRow(inefficiencySdLabel, scales.inefficiencySd);
+    writer.estimateRow(lambdaLabel, scales.lambda);
+}
+
+void frontierLikelihoodRows(TableWriter& writer, const StochasticFrontierFit& fit)
+{
+    const auto n = static_cast<double>(fit.residuals.size());
+    const auto parameters = static_cast<double>(fit.coefficients.size() + 2);
+    writer.valueRow(logLikelihoodLabel, fit.logLikelihood);
+    writer.valueRow(aicLabel, -2 * fit.logLikelihood + 2 * parameters);
+    writer.valueRow(bicLabel, -2 * fit.logLikelihood + parameters * std::log(n));
+}
+
+void frontierInefficiencyRows(TableWriter& writer, const StochasticFrontierFit& fit)
+{
+    const double statistic = inefficiencyTestStatistic(fit);
+    writer.put(inefficiencyTestLabel, {Cell{}, Cell{}, statistic, inefficiencyTestPValue(statistic)});
+    writer.valueRow(meanEfficiencyLabel, meanEfficiency(fit));
+}
+
+void frontierConvergenceRow(TableWriter& writer, const StochasticFrontierFit& fit)
+{
+    writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
+                                      std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});
+}
+
+std::string frontierNote(const StochasticFrontierFit& fit)
+{
+    if (fit.wrongSkew) return wrongSkewNote;
+    if (fit.convergence == FrontierConvergence::boundary)
         return "note: no maximum with noise: the likelihood keeps rising toward noise SD = 0; the estimates "
                "are where the solver stopped (try the other inefficiency distribution or more rows)";
-    if (frontier.fit.convergence != FrontierConvergence::converged)
+    if (fit.convergence != FrontierConvergence::converged)
         return "note: the likelihood was not maximised; the estimates are where the solver stopped";
     return "";
 }
-
-} // namespace
 
 std::string inefficiencyWord(InefficiencyDistribution distribution)
 {
@@ -71,27 +94,18 @@ CellTable frontierTable(const ProductionFrontier& frontier)
     writer.headerRow(fit.distribution == InefficiencyDistribution::halfNormal ? halfNormalFrontierTitle
                                                                               : exponentialFrontierTitle);
     const std::vector<std::string> labels = parameterLabels(frontier);
-    for (std::size_t j = 0; j < labels.size(); ++j) estimateRow(writer, labels[j], frontier.coefficients[j]);
+    for (std::size_t j = 0; j < labels.size(); ++j) writer.estimateRow(labels[j], frontier.coefficients[j]);
     writer.skipRow();
 
-    estimateRow(writer, noiseSdLabel, frontier.noiseSd);
-    estimateRow(writer, inefficiencySdLabel, frontier.inefficiencySd);
-    estimateRow(writer, lambdaLabel, frontier.lambda);
-    const auto n = static_cast<double>(fit.residuals.size());
-    const auto parameters = static_cast<double>(fit.coefficients.size() + 2);
-    writer.valueRow(observationsLabel, n);
-    writer.valueRow(logLikelihoodLabel, fit.logLikelihood);
-    writer.valueRow(aicLabel, -2 * fit.logLikelihood + 2 * parameters);
-    writer.valueRow(bicLabel, -2 * fit.logLikelihood + parameters * std::log(n));
-    const double statistic = inefficiencyTestStatistic(fit);
-    writer.put(inefficiencyTestLabel, {Cell{}, Cell{}, statistic, inefficiencyTestPValue(statistic)});
-    writer.valueRow(meanEfficiencyLabel, meanEfficiency(fit));
+    frontierScaleRows(writer, {frontier.noiseSd, frontier.inefficiencySd, frontier.lambda});
+    writer.valueRow(observationsLabel, static_cast<double>(fit.residuals.size()));
+    frontierLikelihoodRows(writer, fit);
+    frontierInefficiencyRows(writer, fit);
     const ParameterEstimate& returns = frontier.returns;
     writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.tStatistic, returns.pValue});
     writer.textRow(verdictLabel, {frontier.verdict});
-    writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
-                                      std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});
-    writer.textRow(formLabel, {formWord(frontier.form), formNote(frontier)});
+    frontierConvergenceRow(writer, fit);
+    writer.textRow(formLabel, {formWord(frontier.form), frontierNote(frontier.fit)});
     return writer.finish();
 }
 

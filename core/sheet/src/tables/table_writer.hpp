@@ -32,7 +32,13 @@ public:
                     undefinedIfExact(fit.tStatistics(index)), undefinedIfExact(fit.pValues(index)),
                     undefinedIfExact(fit.lowerBounds(index)), undefinedIfExact(fit.upperBounds(index))});
     }
+    void estimateRow(const std::string& label, const ParameterEstimate& estimate)
+    {
+        put(label, {estimate.estimate, estimate.standardError, estimate.tStatistic, estimate.pValue,
+                    estimate.lowerBound, estimate.upperBound});
+    }
     void valueRow(const char* label, double value) { put(label, {value}); }
+
     void textRow(const std::string& label, std::initializer_list<std::string> texts)
     {
         table_.set(row_, 0, label);

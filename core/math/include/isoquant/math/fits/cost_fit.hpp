@@ -18,10 +18,16 @@
 // prices, standard error y*·√(gᵀV_θg) with g the gradient of ln y* (delta method).
 // R² is that of ln C (1 − RSS/TSS of ln C), as PRODFIT does under constant returns; the F, the
 // log-likelihood, AIC and BIC are those of the regression run.
+// Cost frontier (`inefficiency` set): the same regression run with ε = v + u, u ≥ 0 half-normal or
+// exponential (cost_frontier.hpp), by maximum likelihood from the least-squares start; θ = T·β + t₀
+// and its covariance T·V_β·Tᵀ from the frontier's β and the observed information. Inference is then
+// the normal's (Student's t on infinitely many degrees of freedom) and the test of returns = 1 the
+// Wald χ²(1) (the F on 1 and ∞). Not with shares.
 #pragma once
 
 #include "isoquant/math/fits/fit_result.hpp"
 #include "isoquant/math/forms/cost_duality.hpp"
+#include "isoquant/math/frontier/stochastic_frontier.hpp"
 
 #include <Eigen/Dense>
 
@@ -47,6 +53,15 @@ struct CostFitOptions {
     CostForm form = CostForm::cobbDouglas;
     CovarianceKind covariance = CovarianceKind::classical; // classical, hc1 or hc3
     double confidenceLevel = 0.95;
+    // Set: the cost frontier with this distribution of u (above); empty: the average cost function.
+    std::optional<InefficiencyDistribution> inefficiency;
+};
+
+// The cost frontier's own figures: the fit of −ln(C/w_k) as a production frontier (cost_frontier.hpp:
+// its coefficients are −b of the regression run, its residuals −ε) and σᵥ, σᵤ, λ.
+struct CostFrontierPart {
+    StochasticFrontierFit mirrored;
+    FrontierScaleEstimates scales;
 };
 
 struct CostFit {
@@ -68,12 +83,14 @@ struct CostFit {
     // `incomplete rows` on: the table shows how many rows were left out.
     bool dropsIncompleteRows = false;
     std::size_t incompleteRowsDropped = 0;
+    std::optional<CostFrontierPart> frontier; // with `inefficiency`
 };
 
 // The labels of the translog's second-order rows: "output*output", "<i>*<j>" (i ≤ j), "<i>*output".
 std::vector<std::string> costSecondOrderLabels(const std::vector<std::string>& priceLabels);
 
-// Throws InputError for too few rows, no variation in output, and collinear terms (naming them).
+// Throws InputError for too few rows, no variation in output, and collinear terms (naming them);
+// for a cost frontier also for shares and for an exact fit (a frontier needs noise).
 CostFit fitCost(const CostData& data, const CostFitOptions& options);
 
 } // namespace isoquant

@@ -13,6 +13,7 @@
 // is largest at σᵤ = 0 (Waldman 1982 for the half-normal): the fit is least squares, σᵥ² = RSS/n.
 #pragma once
 
+#include "isoquant/math/fits/fit_result.hpp" // ParameterEstimate
 #include "isoquant/math/frontier/frontier_likelihood.hpp"
 
 #include <Eigen/Dense>
@@ -60,5 +61,14 @@ double inefficiencyTestPValue(double statistic);
 
 // The mean over the fitted rows of E[exp(−u)|ε] (Battese and Coelli 1988); 1 under wrong skew.
 double meanEfficiency(const StochasticFrontierFit& fit);
+
+// σᵥ, σᵤ and λ = σᵤ/σᵥ at confidence `level`: standard errors by the delta method from their logs,
+// se(σ) = σ·se(ln σ), bounds exp(ln σ ± z·se(ln σ)), z the normal quantile, which stay positive;
+// no test (σᵤ = 0 lies on the boundary: see the inefficiency test). Under wrong skew σᵤ and λ are
+// 0 with no standard error or bounds.
+struct FrontierScaleEstimates {
+    ParameterEstimate noiseSd, inefficiencySd, lambda;
+};
+FrontierScaleEstimates frontierScaleEstimates(const StochasticFrontierFit& fit, double level);
 
 } // namespace isoquant

@@ -26,6 +26,7 @@ enum class DataPart {
     cost,
     prices,
     shares,
+    inefficiency, // which distribution of inefficiency, if any
 };
 
 // The math layer's word for a part: "output", "periods", "covariance kind", ….

@@ -12,6 +12,8 @@ namespace isoquant {
 // `incomplete rows` are part of the signature but not yet available: given, they are refused with a
 // message saying so. `shares` (one column per price, rows summing to 1 within 0.01, rescaled to 1)
 // fits the cost and share equations jointly (cost_share_system.hpp), with classical errors only.
+// `inefficiency` "half-normal" or "exponential" fits the cost frontier instead (cost_fit.hpp), with
+// neither shares nor robust errors; empty: the average cost function.
 struct CostFitArguments {
     CellTable cost;
     CellTable output;
@@ -25,6 +27,7 @@ struct CostFitArguments {
     Cell effects;
     CellTable trend;
     Cell incompleteRows;
+    Cell inefficiency;
 };
 
 CostFit costFitFromArguments(const CostFitArguments& arguments);

@@ -41,6 +41,9 @@ struct ProductionFrontier {
     std::string verdict;
 };
 
+// The `inefficiency` argument: "half-normal" (also when empty) or "exponential".
+InefficiencyDistribution readInefficiencyArgument(const Cell& cell);
+
 // The regressors of the frontier: 1, ln xᵢ, (translog: its second-order terms,
 // translog_fit.hpp), then the controls as they are.
 Eigen::MatrixXd frontierDesign(ProductionForm form, const Eigen::MatrixXd& inputs, const Eigen::MatrixXd& controls);

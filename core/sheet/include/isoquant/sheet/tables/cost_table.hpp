@@ -12,6 +12,8 @@ namespace isoquant {
 // The words of the cost table that PRODCOST's model reader also reads.
 inline constexpr const char* cobbDouglasCostTitle = "Cobb-Douglas cost fit";
 inline constexpr const char* translogCostTitle = "translog cost fit";
+inline constexpr const char* halfNormalCostFrontierTitle = "half-normal cost frontier"; // the form row says which form
+inline constexpr const char* exponentialCostFrontierTitle = "exponential cost frontier";
 inline constexpr const char* cobbDouglasCostWord = "cobb-douglas cost"; // the form row
 inline constexpr const char* translogCostWord = "translog cost";
 inline constexpr const char* costConstantLabel = "constant";
@@ -26,7 +28,15 @@ inline constexpr const char* costRegularityLabel = "regularity";
 // to scale; verdict; efficient scale; regularity; form; smearing factor. Cobb-Douglas: k + 19 rows;
 // translog: 2k + k(k+1)/2 + 20 rows; one more (`incomplete rows dropped`, after BIC) with
 // `incomplete rows` on.
-std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows = false);
+// A cost frontier (`inefficiency` given) has 6 rows more, those of PRODFRONTIER's table
+// (frontier_table.hpp): the header reads "half-normal cost frontier" or "exponential cost
+// frontier"; the parameter rows show z, normal p-values and bounds; noise SD, inefficiency SD and
+// lambda after the empty row; R2, adjusted R2, residual SD and F (slopes = 0), least squares'
+// figures, are n/a; log-likelihood, AIC and BIC are the frontier's (σᵥ and σᵤ counted);
+// inefficiency test and mean efficiency (of cost, E[exp(−u)|ε] ≤ 1) after BIC (and after
+// `incomplete rows dropped`); convergence before form; the smearing factor is n/a.
+std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows = false,
+                             bool frontier = false);
 CellTable costFitTable(const CostFit& fit);
 
 } // namespace isoquant

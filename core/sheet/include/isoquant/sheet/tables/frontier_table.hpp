@@ -40,5 +40,7 @@ CellTable frontierTable(const ProductionFrontier& frontier);
 // The word of the inefficiency argument and of the title: "half-normal" or "exponential".
 std::string inefficiencyWord(InefficiencyDistribution distribution);
 std::string frontierStatusWord(FrontierConvergence convergence);
+// The form row's note on the fit: wrong skew, a boundary or no convergence; empty when converged.
+std::string frontierNote(const StochasticFrontierFit& fit);
 
 } // namespace isoquant
