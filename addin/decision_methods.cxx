@@ -29,11 +29,12 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
 }
 
 Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
-                                  const Any& what)
+                                  const Any& what, const Any& statistic)
 {
     return guardedTable([&] {
-        return costColumn(models_.table(model, "model"), toCellTable(targetOutput, "target output"),
-                          toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+        return costColumnWithBounds(models_.table(model, "model"), toCellTable(targetOutput, "target output"),
+                                    toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"),
+                                    toSingleCell(statistic, "statistic"));
     });
 }
 

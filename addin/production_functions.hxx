@@ -89,7 +89,7 @@ public:
                                        const css::uno::Any& effects, const css::uno::Any& trend,
                                        const css::uno::Any& incompleteRows) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
-                               const css::uno::Any& what) override;
+                                    const css::uno::Any& what, const css::uno::Any& statistic) override;
     css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodPriceElasticity(const AnyTable& model, const AnyTable& output,
                                                const AnyTable& inputPrices, const AnyTable& inputI,

@@ -78,7 +78,7 @@ GERMAN_ARGUMENTS = {
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
     "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art", "Kennzahl"],
     "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
-    "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
+    "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl", "Statistik"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",
                     "unvollständige Zeilen"],

@@ -19,7 +19,8 @@ namespace isoquant::delta_method {
 enum class Statistic { value, standardError, lowerBound, upperBound, predictionLower, predictionUpper };
 
 // Empty: "value". `allowsPrediction`: the two prediction words are known too (PRODOUTPUT).
-Statistic readWhat(const Cell& what, bool allowsPrediction);
+// `argument` names the cell in a message: "what", or "statistic" where "what" is taken (PRODCOST).
+Statistic readWhat(const Cell& what, bool allowsPrediction, const std::string& argument = "what");
 std::string word(Statistic statistic);
 
 // A quantity at one bundle: its value and the gradient in θ of ln(value) (log scale) or of value.
@@ -36,10 +37,11 @@ struct BoundsModel {
     double critical = 0; // the t quantile of the block's level and degrees of freedom
 };
 
-// Throws InputError naming "what" for a model without a covariance block (a typed model), a form
-// other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a model
-// whose evaluators use a shifted ln A.
-BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale);
+// Throws InputError naming `argument` for a model without a covariance block (a typed model), a
+// form other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a
+// model whose evaluators use a shifted ln A.
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
+                            const std::string& argument = "what");
 
 // se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
 // `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).
