@@ -165,9 +165,9 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     const CellTable values = costColumn(model, target, prices, what);
     if (asked == Statistic::value) return values;
     if (isCostModel(model.cells()))
-        throw InputError("statistic: \"" + word(asked) + "\" needs a production model's covariance block; a cost "
-                         "model (a PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with covariance "
-                         "TRUE");
+        throw InputError("statistic: \"" + word(asked) + "\" needs a production model's covariance block; a "
+                         "cost model (a PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with "
+                         "covariance TRUE");
     const CostMeasure measure = readCostMeasure(what);
     const bool needsLogScale = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
     const BoundsModel read = readBoundsModel(model, asked, needsLogScale, "statistic");
