@@ -1,9 +1,10 @@
-// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION, and `statistic` of PRODCOST (issue 20,
-// bound_functions.hpp) on the Cobb & Douglas (1928) data (tests/data/README.md) with a covariance
-// block: "value" is the plain function's answer; log-scale bounds are symmetric around the value in
-// logs (lower·upper = value², exactly so up to rounding: 1e-12 relative) and linear ones around the
-// value itself; the words a model cannot answer get a message naming "what". The figures themselves
-// are checked against statsmodels and numpy in test_bounds_cross_check.cpp.
+// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION, and `statistic` of
+// PRODCOST (issue 20, bound_functions.hpp) on the Cobb & Douglas (1928) data (tests/data/README.md)
+// with a covariance block: "value" is the plain function's answer; log-scale bounds are symmetric
+// around the value in logs (lower·upper = value², exactly so up to rounding: 1e-12 relative) and
+// linear ones around the value itself; the words a model cannot answer get a message naming "what"
+// (PRODCOST: "statistic"). The figures themselves are checked against statsmodels and numpy in
+// test_bounds_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
@@ -242,6 +243,29 @@ BOOST_AUTO_TEST_CASE(cost_figures_bounds_by_statistic)
     const auto costScaleError = isoquant::costColumnWithBounds(table, outputs, prices, std::string("returns to scale"),
                                                                std::string("std. error"));
     BOOST_TEST(close(costScaleError.number(0, 0), scaleError.number(1, 0)));
+}
+
+// Munnell's (1990) state panel with its control (tests/data): the evaluators' ln A is shifted to the
+// control's mean. Total, marginal and average cost involve it and get the message; the cost
+// elasticity and returns to scale do not and are answered (ν's std. error as PRODSCALE's).
+BOOST_AUTO_TEST_CASE(cost_with_a_shifted_ln_a)
+{
+    const auto fit = isoquant::fitFromArguments(isoquant::testing::statePanelArguments());
+    const auto table = isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+    const auto prices = isoquant::testing::typedRange({{2.0, 3.0, 5.0}}); // invented
+    const auto target = isoquant::singleCell(150.0);
+    for (const char* figure : {"total", "marginal", "average"})
+        BOOST_TEST(messageOf([&] {
+                       isoquant::costColumnWithBounds(table, target, prices, std::string(figure),
+                                                      std::string("lower bound"));
+                   }) == "statistic: \"lower bound\" is not available when the model's ln A is shifted (controls "
+                         "at their means, effects or a trend): the covariance block does not cover that ln A",
+                   figure);
+    const auto scaleError = isoquant::scaleColumnWithBounds(table, {}, std::string("std. error"));
+    BOOST_TEST(close(isoquant::costColumnWithBounds(table, target, prices, std::string("returns to scale"),
+                                                    std::string("std. error"))
+                         .number(0, 0),
+                     scaleError.number(0, 0)));
 }
 
 BOOST_AUTO_TEST_CASE(cost_statistic_messages_name_statistic)
