@@ -24,7 +24,8 @@ namespace {
 
 // PRODCOST's figure of the cobb-douglas least cost at output y and prices w, linearised in θ.
 // C = ν·(y/A)^(1/ν)·Π(wⱼ/bⱼ)^(bⱼ/ν), so with S = ln y − ln A + Σ bⱼ ln(wⱼ/bⱼ), ln C = ln ν + S/ν:
-// ∂ln C/∂ln A = −1/ν, ∂ln C/∂bₘ = 1/ν + (ln(wₘ/bₘ) − 1)/ν − S/ν². Average cost C/y has that
+// ∂ln C/∂ln A = −1/ν, ∂ln C/∂bₘ = 1/ν + (ln(wₘ/bₘ) − 1)/ν − S/ν² = ln(wₘ/bₘ)/ν − S/ν² (S is
+// the numerator of ln C = ln ν + S/ν, ∂S/∂bₘ = ln(wₘ/bₘ) − 1). Average cost C/y has that
 // gradient; marginal cost C/(ν·y) subtracts a further 1/ν at each bₘ; all three on the log scale.
 // Cost elasticity 1/ν (g = −1/ν² at each bₘ) and returns to scale ν (g = 1 at each bₘ) are
 // linear in the exponents as PRODSCALE's ν is: bounds value ∓ t·se.
@@ -39,9 +40,9 @@ Linearised costFigureLinearised(const BoundsModel& read, CostMeasure measure, do
         return Linearised{figure, gradient, false};
     }
     const Eigen::ArrayXd logPriceOverExponent = (prices.array() / b.array()).log();
-    const double shifted = std::log(level) - read.form->logScale + (b.array() * logPriceOverExponent).sum();
+    const double numerator = std::log(level) - read.form->logScale + (b.array() * logPriceOverExponent).sum();
     gradient(0) = -1 / scale;
-    gradient.segment(1, b.size()) = (logPriceOverExponent / scale - shifted / (scale * scale)).matrix();
+    gradient.segment(1, b.size()) = (logPriceOverExponent / scale - numerator / (scale * scale)).matrix();
     if (measure == CostMeasure::marginal) gradient.segment(1, b.size()).array() -= 1 / scale;
     return Linearised{figure, gradient, true};
 }
