@@ -30,11 +30,13 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
 }
 
 Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
-                                  const Any& what)
+                                  const Any& what, const Any& statistic)
 {
     return guardedTable([&] {
-        return costColumn(models_.table(model, argument::model), toCellTable(targetOutput, argument::targetOutput),
-                          toCellTable(inputPrices, argument::inputPrices), toSingleCell(what, argument::what));
+        return costColumnWithBounds(models_.table(model, argument::model),
+                                    toCellTable(targetOutput, argument::targetOutput),
+                                    toCellTable(inputPrices, argument::inputPrices), toSingleCell(what, argument::what),
+                                    toSingleCell(statistic, argument::statistic));
     });
 }
 

@@ -348,7 +348,14 @@ std::vector<FunctionInfo> costFunctions()
                                   "column of outputs, one row of prices per output (or one row for all)."},
           {argument::what,
            "\"total\" (default), \"marginal\", \"average\", \"cost elasticity\" (percent change of cost "
-           "per percent of output) or \"returns to scale\" (its inverse)."}}},
+           "per percent of output) or \"returns to scale\" (its inverse)."},
+          {argument::statistic,
+           "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\" of that figure: by "
+           "the delta method from the covariance block of a cobb-douglas PRODFIT table made with "
+           "covariance TRUE, at its level and t distribution. Cost is positive by nature: total, "
+           "marginal and average cost get bounds on the log scale, so they never cross 0; cost "
+           "elasticity and returns to scale get value -/+ t times the std. error. Not for a cost model "
+           "(PRODCOSTFIT), which has no covariance block."}}},
         {"prodEfficientScale",
          "PRODEFFICIENTSCALE",
          "Output at which average cost is lowest at the given input prices (the efficient scale), from a cost "

@@ -253,7 +253,14 @@ const Translation& germanTranslation()
                            "Zeile für alle)."},
           {"Kennzahl", "\"total\" (Standard: Gesamtkosten), \"marginal\" (Grenzkosten), \"average\" "
                        "(Durchschnittskosten), \"cost elasticity\" (prozentuale Änderung der Kosten je Prozent "
-                       "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."}}},
+                       "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."},
+          {"Statistik", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
+                        "\"upper bound\" (untere oder obere Grenze) dieser Kennzahl: nach der Delta-Methode aus dem "
+                        "Kovarianzblock einer mit Kovarianz WAHR geschätzten PRODFIT-Tabelle der Form cobb-douglas, "
+                        "auf deren Niveau und mit deren t-Verteilung. Kosten sind ihrer Natur nach positiv: Gesamt-, "
+                        "Grenz- und Durchschnittskosten erhalten Grenzen auf der Log-Skala, die nie unter 0 fallen; "
+                        "Kostenelastizität und Skalenerträge den Wert -/+ t mal Standardfehler. Nicht für ein "
+                        "Kostenmodell (PRODCOSTFIT), das keinen Kovarianzblock hat."}}},
         {"prodCostFit",
          "Schätzt eine Kostenfunktion aus beobachteten Kosten, Ausbringung und Faktorpreisen nach der Methode der "
          "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen, oder mit Ineffizienz eine stochastische "

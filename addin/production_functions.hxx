@@ -90,7 +90,7 @@ public:
                                        const css::uno::Any& incompleteRows,
                                        const css::uno::Any& inefficiency) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
-                               const css::uno::Any& what) override;
+                                    const css::uno::Any& what, const css::uno::Any& statistic) override;
     css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodPriceElasticity(const AnyTable& model, const AnyTable& output,
                                                const AnyTable& inputPrices, const AnyTable& inputI,

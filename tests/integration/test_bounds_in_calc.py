@@ -157,12 +157,13 @@ class BoundsTest(CalcTestCase):
 
 
 class DerivedBoundsTest(CalcTestCase):
-    """`what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION on the table with its
-    block. Expected: statsmodels' cov_params of the same fit (tests/data, Cobb & Douglas 1928) and a
-    central-difference gradient in numpy of the same quantity written out here (step 1e-6 times
+    """`what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION, and `statistic` of
+    PRODCOST, on the table with its block. Expected: statsmodels' cov_params of the same fit
+    (tests/data, Cobb & Douglas 1928) and a central-difference gradient in numpy of the same quantity written out here (step 1e-6 times
     max(1, |theta_j|)); se = sqrt(g'Vg), bounds with scipy's t(21) quantile, on the log scale for
     the positive quantities; to 1e-7 relative (the issue's tolerance). Bundle (150, 200), output 170,
-    budget 1000 and prices (2, 3): invented."""
+    budget 1000 and prices (2, 3): invented. PRODCOST's total and marginal cost of output 170 at those
+    prices come from the first-order conditions here, not the core's closed form."""
 
     @classmethod
     def setUpClass(cls):
@@ -172,6 +173,7 @@ class DerivedBoundsTest(CalcTestCase):
         for name, (row, formula) in FORMULAS.items():
             for column, what in zip("NOPQ", ("std. error", "lower bound", "upper bound", "value")):
                 set_formula(cls.sheet, "%s%d" % (column, row), formula % what)
+        set_formula(cls.sheet, "R36", "=PRODCOST($F$1:$L$21;170;$S$91:$T$91)")  # the plain function
         recalc(CALC.doc)
 
     def reference(self):
@@ -228,6 +230,22 @@ class DerivedBoundsTest(CalcTestCase):
         self.check("budget labour", labour, True)
         self.check("budget output", made, True)
 
+    def test_cost_of_an_output(self):
+        # Cost minimisation's first-order conditions w_i = MC b_i y / x_i give x_i = (b_i / w_i) lam
+        # with lam = MC y, and y = A prod (b_j lam / w_j)^b_j fixes ln lam; the cost is w . x.
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        prices = np.array([2.0, 3.0])
+
+        def scaled(p):
+            b = p[1:]
+            return np.exp((np.log(170.0) - p[0] - b @ (np.log(b) - np.log(prices))) / b.sum())
+
+        self.check("cost total", lambda p: float(prices @ (p[1:] / prices * scaled(p))), True)
+        self.check("cost marginal", lambda p: scaled(p) / 170.0, True)
+        row = FORMULAS["cost total"][0]
+        self.assertEqual(get_cell(self.sheet, "Q%d" % row), get_cell(self.sheet, "R%d" % row))
+
     def test_substitution_elasticity_has_no_sampling_error_under_cobb_douglas(self):
         # Every cobb-douglas parameter gives the elasticity 1 (README), so its gradient is 0.
         row = FORMULAS["substitution"][0]
@@ -245,6 +263,8 @@ FORMULAS = {
     "budget labour": (33, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;1)'),
     "budget output": (34, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;3)'),
     "substitution": (35, '=PRODSUBSTITUTION($F$1:$L$21;$P$91:$Q$91;"L";"C";"allen";"%s")'),
+    "cost total": (36, '=PRODCOST($F$1:$L$21;170;$S$91:$T$91;"total";"%s")'),
+    "cost marginal": (37, '=PRODCOST($F$1:$L$21;170;$S$91:$T$91;"marginal";"%s")'),
 }
 
 

@@ -46,7 +46,7 @@ ENGLISH_NAME = {
     "Tabelle": "table", "Ineffizienz": "inefficiency", "Ausbringungen": "outputs", "Skalenerträge": "returns",
     "Orientierung": "orientation", "Namen": "names",
     "Budget": "budget", "Produktpreis": "output price", "Ausbringungsniveau": "output level",
-    "Mengen von Faktor i": "values of input i", "Kovarianz": "covariance",
+    "Mengen von Faktor i": "values of input i", "Kovarianz": "covariance", "Statistik": "statistic",
 }
 FIT_ARGUMENTS = ["Funktionsform", "konstante Skalenerträge", "Standardfehler", "Konfidenzniveau",
                  "Kontrollvariablen", "Gruppen", "Effekte", "Trend", "unvollständige Zeilen"]
@@ -78,7 +78,7 @@ GERMAN_ARGUMENTS = {
     "PRODMRTS": AT_BUNDLES + ["Faktor i", "Faktor j", "Kennzahl"],
     "PRODSUBSTITUTION": AT_BUNDLES + ["Faktor i", "Faktor j", "Art", "Kennzahl"],
     "PRODLEASTCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
-    "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl"],
+    "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl", "Statistik"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",
                     "unvollständige Zeilen", "Ineffizienz"],

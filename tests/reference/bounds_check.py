@@ -22,6 +22,10 @@ rate of technical substitution of L for C, (bL/L)/(bC/C), positive: on the log s
 (BUDGETS, numbered as the bundles): the share s of the budget B spent on L solved for each theta by
 scipy's brentq from the first-order condition bL/s = bC/(1 - s) of max ln Y = ln A + bL ln(sB/wL) +
 bC ln((1 - s)B/wC) (to xtol 1e-15), then the two amounts and the output, positive: on the log scale.
+PRODCOST's figures at the PLANS (independently of the core's closed form): total cost C = wL xL + wC xC
+of those least-cost amounts, marginal cost MC = wL xL / (bL y) (the Lagrange multiplier of the
+first-order condition wL = MC bL y / xL), average cost C / y, positive: on the log scale; the cost
+elasticity MC y / C and returns to scale C / (MC y): q -+ t se.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -108,6 +112,16 @@ def main():
 
             positive("least_cost_L", lambda p: amount(p, 0))
             positive("least_cost_C", lambda p: amount(p, 1))
+
+            def cost(p):
+                return wage_l * amount(p, 0) + wage_c * amount(p, 1)
+
+            def marginal_cost(p):
+                return wage_l * amount(p, 0) / (p[1] * target)
+
+            positive("cost_total", cost)
+            positive("cost_marginal", marginal_cost)
+            positive("cost_average", lambda p: cost(p) / target)
             positive("tfp", lambda p: OBSERVED[number] / output(p))
             positive("mrts_LC", lambda p: (p[1] / labour) / (p[2] / capital))
             budget, price_l, price_c = BUDGETS[number]
@@ -121,7 +135,9 @@ def main():
                 positive(name, lambda p, index=index: plan(p)[index])
             linear = (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2]),
                       ("second_LC", lambda p: p[1] * p[2] * output(p) / (labour * capital)),
-                      ("second_LL", lambda p: p[1] * (p[1] - 1) * output(p) / labour ** 2))
+                      ("second_LL", lambda p: p[1] * (p[1] - 1) * output(p) / labour ** 2),
+                      ("cost_elasticity", lambda p: marginal_cost(p) * target / cost(p)),
+                      ("cost_scale", lambda p: cost(p) / (marginal_cost(p) * target)))
             for name, function in linear:
                 put(name + "_se", se(function))
                 put(name + "_lower", function(theta) - t * se(function))

@@ -1,11 +1,12 @@
 // Standard errors and bounds of derived numbers (issue 20: PRODOUTPUT, PRODMARGINAL,
-// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`)
+// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`,
+// PRODCOST with `statistic`)
 // from a PRODFIT table with its covariance block, against python3-statsmodels 0.13.5 (the
 // covariance of the same OLS fit, classical and HC1) and a numerical gradient of the same quantity
 // in numpy, recomputed at test time by tests/reference/bounds_check.py on the Cobb & Douglas (1928)
 // data (tests/data/README.md) at three invented bundles, plans, budgets and observed outputs (the
-// least-cost amounts and budget plans solved there from first-order conditions, independently of
-// the core's closed forms).
+// least-cost amounts, their cost and budget plans solved there from first-order conditions,
+// independently of the core's closed forms).
 //
 // Tolerance: 1e-7 relative on every figure (the issue's). The covariance matrices agree to about
 // 1e-12 (two factorisations of the same least squares) and the central-difference gradient to
@@ -50,6 +51,25 @@ isoquant::CellTable tableWithBlock(const std::string& errors)
     arguments.errors = errors;
     const auto fit = isoquant::fitFromArguments(arguments);
     return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+}
+
+// PRODCOST's `what` for bounds_check.py's cost quantities ("cost_marginal", …).
+const std::map<std::string, std::string> costFigures{{"cost_total", "total"},
+                                                     {"cost_marginal", "marginal"},
+                                                     {"cost_average", "average"},
+                                                     {"cost_elasticity", "cost elasticity"},
+                                                     {"cost_scale", "returns to scale"}};
+
+// PRODCOST's figure `name` of plan `plan` with the statistic `word`.
+double coreCostFigure(const isoquant::CellTable& model, const std::string& name, std::size_t plan,
+                      const std::string& word)
+{
+    isoquant::CellTable prices(1, 2);
+    prices.set(0, 0, plans[plan][1]);
+    prices.set(0, 1, plans[plan][2]);
+    return isoquant::costColumnWithBounds(model, isoquant::singleCell(plans[plan][0]), prices,
+                                          costFigures.at(name), word)
+        .number(0, 0);
 }
 
 // The core's figure for a quantity of bounds_check.py ("marginal_L_upper", "scale_se", …).
@@ -99,6 +119,8 @@ double coreFigure(const isoquant::CellTable& model, const std::string& quantity,
                                                          words.at(suffix));
     else if (name == "scale")
         result = isoquant::scaleColumnWithBounds(model, inputs, words.at(suffix));
+    else if (costFigures.count(name))
+        return coreCostFigure(model, name, bundle, words.at(suffix));
     else
         throw std::runtime_error("unknown quantity " + quantity);
     return result.number(0, 0);
@@ -113,8 +135,8 @@ BOOST_AUTO_TEST_CASE(standard_errors_and_bounds_agree_with_statsmodels_and_numpy
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_BOUNDS_FIGURES"));
-    // 2 kinds of errors × 3 bundles × (11 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 47u);
+    // 2 kinds of errors × 3 bundles × (14 positive quantities × 3 + 2 prediction bounds + 6 linear × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 62u);
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string& errors = fields.at(0);

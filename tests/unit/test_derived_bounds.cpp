@@ -1,10 +1,12 @@
-// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION (issue 20,
-// bound_functions.hpp) on the Cobb & Douglas (1928) data (tests/data/README.md) with a covariance
-// block: "value" is the plain function's answer; log-scale bounds are symmetric around the value in
-// logs (lower·upper = value², exactly so up to rounding: 1e-12 relative) and linear ones around the
-// value itself; the words a model cannot answer get a message naming "what". The figures themselves
-// are checked against statsmodels and numpy in test_bounds_cross_check.cpp.
+// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION, and `statistic` of
+// PRODCOST (issue 20, bound_functions.hpp) on the Cobb & Douglas (1928) data (tests/data/README.md)
+// with a covariance block: "value" is the plain function's answer; log-scale bounds are symmetric
+// around the value in logs (lower·upper = value², exactly so up to rounding: 1e-12 relative) and
+// linear ones around the value itself; the words a model cannot answer get a message naming "what"
+// (PRODCOST: "statistic"). The figures themselves are checked against statsmodels and numpy in
+// test_bounds_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/growth_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
@@ -212,6 +214,81 @@ BOOST_AUTO_TEST_CASE(substitution_elasticity_of_cobb_douglas_has_no_sampling_err
                    isoquant::substitutionColumnWithBounds(typedModel(), bundles, labour, capital, {},
                                                           std::string("std. error"));
                }) == "what: \"std. error\" " + noBlock);
+}
+
+// PRODCOST over a column of two outputs (a header, invented outputs and prices): every figure's
+// "value" is the plain function's; total, marginal and average cost have log-scale bounds, the cost
+// elasticity and returns to scale linear ones, and the returns to scale the std. error PRODSCALE gives ν.
+BOOST_AUTO_TEST_CASE(cost_figures_bounds_by_statistic)
+{
+    const auto table = tableWithBlock();
+    const auto outputs = isoquant::testing::typedRange({{std::string("P")}, {120.0}, {300.0}});
+    const auto prices = isoquant::testing::typedRange({{2.0, 3.0}});
+    for (const char* figure : {"total", "marginal", "average", "cost elasticity", "returns to scale"}) {
+        const isoquant::Cell what = std::string(figure);
+        const auto plain = isoquant::costColumn(table, outputs, prices, what);
+        const auto at = [&](const char* word) {
+            return isoquant::costColumnWithBounds(table, outputs, prices, what, std::string(word));
+        };
+        BOOST_TEST_CONTEXT(figure)
+        {
+            BOOST_TEST((at("value") == plain));
+            BOOST_TEST((isoquant::costColumnWithBounds(table, outputs, prices, what, {}) == plain));
+            const bool logScale = std::string(figure) == "total" || std::string(figure) == "marginal" ||
+                                  std::string(figure) == "average";
+            checkAround(plain, at("lower bound"), at("upper bound"), logScale);
+        }
+    }
+    const auto scaleError = isoquant::scaleColumnWithBounds(table, twoBundles(), std::string("std. error"));
+    const auto costScaleError = isoquant::costColumnWithBounds(table, outputs, prices, std::string("returns to scale"),
+                                                               std::string("std. error"));
+    BOOST_TEST(close(costScaleError.number(0, 0), scaleError.number(1, 0)));
+}
+
+// Munnell's (1990) state panel with its control (tests/data): the evaluators' ln A is shifted to the
+// control's mean. Total, marginal and average cost involve it and get the message; the cost
+// elasticity and returns to scale do not and are answered (ν's std. error as PRODSCALE's).
+BOOST_AUTO_TEST_CASE(cost_with_a_shifted_ln_a)
+{
+    const auto fit = isoquant::fitFromArguments(isoquant::testing::statePanelArguments());
+    const auto table = isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
+    const auto prices = isoquant::testing::typedRange({{2.0, 3.0, 5.0}}); // invented
+    const auto target = isoquant::singleCell(150.0);
+    for (const char* figure : {"total", "marginal", "average"})
+        BOOST_TEST(messageOf([&] {
+                       isoquant::costColumnWithBounds(table, target, prices, std::string(figure),
+                                                      std::string("lower bound"));
+                   }) == "statistic: \"lower bound\" is not available when the model's ln A is shifted (controls "
+                         "at their means, effects or a trend): the covariance block does not cover that ln A",
+                   figure);
+    const auto scaleError = isoquant::scaleColumnWithBounds(table, {}, std::string("std. error"));
+    BOOST_TEST(close(isoquant::costColumnWithBounds(table, target, prices, std::string("returns to scale"),
+                                                    std::string("std. error"))
+                         .number(0, 0),
+                     scaleError.number(0, 0)));
+}
+
+BOOST_AUTO_TEST_CASE(cost_statistic_messages_name_statistic)
+{
+    const auto prices = isoquant::testing::typedRange({{2.0, 3.0}});
+    const isoquant::Cell total = std::string("total");
+    BOOST_TEST(messageOf([&] {
+                   isoquant::costColumnWithBounds(typedModel(), isoquant::testing::typedRange({{100.0}}), prices,
+                                                  total, std::string("lower bound"));
+               }) == "statistic: \"lower bound\" " + noBlock);
+    BOOST_TEST(messageOf([&] {
+                   isoquant::costColumnWithBounds(tableWithBlock(), isoquant::testing::typedRange({{100.0}}), prices,
+                                                  total, std::string("bounds"));
+               }) == "statistic: give \"value\", \"std. error\", \"lower bound\" or \"upper bound\"");
+    // A typed cost function (invented coefficients) has no covariance block.
+    const auto costModel = isoquant::testing::typedRange(
+        {{std::string("form"), std::string("cobb-douglas cost")}, {std::string("constant"), 0.5},
+         {std::string("output"), 0.9}, {std::string("L"), 0.6}, {std::string("C"), 0.4}});
+    BOOST_TEST(messageOf([&] {
+                   isoquant::costColumnWithBounds(costModel, isoquant::testing::typedRange({{100.0}}), prices,
+                                                  total, std::string("std. error"));
+               }) == "statistic: \"std. error\" needs a production model's covariance block; a cost model (a "
+                     "PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with covariance TRUE");
 }
 
 BOOST_AUTO_TEST_SUITE_END()

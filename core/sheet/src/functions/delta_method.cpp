@@ -24,7 +24,7 @@ std::string tooLarge(std::size_t row)
 
 } // namespace
 
-Statistic readWhat(const Cell& what, bool allowsPrediction)
+Statistic readWhat(const Cell& what, bool allowsPrediction, const std::string& argumentName)
 {
     if (isEmpty(what)) return Statistic::value;
     const std::size_t known = allowsPrediction ? statisticWords.size() : 4;
@@ -34,15 +34,16 @@ Statistic readWhat(const Cell& what, bool allowsPrediction)
     std::string list;
     for (std::size_t word = 0; word < known; ++word)
         list += std::string(word == 0 ? "" : word + 1 == known ? " or " : ", ") + "\"" + statisticWords[word] + "\"";
-    throw argumentError(argument::what, "give " + list);
+    throw argumentError(argumentName, "give " + list);
 }
 
 std::string word(Statistic statistic) { return statisticWords[static_cast<std::size_t>(statistic)]; }
 
-BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale)
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
+                            const std::string& argumentName)
 {
     BoundsModel read{range.production()};
-    const std::string asked = "what: \"" + word(statistic) + "\" ";
+    const std::string asked = argumentName + ": \"" + word(statistic) + "\" ";
     if (!read.model.parameterCovariance)
         throw InputError(asked + "needs the model's covariance block; this model has none (a typed model, or a "
                                  "PRODFIT table made without covariance TRUE)");

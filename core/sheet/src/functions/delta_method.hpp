@@ -3,6 +3,7 @@
 // bounds of one quantity linearised in the parameters θ = (ln A, b₁ … b_k, controls).
 #pragma once
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/models/model_table.hpp"
@@ -19,7 +20,8 @@ namespace isoquant::delta_method {
 enum class Statistic { value, standardError, lowerBound, upperBound, predictionLower, predictionUpper };
 
 // Empty: "value". `allowsPrediction`: the two prediction words are known too (PRODOUTPUT).
-Statistic readWhat(const Cell& what, bool allowsPrediction);
+// `argumentName` names the cell in a message: "what", or "statistic" where "what" is taken (PRODCOST).
+Statistic readWhat(const Cell& what, bool allowsPrediction, const std::string& argumentName = argument::what);
 std::string word(Statistic statistic);
 
 // A quantity at one bundle: its value and the gradient in θ of ln(value) (log scale) or of value.
@@ -36,10 +38,11 @@ struct BoundsModel {
     double critical = 0; // the t quantile of the block's level and degrees of freedom
 };
 
-// Throws InputError naming "what" for a model without a covariance block (a typed model), a form
-// other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a model
-// whose evaluators use a shifted ln A.
-BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale);
+// Throws InputError naming `argumentName` for a model without a covariance block (a typed model), a
+// form other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a
+// model whose evaluators use a shifted ln A.
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
+                            const std::string& argumentName = argument::what);
 
 // se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
 // `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).

@@ -1,4 +1,5 @@
-// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION (bound_functions.hpp):
+// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION, and PRODCOST's
+// `statistic` (bound_functions.hpp):
 // the plain function answers first (its checks, messages and sentences unchanged), then each of
 // its numbers is replaced by its standard error or bound (delta_method.hpp), with the gradient of
 // the Cobb-Douglas form given beside each function.
@@ -7,8 +8,11 @@
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/delta_method.hpp"
 
+#include "isoquant/sheet/arguments/decision_arguments.hpp"
+#include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 
 #include <cmath>
@@ -16,6 +20,35 @@
 namespace isoquant {
 
 using namespace delta_method;
+
+namespace {
+
+// PRODCOST's figure of the cobb-douglas least cost at output y and prices w, linearised in θ.
+// C = ν·(y/A)^(1/ν)·Π(wⱼ/bⱼ)^(bⱼ/ν), so with S = ln y − ln A + Σ bⱼ ln(wⱼ/bⱼ), ln C = ln ν + S/ν:
+// ∂ln C/∂ln A = −1/ν, ∂ln C/∂bₘ = 1/ν + (ln(wₘ/bₘ) − 1)/ν − S/ν² = ln(wₘ/bₘ)/ν − S/ν² (S is
+// the numerator of ln C = ln ν + S/ν, ∂S/∂bₘ = ln(wₘ/bₘ) − 1). Average cost C/y has that
+// gradient; marginal cost C/(ν·y) subtracts a further 1/ν at each bₘ; all three on the log scale.
+// Cost elasticity 1/ν (g = −1/ν² at each bₘ) and returns to scale ν (g = 1 at each bₘ) are
+// linear in the exponents as PRODSCALE's ν is: bounds value ∓ t·se.
+Linearised costFigureLinearised(const BoundsModel& read, CostMeasure measure, double level,
+                                const Eigen::VectorXd& prices, double figure)
+{
+    const Eigen::VectorXd& b = read.form->exponents;
+    const double scale = b.sum();
+    Eigen::VectorXd gradient = zeroGradient(read);
+    if (measure == CostMeasure::costElasticity || measure == CostMeasure::returnsToScale) {
+        gradient.segment(1, b.size()).setConstant(measure == CostMeasure::returnsToScale ? 1 : -1 / (scale * scale));
+        return Linearised{figure, gradient, false};
+    }
+    const Eigen::ArrayXd logPriceOverExponent = (prices.array() / b.array()).log();
+    const double numerator = std::log(level) - read.form->logScale + (b.array() * logPriceOverExponent).sum();
+    gradient(0) = -1 / scale;
+    gradient.segment(1, b.size()) = (logPriceOverExponent / scale - numerator / (scale * scale)).matrix();
+    if (measure == CostMeasure::marginal) gradient.segment(1, b.size()).array() -= 1 / scale;
+    return Linearised{figure, gradient, true};
+}
+
+} // namespace
 
 CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable& output, const CellTable& inputs,
                                        const CellTable& periods, const Cell& what)
@@ -125,6 +158,44 @@ CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable&
     return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd&, double elasticity) {
         return Linearised{elasticity, zeroGradient(read), false};
     });
+}
+
+CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target, const CellTable& prices,
+                               const Cell& what, const Cell& statistic)
+{
+    const Statistic asked = readWhat(statistic, false, argument::statistic);
+    const CellTable values = costColumn(model, target, prices, what);
+    if (asked == Statistic::value) return values;
+    if (isCostModel(model.cells()))
+        throw argumentError(
+            argument::statistic,
+            "\"" + word(asked) +
+                "\" needs a production model's covariance block; a "
+                "cost model (a PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with "
+                "covariance TRUE");
+    const CostMeasure measure = readCostMeasure(what);
+    const bool needsLogScale = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
+    const BoundsModel read = readBoundsModel(model, asked, needsLogScale, argument::statistic);
+    // The plain function has read the outputs (one cell, or a column with an optional header) and
+    // the prices; its column has one cell per output, a sentence where no plan exists.
+    const NumericColumns outputs =
+        readNumericColumns(target, argument::targetOutput, ValueRule::positive, "target output");
+    const Eigen::Index n = outputs.values.rows();
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, read.form->exponents.size(), argument::targetOutput);
+    CellTable column = values;
+    for (Eigen::Index row = 0; row < n; ++row) {
+        const auto cell = static_cast<std::size_t>(row);
+        if (!values.isNumber(cell, 0)) continue;
+        const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
+        const double result = answer(
+            costFigureLinearised(read, measure, outputs.values(row, 0), rowPrices, values.number(cell, 0)), read,
+            asked, 0);
+        if (!std::isfinite(result))
+            throw argumentError(argument::targetOutput, "row " + std::to_string(cell + outputs.firstDataRow()) +
+                                                            " gives a result too large to represent");
+        column.set(cell, 0, result);
+    }
+    return column;
 }
 
 } // namespace isoquant

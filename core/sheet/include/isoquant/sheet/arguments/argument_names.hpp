@@ -50,6 +50,7 @@ inline constexpr char cost[] = "cost";
 inline constexpr char inefficiency[] = "inefficiency";
 inline constexpr char outputs[] = "outputs";
 inline constexpr char orientation[] = "orientation";
+inline constexpr char statistic[] = "statistic";
 } // namespace argument
 
 // The error about `argument`, written by the sheet layer: "<argument>: <detail>".

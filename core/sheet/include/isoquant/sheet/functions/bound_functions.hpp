@@ -20,6 +20,9 @@
 // - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
 // - MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ) (PRODMRTS): log scale when bᵢ, bⱼ > 0 (positive by nature), else ∓ t·se.
 // - the budget plan xᵢ = (bᵢ/ν)·B/wᵢ and its output (PRODBUDGET): log scale.
+// - PRODCOST's total, marginal and average least cost: log scale; its cost elasticity 1/ν and
+//   returns to scale ν: value ∓ t·se. There the word is the argument `statistic` (`what` already
+//   chooses the figure), and a cost model (PRODCOSTFIT, no covariance block) gets a message.
 // - elasticity of substitution (PRODSUBSTITUTION): 1 for every cobb-douglas parameter, so se 0 and
 //   both bounds the value (the form, not the data, fixes it).
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
@@ -54,6 +57,9 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
                                         const Cell& second, const Cell& what);
 // PRODBUDGET: as budgetRow (decision_functions.hpp), then `what` for the k amounts and the output.
 CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const CellTable& prices, const Cell& what);
+// PRODCOST: as costColumn (cost_functions.hpp) with the figure `what`, then `statistic`.
+CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target, const CellTable& prices,
+                               const Cell& what, const Cell& statistic);
 // PRODSUBSTITUTION: as substitutionColumn (decision_functions.hpp), then `what`.
 CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
                                        const Cell& second, const Cell& kind, const Cell& what);
