@@ -40,7 +40,7 @@ CellTable costFitTable(const CostFit& fit)
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
     TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows),
-                       summary.status == FitStatus::perfectFit);
+                       summary.status.is(FitStatusKind::exactFit));
     writer.headerRow(translog ? translogCostTitle : cobbDouglasCostTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);

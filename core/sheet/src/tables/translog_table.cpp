@@ -15,7 +15,7 @@ CellTable translogFitTable(const ProductionFit& fit)
     const TranslogDetails& translog = *fit.translog;
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
-    TableWriter writer(translogFitTableRows(k, m), fit.status == FitStatus::perfectFit);
+    TableWriter writer(translogFitTableRows(k, m), fit.status.is(FitStatusKind::exactFit));
     writer.headerRow(translogTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(logScaleLabel, fit, parameter++);
