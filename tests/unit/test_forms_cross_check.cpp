@@ -111,9 +111,9 @@ double translogFigure(const isoquant::ProductionFit& fit, const std::string& q, 
     if (q == "pvalues") return fit.inference.pValues(i);
     if (q == "fvalue") return fit.summary.fStatistic;
     if (q == "statsmodels_llf") return fit.summary.logLikelihood;
-    if (q == "elasticity") return t.elasticities(i);
-    if (q == "elasticity_se") return t.elasticityStandardErrors(i);
-    if (q == "elasticity_pvalue") return t.elasticityPValues(i);
+    if (q == "elasticity") return t.elasticities.estimates(i);
+    if (q == "elasticity_se") return t.elasticities.standardErrors(i);
+    if (q == "elasticity_pvalue") return t.elasticities.pValues(i);
     if (q == "nu") return fit.returns.estimate;
     if (q == "nu_se") return fit.returns.standardError;
     if (q == "nu_fvalue") return fit.returns.fStatistic;

@@ -361,7 +361,7 @@ BOOST_AUTO_TEST_CASE(tables_have_the_documented_layout_and_read_back)
     BOOST_TEST(closeTo(std::get<double>(isoquant::lookUpFitTable(translogTable, std::string("smearing factor"), Cell{})),
                        translog.residuals.array().exp().mean(), 1e-14));
     BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("elasticity seed"), std::string("std. error")) ==
-                Cell(translog.translog->elasticityStandardErrors(2))));
+                Cell(translog.translog->elasticities.standardErrors(2))));
     BOOST_TEST((isoquant::lookUpFitTable(translogTable, std::string("Cobb-Douglas test"), Cell{}) ==
                 Cell(translog.translog->cobbDouglasTest.fStatistic)));
 

@@ -140,17 +140,10 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     details->meanLogInputs = logs.colwise().mean().transpose();
     const Eigen::MatrixXd gradients = elasticityGradients(k, p, details->meanLogInputs);
     const Eigen::VectorXd values = gradients * fit.inference.estimates;
-    const Eigen::VectorXd errors = (gradients * fit.inference.covariance * gradients.transpose()).diagonal().cwiseSqrt();
-    const double df = regression.summary.residualDegreesOfFreedom;
-    const double critical = studentCriticalValue(options.confidenceLevel, df);
-    details->elasticities = values.head(k);
-    details->elasticityStandardErrors = errors.head(k);
-    details->elasticityTStatistics = details->elasticities.cwiseQuotient(details->elasticityStandardErrors);
-    details->elasticityPValues.resize(k);
-    for (Eigen::Index i = 0; i < k; ++i)
-        details->elasticityPValues(i) = studentTwoSidedPValue(details->elasticityTStatistics(i), df);
-    details->elasticityLowerBounds = details->elasticities - critical * details->elasticityStandardErrors;
-    details->elasticityUpperBounds = details->elasticities + critical * details->elasticityStandardErrors;
+    const Eigen::MatrixXd covariance = gradients * fit.inference.covariance * gradients.transpose();
+    const Eigen::VectorXd errors = covariance.diagonal().cwiseSqrt();
+    details->elasticities = inferParameters(values.head(k), covariance.topLeftCorner(k, k),
+                                            regression.summary.residualDegreesOfFreedom, options.confidenceLevel);
 
     Eigen::MatrixXd interactionsZero = Eigen::MatrixXd::Zero(q, p);
     interactionsZero.middleCols(1 + k, q).setIdentity();

@@ -48,10 +48,7 @@ std::size_t heapBytes(const PanelSummary& panel)
 
 std::size_t heapBytes(const TranslogDetails& translog)
 {
-    return sizeof translog + heapBytes(translog.meanLogInputs) + heapBytes(translog.elasticities) +
-           heapBytes(translog.elasticityStandardErrors) + heapBytes(translog.elasticityTStatistics) +
-           heapBytes(translog.elasticityPValues) + heapBytes(translog.elasticityLowerBounds) +
-           heapBytes(translog.elasticityUpperBounds);
+    return sizeof translog + heapBytes(translog.meanLogInputs) + heapBytes(translog.elasticities);
 }
 
 } // namespace
