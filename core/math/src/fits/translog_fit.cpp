@@ -2,7 +2,6 @@
 
 #include "isoquant/math/numerics/work_limits.hpp"
 
-#include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"

@@ -1,6 +1,5 @@
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 
-#include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <Eigen/SVD>
