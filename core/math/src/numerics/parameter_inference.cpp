@@ -32,11 +32,16 @@ ParameterInference inferParameters(Eigen::VectorXd estimates, Eigen::MatrixXd co
     return inference;
 }
 
-void setGaussianLikelihood(FitSummary& summary)
+double gaussianLogLikelihood(double residualSumOfSquares, double observations)
 {
     const double pi = 3.14159265358979323846;
-    const auto n = static_cast<double>(summary.observations);
-    summary.logLikelihood = -n / 2.0 * (std::log(2.0 * pi) + std::log(summary.residualSumOfSquares / n) + 1.0);
+    return -observations / 2.0 * (std::log(2.0 * pi) + std::log(residualSumOfSquares / observations) + 1.0);
+}
+
+void setGaussianLikelihood(FitSummary& summary)
+{
+    summary.logLikelihood =
+        gaussianLogLikelihood(summary.residualSumOfSquares, static_cast<double>(summary.observations));
     setInformationCriteria(summary);
 }
 

@@ -31,10 +31,10 @@ std::vector<std::string> parameterLabels(const ProductionFrontier& frontier)
 std::string formNote(const ProductionFrontier& frontier)
 {
     if (frontier.fit.wrongSkew) return wrongSkewNote;
-    if (frontier.fit.convergence == FrontierConvergence::boundary)
+    if (frontier.fit.status.is(FitStatusKind::boundary))
         return "note: no maximum with noise: the likelihood keeps rising toward noise SD = 0; the estimates "
                "are where the solver stopped (try the other inefficiency distribution or more rows)";
-    if (frontier.fit.convergence != FrontierConvergence::converged)
+    if (!frontier.fit.status.is(FitStatusKind::ok))
         return "note: the likelihood was not maximised; the estimates are where the solver stopped";
     return "";
 }
@@ -46,15 +46,10 @@ std::string inefficiencyWord(InefficiencyDistribution distribution)
     return distribution == InefficiencyDistribution::halfNormal ? "half-normal" : "exponential";
 }
 
-std::string frontierStatusWord(FrontierConvergence convergence)
+std::string frontierStatusWord(FitStatusKind kind)
 {
-    switch (convergence) {
-    case FrontierConvergence::converged: return convergedText;
-    case FrontierConvergence::notConverged: return "not converged";
-    case FrontierConvergence::stopped: return "stopped";
-    case FrontierConvergence::boundary: return boundaryText;
-    }
-    return "stopped";
+    if (kind == FitStatusKind::boundary) return boundaryText;
+    return convergenceWord(kind); // the frontier's kinds: ok, notConverged, stopped
 }
 
 std::size_t frontierTableRows(ProductionForm form, std::size_t inputs, std::size_t controls)
@@ -89,8 +84,8 @@ CellTable frontierTable(const ProductionFrontier& frontier)
     const ParameterEstimate& returns = frontier.returns;
     writer.put(returnsLabel, {returns.estimate, returns.standardError, returns.tStatistic, returns.pValue});
     writer.textRow(verdictLabel, {frontier.verdict});
-    writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
-                                      std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});
+    writer.textRow(convergenceLabel, {frontierStatusWord(fit.status.kind),
+                                      std::to_string(fit.evaluations) + " evaluations; " + fit.status.reason});
     writer.textRow(formLabel, {formWord(frontier.form), formNote(frontier)});
     return writer.finish();
 }

@@ -84,6 +84,7 @@ struct FitSummary {
 // from summary.residualSumOfSquares, summary.observations and p = parameters + absorbedParameters.
 // The one formula of every form (least squares, ces, translog), so their criteria compare.
 void setGaussianLikelihood(FitSummary& summary);
+double gaussianLogLikelihood(double residualSumOfSquares, double observations); // the LL above
 
 // AIC and BIC from summary.logLikelihood, as above (also for a likelihood of another shape, the
 // share system's).
