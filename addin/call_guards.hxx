@@ -5,7 +5,7 @@
 
 #include "cell_conversion.hxx"
 
-#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/argument_names.hpp"
 
 #include <com/sun/star/uno/Any.hxx>
 
@@ -24,7 +24,7 @@ inline std::string failureMessage(Compute&& compute)
         compute();
         return {};
     } catch (const InputError& error) {
-        return std::string("Error: ") + error.what();
+        return "Error: " + sheetMessage(error);
     } catch (const std::bad_alloc&) {
         return "Error: not enough memory for a range this large";
     } catch (const std::exception& error) {

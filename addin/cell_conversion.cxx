@@ -1,7 +1,7 @@
 #include "cell_conversion.hxx"
 
 #include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/sheet/arguments/range_limits.hpp"
 
 #include <rtl/string.hxx>
 

@@ -1,8 +1,11 @@
 #include "commands.hxx"
 
 #include "array_fitting.hxx"
+#include "cell_conversion.hxx"
 #include "colleague_copy.hxx"
 #include "user_dialogs.hxx"
+
+#include "isoquant/sheet/arguments/argument_names.hpp"
 
 #include <com/sun/star/frame/DispatchResultState.hpp>
 #include <com/sun/star/frame/FeatureStateEvent.hpp>
@@ -86,6 +89,8 @@ void Commands::dispatchWithNotification(const css::util::URL& url,
             outcome = {false, "Unknown Isoquant command " + url.Complete};
     } catch (const css::uno::Exception& error) {
         outcome = {false, "The command stopped: " + error.Message};
+    } catch (const InputError& error) {
+        outcome = {false, "The command stopped: " + fromUtf8(sheetMessage(error))};
     } catch (const std::exception& error) {
         outcome = {false, "The command stopped: " + OUString::createFromAscii(error.what())};
     }

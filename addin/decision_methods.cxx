@@ -2,6 +2,7 @@
 // that hand a model and prices, or data for a frontier or an envelope, to the core.
 #include "production_functions.hxx"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "call_guards.hxx"
 #include "cell_conversion.hxx"
 
@@ -20,10 +21,10 @@ Any ProductionFunctions::prodLeastCost(const AnyTable& model, const AnyTable& ta
                                        const AnyTable& inputPrices, const Any& what)
 {
     return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(leastCostRowWithBounds(*models_.cells(model, "model"),
-                                                   toSingleCell(Any(targetOutput), "target output"), prices,
-                                                   toSingleCell(what, "what")),
+        const CellTable prices = toCellTable(inputPrices, argument::inputPrices);
+        return orientedLike(leastCostRowWithBounds(models_.table(model, argument::model),
+                                                   toSingleCell(Any(targetOutput), argument::targetOutput), prices,
+                                                   toSingleCell(what, argument::what)),
                             prices);
     });
 }
@@ -32,16 +33,16 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
                                   const Any& what)
 {
     return guardedTable([&] {
-        return costColumn(*models_.cells(model, "model"), toCellTable(targetOutput, "target output"),
-                          toCellTable(inputPrices, "input prices"), toSingleCell(what, "what"));
+        return costColumn(models_.table(model, argument::model), toCellTable(targetOutput, argument::targetOutput),
+                          toCellTable(inputPrices, argument::inputPrices), toSingleCell(what, argument::what));
     });
 }
 
 Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return efficientScaleCell(*models_.cells(model, "model"), prices);
+        const CellTable prices = toCellTable(inputPrices, argument::inputPrices);
+        return efficientScaleCell(models_.table(model, argument::model), prices);
     });
 }
 
@@ -49,9 +50,10 @@ Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTab
                                              const AnyTable& inputI, const AnyTable& inputJ, const Any& kind)
 {
     return guardedTable([&] {
-        return priceElasticityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                     toCellTable(inputPrices, "input prices"), toSingleCell(Any(inputI), "input i"),
-                                     toSingleCell(Any(inputJ), "input j"), toSingleCell(kind, "kind"));
+        return priceElasticityColumn(
+            models_.table(model, argument::model), toCellTable(output, argument::output),
+            toCellTable(inputPrices, argument::inputPrices), toSingleCell(Any(inputI), argument::firstInput),
+            toSingleCell(Any(inputJ), argument::secondInput), toSingleCell(kind, argument::kind));
     });
 }
 
@@ -62,27 +64,30 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
 {
     return guardedTable([&] {
         CostFitArguments arguments;
-        arguments.cost = toCellTable(cost, "cost");
-        arguments.output = toCellTable(output, "output");
-        arguments.prices = toCellTable(prices, "input prices");
-        arguments.form = toSingleCell(form, "form");
-        arguments.shares = toOptionalTable(shares, "shares");
-        arguments.errors = toSingleCell(errors, "errors");
-        arguments.level = toSingleCell(level, "level");
-        arguments.controls = toOptionalTable(controls, "controls");
-        arguments.groups = toOptionalTable(groups, "groups");
-        arguments.effects = toSingleCell(effects, "effects");
-        arguments.trend = toOptionalTable(trend, "trend");
-        arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
+        arguments.cost = toCellTable(cost, argument::cost);
+        arguments.output = toCellTable(output, argument::output);
+        arguments.prices = toCellTable(prices, argument::inputPrices);
+        arguments.form = toSingleCell(form, argument::form);
+        arguments.shares = toOptionalTable(shares, argument::shares);
+        arguments.errors = toSingleCell(errors, argument::errors);
+        arguments.level = toSingleCell(level, argument::level);
+        arguments.controls = toOptionalTable(controls, argument::controls);
+        arguments.groups = toOptionalTable(groups, argument::groups);
+        arguments.effects = toSingleCell(effects, argument::effects);
+        arguments.trend = toOptionalTable(trend, argument::trend);
+        arguments.incompleteRows = toSingleCell(incompleteRows, argument::incompleteRows);
         return costFitTable(costFitFromArguments(arguments));
     });
 }
 
-Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices)
+Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budget, const AnyTable& inputPrices,
+                                    const Any& what)
 {
     return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(budgetRow(*models_.cells(model, "model"), toSingleCell(Any(budget), "budget"), prices),
+        const CellTable prices = toCellTable(inputPrices, argument::inputPrices);
+        return orientedLike(budgetRowWithBounds(models_.table(model, argument::model),
+                                                toSingleCell(Any(budget), argument::budget), prices,
+                                                toSingleCell(what, argument::what)),
                             prices);
     });
 }
@@ -90,9 +95,10 @@ Any ProductionFunctions::prodBudget(const AnyTable& model, const AnyTable& budge
 Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outputPrice, const AnyTable& inputPrices)
 {
     return guardedTable([&] {
-        const CellTable prices = toCellTable(inputPrices, "input prices");
-        return orientedLike(
-            profitRow(*models_.cells(model, "model"), toSingleCell(Any(outputPrice), "output price"), prices), prices);
+        const CellTable prices = toCellTable(inputPrices, argument::inputPrices);
+        return orientedLike(profitRow(models_.table(model, argument::model),
+                                      toSingleCell(Any(outputPrice), argument::outputPrice), prices),
+                            prices);
     });
 }
 
@@ -101,9 +107,9 @@ Any ProductionFunctions::prodFrontier(const AnyTable& output, const AnyTable& in
 {
     return guardedTable([&] {
         return frontierTable(frontierFromArguments(
-            {toCellTable(output, "output"), toCellTable(inputs, "inputs"), toSingleCell(form, "form"),
-             toSingleCell(inefficiency, "inefficiency"), toSingleCell(level, "level"),
-             toOptionalTable(controls, "controls")}));
+            {toCellTable(output, argument::output), toCellTable(inputs, argument::inputs),
+             toSingleCell(form, argument::form), toSingleCell(inefficiency, argument::inefficiency),
+             toSingleCell(level, argument::level), toOptionalTable(controls, argument::controls)}));
     });
 }
 
@@ -111,8 +117,8 @@ Any ProductionFunctions::prodEfficiency(const AnyTable& model, const AnyTable& o
                                         const Any& what)
 {
     return guardedTable([&] {
-        return efficiencyColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                toCellTable(inputs, "inputs"), toSingleCell(what, "what"));
+        return efficiencyColumn(models_.table(model, argument::model).cells(), toCellTable(output, argument::output),
+                                toCellTable(inputs, argument::inputs), toSingleCell(what, argument::what));
     });
 }
 
@@ -120,9 +126,10 @@ Any ProductionFunctions::prodIsoquant(const AnyTable& model, const AnyTable& out
                                       const Any& inputI, const Any& inputJ)
 {
     return guardedTable([&] {
-        return isoquantColumn(*models_.cells(model, "model"), toSingleCell(Any(outputLevel), "output level"),
-                              toCellTable(values, "values of input i"), toSingleCell(inputI, "input i"),
-                              toSingleCell(inputJ, "input j"));
+        return isoquantColumn(models_.table(model, argument::model),
+                              toSingleCell(Any(outputLevel), argument::outputLevel),
+                              toCellTable(values, argument::valuesOfFirstInput),
+                              toSingleCell(inputI, argument::firstInput), toSingleCell(inputJ, argument::secondInput));
     });
 }
 
@@ -130,9 +137,10 @@ Any ProductionFunctions::prodEnvelope(const AnyTable& outputs, const AnyTable& i
                                       const Any& orientation, const Any& what, const Any& names)
 {
     return guardedTable([&] {
-        return envelopeColumn(toCellTable(outputs, "outputs"), toCellTable(inputs, "inputs"),
-                              toSingleCell(returns, "returns"), toSingleCell(orientation, "orientation"),
-                              toSingleCell(what, "what"), toOptionalTable(names, "names"));
+        return envelopeColumn(toCellTable(outputs, argument::outputs), toCellTable(inputs, argument::inputs),
+                              toSingleCell(returns, argument::returns),
+                              toSingleCell(orientation, argument::orientation), toSingleCell(what, argument::what),
+                              toOptionalTable(names, argument::names));
     });
 }
 

@@ -69,7 +69,8 @@ constexpr ArgumentInfo boundsArgument{
     "Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder \"upper "
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
                 "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
-                "Grenzprodukte und kostenminimale Mengen erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
+                "Grenzprodukte, kostenminimale und budgetoptimale Mengen, TFP und Grenzraten der Substitution "
+                "erhalten Grenzen auf der Log-Skala. Form cobb-douglas."};
 
 // Arguments shared by the decision functions.
 constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "
@@ -156,7 +157,8 @@ const Translation& germanTranslation()
                            "Ausbringung. Eine erste Zeile mit Text benennt die Faktoren."},
           {"Perioden", "Optional, für ein Modell mit Trend: die Periode (das Jahr) jeder Zeile, so viele Zeilen wie "
                        "bei der Ausbringung. Jede Zeile wird dann mit der Technologie ihrer eigenen Periode "
-                       "verglichen: ln A + technischer Fortschritt je Periode × (Periode - letzte Periode)."}}},
+                       "verglichen: ln A + technischer Fortschritt je Periode × (Periode - letzte Periode)."},
+          boundsArgument}},
         {"prodGrowth",
          "Wachstumszerlegung von einer Periode zur nächsten: das Wachstum der Ausbringung, aufgeteilt in den Beitrag "
          "jedes Faktors, einen Skaleneffekt und das TFP-Wachstum (den Rest), in Log-Differenzen, dazu eine "
@@ -204,7 +206,8 @@ const Translation& germanTranslation()
          "fehlt).",
          {modelArgument, bundlesArgument, firstInputArgument,
           {"Faktor j", "Optionaler zweiter Faktor: seine Nummer oder seine Bezeichnung. Weggelassen: derselbe wie "
-                       "Faktor i."}}},
+                       "Faktor i."},
+          boundsArgument}},
         {"prodInputReturns",
          "Ertragsverlauf eines einzelnen Faktors für jede Zeile von Faktormengen: abnehmend, konstant oder zunehmend "
          "(die Zelle zeigt diminishing, constant oder increasing), je nachdem, ob sein Grenzprodukt fällt, gleich "
@@ -221,14 +224,17 @@ const Translation& germanTranslation()
          "Grenzrate der technischen Substitution für jede Zeile von Faktormengen: die Einheiten von Faktor j, die "
          "eine weitere Einheit von Faktor i bei unveränderter Ausbringung ersetzt (Grenzprodukt von i geteilt durch "
          "das von j).",
-         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument}},
+         {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument, boundsArgument}},
         {"prodSubstitution",
          "Substitutionselastizität zwischen den Faktoren i und j für jede Zeile von Faktormengen: die prozentuale "
          "Änderung des Einsatzverhältnisses der beiden Faktoren je 1 % Änderung ihres Preisverhältnisses entlang der "
          "Isoquante.",
          {modelArgument, bundlesArgument, firstInputArgument, secondInputArgument,
           {"Art", "\"direct\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
-                  "angegebenen Reihenfolge)."}}},
+                  "angegebenen Reihenfolge)."},
+          {"Kennzahl", "\"value\" (Standard), \"std. error\", \"lower bound\" oder \"upper bound\", wie bei PRODMRTS. "
+                       "Die Form cobb-douglas legt jede Substitutionselastizität auf 1 fest: Standardfehler 0, beide "
+                       "Grenzen 1."}}},
         {"prodLeastCost",
          "Kostenminimale Faktormengen, mit denen die Zielausbringung zu den gegebenen Faktorpreisen produziert wird: "
          "eine Menge je Faktor, als Zeile oder Spalte wie die Preise (als Matrixformel eingeben).",
@@ -275,7 +281,7 @@ const Translation& germanTranslation()
          "Ausgaben die größte Ausbringung ergibt, dann diese Ausbringung; als Zeile oder Spalte wie die Preise (als "
          "Matrixformel eingeben).",
          {modelArgument, {"Budget", "Das Geld, das für die Faktoren ausgegeben wird, eine positive Zahl."},
-          pricesArgument}},
+          pricesArgument, boundsArgument}},
         {"prodProfit",
          "Gewinnmaximierender Plan zu den gegebenen Produkt- und Faktorpreisen: die Menge jedes Faktors, dann "
          "Ausbringung und Gewinn, als Zeile oder Spalte wie die Faktorpreise (als Matrixformel eingeben). Bei "

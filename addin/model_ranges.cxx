@@ -36,7 +36,7 @@ bool sameCells(const AnyTable& left, const AnyTable& right)
     return true;
 }
 
-std::shared_ptr<const CellTable> ModelRanges::cells(const AnyTable& range, const std::string& argument)
+ModelTable ModelRanges::table(const AnyTable& range, const std::string& argument)
 {
     std::size_t cellCount = 0;
     for (const auto& row : range) cellCount += static_cast<std::size_t>(row.getLength());
@@ -44,14 +44,19 @@ std::shared_ptr<const CellTable> ModelRanges::cells(const AnyTable& range, const
     if (kept) {
         const std::lock_guard<std::mutex> lock(mutex_);
         if (const Entry* reused = entries_.find([&](const Entry& entry) { return sameCells(entry.range, range); }))
-            return reused->cells;
+            return reused->table;
     }
-    auto converted = std::make_shared<const CellTable>(toCellTable(range, argument));
-    if (kept) {
-        const std::lock_guard<std::mutex> lock(mutex_);
-        entries_.add(Entry{range, converted});
-    }
+    ModelTable converted(toCellTable(range, argument));
+    const std::lock_guard<std::mutex> lock(mutex_);
+    ++rangesConverted_;
+    if (kept) entries_.add(Entry{range, converted});
     return converted;
+}
+
+std::size_t ModelRanges::rangesConverted() const
+{
+    const std::lock_guard<std::mutex> lock(mutex_);
+    return rangesConverted_;
 }
 
 } // namespace isoquant::addin

@@ -1,5 +1,6 @@
 #include "production_functions.hxx"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "call_guards.hxx"
 #include "cell_conversion.hxx"
 #include "function_table.hxx"
@@ -49,23 +50,23 @@ FitArguments ProductionFunctions::fitArguments(const AnyTable& output, const Any
                                                const Any& controls) const
 {
     FitArguments arguments;
-    arguments.output = toCellTable(output, "output");
-    arguments.inputs = toCellTable(inputs, "inputs");
-    arguments.controls = toOptionalTable(controls, "controls");
-    arguments.form = toSingleCell(form, "form");
-    arguments.constantReturns = toSingleCell(constantReturns, "constant returns");
-    arguments.errors = toSingleCell(errors, "errors");
-    arguments.level = toSingleCell(level, "level");
+    arguments.output = toCellTable(output, argument::output);
+    arguments.inputs = toCellTable(inputs, argument::inputs);
+    arguments.controls = toOptionalTable(controls, argument::controls);
+    arguments.form = toSingleCell(form, argument::form);
+    arguments.constantReturns = toSingleCell(constantReturns, argument::constantReturns);
+    arguments.errors = toSingleCell(errors, argument::errors);
+    arguments.level = toSingleCell(level, argument::level);
     return arguments;
 }
 
 FitArguments ProductionFunctions::withPanelArguments(FitArguments arguments, const Any& groups, const Any& effects,
                                                      const Any& trend, const Any& incompleteRows)
 {
-    arguments.groups = toOptionalTable(groups, "groups");
-    arguments.effects = toSingleCell(effects, "effects");
-    arguments.trend = toOptionalTable(trend, "trend");
-    arguments.incompleteRows = toSingleCell(incompleteRows, "incomplete rows");
+    arguments.groups = toOptionalTable(groups, argument::groups);
+    arguments.effects = toSingleCell(effects, argument::effects);
+    arguments.trend = toOptionalTable(trend, argument::trend);
+    arguments.incompleteRows = toSingleCell(incompleteRows, argument::incompleteRows);
     return arguments;
 }
 
@@ -79,7 +80,7 @@ Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs,
         const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
             incompleteRows)));
-        return fitTableWithCovariance(fitTable(*fit), *fit, toSingleCell(covariance, "covariance"));
+        return fitTableWithCovariance(fitTable(*fit), *fit, toSingleCell(covariance, argument::covariance));
     });
 }
 
@@ -92,23 +93,24 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
         const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
             incompleteRows)));
-        return lookUpFit(*fit, toSingleCell(Any(rowLabel), "row label"), toSingleCell(columnLabel, "column label"));
+        return lookUpFit(*fit, toSingleCell(Any(rowLabel), argument::rowLabel),
+                         toSingleCell(columnLabel, argument::columnLabel));
     });
 }
 
 Any ProductionFunctions::prodValue(const AnyTable& table, const AnyTable& rowLabel, const Any& columnLabel)
 {
     return guardedValue([&] {
-        return tableValue(toCellTable(table, "table"), toSingleCell(Any(rowLabel), "row label"),
-                          toSingleCell(columnLabel, "column label"));
+        return tableValue(toCellTable(table, argument::table), toSingleCell(Any(rowLabel), argument::rowLabel),
+                          toSingleCell(columnLabel, argument::columnLabel));
     });
 }
 
 Any ProductionFunctions::prodOutput(const AnyTable& model, const AnyTable& inputs, const Any& mean, const Any& what)
 {
     return guardedTable([&] {
-        return outputColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                      toSingleCell(mean, "mean"), toSingleCell(what, "what"));
+        return outputColumnWithBounds(models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+                                      toSingleCell(mean, argument::mean), toSingleCell(what, argument::what));
     });
 }
 
@@ -116,8 +118,9 @@ Any ProductionFunctions::prodMarginal(const AnyTable& model, const AnyTable& inp
                                       const Any& what)
 {
     return guardedTable([&] {
-        return marginalProductColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                               toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
+        return marginalProductColumnWithBounds(
+            models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+            toSingleCell(Any(input), argument::input), toSingleCell(what, argument::what));
     });
 }
 
@@ -125,31 +128,35 @@ Any ProductionFunctions::prodElasticity(const AnyTable& model, const AnyTable& i
                                         const Any& what)
 {
     return guardedTable([&] {
-        return elasticityColumnWithBounds(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                          toSingleCell(Any(input), "input"), toSingleCell(what, "what"));
+        return elasticityColumnWithBounds(models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+                                          toSingleCell(Any(input), argument::input),
+                                          toSingleCell(what, argument::what));
     });
 }
 
 Any ProductionFunctions::prodScale(const AnyTable& model, const Any& inputs, const Any& what)
 {
     return guardedTable([&] {
-        return scaleColumnWithBounds(*models_.cells(model, "model"), toOptionalTable(inputs, "inputs"),
-                                     toSingleCell(what, "what"));
+        return scaleColumnWithBounds(models_.table(model, argument::model), toOptionalTable(inputs, argument::inputs),
+                                     toSingleCell(what, argument::what));
     });
 }
 
 Any ProductionFunctions::prodReturns(const AnyTable& model, const Any& level)
 {
-    return guardedValue(
-        [&] { return Cell(returnsVerdictCell(*models_.cells(model, "model"), toSingleCell(level, "level"))); });
+    return guardedValue([&] {
+        return Cell(returnsVerdictCell(models_.table(model, argument::model), toSingleCell(level, argument::level)));
+    });
 }
 
 Any ProductionFunctions::prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                                      const Any& periods)
+                                      const Any& periods, const Any& what)
 {
     return guardedTable([&] {
-        return productivityColumn(*models_.cells(model, "model"), toCellTable(output, "output"),
-                                  toCellTable(inputs, "inputs"), toOptionalTable(periods, "periods"));
+        return productivityColumnWithBounds(
+            models_.table(model, argument::model), toCellTable(output, argument::output),
+            toCellTable(inputs, argument::inputs), toOptionalTable(periods, argument::periods),
+            toSingleCell(what, argument::what));
     });
 }
 
@@ -157,9 +164,9 @@ Any ProductionFunctions::prodGrowth(const AnyTable& output, const AnyTable& inpu
                                          const Any& method, const Any& periods)
 {
     return guardedTable([&] {
-        return growthAccountTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
-                                  toCellTable(weights, "weights"), toSingleCell(method, "method"),
-                                  toOptionalTable(periods, "periods"));
+        return growthAccountTable(toCellTable(output, argument::output), toCellTable(inputs, argument::inputs),
+                                  toCellTable(weights, argument::weights), toSingleCell(method, argument::method),
+                                  toOptionalTable(periods, argument::periods));
     });
 }
 
@@ -167,40 +174,43 @@ Any ProductionFunctions::prodIndex(const AnyTable& quantities, const AnyTable& s
                                         const Any& base, const Any& periods)
 {
     return guardedTable([&] {
-        return quantityIndexColumn(toCellTable(quantities, "quantities"), toCellTable(shares, "shares"),
-                                   toSingleCell(method, "method"), toSingleCell(base, "base"),
-                                   toOptionalTable(periods, "periods"));
+        return quantityIndexColumn(toCellTable(quantities, argument::quantities), toCellTable(shares, argument::shares),
+                                   toSingleCell(method, argument::method), toSingleCell(base, argument::base),
+                                   toOptionalTable(periods, argument::periods));
     });
 }
 
 Any ProductionFunctions::prodRegular(const AnyTable& model, const AnyTable& inputs)
 {
-    return guardedTable(
-        [&] { return regularityAnyColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs")); });
+    return guardedTable([&] {
+        return regularityAnyColumn(models_.table(model, argument::model), toCellTable(inputs, argument::inputs));
+    });
 }
 
 Any ProductionFunctions::prodCompare(const AnyTable& output, const AnyTable& inputs, const Any& level)
 {
     return guardedTable([&] {
-        return compareFormsTable(toCellTable(output, "output"), toCellTable(inputs, "inputs"),
-                                 toSingleCell(level, "level"));
+        return compareFormsTable(toCellTable(output, argument::output), toCellTable(inputs, argument::inputs),
+                                 toSingleCell(level, argument::level));
     });
 }
 
 Any ProductionFunctions::prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                    const Any& inputJ)
+                                    const Any& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return secondPartialColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(inputJ, "input j"));
+        return secondPartialColumnWithBounds(
+            models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+            toSingleCell(Any(inputI), argument::firstInput), toSingleCell(inputJ, argument::secondInput),
+            toSingleCell(what, argument::what));
     });
 }
 
 Any ProductionFunctions::prodInputReturns(const AnyTable& model, const AnyTable& inputs, const AnyTable& input)
 {
     return guardedTable([&] {
-        return inputReturnsColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                  toSingleCell(Any(input), "input"));
+        return inputReturnsColumn(models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+                                  toSingleCell(Any(input), argument::input));
     });
 }
 
@@ -208,27 +218,31 @@ Any ProductionFunctions::prodPair(const AnyTable& model, const AnyTable& inputs,
                                   const AnyTable& inputJ)
 {
     return guardedTable([&] {
-        return inputPairColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                               toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
+        return inputPairColumn(models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+                               toSingleCell(Any(inputI), argument::firstInput),
+                               toSingleCell(Any(inputJ), argument::secondInput));
     });
 }
 
 Any ProductionFunctions::prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                  const AnyTable& inputJ)
+                                  const AnyTable& inputJ, const Any& what)
 {
     return guardedTable([&] {
-        return technicalRateColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                   toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"));
+        return technicalRateColumnWithBounds(
+            models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+            toSingleCell(Any(inputI), argument::firstInput), toSingleCell(Any(inputJ), argument::secondInput),
+            toSingleCell(what, argument::what));
     });
 }
 
 Any ProductionFunctions::prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                          const AnyTable& inputJ, const Any& kind)
+                                          const AnyTable& inputJ, const Any& kind, const Any& what)
 {
     return guardedTable([&] {
-        return substitutionColumn(*models_.cells(model, "model"), toCellTable(inputs, "inputs"),
-                                  toSingleCell(Any(inputI), "input i"), toSingleCell(Any(inputJ), "input j"),
-                                  toSingleCell(kind, "kind"));
+        return substitutionColumnWithBounds(
+            models_.table(model, argument::model), toCellTable(inputs, argument::inputs),
+            toSingleCell(Any(inputI), argument::firstInput), toSingleCell(Any(inputJ), argument::secondInput),
+            toSingleCell(kind, argument::kind), toSingleCell(what, argument::what));
     });
 }
 

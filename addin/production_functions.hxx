@@ -61,7 +61,7 @@ public:
                                      const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodReturns(const AnyTable& model, const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodTfp(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
-                              const css::uno::Any& periods) override;
+                              const css::uno::Any& periods, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodGrowth(const AnyTable& output, const AnyTable& inputs, const AnyTable& weights,
                                       const css::uno::Any& method, const css::uno::Any& periods) override;
     css::uno::Any SAL_CALL prodIndex(const AnyTable& quantities, const AnyTable& shares, const css::uno::Any& method,
@@ -70,15 +70,16 @@ public:
     css::uno::Any SAL_CALL prodCompare(const AnyTable& output, const AnyTable& inputs,
                                        const css::uno::Any& level) override;
     css::uno::Any SAL_CALL prodSecond(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                 const css::uno::Any& inputJ) override;
+                                 const css::uno::Any& inputJ, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodInputReturns(const AnyTable& model, const AnyTable& inputs,
                                             const AnyTable& input) override;
     css::uno::Any SAL_CALL prodPair(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
                                     const AnyTable& inputJ) override;
     css::uno::Any SAL_CALL prodMrts(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                    const AnyTable& inputJ) override;
+                                    const AnyTable& inputJ, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodSubstitution(const AnyTable& model, const AnyTable& inputs, const AnyTable& inputI,
-                                            const AnyTable& inputJ, const css::uno::Any& kind) override;
+                                            const AnyTable& inputJ, const css::uno::Any& kind,
+                                            const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodLeastCost(const AnyTable& model, const AnyTable& targetOutput,
                                     const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
@@ -94,7 +95,7 @@ public:
                                                const AnyTable& inputPrices, const AnyTable& inputI,
                                                const AnyTable& inputJ, const css::uno::Any& kind) override;
     css::uno::Any SAL_CALL prodBudget(const AnyTable& model, const AnyTable& budget,
-                                      const AnyTable& inputPrices) override;
+                                      const AnyTable& inputPrices, const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodProfit(const AnyTable& model, const AnyTable& outputPrice,
                                  const AnyTable& inputPrices) override;
     css::uno::Any SAL_CALL prodIsoquant(const AnyTable& model, const AnyTable& outputLevel, const AnyTable& values,
@@ -136,6 +137,8 @@ private:
                                            const css::uno::Any& effects, const css::uno::Any& trend,
                                            const css::uno::Any& incompleteRows);
 
+    // Every cache of the cell functions lives here, owned by this instance: fits by their
+    // arguments, models by their ranges. The core keeps none of its own.
     FitCache fits_;
     ModelRanges models_;
     css::lang::Locale locale_;

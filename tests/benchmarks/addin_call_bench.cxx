@@ -52,6 +52,36 @@ AnyTable typedModel()
     return model;
 }
 
+AnyTable oneCell(const Any& value)
+{
+    AnyTable range(1);
+    range.getArray()[0] = Sequence<Any>(&value, 1);
+    return range;
+}
+
+// A table of texts and numbers a cell function returns (PRODFIT's); empty for anything else.
+AnyTable tableOf(const Any& result)
+{
+    AnyTable table;
+    result >>= table;
+    return table;
+}
+
+// An all-number result comes as [][]double: its first number, NaN for anything else (a message).
+using NumberTable = Sequence<Sequence<double>>;
+double firstNumber(const Any& result)
+{
+    NumberTable table;
+    return (result >>= table) && table.getLength() > 0 && table[0].getLength() > 0 ? table[0][0] : std::nan("");
+}
+
+sal_Int32 rowsOf(const Any& result)
+{
+    NumberTable table;
+    result >>= table;
+    return table.getLength();
+}
+
 volatile double sink = 0;
 
 } // namespace
@@ -63,15 +93,16 @@ int main(int argc, char** argv)
     const int calls = argc > 3 ? std::stoi(argv[3]) : 200000;
     // "single": only the single-cell calls (for a profiler).
     const bool singleOnly = argc > 4 && std::string(argv[4]) == "single";
-    rtl::Reference<isoquant::addin::ProductionFunctions> functions(new isoquant::addin::ProductionFunctions);
+    rtl::Reference<isoquant::addin::ProductionFunctions> functions(new isoquant::addin::ProductionFunctions({}));
 
     const AnyTable output = inventedRange(singleOnly ? 1 : rows, 1, 1u);
     const AnyTable inputs = inventedRange(singleOnly ? 1 : rows, 3, 2u);
     const AnyTable model = typedModel();
     const AnyTable oneRow = inventedRange(1, 3, 3u);
+    const AnyTable firstInput = oneCell(Any(1.0));
     const double single = medianSeconds(runs, [&] {
         for (int call = 0; call < calls; ++call)
-            sink = functions->prodMarginal(model, oneRow, Any(1.0))[0][0].get<double>();
+            sink = firstNumber(functions->prodMarginal(model, oneRow, firstInput, Any()));
     });
     std::printf("marginal_single_typed %d %.6g %d per_call_us %.3f\n", calls, single, runs, 1e6 * single / calls);
     if (singleOnly) return 0;
@@ -85,29 +116,29 @@ int main(int argc, char** argv)
     // A fresh instance fits; the same instance again finds the fit in its cache (as Calc's
     // recalculations of an unchanged sheet do) and pays only conversion and the exact comparison.
     const double fit = medianSeconds(runs, [&] {
-        rtl::Reference<isoquant::addin::ProductionFunctions> fresh(new isoquant::addin::ProductionFunctions);
-        fresh->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
+        rtl::Reference<isoquant::addin::ProductionFunctions> fresh(new isoquant::addin::ProductionFunctions({}));
+        fresh->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
     });
     std::printf("prodfit_fitted %ld %.6g %d\n", static_cast<long>(rows), fit, runs);
-    functions->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
+    functions->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
     const double cached = medianSeconds(runs, [&] {
-        functions->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
+        functions->prodFit(output, inputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
     });
     std::printf("prodfit_cached %ld %.6g %d\n", static_cast<long>(rows), cached, runs);
 
     const double column = medianSeconds(runs, [&] {
-        sink = static_cast<double>(functions->prodMarginal(model, inputs, Any(1.0)).getLength());
+        sink = static_cast<double>(rowsOf(functions->prodMarginal(model, inputs, firstInput, Any())));
     });
     std::printf("marginal_column %ld %.6g %d\n", static_cast<long>(rows), column, runs);
 
     // A PRODFIT table (17 × 7, texts and numbers) as the model.
     const AnyTable smallOutput = inventedRange(200, 1, 4u);
     const AnyTable smallInputs = inventedRange(200, 3, 5u);
-    const AnyTable fitted =
-        functions->prodFit(smallOutput, smallInputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any());
+    const AnyTable fitted = tableOf(
+        functions->prodFit(smallOutput, smallInputs, Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any(), Any()));
     const double singleFitted = medianSeconds(runs, [&] {
         for (int call = 0; call < calls; ++call)
-            sink = functions->prodMarginal(fitted, oneRow, Any(1.0))[0][0].get<double>();
+            sink = firstNumber(functions->prodMarginal(fitted, oneRow, firstInput, Any()));
     });
     std::printf("marginal_single_fitted %d %.6g %d per_call_us %.3f model %dx%d\n", calls, singleFitted, runs,
                 1e6 * singleFitted / calls, static_cast<int>(fitted.getLength()),

@@ -156,5 +156,101 @@ class BoundsTest(CalcTestCase):
                             "unknown word")
 
 
+class DerivedBoundsTest(CalcTestCase):
+    """`what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION on the table with its
+    block. Expected: statsmodels' cov_params of the same fit (tests/data, Cobb & Douglas 1928) and a
+    central-difference gradient in numpy of the same quantity written out here (step 1e-6 times
+    max(1, |theta_j|)); se = sqrt(g'Vg), bounds with scipy's t(21) quantile, on the log scale for
+    the positive quantities; to 1e-7 relative (the issue's tolerance). Bundle (150, 200), output 170,
+    budget 1000 and prices (2, 3): invented."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Derived bounds")
+        set_values(cls.sheet, "P91", [[150.0, 200.0, 170.0, 2.0, 3.0]])
+        set_array_formula(cls.sheet, "F1:L21", "=PRODFIT(B1:B25;C1:D25;;;;;;;;;;TRUE())")
+        for name, (row, formula) in FORMULAS.items():
+            for column, what in zip("NOPQ", ("std. error", "lower bound", "upper bound", "value")):
+                set_formula(cls.sheet, "%s%d" % (column, row), formula % what)
+        recalc(CALC.doc)
+
+    def reference(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        import scipy.stats
+        result = statsmodels_fit(logs(self.data["P"]), [logs(self.data["L"]), logs(self.data["C"])])
+        theta, cov = np.asarray(result.params), np.asarray(result.cov_params())
+        t = scipy.stats.t.ppf(0.975, result.df_resid)
+
+        def se(function):
+            gradient = np.zeros(3)
+            for j in range(3):
+                step = 1e-6 * max(1.0, abs(theta[j]))
+                up, down = theta.copy(), theta.copy()
+                up[j] += step
+                down[j] -= step
+                gradient[j] = (function(up) - function(down)) / (2 * step)
+            return float(np.sqrt(gradient @ cov @ gradient))
+
+        def figures(function, positive):
+            value = function(theta)
+            if positive:
+                spread = se(lambda p: np.log(function(p)))
+                return [value * spread, value * np.exp(-t * spread), value * np.exp(t * spread)]
+            spread = se(function)
+            return [spread, value - t * spread, value + t * spread]
+        return figures
+
+    def check(self, name, function, positive):
+        figures = self.reference()
+        for column, expected in zip("NOP", figures(function, positive)):
+            with self.subTest(name=name, column=column):
+                self.assert_relative(get_cell(self.sheet, "%s%d" % (column, FORMULAS[name][0])), expected, 1e-7,
+                                     "%s %s" % (name, column))
+
+    def test_tfp(self):
+        self.check("tfp", lambda p: 170.0 / output(p), True)
+
+    def test_second_partial(self):
+        self.check("second", lambda p: p[1] * p[2] * output(p) / (150.0 * 200.0), False)
+
+    def test_rate_of_substitution(self):
+        self.check("mrts", lambda p: (p[1] / 150.0) / (p[2] / 200.0), True)
+
+    def test_budget_plan(self):
+        # The plan spends 1000 at prices (2, 3): x_L = bL / (bL + bC) * 1000 / 2.
+        def labour(p):
+            return p[1] / (p[1] + p[2]) * 1000.0 / 2.0
+
+        def made(p):
+            capital = p[2] / (p[1] + p[2]) * 1000.0 / 3.0
+            return np.exp(p[0] + p[1] * np.log(labour(p)) + p[2] * np.log(capital))
+        self.check("budget labour", labour, True)
+        self.check("budget output", made, True)
+
+    def test_substitution_elasticity_has_no_sampling_error_under_cobb_douglas(self):
+        # Every cobb-douglas parameter gives the elasticity 1 (README), so its gradient is 0.
+        row = FORMULAS["substitution"][0]
+        self.assertEqual(get_cell(self.sheet, "N%d" % row), 0.0)
+        plain = get_cell(self.sheet, "Q%d" % row)
+        self.assert_relative(plain, 1.0, 1e-12, "PRODSUBSTITUTION of cobb-douglas")
+        self.assertEqual([get_cell(self.sheet, "%s%d" % (c, row)) for c in "OP"], [plain, plain])
+
+
+# Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P, Q).
+FORMULAS = {
+    "tfp": (30, '=PRODTFP($F$1:$L$21;$R$91;$P$91:$Q$91;;"%s")'),
+    "second": (31, '=PRODSECOND($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
+    "mrts": (32, '=PRODMRTS($F$1:$L$21;$P$91:$Q$91;"L";"C";"%s")'),
+    "budget labour": (33, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;1)'),
+    "budget output": (34, '=INDEX(PRODBUDGET($F$1:$L$21;1000;$S$91:$T$91;"%s");1;3)'),
+    "substitution": (35, '=PRODSUBSTITUTION($F$1:$L$21;$P$91:$Q$91;"L";"C";"allen";"%s")'),
+}
+
+
+def output(p):
+    return np.exp(p[0] + p[1] * np.log(150.0) + p[2] * np.log(200.0))
+
+
 if __name__ == "__main__":
     unittest.main()

@@ -451,7 +451,7 @@ class PeriodNamesTest(GrowthTestCase):
 class GrowthFunctionWizardTest(unittest.TestCase):
     """The three functions are listed with their argument names; the optional ones are marked so."""
 
-    EXPECTED = {"PRODTFP": (["model", "output", "inputs", "periods"], 3),
+    EXPECTED = {"PRODTFP": (["model", "output", "inputs", "periods", "what"], 3),
                 "PRODGROWTH": (["output", "inputs", "weights", "method", "periods"], 3),
                 "PRODINDEX": (["quantities", "shares", "method", "base", "periods"], 2)}
 

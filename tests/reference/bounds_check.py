@@ -15,7 +15,13 @@ ln q; for the elasticities and scale q -+ t se. Prediction bounds of one new pla
 exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). Least-cost amounts (PLANS, numbered as
 the bundles): solved numerically for each theta by minimising cost on the isoquant in numpy's terms,
 x_i = (b_i / w_i) * lam with lam from A prod (b_j lam / w_j)^b_j = y (the first-order conditions of
-cost minimisation, solved for lam in logs), bounds on the log scale as for output.
+cost minimisation, solved for lam in logs), bounds on the log scale as for output. TFP of an observed
+output (OBSERVED, numbered as the bundles): Y / (A L^bL C^bC), positive, on the log scale. The cross
+and own second partials bL bC Y/(L C) and bL (bL - 1) Y/L^2, of either sign: q -+ t se. The marginal
+rate of technical substitution of L for C, (bL/L)/(bC/C), positive: on the log scale. The budget plan
+(BUDGETS, numbered as the bundles): the share s of the budget B spent on L solved for each theta by
+scipy's brentq from the first-order condition bL/s = bC/(1 - s) of max ln Y = ln A + bL ln(sB/wL) +
+bC ln((1 - s)B/wC) (to xtol 1e-15), then the two amounts and the output, positive: on the log scale.
 
 Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTest skip code) when
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -29,6 +35,8 @@ import sys
 LEVEL = 0.95
 BUNDLES = [(150.0, 200.0), (250.0, 400.0), (100.0, 100.0)]  # (L, C), invented
 PLANS = [(180.0, 2.0, 3.0), (300.0, 1.0, 1.0), (120.0, 5.0, 2.0)]  # (target output, wL, wC), invented
+OBSERVED = [170.0, 260.0, 105.0]  # one plant's output at each bundle (PRODTFP), invented
+BUDGETS = [(1000.0, 2.0, 3.0), (500.0, 1.0, 4.0), (2000.0, 5.0, 2.0)]  # (budget, wL, wC), invented
 
 
 def main():
@@ -39,7 +47,7 @@ def main():
     try:
         import numpy as np
         import statsmodels.api as sm
-        from scipy import stats
+        from scipy import optimize, stats
     except ImportError as error:
         return reference_script.skipped("numpy, scipy or statsmodels", error)
 
@@ -100,7 +108,21 @@ def main():
 
             positive("least_cost_L", lambda p: amount(p, 0))
             positive("least_cost_C", lambda p: amount(p, 1))
-            for name, function in (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2])):
+            positive("tfp", lambda p: OBSERVED[number] / output(p))
+            positive("mrts_LC", lambda p: (p[1] / labour) / (p[2] / capital))
+            budget, price_l, price_c = BUDGETS[number]
+
+            def plan(p):
+                share = optimize.brentq(lambda s: p[1] / s - p[2] / (1 - s), 1e-12, 1 - 1e-12, xtol=1e-15)
+                amounts = np.array([share * budget / price_l, (1 - share) * budget / price_c])
+                return np.append(amounts, math.exp(p[0] + p[1:] @ np.log(amounts)))
+
+            for index, name in enumerate(("budget_L", "budget_C", "budget_output")):
+                positive(name, lambda p, index=index: plan(p)[index])
+            linear = (("elasticity_C", lambda p: p[2]), ("scale", lambda p: p[1] + p[2]),
+                      ("second_LC", lambda p: p[1] * p[2] * output(p) / (labour * capital)),
+                      ("second_LL", lambda p: p[1] * (p[1] - 1) * output(p) / labour ** 2))
+            for name, function in linear:
                 put(name + "_se", se(function))
                 put(name + "_lower", function(theta) - t * se(function))
                 put(name + "_upper", function(theta) + t * se(function))

@@ -1,7 +1,8 @@
-// The message of the InputError an action throws, for comparing with the exact wording.
+// The message of the InputError an action throws as a cell shows it (sheetMessage), for comparing
+// with the exact wording.
 #pragma once
 
-#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/sheet/arguments/argument_names.hpp"
 
 #include <string>
 
@@ -15,7 +16,7 @@ std::string messageOf(Action action)
     try {
         action();
     } catch (const InputError& error) {
-        return error.what();
+        return sheetMessage(error);
     }
     return "<no InputError>";
 }

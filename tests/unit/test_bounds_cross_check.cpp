@@ -1,10 +1,11 @@
 // Standard errors and bounds of derived numbers (issue 20: PRODOUTPUT, PRODMARGINAL,
-// PRODELASTICITY, PRODSCALE, PRODLEASTCOST with `what`) from a PRODFIT table with its covariance
-// block, against python3-statsmodels 0.13.5 (the covariance of the same OLS fit, classical and HC1)
-// and a numerical gradient of the same quantity in numpy, recomputed at test time by
-// tests/reference/bounds_check.py on the Cobb & Douglas (1928) data (tests/data/README.md) at three
-// invented bundles and plans (the least-cost amounts solved there from the first-order conditions,
-// independently of the core's closed form).
+// PRODELASTICITY, PRODSCALE, PRODLEASTCOST, PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET with `what`)
+// from a PRODFIT table with its covariance block, against python3-statsmodels 0.13.5 (the
+// covariance of the same OLS fit, classical and HC1) and a numerical gradient of the same quantity
+// in numpy, recomputed at test time by tests/reference/bounds_check.py on the Cobb & Douglas (1928)
+// data (tests/data/README.md) at three invented bundles, plans, budgets and observed outputs (the
+// least-cost amounts and budget plans solved there from first-order conditions, independently of
+// the core's closed forms).
 //
 // Tolerance: 1e-7 relative on every figure (the issue's). The covariance matrices agree to about
 // 1e-12 (two factorisations of the same least squares) and the central-difference gradient to
@@ -38,6 +39,10 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 constexpr std::array<std::array<double, 2>, 3> bundles{{{150.0, 200.0}, {250.0, 400.0}, {100.0, 100.0}}};
 // bounds_check.py's PLANS: (target output, wL, wC), numbered as the bundles.
 constexpr std::array<std::array<double, 3>, 3> plans{{{180.0, 2.0, 3.0}, {300.0, 1.0, 1.0}, {120.0, 5.0, 2.0}}};
+// bounds_check.py's BUDGETS: (budget, wL, wC), numbered as the bundles.
+constexpr std::array<std::array<double, 3>, 3> budgets{{{1000.0, 2.0, 3.0}, {500.0, 1.0, 4.0}, {2000.0, 5.0, 2.0}}};
+// bounds_check.py's OBSERVED: one plant's output at each bundle, for its TFP.
+constexpr std::array<double, 3> observed{170.0, 260.0, 105.0};
 
 isoquant::CellTable tableWithBlock(const std::string& errors)
 {
@@ -75,7 +80,24 @@ double coreFigure(const isoquant::CellTable& model, const std::string& quantity,
         prices.set(0, 1, plans[bundle][2]);
         return isoquant::leastCostRowWithBounds(model, plans[bundle][0], prices, words.at(suffix))
             .number(0, name == "least_cost_L" ? 0 : 1);
-    } else if (name == "scale")
+    } else if (name == "budget_L" || name == "budget_C" || name == "budget_output") {
+        isoquant::CellTable prices(1, 2);
+        prices.set(0, 0, budgets[bundle][1]);
+        prices.set(0, 1, budgets[bundle][2]);
+        const std::size_t cell = name == "budget_L" ? 0 : name == "budget_C" ? 1 : 2;
+        return isoquant::budgetRowWithBounds(model, budgets[bundle][0], prices, words.at(suffix)).number(0, cell);
+    } else if (name == "tfp")
+        result = isoquant::productivityColumnWithBounds(model, isoquant::singleCell(observed[bundle]), inputs, {},
+                                                        words.at(suffix));
+    else if (name == "second_LC")
+        result = isoquant::secondPartialColumnWithBounds(model, inputs, std::string("L"), std::string("C"),
+                                                         words.at(suffix));
+    else if (name == "second_LL")
+        result = isoquant::secondPartialColumnWithBounds(model, inputs, std::string("L"), {}, words.at(suffix));
+    else if (name == "mrts_LC")
+        result = isoquant::technicalRateColumnWithBounds(model, inputs, std::string("L"), std::string("C"),
+                                                         words.at(suffix));
+    else if (name == "scale")
         result = isoquant::scaleColumnWithBounds(model, inputs, words.at(suffix));
     else
         throw std::runtime_error("unknown quantity " + quantity);
@@ -91,8 +113,8 @@ BOOST_AUTO_TEST_CASE(standard_errors_and_bounds_agree_with_statsmodels_and_numpy
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_BOUNDS_FIGURES"));
-    // 2 kinds of errors × 3 bundles × (6 positive quantities × 3 + 2 prediction bounds + 2 linear × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 26u);
+    // 2 kinds of errors × 3 bundles × (11 positive quantities × 3 + 2 prediction bounds + 4 linear × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 2u * 3u * 47u);
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string& errors = fields.at(0);

@@ -67,7 +67,7 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     arguments = sixLaundries();
     arguments.form = std::string("translog"); // 1 + 1 + 1 + 1 + 1 + 1 = 6 parameters for 2 prices
     BOOST_TEST(fitMessage(arguments) ==
-               "too few rows: cost, output and prices have 6 rows of data for 6 parameters to estimate; need at least 7");
+               "too few rows: cost, output and input prices have 6 rows of data for 6 parameters to estimate; need at least 7");
     arguments = sixLaundries(); // row 5 alone has another price ratio: its own dummy, so leverage 1
     arguments.prices = numberRange((Eigen::MatrixXd(6, 2) << 14, 0.3, 14, 0.3, 14, 0.3, 16, 0.3, 14, 0.3, 14, 0.3)
                                        .finished(),

@@ -3,6 +3,7 @@
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/sheet/arguments/range_limits.hpp"
 
 #include "input_error_message.hpp"
 

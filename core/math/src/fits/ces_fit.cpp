@@ -71,26 +71,26 @@ void requireCesData(const ProductionData& data, const ProductionFitOptions& opti
 {
     const Eigen::Index n = data.output.size();
     if (data.inputs.cols() != 2)
-        throw InputError("inputs: the ces form takes exactly two inputs; this range has " +
+        throw InputError({DataPart::inputs}, "the ces form takes exactly two inputs; this range has " +
                          std::to_string(data.inputs.cols()) + (data.inputs.cols() == 1 ? " column" : " columns"));
-    if (data.controls.cols() > 0) throw InputError("controls: the ces form takes no controls; leave the argument empty");
+    if (data.controls.cols() > 0) throw InputError({DataPart::controls}, "the ces form takes no controls; leave the argument empty");
     if (options.constantReturns)
-        throw InputError("constant returns: cannot be imposed on the ces form; leave the argument empty");
+        throw InputError({DataPart::constantReturns}, "cannot be imposed on the ces form; leave the argument empty");
     if (options.covariance != CovarianceKind::classical)
-        throw InputError("errors: the ces form reports classical standard errors only; leave the argument empty");
+        throw InputError({DataPart::covarianceKind}, "the ces form reports classical standard errors only; leave the argument empty");
     if (data.output.maxCoeff() == data.output.minCoeff())
-        throw InputError("output: every row holds the same value; there is no variation to explain");
+        throw InputError({DataPart::output}, "every row holds the same value; there is no variation to explain");
     if (n < parameterCount + 1)
-        throw InputError("too few rows: output and inputs have " + std::to_string(n) +
+        throw InputError({DataPart::output, DataPart::inputs}, "too few rows: {parts} have " + std::to_string(n) +
                          " rows of data for 4 parameters to estimate; need at least 5");
     // As the Cobb-Douglas fit says it: ln A and ν·ln x of a constant input cannot be told apart.
     for (Eigen::Index column = 0; column < 2; ++column)
         if (distinctValues(columnValues(data.inputs.col(column)), 2) < 2)
-            throw InputError("inputs: " + quoted(data.inputLabels[static_cast<std::size_t>(column)]) +
+            throw InputError({DataPart::inputs}, quoted(data.inputLabels[static_cast<std::size_t>(column)]) +
                              " does not vary, so it cannot be told apart from ln A");
     const Eigen::VectorXd ratios = data.inputs.col(0).cwiseQuotient(data.inputs.col(1));
     if (distinctValues(columnValues(ratios), 3) < 3)
-        throw InputError("inputs: the ratio of " + quoted(data.inputLabels[0]) + " to " + quoted(data.inputLabels[1]) +
+        throw InputError({DataPart::inputs}, "the ratio of " + quoted(data.inputLabels[0]) + " to " + quoted(data.inputLabels[1]) +
                          " takes fewer than three values; the ces form cannot tell its weight from its curvature");
 }
 
@@ -132,7 +132,7 @@ std::vector<Eigen::VectorXd> solverStarts(const CesLogs& logs, const CesFitOptio
     if (cesOptions.start) {
         const Eigen::Vector4d& start = *cesOptions.start;
         if (!(start(1) > 0 && start(1) < 1 && start(2) > -1) || !start.allFinite())
-            throw InputError("start: needs 0 < delta < 1 and rho > -1");
+            throw InputError({DataPart::start}, "needs 0 < delta < 1 and rho > -1");
         starts.push_back(toSolver(start));
         return starts;
     }
@@ -159,7 +159,7 @@ NonlinearLeastSquaresResult bestRun(const CesModel& model, const std::vector<Eig
         };
         if (!kept || rank(run) < rank(*kept)) kept = std::move(run);
     }
-    if (!kept) throw InputError("inputs: no start value for the ces fit could be found from these data");
+    if (!kept) throw InputError({DataPart::inputs}, "no start value for the ces fit could be found from these data");
     return std::move(*kept);
 }
 

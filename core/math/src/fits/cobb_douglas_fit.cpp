@@ -107,20 +107,10 @@ double totalSumOfSquaresOfLogs(const ProductionData& data, const ProductionFitOp
     return responseIsLogOutput ? regression.summary.totalSumOfSquares : centredSumOfSquaresOfLogs(data.output);
 }
 
-std::string listOfNames(const std::vector<std::string>& names)
-{
-    std::string text;
-    for (std::size_t i = 0; i < names.size(); ++i) {
-        if (i > 0) text += i + 1 == names.size() ? " and " : ", ";
-        text += names[i];
-    }
-    return text;
-}
-
 // Names the inputs, controls, trend or period effects behind collinear design columns (in the
 // panel regression's extended column space), in the user's labels.
-std::string collinearityMessage(const ProductionData& data, bool constantReturns, EffectsKind effects,
-                                const std::vector<Eigen::Index>& columns)
+InputError collinearityError(const ProductionData& data, bool constantReturns, EffectsKind effects,
+                             const std::vector<Eigen::Index>& columns)
 {
     const auto k = static_cast<Eigen::Index>(data.inputLabels.size());
     const auto m = static_cast<Eigen::Index>(data.controlLabels.size());
@@ -128,41 +118,41 @@ std::string collinearityMessage(const ProductionData& data, bool constantReturns
     const bool hasTrend = data.panel.hasPeriods() && effects != EffectsKind::twoWay;
     bool withConstant = false;
     std::vector<std::string> names;
-    std::vector<std::string> arguments;
-    auto involve = [&arguments](const std::string& argument) {
-        if (std::find(arguments.begin(), arguments.end(), argument) == arguments.end()) arguments.push_back(argument);
+    std::vector<DataPart> parts;
+    auto involve = [&parts](DataPart part) {
+        if (std::find(parts.begin(), parts.end(), part) == parts.end()) parts.push_back(part);
     };
     for (const Eigen::Index column : columns) {
         if (column == 0) {
             withConstant = true;
         } else if (column <= slopes) {
             names.push_back(quoted(data.inputLabels[static_cast<std::size_t>(column - 1)]));
-            involve("inputs");
+            involve(DataPart::inputs);
         } else if (column <= slopes + m) {
             names.push_back("control " + quoted(data.controlLabels[static_cast<std::size_t>(column - 1 - slopes)]));
-            involve("controls");
+            involve(DataPart::controls);
         } else if (hasTrend && column == 1 + slopes + m) {
             names.push_back("the trend");
-            involve("trend");
+            involve(DataPart::periods);
         } else if (std::find(names.begin(), names.end(), "the period effects") == names.end()) {
             names.push_back("the period effects");
-            involve("trend");
+            involve(DataPart::periods);
         }
     }
-    const std::string argument = arguments.empty() ? "inputs" : listOfNames(arguments);
     const std::string note =
         constantReturns ? " (as ratios to " + quoted(data.inputLabels.back()) + ", since constant returns are imposed)" : "";
     const bool groupEffects = effects != EffectsKind::none;
     const std::string constant = groupEffects ? "the group effects" : "ln A";
-    if (names.empty()) return "inputs: the data cannot identify " + constant + note;
+    if (parts.empty()) parts.push_back(DataPart::inputs);
+    if (names.empty()) return {parts, "the data cannot identify " + constant + note};
     if (withConstant && names.size() == 1) {
         const bool plural = names.front() == "the period effects";
-        return argument + ": " + names.front() + note + (plural ? " do not vary" : " does not vary") +
-               (groupEffects ? " within any group" : "") + ", so " + (plural ? "they" : "it") +
-               " cannot be told apart from " + constant;
+        return {parts, names.front() + note + (plural ? " do not vary" : " does not vary") +
+                           (groupEffects ? " within any group" : "") + ", so " + (plural ? "they" : "it") +
+                           " cannot be told apart from " + constant};
     }
-    return argument + ": " + listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
-           " are collinear (inputs taken in logs); drop one of them";
+    return {parts, listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
+                       " are collinear (inputs taken in logs); drop one of them"};
 }
 
 // The panel options need their columns; errors name the argument to fix.
@@ -171,21 +161,27 @@ void requirePanelColumns(const ProductionData& data, const ProductionFitOptions&
     const PanelColumns& panel = data.panel;
     const auto n = static_cast<std::size_t>(data.output.size());
     if (panel.hasGroups() && panel.groupOfRow.size() != n)
-        throw InputError("groups: has " + std::to_string(panel.groupOfRow.size()) + " rows of data but output has " +
-                         std::to_string(n));
+        throw InputError({DataPart::groups, DataPart::output},
+                         "{0}: has " + std::to_string(panel.groupOfRow.size()) + " rows of data but {1} has " +
+                             std::to_string(n));
     if (panel.hasPeriods() && static_cast<std::size_t>(panel.periods.size()) != n)
-        throw InputError("trend: has " + std::to_string(panel.periods.size()) + " rows of data but output has " +
-                         std::to_string(n));
+        throw InputError({DataPart::periods, DataPart::output},
+                         "{0}: has " + std::to_string(panel.periods.size()) + " rows of data but {1} has " +
+                             std::to_string(n));
     if (options.effects != EffectsKind::none && !panel.hasGroups())
-        throw InputError("effects: \"" + effectsWord(options.effects) +
-                         "\" needs the groups argument, a column naming each row's plant or firm");
+        throw InputError({DataPart::effects, DataPart::groups},
+                         "{0}: \"" + effectsWord(options.effects) +
+                             "\" needs the {1} argument, a column naming each row's plant or firm");
     if (options.effects == EffectsKind::twoWay && !panel.hasPeriods())
-        throw InputError("effects: \"two-way\" needs the trend argument, the column of periods (years)");
+        throw InputError({DataPart::effects, DataPart::periods},
+                         "{0}: \"two-way\" needs the {1} argument, the column of periods (years)");
     if (options.covariance == CovarianceKind::cluster) {
         if (!panel.hasGroups())
-            throw InputError("errors: \"cluster\" needs the groups argument, a column naming each row's plant or firm");
+            throw InputError({DataPart::covarianceKind, DataPart::groups},
+                             "{0}: \"cluster\" needs the {1} argument, a column naming each row's plant or firm");
         if (panel.groupLabels.size() < 2)
-            throw InputError("groups: every row is in the same group; cluster-robust errors need at least 2 groups");
+            throw InputError({DataPart::groups},
+                             "every row is in the same group; cluster-robust errors need at least 2 groups");
     }
 }
 
@@ -231,7 +227,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     const Eigen::Index n = data.output.size();
     const Eigen::Index k = data.inputs.cols();
     const Eigen::Index m = data.controls.cols();
-    if (k < 1) throw InputError("inputs: needs at least one column");
+    if (k < 1) throw InputError({DataPart::inputs}, "needs at least one column");
     requirePanelColumns(data, options);
 
 
@@ -241,19 +237,19 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     const Eigen::Index p = baseColumns + panelParameterCount(data.panel, options.effects);
     // The design is held in full with a trend or effects, or when it needs the long double route.
     const Eigen::Index trendColumns = data.panel.hasPeriods() && options.effects != EffectsKind::twoWay ? 1 : 0;
-    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(baseColumns + trendColumns), "inputs",
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(baseColumns + trendColumns), DataPart::inputs,
                     "the cobb-douglas form with " + std::to_string(baseColumns + trendColumns) + " regression columns");
     if (n < p + 1) {
         const std::string groupNote = options.effects == EffectsKind::none
                                           ? ""
                                           : " (" + std::to_string(data.panel.groupLabels.size()) + " group effects included)";
-        throw InputError("too few rows: output and inputs have " + std::to_string(n) + (n == 1 ? " row" : " rows") +
+        throw InputError({DataPart::output, DataPart::inputs}, "too few rows: {parts} have " + std::to_string(n) + (n == 1 ? " row" : " rows") +
                          " of data for " + std::to_string(p) + " parameters to estimate" + groupNote +
                          "; need at least " + std::to_string(p + 1));
     }
     // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
     if (data.output.maxCoeff() == data.output.minCoeff())
-        throw InputError("output: every row holds the same value; there is no variation to explain");
+        throw InputError({DataPart::output}, "every row holds the same value; there is no variation to explain");
 
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;
@@ -263,7 +259,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     try {
         run = fitPanelRegression(rows, data.panel, options.effects, regressionOptions);
     } catch (const CollinearColumns& collinear) {
-        throw InputError(collinearityMessage(data, options.constantReturns, options.effects, collinear.columns()));
+        throw collinearityError(data, options.constantReturns, options.effects, collinear.columns());
     }
     const LeastSquaresResult& regression = run.regression;
 

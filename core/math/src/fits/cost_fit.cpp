@@ -153,13 +153,13 @@ void setParameters(ProductionFit& summary, const Eigen::VectorXd& theta, const E
 void requireCostData(const CostData& data, Eigen::Index parameters)
 {
     const Eigen::Index n = data.cost.size();
-    if (data.prices.cols() < 1) throw InputError("input prices: needs at least one column");
+    if (data.prices.cols() < 1) throw InputError({DataPart::prices}, "needs at least one column");
     if (n < parameters + 1)
-        throw InputError("too few rows: cost, output and prices have " + std::to_string(n) + " rows of data for " +
+        throw InputError({DataPart::cost, DataPart::output, DataPart::prices}, "too few rows: {parts} have " + std::to_string(n) + " rows of data for " +
                          std::to_string(parameters) + " parameters to estimate; need at least " +
                          std::to_string(parameters + 1));
     if (data.output.maxCoeff() == data.output.minCoeff())
-        throw InputError("output: every row holds the same value; a cost function needs varied output");
+        throw InputError({DataPart::output}, "every row holds the same value; a cost function needs varied output");
 }
 
 } // namespace
@@ -246,7 +246,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     const Eigen::Index regressors = k + 1 + (translog ? 1 + k * (k - 1) / 2 + (k - 1) : 0);
     requireCostData(data, regressors);
     const Eigen::Index n = data.cost.size();
-    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), "input prices",
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), DataPart::prices,
                     translog ? "the translog cost form" : "the Cobb-Douglas cost form");
     const NormalisedRegression normalised = normalisedRegression(data, options.form);
 
@@ -265,13 +265,12 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
             regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
                                             normalised.logOutput, data.shares, options.form, options.confidenceLevel);
     } catch (const CollinearColumns& collinear) {
-        std::string names;
-        const auto& columns = collinear.columns();
-        for (std::size_t c = 0; c < columns.size(); ++c)
-            names += (c == 0 ? "" : c + 1 == columns.size() ? " and " : ", ") +
-                     normalised.termNames[static_cast<std::size_t>(columns[c])];
-        throw InputError("input prices: the cost terms " + names +
-                         " are collinear (prices divided by the last one, in logs); use fewer inputs or more varied data");
+        std::vector<std::string> names;
+        for (const Eigen::Index column : collinear.columns())
+            names.push_back(normalised.termNames[static_cast<std::size_t>(column)]);
+        throw InputError({DataPart::prices},
+                         "the cost terms " + listOfNames(names) +
+                             " are collinear (prices divided by the last one, in logs); use fewer inputs or more varied data");
     }
     summary.status = regression.status;
     summary.summary = regression.summary;

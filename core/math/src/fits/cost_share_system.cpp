@@ -79,13 +79,13 @@ LeastSquaresResult fitCostShareSystem(const Eigen::MatrixXd& design, const Eigen
     switch (system.status) {
     case SystemStatus::converged: break;
     case SystemStatus::notConverged:
-        throw InputError("shares: the cost and share equations did not converge in " +
+        throw InputError({DataPart::shares}, "the cost and share equations did not converge in " +
                          std::to_string(system.iterations - 1) + " rounds; fit without shares");
     case SystemStatus::singularCovariance:
-        throw InputError("shares: a share equation fits exactly (or two equations' errors move together exactly), so "
+        throw InputError({DataPart::shares}, "a share equation fits exactly (or two equations' errors move together exactly), so "
                          "the system cannot weigh them; fit without shares");
     case SystemStatus::singularDesign:
-        throw InputError("input prices: the cost and share terms are collinear; use fewer inputs or more varied data");
+        throw InputError({DataPart::prices}, "the cost and share terms are collinear; use fewer inputs or more varied data");
     }
     LeastSquaresResult result;
     describeSystem(result, system, response.size(), static_cast<Eigen::Index>(designs.size()), confidenceLevel);

@@ -146,17 +146,17 @@ std::pair<Eigen::MatrixXd, Eigen::VectorXd> extendedDesign(const RegressionRows&
     if (panel.hasPeriods() && effects != EffectsKind::twoWay) {
         result.trendOrigin = panel.periods.minCoeff();
         if (panel.periods.maxCoeff() == result.trendOrigin)
-            throw InputError("trend: every row holds the same period; a trend needs at least two different periods");
+            throw InputError({DataPart::periods}, "every row holds the same period; a trend needs at least two different periods");
         result.trendColumn = extended.cols();
         append((panel.periods.array() - result.trendOrigin).matrix());
     }
     if (effects == EffectsKind::twoWay) {
         result.periodValues = distinctPeriods(panel.periods);
         if (result.periodValues.size() < 2)
-            throw InputError("trend: every row holds the same period; \"two-way\" effects need at least two periods");
+            throw InputError({DataPart::periods}, "every row holds the same period; \"two-way\" effects need at least two periods");
         result.firstPeriodColumn = extended.cols();
         const auto later = static_cast<std::size_t>(result.periodValues.size() - 1);
-        checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(extended.cols()) + later, "trend",
+        checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(extended.cols()) + later, DataPart::periods,
                         "two-way effects with " + groupedCount(later + 1) + " periods",
                         "use a trend instead of two-way effects, or fewer periods");
         append(periodDummies(panel.periods, result.periodValues));

@@ -13,10 +13,10 @@ namespace {
 void refusePanelOptions(const ProductionData& data, const ProductionFitOptions& options)
 {
     const std::string form = " only with the cobb-douglas form, not with \"" + formWord(options.form) + "\"";
-    if (options.effects != EffectsKind::none) throw InputError("effects: group or period effects work" + form);
-    if (data.panel.hasPeriods()) throw InputError("trend: a trend works" + form);
-    if (options.covariance == CovarianceKind::cluster) throw InputError("errors: \"cluster\" works" + form);
-    if (data.panel.hasGroups()) throw InputError("groups: a group column works" + form);
+    if (options.effects != EffectsKind::none) throw InputError({DataPart::effects}, "group or period effects work" + form);
+    if (data.panel.hasPeriods()) throw InputError({DataPart::periods}, "a trend works" + form);
+    if (options.covariance == CovarianceKind::cluster) throw InputError({DataPart::covarianceKind}, "\"cluster\" works" + form);
+    if (data.panel.hasGroups()) throw InputError({DataPart::groups}, "a group column works" + form);
 }
 
 } // namespace

@@ -53,28 +53,28 @@ std::vector<std::string> termLabels(const ProductionData& data)
     return labels;
 }
 
-std::string collinearTerms(const ProductionData& data, const std::vector<Eigen::Index>& columns)
+InputError collinearTerms(const ProductionData& data, const std::vector<Eigen::Index>& columns)
 {
     const std::vector<std::string> labels = termLabels(data);
-    std::string names;
-    for (std::size_t c = 0; c < columns.size(); ++c)
-        names += (c == 0 ? "" : c + 1 == columns.size() ? " and " : ", ") + labels[static_cast<std::size_t>(columns[c])];
-    return "inputs: the translog terms " + names +
-           " are collinear (inputs taken in logs); use fewer inputs or more varied data";
+    std::vector<std::string> names;
+    for (const Eigen::Index column : columns) names.push_back(labels[static_cast<std::size_t>(column)]);
+    return {{DataPart::inputs},
+            "the translog terms " + listOfNames(names) +
+                " are collinear (inputs taken in logs); use fewer inputs or more varied data"};
 }
 
 void requireTranslogData(const ProductionData& data, const ProductionFitOptions& options)
 {
-    if (data.inputs.cols() < 1) throw InputError("inputs: needs at least one column");
+    if (data.inputs.cols() < 1) throw InputError({DataPart::inputs}, "needs at least one column");
     if (options.constantReturns)
-        throw InputError("constant returns: cannot be imposed on the translog form; leave the argument empty");
+        throw InputError({DataPart::constantReturns}, "cannot be imposed on the translog form; leave the argument empty");
     for (std::size_t column = 0; column < data.inputLabels.size(); ++column)
         if (data.inputLabels[column].find('*') != std::string::npos)
-            throw InputError("inputs: column " + std::to_string(column + 1) + " is labelled " +
+            throw InputError({DataPart::inputs}, "column " + std::to_string(column + 1) + " is labelled " +
                              quoted(data.inputLabels[column]) +
                              "; the translog table joins labels with \"*\", so rename it");
     if (data.output.maxCoeff() == data.output.minCoeff())
-        throw InputError("output: every row holds the same value; there is no variation to explain");
+        throw InputError({DataPart::output}, "every row holds the same value; there is no variation to explain");
 }
 
 // εᵢ at l̄ and ν = Σ εᵢ as linear functions gᵀθ of the parameters.
@@ -104,10 +104,10 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     const auto q = static_cast<Eigen::Index>(pairs.size());
     const Eigen::Index p = 1 + k + q + m;
     if (n < p + 1)
-        throw InputError("too few rows: output and inputs have " + std::to_string(n) + " rows of data for " +
+        throw InputError({DataPart::output, DataPart::inputs}, "too few rows: {parts} have " + std::to_string(n) + " rows of data for " +
                          std::to_string(p) + " parameters of the translog form; need at least " + std::to_string(p + 1));
 
-    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), "inputs",
+    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), DataPart::inputs,
                     "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
     const Eigen::MatrixXd logs = exactLog(data.inputs.array()).matrix();
     const Eigen::MatrixXd design = translogDesign(logs, data.controls);
@@ -120,7 +120,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     try {
         regression = fitLeastSquares(design, exactLog(data.output.array()).matrix(), 0, regressionOptions);
     } catch (const CollinearColumns& collinear) {
-        throw InputError(collinearTerms(data, collinear.columns()));
+        throw collinearTerms(data, collinear.columns());
     }
     fit.form = ProductionForm::translog;
     fit.inputLabels = data.inputLabels;

@@ -13,22 +13,11 @@ std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t re
     return std::max<std::size_t>(1, std::min(requested, maximumRowEvaluations / rows / runs));
 }
 
-void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument)
-{
-    if (rows > maximumRangeRows)
-        throw InputError(argument + ": the range has " + groupedCount(rows) + " rows; one call takes at most " +
-                         groupedCount(maximumRangeRows) + " (a whole sheet column)");
-    // Checked as rows > cells / columns, so that the product cannot overflow.
-    if (columns > 0 && rows > maximumRangeCells / columns)
-        throw InputError(argument + ": the range has " + groupedCount(rows) + " rows × " + groupedCount(columns) +
-                         " columns; one call takes at most " + groupedCount(maximumRangeCells) + " cells");
-}
-
-void checkDesignSize(std::size_t rows, std::size_t columns, const std::string& argument, const std::string& what,
+void checkDesignSize(std::size_t rows, std::size_t columns, DataPart part, const std::string& what,
                      const std::string& advice)
 {
     if (columns > 0 && rows > maximumDesignValues / columns)
-        throw InputError(argument + ": " + what + " on " + groupedCount(rows) + " rows needs " + groupedCount(rows) +
+        throw InputError({part}, what + " on " + groupedCount(rows) + " rows needs " + groupedCount(rows) +
                          " × " + groupedCount(columns) + " design values, more than the " +
                          groupedCount(maximumDesignValues) + " one call may hold; " + advice);
 }

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
@@ -45,7 +46,7 @@ Eigen::VectorXd readPrices(const CellTable& range, const std::string& argument, 
 
 SubstitutionKind readSubstitutionKind(const Cell& cell)
 {
-    return readChoice<SubstitutionKind>(cell, "kind", "a kind",
+    return readChoice<SubstitutionKind>(cell, argument::kind, "a kind",
                                         {{"direct", SubstitutionKind::direct},
                                          {"allen", SubstitutionKind::allen},
                                          {"morishima", SubstitutionKind::morishima}},
@@ -54,7 +55,7 @@ SubstitutionKind readSubstitutionKind(const Cell& cell)
 
 CostMeasure readCostMeasure(const Cell& cell)
 {
-    return readChoice<CostMeasure>(cell, "what", "a cost measure",
+    return readChoice<CostMeasure>(cell, argument::what, "a cost measure",
                                    {{"total", CostMeasure::total},
                                     {"marginal", CostMeasure::marginal},
                                     {"average", CostMeasure::average},

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/envelope_arguments.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -55,21 +56,22 @@ std::string optionWord(const Cell& cell) { return isText(cell) ? std::get<std::s
 EnvelopeData readEnvelopeData(const CellTable& outputs, const CellTable& inputs)
 {
     EnvelopeData data;
-    data.outputs = readAmounts(outputs, "outputs", "output");
-    data.inputs = readAmounts(inputs, "inputs", "input");
+    data.outputs = readAmounts(outputs, argument::outputs, "output");
+    data.inputs = readAmounts(inputs, argument::inputs, "input");
     const Eigen::Index plants = data.outputs.values.rows();
     if (data.inputs.values.rows() != plants)
-        throw InputError("inputs: has " + rowsOf(data.inputs.values.rows()) + " of data but outputs has " +
-                         rowsOf(plants) + "; give one row per plant in both");
+        throw argumentError(argument::inputs, "has " + rowsOf(data.inputs.values.rows()) + " of data but outputs has " +
+                                                  rowsOf(plants) + "; give one row per plant in both");
     if (plants < 2)
-        throw InputError("outputs: has 1 row of data, so the frontier is that plant alone; an envelope compares at "
-                         "least 2 plants");
+        throw argumentError(argument::outputs,
+                            "has 1 row of data, so the frontier is that plant alone; an envelope compares at "
+                            "least 2 plants");
     return data;
 }
 
 EnvelopeReturns readEnvelopeReturns(const Cell& cell)
 {
-    return readChoice<EnvelopeReturns>(cell, "returns", "a kind of returns to scale",
+    return readChoice<EnvelopeReturns>(cell, argument::returns, "a kind of returns to scale",
                                        {{"constant", EnvelopeReturns::constant},
                                         {"variable", EnvelopeReturns::variable},
                                         {"non-increasing", EnvelopeReturns::nonIncreasing}},
@@ -79,7 +81,7 @@ EnvelopeReturns readEnvelopeReturns(const Cell& cell)
 EnvelopeOrientation readEnvelopeOrientation(const Cell& cell)
 {
     return readChoice<EnvelopeOrientation>(
-        cell, "orientation", "an orientation",
+        cell, argument::orientation, "an orientation",
         {{"input", EnvelopeOrientation::input}, {"output", EnvelopeOrientation::output}}, EnvelopeOrientation::input);
 }
 
@@ -105,26 +107,30 @@ EnvelopeRequest readEnvelopeRequest(const Cell& cell, const EnvelopeData& data)
                     "target " + data.outputs.labels[static_cast<std::size_t>(output)]};
         std::string known;
         for (const auto& name : data.inputs.labels) known += (known.empty() ? "" : ", ") + quoted(name);
-        throw InputError("what: " + quoted(label) + " is not an input or output label; the inputs are " + known);
+        throw argumentError(argument::what,
+                            quoted(label) + " is not an input or output label; the inputs are " + known);
     }
-    throw InputError("what: " + describe(cell) +
-                     " is not known; use \"score\", \"scale efficiency\", \"peers\" or \"target <input label>\"");
+    throw argumentError(
+        argument::what,
+        describe(cell) + " is not known; use \"score\", \"scale efficiency\", \"peers\" or \"target <input label>\"");
 }
 
 std::vector<std::string> readPlantNames(const CellTable& names, const NumericColumns& outputs)
 {
     if (names.empty()) return {};
     const auto plants = static_cast<std::size_t>(outputs.values.rows());
-    if (names.columns() != 1) throw InputError("names: must be one column; it has " + std::to_string(names.columns()));
+    if (names.columns() != 1)
+        throw argumentError(argument::names, "must be one column; it has " + std::to_string(names.columns()));
     if (names.rows() != plants && names.rows() != plants + 1)
-        throw InputError("names: has " + rowsOf(static_cast<Eigen::Index>(names.rows())) + " but outputs has " +
-                         rowsOf(static_cast<Eigen::Index>(plants)) + " of data; give one name per plant (a header "
-                         "row may come first)");
+        throw argumentError(argument::names, "has " + rowsOf(static_cast<Eigen::Index>(names.rows())) +
+                                                 " but outputs has " + rowsOf(static_cast<Eigen::Index>(plants)) +
+                                                 " of data; give one name per plant (a header "
+                                                 "row may come first)");
     std::vector<std::string> read;
     for (std::size_t row = names.rows() - plants; row < names.rows(); ++row) {
         const Cell cell = names.at(row, 0);
         if (isOmitted(cell) || (isNumber(cell) && !std::isfinite(std::get<double>(cell))))
-            throw InputError("names: row " + std::to_string(row + 1) + " holds no name");
+            throw argumentError(argument::names, "row " + std::to_string(row + 1) + " holds no name");
         read.push_back(isText(cell) ? std::get<std::string>(cell) : formatNumber(std::get<double>(cell)));
     }
     return read;

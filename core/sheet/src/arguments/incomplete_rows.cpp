@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/incomplete_rows.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 
@@ -31,7 +32,7 @@ std::vector<bool> findIncompleteRowsIn(const std::vector<std::pair<const CellTab
             }
     }
     if (std::all_of(incomplete.begin(), incomplete.end(), [](bool flag) { return flag; }))
-        throw InputError("incomplete rows: every row has a blank or text cell; no row is left to fit");
+        throw argumentError(argument::incompleteRows, "every row has a blank or text cell; no row is left to fit");
     return incomplete;
 }
 

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -30,8 +31,9 @@ void takeInModelOrder(NumericColumns& read, const ProductionModel& model)
         bool known = false;
         for (const auto& input : model.inputLabels) known |= equalsIgnoringCase(label, input);
         if (!known)
-            throw InputError("inputs: the column headed " + quoted(label) + " is not an input of the model; its inputs are " +
-                             knownLabels(model));
+            throw argumentError(argument::inputs, "the column headed " + quoted(label) +
+                                                      " is not an input of the model; its inputs are " +
+                                                      knownLabels(model));
     }
     Eigen::MatrixXd ordered(read.values.rows(), k);
     for (Eigen::Index i = 0; i < k; ++i) {
@@ -40,8 +42,8 @@ void takeInModelOrder(NumericColumns& read, const ProductionModel& model)
         for (std::size_t column = 0; column < read.labels.size(); ++column)
             if (equalsIgnoringCase(read.labels[column], input)) found = static_cast<Eigen::Index>(column);
         if (found < 0)
-            throw InputError("inputs: no column is headed " + quoted(input) + ", an input of the model; its inputs are " +
-                             knownLabels(model));
+            throw argumentError(argument::inputs, "no column is headed " + quoted(input) +
+                                                      ", an input of the model; its inputs are " + knownLabels(model));
         ordered.col(i) = read.values.col(found);
     }
     read.values = std::move(ordered);
@@ -52,15 +54,15 @@ void takeInModelOrder(NumericColumns& read, const ProductionModel& model)
 
 NumericColumns readModelInputs(const CellTable& inputs, const ProductionModel& model)
 {
-    NumericColumns read = readNumericColumns(inputs, "inputs", ValueRule::positive, "input");
+    NumericColumns read = readNumericColumns(inputs, argument::inputs, ValueRule::positive, "input");
     if (read.hasHeader && !namesNoInputs(model)) {
         takeInModelOrder(read, model);
         return read;
     }
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     if (read.values.cols() != k)
-        throw InputError("inputs: has " + plural(static_cast<std::size_t>(read.values.cols()), "column") + " but the model has " +
-                         plural(static_cast<std::size_t>(k), "input"));
+        throw argumentError(argument::inputs, "has " + plural(static_cast<std::size_t>(read.values.cols()), "column") +
+                                                  " but the model has " + plural(static_cast<std::size_t>(k), "input"));
     return read;
 }
 

@@ -2,7 +2,7 @@
 
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
-#include "isoquant/math/numerics/work_limits.hpp"
+#include "isoquant/sheet/arguments/range_limits.hpp"
 
 #include <algorithm>
 #include <cmath>

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -36,7 +37,7 @@ std::string formWord(ProductionForm form)
 
 ProductionForm readFormArgument(const Cell& cell)
 {
-    return readChoice<ProductionForm>(cell, "form", "a form",
+    return readChoice<ProductionForm>(cell, argument::form, "a form",
                                       {{"cobb-douglas", ProductionForm::cobbDouglas},
                                        {"ces", ProductionForm::ces},
                                        {"translog", ProductionForm::translog}},
@@ -55,7 +56,7 @@ bool readSwitchArgument(const Cell& cell, const std::string& argument)
 
 CovarianceKind readErrorsArgument(const Cell& cell)
 {
-    return readChoice<CovarianceKind>(cell, "errors", "a kind of standard error",
+    return readChoice<CovarianceKind>(cell, argument::errors, "a kind of standard error",
                                       {{"classical", CovarianceKind::classical},
                                        {"hc1", CovarianceKind::hc1},
                                        {"hc3", CovarianceKind::hc3},

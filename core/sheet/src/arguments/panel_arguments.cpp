@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/panel_arguments.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 
 #include "isoquant/math/messages/input_error.hpp"
@@ -21,21 +22,22 @@ std::string rowsOfData(std::size_t count) { return std::to_string(count) + (coun
 std::size_t groupsHeaderRows(const CellTable& groups, std::size_t dataRows)
 {
     if (groups.columns() != 1)
-        throw InputError("groups: must be one column; it has " + std::to_string(groups.columns()));
+        throw argumentError(argument::groups, "must be one column; it has " + std::to_string(groups.columns()));
     if (groups.rows() == dataRows) return 0;
     if (groups.rows() == dataRows + 1) return 1;
-    throw InputError("groups: has " + std::to_string(groups.rows()) + " rows but output has " + rowsOfData(dataRows) +
-                     "; give one identifier per row (a header row may come first)");
+    throw argumentError(argument::groups, "has " + std::to_string(groups.rows()) + " rows but output has " +
+                                              rowsOfData(dataRows) +
+                                              "; give one identifier per row (a header row may come first)");
 }
 
 } // namespace
 
 EffectsKind readEffectsArgument(const Cell& cell)
 {
-    return readChoice<EffectsKind>(cell, "effects", "a kind of effects",
-                                   {{"none", EffectsKind::none}, {"fixed", EffectsKind::fixed},
-                                    {"two-way", EffectsKind::twoWay}},
-                                   EffectsKind::none);
+    return readChoice<EffectsKind>(
+        cell, argument::effects, "a kind of effects",
+        {{"none", EffectsKind::none}, {"fixed", EffectsKind::fixed}, {"two-way", EffectsKind::twoWay}},
+        EffectsKind::none);
 }
 
 std::vector<bool> findIncompleteRows(const RowRanges& ranges)
@@ -56,13 +58,13 @@ std::vector<bool> findIncompleteRows(const RowRanges& ranges)
             }
     };
     auto headerRows = [](const CellTable& range) -> std::size_t { return hasHeaderRow(range) ? 1 : 0; };
-    mark(ranges.output, "output", headerRows(ranges.output), true);
-    mark(ranges.inputs, "inputs", headerRows(ranges.inputs), true);
-    if (!ranges.controls.empty()) mark(ranges.controls, "controls", headerRows(ranges.controls), true);
-    if (!ranges.trend.empty()) mark(ranges.trend, "trend", headerRows(ranges.trend), true);
-    if (!ranges.groups.empty()) mark(ranges.groups, "groups", groupsHeaderRows(ranges.groups, dataRows), false);
+    mark(ranges.output, argument::output, headerRows(ranges.output), true);
+    mark(ranges.inputs, argument::inputs, headerRows(ranges.inputs), true);
+    if (!ranges.controls.empty()) mark(ranges.controls, argument::controls, headerRows(ranges.controls), true);
+    if (!ranges.trend.empty()) mark(ranges.trend, argument::trend, headerRows(ranges.trend), true);
+    if (!ranges.groups.empty()) mark(ranges.groups, argument::groups, groupsHeaderRows(ranges.groups, dataRows), false);
     if (std::all_of(incomplete.begin(), incomplete.end(), [](bool flag) { return flag; }))
-        throw InputError("incomplete rows: every row has a blank or text cell; no row is left to fit");
+        throw argumentError(argument::incompleteRows, "every row has a blank or text cell; no row is left to fit");
     return incomplete;
 }
 

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/arguments/period_range.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -103,18 +104,19 @@ std::vector<Cell> readPeriodNames(const CellTable& periods, const NumericColumns
 {
     const auto dataRows = static_cast<std::size_t>(rows.values.rows());
     if (periods.columns() != 1)
-        throw InputError("periods: must be one column; it has " + std::to_string(periods.columns()));
+        throw argumentError(argument::periods, "must be one column; it has " + std::to_string(periods.columns()));
     if (periods.rows() != dataRows && periods.rows() != dataRows + 1)
-        throw InputError("periods: has " + plural(static_cast<std::size_t>(periods.rows()), "row") + " but " +
-                         rowsArgument + " has " + plural(static_cast<std::size_t>(dataRows), "period") +
-                         "; give one year or name per period (a header row may come first)");
+        throw argumentError(argument::periods, "has " + plural(static_cast<std::size_t>(periods.rows()), "row") +
+                                                   " but " + rowsArgument + " has " +
+                                                   plural(static_cast<std::size_t>(dataRows), "period") +
+                                                   "; give one year or name per period (a header row may come first)");
     const std::size_t first = periods.rows() - dataRows;
     std::vector<Cell> names;
     for (std::size_t row = first; row < periods.rows(); ++row) {
         const Cell& cell = periods.at(row, 0);
         const bool blank = isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty());
         if (blank || (isNumber(cell) && !std::isfinite(std::get<double>(cell))))
-            throw InputError("periods: row " + std::to_string(row + 1) + " holds no year or name");
+            throw argumentError(argument::periods, "row " + std::to_string(row + 1) + " holds no year or name");
         names.push_back(cell);
     }
     return names;

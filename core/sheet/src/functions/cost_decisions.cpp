@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/cost_decisions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
@@ -8,7 +9,6 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/forms/local_shape.hpp"
 #include "isoquant/math/forms/cost_duality.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -46,7 +46,7 @@ Eigen::Index readPriceSelector(const Cell& selector, const CostModel& cost, cons
 
 PriceElasticityKind readPriceElasticityKind(const Cell& cell)
 {
-    return readChoice<PriceElasticityKind>(cell, "kind", "a kind",
+    return readChoice<PriceElasticityKind>(cell, argument::kind, "a kind",
                                            {{"demand", PriceElasticityKind::demand},
                                             {"allen", PriceElasticityKind::allen},
                                             {"morishima", PriceElasticityKind::morishima}},
@@ -63,8 +63,8 @@ CellTable rowTable(const Eigen::VectorXd& values)
 CellTable costModelLeastCost(const CellTable& model, const Cell& target, const CellTable& priceRange)
 {
     const CostModel cost = readCostModel(model);
-    const double level = readPositiveNumber(target, "target output");
-    const Eigen::VectorXd prices = readPrices(priceRange, "input prices", cost.prices.size());
+    const double level = readPositiveNumber(target, argument::targetOutput);
+    const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     const Eigen::VectorXd shares = fittedShares(cost, level, prices);
     for (Eigen::Index i = 0; i < shares.size(); ++i)
         if (!(shares(i) > 0))
@@ -76,17 +76,18 @@ CellTable costModelLeastCost(const CellTable& model, const Cell& target, const C
     for (Eigen::Index i = 0; i < shares.size(); ++i) {
         amounts(i) = std::exp(std::log(shares(i)) + logCost - std::log(prices(i)));
         if (!std::isfinite(amounts(i)) || amounts(i) == 0)
-            throw InputError("target output: the plan is not representable: the amount of " +
-                             quoted(cost.priceLabels[static_cast<std::size_t>(i)]) + " is beyond what a cell holds");
+            throw argumentError(argument::targetOutput, "the plan is not representable: the amount of " +
+                                                            quoted(cost.priceLabels[static_cast<std::size_t>(i)]) +
+                                                            " is beyond what a cell holds");
     }
     return rowTable(amounts);
 }
 
 } // namespace
 
-CellTable leastCostAnyRow(const CellTable& model, const Cell& target, const CellTable& prices)
+CellTable leastCostAnyRow(const ModelTable& model, const Cell& target, const CellTable& prices)
 {
-    if (isCostModel(model)) return costModelLeastCost(model, target, prices);
+    if (isCostModel(model.cells())) return costModelLeastCost(model.cells(), target, prices);
     return leastCostRow(model, target, prices);
 }
 
@@ -100,7 +101,7 @@ constexpr int bisections = 80; // halves a step of 0.58 in ln y to below 1e-16 r
 
 // ε of the least-cost plan for output e^logOutput; empty where there is none (no solution, or a
 // plan beyond what a cell holds at the ends of the grid).
-std::optional<double> planElasticity(const CellTable& model, double logOutput, const CellTable& prices)
+std::optional<double> planElasticity(const ModelTable& model, double logOutput, const CellTable& prices)
 {
     try {
         const CellTable figure = costCell(model, Cell(std::exp(logOutput)), prices, Cell(std::string("cost elasticity")));
@@ -111,11 +112,11 @@ std::optional<double> planElasticity(const CellTable& model, double logOutput, c
     }
 }
 
-CellTable productionEfficientScale(const CellTable& model, const CellTable& priceRange)
+CellTable productionEfficientScale(const ModelTable& model, const CellTable& priceRange)
 {
-    const ProductionModel production = cachedProductionModel(model);
+    const ProductionModel& production = model.production();
     const Eigen::VectorXd prices =
-        readPrices(priceRange, "input prices", static_cast<Eigen::Index>(production.inputLabels.size()));
+        readPrices(priceRange, argument::inputPrices, static_cast<Eigen::Index>(production.inputLabels.size()));
     if (const auto scale = production.technology->constantScaleElasticity())
         return singleCell(efficientScaleOfLogQuadratic(1.0 / *scale, 0.0).whyNone);
     const CellTable priceRow = rowTable(prices);
@@ -149,11 +150,11 @@ CellTable productionEfficientScale(const CellTable& model, const CellTable& pric
 
 } // namespace
 
-CellTable efficientScaleCell(const CellTable& model, const CellTable& priceRange)
+CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRange)
 {
-    if (!isCostModel(model)) return productionEfficientScale(model, priceRange);
-    const CostModel cost = readCostModel(model);
-    const Eigen::VectorXd prices = readPrices(priceRange, "input prices", cost.prices.size());
+    if (!isCostModel(model.cells())) return productionEfficientScale(model, priceRange);
+    const CostModel cost = readCostModel(model.cells());
+    const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     // ε(y) = a + b·ln y with a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy
     const double atUnitOutput = cost.output + cost.priceOutput.dot(prices.array().log().matrix());
     const EfficientScale scale = efficientScaleOfLogQuadratic(atUnitOutput, cost.outputSquared);
@@ -165,7 +166,7 @@ namespace {
 
 std::string undefinedElasticity() { return "elasticity undefined here: a cost share is 0, or the substitution matrix is singular"; }
 
-Cell productionPriceElasticity(const CellTable& model, const ProductionModel& production, double level,
+Cell productionPriceElasticity(const ModelTable& model, const ProductionModel& production, double level,
                                const Eigen::VectorXd& prices, Eigen::Index i, Eigen::Index j, PriceElasticityKind kind,
                                const std::string& place)
 {
@@ -185,29 +186,30 @@ Cell productionPriceElasticity(const CellTable& model, const ProductionModel& pr
 
 } // namespace
 
-CellTable priceElasticityColumn(const CellTable& model, const CellTable& outputRange, const CellTable& priceRange,
+CellTable priceElasticityColumn(const ModelTable& model, const CellTable& outputRange, const CellTable& priceRange,
                                 const Cell& first, const Cell& second, const Cell& kind)
 {
-    const bool costModel = isCostModel(model);
-    const CostModel cost = costModel ? readCostModel(model) : CostModel{};
-    const ProductionModel production = costModel ? ProductionModel{} : cachedProductionModel(model);
+    const bool costModel = isCostModel(model.cells());
+    const CostModel cost = costModel ? readCostModel(model.cells()) : CostModel{};
+    const ProductionModel production = costModel ? ProductionModel{} : model.production();
     Eigen::Index i = 0, j = 0;
     if (costModel) {
-        i = readPriceSelector(first, cost, "input i");
-        j = readPriceSelector(second, cost, "input j");
+        i = readPriceSelector(first, cost, argument::firstInput);
+        j = readPriceSelector(second, cost, argument::secondInput);
     } else {
-        i = readInputSelector(first, production, "input i");
-        j = readInputSelector(second, production, "input j");
+        i = readInputSelector(first, production, argument::firstInput);
+        j = readInputSelector(second, production, argument::secondInput);
     }
     const PriceElasticityKind chosen = readPriceElasticityKind(kind);
     if (chosen == PriceElasticityKind::morishima && i == j)
-        throw InputError("input j: is the same input as input i; the Morishima elasticity needs two different inputs");
-    const NumericColumns outputs = readNumericColumns(outputRange, "output", ValueRule::positive, "output");
+        throw argumentError(argument::secondInput,
+                            "is the same input as input i; the Morishima elasticity needs two different inputs");
+    const NumericColumns outputs = readNumericColumns(outputRange, argument::output, ValueRule::positive, "output");
     if (outputs.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(outputs.values.cols()));
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(outputs.values.cols()));
     const Eigen::Index n = outputs.values.rows();
     const auto k = costModel ? cost.prices.size() : static_cast<Eigen::Index>(production.inputLabels.size());
-    const Eigen::MatrixXd priceRows = readPriceRows(priceRange, n, k, "output");
+    const Eigen::MatrixXd priceRows = readPriceRows(priceRange, n, k, argument::output);
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         const std::string place = "output: row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow());
@@ -225,16 +227,17 @@ CellTable priceElasticityColumn(const CellTable& model, const CellTable& outputR
     return column;
 }
 
-CellTable regularityAnyColumn(const CellTable& model, const CellTable& rows)
+CellTable regularityAnyColumn(const ModelTable& model, const CellTable& rows)
 {
-    if (!isCostModel(model)) return regularityColumn(model, rows);
-    const CostModel cost = readCostModel(model);
-    const NumericColumns values = readNumericColumns(rows, "inputs", ValueRule::positive, "column");
+    if (!isCostModel(model.cells())) return regularityColumn(model, rows);
+    const CostModel cost = readCostModel(model.cells());
+    const NumericColumns values = readNumericColumns(rows, argument::inputs, ValueRule::positive, "column");
     const Eigen::Index k = cost.prices.size();
     if (values.values.cols() != k + 1)
-        throw InputError("inputs: has " + std::to_string(values.values.cols()) +
-                         " columns; with a cost model give the output and then one price per input (" +
-                         std::to_string(k + 1) + " columns)");
+        throw argumentError(argument::inputs,
+                            "has " + std::to_string(values.values.cols()) +
+                                " columns; with a cost model give the output and then one price per input (" +
+                                std::to_string(k + 1) + " columns)");
     CellTable column(static_cast<std::size_t>(values.values.rows()), 1);
     for (Eigen::Index row = 0; row < values.values.rows(); ++row) {
         const double level = values.values(row, 0);

@@ -1,10 +1,10 @@
 #include "isoquant/sheet/functions/cost_functions.hpp"
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -42,7 +42,7 @@ NumericColumns readOneColumn(const CellTable& range, const std::string& name,
 
 CostForm readCostForm(const Cell& cell)
 {
-    return readChoice<CostForm>(cell, "form", "a cost form",
+    return readChoice<CostForm>(cell, argument::form, "a cost form",
                                 {{"cobb-douglas", CostForm::cobbDouglas}, {"translog", CostForm::translog}},
                                 CostForm::cobbDouglas);
 }
@@ -65,8 +65,10 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
         const std::string& label = labels[column];
         if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
             equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
-            throw InputError("input prices: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
-                             "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
+            throw argumentError(
+                argument::inputPrices,
+                "column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+                    "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
     }
 }
 
@@ -75,24 +77,28 @@ void refuseReservedLabels(const std::vector<std::string>& labels)
 Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cost, Eigen::Index prices,
                                const std::vector<bool>* skippedRows)
 {
-    const NumericColumns shares = readNumericColumns(range, "shares", ValueRule::finite, "share", skippedRows);
+    const NumericColumns shares = readNumericColumns(range, argument::shares, ValueRule::finite, "share", skippedRows);
     if (shares.values.cols() != prices)
-        throw InputError("shares: has " + std::to_string(shares.values.cols()) + " columns but input prices has " +
-                         std::to_string(prices) + "; give one share column per price, in the same order");
-    requireSameRows(cost, shares, "shares");
+        throw argumentError(argument::shares, "has " + std::to_string(shares.values.cols()) +
+                                                  " columns but input prices has " + std::to_string(prices) +
+                                                  "; give one share column per price, in the same order");
+    requireSameRows(cost, shares, argument::shares);
     Eigen::MatrixXd rescaled = shares.values;
     for (Eigen::Index row = 0; row < rescaled.rows(); ++row)
         for (Eigen::Index column = 0; column < prices; ++column)
             if (rescaled(row, column) < 0)
-                throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
-                                 ", column " + std::to_string(column + 1) + " is " + formatNumber(rescaled(row, column)) +
-                                 "; a cost share cannot be negative");
+                throw argumentError(argument::shares,
+                                    "row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                                        ", column " + std::to_string(column + 1) + " is " +
+                                        formatNumber(rescaled(row, column)) + "; a cost share cannot be negative");
     for (Eigen::Index row = 0; row < rescaled.rows(); ++row) {
         const double sum = rescaled.row(row).sum();
         if (!(std::fabs(sum - 1) <= shareSumTolerance * (1 + 1e-6)))
-            throw InputError("shares: row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
-                             ": the shares sum to " + formatNumber(sum) +
-                             "; each row's cost shares must sum to 1 within 0.01 (0.99 to 1.01; fractions, not percent)");
+            throw argumentError(
+                argument::shares,
+                "row " + std::to_string(static_cast<std::size_t>(row) + shares.firstDataRow()) +
+                    ": the shares sum to " + formatNumber(sum) +
+                    "; each row's cost shares must sum to 1 within 0.01 (0.99 to 1.01; fractions, not percent)");
         rescaled.row(row) /= sum;
     }
     return rescaled;
@@ -106,23 +112,24 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     options.form = readCostForm(arguments.form);
     options.covariance = readErrorsArgument(arguments.errors);
     if (options.covariance == CovarianceKind::cluster)
-        throw InputError("errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
-    options.confidenceLevel = readLevelArgument(arguments.level, "level");
+        throw argumentError(argument::errors,
+                            "\"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
+    options.confidenceLevel = readLevelArgument(arguments.level, argument::level);
     refuseLaterArguments(arguments);
     // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
-    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, argument::incompleteRows);
     std::vector<bool> incomplete;
     if (dropIncomplete && !arguments.cost.empty())
         incomplete = findIncompleteRowsIn({{&arguments.cost, "cost"}, {&arguments.output, "output"},
                                            {&arguments.prices, "input prices"}, {&arguments.shares, "shares"}});
     const std::vector<bool>* skipped = dropIncomplete ? &incomplete : nullptr;
 
-    const NumericColumns cost = readOneColumn(arguments.cost, "cost", skipped);
-    const NumericColumns output = readOneColumn(arguments.output, "output", skipped);
-    requireSameRows(cost, output, "output");
+    const NumericColumns cost = readOneColumn(arguments.cost, argument::cost, skipped);
+    const NumericColumns output = readOneColumn(arguments.output, argument::output, skipped);
+    requireSameRows(cost, output, argument::output);
     const NumericColumns prices =
-        readNumericColumns(arguments.prices, "input prices", ValueRule::positive, "input", skipped);
-    requireSameRows(cost, prices, "input prices");
+        readNumericColumns(arguments.prices, argument::inputPrices, ValueRule::positive, "input", skipped);
+    requireSameRows(cost, prices, argument::inputPrices);
     refuseReservedLabels(prices.labels);
 
     CostData data;
@@ -132,8 +139,9 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
     data.priceLabels = prices.labels;
     if (!arguments.shares.empty()) {
         if (options.covariance != CovarianceKind::classical)
-            throw InputError("errors: with shares the system is fitted by iterated GLS, whose errors are classical; "
-                             "leave errors empty or fit without shares");
+            throw argumentError(argument::errors,
+                                "with shares the system is fitted by iterated GLS, whose errors are classical; "
+                                "leave errors empty or fit without shares");
         data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
     }
     try {
@@ -147,8 +155,9 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
         return fit;
     } catch (const UnitLeverage& leverage) { // HC3's e²/(1 − h)² is 0/0 at that row
         const std::size_t row = dataRowOfKept(static_cast<std::size_t>(leverage.row()), incomplete);
-        throw InputError("errors: row " + std::to_string(row + cost.firstDataRow()) +
-                         " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
+        throw argumentError(argument::errors,
+                            "row " + std::to_string(row + cost.firstDataRow()) +
+                                " has leverage 1 (the fit passes through it exactly); hc3 is undefined here — use hc1");
     }
 }
 
@@ -171,14 +180,16 @@ double costFigure(const CostModel& model, double level, const Eigen::VectorXd& p
 Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eigen::Index inputs,
                               const std::string& outputArgument)
 {
-    if (outputs == 1) return readPrices(range, "input prices", inputs).transpose();
-    const NumericColumns prices = readNumericColumns(range, "input prices", ValueRule::positive, "price");
+    if (outputs == 1) return readPrices(range, argument::inputPrices, inputs).transpose();
+    const NumericColumns prices = readNumericColumns(range, argument::inputPrices, ValueRule::positive, "price");
     if (prices.values.cols() != inputs)
-        throw InputError("input prices: has " + std::to_string(prices.values.cols()) + " columns, but the model has " +
-                         std::to_string(inputs) + " prices; give one column per input");
+        throw argumentError(argument::inputPrices, "has " + std::to_string(prices.values.cols()) +
+                                                       " columns, but the model has " + std::to_string(inputs) +
+                                                       " prices; give one column per input");
     if (prices.values.rows() != 1 && prices.values.rows() != outputs)
-        throw InputError("input prices: has " + rowsText(prices.values.rows()) + " of data but " + outputArgument + " has " +
-                         rowsText(outputs) + "; give one row of prices per output, or one row for all");
+        throw argumentError(argument::inputPrices, "has " + rowsText(prices.values.rows()) + " of data but " +
+                                                       outputArgument + " has " + rowsText(outputs) +
+                                                       "; give one row of prices per output, or one row for all");
     return prices.values;
 }
 
@@ -186,16 +197,17 @@ CellTable costModelColumn(const CellTable& model, const CellTable& target, const
 {
     const CostModel cost = readCostModel(model);
     const CostMeasure measure = readCostMeasure(what);
-    const NumericColumns outputs = readOneColumn(target, "target output");
+    const NumericColumns outputs = readOneColumn(target, argument::targetOutput);
     const Eigen::Index n = outputs.values.rows();
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size(), "target output");
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, cost.prices.size(), argument::targetOutput);
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
         const double figure = costFigure(cost, outputs.values(row, 0), rowPrices, measure);
         if (!std::isfinite(figure))
-            throw InputError("target output: row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
-                             " gives a result that cannot be represented");
+            throw argumentError(argument::targetOutput,
+                                "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
+                                    " gives a result that cannot be represented");
         column.set(static_cast<std::size_t>(row), 0, figure);
     }
     return column;
@@ -206,12 +218,12 @@ namespace {
 
 // PRODCOST over a production model, one least-cost plan per output (costCell); a row without an
 // answer shows its sentence, a message names its row.
-CellTable productionCostColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+CellTable productionCostColumn(const ModelTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
-    const NumericColumns outputs = readOneColumn(target, "target output");
+    const NumericColumns outputs = readOneColumn(target, argument::targetOutput);
     const Eigen::Index n = outputs.values.rows();
-    const auto inputs = static_cast<Eigen::Index>(cachedProductionModel(model).inputLabels.size());
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, "target output");
+    const auto inputs = static_cast<Eigen::Index>(model.production().inputLabels.size());
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, argument::targetOutput);
     CellTable column(static_cast<std::size_t>(n), 1);
     for (Eigen::Index row = 0; row < n; ++row) {
         CellTable rowPrices(1, static_cast<std::size_t>(inputs));
@@ -220,7 +232,7 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
         try {
             column.set(static_cast<std::size_t>(row), 0, costCell(model, outputs.values(row, 0), rowPrices, what).at(0, 0));
         } catch (const InputError& error) {
-            const std::string argument = "target output: ", message = error.what();
+            const std::string argument = "target output: ", message = sheetMessage(error);
             if (message.compare(0, argument.size(), argument) != 0) throw;
             throw InputError(argument + "row " + std::to_string(static_cast<std::size_t>(row) + outputs.firstDataRow()) +
                              ": " + message.substr(argument.size()));
@@ -231,9 +243,9 @@ CellTable productionCostColumn(const CellTable& model, const CellTable& target, 
 
 } // namespace
 
-CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
+CellTable costColumn(const ModelTable& model, const CellTable& target, const CellTable& prices, const Cell& what)
 {
-    if (isCostModel(model)) return costModelColumn(model, target, prices, what);
+    if (isCostModel(model.cells())) return costModelColumn(model.cells(), target, prices, what);
     if (target.rows() == 1 && target.columns() == 1) return costCell(model, target.at(0, 0), prices, what);
     return productionCostColumn(model, target, prices, what);
 }

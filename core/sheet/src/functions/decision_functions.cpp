@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/decision_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/forms/ces.hpp"
 #include "isoquant/math/decisions/ces_closed_forms.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
@@ -8,7 +9,6 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/numerics/level_roots.hpp"
 #include "isoquant/math/forms/local_shape.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/math/decisions/numerical_decisions.hpp"
@@ -54,7 +54,7 @@ CellTable perBundle(const NumericColumns& bundles, Evaluate evaluate)
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     Eigen::VectorXd bundle(bundles.values.cols()); // one vector for every row: no allocation per row
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
-        const std::string place = rowPlace(bundles, row, "inputs");
+        const std::string place = rowPlace(bundles, row, argument::inputs);
         bundle = bundles.values.row(row).transpose();
         Cell result = evaluate(bundle, place);
         if (isNumber(result) && !std::isfinite(std::get<double>(result)))
@@ -91,10 +91,11 @@ std::optional<HomogeneousCost> closedFormCost(const ProductionModel& model, cons
     if (!cobbDouglas) return std::nullopt;
     for (Eigen::Index i = 0; i < cobbDouglas->exponents.size(); ++i)
         if (!(cobbDouglas->exponents(i) > 0))
-            throw InputError("model: the exponent of " + inputName(model, i) + " is " +
-                             formatNumber(cobbDouglas->exponents(i)) +
-                             "; more of that input never raises output, so no plan with a positive amount of it "
-                             "is best (every exponent must be positive)");
+            throw argumentError(argument::model,
+                                "the exponent of " + inputName(model, i) + " is " +
+                                    formatNumber(cobbDouglas->exponents(i)) +
+                                    "; more of that input never raises output, so no plan with a positive amount of it "
+                                    "is best (every exponent must be positive)");
     return cobbDouglasCost(*cobbDouglas, prices);
 }
 
@@ -171,9 +172,9 @@ struct DecisionSetup {
     Eigen::VectorXd prices;
 };
 
-DecisionSetup readDecision(const CellTable& model, const CellTable& prices, const std::string& pricesName)
+DecisionSetup readDecision(const ModelTable& model, const CellTable& prices, const std::string& pricesName)
 {
-    DecisionSetup setup{cachedProductionModel(model), {}};
+    DecisionSetup setup{model.production(), {}};
     setup.prices = readPrices(prices, pricesName, static_cast<Eigen::Index>(setup.model.inputLabels.size()));
     return setup;
 }
@@ -186,11 +187,11 @@ ProductionPlan leastCostOf(const DecisionSetup& setup, double target)
 
 } // namespace
 
-CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable secondPartialColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "input i");
-    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, "input j");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index i = readInputSelector(first, technology, argument::firstInput);
+    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, technology, argument::secondInput);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string&) {
         return Cell(technology.technology->secondPartial(bundle, i, j));
@@ -198,10 +199,10 @@ CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, c
                        bundles, secondPartialTitle(technology, i, j));
 }
 
-CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable inputReturnsColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index chosen = readInputSelector(input, technology, "input");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index chosen = readInputSelector(input, technology, argument::input);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputReturnsWord(checkedLocalShape(*technology.technology, bundle, place), chosen));
@@ -209,11 +210,11 @@ CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, co
                        bundles, "returns to " + labelOf(technology, chosen));
 }
 
-CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable inputPairColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "input i");
-    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index i = readInputSelector(first, technology, argument::firstInput);
+    const Eigen::Index j = readOtherInput(i, second, technology, argument::firstInput, argument::secondInput);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
         return Cell(inputPairWord(checkedLocalShape(*technology.technology, bundle, place), i, j));
@@ -221,11 +222,11 @@ CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const
                        bundles, labelOf(technology, i) + " with " + labelOf(technology, j));
 }
 
-CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
+CellTable technicalRateColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "input i");
-    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index i = readInputSelector(first, technology, argument::firstInput);
+    const Eigen::Index j = readOtherInput(i, second, technology, argument::firstInput, argument::secondInput);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string&) {
         // fᵢ/fⱼ = (eᵢ/xᵢ)/(eⱼ/xⱼ), from the elasticities so that Y cancels before it can overflow.
@@ -238,12 +239,12 @@ CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, c
                        bundles, "MRTS of " + labelOf(technology, i) + " for " + labelOf(technology, j));
 }
 
-CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
+CellTable substitutionColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
                              const Cell& kind)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index i = readInputSelector(first, technology, "input i");
-    const Eigen::Index j = readOtherInput(i, second, technology, "input i", "input j");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index i = readInputSelector(first, technology, argument::firstInput);
+    const Eigen::Index j = readOtherInput(i, second, technology, argument::firstInput, argument::secondInput);
     const SubstitutionKind chosen = readSubstitutionKind(kind);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(perBundle(bundles, [&](const Eigen::VectorXd& bundle, const std::string& place) {
@@ -257,52 +258,52 @@ CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, co
                        bundles, "elasticity of substitution, " + labelOf(technology, i) + " and " + labelOf(technology, j));
 }
 
-CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTable& prices)
+CellTable leastCostRow(const ModelTable& model, const Cell& target, const CellTable& prices)
 {
-    const DecisionSetup setup = readDecision(model, prices, "input prices");
-    const double level = readPositiveNumber(target, "target output");
+    const DecisionSetup setup = readDecision(model, prices, argument::inputPrices);
+    const double level = readPositiveNumber(target, argument::targetOutput);
     return decided([&] { return leastCostOf(setup, level); },
                    [&](const ProductionPlan& plan) {
-                       requireRepresentable(plan, setup.model, "target output");
+                       requireRepresentable(plan, setup.model, argument::targetOutput);
                        return rowOf(plan.inputs);
                    });
 }
 
-CellTable costCell(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what)
+CellTable costCell(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what)
 {
-    const DecisionSetup setup = readDecision(model, prices, "input prices");
-    const double level = readPositiveNumber(target, "target output");
+    const DecisionSetup setup = readDecision(model, prices, argument::inputPrices);
+    const double level = readPositiveNumber(target, argument::targetOutput);
     const CostMeasure measure = readCostMeasure(what);
     return decided([&] { return leastCostOf(setup, level); },
                    [&](const ProductionPlan& plan) {
-                       requireRepresentable(plan, setup.model, "target output");
+                       requireRepresentable(plan, setup.model, argument::targetOutput);
                        const auto [figure, what] = costFigure(plan, measure, level);
-                       requireInRange(figure, what, "target output");
+                       requireInRange(figure, what, argument::targetOutput);
                        return singleCell(figure);
                    });
 }
 
-CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable& prices)
+CellTable budgetRow(const ModelTable& model, const Cell& budget, const CellTable& prices)
 {
-    const DecisionSetup setup = readDecision(model, prices, "input prices");
-    const double spending = readPositiveNumber(budget, "budget");
+    const DecisionSetup setup = readDecision(model, prices, argument::inputPrices);
+    const double spending = readPositiveNumber(budget, argument::budget);
     return decided(
         [&] {
             if (const auto cost = closedFormCost(setup.model, setup.prices)) return budgetPlan(*cost, spending);
             return solveBudget(*setup.model.technology, spending, setup.prices);
         },
         [&](const ProductionPlan& plan) {
-            requireRepresentable(plan, setup.model, "budget");
+            requireRepresentable(plan, setup.model, argument::budget);
             Eigen::VectorXd row(plan.inputs.size() + 1);
             row << plan.inputs, plan.output;
             return rowOf(row);
         });
 }
 
-CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellTable& inputPrices)
+CellTable profitRow(const ModelTable& model, const Cell& outputPrice, const CellTable& inputPrices)
 {
-    const DecisionSetup setup = readDecision(model, inputPrices, "input prices");
-    const double price = readPositiveNumber(outputPrice, "output price");
+    const DecisionSetup setup = readDecision(model, inputPrices, argument::inputPrices);
+    const double price = readPositiveNumber(outputPrice, argument::outputPrice);
     return decided(
         [&] {
             if (const auto cost = closedFormCost(setup.model, setup.prices)) return profitPlan(*cost, price);
@@ -310,25 +311,27 @@ CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellT
         },
         [&](const ProductionPlan& plan) {
             refuseNegligibleSize(plan);
-            requireRepresentable(plan, setup.model, "output price");
+            requireRepresentable(plan, setup.model, argument::outputPrice);
             const double profit = price * plan.output - plan.cost;
-            if (!std::isfinite(profit)) throw InputError("output price: the answer is too large to represent");
+            if (!std::isfinite(profit))
+                throw argumentError(argument::outputPrice, "the answer is too large to represent");
             Eigen::VectorXd row(plan.inputs.size() + 2);
             row << plan.inputs, plan.output, profit;
             return rowOf(row);
         });
 }
 
-CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTable& values, const Cell& first,
+CellTable isoquantColumn(const ModelTable& model, const Cell& level, const CellTable& values, const Cell& first,
                          const Cell& second)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const auto k = static_cast<Eigen::Index>(technology.inputLabels.size());
-    if (k < 2) throw InputError("model: an isoquant needs a model of at least two inputs");
-    const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, "input i");
-    const Eigen::Index j =
-        isOmitted(second) ? (i == 0 ? 1 : 0) : readOtherInput(i, second, technology, "input i", "input j");
-    const double logLevel = std::log(readPositiveNumber(level, "output level"));
+    if (k < 2) throw argumentError(argument::model, "an isoquant needs a model of at least two inputs");
+    const Eigen::Index i = isOmitted(first) ? 0 : readInputSelector(first, technology, argument::firstInput);
+    const Eigen::Index j = isOmitted(second)
+                               ? (i == 0 ? 1 : 0)
+                               : readOtherInput(i, second, technology, argument::firstInput, argument::secondInput);
+    const double logLevel = std::log(readPositiveNumber(level, argument::outputLevel));
 
     const std::string argument = "values of input i";
     Eigen::MatrixXd bundles;

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
@@ -18,7 +19,7 @@ enum class EfficiencyMeasure { efficiency, inefficiency, lowerBound, upperBound 
 
 EfficiencyMeasure readWhatArgument(const Cell& cell)
 {
-    return readChoice<EfficiencyMeasure>(cell, "what", "a measure",
+    return readChoice<EfficiencyMeasure>(cell, argument::what, "a measure",
                                          {{"efficiency", EfficiencyMeasure::efficiency},
                                           {"inefficiency", EfficiencyMeasure::inefficiency},
                                           {"lower bound", EfficiencyMeasure::lowerBound},
@@ -46,8 +47,9 @@ Eigen::MatrixXd modelColumns(const NumericColumns& read, const FrontierModel& mo
     const bool named = model.inputLabels.front() != "input 1";
     if (!read.hasHeader || !named) {
         if (read.values.cols() != static_cast<Eigen::Index>(wanted.size()))
-            throw InputError("inputs: has " + std::to_string(read.values.cols()) + " columns but the model has " +
-                             std::to_string(wanted.size()) + " (its inputs, then its controls)");
+            throw argumentError(argument::inputs, "has " + std::to_string(read.values.cols()) +
+                                                      " columns but the model has " + std::to_string(wanted.size()) +
+                                                      " (its inputs, then its controls)");
         return read.values;
     }
     Eigen::MatrixXd ordered(read.values.rows(), static_cast<Eigen::Index>(wanted.size()));
@@ -55,7 +57,8 @@ Eigen::MatrixXd modelColumns(const NumericColumns& read, const FrontierModel& mo
         Eigen::Index found = -1;
         for (std::size_t column = 0; column < read.labels.size(); ++column)
             if (equalsIgnoringCase(read.labels[column], wanted[i])) found = static_cast<Eigen::Index>(column);
-        if (found < 0) throw InputError("inputs: no column is headed " + quoted(wanted[i]) + ", a term of the model");
+        if (found < 0)
+            throw argumentError(argument::inputs, "no column is headed " + quoted(wanted[i]) + ", a term of the model");
         ordered.col(static_cast<Eigen::Index>(i)) = read.values.col(found);
     }
     return ordered;
@@ -66,9 +69,10 @@ void requirePositiveInputs(const Eigen::MatrixXd& values, Eigen::Index inputs, s
     for (Eigen::Index column = 0; column < inputs; ++column)
         for (Eigen::Index row = 0; row < values.rows(); ++row)
             if (!(values(row, column) > 0))
-                throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + firstDataRow) +
-                                 ", input " + std::to_string(column + 1) + " is " + formatNumber(values(row, column)) +
-                                 "; logs need positive values");
+                throw argumentError(argument::inputs,
+                                    "row " + std::to_string(static_cast<std::size_t>(row) + firstDataRow) + ", input " +
+                                        std::to_string(column + 1) + " is " + formatNumber(values(row, column)) +
+                                        "; logs need positive values");
 }
 
 double measureOf(EfficiencyMeasure measure, const TruncatedNormal& conditional, double level)
@@ -88,13 +92,14 @@ CellTable efficiencyColumn(const CellTable& model, const CellTable& output, cons
 {
     const FrontierModel frontier = readFrontierModel(model);
     const EfficiencyMeasure measure = readWhatArgument(what);
-    const NumericColumns produced = readNumericColumns(output, "output", ValueRule::positive, "output");
+    const NumericColumns produced = readNumericColumns(output, argument::output, ValueRule::positive, "output");
     if (produced.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(produced.values.cols()));
-    const NumericColumns read = readNumericColumns(inputs, "inputs", ValueRule::finite, "input");
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(produced.values.cols()));
+    const NumericColumns read = readNumericColumns(inputs, argument::inputs, ValueRule::finite, "input");
     if (read.values.rows() != produced.values.rows())
-        throw InputError("inputs: has " + std::to_string(read.values.rows()) + " rows of data but output has " +
-                         std::to_string(produced.values.rows()));
+        throw argumentError(argument::inputs, "has " + std::to_string(read.values.rows()) +
+                                                  " rows of data but output has " +
+                                                  std::to_string(produced.values.rows()));
     const Eigen::MatrixXd columns = modelColumns(read, frontier);
     const auto k = static_cast<Eigen::Index>(frontier.inputLabels.size());
     requirePositiveInputs(columns, k, read.firstDataRow());

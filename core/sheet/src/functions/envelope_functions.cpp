@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/envelope_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -67,9 +68,12 @@ CellTable envelopeColumn(const CellTable& outputs, const CellTable& inputs, cons
     const std::vector<std::string> plantNames = readPlantNames(names, data.outputs);
     const Eigen::Index plants = data.outputs.values.rows();
     if (static_cast<std::size_t>(plants) > maximumEnvelopePlants)
-        throw InputError("outputs: has " + groupedCount(static_cast<std::size_t>(plants)) +
-                         " rows of data; an envelope solves a linear program over all rows for every row, so one "
-                         "call compares at most " + groupedCount(maximumEnvelopePlants) + " rows");
+        throw argumentError(
+            argument::outputs,
+            "has " + groupedCount(static_cast<std::size_t>(plants)) +
+                " rows of data; an envelope solves a linear program over all rows for every row, so one "
+                "call compares at most " +
+                groupedCount(maximumEnvelopePlants) + " rows");
 
     const bool scale = request.measure == EnvelopeMeasure::scaleEfficiency;
     const bool secondStage = request.measure != EnvelopeMeasure::score && !scale;

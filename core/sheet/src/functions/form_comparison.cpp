@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/form_comparison.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/messages/input_error.hpp"
@@ -57,7 +58,7 @@ std::string cesUnusable(const ProductionFit& ces)
 
 CellTable compareForms(const FitArguments& arguments)
 {
-    const double level = readLevelArgument(arguments.level, "level");
+    const double level = readLevelArgument(arguments.level, argument::level);
     // Read once; each form is fitted to the same data (the Cobb-Douglas first: its errors are the call's).
     FitInput input = readFitInput(arguments);
     std::array<Candidate, 3> candidates;
@@ -67,7 +68,7 @@ CellTable compareForms(const FitArguments& arguments)
             candidates[f].fit = fitProduction(input.data, input.options);
         } catch (const InputError& error) {
             if (forms[f] == ProductionForm::cobbDouglas) throw;
-            candidates[f].reason = std::string("not fitted: ") + error.what();
+            candidates[f].reason = "not fitted: " + sheetMessage(error);
         }
     }
 

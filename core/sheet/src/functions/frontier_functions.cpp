@@ -1,5 +1,6 @@
 #include "isoquant/sheet/functions/frontier_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
@@ -18,17 +19,18 @@ namespace {
 
 InefficiencyDistribution readInefficiencyArgument(const Cell& cell)
 {
-    return readChoice<InefficiencyDistribution>(cell, "inefficiency", "a distribution",
-                                                {{"half-normal", InefficiencyDistribution::halfNormal},
-                                                 {"exponential", InefficiencyDistribution::exponential}},
-                                                InefficiencyDistribution::halfNormal);
+    return readChoice<InefficiencyDistribution>(
+        cell, argument::inefficiency, "a distribution",
+        {{"half-normal", InefficiencyDistribution::halfNormal}, {"exponential", InefficiencyDistribution::exponential}},
+        InefficiencyDistribution::halfNormal);
 }
 
 ProductionForm readFrontierForm(const Cell& cell)
 {
     const ProductionForm form = readFormArgument(cell);
     if (form == ProductionForm::ces)
-        throw InputError("form: a frontier takes \"cobb-douglas\" or \"translog\"; the ces form is not offered");
+        throw argumentError(argument::form,
+                            "a frontier takes \"cobb-douglas\" or \"translog\"; the ces form is not offered");
     return form;
 }
 
@@ -121,7 +123,7 @@ ProductionFrontier frontierFromArguments(const FrontierArguments& arguments)
     ProductionFrontier frontier;
     frontier.form = readFrontierForm(arguments.form);
     const InefficiencyDistribution distribution = readInefficiencyArgument(arguments.inefficiency);
-    frontier.confidenceLevel = readLevelArgument(arguments.level, "level");
+    frontier.confidenceLevel = readLevelArgument(arguments.level, argument::level);
 
     FitArguments leastSquares;
     leastSquares.output = arguments.output;
@@ -131,8 +133,10 @@ ProductionFrontier frontierFromArguments(const FrontierArguments& arguments)
     leastSquares.level = arguments.level;
     leastSquares = withoutTrailingEmptyRows(std::move(leastSquares));
     // Read here to count the rows before the least-squares fit, whose own minimum is lower.
-    const NumericColumns output = readNumericColumns(leastSquares.output, "output", ValueRule::positive, "output");
-    const NumericColumns inputs = readNumericColumns(leastSquares.inputs, "inputs", ValueRule::positive, "input");
+    const NumericColumns output =
+        readNumericColumns(leastSquares.output, argument::output, ValueRule::positive, "output");
+    const NumericColumns inputs =
+        readNumericColumns(leastSquares.inputs, argument::inputs, ValueRule::positive, "input");
     const Eigen::Index n = output.values.rows();
     const Eigen::Index parameters = frontierParameters(frontier.form, inputs.values.cols(),
                                                        leastSquares.controls.empty() ? 0 : leastSquares.controls.columns());
@@ -146,7 +150,7 @@ ProductionFrontier frontierFromArguments(const FrontierArguments& arguments)
     frontier.controlLabels = fit.controlLabels;
     Eigen::MatrixXd controls(n, 0);
     if (!leastSquares.controls.empty())
-        controls = readNumericColumns(leastSquares.controls, "controls", ValueRule::finite, "control").values;
+        controls = readNumericColumns(leastSquares.controls, argument::controls, ValueRule::finite, "control").values;
     const Eigen::MatrixXd design = frontierDesign(frontier.form, inputs.values, controls);
     const Eigen::VectorXd response = exactLog(output.values.col(0).array()).matrix();
     frontier.fit = fitStochasticFrontier(design, response, fit.inference.estimates, distribution);

@@ -1,11 +1,11 @@
 #include "isoquant/sheet/functions/growth_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/growth/growth_accounting.hpp"
 #include "isoquant/sheet/tables/growth_table.hpp"
 #include "isoquant/math/growth/index_numbers.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/period_range.hpp"
@@ -24,7 +24,7 @@ enum class GrowthMethod { tornqvist, fixed };
 // "tornqvist" may also be written with its ö.
 GrowthMethod readGrowthMethod(const Cell& cell)
 {
-    return readChoice<GrowthMethod>(cell, "method", "a method",
+    return readChoice<GrowthMethod>(cell, argument::method, "a method",
                                     {{"tornqvist", GrowthMethod::tornqvist},
                                      {"törnqvist", GrowthMethod::tornqvist, false},
                                      {"fixed", GrowthMethod::fixed}},
@@ -33,7 +33,7 @@ GrowthMethod readGrowthMethod(const Cell& cell)
 
 IndexFormula readIndexFormula(const Cell& cell)
 {
-    return readChoice<IndexFormula>(cell, "method", "an index method",
+    return readChoice<IndexFormula>(cell, argument::method, "an index method",
                                     {{"tornqvist", IndexFormula::tornqvist},
                                      {"törnqvist", IndexFormula::tornqvist, false},
                                      {"laspeyres", IndexFormula::laspeyres},
@@ -49,7 +49,8 @@ double readIndexBase(const Cell& cell)
         const double base = std::get<double>(cell);
         if (std::isfinite(base) && base > 0) return base;
     }
-    throw InputError("base: " + describe(cell) + " is not a base value; give a positive number such as 1 or 100");
+    throw argumentError(argument::base,
+                        describe(cell) + " is not a base value; give a positive number such as 1 or 100");
 }
 
 void requireColumns(const NumericColumns& columns, const std::string& argument, std::size_t wanted,
@@ -74,12 +75,12 @@ void requireSameLabels(const std::string& argument, const std::string& ownNoun, 
 }
 
 // The model reader names its argument "model"; in PRODGROWTH the model is the argument "weights".
-ProductionModel readModelArgument(const CellTable& range, const std::string& argument)
+ProductionModel readModelArgument(const ModelTable& range, const std::string& argument)
 {
     try {
-        return cachedProductionModel(range);
+        return range.production();
     } catch (const InputError& error) {
-        const std::string message = error.what();
+        const std::string message = sheetMessage(error);
         const std::string prefix = "model:";
         if (argument != "model" && message.rfind(prefix, 0) == 0)
             throw InputError(argument + ":" + message.substr(prefix.size()));
@@ -111,10 +112,10 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
     PeriodWeights result;
     const auto k = static_cast<std::size_t>(inputs.values.cols());
     if (holdsModel(weights)) {
-        const ProductionModel model = readModelArgument(weights, "weights");
+        const ProductionModel model = readModelArgument(weights, argument::weights);
         if (model.inputLabels.size() != k)
-            throw InputError("weights: the model has " + plural(model.inputLabels.size(), "input") + " but inputs has " +
-                             plural(k, "column"));
+            throw argumentError(argument::weights, "the model has " + plural(model.inputLabels.size(), "input") +
+                                                       " but inputs has " + plural(k, "column"));
         if (inputs.hasHeader) requireSameLabels("weights", "the model's input", model.inputLabels, "inputs column", inputs.labels);
         result.values = periodElasticities(*model.technology, inputs.values);
         result.labels = model.inputLabels;
@@ -122,12 +123,12 @@ PeriodWeights readWeights(const CellTable& weights, const NumericColumns& inputs
         result.form = model.form;
         return result;
     }
-    NumericColumns shares = readPeriodColumns(weights, "weights", PeriodValueRule::nonNegative, "input");
+    NumericColumns shares = readPeriodColumns(weights, argument::weights, PeriodValueRule::nonNegative, "input");
     shares.rowNames = inputs.rowNames;
-    requireColumns(shares, "weights", k, "inputs has");
-    requireSamePeriods(inputs, "inputs", shares, "weights");
+    requireColumns(shares, argument::weights, k, "inputs has");
+    requireSamePeriods(inputs, argument::inputs, shares, argument::weights);
     if (inputs.hasHeader && shares.hasHeader) requireShareLabels("weights", shares.labels, "inputs column", inputs.labels);
-    result.values = sharesRescaledToOne(shares, "weights");
+    result.values = sharesRescaledToOne(shares, argument::weights);
     result.labels = shares.labels;
     result.labelled = shares.hasHeader;
     return result;
@@ -137,11 +138,14 @@ Eigen::MatrixXd intervalWeights(const PeriodWeights& weights, GrowthMethod metho
 {
     if (method == GrowthMethod::tornqvist) return tornqvistIntervalWeights(weights.values);
     if (!weights.fromModel)
-        throw InputError("method: \"fixed\" uses a model's constant elasticities; with cost shares as weights use "
-                         "\"tornqvist\"");
+        throw argumentError(argument::method,
+                            "\"fixed\" uses a model's constant elasticities; with cost shares as weights use "
+                            "\"tornqvist\"");
     if (weights.form != ProductionForm::cobbDouglas)
-        throw InputError("method: \"fixed\" needs elasticities that are the same in every period (a cobb-douglas "
-                         "model); this model is " + formWord(*weights.form) + ", so use \"tornqvist\"");
+        throw argumentError(argument::method,
+                            "\"fixed\" needs elasticities that are the same in every period (a cobb-douglas "
+                            "model); this model is " +
+                                formWord(*weights.form) + ", so use \"tornqvist\"");
     // A Cobb-Douglas model's elasticities are its exponents, the same in every period's row.
     return weights.values.bottomRows(weights.values.rows() - 1);
 }
@@ -152,9 +156,10 @@ void requirePositiveScale(const Eigen::MatrixXd& weights, const NumericColumns& 
     for (Eigen::Index interval = 0; interval < weights.rows(); ++interval) {
         const double scale = weights.row(interval).sum();
         if (!(scale > 0) || !std::isfinite(scale))
-            throw InputError("weights: from " + periodPlace(inputs, interval) + " to " +
-                             periodPlace(inputs, interval + 1) + " the elasticities sum to " + formatNumber(scale) +
-                             "; the decomposition divides by this returns to scale, so it must be positive");
+            throw argumentError(argument::weights,
+                                "from " + periodPlace(inputs, interval) + " to " + periodPlace(inputs, interval + 1) +
+                                    " the elasticities sum to " + formatNumber(scale) +
+                                    "; the decomposition divides by this returns to scale, so it must be positive");
     }
 }
 
@@ -164,11 +169,11 @@ void requireFinite(const GrowthAccount& account, const NumericColumns& inputs)
         const GrowthComponents& period = account.periods[interval];
         if (!std::isfinite(period.output) || !period.inputs.allFinite() || !std::isfinite(period.scaleEffect) ||
             !std::isfinite(period.productivity))
-            throw InputError("weights: " + periodPlace(inputs, static_cast<Eigen::Index>(interval) + 1) +
-                             " gives a result too large to represent");
+            throw argumentError(argument::weights, periodPlace(inputs, static_cast<Eigen::Index>(interval) + 1) +
+                                                       " gives a result too large to represent");
     }
     if (!std::isfinite(account.total.productivity) || !account.total.inputs.allFinite())
-        throw InputError("weights: the total over all periods is too large to represent");
+        throw argumentError(argument::weights, "the total over all periods is too large to represent");
 }
 
 // PRODTFP's periods: λ·(tᵢ − t_last) for every row, moving the model's ln A (that of the latest
@@ -176,36 +181,41 @@ void requireFinite(const GrowthAccount& account, const NumericColumns& inputs)
 Eigen::VectorXd periodShifts(const ProductionModel& model, const CellTable& periods, Eigen::Index rows)
 {
     if (model.hasPeriodEffects)
-        throw InputError("periods: the model has period effects (\"two-way\"), which its table does not hold; "
-                         "fit a trend instead, or leave periods out");
+        throw argumentError(argument::periods,
+                            "the model has period effects (\"two-way\"), which its table does not hold; "
+                            "fit a trend instead, or leave periods out");
     if (!model.technicalChange)
-        throw InputError("periods: the model has no trend (no \"technical change per period\" row), so every row "
-                         "has the same technology; leave periods out");
+        throw argumentError(argument::periods,
+                            "the model has no trend (no \"technical change per period\" row), so every row "
+                            "has the same technology; leave periods out");
     if (!model.latestPeriod)
-        throw InputError("periods: the model has no \"latest period\" row, the period its ln A refers to; refit it "
-                         "with PRODFIT, or add the row after an empty row");
-    const NumericColumns read = readNumericColumns(periods, "periods", ValueRule::finite, "period");
+        throw argumentError(argument::periods,
+                            "the model has no \"latest period\" row, the period its ln A refers to; refit it "
+                            "with PRODFIT, or add the row after an empty row");
+    const NumericColumns read = readNumericColumns(periods, argument::periods, ValueRule::finite, "period");
     if (read.values.cols() != 1)
-        throw InputError("periods: must be one column; it has " + std::to_string(read.values.cols()));
+        throw argumentError(argument::periods, "must be one column; it has " + std::to_string(read.values.cols()));
     if (read.values.rows() != rows)
-        throw InputError("periods: has " + plural(static_cast<std::size_t>(read.values.rows()), "row") +
-                         " of data but output has " + plural(static_cast<std::size_t>(rows), "row"));
+        throw argumentError(argument::periods, "has " + plural(static_cast<std::size_t>(read.values.rows()), "row") +
+                                                   " of data but output has " +
+                                                   plural(static_cast<std::size_t>(rows), "row"));
     return *model.technicalChange * (read.values.col(0).array() - *model.latestPeriod);
 }
 
 } // namespace
 
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+CellTable productivityColumn(const ModelTable& model, const CellTable& output, const CellTable& inputs,
                              const CellTable& periods)
 {
-    const ProductionModel technology = readModelArgument(model, "model");
-    const NumericColumns observed = readNumericColumns(output, "output", ValueRule::positive, "output");
+    const ProductionModel technology = readModelArgument(model, argument::model);
+    const NumericColumns observed = readNumericColumns(output, argument::output, ValueRule::positive, "output");
     if (observed.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(observed.values.cols()));
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(observed.values.cols()));
     const NumericColumns bundles = readModelInputs(inputs, technology);
     if (bundles.values.rows() != observed.values.rows())
-        throw InputError("inputs: has " + plural(static_cast<std::size_t>(bundles.values.rows()), "row") +
-                         " of data but output has " + plural(static_cast<std::size_t>(observed.values.rows()), "row"));
+        throw argumentError(argument::inputs, "has " + plural(static_cast<std::size_t>(bundles.values.rows()), "row") +
+                                                  " of data but output has " +
+                                                  plural(static_cast<std::size_t>(observed.values.rows()), "row"));
 
     const Eigen::VectorXd shifts =
         periods.empty() ? Eigen::VectorXd() : periodShifts(technology, periods, observed.values.rows());
@@ -214,8 +224,9 @@ CellTable productivityColumn(const CellTable& model, const CellTable& output, co
     CellTable column(static_cast<std::size_t>(levels.size()), 1);
     for (Eigen::Index row = 0; row < levels.size(); ++row) {
         if (!std::isfinite(levels(row)) || levels(row) == 0)
-            throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
-                             " gives a productivity too large or too small to represent");
+            throw argumentError(argument::inputs,
+                                "row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
+                                    " gives a productivity too large or too small to represent");
         column.set(static_cast<std::size_t>(row), 0, levels(row));
     }
     return underHeader(std::move(column), observed, "TFP");
@@ -225,14 +236,14 @@ CellTable growthAccountTable(const CellTable& output, const CellTable& inputs, c
                              const Cell& method, const CellTable& periods)
 {
     const GrowthMethod chosen = readGrowthMethod(method);
-    const NumericColumns observed = readPeriodColumns(output, "output", PeriodValueRule::positive, "output");
+    const NumericColumns observed = readPeriodColumns(output, argument::output, PeriodValueRule::positive, "output");
     if (observed.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(observed.values.cols()));
-    if (observed.values.rows() < 2)
-        throw InputError("output: growth needs at least 2 periods; it has 1");
-    NumericColumns quantities = readPeriodColumns(inputs, "inputs", PeriodValueRule::positive, "input");
-    requireSamePeriods(observed, "output", quantities, "inputs");
-    const std::vector<Cell> names = periods.empty() ? std::vector<Cell>{} : readPeriodNames(periods, observed, "output");
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(observed.values.cols()));
+    if (observed.values.rows() < 2) throw argumentError(argument::output, "growth needs at least 2 periods; it has 1");
+    NumericColumns quantities = readPeriodColumns(inputs, argument::inputs, PeriodValueRule::positive, "input");
+    requireSamePeriods(observed, argument::output, quantities, argument::inputs);
+    const std::vector<Cell> names =
+        periods.empty() ? std::vector<Cell>{} : readPeriodNames(periods, observed, argument::output);
     for (const Cell& name : names) quantities.rowNames.push_back(periodNameText(name));
 
     const PeriodWeights periodWeights = readWeights(weights, quantities);
@@ -249,17 +260,17 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
 {
     const IndexFormula formula = readIndexFormula(method);
     const double baseValue = readIndexBase(base);
-    NumericColumns amounts = readPeriodColumns(quantities, "quantities", PeriodValueRule::positive, "item");
+    NumericColumns amounts = readPeriodColumns(quantities, argument::quantities, PeriodValueRule::positive, "item");
     if (!periods.empty())
-        for (const Cell& name : readPeriodNames(periods, amounts, "quantities"))
+        for (const Cell& name : readPeriodNames(periods, amounts, argument::quantities))
             amounts.rowNames.push_back(periodNameText(name));
-    NumericColumns weights = readPeriodColumns(shares, "shares", PeriodValueRule::nonNegative, "item");
+    NumericColumns weights = readPeriodColumns(shares, argument::shares, PeriodValueRule::nonNegative, "item");
     weights.rowNames = amounts.rowNames;
-    requireColumns(weights, "shares", static_cast<std::size_t>(amounts.values.cols()), "quantities has");
-    requireSamePeriods(amounts, "quantities", weights, "shares");
+    requireColumns(weights, argument::shares, static_cast<std::size_t>(amounts.values.cols()), "quantities has");
+    requireSamePeriods(amounts, argument::quantities, weights, argument::shares);
     if (amounts.hasHeader && weights.hasHeader)
         requireShareLabels("shares", weights.labels, "quantities column", amounts.labels);
-    const Eigen::MatrixXd rescaled = sharesRescaledToOne(weights, "shares");
+    const Eigen::MatrixXd rescaled = sharesRescaledToOne(weights, argument::shares);
 
     const Eigen::VectorXd logIndex = chainedLogQuantityIndex(formula, amounts.values, rescaled);
     CellTable column(static_cast<std::size_t>(logIndex.size()), 1);
@@ -267,8 +278,8 @@ CellTable quantityIndexColumn(const CellTable& quantities, const CellTable& shar
         // base·exp(0) is the base exactly in the first period.
         const double value = baseValue * std::exp(logIndex(period));
         if (!std::isfinite(value) || value == 0)
-            throw InputError("quantities: " + periodPlace(amounts, period) +
-                             ": the index is too large or too small to represent");
+            throw argumentError(argument::quantities,
+                                periodPlace(amounts, period) + ": the index is too large or too small to represent");
         column.set(static_cast<std::size_t>(period), 0, value);
     }
     return underHeader(std::move(column), amounts, "quantity index");

@@ -1,8 +1,8 @@
 #include "isoquant/sheet/functions/production_functions.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/form_comparison.hpp"
 #include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/sheet/caches/model_cache.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/arguments/numeric_range.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
@@ -35,8 +35,9 @@ void refuseControlLabels(const NumericColumns& inputs)
     for (std::size_t column = 0; column < inputs.labels.size(); ++column) {
         const std::string& label = inputs.labels[column];
         if (endsWithIgnoringCase(label, controlSuffix))
-            throw InputError("inputs: column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
-                             "; the ending \"(control)\" marks controls in the table, so rename it");
+            throw argumentError(argument::inputs,
+                                "column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
+                                    "; the ending \"(control)\" marks controls in the table, so rename it");
     }
 }
 
@@ -50,8 +51,9 @@ CellTable columnOf(const NumericColumns& bundles, Evaluate value)
         bundle = bundles.values.row(row).transpose();
         const double result = value(bundle);
         if (!std::isfinite(result))
-            throw InputError("inputs: row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
-                             " gives a result too large to represent");
+            throw argumentError(argument::inputs,
+                                "row " + std::to_string(static_cast<std::size_t>(row) + bundles.firstDataRow()) +
+                                    " gives a result too large to represent");
         column.set(static_cast<std::size_t>(row), 0, result);
     }
     return column;
@@ -133,11 +135,11 @@ FitInput readFitInput(const FitArguments& arguments)
     FitInput input;
     ProductionFitOptions& options = input.options;
     options.form = readFormArgument(arguments.form);
-    options.constantReturns = readSwitchArgument(arguments.constantReturns, "constant returns");
+    options.constantReturns = readSwitchArgument(arguments.constantReturns, argument::constantReturns);
     options.covariance = readErrorsArgument(arguments.errors);
-    options.confidenceLevel = readLevelArgument(arguments.level, "level");
+    options.confidenceLevel = readLevelArgument(arguments.level, argument::level);
     options.effects = readEffectsArgument(arguments.effects);
-    input.dropIncomplete = readSwitchArgument(arguments.incompleteRows, "incomplete rows");
+    input.dropIncomplete = readSwitchArgument(arguments.incompleteRows, argument::incompleteRows);
 
     // Empty ranges are left to the readers below, which say so.
     std::vector<bool>& incomplete = input.incomplete;
@@ -148,11 +150,12 @@ FitInput readFitInput(const FitArguments& arguments)
     const std::vector<bool>* skipped = filtering ? &incomplete : nullptr;
 
     const NumericColumns output =
-        readNumericColumns(arguments.output, "output", ValueRule::positive, "output", skipped);
+        readNumericColumns(arguments.output, argument::output, ValueRule::positive, "output", skipped);
     if (output.values.cols() != 1)
-        throw InputError("output: must be one column; it has " + std::to_string(output.values.cols()));
-    NumericColumns inputs = readNumericColumns(arguments.inputs, "inputs", ValueRule::positive, "input", skipped);
-    requireSameRows(output, inputs, "inputs");
+        throw argumentError(argument::output, "must be one column; it has " + std::to_string(output.values.cols()));
+    NumericColumns inputs =
+        readNumericColumns(arguments.inputs, argument::inputs, ValueRule::positive, "input", skipped);
+    requireSameRows(output, inputs, argument::inputs);
     refuseControlLabels(inputs);
     refuseTotalsRow(output, inputs.values, skipped);
 
@@ -163,8 +166,8 @@ FitInput readFitInput(const FitArguments& arguments)
     data.inputLabels = inputs.labels;
     if (!arguments.controls.empty()) {
         NumericColumns controls =
-            readNumericColumns(arguments.controls, "controls", ValueRule::finite, "control", skipped);
-        requireSameRows(output, controls, "controls");
+            readNumericColumns(arguments.controls, argument::controls, ValueRule::finite, "control", skipped);
+        requireSameRows(output, controls, argument::controls);
         data.controls = std::move(controls.values);
         data.controlLabels = controls.labels;
     } else {
@@ -173,10 +176,12 @@ FitInput readFitInput(const FitArguments& arguments)
     const std::size_t dataRows = arguments.output.rows() - (output.hasHeader ? 1 : 0);
     if (!arguments.groups.empty()) readGroups(arguments.groups, dataRows, skipped, data.panel);
     if (!arguments.trend.empty()) {
-        const NumericColumns trend = readNumericColumns(arguments.trend, "trend", ValueRule::finite, "trend", skipped);
+        const NumericColumns trend =
+            readNumericColumns(arguments.trend, argument::trend, ValueRule::finite, "trend", skipped);
         if (trend.values.cols() != 1)
-            throw InputError("trend: must be one column of periods; it has " + std::to_string(trend.values.cols()));
-        requireSameRows(output, trend, "trend");
+            throw argumentError(argument::trend,
+                                "must be one column of periods; it has " + std::to_string(trend.values.cols()));
+        requireSameRows(output, trend, argument::trend);
         data.panel.periods = trend.values.col(0);
     }
 
@@ -198,15 +203,16 @@ ProductionFit fitFromArguments(const FitArguments& arguments)
     return fit;
 }
 
-CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean)
+CellTable outputColumn(const ModelTable& model, const CellTable& inputs, const Cell& mean)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     double factor = 1.0;
-    const bool meanOutput = readSwitchArgument(mean, "mean");
+    const bool meanOutput = readSwitchArgument(mean, argument::mean);
     if (meanOutput) {
         if (!technology.smearingFactor)
-            throw InputError("mean: the model has no \"smearing factor\" row; use a PRODFIT table, or add the row "
-                             "(the mean of exp(residual) of ln Y)");
+            throw argumentError(argument::mean,
+                                "the model has no \"smearing factor\" row; use a PRODFIT table, or add the row "
+                                "(the mean of exp(residual) of ln Y)");
         factor = *technology.smearingFactor;
     }
     const NumericColumns bundles = readModelInputs(inputs, technology);
@@ -221,11 +227,11 @@ namespace {
 // One column of a derivative with respect to the chosen input, per row of inputs; the header is
 // `heading` and the chosen input's label.
 template <typename Derivative>
-CellTable inputDerivativeColumn(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable inputDerivativeColumn(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                 Derivative derivative, const std::string& heading)
 {
-    const ProductionModel technology = cachedProductionModel(model);
-    const Eigen::Index chosen = readInputSelector(input, technology, "input");
+    const ProductionModel& technology = model.production();
+    const Eigen::Index chosen = readInputSelector(input, technology, argument::input);
     const NumericColumns bundles = readModelInputs(inputs, technology);
     return underHeader(columnOf(bundles, [&](const Eigen::VectorXd& bundle) {
                            return derivative(*technology.technology, bundle, chosen);
@@ -235,7 +241,7 @@ CellTable inputDerivativeColumn(const CellTable& model, const CellTable& inputs,
 
 } // namespace
 
-CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable marginalProductColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
     return inputDerivativeColumn(
         model, inputs, input,
@@ -245,7 +251,7 @@ CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs,
         "marginal product of ");
 }
 
-CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input)
+CellTable elasticityColumn(const ModelTable& model, const CellTable& inputs, const Cell& input)
 {
     return inputDerivativeColumn(
         model, inputs, input,
@@ -255,13 +261,16 @@ CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, cons
         "output elasticity of ");
 }
 
-CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
+CellTable scaleColumn(const ModelTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     if (inputs.empty()) {
         const auto scale = technology.technology->constantScaleElasticity();
-        if (!scale) throw InputError("inputs: this model's returns to scale vary with the inputs; give a row of inputs");
-        if (!std::isfinite(*scale)) throw InputError("model: its returns to scale are too large to represent");
+        if (!scale)
+            throw argumentError(argument::inputs,
+                                "this model's returns to scale vary with the inputs; give a row of inputs");
+        if (!std::isfinite(*scale))
+            throw argumentError(argument::model, "its returns to scale are too large to represent");
         return singleCell(*scale);
     }
     const NumericColumns bundles = readModelInputs(inputs, technology);
@@ -271,16 +280,16 @@ CellTable scaleColumn(const CellTable& model, const CellTable& inputs)
                        bundles, "returns to scale");
 }
 
-std::string returnsVerdictCell(const CellTable& model, const Cell& level)
+std::string returnsVerdictCell(const ModelTable& model, const Cell& level)
 {
-    const double confidence = readLevelArgument(level, "level");
-    if (const auto untested = untestedVerdict(model)) return *untested;
-    return returnsVerdict(cachedProductionModel(model), confidence);
+    const double confidence = readLevelArgument(level, argument::level);
+    if (const auto untested = untestedVerdict(model.cells())) return *untested;
+    return returnsVerdict(model.production(), confidence);
 }
 
-CellTable regularityColumn(const CellTable& model, const CellTable& inputs)
+CellTable regularityColumn(const ModelTable& model, const CellTable& inputs)
 {
-    const ProductionModel technology = cachedProductionModel(model);
+    const ProductionModel& technology = model.production();
     const NumericColumns bundles = readModelInputs(inputs, technology);
     CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
     for (Eigen::Index row = 0; row < bundles.values.rows(); ++row)

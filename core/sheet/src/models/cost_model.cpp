@@ -1,5 +1,6 @@
 #include "isoquant/sheet/models/cost_model.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/cost_fit.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "isoquant/math/messages/input_error.hpp"
@@ -111,7 +112,8 @@ CostModel readCostModel(const CellTable& model)
 {
     CostModel cost;
     const auto word = formWordOf(model);
-    if (!word) throw InputError("model: has no \"form\" row saying \"cobb-douglas cost\" or \"translog cost\"");
+    if (!word)
+        throw argumentError(argument::model, "has no \"form\" row saying \"cobb-douglas cost\" or \"translog cost\"");
     cost.translog = equalsIgnoringCase(*word, translogCostWord);
     std::optional<double> constant, output;
     std::vector<double> prices;
@@ -136,7 +138,8 @@ CostModel readCostModel(const CellTable& model)
     if (!constant || !output)
         throw InputError(std::string("model: has no \"") + (constant ? costOutputLabel : costConstantLabel) +
                          "\" row; a cost model needs \"constant\", \"output\" and one row per input price");
-    if (prices.empty()) throw InputError("model: has no price rows; give one row per input, labelled by the input");
+    if (prices.empty())
+        throw argumentError(argument::model, "has no price rows; give one row per input, labelled by the input");
     if (!cost.translog && !secondOrder.empty())
         throw InputError(rowPlace(secondOrder.front().row, secondOrder.front().label) +
                          " is a translog term, but the form is \"cobb-douglas cost\"; say \"translog cost\"");

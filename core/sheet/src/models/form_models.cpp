@@ -1,5 +1,6 @@
 #include "models/form_models.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/forms/ces.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
@@ -35,7 +36,7 @@ double readCurvature(const std::vector<ParameterRow>& parameters)
 {
     const ParameterRow* rho = findParameter(parameters, curvatureLabel);
     const ParameterRow* sigma = findParameter(parameters, substitutionLabel);
-    if (!rho && !sigma) throw InputError("model: a ces model needs a \"rho\" row (or \"sigma\")");
+    if (!rho && !sigma) throw argumentError(argument::model, "a ces model needs a \"rho\" row (or \"sigma\")");
     if (rho) {
         const double curvature = numberOf(*rho);
         if (curvature < -1) throw InputError(rowPlace(*rho) + " must be at least -1");
@@ -65,15 +66,16 @@ FormModel readCesModel(double logScale, const std::vector<ParameterRow>& paramet
     }
     const ParameterRow* delta = findParameter(parameters, weightLabel);
     const ParameterRow* nu = findParameter(parameters, returnsParameterLabel);
-    if (!delta) throw InputError("model: a ces model needs a \"delta\" row (the weight of the first input)");
-    if (!nu) throw InputError("model: a ces model needs a \"nu\" row (the returns to scale)");
+    if (!delta)
+        throw argumentError(argument::model, "a ces model needs a \"delta\" row (the weight of the first input)");
+    if (!nu) throw argumentError(argument::model, "a ces model needs a \"nu\" row (the returns to scale)");
     const double weight = numberOf(*delta);
     if (weight < 0 || weight > 1) throw InputError(rowPlace(*delta) + " must lie between 0 and 1");
 
     FormModel model;
     model.inputLabels = inputLabels.value_or(std::vector<std::string>{"input 1", "input 2"});
     if (model.inputLabels.size() != 2)
-        throw InputError("model: the inputs row of a ces model must name two inputs");
+        throw argumentError(argument::model, "the inputs row of a ces model must name two inputs");
     model.technology = std::make_shared<Ces>(logScale, weight, readCurvature(parameters), numberOf(*nu));
     return model;
 }
@@ -88,7 +90,7 @@ FormModel readTranslogModel(double logScale, const std::vector<ParameterRow>& pa
         firstOrder.push_back(numberOf(parameter));
     }
     const auto k = static_cast<Eigen::Index>(firstOrder.size());
-    if (k == 0) throw InputError("model: a translog model needs one row per input after \"ln A\"");
+    if (k == 0) throw argumentError(argument::model, "a translog model needs one row per input after \"ln A\"");
     const auto positionOf = [&](const std::string& label, const ParameterRow& parameter) {
         for (Eigen::Index i = 0; i < k; ++i)
             if (equalsIgnoringCase(label, model.inputLabels[static_cast<std::size_t>(i)])) return i;
@@ -107,8 +109,9 @@ FormModel readTranslogModel(double logScale, const std::vector<ParameterRow>& pa
     for (Eigen::Index i = 0; i < k; ++i)
         for (Eigen::Index j = i; j < k; ++j)
             if (std::isnan(interactions(i, j)))
-                throw InputError("model: a translog model needs a row \"" + model.inputLabels[static_cast<std::size_t>(i)] +
-                                 "*" + model.inputLabels[static_cast<std::size_t>(j)] + "\" (0 when absent)");
+                throw argumentError(argument::model,
+                                    "a translog model needs a row \"" + model.inputLabels[static_cast<std::size_t>(i)] +
+                                        "*" + model.inputLabels[static_cast<std::size_t>(j)] + "\" (0 when absent)");
     model.technology = std::make_shared<Translog>(
         logScale, Eigen::Map<const Eigen::VectorXd>(firstOrder.data(), k), interactions);
     return model;

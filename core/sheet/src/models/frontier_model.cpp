@@ -1,5 +1,6 @@
 #include "isoquant/sheet/models/frontier_model.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/ces_fit.hpp" // convergedText, the word every fit's convergence row uses
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/frontier/normal_tail.hpp"
@@ -36,8 +37,9 @@ InefficiencyDistribution readTitle(const CellTable& table)
         if (equalsIgnoringCase(table.text(0, 0), halfNormalFrontierTitle)) return InefficiencyDistribution::halfNormal;
         if (equalsIgnoringCase(table.text(0, 0), exponentialFrontierTitle)) return InefficiencyDistribution::exponential;
     }
-    throw InputError("model: is not a PRODFRONTIER table; its first cell reads \"half-normal frontier\" or "
-                     "\"exponential frontier\" (select the whole table)");
+    throw argumentError(argument::model,
+                        "is not a PRODFRONTIER table; its first cell reads \"half-normal frontier\" or "
+                        "\"exponential frontier\" (select the whole table)");
 }
 
 void readParameterRows(const CellTable& table, std::size_t& row, FrontierModel& model)
@@ -56,7 +58,7 @@ void readParameterRows(const CellTable& table, std::size_t& row, FrontierModel& 
         }
     }
     model.coefficients = Eigen::Map<const Eigen::VectorXd>(values.data(), static_cast<Eigen::Index>(values.size()));
-    if (model.inputLabels.empty()) throw InputError("model: has no input rows after \"ln A\"");
+    if (model.inputLabels.empty()) throw argumentError(argument::model, "has no input rows after \"ln A\"");
     if (table.columns() > 6 && table.isNumber(1, 2) && table.isNumber(1, 6) && table.number(1, 2) > 0) {
         const double critical = (table.number(1, 6) - table.number(1, 1)) / table.number(1, 2);
         if (std::isfinite(critical) && critical > 0) model.confidenceLevel = 2 * std::exp(logNormalCdf(critical)) - 1;
@@ -67,7 +69,7 @@ void readParameterRows(const CellTable& table, std::size_t& row, FrontierModel& 
 
 FrontierModel readFrontierModel(const CellTable& table)
 {
-    if (table.columns() < 2) throw InputError("model: needs the whole PRODFRONTIER table (7 columns)");
+    if (table.columns() < 2) throw argumentError(argument::model, "needs the whole PRODFRONTIER table (7 columns)");
     FrontierModel model;
     model.distribution = readTitle(table);
     std::size_t row = 1;
@@ -79,7 +81,8 @@ FrontierModel readFrontierModel(const CellTable& table)
         if (labelIs(table, row, inefficiencySdLabel)) inefficiency = numberAt(table, row, 1);
         if (labelIs(table, row, convergenceLabel) &&
             !(table.isText(row, 1) && equalsIgnoringCase(table.text(row, 1), convergedText)))
-            throw InputError("model: the frontier did not converge; its estimates are not a maximum, so they are not used");
+            throw argumentError(argument::model,
+                                "the frontier did not converge; its estimates are not a maximum, so they are not used");
         if (labelIs(table, row, formLabel)) {
             try {
                 model.form = readFormArgument(table.at(row, 1));
@@ -90,17 +93,18 @@ FrontierModel readFrontierModel(const CellTable& table)
         }
     }
     if (!noise || !inefficiency || !formRead)
-        throw InputError("model: lacks the \"noise SD\", \"inefficiency SD\" or \"form\" row of a PRODFRONTIER table");
+        throw argumentError(argument::model,
+                            "lacks the \"noise SD\", \"inefficiency SD\" or \"form\" row of a PRODFRONTIER table");
     if (!(*noise > 0) || !(*inefficiency >= 0))
-        throw InputError("model: noise SD must be positive and inefficiency SD not negative");
+        throw argumentError(argument::model, "noise SD must be positive and inefficiency SD not negative");
     model.noiseSd = *noise;
     model.inefficiencySd = *inefficiency;
     const auto k = static_cast<Eigen::Index>(model.inputLabels.size());
     const Eigen::Index expected = 1 + k + (model.form == ProductionForm::translog ? k * (k + 1) / 2 : 0) +
                                   static_cast<Eigen::Index>(model.controlLabels.size());
     if (model.coefficients.size() != expected)
-        throw InputError("model: its parameter rows do not fit the " + formWord(model.form) + " form of " +
-                         std::to_string(k) + (k == 1 ? " input" : " inputs"));
+        throw argumentError(argument::model, "its parameter rows do not fit the " + formWord(model.form) + " form of " +
+                                                 std::to_string(k) + (k == 1 ? " input" : " inputs"));
     return model;
 }
 

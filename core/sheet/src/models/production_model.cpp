@@ -1,5 +1,6 @@
 #include "isoquant/sheet/models/production_model.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/ces_fit.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
@@ -210,7 +211,8 @@ FormModel readCobbDouglasModel(double logScale, const ModelRows& rows)
         model.inputLabels.push_back(parameter.label);
         exponents.push_back(parameter.value);
     }
-    if (model.inputLabels.empty()) throw InputError("model: has no exponent rows, one per input after \"ln A\"");
+    if (model.inputLabels.empty())
+        throw argumentError(argument::model, "has no exponent rows, one per input after \"ln A\"");
     model.technology = std::make_shared<CobbDouglas>(
         logScale, Eigen::Map<const Eigen::VectorXd>(exponents.data(), static_cast<Eigen::Index>(exponents.size())));
     return model;
@@ -233,21 +235,24 @@ void refuseRepeatedLabels(const std::vector<ParameterRow>& parameters)
 ProductionModel readProductionModel(const CellTable& range)
 {
     if (isCostModel(range))
-        throw InputError("model: is a cost model (a PRODCOSTFIT table or form \"... cost\"); this function needs a "
-                         "production model, a PRODFIT table or a typed one (PRODCOST takes both)");
+        throw argumentError(argument::model,
+                            "is a cost model (a PRODCOSTFIT table or form \"... cost\"); this function needs a "
+                            "production model, a PRODFIT table or a typed one (PRODCOST takes both)");
     if (range.columns() < 2)
-        throw InputError("model: needs at least two columns, labels and values (a PRODFIT table or a typed model)");
+        throw argumentError(argument::model,
+                            "needs at least two columns, labels and values (a PRODFIT table or a typed model)");
     const ModelRows rows = readRows(range);
     refuseRepeatedLabels(rows.parameters);
-    if (!rows.form) throw InputError("model: has no \"form\" row (for example: form | cobb-douglas)");
-    if (!rows.logScale) throw InputError("model: has no \"ln A\" (or \"A\") row");
+    if (!rows.form) throw argumentError(argument::model, "has no \"form\" row (for example: form | cobb-douglas)");
+    if (!rows.logScale) throw argumentError(argument::model, "has no \"ln A\" (or \"A\") row");
     if (rows.inputsRow && *rows.form != ProductionForm::ces)
-        throw InputError("model: an \"inputs\" row of labels belongs to a ces model only");
+        throw argumentError(argument::model, "an \"inputs\" row of labels belongs to a ces model only");
     if (rows.convergence && equalsIgnoringCase(*rows.convergence, convergenceWord(FitStatusKind::notIdentified)))
         throw InputError(
             "model: the fit is not identified; its estimates are one optimum of many, so they are not used");
     if (rows.convergence && !equalsIgnoringCase(*rows.convergence, convergedText))
-        throw InputError("model: the fit did not converge; its estimates are not an optimum, so they are not used");
+        throw argumentError(argument::model,
+                            "the fit did not converge; its estimates are not an optimum, so they are not used");
 
     // Fixed effects or a trend: the mean group effect at the latest period; controls: at their means.
     const double logScale =
@@ -271,7 +276,7 @@ ProductionModel readProductionModel(const CellTable& range)
     model.logScaleShifted = rows.logScaleForPredictions || rows.logScaleAtControlMeans;
     if (rows.covarianceRow) {
         if (model.form != ProductionForm::cobbDouglas)
-            throw InputError("model: a covariance block is read for the cobb-douglas form only so far");
+            throw argumentError(argument::model, "a covariance block is read for the cobb-douglas form only so far");
         model.parameterCovariance = readCovarianceBlock(
             range, *rows.covarianceRow, cobbDouglasParameterLabels(model.inputLabels, rows.controlLabels));
     }
@@ -280,8 +285,8 @@ ProductionModel readProductionModel(const CellTable& range)
     if (model.scaleTest && scale && model.form != ProductionForm::translog &&
         std::fabs(model.scaleTest->estimate - *scale) > 1e-9 * std::max(1.0, std::fabs(*scale))) {
         const std::string what = model.form == ProductionForm::ces ? "nu" : "the sum of the exponents";
-        throw InputError("model: returns to scale (" + formatNumber(model.scaleTest->estimate) + ") is not " + what +
-                         " (" + formatNumber(*scale) + ")");
+        throw argumentError(argument::model, "returns to scale (" + formatNumber(model.scaleTest->estimate) +
+                                                 ") is not " + what + " (" + formatNumber(*scale) + ")");
     }
     return model;
 }
@@ -316,7 +321,9 @@ std::string returnsVerdict(const ProductionModel& model, double level)
 {
     if (!model.scaleTest) {
         const auto scale = model.technology->constantScaleElasticity();
-        if (!scale) throw InputError("model: its returns to scale vary with the inputs, and it carries no test of them");
+        if (!scale)
+            throw argumentError(argument::model,
+                                "its returns to scale vary with the inputs, and it carries no test of them");
         return classifyReturnsToScale(*scale, notANumber, level, false);
     }
     return classifyReturnsToScale(model.scaleTest->estimate, model.scaleTest->pValue, level, model.scaleTest->imposed);

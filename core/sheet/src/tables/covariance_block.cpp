@@ -1,5 +1,6 @@
 #include "isoquant/sheet/tables/covariance_block.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
@@ -148,10 +149,12 @@ std::vector<std::string> cobbDouglasParameterLabels(const std::vector<std::strin
 
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance)
 {
-    if (!readSwitchArgument(covariance, "covariance")) return table;
+    if (!readSwitchArgument(covariance, argument::covariance)) return table;
     if (fit.form != ProductionForm::cobbDouglas)
-        throw InputError("covariance: the block is written for the cobb-douglas form only so far; leave covariance "
-                         "empty or FALSE for the " + formWord(fit.form) + " form");
+        throw argumentError(argument::covariance,
+                            "the block is written for the cobb-douglas form only so far; leave covariance "
+                            "empty or FALSE for the " +
+                                formWord(fit.form) + " form");
     CovarianceBlock block;
     block.labels = cobbDouglasParameterLabels(fit.inputLabels, fit.controlLabels);
     block.matrix = fit.inference.covariance;

@@ -1,6 +1,7 @@
 // PRODSTAT's answers for group and period effects, which are not rows of the PRODFIT table.
 #include "isoquant/sheet/tables/fit_table.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -36,23 +37,24 @@ Cell lookUpFit(const ProductionFit& fit, const Cell& rowLabel, const Cell& colum
     const PanelSummary& panel = fit.panel;
     if (startsWithIgnoringCase(wanted, groupEffectPrefix)) {
         if (panel.groupEffects.size() == 0)
-            throw InputError("row label: group effects are estimated only with effects \"fixed\" or \"two-way\"");
+            throw argumentError(argument::rowLabel,
+                                "group effects are estimated only with effects \"fixed\" or \"two-way\"");
         const std::string group = wanted.substr(std::string_view(groupEffectPrefix).size());
         for (std::size_t g = 0; g < panel.groupLabels.size(); ++g)
             if (equalsIgnoringCase(group, panel.groupLabels[g]))
                 return lookUpFitTable(effectRow(wanted, panel.groupEffects(static_cast<Eigen::Index>(g))), rowLabel,
                                       columnLabel);
-        throw InputError("row label: " + quoted(group) + " is not one of the groups");
+        throw argumentError(argument::rowLabel, quoted(group) + " is not one of the groups");
     }
     if (startsWithIgnoringCase(wanted, periodEffectPrefix)) {
         if (panel.periods.empty())
-            throw InputError("row label: period effects are estimated only with effects \"two-way\"");
+            throw argumentError(argument::rowLabel, "period effects are estimated only with effects \"two-way\"");
         const std::string period = wanted.substr(std::string_view(periodEffectPrefix).size());
         for (std::size_t t = 0; t < panel.periods.size(); ++t)
             if (equalsIgnoringCase(period, formatNumber(panel.periods[t])))
                 return lookUpFitTable(effectRow(wanted, panel.periodEffects(static_cast<Eigen::Index>(t))), rowLabel,
                                       columnLabel);
-        throw InputError("row label: " + quoted(period) + " is not one of the periods");
+        throw argumentError(argument::rowLabel, quoted(period) + " is not one of the periods");
     }
     return lookUpFitTable(fitTable(fit), rowLabel, columnLabel);
 }

@@ -1,5 +1,6 @@
 #include "isoquant/sheet/tables/fit_table.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/tables/form_tables.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -45,7 +46,8 @@ std::size_t findRow(const CellTable& table, const std::string& typed)
         if (equalsIgnoringCase(label, wanted) || equalsIgnoringCase(label, wanted + controlSuffix)) return row;
     }
     if (equalsIgnoringCase(wanted, "F")) return findRow(table, overallTestLabel);
-    throw InputError("row label: " + quoted(typed) + " is not a row of the table; its rows are " + rowLabelList(table));
+    throw argumentError(argument::rowLabel,
+                        quoted(typed) + " is not a row of the table; its rows are " + rowLabelList(table));
 }
 
 // Rows of the estimation options (groups, effects, trend, incomplete rows), in table order; a
@@ -130,7 +132,8 @@ CellTable fitTable(const ProductionFit& fit)
 Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel)
 {
     if (!isText(rowLabel) || std::get<std::string>(rowLabel).empty())
-        throw InputError("row label: give the label of a row of the table, such as \"R2\" or an input's label");
+        throw argumentError(argument::rowLabel,
+                            "give the label of a row of the table, such as \"R2\" or an input's label");
     const std::size_t row = findRow(table, std::get<std::string>(rowLabel));
 
     std::size_t column = 1;
@@ -140,10 +143,11 @@ Cell lookUpFitTable(const CellTable& table, const Cell& rowLabel, const Cell& co
         for (std::size_t c = 0; c < columnLabels.size(); ++c)
             if (equalsIgnoringCase(wanted, columnLabels[c])) column = 1 + c;
         if (column == tableColumns)
-            throw InputError("column label: " + quoted(wanted) +
-                             " is not a column; use value, std. error, t, p-value, lower bound or upper bound");
+            throw argumentError(argument::columnLabel,
+                                quoted(wanted) +
+                                    " is not a column; use value, std. error, t, p-value, lower bound or upper bound");
     } else if (!isEmpty(columnLabel) && !isText(columnLabel)) {
-        throw InputError("column label: give a column's label, such as \"p-value\"");
+        throw argumentError(argument::columnLabel, "give a column's label, such as \"p-value\"");
     } else if (table.isEmpty(row, 1)) {
         column = 3; // rows that hold only a test statistic
     }
@@ -167,8 +171,8 @@ bool startsWithHeader(const CellTable& table)
 Cell tableValue(const CellTable& table, const Cell& rowLabel, const Cell& columnLabel)
 {
     if (!startsWithHeader(table))
-        throw InputError("table: give the whole table, its header row included (such as $I$1:$O$17 for a "
-                         "PRODFIT of two inputs)");
+        throw argumentError(argument::table, "give the whole table, its header row included (such as $I$1:$O$17 for a "
+                                             "PRODFIT of two inputs)");
     if (!isText(columnLabel) || std::get<std::string>(columnLabel).empty())
         return lookUpFitTable(table, rowLabel, columnLabel);
     if (!isText(rowLabel) || std::get<std::string>(rowLabel).empty())
@@ -181,7 +185,8 @@ Cell tableValue(const CellTable& table, const Cell& rowLabel, const Cell& column
         if (equalsIgnoringCase(comparableLabel(table.text(0, column)), wanted)) return table.at(row, column);
         known += (known.empty() ? "" : ", ") + quoted(table.text(0, column));
     }
-    throw InputError("column label: " + quoted(wanted) + " is not a column of the table; its columns are " + known);
+    throw argumentError(argument::columnLabel,
+                        quoted(wanted) + " is not a column of the table; its columns are " + known);
 }
 
 } // namespace isoquant

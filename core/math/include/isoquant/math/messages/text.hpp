@@ -4,6 +4,7 @@
 #include <cstddef>
 #include <string>
 #include <string_view>
+#include <vector>
 
 namespace isoquant {
 
@@ -34,6 +35,9 @@ std::string groupedCount(std::size_t count);
 
 // "1 row", "2 rows": the count and the noun, with an s unless the count is 1.
 std::string plural(std::size_t count, const std::string& noun);
+
+// "a", "a and b", "a, b and c": names in a sentence.
+std::string listOfNames(const std::vector<std::string>& names);
 
 // 'text' in single quotes, cut to a readable length.
 std::string quoted(std::string_view text);

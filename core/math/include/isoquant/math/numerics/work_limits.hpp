@@ -6,6 +6,7 @@
 // them a 1,048,575-row Cobb-Douglas fit takes about a second (tests/benchmarks/RESULTS.md).
 #pragma once
 
+#include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp" // groupedCount, used with the limits
 
 #include <cstddef>
@@ -13,11 +14,6 @@
 
 namespace isoquant {
 
-// Rows of one range argument: 2²⁰ = 1,048,576, a whole column of a Calc 7.4 sheet.
-constexpr std::size_t maximumRangeRows = std::size_t{1} << 20;
-// Cells of one range argument: 2²⁴ ≈ 16.8 million (16 full columns); the core's copy of them is
-// about 9 bytes a cell, beside Calc's own.
-constexpr std::size_t maximumRangeCells = std::size_t{1} << 24;
 // Values of a regression design held in memory at once (rows × columns): 2²⁵ ≈ 33.6 million, or
 // 268 MB in doubles. A full-column translog of 6 inputs (28 columns) fits; of 7 (36) does not.
 constexpr std::size_t maximumDesignValues = std::size_t{1} << 25;
@@ -35,12 +31,10 @@ constexpr std::size_t maximumRowEvaluations = std::size_t{1} << 24;
 // that all runs together stay within maximumRowEvaluations, but at least 1.
 std::size_t evaluationsPerRun(std::size_t rows, std::size_t runs, std::size_t requested);
 
-// Throws InputError naming `argument` when a range has more rows or cells than allowed.
-void checkRangeSize(std::size_t rows, std::size_t columns, const std::string& argument);
-
-// Throws InputError naming `argument` when `rows` × `columns` design values exceed the limit;
-// `what` says what the columns are ("the translog form of 7 inputs"), `advice` what to do.
-void checkDesignSize(std::size_t rows, std::size_t columns, const std::string& argument, const std::string& what,
+// Throws InputError about `part` when `rows` × `columns` design values exceed the limit; `what`
+// says what the columns are ("the translog form of 7 inputs"), `advice` what to do. (The limits
+// on one range argument are the sheet layer's: sheet/arguments/range_limits.hpp.)
+void checkDesignSize(std::size_t rows, std::size_t columns, DataPart part, const std::string& what,
                      const std::string& advice = "use fewer inputs or a sample of the rows");
 
 } // namespace isoquant

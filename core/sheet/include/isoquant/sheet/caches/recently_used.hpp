@@ -1,6 +1,6 @@
 // A short list of entries, most recently used first, holding at most `capacity` entries and, when
-// the entries are added with their sizes, at most `byteBudget` bytes: what the caches (FitCache,
-// ModelCache, the add-in's ModelRanges) keep. Not synchronised: each cache locks.
+// the entries are added with their sizes, at most `byteBudget` bytes: what the caches (FitCache and
+// the add-in's ModelRanges) keep. Not synchronised: each cache locks.
 #pragma once
 
 #include <cstddef>

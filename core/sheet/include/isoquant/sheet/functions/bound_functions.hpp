@@ -16,22 +16,46 @@
 // - least-cost amount xᵢ of target y at prices w (PRODLEASTCOST; every bᵢ > 0): g of ln xᵢ in
 //   bound_functions.cpp (leastCostAmount); bounds on the log scale.
 // - output elasticity bᵢ and returns to scale ν = Σ bᵢ: linear in θ, bounds estimate ± t·se.
+// - TFP = Y/f(x) of an observed Y (PRODTFP): g of ln TFP = −(1, ln x₁ … ln x_k, 0 …); log scale.
+// - second partial fᵢⱼ = bᵢ(bⱼ − δᵢⱼ)·Y/(xᵢxⱼ) (PRODSECOND): its sign varies, bounds fᵢⱼ ∓ t·se.
+// - MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ) (PRODMRTS): log scale when bᵢ, bⱼ > 0 (positive by nature), else ∓ t·se.
+// - the budget plan xᵢ = (bᵢ/ν)·B/wᵢ and its output (PRODBUDGET): log scale.
+// - elasticity of substitution (PRODSUBSTITUTION): 1 for every cobb-douglas parameter, so se 0 and
+//   both bounds the value (the form, not the data, fixes it).
 // Output and marginal products need ln A itself: a model whose evaluators use a shifted ln A
 // (controls at their means, effects or a trend) answers a message for these words, as does a
 // model without a covariance block (a typed model). Every message names "what".
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 
 namespace isoquant {
 
-CellTable outputColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& mean, const Cell& what);
-CellTable marginalProductColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& mean, const Cell& what);
+CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                           const Cell& what);
-CellTable elasticityColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& input,
+CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
                                      const Cell& what);
-CellTable scaleColumnWithBounds(const CellTable& model, const CellTable& inputs, const Cell& what);
+CellTable scaleColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& what);
 // PRODLEASTCOST: a row of the amounts' standard errors or bounds (positive: log scale).
-CellTable leastCostRowWithBounds(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+
+// The decisions and productivity (derived_bounds.cpp): the plain function's answer, each number
+// replaced by the word's figure; a text it gives (a value undefined at a bundle) stays.
+// PRODTFP: as productivityColumn (growth_functions.hpp), then `what`.
+CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable& output, const CellTable& inputs,
+                                       const CellTable& periods, const Cell& what);
+// PRODSECOND: as secondPartialColumn (decision_functions.hpp), then `what`.
+CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what);
+// PRODMRTS: as technicalRateColumn (decision_functions.hpp), then `what`.
+CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what);
+// PRODBUDGET: as budgetRow (decision_functions.hpp), then `what` for the k amounts and the output.
+CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const CellTable& prices, const Cell& what);
+// PRODSUBSTITUTION: as substitutionColumn (decision_functions.hpp), then `what`.
+CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                       const Cell& second, const Cell& kind, const Cell& what);
 
 } // namespace isoquant

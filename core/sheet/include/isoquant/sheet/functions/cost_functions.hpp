@@ -3,6 +3,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 #include "isoquant/math/fits/cost_fit.hpp"
 
 namespace isoquant {
@@ -43,6 +44,6 @@ Eigen::MatrixXd readPriceRows(const CellTable& range, Eigen::Index outputs, Eige
 // PRODCOST for any model: a cost model as above; a production model as costCell
 // (decision_cell_functions.hpp) for one output, and for a column of outputs one least-cost figure
 // per row, with prices as above.
-CellTable costColumn(const CellTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
+CellTable costColumn(const ModelTable& model, const CellTable& target, const CellTable& prices, const Cell& what);
 
 } // namespace isoquant

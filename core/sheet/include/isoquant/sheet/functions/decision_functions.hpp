@@ -8,42 +8,43 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 
 namespace isoquant {
 
 // PRODSECOND: ∂²Y/∂xᵢ∂xⱼ per row (the own second partial ∂²Y/∂xᵢ² when `second` is omitted).
-CellTable secondPartialColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
+CellTable secondPartialColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
 
 // PRODINPUTRETURNS: "diminishing", "constant" or "increasing" returns to one input per row.
-CellTable inputReturnsColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
+CellTable inputReturnsColumn(const ModelTable& model, const CellTable& inputs, const Cell& input);
 
 // PRODPAIR: "complements", "substitutes" or "independent" by the sign of fᵢⱼ, per row.
-CellTable inputPairColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
+CellTable inputPairColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
 
 // PRODMRTS: the marginal rate of technical substitution fᵢ/fⱼ per row.
-CellTable technicalRateColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
+CellTable technicalRateColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second);
 
 // PRODSUBSTITUTION: the direct (default), Allen or Morishima elasticity of substitution per row.
-CellTable substitutionColumn(const CellTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
+CellTable substitutionColumn(const ModelTable& model, const CellTable& inputs, const Cell& first, const Cell& second,
                              const Cell& kind);
 
 // PRODLEASTCOST: the cost-minimising bundle for `target` output at `prices`, a row of k amounts.
-CellTable leastCostRow(const CellTable& model, const Cell& target, const CellTable& prices);
+CellTable leastCostRow(const ModelTable& model, const Cell& target, const CellTable& prices);
 
 // PRODCOST: "total" (default), "marginal" or "average" cost at that bundle.
-CellTable costCell(const CellTable& model, const Cell& target, const CellTable& prices, const Cell& what);
+CellTable costCell(const ModelTable& model, const Cell& target, const CellTable& prices, const Cell& what);
 
 // PRODBUDGET: the output-maximising amounts that spend exactly `budget`, then the output: k + 1 cells.
-CellTable budgetRow(const CellTable& model, const Cell& budget, const CellTable& prices);
+CellTable budgetRow(const ModelTable& model, const Cell& budget, const CellTable& prices);
 
 // PRODPROFIT: the profit-maximising amounts, then output and profit: k + 2 cells.
-CellTable profitRow(const CellTable& model, const Cell& outputPrice, const CellTable& inputPrices);
+CellTable profitRow(const ModelTable& model, const Cell& outputPrice, const CellTable& inputPrices);
 
 // PRODISOQUANT: for each value of input i, the amount of input j giving output `level`, a column.
 // `values` is one column of values of input i (a two-input model), or one column per model input
 // (the other inputs held at the values in each row; the column of input j is not read).
 // i defaults to the first input, j to the first input other than i.
-CellTable isoquantColumn(const CellTable& model, const Cell& level, const CellTable& values, const Cell& first,
+CellTable isoquantColumn(const ModelTable& model, const Cell& level, const CellTable& values, const Cell& first,
                          const Cell& second);
 
 } // namespace isoquant

@@ -4,6 +4,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 
 namespace isoquant {
 
@@ -14,7 +15,7 @@ namespace isoquant {
 // the period of each row, for a model with a trend (rows "technical change per period" and
 // "latest period"): row i is then compared with the technology of its period tᵢ, whose ln A is
 // the model's ln A + λ·(tᵢ − t_last).
-CellTable productivityColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
+CellTable productivityColumn(const ModelTable& model, const CellTable& output, const CellTable& inputs,
                              const CellTable& periods = {});
 
 // PRODGROWTH: the growth account of every period (layout in growth_table.hpp).

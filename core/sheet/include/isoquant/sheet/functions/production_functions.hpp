@@ -4,6 +4,7 @@
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
 
 #include <cstddef>
@@ -60,17 +61,17 @@ ProductionFit fitFromArguments(const FitArguments& arguments);
 // is skipped), as many columns as the model has inputs; each returns a column, one value per row.
 // `mean` TRUE: the mean prediction, exp(fitted ln Y) times the model's smearing factor; else the
 // median, exp(fitted ln Y).
-CellTable outputColumn(const CellTable& model, const CellTable& inputs, const Cell& mean = {});
-CellTable marginalProductColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
-CellTable elasticityColumn(const CellTable& model, const CellTable& inputs, const Cell& input);
+CellTable outputColumn(const ModelTable& model, const CellTable& inputs, const Cell& mean = {});
+CellTable marginalProductColumn(const ModelTable& model, const CellTable& inputs, const Cell& input);
+CellTable elasticityColumn(const ModelTable& model, const CellTable& inputs, const Cell& input);
 // ν; a column of ν per row when `inputs` is not empty.
-CellTable scaleColumn(const CellTable& model, const CellTable& inputs);
+CellTable scaleColumn(const ModelTable& model, const CellTable& inputs);
 // The returns-to-scale verdict at confidence level `level` (empty: 0.95); a table whose verdict row
 // reads "not tested (…)" gives that row (untestedVerdict in production_model.hpp).
-std::string returnsVerdictCell(const CellTable& model, const Cell& level);
+std::string returnsVerdictCell(const ModelTable& model, const Cell& level);
 
 // PRODREGULAR: per row of inputs, "regular" or the condition that fails, in words (regularity.hpp).
-CellTable regularityColumn(const CellTable& model, const CellTable& inputs);
+CellTable regularityColumn(const ModelTable& model, const CellTable& inputs);
 
 // PRODCOMPARE: the three forms on the same rows (form_comparison.hpp); `level` as for PRODFIT.
 CellTable compareFormsTable(const CellTable& output, const CellTable& inputs, const Cell& level);

@@ -1,0 +1,135 @@
+#include "functions/delta_method.hpp"
+
+#include "isoquant/sheet/arguments/argument_names.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/messages/text.hpp"
+#include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/sheet/arguments/model_inputs.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
+
+#include <array>
+#include <cmath>
+
+namespace isoquant::delta_method {
+
+namespace {
+
+constexpr std::array<const char*, 6> statisticWords{"value",       "std. error",       "lower bound",
+                                                    "upper bound", "prediction lower", "prediction upper"};
+
+std::string tooLarge(std::size_t row)
+{
+    return "inputs: row " + std::to_string(row) + " gives a result too large to represent";
+}
+
+} // namespace
+
+Statistic readWhat(const Cell& what, bool allowsPrediction)
+{
+    if (isEmpty(what)) return Statistic::value;
+    const std::size_t known = allowsPrediction ? statisticWords.size() : 4;
+    if (isText(what))
+        for (std::size_t word = 0; word < known; ++word)
+            if (equalsIgnoringCase(std::get<std::string>(what), statisticWords[word])) return Statistic(word);
+    std::string list;
+    for (std::size_t word = 0; word < known; ++word)
+        list += std::string(word == 0 ? "" : word + 1 == known ? " or " : ", ") + "\"" + statisticWords[word] + "\"";
+    throw argumentError(argument::what, "give " + list);
+}
+
+std::string word(Statistic statistic) { return statisticWords[static_cast<std::size_t>(statistic)]; }
+
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale)
+{
+    BoundsModel read{range.production()};
+    const std::string asked = "what: \"" + word(statistic) + "\" ";
+    if (!read.model.parameterCovariance)
+        throw InputError(asked + "needs the model's covariance block; this model has none (a typed model, or a "
+                                 "PRODFIT table made without covariance TRUE)");
+    read.form = dynamic_cast<const CobbDouglas*>(read.model.technology.get());
+    if (!read.form) throw InputError(asked + "is available for the cobb-douglas form only so far");
+    if (needsLogScale && read.model.logScaleShifted)
+        throw InputError(asked + "is not available when the model's ln A is shifted (controls at their means, "
+                                 "effects or a trend): the covariance block does not cover that ln A");
+    read.block = &*read.model.parameterCovariance;
+    read.critical = studentCriticalValue(read.block->level, read.block->degreesOfFreedom);
+    return read;
+}
+
+double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance)
+{
+    // gᵀVg over the parameters the quantity depends on: a parameter without a variance ("n/a", ln A
+    // under effects) may stand in V where g is 0.
+    double variance = 0;
+    const Eigen::VectorXd& g = quantity.gradient;
+    for (Eigen::Index i = 0; i < g.size(); ++i)
+        for (Eigen::Index j = 0; j < g.size(); ++j)
+            if (g(i) != 0 && g(j) != 0) variance += g(i) * read.block->matrix(i, j) * g(j);
+    if (!std::isfinite(variance))
+        throw argumentError(argument::what, "the covariance block has no variance for a parameter this quantity uses");
+    const double spread = std::sqrt(variance);
+    const double t = read.critical;
+    if (!quantity.logScale) {
+        switch (statistic) {
+        case Statistic::standardError: return spread;
+        case Statistic::lowerBound: return quantity.value - t * spread;
+        case Statistic::upperBound: return quantity.value + t * spread;
+        default: return quantity.value;
+        }
+    }
+    const double predictionSpread = std::sqrt(variance + residualVariance);
+    switch (statistic) {
+    case Statistic::standardError: return quantity.value * spread;
+    case Statistic::lowerBound: return quantity.value * std::exp(-t * spread);
+    case Statistic::upperBound: return quantity.value * std::exp(t * spread);
+    case Statistic::predictionLower: return quantity.value * std::exp(-t * predictionSpread);
+    case Statistic::predictionUpper: return quantity.value * std::exp(t * predictionSpread);
+    default: return quantity.value;
+    }
+}
+
+Eigen::VectorXd zeroGradient(const BoundsModel& read) { return Eigen::VectorXd::Zero(read.block->matrix.rows()); }
+
+Eigen::VectorXd logOutputGradient(const BoundsModel& read, const Eigen::VectorXd& bundle)
+{
+    Eigen::VectorXd gradient = zeroGradient(read);
+    gradient(0) = 1;
+    gradient.segment(1, bundle.size()) = bundle.array().log().matrix();
+    return gradient;
+}
+
+CellTable columnOfBounds(const CellTable& inputs, const BoundsModel& read, Statistic statistic,
+                         double residualVariance, const std::string& title,
+                         const std::function<Linearised(const Eigen::VectorXd&)>& linearise)
+{
+    const NumericColumns bundles = readModelInputs(inputs, read.model);
+    CellTable column(static_cast<std::size_t>(bundles.values.rows()), 1);
+    for (Eigen::Index row = 0; row < bundles.values.rows(); ++row) {
+        const double result = answer(linearise(bundles.values.row(row).transpose()), read, statistic, residualVariance);
+        if (!std::isfinite(result)) throw InputError(tooLarge(static_cast<std::size_t>(row) + bundles.firstDataRow()));
+        column.set(static_cast<std::size_t>(row), 0, result);
+    }
+    return underHeader(std::move(column), bundles, word(statistic) + " of " + title);
+}
+
+CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, const BoundsModel& read,
+                              Statistic statistic,
+                              const std::function<Linearised(const Eigen::VectorXd&, double)>& linearise)
+{
+    const NumericColumns bundles = readModelInputs(inputs, read.model);
+    const auto rows = static_cast<std::size_t>(bundles.values.rows());
+    const std::size_t headerRows = values.rows() - rows; // 0, or 1 for the header cell
+    CellTable column = values;
+    if (headerRows == 1 && values.isText(0, 0)) column.set(0, 0, word(statistic) + " of " + values.text(0, 0));
+    for (std::size_t row = 0; row < rows; ++row) {
+        if (!values.isNumber(headerRows + row, 0)) continue;
+        const Eigen::VectorXd bundle = bundles.values.row(static_cast<Eigen::Index>(row)).transpose();
+        const double result =
+            answer(linearise(bundle, values.number(headerRows + row, 0)), read, statistic, 0);
+        if (!std::isfinite(result)) throw InputError(tooLarge(row + bundles.firstDataRow()));
+        column.set(headerRows + row, 0, result);
+    }
+    return column;
+}
+
+} // namespace isoquant::delta_method

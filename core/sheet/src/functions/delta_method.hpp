@@ -1,0 +1,67 @@
+// The delta method behind the functions' `what` argument (bound_functions.hpp), internal to the
+// sheet library: the words, the model read with its covariance block, and the standard error or
+// bounds of one quantity linearised in the parameters θ = (ln A, b₁ … b_k, controls).
+#pragma once
+
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/arguments/numeric_range.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
+#include "isoquant/sheet/models/production_model.hpp"
+#include "isoquant/math/forms/cobb_douglas.hpp"
+
+#include <Eigen/Dense>
+
+#include <functional>
+#include <string>
+
+namespace isoquant::delta_method {
+
+enum class Statistic { value, standardError, lowerBound, upperBound, predictionLower, predictionUpper };
+
+// Empty: "value". `allowsPrediction`: the two prediction words are known too (PRODOUTPUT).
+Statistic readWhat(const Cell& what, bool allowsPrediction);
+std::string word(Statistic statistic);
+
+// A quantity at one bundle: its value and the gradient in θ of ln(value) (log scale) or of value.
+struct Linearised {
+    double value = 0;
+    Eigen::VectorXd gradient;
+    bool logScale = false;
+};
+
+struct BoundsModel {
+    ProductionModel model;
+    const CobbDouglas* form = nullptr;
+    const CovarianceBlock* block = nullptr;
+    double critical = 0; // the t quantile of the block's level and degrees of freedom
+};
+
+// Throws InputError naming "what" for a model without a covariance block (a typed model), a form
+// other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a model
+// whose evaluators use a shifted ln A.
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale);
+
+// se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
+// `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).
+double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance);
+
+// A zero gradient of the size of the block.
+Eigen::VectorXd zeroGradient(const BoundsModel& read);
+
+// g of ln Y: 1 for ln A, ln xᵢ for bᵢ, 0 for the controls.
+Eigen::VectorXd logOutputGradient(const BoundsModel& read, const Eigen::VectorXd& bundle);
+
+// The answer per row of `inputs` (read as the evaluators read it), under the header "<word> of <title>".
+CellTable columnOfBounds(const CellTable& inputs, const BoundsModel& read, Statistic statistic,
+                         double residualVariance, const std::string& title,
+                         const std::function<Linearised(const Eigen::VectorXd&)>& linearise);
+
+// The answer in place of each number of `values`, the plain function's column for the rows of
+// `inputs` (a header cell over them when it has one more row): a text there (an undefined value
+// at that bundle) stays, the header becomes "<word> of <header>". `linearise` gets the bundle and
+// the value the plain function gave.
+CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, const BoundsModel& read,
+                              Statistic statistic,
+                              const std::function<Linearised(const Eigen::VectorXd&, double)>& linearise);
+
+} // namespace isoquant::delta_method

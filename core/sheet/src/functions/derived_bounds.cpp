@@ -1,0 +1,130 @@
+// `what` of PRODTFP, PRODSECOND, PRODMRTS, PRODBUDGET and PRODSUBSTITUTION (bound_functions.hpp):
+// the plain function answers first (its checks, messages and sentences unchanged), then each of
+// its numbers is replaced by its standard error or bound (delta_method.hpp), with the gradient of
+// the Cobb-Douglas form given beside each function.
+#include "isoquant/sheet/functions/bound_functions.hpp"
+
+#include "isoquant/sheet/arguments/argument_names.hpp"
+#include "functions/delta_method.hpp"
+
+#include "isoquant/sheet/functions/decision_functions.hpp"
+#include "isoquant/sheet/functions/growth_functions.hpp"
+#include "isoquant/math/messages/input_error.hpp"
+
+#include <cmath>
+
+namespace isoquant {
+
+using namespace delta_method;
+
+CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable& output, const CellTable& inputs,
+                                       const CellTable& periods, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = productivityColumn(model, output, inputs, periods);
+    if (statistic == Statistic::value) return values;
+    // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln A − Σ bᵢ ln xᵢ, so g of ln TFP is minus g of
+    // ln f(x): (−1, −ln x₁ … −ln x_k, 0 …). Positive by nature: bounds on the log scale.
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
+        return Linearised{tfp, -logOutputGradient(read, bundle), true};
+    });
+}
+
+CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = secondPartialColumn(model, inputs, first, second);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+    const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
+    const Eigen::VectorXd& b = read.form->exponents;
+    // fᵢⱼ = c·Y/(xᵢxⱼ) with c = bᵢ(bⱼ − δᵢⱼ): g = fᵢⱼ·(g of ln Y) + Y/(xᵢxⱼ)·∂c/∂θ, where
+    // ∂c/∂bᵢ = bⱼ − δᵢⱼ and ∂c/∂bⱼ = bᵢ (together 2bᵢ − 1 when i = j). Its sign varies with the
+    // exponents (an own second partial is negative for bᵢ < 1): bounds fᵢⱼ ∓ t·se.
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double partial) {
+        const double scaled = std::exp(read.form->logOutput(bundle) - std::log(bundle(i)) - std::log(bundle(j)));
+        Eigen::VectorXd gradient = partial * logOutputGradient(read, bundle);
+        gradient(1 + i) += scaled * (b(j) - (i == j ? 1.0 : 0.0));
+        gradient(1 + j) += scaled * b(i);
+        return Linearised{partial, gradient, false};
+    });
+}
+
+CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                        const Cell& second, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = technicalRateColumn(model, inputs, first, second);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+    const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
+    const double bi = read.form->exponents(i), bj = read.form->exponents(j);
+    // MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ), free of ln A. With both exponents positive (both marginal products
+    // positive) it is positive by nature: ln MRTS = ln bᵢ − ln bⱼ + ln(xⱼ/xᵢ), g = 1/bᵢ at bᵢ and
+    // −1/bⱼ at bⱼ, bounds on the log scale. Else the gradient of MRTS itself, (xⱼ/xᵢ)/bⱼ at bᵢ and
+    // −MRTS/bⱼ at bⱼ, bounds MRTS ∓ t·se (bⱼ = 0 leaves the plain function's text).
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double rate) {
+        Eigen::VectorXd gradient = zeroGradient(read);
+        if (bi > 0 && bj > 0) {
+            gradient(1 + i) = 1 / bi;
+            gradient(1 + j) = -1 / bj;
+            return Linearised{rate, gradient, true};
+        }
+        gradient(1 + i) = bundle(j) / (bundle(i) * bj);
+        gradient(1 + j) = -rate / bj;
+        return Linearised{rate, gradient, false};
+    });
+}
+
+CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const CellTable& prices, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable plan = budgetRow(model, budget, prices);
+    if (statistic == Statistic::value || !plan.isNumber(0, 0)) return plan; // a sentence (no plan) stays
+    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const Eigen::VectorXd& b = read.form->exponents;
+    const Eigen::Index k = b.size();
+    // The plan (every bᵢ > 0, as the plain function requires): xᵢ = (bᵢ/ν)·B/wᵢ, so g of ln xᵢ is
+    // [m = i]/bᵢ − 1/ν at each bₘ and 0 at ln A. Its output Y = A·Π xⱼ^bⱼ: g of ln Y is 1 at ln A
+    // and ln xₘ at bₘ (the amounts' own change adds Σⱼ bⱼ·([m = j]/bⱼ − 1/ν) = 0). All positive by
+    // nature: bounds on the log scale.
+    CellTable row(1, static_cast<std::size_t>(k + 1));
+    for (Eigen::Index cell = 0; cell <= k; ++cell) {
+        Eigen::VectorXd gradient = zeroGradient(read);
+        if (cell < k) {
+            gradient.segment(1, k).setConstant(-1 / b.sum());
+            gradient(1 + cell) += 1 / b(cell);
+        } else {
+            gradient(0) = 1;
+            for (Eigen::Index m = 0; m < k; ++m)
+                gradient(1 + m) = std::log(plan.number(0, static_cast<std::size_t>(m)));
+        }
+        const auto column = static_cast<std::size_t>(cell);
+        const double result = answer(Linearised{plan.number(0, column), gradient, true}, read, statistic, 0);
+        if (!std::isfinite(result)) throw argumentError(argument::budget, "gives a plan too large to represent");
+        row.set(0, column, result);
+    }
+    return row;
+}
+
+CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
+                                       const Cell& second, const Cell& kind, const Cell& what)
+{
+    const Statistic statistic = readWhat(what, false);
+    const CellTable values = substitutionColumn(model, inputs, first, second, kind);
+    if (statistic == Statistic::value) return values;
+    const BoundsModel read = readBoundsModel(model, statistic, false);
+    // The cobb-douglas form fixes the direct, Allen and Morishima elasticities at 1 whatever its
+    // parameters (σᵢⱼ = −fᵢfⱼ(xᵢfᵢ + xⱼfⱼ)/(xᵢxⱼ(fᵢᵢfⱼ² − 2fᵢⱼfᵢfⱼ + fⱼⱼfᵢ²)) = 1 for fᵢ = bᵢY/xᵢ):
+    // the gradient is 0, so the std. error is 0 and both bounds are the value. The form allows the
+    // data no say; only another form (ces, translog) lets them.
+    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd&, double elasticity) {
+        return Linearised{elasticity, zeroGradient(read), false};
+    });
+}
+
+} // namespace isoquant
