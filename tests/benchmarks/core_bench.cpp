@@ -117,7 +117,7 @@ void timeCesThatStops()
     isoquant::ProductionFit fit;
     const double seconds = medianSeconds(1, [&] { fit = isoquant::fitCes(data, options); });
     std::printf("ces_fit_fixed_proportions %ld %.6g 1 status %s evaluations %ld\n", static_cast<long>(rows), seconds,
-                fit.ces->convergence == isoquant::NonlinearStatus::converged ? "converged" : "not-converged",
+                fit.status.converged() ? "converged" : "not-converged",
                 static_cast<long>(fit.ces->evaluations));
 }
 
@@ -145,7 +145,7 @@ int main(int argc, char** argv)
         isoquant::ProductionFit fit;
         const double core = medianSeconds(runs, [&] { fit = isoquant::fitProduction(data, {}); });
         std::printf("core_fit %ld %.6g %d elasticities", static_cast<long>(rows), core, runs);
-        for (Eigen::Index j = 1; j < fit.estimates.size(); ++j) std::printf(" %.6f", fit.estimates(j));
+        for (Eigen::Index j = 1; j < fit.inference.estimates.size(); ++j) std::printf(" %.6f", fit.inference.estimates(j));
         std::printf("\n");
 
         // The least-squares step alone on the log design, by each factorisation route.
@@ -160,7 +160,7 @@ int main(int argc, char** argv)
             const double seconds = medianSeconds(runs, [&] {
                 const auto fit = isoquant::fitLeastSquares(design, logOutput, 0, options);
                 inDouble = fit.factorisedInDouble;
-                sink = fit.coefficients(1);
+                sink = fit.inference.estimates(1);
             });
             std::printf("%s %ld %.6g %d route %s\n", limit > 0 ? "least_squares_default" : "least_squares_extended",
                         static_cast<long>(rows), seconds, runs, inDouble ? "double" : "long-double");
@@ -203,7 +203,7 @@ int main(int argc, char** argv)
         const double seconds = medianSeconds(runs, [&] { fit = isoquant::fitCes(data, options); });
         std::printf("ces_fit 10000 %.6g %d evaluations %ld estimates", seconds, runs,
                     static_cast<long>(fit.ces->evaluations));
-        for (Eigen::Index j = 0; j < fit.estimates.size(); ++j) std::printf(" %.6f", fit.estimates(j));
+        for (Eigen::Index j = 0; j < fit.inference.estimates.size(); ++j) std::printf(" %.6f", fit.inference.estimates(j));
         std::printf("\n");
     }
 

@@ -53,7 +53,7 @@ BOOST_AUTO_TEST_SUITE(bad_input)
 
 BOOST_AUTO_TEST_CASE(the_unspoiled_arguments_fit)
 {
-    BOOST_TEST(isoquant::fitFromArguments(goodArguments()).estimates.size() == 3);
+    BOOST_TEST(isoquant::fitFromArguments(goodArguments()).inference.estimates.size() == 3);
 }
 
 BOOST_AUTO_TEST_CASE(text_and_empty_cells_are_named_by_row_and_column)
@@ -379,7 +379,7 @@ BOOST_AUTO_TEST_CASE(a_totals_row_is_refused)
     BOOST_TEST(fitMessage(arguments) == "row 26 looks like a total of the rows above; leave it out of the ranges");
 
     arguments.inputs.set(rows, 1, inputSums[1] * 1.01);
-    BOOST_TEST(isoquant::fitFromArguments(arguments).estimates.size() == 3);
+    BOOST_TEST(isoquant::fitFromArguments(arguments).inference.estimates.size() == 3);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

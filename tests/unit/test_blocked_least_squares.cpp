@@ -60,10 +60,10 @@ BOOST_DATA_TEST_CASE(block_size_changes_no_result_beyond_rounding, bdata::make(k
         BOOST_TEST(blocked.factorisedInDouble);
         // 1e-12: a few hundred units of rounding for different orders of the same sums
         // (common practice, no source).
-        BOOST_TEST(relativeDifference(blocked.coefficients, whole.coefficients) <= 1e-12);
-        BOOST_TEST(relativeDifference(blocked.standardErrors, whole.standardErrors) <= 1e-12);
+        BOOST_TEST(relativeDifference(blocked.inference.estimates, whole.inference.estimates) <= 1e-12);
+        BOOST_TEST(relativeDifference(blocked.inference.standardErrors, whole.inference.standardErrors) <= 1e-12);
         BOOST_TEST(relativeDifference(blocked.residuals, whole.residuals) <= 1e-12);
-        BOOST_TEST(std::fabs(blocked.rSquared - whole.rSquared) <= 1e-12);
+        BOOST_TEST(std::fabs(blocked.summary.rSquared - whole.summary.rSquared) <= 1e-12);
     }
 }
 
@@ -79,11 +79,11 @@ BOOST_AUTO_TEST_CASE(huge_columns_are_scaled_before_any_square_is_taken)
     options.rowsPerBlock = 50;
     const auto plain = isoquant::fitLeastSquares(data.design, data.response, 0, options);
     const auto scaled = isoquant::fitLeastSquares(huge, data.response, 0, options);
-    BOOST_TEST(scaled.coefficients.allFinite());
-    BOOST_TEST(scaled.coefficients(2) * factor == plain.coefficients(2));
-    BOOST_TEST(scaled.coefficients(1) == plain.coefficients(1));
-    BOOST_TEST(scaled.standardErrors(3) == plain.standardErrors(3));
-    BOOST_TEST(scaled.conditionNumber == plain.conditionNumber);
+    BOOST_TEST(scaled.inference.estimates.allFinite());
+    BOOST_TEST(scaled.inference.estimates(2) * factor == plain.inference.estimates(2));
+    BOOST_TEST(scaled.inference.estimates(1) == plain.inference.estimates(1));
+    BOOST_TEST(scaled.inference.standardErrors(3) == plain.inference.standardErrors(3));
+    BOOST_TEST(scaled.summary.conditionNumber == plain.summary.conditionNumber);
 }
 
 // A later block with much larger values than the first ones rescales the factor built so far.
@@ -96,6 +96,6 @@ BOOST_AUTO_TEST_CASE(a_later_block_of_larger_values_rescales_the_factor)
     const auto whole = isoquant::fitLeastSquares(data.design, data.response, 0, options);
     options.rowsPerBlock = 10;
     const auto blocked = isoquant::fitLeastSquares(data.design, data.response, 0, options);
-    BOOST_TEST(relativeDifference(blocked.coefficients, whole.coefficients) <= 1e-12);
-    BOOST_TEST(blocked.coefficients.allFinite());
+    BOOST_TEST(relativeDifference(blocked.inference.estimates, whole.inference.estimates) <= 1e-12);
+    BOOST_TEST(blocked.inference.estimates.allFinite());
 }

@@ -143,8 +143,8 @@ BOOST_AUTO_TEST_CASE(cluster_errors_give_the_tables_own_bounds)
             isoquant::elasticityColumnWithBounds(table, bundle, selector, std::string("lower bound")).number(0, 0);
         const double upper =
             isoquant::elasticityColumnWithBounds(table, bundle, selector, std::string("upper bound")).number(0, 0);
-        BOOST_TEST(std::fabs(lower - fit.lowerBounds(1 + input)) <= 1e-12 * std::fabs(fit.lowerBounds(1 + input)));
-        BOOST_TEST(std::fabs(upper - fit.upperBounds(1 + input)) <= 1e-12 * std::fabs(fit.upperBounds(1 + input)));
+        BOOST_TEST(std::fabs(lower - fit.inference.lowerBounds(1 + input)) <= 1e-12 * std::fabs(fit.inference.lowerBounds(1 + input)));
+        BOOST_TEST(std::fabs(upper - fit.inference.upperBounds(1 + input)) <= 1e-12 * std::fabs(fit.inference.upperBounds(1 + input)));
     }
 }
 

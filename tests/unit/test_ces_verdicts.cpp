@@ -111,7 +111,7 @@ BOOST_AUTO_TEST_CASE(at_perfect_substitutes_and_at_fixed_proportions_nu_is_not_t
     requireVerdict(fixed, "not tested (boundary)");
     const isoquant::CellTable fixedTable = isoquant::fitTable(fixed);
     // σ = 1/(1+ρ) at the ρ reached, marked as a boundary value, with no bounds.
-    requireSigmaRow(fixedTable, Cell(1 / (1 + fixed.estimates(2))), text("boundary"));
+    requireSigmaRow(fixedTable, Cell(1 / (1 + fixed.inference.estimates(2))), text("boundary"));
     BOOST_TEST(fixed.ces->substitutionElasticity < 1e-3);
     BOOST_TEST((fixedTable.at(sigmaRow, 5) == Cell{}));
     BOOST_TEST(fixedTable.text(formRow, 2).find("fixed proportions") != std::string::npos);
@@ -122,11 +122,11 @@ BOOST_AUTO_TEST_CASE(without_convergence_nu_is_not_tested)
     isoquant::CesFitOptions stopped;
     stopped.solver.maximumEvaluations = 2;
     const auto fit = isoquant::fitCes(generate(isoquant::Ces(0.2, 0.4, 0.5, 0.9), 60, 305), cesOptions(), stopped);
-    BOOST_TEST((fit.ces->convergence == isoquant::NonlinearStatus::evaluationLimit));
+    BOOST_TEST((fit.status.is(isoquant::FitStatusKind::notConverged)));
     requireVerdict(fit, "not tested (not converged)");
     const isoquant::CellTable table = isoquant::fitTable(fit);
     // σ = 1/(1+ρ) at the last point, without standard error or bounds.
-    requireSigmaRow(table, Cell(1 / (1 + fit.estimates(2))), text("n/a"));
+    requireSigmaRow(table, Cell(1 / (1 + fit.inference.estimates(2))), text("n/a"));
     BOOST_TEST((table.at(sigmaRow, 5) == text("n/a")));
     BOOST_TEST((table.at(sigmaRow, 6) == text("n/a")));
 }
@@ -136,10 +136,10 @@ BOOST_AUTO_TEST_CASE(sigma_bounds_are_the_bounds_of_rho_transformed)
     // Data from ρ = 3 with much noise (SD 0.4, 20 rows): ρ is estimated loosely.
     const isoquant::Ces truth(0.2, 0.5, 3.0, 1.0);
     const auto loose = isoquant::fitCes(generate(truth, 20, 2, 0.4), cesOptions());
-    BOOST_TEST_REQUIRE((loose.ces->convergence == isoquant::NonlinearStatus::converged));
-    BOOST_TEST_REQUIRE(loose.lowerBounds(2) > -1);
-    BOOST_TEST(loose.ces->substitutionLowerBound == 1 / (1 + loose.upperBounds(2)));
-    BOOST_TEST(loose.ces->substitutionUpperBound == 1 / (1 + loose.lowerBounds(2)));
+    BOOST_TEST_REQUIRE((loose.status.converged()));
+    BOOST_TEST_REQUIRE(loose.inference.lowerBounds(2) > -1);
+    BOOST_TEST(loose.ces->substitutionLowerBound == 1 / (1 + loose.inference.upperBounds(2)));
+    BOOST_TEST(loose.ces->substitutionUpperBound == 1 / (1 + loose.inference.lowerBounds(2)));
     // Not symmetric about σ: σ = 1/(1+ρ) is convex in ρ.
     BOOST_TEST(loose.ces->substitutionUpperBound - loose.ces->substitutionElasticity >
                loose.ces->substitutionElasticity - loose.ces->substitutionLowerBound);
@@ -147,8 +147,8 @@ BOOST_AUTO_TEST_CASE(sigma_bounds_are_the_bounds_of_rho_transformed)
     // Here the low bound of ρ is below −1: σ has no upper bound ("n/a"), and its lower bound stays
     // positive where σ − t·se(σ) (the delta-method interval) would be negative.
     const auto wider = isoquant::fitCes(generate(truth, 20, 6, 0.4), cesOptions());
-    BOOST_TEST_REQUIRE(wider.lowerBounds(2) < -1);
-    const double critical = (wider.upperBounds(2) - wider.estimates(2)) / wider.standardErrors(2);
+    BOOST_TEST_REQUIRE(wider.inference.lowerBounds(2) < -1);
+    const double critical = (wider.inference.upperBounds(2) - wider.inference.estimates(2)) / wider.inference.standardErrors(2);
     BOOST_TEST(wider.ces->substitutionElasticity - critical * wider.ces->substitutionStandardError < 0);
     BOOST_TEST(wider.ces->substitutionLowerBound > 0);
     BOOST_TEST(std::isinf(wider.ces->substitutionUpperBound));
@@ -164,7 +164,7 @@ BOOST_AUTO_TEST_CASE(a_singular_hessian_at_the_optimum_is_not_identified)
     // proportions (ρ ≈ 220), where JᵀJ is singular to rounding.
     const auto data = generate(isoquant::Ces(0.5, 0.4, 50, 0.9), 40, 1, 0.025);
     const auto fit = isoquant::fitCes(data, cesOptions());
-    BOOST_TEST_REQUIRE((fit.ces->convergence == isoquant::NonlinearStatus::notIdentified));
+    BOOST_TEST_REQUIRE((fit.status.is(isoquant::FitStatusKind::notIdentified)));
     requireVerdict(fit, "not tested (not identified)");
     const isoquant::CellTable table = isoquant::fitTable(fit);
     BOOST_TEST((table.at(convergenceRow, 1) == text("not identified")));

@@ -34,16 +34,16 @@ BOOST_AUTO_TEST_CASE(unrestricted_fit_matches_computed_reference)
 {
     const auto fit = fit1928(0.0);
     BOOST_TEST(fit.inputLabels == (std::vector<std::string>{"L", "C"}), boost::test_tools::per_element());
-    BOOST_TEST(fit.regression.observations == 24);
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(0), "-0.1773097"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(1), "0.8072782"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(2), "0.2330535"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(0), "0.434293"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(1), "0.1450762"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(2), "0.0635297"));
+    BOOST_TEST(fit.summary.observations == 24);
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(0), "-0.1773097"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(1), "0.8072782"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(2), "0.2330535"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(0), "0.434293"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(1), "0.1450762"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(2), "0.0635297"));
     BOOST_TEST(agreesToDigitsGiven(fit.rSquared, "0.957425"));
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.residualStandardDeviation, "0.0581384"));
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.residualSumOfSquares, "0.0709816"));
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.residualStandardDeviation, "0.0581384"));
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.residualSumOfSquares, "0.0709816"));
 }
 
 // Computed reference (R 4.2.2): F test of bL + bC = 1, F = 0.1956, p = 0.663. The core's test is a
@@ -66,9 +66,9 @@ BOOST_AUTO_TEST_CASE(wald_f_equals_f_from_restricted_fit)
 {
     const auto unrestricted = fit1928(0.0);
     const auto restricted = fit1928(1.0);
-    const double rssU = unrestricted.regression.residualSumOfSquares;
-    const double rssR = restricted.regression.residualSumOfSquares;
-    const double fromFits = (rssR - rssU) / (rssU / unrestricted.regression.residualDegreesOfFreedom);
+    const double rssU = unrestricted.summary.residualSumOfSquares;
+    const double rssR = restricted.summary.residualSumOfSquares;
+    const double fromFits = (rssR - rssU) / (rssU / unrestricted.summary.residualDegreesOfFreedom);
     BOOST_TEST(closeTo(unrestricted.returns.fStatistic, fromFits, 1e-10));
 }
 
@@ -77,11 +77,11 @@ BOOST_AUTO_TEST_CASE(wald_f_equals_f_from_restricted_fit)
 BOOST_AUTO_TEST_CASE(hc1_errors_match_computed_reference)
 {
     const auto fit = fit1928(0.0, std::string("HC1"));
-    BOOST_TEST((fit.regression.covarianceKind == isoquant::CovarianceKind::hc1));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(1), "0.8072782"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(0), "0.547223"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(1), "0.215936"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(2), "0.105406"));
+    BOOST_TEST((fit.summary.covarianceKind == isoquant::CovarianceKind::hc1));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(1), "0.8072782"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(0), "0.547223"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(1), "0.215936"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(2), "0.105406"));
     BOOST_TEST(agreesToDigitsGiven(fit.returns.fStatistic, "0.11904"));
     BOOST_TEST(agreesToDigitsGiven(fit.returns.pValue, "0.7335"));
 }
@@ -91,24 +91,24 @@ BOOST_AUTO_TEST_CASE(hc1_errors_match_computed_reference)
 BOOST_AUTO_TEST_CASE(constant_returns_fit_matches_computed_reference)
 {
     const auto fit = fit1928(1.0);
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(0), "0.0145446"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(0), "0.019979"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(1), "0.7458658"));
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(1), "0.041224"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(2), "0.2541342"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(0), "0.0145446"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(0), "0.019979"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(1), "0.7458658"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(1), "0.041224"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(2), "0.2541342"));
     // b_C = 1 − b_L, so its standard error is that of b_L (the reference gives it as 0.041224).
-    BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(2), "0.041224"));
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.residualSumOfSquares, "0.0716427"));
-    BOOST_TEST(agreesToDigitsGiven(std::exp(fit.estimates(0)), "1.014651"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(2), "0.041224"));
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.residualSumOfSquares, "0.0716427"));
+    BOOST_TEST(agreesToDigitsGiven(std::exp(fit.inference.estimates(0)), "1.014651"));
 }
 
 // Published (Cobb & Douglas 1928): P = 1.01·L^0.75·C^0.25, given to two decimals.
 BOOST_AUTO_TEST_CASE(constant_returns_fit_reproduces_published_function)
 {
     const auto fit = fit1928(1.0);
-    BOOST_TEST(agreesToDigitsGiven(std::exp(fit.estimates(0)), "1.01"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(1), "0.75"));
-    BOOST_TEST(agreesToDigitsGiven(fit.estimates(2), "0.25"));
+    BOOST_TEST(agreesToDigitsGiven(std::exp(fit.inference.estimates(0)), "1.01"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(1), "0.75"));
+    BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(2), "0.25"));
 }
 
 // Imposed constant returns: ν is 1 by construction (b_C is formed as 1 − b_L) and nothing is tested.

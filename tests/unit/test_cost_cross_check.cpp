@@ -38,14 +38,14 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 double coreFigure(const isoquant::CostFit& fit, const std::string& q, Eigen::Index i)
 {
     const auto& summary = fit.summary;
-    if (q == "params") return summary.estimates(i);
-    if (q == "bse") return summary.standardErrors(i);
-    if (q == "pvalues") return summary.pValues(i);
+    if (q == "params") return summary.inference.estimates(i);
+    if (q == "bse") return summary.inference.standardErrors(i);
+    if (q == "pvalues") return summary.inference.pValues(i);
     if (q == "rsquared") return summary.rSquared;
-    if (q == "fvalue") return summary.regression.fStatistic;
-    if (q == "llf") return summary.regression.logLikelihood;
-    if (q == "aic") return summary.regression.aic;
-    if (q == "bic") return summary.regression.bic;
+    if (q == "fvalue") return summary.summary.fStatistic;
+    if (q == "llf") return summary.summary.logLikelihood;
+    if (q == "aic") return summary.summary.aic;
+    if (q == "bic") return summary.summary.bic;
     if (q == "smearing") return summary.smearingFactor;
     if (q == "elasticity") return fit.costElasticity.estimate;
     if (q == "elasticity_se") return fit.costElasticity.standardError;

@@ -113,8 +113,8 @@ BOOST_AUTO_TEST_CASE(prodcost_reads_the_frontier_as_the_least_cost)
     const CellTable table = isoquant::costFitTable(fit);
     BOOST_TEST(isoquant::isCostModel(table));
     const isoquant::CostModel model = isoquant::readCostModel(table);
-    BOOST_TEST(model.constant == fit.summary.estimates(0));
-    BOOST_TEST(model.output == fit.summary.estimates(1));
+    BOOST_TEST(model.constant == fit.summary.inference.estimates(0));
+    BOOST_TEST(model.output == fit.summary.inference.estimates(1));
     // Each row's cost lies above the frontier's by exp(ε), and E[exp(−u)|ε] ≤ 1.
     const Eigen::VectorXd efficiency = isoquant::testing::columnValuesUnder(
         isoquant::efficiencyColumn(table, arguments.cost, outputAndPrices(arguments, 2), Cell{}), "cost efficiency");

@@ -97,7 +97,7 @@ void compareMaximum(const isoquant::CostFit& fit, const std::string& dataset, co
     const Figures& f = figures();
     BOOST_REQUIRE(fit.frontier);
     const isoquant::StochasticFrontierFit& mirrored = fit.frontier->mirrored;
-    BOOST_TEST(isoquant::frontierStatusWord(mirrored.convergence) == "converged", mirrored.stopReason);
+    BOOST_TEST(isoquant::frontierStatusWord(mirrored.status.kind) == "converged", mirrored.status.reason);
     BOOST_TEST(!mirrored.wrongSkew);
     BOOST_TEST(closeTo(mirrored.logLikelihood, f.one(dataset, form, "llf"), 1e-9));
     const auto& coefficients = f.at(dataset, form, "coefficients");

@@ -134,9 +134,9 @@ BOOST_AUTO_TEST_CASE(noise_free_cost_data_give_the_dual_to_rounding)
     // Logs of exact products over 60 rows: the normal equations reproduce the parameters to
     // rounding, 1e-9 relative allows the condition number (about 1e2) times 1e-13 many times over.
     const isoquant::CostFit fit = isoquant::costFitFromArguments(laundryData(60, 7, 0.0));
-    BOOST_TEST(closeTo(fit.summary.estimates(1), 1.0 / returnsToScale(), 1e-9));
-    BOOST_TEST(closeTo(fit.summary.estimates(0), dualConstant(), 1e-9));
-    BOOST_TEST(closeTo(fit.summary.estimates(4), exponents(2) / returnsToScale(), 1e-9)); // the implied price
+    BOOST_TEST(closeTo(fit.summary.inference.estimates(1), 1.0 / returnsToScale(), 1e-9));
+    BOOST_TEST(closeTo(fit.summary.inference.estimates(0), dualConstant(), 1e-9));
+    BOOST_TEST(closeTo(fit.summary.inference.estimates(4), exponents(2) / returnsToScale(), 1e-9)); // the implied price
     const CellTable table = isoquant::costFitTable(fit);
     BOOST_TEST(table.text(table.rows() - 2, 2).find("exact") != std::string::npos);
 }

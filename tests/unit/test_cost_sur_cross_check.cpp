@@ -47,9 +47,9 @@ isoquant::CostFitArguments riceFarmCostsWithShares(const std::string& form)
 double coreFigure(const isoquant::CostFit& fit, const std::string& q, Eigen::Index i)
 {
     const auto& summary = fit.summary;
-    if (q == "params") return summary.estimates(i);
-    if (q == "bse") return summary.standardErrors(i);
-    if (q == "llf") return summary.regression.logLikelihood;
+    if (q == "params") return summary.inference.estimates(i);
+    if (q == "bse") return summary.inference.standardErrors(i);
+    if (q == "llf") return summary.summary.logLikelihood;
     if (q == "rsquared") return summary.rSquared;
     return std::numeric_limits<double>::quiet_NaN();
 }

@@ -58,7 +58,7 @@ BOOST_AUTO_TEST_CASE(block_follows_the_table_with_the_documented_size)
     BOOST_TEST(table.text(row + 2, 0) == "L");
     for (Eigen::Index i = 0; i < 3; ++i)
         for (Eigen::Index j = 0; j < 3; ++j)
-            BOOST_TEST(table.number(row + 1 + i, 1 + j) == fit.covariance(i, j));
+            BOOST_TEST(table.number(row + 1 + i, 1 + j) == fit.inference.covariance(i, j));
     // FALSE or empty: the table as before.
     BOOST_TEST(isoquant::fitTableWithCovariance(plain, fit, 0.0).rows() == plain.rows());
     BOOST_TEST(isoquant::fitTableWithCovariance(plain, fit, isoquant::Cell{}).rows() == plain.rows());
@@ -80,7 +80,7 @@ BOOST_AUTO_TEST_CASE(model_reader_reads_the_block_back)
         const auto fit = fit1928(std::string(errors));
         const auto model = isoquant::readProductionModel(tableWithBlock(fit));
         BOOST_REQUIRE(model.parameterCovariance.has_value());
-        BOOST_TEST((model.parameterCovariance->matrix == fit.covariance));
+        BOOST_TEST((model.parameterCovariance->matrix == fit.inference.covariance));
         BOOST_TEST(isoquant::covarianceKindWord(model.parameterCovariance->kind) == errors);
         BOOST_TEST(model.parameterCovariance->degreesOfFreedom == 21.0);
         BOOST_TEST(model.inputLabels == (std::vector<std::string>{"L", "C"}), boost::test_tools::per_element());
@@ -99,7 +99,7 @@ BOOST_AUTO_TEST_CASE(evaluators_and_lookups_work_with_the_block)
                isoquant::marginalProductColumn(plain, bundle, 1.0).number(0, 0));
     BOOST_TEST(isoquant::outputColumn(table, bundle).number(0, 0) == isoquant::outputColumn(plain, bundle).number(0, 0));
     BOOST_TEST(std::get<double>(isoquant::tableValue(table, std::string("C"), std::string("std. error"))) ==
-               fit.standardErrors(2));
+               fit.inference.standardErrors(2));
     BOOST_TEST(std::get<double>(isoquant::tableValue(table, std::string("R2"), isoquant::Cell{})) == fit.rSquared);
 }
 
@@ -172,7 +172,7 @@ BOOST_AUTO_TEST_CASE(singular_and_partly_missing_blocks_are_read_back)
         for (std::size_t i = 0; i < bundle.columns(); ++i) bundle.set(0, i, 10.0);
         const double upper =
             isoquant::elasticityColumnWithBounds(table, bundle, 1.0, std::string("upper bound")).number(0, 0);
-        BOOST_TEST(std::fabs(upper - fit.upperBounds(1)) <= 1e-12 * std::fabs(fit.upperBounds(1)));
+        BOOST_TEST(std::fabs(upper - fit.inference.upperBounds(1)) <= 1e-12 * std::fabs(fit.inference.upperBounds(1)));
     }
     const auto withEffects = tableWithBlock(isoquant::fitFromArguments(effects));
     BOOST_TEST(withEffects.text(blockRow(withEffects) + 1, 1) == "n/a"); // ln A's variance under effects

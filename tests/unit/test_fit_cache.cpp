@@ -64,7 +64,7 @@ BOOST_AUTO_TEST_CASE(different_arguments_fit_again)
     robust.errors = std::string("hc1");
     const auto hc1 = cache.fit(robust);
     BOOST_TEST(cache.fitsComputed() == 2u);
-    BOOST_TEST(hc1->standardErrors(1) != classical->standardErrors(1));
+    BOOST_TEST(hc1->inference.standardErrors(1) != classical->inference.standardErrors(1));
 
     // One data cell changed is a different fit too.
     auto changed = withLevel(0.95);

@@ -92,18 +92,18 @@ BOOST_AUTO_TEST_CASE(cells_hold_the_fit)
     const auto table = isoquant::fitTable(fit);
     for (Eigen::Index j = 0; j < 3; ++j) {
         const auto row = static_cast<std::size_t>(1 + j);
-        BOOST_TEST(number(table.at(row, 1)) == fit.estimates(j));
-        BOOST_TEST(number(table.at(row, 2)) == fit.standardErrors(j));
-        BOOST_TEST(number(table.at(row, 3)) == fit.tStatistics(j));
-        BOOST_TEST(number(table.at(row, 4)) == fit.pValues(j));
-        BOOST_TEST(number(table.at(row, 5)) == fit.lowerBounds(j));
-        BOOST_TEST(number(table.at(row, 6)) == fit.upperBounds(j));
+        BOOST_TEST(number(table.at(row, 1)) == fit.inference.estimates(j));
+        BOOST_TEST(number(table.at(row, 2)) == fit.inference.standardErrors(j));
+        BOOST_TEST(number(table.at(row, 3)) == fit.inference.tStatistics(j));
+        BOOST_TEST(number(table.at(row, 4)) == fit.inference.pValues(j));
+        BOOST_TEST(number(table.at(row, 5)) == fit.inference.lowerBounds(j));
+        BOOST_TEST(number(table.at(row, 6)) == fit.inference.upperBounds(j));
     }
     BOOST_TEST(number(table.at(5, 1)) == 24.0);
     BOOST_TEST(number(table.at(6, 1)) == fit.rSquared);
     BOOST_TEST(table.isEmpty(9, 1));
-    BOOST_TEST(number(table.at(9, 3)) == fit.regression.fStatistic);
-    BOOST_TEST(number(table.at(9, 4)) == fit.regression.fPValue);
+    BOOST_TEST(number(table.at(9, 3)) == fit.summary.fStatistic);
+    BOOST_TEST(number(table.at(9, 4)) == fit.summary.fPValue);
     BOOST_TEST(number(table.at(13, 1)) == fit.returns.estimate);
     BOOST_TEST(number(table.at(13, 2)) == fit.returns.standardError);
     BOOST_TEST(number(table.at(13, 3)) == fit.returns.fStatistic);
@@ -128,9 +128,9 @@ BOOST_AUTO_TEST_CASE(model_read_from_table_has_the_fitted_technology)
     BOOST_TEST((model.form == isoquant::ProductionForm::cobbDouglas));
     BOOST_TEST(model.inputLabels == (std::vector<std::string>{"L", "C"}), boost::test_tools::per_element());
     // Cells carry the doubles unchanged, so the round trip is exact.
-    BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
-    BOOST_TEST(cobbDouglasOf(model).exponents(0) == fit.estimates(1));
-    BOOST_TEST(cobbDouglasOf(model).exponents(1) == fit.estimates(2));
+    BOOST_TEST(cobbDouglasOf(model).logScale == fit.inference.estimates(0));
+    BOOST_TEST(cobbDouglasOf(model).exponents(0) == fit.inference.estimates(1));
+    BOOST_TEST(cobbDouglasOf(model).exponents(1) == fit.inference.estimates(2));
     BOOST_TEST_REQUIRE(model.scaleTest.has_value());
     BOOST_TEST(model.scaleTest->fStatistic == fit.returns.fStatistic);
     BOOST_TEST(model.scaleTest->pValue == fit.returns.pValue);
@@ -150,13 +150,13 @@ BOOST_AUTO_TEST_CASE(model_with_controls_uses_ln_a_at_control_means)
     const auto model = isoquant::readProductionModel(isoquant::fitTable(fit));
     BOOST_TEST(model.inputLabels == (std::vector<std::string>{"pcap", "pc", "emp"}), boost::test_tools::per_element());
     BOOST_TEST(cobbDouglasOf(model).exponents.size() == 3);
-    for (Eigen::Index i = 0; i < 3; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.estimates(1 + i));
+    for (Eigen::Index i = 0; i < 3; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.inference.estimates(1 + i));
     BOOST_TEST(cobbDouglasOf(model).logScale == fit.logScaleAtControlMeans);
 
     const auto unemp = isoquant::testing::CsvTable::read(isoquant::testing::dataPath("us_states_produc_1970_1986.csv"))
                            .numbers("unemp");
     const double meanUnemp = std::accumulate(unemp.begin(), unemp.end(), 0.0) / static_cast<double>(unemp.size());
-    BOOST_TEST(closeTo(cobbDouglasOf(model).logScale, fit.estimates(0) + fit.estimates(4) * meanUnemp, 1e-12));
+    BOOST_TEST(closeTo(cobbDouglasOf(model).logScale, fit.inference.estimates(0) + fit.inference.estimates(4) * meanUnemp, 1e-12));
 }
 
 // form | cobb-douglas; A | 1.01; labour | 0.75; capital | 0.25 — the published 1928 function typed
@@ -232,8 +232,8 @@ BOOST_AUTO_TEST_CASE(round_trip_holds_whatever_the_input_labels)
                 const auto model = isoquant::readProductionModel(isoquant::fitTable(fit));
                 BOOST_TEST(model.inputLabels.size() == 2u);
                 BOOST_TEST(model.inputLabels.at(1) == label);
-                BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
-                BOOST_TEST(cobbDouglasOf(model).exponents == fit.estimates.tail(2), boost::test_tools::per_element());
+                BOOST_TEST(cobbDouglasOf(model).logScale == fit.inference.estimates(0));
+                BOOST_TEST(cobbDouglasOf(model).exponents == fit.inference.estimates.tail(2), boost::test_tools::per_element());
             });
             BOOST_TEST(message == "<no InputError>");
         }
@@ -249,16 +249,16 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
         return isoquant::lookUpFitTable(table, row, column);
     };
     BOOST_TEST(number(look("r2", none)) == fit.rSquared);
-    BOOST_TEST(number(look("LN A", none)) == fit.estimates(0));
-    BOOST_TEST(number(look("PC", std::string("Std. Error"))) == fit.standardErrors(2));
-    BOOST_TEST(number(look("emp", std::string("UPPER BOUND"))) == fit.upperBounds(3));
+    BOOST_TEST(number(look("LN A", none)) == fit.inference.estimates(0));
+    BOOST_TEST(number(look("PC", std::string("Std. Error"))) == fit.inference.standardErrors(2));
+    BOOST_TEST(number(look("emp", std::string("UPPER BOUND"))) == fit.inference.upperBounds(3));
     // A control answers to its label with or without " (control)".
-    BOOST_TEST(number(look("unemp", none)) == fit.estimates(4));
-    BOOST_TEST(number(look("Unemp (Control)", std::string("p-value"))) == fit.pValues(4));
+    BOOST_TEST(number(look("unemp", none)) == fit.inference.estimates(4));
+    BOOST_TEST(number(look("Unemp (Control)", std::string("p-value"))) == fit.inference.pValues(4));
     // "F" is "F (slopes = 0)"; a row holding only a test statistic answers with it by default.
-    BOOST_TEST(number(look("F", none)) == fit.regression.fStatistic);
-    BOOST_TEST(number(look("f", std::string("p-value"))) == fit.regression.fPValue);
-    BOOST_TEST(number(look("F (slopes = 0)", none)) == fit.regression.fStatistic);
+    BOOST_TEST(number(look("F", none)) == fit.summary.fStatistic);
+    BOOST_TEST(number(look("f", std::string("p-value"))) == fit.summary.fPValue);
+    BOOST_TEST(number(look("F (slopes = 0)", none)) == fit.summary.fStatistic);
     BOOST_TEST(number(look("returns to scale", std::string("t"))) == fit.returns.fStatistic);
     BOOST_TEST(text(look("Verdict", none)) == "increasing");
     BOOST_TEST(number(look("ln A at control means", none)) == fit.logScaleAtControlMeans);
@@ -267,7 +267,7 @@ BOOST_AUTO_TEST_CASE(lookups_find_rows_and_columns)
     BOOST_TEST(number(look(" r2  ", none)) == fit.rSquared);
     BOOST_TEST(number(look("R\u00b2", none)) == fit.rSquared);
     BOOST_TEST(number(look("adjusted R\u00b2\u00a0", none)) == fit.adjustedRSquared);
-    BOOST_TEST(number(look("pc", std::string(" p-value "))) == fit.pValues(2));
+    BOOST_TEST(number(look("pc", std::string(" p-value "))) == fit.inference.pValues(2));
 
     BOOST_TEST(messageOf([&] { look("capital", none); }) ==
                "row label: 'capital' is not a row of the table; its rows are 'ln A', 'pcap', 'pc', 'emp', "

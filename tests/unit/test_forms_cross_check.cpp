@@ -94,9 +94,9 @@ constexpr double notANumber = std::numeric_limits<double>::quiet_NaN();
 
 double cesFigure(const isoquant::ProductionFit& fit, const std::string& q, Eigen::Index i)
 {
-    if (q == "params") return fit.estimates(i);
-    if (q == "bse") return fit.standardErrors(i);
-    if (q == "tvalues") return fit.tStatistics(i);
+    if (q == "params") return fit.inference.estimates(i);
+    if (q == "bse") return fit.inference.standardErrors(i);
+    if (q == "tvalues") return fit.inference.tStatistics(i);
     if (q == "sigma") return fit.ces->substitutionElasticity;
     if (q == "sigma_se") return fit.ces->substitutionStandardError;
     if (q == "nu_fvalue") return fit.returns.fStatistic;
@@ -106,14 +106,14 @@ double cesFigure(const isoquant::ProductionFit& fit, const std::string& q, Eigen
 double translogFigure(const isoquant::ProductionFit& fit, const std::string& q, Eigen::Index i)
 {
     const auto& t = *fit.translog;
-    if (q == "params") return fit.estimates(i);
-    if (q == "bse") return fit.standardErrors(i);
-    if (q == "pvalues") return fit.pValues(i);
-    if (q == "fvalue") return fit.regression.fStatistic;
-    if (q == "statsmodels_llf") return fit.regression.logLikelihood;
-    if (q == "elasticity") return t.elasticities(i);
-    if (q == "elasticity_se") return t.elasticityStandardErrors(i);
-    if (q == "elasticity_pvalue") return t.elasticityPValues(i);
+    if (q == "params") return fit.inference.estimates(i);
+    if (q == "bse") return fit.inference.standardErrors(i);
+    if (q == "pvalues") return fit.inference.pValues(i);
+    if (q == "fvalue") return fit.summary.fStatistic;
+    if (q == "statsmodels_llf") return fit.summary.logLikelihood;
+    if (q == "elasticity") return t.elasticities.estimates(i);
+    if (q == "elasticity_se") return t.elasticities.standardErrors(i);
+    if (q == "elasticity_pvalue") return t.elasticities.pValues(i);
     if (q == "nu") return fit.returns.estimate;
     if (q == "nu_se") return fit.returns.standardError;
     if (q == "nu_fvalue") return fit.returns.fStatistic;
@@ -142,12 +142,12 @@ double comparisonFigure(const isoquant::CellTable& table, const std::string& q)
 double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
 {
     const std::string& q = figure.quantity;
-    if (q == "rss") return fit.regression.residualSumOfSquares;
+    if (q == "rss") return fit.summary.residualSumOfSquares;
     if (q == "rsquared") return fit.rSquared;
     if (q == "rsquared_adj") return fit.adjustedRSquared;
-    if (q == "llf") return fit.regression.logLikelihood;
-    if (q == "aic") return fit.regression.aic;
-    if (q == "bic") return fit.regression.bic;
+    if (q == "llf") return fit.summary.logLikelihood;
+    if (q == "aic") return fit.summary.aic;
+    if (q == "bic") return fit.summary.bic;
     return figure.form == "ces" ? cesFigure(fit, q, figure.index) : translogFigure(fit, q, figure.index);
 }
 
@@ -220,13 +220,13 @@ BOOST_AUTO_TEST_CASE(ces_near_fixed_proportions_reaches_scipys_best_optimum,
     for (const auto& [name, c] : cases) {
         BOOST_TEST_REQUIRE((c.y.size() == 40u && c.x1.size() == 40u && c.x2.size() == 40u));
         const auto fit = isoquant::fitCes(rho50Data(c), options);
-        const double rss = fit.regression.residualSumOfSquares;
+        const double rss = fit.summary.residualSumOfSquares;
         BOOST_TEST(rss <= c.bestRss * (1 + 1e-7), std::setprecision(17) << name << ": core " << rss << " ("
-                   << isoquant::cesStatusWord(fit.ces->convergence) << "), scipy's best " << c.bestRss);
+                   << isoquant::convergenceWord(fit.status.kind) << "), scipy's best " << c.bestRss);
         // Never "converged" at an interior point without standard errors: that is "not identified".
-        if (fit.ces->convergence == isoquant::NonlinearStatus::converged &&
+        if (fit.status.converged() &&
             fit.ces->boundary == isoquant::CesBoundary::none)
-            BOOST_TEST(fit.standardErrors.allFinite(), name << ": converged without standard errors");
+            BOOST_TEST(fit.inference.standardErrors.allFinite(), name << ": converged without standard errors");
     }
 }
 

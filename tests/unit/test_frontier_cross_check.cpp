@@ -81,7 +81,7 @@ void compareMaximum(const isoquant::ProductionFrontier& frontier, const std::str
     const isoquant::StochasticFrontierFit& fit = frontier.fit;
     BOOST_TEST_CONTEXT(dataset << " " << form)
     {
-        BOOST_TEST(isoquant::frontierStatusWord(fit.convergence) == "converged", fit.stopReason);
+        BOOST_TEST(isoquant::frontierStatusWord(fit.status.kind) == "converged", fit.status.reason);
         BOOST_TEST(closeTo(fit.logLikelihood, f.one(dataset, form, "llf"), 1e-9));
         const auto& coefficients = f.at(dataset, form, "coefficients");
         const auto& errors = f.at(dataset, form, "coefficient_se");

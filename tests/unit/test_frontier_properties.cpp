@@ -113,7 +113,7 @@ BOOST_AUTO_TEST_CASE(mean_efficiency_approaches_the_true_mean_on_100000_rows)
         const isoquant::ProductionFrontier frontier = isoquant::frontierFromArguments(argumentsOf(data, words[d]));
         BOOST_TEST_CONTEXT(words[d])
         {
-            BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.convergence) == "converged");
+            BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.status.kind) == "converged");
             BOOST_TEST(std::fabs(isoquant::meanEfficiency(frontier.fit) - data.meanEfficiency) <= 0.005,
                        isoquant::meanEfficiency(frontier.fit) << " vs " << data.meanEfficiency);
         }
@@ -130,7 +130,7 @@ BOOST_AUTO_TEST_CASE(time_of_a_10000_row_fit_is_reported)
     const double seconds = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     BOOST_TEST_MESSAGE("frontier fit, 10,000 rows, half-normal: " << seconds * 1000 << " ms, "
                                                                   << frontier.fit.evaluations << " score evaluations");
-    BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.convergence) == "converged");
+    BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.status.kind) == "converged");
 }
 
 BOOST_AUTO_TEST_CASE(table_layout_and_lookups)
@@ -253,7 +253,7 @@ BOOST_AUTO_TEST_CASE(likelihood_rising_toward_no_noise_is_reported_as_boundary)
 {
     const Invented data = invent(40, isoquant::InefficiencyDistribution::halfNormal, 0.4, 15);
     const isoquant::ProductionFrontier frontier = isoquant::frontierFromArguments(argumentsOf(data, ""));
-    BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.convergence) == "boundary");
+    BOOST_TEST(isoquant::frontierStatusWord(frontier.fit.status.kind) == "boundary");
     const isoquant::CellTable table = isoquant::frontierTable(frontier);
     BOOST_TEST(messageOf([&] {
                    isoquant::efficiencyColumn(table, numberRange(data.output), numberRange(data.inputs), {});

@@ -54,15 +54,15 @@ bool checkCertifiedValues(const NistCase& nistCase, const isoquant::LeastSquares
 
     double worst = 15.0;
     for (Eigen::Index j = 0; j < dataset.certifiedEstimates.size(); ++j) {
-        const double estimateLre = logRelativeError(fit.coefficients(j), dataset.certifiedEstimates(j));
-        const double deviationLre = logRelativeError(fit.standardErrors(j), dataset.certifiedStandardDeviations(j));
+        const double estimateLre = logRelativeError(fit.inference.estimates(j), dataset.certifiedEstimates(j));
+        const double deviationLre = logRelativeError(fit.inference.standardErrors(j), dataset.certifiedStandardDeviations(j));
         BOOST_TEST(estimateLre >= nistCase.requiredLre, nistCase.file << " B" << j << " estimate LRE " << estimateLre);
         BOOST_TEST(deviationLre >= nistCase.requiredLre, nistCase.file << " B" << j << " SD LRE " << deviationLre);
         worst = std::min({worst, estimateLre, deviationLre});
     }
     const double residualLre =
-        logRelativeError(fit.residualStandardDeviation, dataset.certifiedResidualStandardDeviation);
-    const double rSquaredLre = logRelativeError(fit.rSquared, dataset.certifiedRSquared);
+        logRelativeError(fit.summary.residualStandardDeviation, dataset.certifiedResidualStandardDeviation);
+    const double rSquaredLre = logRelativeError(fit.summary.rSquared, dataset.certifiedRSquared);
     BOOST_TEST(residualLre >= nistCase.requiredLre, nistCase.file << " residual SD LRE " << residualLre);
     BOOST_TEST(rSquaredLre >= nistCase.requiredLre, nistCase.file << " R² LRE " << rSquaredLre);
     worst = std::min({worst, residualLre, rSquaredLre});

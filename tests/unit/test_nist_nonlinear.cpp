@@ -80,17 +80,17 @@ BOOST_DATA_TEST_CASE(misra1a_certified_values_from_both_starts, bdata::make(nist
     const double lres[] = {
         logRelativeError(fit.parameters(0), certifiedB1),
         logRelativeError(fit.parameters(1), certifiedB2),
-        logRelativeError(fit.inference.residualSumOfSquares, certifiedResidualSumOfSquares),
+        logRelativeError(fit.summary.residualSumOfSquares, certifiedResidualSumOfSquares),
         logRelativeError(fit.inference.standardErrors(0), certifiedSd1),
         logRelativeError(fit.inference.standardErrors(1), certifiedSd2),
-        logRelativeError(fit.inference.residualStandardDeviation, certifiedResidualSd),
+        logRelativeError(fit.summary.residualStandardDeviation, certifiedResidualSd),
     };
     const char* names[] = {"b1", "b2", "RSS", "SD b1", "SD b2", "residual SD"};
     for (std::size_t i = 0; i < std::size(lres); ++i) {
         BOOST_TEST(lres[i] >= requiredLre, "Misra1a from " << start << ": " << names[i] << " LRE " << lres[i]);
         std::cout << "Misra1a from " << start << ": " << names[i] << " LRE " << lres[i] << "\n";
     }
-    BOOST_TEST(fit.inference.residualDegreesOfFreedom == 12.0); // NIST: 12 degrees of freedom
+    BOOST_TEST(fit.summary.residualDegreesOfFreedom == 12.0); // NIST: 12 degrees of freedom
 }
 
 BOOST_AUTO_TEST_CASE(start_outside_the_domain_is_refused)

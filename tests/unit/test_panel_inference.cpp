@@ -81,9 +81,9 @@ BOOST_AUTO_TEST_CASE(wald_tests_beyond_the_cluster_rank_are_not_available)
         arguments.errors = std::string("cluster");
         const auto fit = isoquant::fitFromArguments(arguments);
         BOOST_TEST(fit.panel.groups == static_cast<Eigen::Index>(states));
-        BOOST_TEST(fit.regression.overallRestrictions == 5);
-        BOOST_TEST(fit.regression.overallTestExceedsClusters);
-        BOOST_TEST(std::isnan(fit.regression.fStatistic));
+        BOOST_TEST(fit.summary.overallRestrictions == 5);
+        BOOST_TEST(fit.summary.overallTestExceedsClusters);
+        BOOST_TEST(std::isnan(fit.summary.fStatistic));
         BOOST_TEST(isNotAvailable(isoquant::lookUpFit(fit, std::string("F"), std::string("t"))));
         BOOST_TEST(isNotAvailable(isoquant::lookUpFit(fit, std::string("F"), std::string("p-value"))));
         const std::string expected = "note: too few groups for F (slopes = 0): its 5 restrictions exceed the " +
@@ -92,18 +92,18 @@ BOOST_AUTO_TEST_CASE(wald_tests_beyond_the_cluster_rank_are_not_available)
         BOOST_TEST(formNote(fit) == expected);
         // One restriction (ν = 1) and the standard errors are still defined.
         BOOST_TEST(std::isfinite(fit.returns.fStatistic));
-        BOOST_TEST(std::isfinite(fit.standardErrors(1)));
+        BOOST_TEST(std::isfinite(fit.inference.standardErrors(1)));
         // The same rows with classical errors: the F is a number and the form row has no note.
         arguments.errors = std::string("classical");
         const auto classical = isoquant::fitFromArguments(arguments);
-        BOOST_TEST(std::isfinite(classical.regression.fStatistic));
+        BOOST_TEST(std::isfinite(classical.summary.fStatistic));
         BOOST_TEST(formNote(classical).empty());
     }
     // 6 states carry 5 restrictions: the test is a number again.
     auto arguments = firstStates(6);
     arguments.effects = std::string("fixed");
     arguments.errors = std::string("cluster");
-    BOOST_TEST(std::isfinite(isoquant::fitFromArguments(arguments).regression.fStatistic));
+    BOOST_TEST(std::isfinite(isoquant::fitFromArguments(arguments).summary.fStatistic));
 }
 
 // statsmodels 0.13.5, one dummy per state, CR1 scaled as in the header: the four slopes' errors.
@@ -112,7 +112,7 @@ BOOST_AUTO_TEST_CASE(within_cr1_errors_match_fixed_statsmodels_figures)
     const auto fit = isoquant::fitFromArguments(withinArguments("cluster"));
     const char* errors[] = {"0.061114767", "0.062549556", "0.082732715", "0.0025284645"};
     for (Eigen::Index j = 0; j < 4; ++j)
-        BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(1 + j), errors[j]), "parameter " << j + 1);
+        BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(1 + j), errors[j]), "parameter " << j + 1);
 }
 
 // statsmodels 0.13.5, one dummy per state, cov_type="HC3": its leverages are those of the
@@ -122,7 +122,7 @@ BOOST_AUTO_TEST_CASE(within_hc3_errors_match_fixed_statsmodels_figures)
     const auto fit = isoquant::fitFromArguments(withinArguments("hc3"));
     const char* errors[] = {"0.033635041", "0.032871865", "0.042989094", "0.0011760356"};
     for (Eigen::Index j = 0; j < 4; ++j)
-        BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(1 + j), errors[j]), "parameter " << j + 1);
+        BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(1 + j), errors[j]), "parameter " << j + 1);
 }
 
 // statsmodels 0.13.5: state and year dummies, f_test of the four slopes = 0 (classical), printed
@@ -132,8 +132,8 @@ BOOST_AUTO_TEST_CASE(two_way_f_tests_the_slopes_only)
     auto arguments = isoquant::testing::statePanelWithPanelColumns();
     arguments.effects = std::string("two-way");
     const auto fit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST(fit.regression.overallRestrictions == 4);
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.fStatistic, "576.13409"));
+    BOOST_TEST(fit.summary.overallRestrictions == 4);
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.fStatistic, "576.13409"));
 }
 
 // Item: CR1 under fixed effects against the old factor, with T = 2 (1970 and 1971, 96 rows, 48
@@ -148,7 +148,7 @@ BOOST_AUTO_TEST_CASE(cr1_with_two_periods_differs_from_the_dummy_factor_by_the_r
     arguments.effects = std::string("fixed");
     arguments.errors = std::string("cluster");
     const auto fit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST_REQUIRE(fit.regression.observations == 96);
+    BOOST_TEST_REQUIRE(fit.summary.observations == 96);
 
     const auto all = isoquant::testing::statePanelWithPanelColumns();
     const Eigen::Index n = 96, k = 4, groups = 48;
@@ -169,8 +169,8 @@ BOOST_AUTO_TEST_CASE(cr1_with_two_periods_differs_from_the_dummy_factor_by_the_r
     const auto dummies = isoquant::fitLeastSquares(design, response, 0, options);
     const double ratio = std::sqrt(static_cast<double>(n - k - groups) / static_cast<double>(n - k - 1));
     for (Eigen::Index j = 1; j <= k; ++j) {
-        const double expected = dummies.standardErrors(j) * ratio;
-        BOOST_TEST(std::fabs(fit.standardErrors(j) - expected) <= 1e-10 * expected, "parameter " << j);
+        const double expected = dummies.inference.standardErrors(j) * ratio;
+        BOOST_TEST(std::fabs(fit.inference.standardErrors(j) - expected) <= 1e-10 * expected, "parameter " << j);
     }
 }
 
@@ -211,7 +211,7 @@ BOOST_AUTO_TEST_CASE(hc3_names_a_row_of_leverage_one)
     for (const char* errors : {"hc1", "cluster"}) {
         arguments.errors = std::string(errors);
         const auto fit = isoquant::fitFromArguments(arguments);
-        BOOST_TEST(fit.standardErrors.tail(4).allFinite(), errors);
+        BOOST_TEST(fit.inference.standardErrors.tail(4).allFinite(), errors);
     }
 }
 

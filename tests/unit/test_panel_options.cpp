@@ -71,8 +71,8 @@ BOOST_AUTO_TEST_CASE(trend_and_effects_are_recovered)
         BOOST_TEST_REQUIRE(fit.panel.technicalChange.has_value());
         const auto& change = *fit.panel.technicalChange;
         BOOST_TEST(std::fabs(change.estimate - 0.02) <= 3 * change.standardError, "seed " << seed << ": " << change.estimate);
-        BOOST_TEST(std::fabs(fit.estimates(1) - 0.6) <= 3 * fit.standardErrors(1), "seed " << seed);
-        BOOST_TEST(std::fabs(fit.estimates(2) - 0.3) <= 3 * fit.standardErrors(2), "seed " << seed);
+        BOOST_TEST(std::fabs(fit.inference.estimates(1) - 0.6) <= 3 * fit.inference.standardErrors(1), "seed " << seed);
+        BOOST_TEST(std::fabs(fit.inference.estimates(2) - 0.3) <= 3 * fit.inference.standardErrors(2), "seed " << seed);
         BOOST_TEST((fit.panel.groupEffects - panel.plantEffects).cwiseAbs().maxCoeff() <= 0.1, "seed " << seed);
         // ln A for predictions: the mean plant effect moved to 2022 by 7 years of the trend.
         BOOST_TEST(std::fabs(fit.panel.logScaleForPredictions - (fit.panel.groupEffects.mean() + 7 * change.estimate)) <=
@@ -89,8 +89,8 @@ BOOST_AUTO_TEST_CASE(smearing_factor_is_mean_of_exp_residual)
     const auto fit = isoquant::fitFromArguments(arguments);
     double sum = 0;
     for (std::size_t row = 1; row < arguments.output.rows(); ++row) {
-        const double fitted = fit.estimates(0) + fit.estimates(1) * std::log(arguments.inputs.number(row, 0)) +
-                              fit.estimates(2) * std::log(arguments.inputs.number(row, 1));
+        const double fitted = fit.inference.estimates(0) + fit.inference.estimates(1) * std::log(arguments.inputs.number(row, 0)) +
+                              fit.inference.estimates(2) * std::log(arguments.inputs.number(row, 1));
         sum += std::exp(std::log(arguments.output.number(row, 0)) - fitted);
     }
     const double expected = sum / 24.0;
@@ -108,7 +108,7 @@ BOOST_AUTO_TEST_CASE(incomplete_rows_are_dropped_only_when_asked)
     arguments.incompleteRows = 1.0;
     const auto fit = isoquant::fitFromArguments(arguments);
     BOOST_TEST(fit.panel.incompleteRowsDropped == 2);
-    BOOST_TEST(fit.regression.observations == 22);
+    BOOST_TEST(fit.summary.observations == 22);
     // A zero is not missing: it is still an error, at its own row.
     arguments.inputs.set(7, 0, 0.0);
     BOOST_TEST(messageOf([&] { isoquant::fitFromArguments(arguments); }) ==
@@ -154,8 +154,8 @@ BOOST_AUTO_TEST_CASE(whole_columns_end_at_their_last_value)
     BOOST_TEST((cut.inputs == exact.inputs));
     const auto fromWhole = isoquant::fitFromArguments(whole);
     const auto fromExact = isoquant::fitFromArguments(exact);
-    BOOST_TEST((fromWhole.estimates == fromExact.estimates));
-    BOOST_TEST(fromWhole.regression.observations == 24);
+    BOOST_TEST((fromWhole.inference.estimates == fromExact.inference.estimates));
+    BOOST_TEST(fromWhole.summary.observations == 24);
     // A blank row inside the data is not a tail.
     whole.output.setEmpty(9, 0);
     whole.inputs.setEmpty(9, 0);

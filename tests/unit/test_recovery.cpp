@@ -64,20 +64,20 @@ BOOST_AUTO_TEST_CASE(known_technology_is_recovered_for_1_to_20_inputs)
     for (int k = 1; k <= 20; ++k) {
         const auto generated = generate(engine, k);
         const auto fit = isoquant::fitFromArguments(generated.arguments);
-        BOOST_TEST_REQUIRE(fit.estimates.size() == 1 + k);
+        BOOST_TEST_REQUIRE(fit.inference.estimates.size() == 1 + k);
         BOOST_TEST(fit.inputLabels.back() == "input " + std::to_string(k));
         for (int j = 0; j <= k; ++j) {
-            const double miss = std::fabs(fit.estimates(j) - generated.truth(j));
-            BOOST_TEST(miss <= 4 * fit.standardErrors(j),
-                       k << " inputs, parameter " << j << ": off by " << miss << ", SE " << fit.standardErrors(j));
+            const double miss = std::fabs(fit.inference.estimates(j) - generated.truth(j));
+            BOOST_TEST(miss <= 4 * fit.inference.standardErrors(j),
+                       k << " inputs, parameter " << j << ": off by " << miss << ", SE " << fit.inference.standardErrors(j));
         }
         const double nu = generated.truth.tail(k).sum();
         BOOST_TEST(std::fabs(fit.returns.estimate - nu) <= 4 * fit.returns.standardError, k << " inputs: ν");
         // The standard errors are not inflated: the residual SD estimates the noise SD 0.05 with
         // relative sampling error about 1/√(2(n − p)) ≤ 0.1 (n − p ≥ 48), so it lies in
         // [0.03, 0.07], at least 4 of those errors wide on either side.
-        BOOST_TEST(fit.regression.residualStandardDeviation >= 0.03);
-        BOOST_TEST(fit.regression.residualStandardDeviation <= 0.07);
+        BOOST_TEST(fit.summary.residualStandardDeviation >= 0.03);
+        BOOST_TEST(fit.summary.residualStandardDeviation <= 0.07);
     }
 }
 
@@ -94,7 +94,7 @@ BOOST_AUTO_TEST_CASE(standard_error_of_nu_is_that_of_the_sum_of_exponents)
             auto generated = generate(engine, k);
             generated.arguments.errors = std::string(errors);
             const auto fit = isoquant::fitFromArguments(generated.arguments);
-            const double quadraticForm = fit.covariance.block(1, 1, k, k).sum();
+            const double quadraticForm = fit.inference.covariance.block(1, 1, k, k).sum();
             BOOST_TEST(closeTo(fit.returns.standardError, std::sqrt(quadraticForm), 1e-12));
 
             isoquant::CellTable ratios = generated.arguments.inputs;
@@ -105,9 +105,9 @@ BOOST_AUTO_TEST_CASE(standard_error_of_nu_is_that_of_the_sum_of_exponents)
             auto reparameterised = generated.arguments;
             reparameterised.inputs = ratios;
             const auto refit = isoquant::fitFromArguments(reparameterised);
-            BOOST_TEST(closeTo(refit.estimates(k), fit.returns.estimate, 1e-9));
+            BOOST_TEST(closeTo(refit.inference.estimates(k), fit.returns.estimate, 1e-9));
             BOOST_TEST_INFO(k << " inputs, " << errors << " errors");
-            BOOST_TEST(closeTo(refit.standardErrors(k), fit.returns.standardError, 1e-9));
+            BOOST_TEST(closeTo(refit.inference.standardErrors(k), fit.returns.standardError, 1e-9));
         }
     }
 }
@@ -124,8 +124,8 @@ BOOST_AUTO_TEST_CASE(twenty_inputs_round_trip_through_the_table)
     BOOST_TEST(table.rows() == isoquant::fitTableRows(20, 0));
     const auto model = isoquant::readProductionModel(table);
     BOOST_TEST_REQUIRE(cobbDouglasOf(model).exponents.size() == 20);
-    BOOST_TEST(cobbDouglasOf(model).logScale == fit.estimates(0));
-    for (int i = 0; i < 20; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.estimates(1 + i));
+    BOOST_TEST(cobbDouglasOf(model).logScale == fit.inference.estimates(0));
+    for (int i = 0; i < 20; ++i) BOOST_TEST(cobbDouglasOf(model).exponents(i) == fit.inference.estimates(1 + i));
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -33,10 +33,10 @@ BOOST_AUTO_TEST_SUITE(state_panel)
 BOOST_AUTO_TEST_CASE(pooled_elasticities_are_near_published)
 {
     const auto fit = pooledFit();
-    BOOST_TEST(fit.regression.observations == 816);
-    BOOST_TEST(std::fabs(fit.estimates(1) - 0.15) <= 0.01, "pcap " << fit.estimates(1));
-    BOOST_TEST(std::fabs(fit.estimates(2) - 0.31) <= 0.01, "pc " << fit.estimates(2));
-    BOOST_TEST(std::fabs(fit.estimates(3) - 0.59) <= 0.01, "emp " << fit.estimates(3));
+    BOOST_TEST(fit.summary.observations == 816);
+    BOOST_TEST(std::fabs(fit.inference.estimates(1) - 0.15) <= 0.01, "pcap " << fit.inference.estimates(1));
+    BOOST_TEST(std::fabs(fit.inference.estimates(2) - 0.31) <= 0.01, "pc " << fit.inference.estimates(2));
+    BOOST_TEST(std::fabs(fit.inference.estimates(3) - 0.59) <= 0.01, "emp " << fit.inference.estimates(3));
 }
 
 // Computed reference (R 4.2.2 lm, pooled OLS): estimates with classical SEs in brackets,
@@ -49,12 +49,12 @@ BOOST_AUTO_TEST_CASE(pooled_fit_matches_computed_reference)
     const char* estimates[] = {"1.643302", "0.155007", "0.309190", "0.593935", "-0.006733"};
     const char* errors[] = {"0.057587", "0.017154", "0.010272", "0.013747", "0.001416"};
     for (Eigen::Index j = 0; j < 5; ++j) {
-        BOOST_TEST(agreesToDigitsGiven(fit.estimates(j), estimates[j]), "parameter " << j);
-        BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(j), errors[j]), "parameter " << j);
+        BOOST_TEST(agreesToDigitsGiven(fit.inference.estimates(j), estimates[j]), "parameter " << j);
+        BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(j), errors[j]), "parameter " << j);
     }
     BOOST_TEST(agreesToDigitsGiven(fit.rSquared, "0.992593"));
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.residualStandardDeviation, "0.088096"));
-    BOOST_TEST(agreesToDigitsGiven(fit.regression.residualSumOfSquares, "6.294154"));
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.residualStandardDeviation, "0.088096"));
+    BOOST_TEST(agreesToDigitsGiven(fit.summary.residualSumOfSquares, "6.294154"));
 }
 
 // Computed reference (R 4.2.2, sandwich HC1): 0.070989, 0.018574, 0.012517, 0.019594, 0.001341.
@@ -63,7 +63,7 @@ BOOST_AUTO_TEST_CASE(pooled_hc1_errors_match_computed_reference)
     const auto fit = pooledFit(std::string("hc1"));
     const char* errors[] = {"0.070989", "0.018574", "0.012517", "0.019594", "0.001341"};
     for (Eigen::Index j = 0; j < 5; ++j)
-        BOOST_TEST(agreesToDigitsGiven(fit.standardErrors(j), errors[j]), "parameter " << j);
+        BOOST_TEST(agreesToDigitsGiven(fit.inference.standardErrors(j), errors[j]), "parameter " << j);
 }
 
 // Computed reference (R 4.2.2): F test that the three elasticities sum to 1, classical: 270.9.

@@ -100,15 +100,16 @@ isoquant::ProductionFit coreFit(const Figure& figure)
 // The core's figure matching a statsmodels quantity; NaN when the quantity is unknown.
 double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
 {
-    const auto& r = fit.regression;
+    const auto& r = fit.summary;
     const Eigen::Index i = figure.index;
     const std::string& q = figure.quantity;
     if (figure.level == "regression") {
-        if (q == "params") return r.coefficients(i);
-        if (q == "bse") return r.standardErrors(i);
-        if (q == "pvalues") return r.pValues(i);
-        if (q == "low") return r.lowerBounds(i);
-        if (q == "high") return r.upperBounds(i);
+        const isoquant::ParameterInference& run = fit.regressionInference;
+        if (q == "params") return run.estimates(i);
+        if (q == "bse") return run.standardErrors(i);
+        if (q == "pvalues") return run.pValues(i);
+        if (q == "low") return run.lowerBounds(i);
+        if (q == "high") return run.upperBounds(i);
         if (q == "rsquared") return r.rSquared;
         if (q == "rsquared_adj") return r.adjustedRSquared;
         if (q == "ssr") return r.residualSumOfSquares;
@@ -118,12 +119,12 @@ double coreFigure(const isoquant::ProductionFit& fit, const Figure& figure)
         if (q == "aic") return r.aic;
         if (q == "bic") return r.bic;
     } else if (figure.level == "production") {
-        if (q == "params") return fit.estimates(i);
-        if (q == "bse") return fit.standardErrors(i);
-        if (q == "tvalues") return fit.tStatistics(i);
-        if (q == "pvalues") return fit.pValues(i);
-        if (q == "low") return fit.lowerBounds(i);
-        if (q == "high") return fit.upperBounds(i);
+        if (q == "params") return fit.inference.estimates(i);
+        if (q == "bse") return fit.inference.standardErrors(i);
+        if (q == "tvalues") return fit.inference.tStatistics(i);
+        if (q == "pvalues") return fit.inference.pValues(i);
+        if (q == "low") return fit.inference.lowerBounds(i);
+        if (q == "high") return fit.inference.upperBounds(i);
         if (q == "rsquared") return fit.rSquared;
         if (q == "rsquared_adj") return fit.adjustedRSquared;
         if (q == "fvalue") return r.fStatistic;

@@ -59,7 +59,7 @@ void checkAgainstIndependentLeastSquares(const isoquant::FitArguments& arguments
     const isoquant::ProductionFit fit = isoquant::fitFromArguments(arguments);
     const Eigen::VectorXd expected =
         logLinearLeastSquares(valuesOf(arguments.output).col(0), valuesOf(arguments.inputs));
-    for (Eigen::Index j = 0; j < expected.size(); ++j) BOOST_TEST(closeTo(fit.estimates(j), expected(j), 1e-9));
+    for (Eigen::Index j = 0; j < expected.size(); ++j) BOOST_TEST(closeTo(fit.inference.estimates(j), expected(j), 1e-9));
 }
 
 std::string textOf(const CellTable& table)
@@ -147,9 +147,9 @@ BOOST_AUTO_TEST_CASE(fits_take_exact_logs_of_subnormal_data)
     }
     const isoquant::ProductionFit low = isoquant::fitFromArguments(halved);
     const isoquant::ProductionFit high = isoquant::fitFromArguments(restored);
-    BOOST_TEST(closeTo(low.estimates(0), high.estimates(0) - 1060 * std::log(2.0), 1e-9));
-    BOOST_TEST(closeTo(low.estimates(1), high.estimates(1), 1e-9));
-    BOOST_TEST(closeTo(low.estimates(2), high.estimates(2), 1e-9));
+    BOOST_TEST(closeTo(low.inference.estimates(0), high.inference.estimates(0) - 1060 * std::log(2.0), 1e-9));
+    BOOST_TEST(closeTo(low.inference.estimates(1), high.inference.estimates(1), 1e-9));
+    BOOST_TEST(closeTo(low.inference.estimates(2), high.inference.estimates(2), 1e-9));
 }
 
 BOOST_AUTO_TEST_CASE(least_cost_amounts_below_the_normal_doubles_are_refused)

@@ -184,9 +184,11 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
         bestRun(model, solverStarts(logs, cesOptions, solverOptions), solverOptions);
 
     CesDetails details;
-    details.convergence = kept.status;
-    details.stopReason = kept.stopReason;
     details.evaluations = kept.evaluations;
+    FitStatus status;
+    status.reason = kept.stopReason;
+    if (kept.status == NonlinearStatus::evaluationLimit) status.kind = FitStatusKind::notConverged;
+    if (kept.status == NonlinearStatus::stopped) status.kind = FitStatusKind::stopped;
     Eigen::VectorXd reached = kept.parameters;
     if (kept.status == NonlinearStatus::converged &&
         boundaryOf(logs, reached, cesOptions.boundaryDistance) == CesBoundary::none)
@@ -201,7 +203,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     case CesBoundary::fixedProportions: // ρ keeps the value reached
     case CesBoundary::none: break;
     }
-    return reportAt(data, logs, raw, std::move(details), options, cesOptions.solver.rankTolerance);
+    return reportAt(data, logs, raw, std::move(details), std::move(status), options, cesOptions.solver.rankTolerance);
 }
 
 } // namespace isoquant

@@ -9,9 +9,11 @@
 namespace isoquant::ces_fit {
 
 // `raw` is the point kept, with a boundary parameter already set to its boundary value; `details`
-// its convergence, stop reason, evaluations and boundary. A converged interior point whose
-// Jacobian is rank deficient (rankTolerance) is marked NonlinearStatus::notIdentified here.
+// its evaluations and boundary; `solverStatus` ok, notConverged or stopped with the solver's stop
+// reason. The fit's status is settled here (ces_fit.hpp): a converged interior point whose
+// Jacobian is rank deficient (rankTolerance) becomes notIdentified, a converged boundary point
+// boundary, a converged interior one with zero residuals exactFit.
 ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Eigen::Vector4d& raw, CesDetails details,
-                       const ProductionFitOptions& options, double rankTolerance);
+                       FitStatus solverStatus, const ProductionFitOptions& options, double rankTolerance);
 
 } // namespace isoquant::ces_fit

@@ -78,7 +78,7 @@ std::optional<Eigen::Vector4d> kmentaStart(const CesLogs& logs)
     } catch (const CollinearColumns&) {
         return std::nullopt;
     }
-    const Eigen::VectorXd& b = kmenta.coefficients;
+    const Eigen::VectorXd& b = kmenta.inference.estimates;
     const double nu = b(1) + b(2);
     if (!(nu > 0)) return std::nullopt;
     // Kept inside the domain, where a start must lie, when the approximation strays outside it.

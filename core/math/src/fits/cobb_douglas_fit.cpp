@@ -3,7 +3,6 @@
 #include "isoquant/math/fits/returns_to_scale.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
-#include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
@@ -105,7 +104,7 @@ double totalSumOfSquaresOfLogs(const ProductionData& data, const ProductionFitOp
                                const LeastSquaresResult& regression)
 {
     const bool responseIsLogOutput = !options.constantReturns && options.effects == EffectsKind::none;
-    return responseIsLogOutput ? regression.totalSumOfSquares : centredSumOfSquaresOfLogs(data.output);
+    return responseIsLogOutput ? regression.summary.totalSumOfSquares : centredSumOfSquaresOfLogs(data.output);
 }
 
 // Names the inputs, controls, trend or period effects behind collinear design columns (in the
@@ -186,13 +185,6 @@ void requirePanelColumns(const ProductionData& data, const ProductionFitOptions&
     }
 }
 
-ParameterEstimate parameterAt(const LeastSquaresResult& regression, Eigen::Index column)
-{
-    return {regression.coefficients(column), regression.standardErrors(column), regression.tStatistics(column),
-            regression.pValues(column),      regression.lowerBounds(column),    regression.upperBounds(column)};
-}
-
-// `regression` is run.regression, moved into the fit.
 PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, const PanelRegression& run,
                             const LeastSquaresResult& regression, double logScaleAtControlMeans)
 {
@@ -208,10 +200,10 @@ PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, cons
         summary.periods = run.periodValues;
         const auto later = static_cast<Eigen::Index>(run.periodValues.size()) - 1;
         summary.periodEffects.resize(later + 1);
-        summary.periodEffects << 0.0, regression.coefficients.segment(run.firstPeriodColumn, later);
+        summary.periodEffects << 0.0, regression.inference.estimates.segment(run.firstPeriodColumn, later);
     }
     if (run.trendColumn) {
-        summary.technicalChange = parameterAt(regression, *run.trendColumn);
+        summary.technicalChange = regression.inference.at(*run.trendColumn);
         summary.latestPeriod = panel.periods.maxCoeff();
         summary.trendLooksLikeDates = trendCountsDays(panel.periods);
     }
@@ -269,41 +261,36 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     } catch (const CollinearColumns& collinear) {
         throw collinearityError(data, options.constantReturns, options.effects, collinear.columns());
     }
-    fit.regression = std::move(run.regression);
-    const LeastSquaresResult& regression = fit.regression;
+    const LeastSquaresResult& regression = run.regression;
 
     fit.form = options.form;
     fit.inputLabels = data.inputLabels;
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
+    fit.summary = regression.summary;
+    fit.residuals = regression.residuals;
+    fit.regressionInference = regression.inference;
     // The form's parameters come from the base columns; the trend and period effects are reported apart.
-    fit.estimates = map.transform * regression.coefficients.head(baseColumns) + map.offset;
-    fit.covariance = map.transform * regression.covariance.topLeftCorner(baseColumns, baseColumns) *
-                     map.transform.transpose();
+    Eigen::MatrixXd covariance = map.transform * regression.inference.covariance.topLeftCorner(baseColumns, baseColumns) *
+                                 map.transform.transpose();
     if (run.effectsAbsorbConstant) {
         // ln A is the mean group effect, reported without a standard error (panel_regression.hpp).
-        fit.covariance.row(0).setConstant(notANumber);
-        fit.covariance.col(0).setConstant(notANumber);
+        covariance.row(0).setConstant(notANumber);
+        covariance.col(0).setConstant(notANumber);
     }
-    fit.standardErrors = fit.covariance.diagonal().cwiseSqrt();
-    fit.tStatistics = fit.estimates.cwiseQuotient(fit.standardErrors);
-    const double df = regression.residualDegreesOfFreedom;
-    const double inferenceDf = regression.inferenceDegreesOfFreedom;
-    const double critical = studentCriticalValue(options.confidenceLevel, inferenceDf);
-    fit.pValues.resize(fit.estimates.size());
-    for (Eigen::Index j = 0; j < fit.estimates.size(); ++j)
-        fit.pValues(j) = studentTwoSidedPValue(fit.tStatistics(j), inferenceDf);
-    fit.lowerBounds = fit.estimates - critical * fit.standardErrors;
-    fit.upperBounds = fit.estimates + critical * fit.standardErrors;
+    fit.inference = inferParameters(map.transform * regression.inference.estimates.head(baseColumns) + map.offset,
+                                    std::move(covariance), regression.summary.inferenceDegreesOfFreedom,
+                                    options.confidenceLevel);
+    const double df = regression.summary.residualDegreesOfFreedom;
 
-    fit.rSquared = 1.0 - regression.residualSumOfSquares / totalSumOfSquaresOfLogs(data, options, regression);
+    fit.rSquared = 1.0 - regression.summary.residualSumOfSquares / totalSumOfSquaresOfLogs(data, options, regression);
     fit.adjustedRSquared = 1.0 - (1.0 - fit.rSquared) * static_cast<double>(n - 1) / df;
 
     fit.returns = testReturnsToScale(fit, regression, k, options.constantReturns, options.confidenceLevel);
-    fit.logScaleAtControlMeans = fit.estimates(0);
-    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
+    fit.logScaleAtControlMeans = fit.inference.estimates(0);
+    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.inference.estimates.tail(m));
     fit.smearingFactor = run.smearingFactor;
-    fit.panel = summarisePanel(data.panel, options.effects, run, fit.regression, fit.logScaleAtControlMeans);
+    fit.panel = summarisePanel(data.panel, options.effects, run, regression, fit.logScaleAtControlMeans);
     return fit;
 }
 

@@ -127,24 +127,28 @@ ParameterEstimate inferenceOf(double value, double variance, double degreesOfFre
     return estimate;
 }
 
+// As inferParameters, but a negative variance (rounding in the share system) counts as 0.
 void setParameters(ProductionFit& summary, const Eigen::VectorXd& theta, const Eigen::MatrixXd& covariance,
                    double degreesOfFreedom, double level)
 {
     const Eigen::Index p = theta.size();
-    summary.estimates = theta;
-    summary.covariance = covariance;
-    summary.standardErrors.resize(p);
-    summary.tStatistics.resize(p);
-    summary.pValues.resize(p);
-    summary.lowerBounds.resize(p);
-    summary.upperBounds.resize(p);
+    ParameterInference& inference = summary.inference;
+    inference.estimates = theta;
+    inference.covariance = covariance;
+    inference.degreesOfFreedom = degreesOfFreedom;
+    inference.confidenceLevel = level;
+    inference.standardErrors.resize(p);
+    inference.tStatistics.resize(p);
+    inference.pValues.resize(p);
+    inference.lowerBounds.resize(p);
+    inference.upperBounds.resize(p);
     for (Eigen::Index i = 0; i < p; ++i) {
         const ParameterEstimate one = inferenceOf(theta(i), covariance(i, i), degreesOfFreedom, level);
-        summary.standardErrors(i) = one.standardError;
-        summary.tStatistics(i) = one.tStatistic;
-        summary.pValues(i) = one.pValue;
-        summary.lowerBounds(i) = one.lowerBound;
-        summary.upperBounds(i) = one.upperBound;
+        inference.standardErrors(i) = one.standardError;
+        inference.tStatistics(i) = one.tStatistic;
+        inference.pValues(i) = one.pValue;
+        inference.lowerBounds(i) = one.lowerBound;
+        inference.upperBounds(i) = one.upperBound;
     }
 }
 
@@ -185,7 +189,7 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
 {
     if (fit.form != CostForm::translog) return std::nullopt; // θ has no β_yy
     const Eigen::Index k = static_cast<Eigen::Index>(fit.priceLabels.size());
-    const Eigen::VectorXd& theta = fit.summary.estimates;
+    const Eigen::VectorXd& theta = fit.summary.inference.estimates;
     const double curvature = theta(2 + k);
     if (!(curvature > 0)) return std::nullopt;
     const double logScale = (1.0 - theta(1) - theta.tail(k).dot(fit.meanLogPrices)) / curvature;
@@ -194,7 +198,7 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
     gradient(2 + k) = -logScale / curvature;
     gradient.tail(k) = -fit.meanLogPrices.transpose() / curvature;
     const ParameterEstimate logEstimate =
-        inferenceOf(logScale, (gradient * fit.summary.covariance * gradient.transpose())(0, 0), degreesOfFreedom, level);
+        inferenceOf(logScale, (gradient * fit.summary.inference.covariance * gradient.transpose())(0, 0), degreesOfFreedom, level);
     ParameterEstimate scale;
     scale.estimate = std::exp(logScale);
     scale.standardError = scale.estimate * logEstimate.standardError;
@@ -206,14 +210,14 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
 
 void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
 {
-    const Eigen::RowVectorXd gradient = elasticityGradient(fit, fit.summary.estimates.size());
-    const double variance = (gradient * fit.summary.covariance * gradient.transpose())(0, 0);
-    fit.costElasticity = inferenceOf(gradient.dot(fit.summary.estimates), variance, degreesOfFreedom, level);
+    const Eigen::RowVectorXd gradient = elasticityGradient(fit, fit.summary.inference.estimates.size());
+    const double variance = (gradient * fit.summary.inference.covariance * gradient.transpose())(0, 0);
+    fit.costElasticity = inferenceOf(gradient.dot(fit.summary.inference.estimates), variance, degreesOfFreedom, level);
     const double elasticity = fit.costElasticity.estimate;
     ReturnsToScale& returns = fit.summary.returns;
     returns.estimate = 1.0 / elasticity;
     returns.standardError = fit.costElasticity.standardError / (elasticity * elasticity);
-    const bool testable = fit.summary.status != FitStatus::perfectFit;
+    const bool testable = !fit.summary.status.is(FitStatusKind::exactFit);
     const double deviation = (elasticity - 1.0) / fit.costElasticity.standardError;
     returns.fStatistic = testable ? deviation * deviation : std::nan("");
     // F(1, ∞) is χ²(1)/1: the Wald test of a maximum-likelihood fit.
@@ -227,7 +231,7 @@ void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
 CostRegularityTally regularityOf(const CostFit& fit, const CostData& data)
 {
     const Eigen::Index k = data.prices.cols();
-    const Eigen::VectorXd& theta = fit.summary.estimates;
+    const Eigen::VectorXd& theta = fit.summary.inference.estimates;
     Eigen::MatrixXd interactions = Eigen::MatrixXd::Zero(k, k);
     Eigen::VectorXd byOutput = Eigen::VectorXd::Zero(k);
     if (fit.form == CostForm::translog) {
@@ -246,7 +250,7 @@ CostFrontierPart fitFrontierPart(const NormalisedRegression& normalised, const L
                                  InefficiencyDistribution distribution, double level)
 {
     CostFrontierPart part;
-    part.mirrored = fitMirroredCostFrontier(normalised.design, normalised.response, regression.coefficients, distribution);
+    part.mirrored = fitMirroredCostFrontier(normalised.design, normalised.response, regression.inference.estimates, distribution);
     part.scales = frontierScaleEstimates(part.mirrored, level);
     return part;
 }
@@ -276,13 +280,13 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     fit.form = options.form;
     fit.priceLabels = data.priceLabels;
     ProductionFit& summary = fit.summary;
+    LeastSquaresResult regression;
     try {
         if (data.shares.size() == 0)
-            summary.regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
+            regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
         else
-            summary.regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
-                                                    normalised.logOutput, data.shares, options.form,
-                                                    options.confidenceLevel);
+            regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
+                                            normalised.logOutput, data.shares, options.form, options.confidenceLevel);
     } catch (const CollinearColumns& collinear) {
         std::vector<std::string> names;
         for (const Eigen::Index column : collinear.columns())
@@ -291,14 +295,15 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
                          "the cost terms " + listOfNames(names) +
                              " are collinear (prices divided by the last one, in logs); use fewer inputs or more varied data");
     }
-    const LeastSquaresResult& regression = summary.regression;
     summary.status = regression.status;
+    summary.summary = regression.summary;
+    summary.residuals = regression.residuals;
     const auto [map, shift] = restoredParameters(options.form, k, regressors);
-    double degreesOfFreedom = regression.inferenceDegreesOfFreedom;
-    Eigen::VectorXd coefficients = regression.coefficients;
-    Eigen::MatrixXd covariance = regression.covariance;
+    double degreesOfFreedom = regression.summary.inferenceDegreesOfFreedom;
+    Eigen::VectorXd coefficients = regression.inference.estimates;
+    Eigen::MatrixXd covariance = regression.inference.covariance;
     if (frontier) {
-        if (summary.status == FitStatus::perfectFit)
+        if (summary.status.is(FitStatusKind::exactFit))
             throw InputError({DataPart::inefficiency}, "{0}: the cost function fits every row exactly, which "
                                                          "leaves no noise for a frontier; leave {0} empty");
         fit.frontier = fitFrontierPart(normalised, regression, *options.inefficiency, options.confidenceLevel);
@@ -310,9 +315,9 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
                   options.confidenceLevel);
     const Eigen::VectorXd logCost = exactLog(data.cost.array()).matrix();
     const double totalSquares = (logCost.array() - logCost.mean()).square().sum();
-    summary.rSquared = 1.0 - regression.residualSumOfSquares / totalSquares;
+    summary.rSquared = 1.0 - regression.summary.residualSumOfSquares / totalSquares;
     summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * static_cast<double>(n - 1) /
-                                         regression.residualDegreesOfFreedom;
+                                         regression.summary.residualDegreesOfFreedom;
     // Duan: mean of exp(residual of ln C); none for a frontier, whose cost is the least, not a median.
     summary.smearingFactor = frontier ? std::nan("") : regression.residuals.array().exp().mean();
 

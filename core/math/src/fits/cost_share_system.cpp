@@ -39,28 +39,29 @@ namespace {
 void describeSystem(LeastSquaresResult& result, const SystemFit& system, Eigen::Index n, Eigen::Index m, double level)
 {
     const Eigen::Index p = system.coefficients.size();
-    result.coefficients = system.coefficients;
-    result.covariance = system.covariance;
+    ParameterInference& inference = result.inference;
+    FitSummary& summary = result.summary;
+    inference.estimates = system.coefficients;
+    inference.covariance = system.covariance;
     result.residuals = system.residuals.col(0);
-    result.observations = n;
-    result.parameters = p;
-    result.residualDegreesOfFreedom = static_cast<double>(n - p);
-    result.inferenceDegreesOfFreedom = static_cast<double>(n * m - p);
-    result.residualSumOfSquares = result.residuals.squaredNorm();
-    result.residualStandardDeviation = std::sqrt(result.residualSumOfSquares / static_cast<double>(n));
-    result.standardErrors = system.covariance.diagonal().cwiseMax(0.0).cwiseSqrt();
-    result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
-    result.logLikelihood = system.logLikelihood;
-    result.aic = -2 * system.logLikelihood + 2.0 * static_cast<double>(p);
-    result.bic = -2 * system.logLikelihood + static_cast<double>(p) * std::log(static_cast<double>(n));
+    summary.observations = n;
+    summary.parameters = p;
+    summary.residualDegreesOfFreedom = static_cast<double>(n - p);
+    summary.inferenceDegreesOfFreedom = static_cast<double>(n * m - p);
+    summary.residualSumOfSquares = result.residuals.squaredNorm();
+    summary.residualStandardDeviation = std::sqrt(summary.residualSumOfSquares / static_cast<double>(n));
+    inference.standardErrors = system.covariance.diagonal().cwiseMax(0.0).cwiseSqrt();
+    inference.tStatistics = inference.estimates.cwiseQuotient(inference.standardErrors);
+    inference.degreesOfFreedom = summary.inferenceDegreesOfFreedom;
+    inference.confidenceLevel = level;
+    summary.logLikelihood = system.logLikelihood; // of the whole system, not of the cost equation alone
+    setInformationCriteria(summary);
     const Eigen::VectorXd slopes = system.coefficients.tail(p - 1);
     const Eigen::MatrixXd slopeCovariance = system.covariance.bottomRightCorner(p - 1, p - 1);
-    result.overallRestrictions = p - 1;
-    result.fStatistic = slopes.dot(slopeCovariance.ldlt().solve(slopes)) / static_cast<double>(p - 1);
-    result.fPValue = fisherUpperPValue(result.fStatistic, static_cast<double>(p - 1), result.inferenceDegreesOfFreedom);
+    summary.overallRestrictions = p - 1;
+    summary.fStatistic = slopes.dot(slopeCovariance.ldlt().solve(slopes)) / static_cast<double>(p - 1);
+    summary.fPValue = fisherUpperPValue(summary.fStatistic, static_cast<double>(p - 1), summary.inferenceDegreesOfFreedom);
     result.interceptColumn = 0;
-    result.confidenceLevel = level;
-    result.status = FitStatus::ok;
 }
 
 } // namespace

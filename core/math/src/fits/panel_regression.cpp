@@ -64,24 +64,26 @@ Eigen::MatrixXd periodDummies(const Eigen::VectorXd& periods, const std::vector<
 // variance): the form's parameter map then applies unchanged.
 LeastSquaresResult withConstantColumn(const LeastSquaresResult& run, double meanEffect)
 {
-    const Eigen::Index p = run.parameters + 1;
+    const Eigen::Index p = run.summary.parameters + 1;
     auto prepend = [](const Eigen::VectorXd& values, double first) {
         Eigen::VectorXd extended(values.size() + 1);
         extended << first, values;
         return extended;
     };
     LeastSquaresResult extended = run;
-    extended.parameters = p;
-    extended.absorbedParameters = run.absorbedParameters - 1; // the constant is now a column
+    extended.summary.parameters = p;
+    extended.summary.absorbedParameters = run.summary.absorbedParameters - 1; // the constant is now a column
     extended.interceptColumn = 0;
-    extended.coefficients = prepend(run.coefficients, meanEffect);
-    extended.standardErrors = prepend(run.standardErrors, notANumber);
-    extended.tStatistics = prepend(run.tStatistics, notANumber);
-    extended.pValues = prepend(run.pValues, notANumber);
-    extended.lowerBounds = prepend(run.lowerBounds, notANumber);
-    extended.upperBounds = prepend(run.upperBounds, notANumber);
-    extended.covariance = Eigen::MatrixXd::Zero(p, p);
-    extended.covariance.bottomRightCorner(p - 1, p - 1) = run.covariance;
+    const ParameterInference& slopes = run.inference;
+    ParameterInference& inference = extended.inference;
+    inference.estimates = prepend(slopes.estimates, meanEffect);
+    inference.standardErrors = prepend(slopes.standardErrors, notANumber);
+    inference.tStatistics = prepend(slopes.tStatistics, notANumber);
+    inference.pValues = prepend(slopes.pValues, notANumber);
+    inference.lowerBounds = prepend(slopes.lowerBounds, notANumber);
+    inference.upperBounds = prepend(slopes.upperBounds, notANumber);
+    inference.covariance = Eigen::MatrixXd::Zero(p, p);
+    inference.covariance.bottomRightCorner(p - 1, p - 1) = slopes.covariance;
     return extended;
 }
 
@@ -89,19 +91,20 @@ LeastSquaresResult withConstantColumn(const LeastSquaresResult& run, double mean
 // period effects kept, as under the other kinds of effects.
 void testSlopesOnly(LeastSquaresResult& run, Eigen::Index slopes)
 {
-    run.overallRestrictions = slopes;
-    run.overallTestExceedsClusters = false;
+    FitSummary& summary = run.summary;
+    summary.overallRestrictions = slopes;
+    summary.overallTestExceedsClusters = false;
     if (slopes == 0) {
-        run.fStatistic = notANumber;
-        run.fPValue = notANumber;
+        summary.fStatistic = notANumber;
+        summary.fPValue = notANumber;
         return;
     }
-    Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(slopes, run.parameters);
+    Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(slopes, summary.parameters);
     restrictions.leftCols(slopes).setIdentity();
     const WaldTest test = testLinearRestrictions(run, restrictions, Eigen::VectorXd::Zero(slopes));
-    run.fStatistic = test.fStatistic;
-    run.fPValue = test.pValue;
-    run.overallTestExceedsClusters = test.exceedsClusters;
+    summary.fStatistic = test.fStatistic;
+    summary.fPValue = test.pValue;
+    summary.overallTestExceedsClusters = test.exceedsClusters;
 }
 
 } // namespace
@@ -219,13 +222,13 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
 
     if (effects == EffectsKind::twoWay) testSlopesOnly(run, result.baseColumns - 1);
     if (result.effectsAbsorbConstant) {
-        result.groupEffects = responseMeans - columnMeans * run.coefficients;
-        result.withinRSquared = run.rSquared; // uncentred R² of the demeaned response
+        result.groupEffects = responseMeans - columnMeans * run.inference.estimates;
+        result.withinRSquared = run.summary.rSquared; // uncentred R² of the demeaned response
         result.regression = withConstantColumn(run, result.groupEffects.mean());
     } else {
         result.regression = std::move(run);
     }
-    const Eigen::VectorXd& coefficients = result.regression.coefficients;
+    const Eigen::VectorXd& coefficients = result.regression.inference.estimates;
     if (result.trendColumn)
         result.latestPeriodShift = coefficients(*result.trendColumn) * (panel.periods.maxCoeff() - result.trendOrigin);
     if (effects == EffectsKind::twoWay)

@@ -23,7 +23,7 @@ ReturnsToScale testReturnsToScale(const ProductionFit& fit, const LeastSquaresRe
                                   bool constantReturns, double confidenceLevel)
 {
     ReturnsToScale returns;
-    returns.estimate = fit.estimates.segment(1, k).sum();
+    returns.estimate = fit.inference.estimates.segment(1, k).sum();
     if (constantReturns) {
         returns.imposed = true;
         returns.standardError = 0.0;
@@ -32,12 +32,12 @@ ReturnsToScale testReturnsToScale(const ProductionFit& fit, const LeastSquaresRe
         returns.verdict = classifyReturnsToScale(returns.estimate, returns.pValue, confidenceLevel, true);
         return returns;
     }
-    returns.standardError = std::sqrt(fit.covariance.block(1, 1, k, k).sum());
-    Eigen::MatrixXd restriction = Eigen::MatrixXd::Zero(1, regression.parameters);
+    returns.standardError = std::sqrt(fit.inference.covariance.block(1, 1, k, k).sum());
+    Eigen::MatrixXd restriction = Eigen::MatrixXd::Zero(1, regression.summary.parameters);
     restriction.block(0, 1, 1, k).setOnes();
     const WaldTest test = testLinearRestrictions(regression, restriction, Eigen::VectorXd::Ones(1));
     // An exact fit leaves nothing to test: the verdict then follows ν alone.
-    const bool testable = regression.status != FitStatus::perfectFit;
+    const bool testable = !regression.status.is(FitStatusKind::exactFit);
     returns.exceedsClusters = test.exceedsClusters;
     returns.fStatistic = testable ? test.fStatistic : notANumber;
     returns.pValue = testable ? test.pValue : notANumber;

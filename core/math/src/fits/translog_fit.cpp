@@ -2,12 +2,10 @@
 
 #include "isoquant/math/numerics/work_limits.hpp"
 
-#include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/fits/returns_to_scale.hpp"
-#include "fits/fit_inference.hpp"
 
 #include <cmath>
 
@@ -118,45 +116,40 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     regressionOptions.covariance = options.covariance;
     regressionOptions.confidenceLevel = options.confidenceLevel;
     ProductionFit fit;
+    LeastSquaresResult regression;
     try {
-        fit.regression = fitLeastSquares(design, exactLog(data.output.array()).matrix(), 0, regressionOptions);
+        regression = fitLeastSquares(design, exactLog(data.output.array()).matrix(), 0, regressionOptions);
     } catch (const CollinearColumns& collinear) {
         throw collinearTerms(data, collinear.columns());
     }
-    const LeastSquaresResult& regression = fit.regression;
     fit.form = ProductionForm::translog;
     fit.inputLabels = data.inputLabels;
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
-    setParameterInference(fit, regression.coefficients, regression);
-    fit.rSquared = regression.rSquared;
-    fit.adjustedRSquared = regression.adjustedRSquared;
-    fit.logScaleAtControlMeans = fit.estimates(0);
-    fit.smearingFactor = regression.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
-    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.estimates.tail(m));
+    fit.inference = regression.inference;
+    fit.summary = regression.summary;
+    fit.residuals = regression.residuals;
+    fit.rSquared = regression.summary.rSquared;
+    fit.adjustedRSquared = regression.summary.adjustedRSquared;
+    fit.logScaleAtControlMeans = fit.inference.estimates(0);
+    fit.smearingFactor = fit.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
+    if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.inference.estimates.tail(m));
 
     auto details = std::make_shared<TranslogDetails>();
     details->meanLogInputs = logs.colwise().mean().transpose();
     const Eigen::MatrixXd gradients = elasticityGradients(k, p, details->meanLogInputs);
-    const Eigen::VectorXd values = gradients * fit.estimates;
-    const Eigen::VectorXd errors = (gradients * fit.covariance * gradients.transpose()).diagonal().cwiseSqrt();
-    const double df = regression.residualDegreesOfFreedom;
-    const double critical = studentCriticalValue(options.confidenceLevel, df);
-    details->elasticities = values.head(k);
-    details->elasticityStandardErrors = errors.head(k);
-    details->elasticityTStatistics = details->elasticities.cwiseQuotient(details->elasticityStandardErrors);
-    details->elasticityPValues.resize(k);
-    for (Eigen::Index i = 0; i < k; ++i)
-        details->elasticityPValues(i) = studentTwoSidedPValue(details->elasticityTStatistics(i), df);
-    details->elasticityLowerBounds = details->elasticities - critical * details->elasticityStandardErrors;
-    details->elasticityUpperBounds = details->elasticities + critical * details->elasticityStandardErrors;
+    const Eigen::VectorXd values = gradients * fit.inference.estimates;
+    const Eigen::MatrixXd covariance = gradients * fit.inference.covariance * gradients.transpose();
+    const Eigen::VectorXd errors = covariance.diagonal().cwiseSqrt();
+    details->elasticities = inferParameters(values.head(k), covariance.topLeftCorner(k, k),
+                                            regression.summary.residualDegreesOfFreedom, options.confidenceLevel);
 
     Eigen::MatrixXd interactionsZero = Eigen::MatrixXd::Zero(q, p);
     interactionsZero.middleCols(1 + k, q).setIdentity();
     details->cobbDouglasTest = testLinearRestrictions(regression, interactionsZero, Eigen::VectorXd::Zero(q));
     fit.translog = details;
 
-    const bool testable = regression.status != FitStatus::perfectFit;
+    const bool testable = !regression.status.is(FitStatusKind::exactFit);
     const WaldTest scaleTest = testLinearRestrictions(regression, gradients.bottomRows(1), Eigen::VectorXd::Ones(1));
     fit.returns.estimate = values(k);
     fit.returns.standardError = errors(k);

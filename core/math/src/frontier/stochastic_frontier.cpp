@@ -1,6 +1,7 @@
 #include "isoquant/math/frontier/stochastic_frontier.hpp"
 
 #include "isoquant/math/frontier/normal_tail.hpp"
+#include "isoquant/math/numerics/parameter_inference.hpp"
 
 #include <boost/math/distributions/chi_squared.hpp>
 #include <unsupported/Eigen/NonLinearOptimization>
@@ -105,8 +106,7 @@ struct Attempt {
     Eigen::VectorXd theta;
     double logLikelihood = -std::numeric_limits<double>::infinity();
     Eigen::MatrixXd covariance;
-    FrontierConvergence convergence = FrontierConvergence::stopped;
-    std::string stopReason;
+    FitStatus status{FitStatusKind::stopped, ""};
 };
 
 std::string solverReason(Eigen::HybridNonLinearSolverSpace::Status status)
@@ -140,7 +140,7 @@ Attempt maximiseFrom(Eigen::VectorXd theta, ScoreEquations& equations)
             break;
     }
     attempt.theta = theta;
-    attempt.stopReason = solverReason(status);
+    attempt.status.reason = solverReason(status);
     const bool solved = status == Eigen::HybridNonLinearSolverSpace::RelativeErrorTooSmall ||
                         status == Eigen::HybridNonLinearSolverSpace::TolTooSmall;
     if (!theta.allFinite()) return attempt;
@@ -157,16 +157,16 @@ Attempt maximiseFrom(Eigen::VectorXd theta, ScoreEquations& equations)
     const bool flatEnough = maximum && 0.5 * score.dot(factor.solve(score)) < newtonGainTolerance;
     if (!solved && !flatEnough) {
         if (status == Eigen::HybridNonLinearSolverSpace::TooManyFunctionEvaluation)
-            attempt.convergence = FrontierConvergence::notConverged;
+            attempt.status.kind = FitStatusKind::notConverged;
         return attempt;
     }
     if (!maximum) {
-        attempt.stopReason = "the score vanished at a point that is not a maximum";
+        attempt.status.reason = "the score vanished at a point that is not a maximum";
         return attempt;
     }
-    if (!solved) attempt.stopReason = "a Newton step would raise the log-likelihood by less than 1e-8";
+    if (!solved) attempt.status.reason = "a Newton step would raise the log-likelihood by less than 1e-8";
     attempt.covariance = factor.solve(Eigen::MatrixXd::Identity(theta.size(), theta.size()));
-    attempt.convergence = FrontierConvergence::converged;
+    attempt.status.kind = FitStatusKind::ok;
     return attempt;
 }
 
@@ -187,8 +187,7 @@ void setWrongSkew(StochasticFrontierFit& fit, const Eigen::MatrixXd& design,
     fit.covariance.row(p).head(p + 1).setZero();
     fit.covariance.col(p).head(p + 1).setZero();
     fit.covariance(p, p) = 0.5 / static_cast<double>(n);
-    fit.convergence = FrontierConvergence::converged;
-    fit.stopReason = "least squares: the likelihood is largest at inefficiency SD = 0";
+    fit.status = {FitStatusKind::ok, "least squares: the likelihood is largest at inefficiency SD = 0"};
 }
 
 } // namespace
@@ -204,7 +203,7 @@ StochasticFrontierFit fitStochasticFrontier(const Eigen::MatrixXd& design, const
     fit.residuals = response - design * leastSquaresCoefficients;
     const Moments moments = centralMoments(fit.residuals);
     fit.thirdMoment = moments.third;
-    fit.leastSquaresLogLikelihood = -n / 2 * (std::log(2 * pi) + std::log(fit.residuals.squaredNorm() / n) + 1);
+    fit.leastSquaresLogLikelihood = gaussianLogLikelihood(fit.residuals.squaredNorm(), n);
     if (!(moments.third < 0)) {
         setWrongSkew(fit, design, leastSquaresCoefficients);
         return fit;
@@ -215,19 +214,17 @@ StochasticFrontierFit fitStochasticFrontier(const Eigen::MatrixXd& design, const
     for (const Eigen::VectorXd& start : {momentStart(leastSquaresCoefficients, moments, distribution),
                                          balancedStart(leastSquaresCoefficients, moments, distribution)}) {
         Attempt attempt = maximiseFrom(start, equations);
-        const bool better = attempt.convergence == FrontierConvergence::converged &&
-                            (best.convergence != FrontierConvergence::converged ||
+        const bool better = attempt.status.is(FitStatusKind::ok) &&
+                            (!best.status.is(FitStatusKind::ok) ||
                              attempt.logLikelihood > best.logLikelihood);
         if (better || best.theta.size() == 0) best = std::move(attempt);
-        if (best.convergence == FrontierConvergence::converged) break;
+        if (best.status.is(FitStatusKind::ok)) break;
     }
     fit.evaluations = equations.evaluations;
-    fit.convergence = best.convergence;
-    fit.stopReason = best.stopReason;
-    if (best.convergence != FrontierConvergence::converged && best.theta.allFinite() &&
+    fit.status = best.status;
+    if (!best.status.is(FitStatusKind::ok) && best.theta.allFinite() &&
         frontierScore(distribution, equations.data, best.theta)(p) < 0) {
-        fit.convergence = FrontierConvergence::boundary;
-        fit.stopReason = "the likelihood still rises as noise SD falls toward 0";
+        fit.status = {FitStatusKind::boundary, "the likelihood still rises as noise SD falls toward 0"};
     }
     fit.coefficients = best.theta.head(p);
     fit.noiseSd = std::exp(best.theta(p));

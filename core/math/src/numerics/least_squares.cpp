@@ -10,6 +10,7 @@
 #include <cmath>
 #include <limits>
 #include <numeric>
+#include <sstream>
 
 namespace isoquant {
 
@@ -122,22 +123,23 @@ private:
 // The overall F: every coefficient but the constant (interceptColumn) is zero.
 void addOverallTest(LeastSquaresResult& result)
 {
-    const Eigen::Index p = result.parameters;
+    FitSummary& summary = result.summary;
+    const Eigen::Index p = summary.parameters;
     const auto& interceptColumn = result.interceptColumn;
     const Eigen::Index tested = interceptColumn ? p - 1 : p;
-    result.overallRestrictions = tested;
+    summary.overallRestrictions = tested;
     if (tested == 0) {
-        result.fStatistic = notANumber;
-        result.fPValue = notANumber;
+        summary.fStatistic = notANumber;
+        summary.fPValue = notANumber;
         return;
     }
     Eigen::MatrixXd restrictions = Eigen::MatrixXd::Zero(tested, p);
     for (Eigen::Index j = 0, row = 0; j < p; ++j)
         if (!interceptColumn || j != *interceptColumn) restrictions(row++, j) = 1.0;
     const WaldTest overall = testLinearRestrictions(result, restrictions, Eigen::VectorXd::Zero(tested));
-    result.fStatistic = overall.fStatistic;
-    result.fPValue = overall.pValue;
-    result.overallTestExceedsClusters = overall.exceedsClusters;
+    summary.fStatistic = overall.fStatistic;
+    summary.fPValue = overall.pValue;
+    summary.overallTestExceedsClusters = overall.exceedsClusters;
 }
 
 // Well-conditioned designs (the usual logs of inputs) are factorised in double, blocked; the rest,
@@ -161,19 +163,21 @@ ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions&
     return chosen;
 }
 
-// Standard errors √diag(V), t = b/se, two-sided p on t(df) and the bounds b ± t_crit·se, from the
-// coefficients and covariance already in `result`.
-void addCoefficientInference(LeastSquaresResult& result, double inferenceDf)
+// exactFit when ‖residuals‖ ≤ perfectFitTolerance·‖y‖, else illConditioned above conditionWarning.
+FitStatus leastSquaresStatus(const FitSummary& summary, double responseNorm, const LeastSquaresOptions& options)
 {
-    const Eigen::Index p = result.coefficients.size();
-    result.standardErrors = result.covariance.diagonal().cwiseSqrt();
-    result.tStatistics = result.coefficients.cwiseQuotient(result.standardErrors);
-    result.pValues.resize(p);
-    for (Eigen::Index j = 0; j < p; ++j)
-        result.pValues(j) = studentTwoSidedPValue(result.tStatistics(j), inferenceDf);
-    const double critical = studentCriticalValue(result.confidenceLevel, inferenceDf);
-    result.lowerBounds = result.coefficients - critical * result.standardErrors;
-    result.upperBounds = result.coefficients + critical * result.standardErrors;
+    FitStatus status;
+    if (std::sqrt(summary.residualSumOfSquares) <= options.perfectFitTolerance * responseNorm) {
+        status.kind = FitStatusKind::exactFit;
+        status.reason = "every residual is zero: standard errors are zero and tests are undefined";
+    } else if (summary.conditionNumber > options.conditionWarning) {
+        std::ostringstream reason;
+        reason << "the scaled condition number " << summary.conditionNumber << " exceeds " << options.conditionWarning
+               << ": the columns are nearly collinear and the estimates fragile";
+        status.kind = FitStatusKind::illConditioned;
+        status.reason = reason.str();
+    }
+    return status;
 }
 
 } // namespace
@@ -181,17 +185,6 @@ void addCoefficientInference(LeastSquaresResult& result, double inferenceDf)
 UnitLeverage::UnitLeverage(Eigen::Index row)
     : std::runtime_error("a row has leverage 1; HC3 errors are undefined"), row_(row)
 {
-}
-
-LikelihoodCriteria gaussianLikelihood(double residualSumOfSquares, double observations, double parameters)
-{
-    const double pi = 3.14159265358979323846;
-    LikelihoodCriteria criteria;
-    criteria.logLikelihood =
-        -observations / 2.0 * (std::log(2.0 * pi) + std::log(residualSumOfSquares / observations) + 1.0);
-    criteria.aic = -2.0 * criteria.logLikelihood + 2.0 * parameters;
-    criteria.bic = -2.0 * criteria.logLikelihood + parameters * std::log(observations);
-    return criteria;
 }
 
 LeastSquaresResult fitLeastSquares(const Eigen::MatrixXd& design, const Eigen::VectorXd& response,
@@ -224,22 +217,21 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
         throw CollinearColumns(columnsInNullDirection(factor.nullDirection));
 
     LeastSquaresResult result;
-    result.observations = n;
-    result.parameters = p;
-    result.absorbedParameters = options.absorbedParameters;
-    result.clusterCount = clusterCount;
+    FitSummary& summary = result.summary;
+    summary.observations = n;
+    summary.parameters = p;
+    summary.absorbedParameters = options.absorbedParameters;
+    summary.clusterCount = clusterCount;
+    summary.covarianceKind = options.covariance;
+    summary.conditionNumber = singularValues(0) / singularValues(p - 1);
     result.interceptColumn = interceptColumn;
-    result.covarianceKind = options.covariance;
-    result.confidenceLevel = options.confidenceLevel;
-    result.conditionNumber = singularValues(0) / singularValues(p - 1);
     result.factorisedInDouble = chosen.inDouble;
-    result.coefficients = factor.coefficients;
 
     const double df = static_cast<double>(n - allParameters);
-    result.residualDegreesOfFreedom = df;
+    summary.residualDegreesOfFreedom = df;
     // Cluster errors rest on G cluster scores, so inference uses t(G−1) and F(q, G−1).
     const double inferenceDf = clustered ? static_cast<double>(clusterCount - 1) : df;
-    result.inferenceDegreesOfFreedom = inferenceDf;
+    summary.inferenceDegreesOfFreedom = inferenceDf;
 
     // (XᵀX)⁻¹ = H·Hᵀ with H = D·P·R⁻¹ (D the column scales, P the pivoting).
     const Eigen::MatrixXd bread = factor.columnScales.asDiagonal() * (factor.permutation * factor.upperInverse);
@@ -256,45 +248,34 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
         });
     }
     result.residuals = std::move(factor.residuals);
-    result.residualSumOfSquares = result.residuals.squaredNorm();
-    result.totalSumOfSquares =
-        interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;
-    result.rSquared = 1.0 - result.residualSumOfSquares / result.totalSumOfSquares;
+    summary.residualSumOfSquares = result.residuals.squaredNorm();
+    summary.totalSumOfSquares = interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;
+    summary.rSquared = 1.0 - summary.residualSumOfSquares / summary.totalSumOfSquares;
     const double centring = interceptColumn ? 1.0 : 0.0;
-    result.adjustedRSquared = 1.0 - (1.0 - result.rSquared) * (static_cast<double>(n) - centring) / df;
-    result.residualStandardDeviation = std::sqrt(result.residualSumOfSquares / df);
+    summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * (static_cast<double>(n) - centring) / df;
+    summary.residualStandardDeviation = std::sqrt(summary.residualSumOfSquares / df);
 
-    if (robust)
-        result.covariance = bread * meat.meat() * bread.transpose();
-    else
-        result.covariance = (result.residualSumOfSquares / df) * (bread * bread.transpose());
-
-    addCoefficientInference(result, inferenceDf);
+    Eigen::MatrixXd covariance = robust ? Eigen::MatrixXd(bread * meat.meat() * bread.transpose())
+                                        : Eigen::MatrixXd((summary.residualSumOfSquares / df) * (bread * bread.transpose()));
+    result.inference = inferParameters(factor.coefficients, std::move(covariance), inferenceDf, options.confidenceLevel);
     addOverallTest(result);
-    const LikelihoodCriteria likelihood =
-        gaussianLikelihood(result.residualSumOfSquares, static_cast<double>(n), static_cast<double>(allParameters));
-    result.logLikelihood = likelihood.logLikelihood;
-    result.aic = likelihood.aic;
-    result.bic = likelihood.bic;
-
-    if (std::sqrt(result.residualSumOfSquares) <= options.perfectFitTolerance * std::sqrt(chosen.response.sumOfSquares))
-        result.status = FitStatus::perfectFit;
-    else if (result.conditionNumber > options.conditionWarning)
-        result.status = FitStatus::illConditioned;
+    setGaussianLikelihood(summary);
+    result.status = leastSquaresStatus(summary, std::sqrt(chosen.response.sumOfSquares), options);
     return result;
 }
 
 WaldTest testLinearRestrictions(const LeastSquaresResult& fit, const Eigen::MatrixXd& restrictions,
                                 const Eigen::VectorXd& values)
 {
-    if (restrictions.cols() != fit.parameters || restrictions.rows() != values.size() || values.size() == 0)
+    const FitSummary& summary = fit.summary;
+    if (restrictions.cols() != summary.parameters || restrictions.rows() != values.size() || values.size() == 0)
         throw std::invalid_argument("restrictions: shape does not match the fit");
-    const Eigen::VectorXd discrepancy = restrictions * fit.coefficients - values;
-    const Eigen::MatrixXd middle = restrictions * fit.covariance * restrictions.transpose();
+    const Eigen::VectorXd discrepancy = restrictions * fit.inference.estimates - values;
+    const Eigen::MatrixXd middle = restrictions * fit.inference.covariance * restrictions.transpose();
     WaldTest test;
     test.numeratorDegreesOfFreedom = static_cast<double>(values.size());
-    test.denominatorDegreesOfFreedom = fit.inferenceDegreesOfFreedom;
-    if (fit.covarianceKind == CovarianceKind::cluster && values.size() > fit.clusterCount - 1) {
+    test.denominatorDegreesOfFreedom = summary.inferenceDegreesOfFreedom;
+    if (summary.covarianceKind == CovarianceKind::cluster && values.size() > summary.clusterCount - 1) {
         test.exceedsClusters = true;
         test.fStatistic = notANumber;
         test.pValue = notANumber;

@@ -1,6 +1,5 @@
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 
-#include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
 #include <Eigen/SVD>
@@ -109,19 +108,17 @@ Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::V
     return refined;
 }
 
-NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+ParameterInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
                                       const Eigen::VectorXd& parameters, double confidenceLevel,
                                       double rankTolerance)
 {
     const Eigen::Index n = jacobian.rows();
     const Eigen::Index p = jacobian.cols();
-    NonlinearInference inference;
-    inference.residualSumOfSquares = residuals.squaredNorm();
-    inference.residualDegreesOfFreedom = static_cast<double>(n - p);
-    const double variance = inference.residualSumOfSquares / inference.residualDegreesOfFreedom;
-    inference.residualStandardDeviation = std::sqrt(variance);
+    const double residualDegreesOfFreedom = static_cast<double>(n - p);
+    const double variance = residuals.squaredNorm() / residualDegreesOfFreedom;
 
     // (JᵀJ)⁻¹ from the SVD of the column-scaled Jacobian J·S: (JᵀJ)⁻¹ = S·V·Σ⁻²·Vᵀ·S.
+    Eigen::MatrixXd covariance = Eigen::MatrixXd::Constant(p, p, notANumber);
     Eigen::VectorXd columnNorms = jacobian.colwise().norm().transpose();
     bool deficient = (columnNorms.array() == 0).any() || !jacobian.allFinite();
     if (!deficient) {
@@ -132,20 +129,22 @@ NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eig
         if (!deficient) {
             const Eigen::MatrixXd root = columnNorms.cwiseInverse().asDiagonal() * svd.matrixV() *
                                          singular.cwiseInverse().asDiagonal();
-            inference.covariance = variance * root * root.transpose();
+            covariance = variance * root * root.transpose();
         }
     }
-    if (deficient) inference.covariance = Eigen::MatrixXd::Constant(p, p, notANumber);
+    return inferParameters(parameters, std::move(covariance), residualDegreesOfFreedom, confidenceLevel);
+}
 
-    inference.standardErrors = inference.covariance.diagonal().cwiseSqrt();
-    inference.tStatistics = parameters.cwiseQuotient(inference.standardErrors);
-    inference.pValues.resize(p);
-    for (Eigen::Index j = 0; j < p; ++j)
-        inference.pValues(j) = studentTwoSidedPValue(inference.tStatistics(j), inference.residualDegreesOfFreedom);
-    const double critical = studentCriticalValue(confidenceLevel, inference.residualDegreesOfFreedom);
-    inference.lowerBounds = parameters - critical * inference.standardErrors;
-    inference.upperBounds = parameters + critical * inference.standardErrors;
-    return inference;
+FitSummary nonlinearSummary(const Eigen::VectorXd& residuals, Eigen::Index parameterCount)
+{
+    FitSummary summary;
+    summary.observations = residuals.size();
+    summary.parameters = parameterCount;
+    summary.residualSumOfSquares = residuals.squaredNorm();
+    summary.residualDegreesOfFreedom = static_cast<double>(residuals.size() - parameterCount);
+    summary.inferenceDegreesOfFreedom = summary.residualDegreesOfFreedom;
+    summary.residualStandardDeviation = std::sqrt(summary.residualSumOfSquares / summary.residualDegreesOfFreedom);
+    return summary;
 }
 
 NonlinearLeastSquaresResult minimizeSumOfSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
@@ -183,6 +182,7 @@ NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model
     NonlinearLeastSquaresResult result = minimizeSumOfSquares(model, start, options);
     result.inference = nonlinearInference(model.jacobian(result.parameters), result.residuals, result.parameters,
                                           options.confidenceLevel, options.rankTolerance);
+    result.summary = nonlinearSummary(result.residuals, result.parameters.size());
     return result;
 }
 

@@ -33,11 +33,11 @@ std::size_t heapBytes(const Cell& cell)
     return isText(cell) ? heapBytes(std::get<std::string>(cell)) : 0;
 }
 
-std::size_t heapBytes(const LeastSquaresResult& regression)
+std::size_t heapBytes(const ParameterInference& inference)
 {
-    return heapBytes(regression.coefficients) + heapBytes(regression.standardErrors) +
-           heapBytes(regression.tStatistics) + heapBytes(regression.pValues) + heapBytes(regression.lowerBounds) +
-           heapBytes(regression.upperBounds) + heapBytes(regression.covariance) + heapBytes(regression.residuals);
+    return heapBytes(inference.estimates) + heapBytes(inference.standardErrors) + heapBytes(inference.tStatistics) +
+           heapBytes(inference.pValues) + heapBytes(inference.lowerBounds) + heapBytes(inference.upperBounds) +
+           heapBytes(inference.covariance);
 }
 
 std::size_t heapBytes(const PanelSummary& panel)
@@ -48,10 +48,7 @@ std::size_t heapBytes(const PanelSummary& panel)
 
 std::size_t heapBytes(const TranslogDetails& translog)
 {
-    return sizeof translog + heapBytes(translog.meanLogInputs) + heapBytes(translog.elasticities) +
-           heapBytes(translog.elasticityStandardErrors) + heapBytes(translog.elasticityTStatistics) +
-           heapBytes(translog.elasticityPValues) + heapBytes(translog.elasticityLowerBounds) +
-           heapBytes(translog.elasticityUpperBounds);
+    return sizeof translog + heapBytes(translog.meanLogInputs) + heapBytes(translog.elasticities);
 }
 
 } // namespace
@@ -83,11 +80,9 @@ std::size_t footprintBytes(const FitArguments& arguments)
 std::size_t footprintBytes(const ProductionFit& fit)
 {
     std::size_t bytes = sizeof fit + heapBytes(fit.inputLabels) + heapBytes(fit.controlLabels) +
-                        heapBytes(fit.estimates) + heapBytes(fit.standardErrors) + heapBytes(fit.tStatistics) +
-                        heapBytes(fit.pValues) + heapBytes(fit.lowerBounds) + heapBytes(fit.upperBounds) +
-                        heapBytes(fit.covariance) + heapBytes(fit.regression) + heapBytes(fit.returns.verdict) +
-                        heapBytes(fit.panel);
-    if (fit.ces) bytes += sizeof *fit.ces + heapBytes(fit.ces->stopReason);
+                        heapBytes(fit.inference) + heapBytes(fit.regressionInference) + heapBytes(fit.residuals) +
+                        heapBytes(fit.status.reason) + heapBytes(fit.returns.verdict) + heapBytes(fit.panel);
+    if (fit.ces) bytes += sizeof *fit.ces;
     if (fit.translog) bytes += heapBytes(*fit.translog);
     return bytes;
 }

@@ -26,14 +26,14 @@ struct Candidate {
 };
 
 // The rank (1 = lowest) of each fitted candidate's criterion; 0 for the others.
-std::array<double, 3> ranks(const std::array<Candidate, 3>& candidates, double LeastSquaresResult::*criterion)
+std::array<double, 3> ranks(const std::array<Candidate, 3>& candidates, double FitSummary::*criterion)
 {
     std::array<double, 3> rank{};
     for (std::size_t a = 0; a < 3; ++a) {
         if (!candidates[a].fit) continue;
         rank[a] = 1;
         for (std::size_t b = 0; b < 3; ++b)
-            if (candidates[b].fit && candidates[b].fit->regression.*criterion < candidates[a].fit->regression.*criterion)
+            if (candidates[b].fit && candidates[b].fit->summary.*criterion < candidates[a].fit->summary.*criterion)
                 ++rank[a];
     }
     return rank;
@@ -48,8 +48,8 @@ std::string verdict(double pValue, double level)
 // A ces fit gives a likelihood ratio only at an interior, converged, identified optimum.
 std::string cesUnusable(const ProductionFit& ces)
 {
-    if (ces.ces->convergence == NonlinearStatus::notIdentified) return "n/a: the ces fit is not identified";
-    if (ces.ces->convergence != NonlinearStatus::converged) return "n/a: the ces fit did not converge";
+    if (ces.status.is(FitStatusKind::notIdentified)) return "n/a: the ces fit is not identified";
+    if (!ces.status.converged()) return "n/a: the ces fit did not converge";
     if (ces.ces->boundary != CesBoundary::none) return "n/a: the ces optimum is on a boundary";
     return "";
 }
@@ -74,14 +74,14 @@ CellTable compareForms(const FitArguments& arguments)
 
     TableWriter writer(8, false);
     writer.textRow("form", {"parameters", "log-likelihood", "AIC", "BIC", "AIC rank", "BIC rank"});
-    const auto aicRanks = ranks(candidates, &LeastSquaresResult::aic);
-    const auto bicRanks = ranks(candidates, &LeastSquaresResult::bic);
+    const auto aicRanks = ranks(candidates, &FitSummary::aic);
+    const auto bicRanks = ranks(candidates, &FitSummary::bic);
     for (std::size_t f = 0; f < forms.size(); ++f) {
         if (!candidates[f].fit) {
             writer.textRow(formWord(forms[f]), {candidates[f].reason});
             continue;
         }
-        const LeastSquaresResult& summary = candidates[f].fit->regression;
+        const FitSummary& summary = candidates[f].fit->summary;
         writer.put(formWord(forms[f]), {static_cast<double>(summary.parameters), summary.logLikelihood, summary.aic,
                                         summary.bic, aicRanks[f], bicRanks[f]});
     }
@@ -91,13 +91,13 @@ CellTable compareForms(const FitArguments& arguments)
     const ProductionFit& cobbDouglas = *candidates[0].fit;
     if (const auto& translog = candidates[2].fit) {
         const WaldTest& test = translog->translog->cobbDouglasTest;
-        const bool exact = translog->status == FitStatus::perfectFit;
+        const bool exact = translog->status.is(FitStatusKind::exactFit);
         const double f = exact ? notANumber : test.fStatistic;
         const double p = exact ? notANumber : test.pValue;
         // Under cluster errors with q > G − 1 the test is undefined: the verdict cell says why.
         const std::string conclusion =
             test.exceedsClusters ? tooFewGroupsNote("the test", test.numeratorDegreesOfFreedom,
-                                                    translog->regression.clusterCount)
+                                                    translog->summary.clusterCount)
                                  : verdict(p, level);
         writer.put("translog vs cobb-douglas", {f, test.numeratorDegreesOfFreedom, test.denominatorDegreesOfFreedom,
                                                 p, std::string("F"), conclusion});
@@ -107,8 +107,8 @@ CellTable compareForms(const FitArguments& arguments)
     const std::string unusable = candidates[1].fit ? cesUnusable(*candidates[1].fit) : "n/a: no ces fit";
     if (unusable.empty()) {
         // LR = 2·(LL_ces − LL_cd); the CES nests the Cobb-Douglas, so it is ≥ 0 up to rounding.
-        const double ratio = std::max(0.0, 2 * (candidates[1].fit->regression.logLikelihood -
-                                                cobbDouglas.regression.logLikelihood));
+        const double ratio = std::max(0.0, 2 * (candidates[1].fit->summary.logLikelihood -
+                                                cobbDouglas.summary.logLikelihood));
         const double p = chiSquaredUpperPValue(ratio, 1);
         writer.put("ces vs cobb-douglas", {ratio, 1.0, Cell{}, p, std::string("chi-squared"), verdict(p, level)});
     } else {

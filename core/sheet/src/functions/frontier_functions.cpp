@@ -136,7 +136,7 @@ ProductionFrontier frontierFromArguments(const FrontierArguments& arguments)
         controls = readNumericColumns(leastSquares.controls, argument::controls, ValueRule::finite, "control").values;
     const Eigen::MatrixXd design = frontierDesign(frontier.form, inputs.values, controls);
     const Eigen::VectorXd response = exactLog(output.values.col(0).array()).matrix();
-    frontier.fit = fitStochasticFrontier(design, response, fit.estimates, distribution);
+    frontier.fit = fitStochasticFrontier(design, response, fit.inference.estimates, distribution);
     setInference(frontier, exactLog(inputs.values.array()).matrix());
     return frontier;
 }

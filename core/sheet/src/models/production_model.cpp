@@ -247,7 +247,7 @@ ProductionModel readProductionModel(const CellTable& range)
     if (!rows.logScale) throw argumentError(argument::model, "has no \"ln A\" (or \"A\") row");
     if (rows.inputsRow && *rows.form != ProductionForm::ces)
         throw argumentError(argument::model, "an \"inputs\" row of labels belongs to a ces model only");
-    if (rows.convergence && equalsIgnoringCase(*rows.convergence, cesStatusWord(NonlinearStatus::notIdentified)))
+    if (rows.convergence && equalsIgnoringCase(*rows.convergence, convergenceWord(FitStatusKind::notIdentified)))
         throw InputError(
             "model: the fit is not identified; its estimates are one optimum of many, so they are not used");
     if (rows.convergence && !equalsIgnoringCase(*rows.convergence, convergedText))

@@ -30,16 +30,18 @@ std::string boundaryNote(const ProductionFit& fit)
 
 std::string cesNote(const ProductionFit& fit)
 {
-    switch (fit.ces->convergence) {
-    case NonlinearStatus::converged: break;
-    case NonlinearStatus::notIdentified:
+    switch (fit.status.kind) {
+    case FitStatusKind::notIdentified:
         return "note: not identified: the sum of squares is flat along some direction at the point reached "
                "(singular Hessian); the estimates are one optimum of many and have no standard errors";
-    case NonlinearStatus::evaluationLimit:
-    case NonlinearStatus::stopped:
+    case FitStatusKind::notConverged:
+    case FitStatusKind::stopped:
         return "note: the fit did not converge; the estimates are the solver's last values, not an optimum";
+    case FitStatusKind::boundary: return boundaryNote(fit);
+    case FitStatusKind::ok:
+    case FitStatusKind::illConditioned:
+    case FitStatusKind::exactFit: break;
     }
-    if (fit.ces->boundary != CesBoundary::none) return boundaryNote(fit);
     return statusNote(fit);
 }
 
@@ -62,12 +64,12 @@ std::size_t cesFitTableRows() { return 20; }
 CellTable cesFitTable(const ProductionFit& fit)
 {
     const CesDetails& ces = *fit.ces;
-    TableWriter writer(cesFitTableRows(), fit.status == FitStatus::perfectFit);
+    TableWriter writer(cesFitTableRows(), fit.status.is(FitStatusKind::exactFit));
     writer.headerRow(cesTitle);
     const char* labels[] = {logScaleLabel, weightLabel, curvatureLabel, returnsParameterLabel};
     for (Eigen::Index j = 0; j < 4; ++j) {
         if (onBoundary(fit, j))
-            writer.put(labels[j], {fit.estimates(j), std::string(boundaryText)});
+            writer.put(labels[j], {fit.inference.estimates(j), std::string(boundaryText)});
         else
             writer.parameterRow(labels[j], fit, j);
     }
@@ -82,8 +84,8 @@ CellTable cesFitTable(const ProductionFit& fit)
     writer.fitStatisticRows(fit, false);
     writer.returnsRows(fit.returns);
     writer.textRow(formLabel, {formWord(fit.form), cesNote(fit)});
-    writer.textRow(convergenceLabel, {cesStatusWord(ces.convergence), std::to_string(ces.evaluations) +
-                                                                          " evaluations; " + ces.stopReason});
+    writer.textRow(convergenceLabel, {convergenceWord(fit.status.kind),
+                                      std::to_string(ces.evaluations) + " evaluations; " + fit.status.reason});
     writer.textRow(inputsLabel, {fit.inputLabels[0], fit.inputLabels[1]});
     writer.valueRow(smearingLabel, fit.smearingFactor);
     return writer.finish();

@@ -68,7 +68,7 @@ CellTable costFitTable(const CostFit& fit)
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
     TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows, fit.frontier.has_value()),
-                       summary.status == FitStatus::perfectFit);
+                       summary.status.is(FitStatusKind::exactFit));
     writer.headerRow(costTitle(fit));
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);

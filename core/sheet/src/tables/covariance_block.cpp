@@ -157,12 +157,12 @@ CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fi
                                 formWord(fit.form) + " form");
     CovarianceBlock block;
     block.labels = cobbDouglasParameterLabels(fit.inputLabels, fit.controlLabels);
-    block.matrix = fit.covariance;
+    block.matrix = fit.inference.covariance;
     // As the table's standard errors: an exact fit has none, only the rounding left in V.
-    if (fit.status == FitStatus::perfectFit) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());
-    block.kind = fit.regression.covarianceKind;
-    block.degreesOfFreedom = fit.regression.inferenceDegreesOfFreedom;
-    block.level = fit.regression.confidenceLevel;
+    if (fit.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());
+    block.kind = fit.summary.covarianceKind;
+    block.degreesOfFreedom = fit.inference.degreesOfFreedom;
+    block.level = fit.inference.confidenceLevel;
     return withCovarianceBlock(table, block);
 }
 

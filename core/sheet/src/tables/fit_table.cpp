@@ -97,7 +97,7 @@ CellTable fitTable(const ProductionFit& fit)
     if (fit.form == ProductionForm::translog) return translogFitTable(fit);
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
-    TableWriter writer(fitTableRows(fit), fit.status == FitStatus::perfectFit);
+    TableWriter writer(fitTableRows(fit), fit.status.is(FitStatusKind::exactFit));
     writer.headerRow(cobbDouglasTitle);
     writer.parameterRow(logScaleLabel, fit, 0);
     for (std::size_t i = 0; i < k; ++i) writer.parameterRow(fit.inputLabels[i], fit, static_cast<Eigen::Index>(1 + i));
@@ -105,7 +105,7 @@ CellTable fitTable(const ProductionFit& fit)
         writer.parameterRow(fit.controlLabels[j] + controlSuffix, fit, static_cast<Eigen::Index>(1 + k + j));
     writer.skipRow();
 
-    const LeastSquaresResult& regression = fit.regression;
+    const FitSummary& regression = fit.summary;
     writer.valueRow(observationsLabel, static_cast<double>(regression.observations));
     writer.valueRow(rSquaredLabel, fit.rSquared);
     writer.valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);

@@ -49,17 +49,17 @@ void frontierInefficiencyRows(TableWriter& writer, const StochasticFrontierFit& 
 
 void frontierConvergenceRow(TableWriter& writer, const StochasticFrontierFit& fit)
 {
-    writer.textRow(convergenceLabel, {frontierStatusWord(fit.convergence),
-                                      std::to_string(fit.evaluations) + " evaluations; " + fit.stopReason});
+    writer.textRow(convergenceLabel, {frontierStatusWord(fit.status.kind),
+                                      std::to_string(fit.evaluations) + " evaluations; " + fit.status.reason});
 }
 
 std::string frontierNote(const StochasticFrontierFit& fit)
 {
     if (fit.wrongSkew) return wrongSkewNote;
-    if (fit.convergence == FrontierConvergence::boundary)
+    if (fit.status.is(FitStatusKind::boundary))
         return "note: no maximum with noise: the likelihood keeps rising toward noise SD = 0; the estimates "
                "are where the solver stopped (try the other inefficiency distribution or more rows)";
-    if (fit.convergence != FrontierConvergence::converged)
+    if (!fit.status.is(FitStatusKind::ok))
         return "note: the likelihood was not maximised; the estimates are where the solver stopped";
     return "";
 }
@@ -69,15 +69,10 @@ std::string inefficiencyWord(InefficiencyDistribution distribution)
     return distribution == InefficiencyDistribution::halfNormal ? "half-normal" : "exponential";
 }
 
-std::string frontierStatusWord(FrontierConvergence convergence)
+std::string frontierStatusWord(FitStatusKind kind)
 {
-    switch (convergence) {
-    case FrontierConvergence::converged: return convergedText;
-    case FrontierConvergence::notConverged: return "not converged";
-    case FrontierConvergence::stopped: return "stopped";
-    case FrontierConvergence::boundary: return boundaryText;
-    }
-    return "stopped";
+    if (kind == FitStatusKind::boundary) return boundaryText;
+    return convergenceWord(kind); // the frontier's kinds: ok, notConverged, stopped
 }
 
 std::size_t frontierTableRows(ProductionForm form, std::size_t inputs, std::size_t controls)

@@ -28,9 +28,10 @@ public:
 
     void parameterRow(const std::string& label, const ProductionFit& fit, Eigen::Index index)
     {
-        put(label, {fit.estimates(index), undefinedIfExact(fit.standardErrors(index)),
-                    undefinedIfExact(fit.tStatistics(index)), undefinedIfExact(fit.pValues(index)),
-                    undefinedIfExact(fit.lowerBounds(index)), undefinedIfExact(fit.upperBounds(index))});
+        const ParameterInference& inference = fit.inference;
+        put(label, {inference.estimates(index), undefinedIfExact(inference.standardErrors(index)),
+                    undefinedIfExact(inference.tStatistics(index)), undefinedIfExact(inference.pValues(index)),
+                    undefinedIfExact(inference.lowerBounds(index)), undefinedIfExact(inference.upperBounds(index))});
     }
     void estimateRow(const std::string& label, const ParameterEstimate& estimate)
     {
@@ -63,7 +64,7 @@ public:
     // observations, R2, adjusted R2, residual SD, [F (slopes = 0),] log-likelihood, AIC, BIC
     void fitStatisticRows(const ProductionFit& fit, bool withOverallTest)
     {
-        const LeastSquaresResult& summary = fit.regression;
+        const FitSummary& summary = fit.summary;
         valueRow(observationsLabel, static_cast<double>(summary.observations));
         valueRow(rSquaredLabel, fit.rSquared);
         valueRow(adjustedRSquaredLabel, fit.adjustedRSquared);
@@ -97,17 +98,17 @@ private:
     std::size_t row_ = 0;
 };
 
-// The note of the form row for a least-squares fit's status alone; empty when all is well.
+// The note of the form row for a least-squares fit's status alone; empty when all is well (the
+// kinds of a nonlinear fit have their notes in its table).
 inline std::string fitStatusNote(const ProductionFit& fit)
 {
-    switch (fit.status) {
-    case FitStatus::ok: return "";
-    case FitStatus::illConditioned:
+    switch (fit.status.kind) {
+    case FitStatusKind::illConditioned:
         return "note: inputs nearly collinear (scaled condition number " +
-               formatNumber(std::round(fit.regression.conditionNumber / 1e9) * 1e9) + "); estimates are fragile";
-    case FitStatus::perfectFit: return "note: the fit is exact; standard errors and tests are undefined";
+               formatNumber(std::round(fit.summary.conditionNumber / 1e9) * 1e9) + "); estimates are fragile";
+    case FitStatusKind::exactFit: return "note: the fit is exact; standard errors and tests are undefined";
+    default: return "";
     }
-    return "";
 }
 
 // Why a Wald test shows n/a under cluster errors: q restrictions, but G cluster scores that sum
@@ -130,7 +131,7 @@ inline std::string statusNote(const ProductionFit& fit)
 {
     std::string note = fitStatusNote(fit);
     auto add = [&note](const std::string& more) { note += (note.empty() ? "" : "; ") + more; };
-    const LeastSquaresResult& regression = fit.regression;
+    const FitSummary& regression = fit.summary;
     if (regression.overallTestExceedsClusters)
         add(tooFewGroupsNote(overallTestLabel, static_cast<double>(regression.overallRestrictions),
                              regression.clusterCount));

@@ -13,9 +13,10 @@ std::size_t translogFitTableRows(std::size_t inputs, std::size_t controls)
 CellTable translogFitTable(const ProductionFit& fit)
 {
     const TranslogDetails& translog = *fit.translog;
+    const ParameterInference& elasticities = translog.elasticities;
     const std::size_t k = fit.inputLabels.size();
     const std::size_t m = fit.controlLabels.size();
-    TableWriter writer(translogFitTableRows(k, m), fit.status == FitStatus::perfectFit);
+    TableWriter writer(translogFitTableRows(k, m), fit.status.is(FitStatusKind::exactFit));
     writer.headerRow(translogTitle);
     Eigen::Index parameter = 0;
     writer.parameterRow(logScaleLabel, fit, parameter++);
@@ -29,11 +30,11 @@ CellTable translogFitTable(const ProductionFit& fit)
     for (std::size_t i = 0; i < k; ++i) {
         const auto index = static_cast<Eigen::Index>(i);
         writer.put(elasticityPrefix + fit.inputLabels[i],
-                   {translog.elasticities(index), writer.undefinedIfExact(translog.elasticityStandardErrors(index)),
-                    writer.undefinedIfExact(translog.elasticityTStatistics(index)),
-                    writer.undefinedIfExact(translog.elasticityPValues(index)),
-                    writer.undefinedIfExact(translog.elasticityLowerBounds(index)),
-                    writer.undefinedIfExact(translog.elasticityUpperBounds(index))});
+                   {elasticities.estimates(index), writer.undefinedIfExact(elasticities.standardErrors(index)),
+                    writer.undefinedIfExact(elasticities.tStatistics(index)),
+                    writer.undefinedIfExact(elasticities.pValues(index)),
+                    writer.undefinedIfExact(elasticities.lowerBounds(index)),
+                    writer.undefinedIfExact(elasticities.upperBounds(index))});
     }
     writer.returnsRows(fit.returns);
     writer.put(cobbDouglasTestLabel, {Cell{}, Cell{}, writer.undefinedIfExact(translog.cobbDouglasTest.fStatistic),

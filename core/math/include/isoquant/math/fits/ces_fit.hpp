@@ -19,7 +19,9 @@
 // one infinite when ρ_low ≤ −1. The returns to scale are ν, tested against 1 by
 // F = ((ν−1)/se(ν))² on F(1, n−4). There is no inference, and the verdict is "not tested (…)",
 // at a boundary optimum, without convergence, and where J is rank deficient at a converged interior
-// point (status NonlinearStatus::notIdentified: JᵀJ singular, the optimum not unique).
+// point. ProductionFit::status says which, one kind (fit_status.hpp) in this order: notConverged or
+// stopped (the solver's status), notIdentified (JᵀJ singular, the optimum not unique), boundary,
+// exactFit, ok; its reason is the solver's account of how the run kept ended.
 // R² = 1 − RSS/TSS of ln Y; log-likelihood, AIC and BIC as for every form, with p = 4.
 #pragma once
 
@@ -46,9 +48,9 @@ struct CesDetails {
     double substitutionStandardError = 0;
     double substitutionLowerBound = 0;
     double substitutionUpperBound = 0;
-    NonlinearStatus convergence = NonlinearStatus::converged;
-    std::string stopReason;
     Eigen::Index evaluations = 0; // residual evaluations of the run kept, on all rows
+    // Where the point kept lies on the edge, whether or not the solver converged there (the
+    // table marks the parameter); ProductionFit::status is boundary when it converged there.
     CesBoundary boundary = CesBoundary::none;
 };
 
@@ -86,12 +88,6 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
 // searchRows as CesFitOptions::startSearchRows.
 std::vector<Eigen::Vector4d> cesStartValues(const ProductionData& data,
                                             Eigen::Index searchRows = CesFitOptions{}.startSearchRows);
-
-// The word of the table's convergence row: "converged", "not converged", "stopped" or "not identified".
-std::string cesStatusWord(NonlinearStatus status);
-
-// The convergence row's word for a run that converged (cesStatusWord); a typed ces model must say it.
-inline constexpr const char* convergedText = "converged";
 
 // How the verdict of a fit without a test of ν = 1 begins: "not tested (boundary)", "not tested
 // (not converged)", "not tested (stopped)" or "not tested (not identified)".

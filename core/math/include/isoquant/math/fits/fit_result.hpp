@@ -15,7 +15,9 @@
 
 #include "isoquant/math/fits/panel_regression.hpp"
 #include "isoquant/math/forms/production_form.hpp"
+#include "isoquant/math/numerics/fit_status.hpp"
 #include "isoquant/math/numerics/least_squares.hpp"
+#include "isoquant/math/numerics/parameter_inference.hpp"
 
 #include <Eigen/Dense>
 
@@ -44,15 +46,6 @@ struct ProductionFitOptions {
     CovarianceKind covariance = CovarianceKind::classical;
     double confidenceLevel = 0.95;
     EffectsKind effects = EffectsKind::none;
-};
-
-struct ParameterEstimate {
-    double estimate = 0;
-    double standardError = 0;
-    double tStatistic = 0;
-    double pValue = 0;
-    double lowerBound = 0;
-    double upperBound = 0;
 };
 
 // What groups, effects and a trend add to a fit.
@@ -98,22 +91,26 @@ struct ProductionFit {
     ProductionForm form = ProductionForm::cobbDouglas;
     std::vector<std::string> inputLabels;
     std::vector<std::string> controlLabels;
-    // Parameters in the order ln A, the k exponents, the m control coefficients.
-    Eigen::VectorXd estimates;
-    Eigen::VectorXd standardErrors;
-    Eigen::VectorXd tStatistics;
-    Eigen::VectorXd pValues;
-    Eigen::VectorXd lowerBounds;
-    Eigen::VectorXd upperBounds;
-    Eigen::MatrixXd covariance;
-    // The regression actually run: n, p, RSS, F, log-likelihood, AIC, BIC, condition number.
-    LeastSquaresResult regression;
+    // Parameters in the order ln A, the k exponents, the m control coefficients (the ces: ln A, δ,
+    // ρ, ν), with their inference on t(summary.inferenceDegreesOfFreedom).
+    ParameterInference inference;
+    // The Cobb-Douglas form's regression as run, whose columns differ from the form's parameters
+    // under constant returns (ln(Y/x_k) on ln(xᵢ/x_k)) or with a trend or period effects (their
+    // columns follow the base ones); empty for the other forms.
+    ParameterInference regressionInference;
+    // Of the regression actually run (least squares) or of the ces: n, p, RSS, F, log-likelihood,
+    // AIC, BIC, condition number.
+    FitSummary summary;
+    Eigen::VectorXd residuals; // of ln Y, one per row
+    // One verdict (fit_status.hpp): ok, illConditioned or exactFit for least squares; for the ces
+    // also notConverged, stopped, boundary (where: CesDetails::boundary) or notIdentified, the
+    // solver's account of how it ended in the reason.
+    FitStatus status;
     double rSquared = 0;         // on ln Y
     double adjustedRSquared = 0; // 1 − (1 − R²)(n − 1)/(n − p)
     ReturnsToScale returns;
     // ln A + Σⱼ cⱼ·mean(zⱼ): the evaluators' ln A when there are controls.
     double logScaleAtControlMeans = 0;
-    FitStatus status = FitStatus::ok;
     // Duan's smearing factor, mean of exp(residual of ln Y): multiplies exp(fitted ln Y), the
     // median prediction, into the mean prediction.
     double smearingFactor = 1;

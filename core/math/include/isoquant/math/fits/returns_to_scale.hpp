@@ -13,7 +13,7 @@ namespace isoquant {
 // of 1 counting as constant.
 std::string classifyReturnsToScale(double estimate, double pValue, double level, bool imposed);
 
-// ν over the k exponents after ln A in fit.estimates, its standard error √(1ᵀ V 1) and the Wald F
+// ν over the k exponents after ln A in fit.inference.estimates, its standard error √(1ᵀ V 1) and the Wald F
 // of ν = 1 on `regression` (whose columns 1…k are the exponents); imposed: ν without a test.
 ReturnsToScale testReturnsToScale(const ProductionFit& fit, const LeastSquaresResult& regression, Eigen::Index k,
                                   bool constantReturns, double confidenceLevel);

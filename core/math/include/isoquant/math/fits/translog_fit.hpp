@@ -18,13 +18,8 @@
 namespace isoquant {
 
 struct TranslogDetails {
-    Eigen::VectorXd meanLogInputs; // l̄
-    Eigen::VectorXd elasticities;  // εᵢ at l̄
-    Eigen::VectorXd elasticityStandardErrors;
-    Eigen::VectorXd elasticityTStatistics; // of εᵢ = 0
-    Eigen::VectorXd elasticityPValues;
-    Eigen::VectorXd elasticityLowerBounds;
-    Eigen::VectorXd elasticityUpperBounds;
+    Eigen::VectorXd meanLogInputs;  // l̄
+    ParameterInference elasticities; // εᵢ at l̄, t of εᵢ = 0 on t(n−p)
     WaldTest cobbDouglasTest; // all βᵢⱼ = 0
 };
 

@@ -16,19 +16,14 @@
 #include "isoquant/math/fits/fit_result.hpp" // ParameterEstimate
 #include "isoquant/math/frontier/frontier_likelihood.hpp"
 
+#include "isoquant/math/numerics/fit_status.hpp"
+
 #include <Eigen/Dense>
 
 #include <string>
 
 namespace isoquant {
 
-enum class FrontierConvergence {
-    converged,    // the score vanished within tolerance at a maximum (or the wrong-skew least squares)
-    notConverged, // the evaluation limit came first
-    stopped,      // the solver made no progress, or its root is not a maximum
-    boundary      // stopped where ℓ still rises as σᵥ falls: the supremum lies toward σᵥ = 0, a
-                  // frontier without noise, which the model does not reach
-};
 
 struct StochasticFrontierFit {
     InefficiencyDistribution distribution = InefficiencyDistribution::halfNormal;
@@ -42,9 +37,13 @@ struct StochasticFrontierFit {
     double leastSquaresLogLikelihood = 0; // Gaussian, at σᵥ² = RSS/n: ℓ under σᵤ = 0
     double thirdMoment = 0;               // m₃ of the least-squares residuals
     bool wrongSkew = false;
-    FrontierConvergence convergence = FrontierConvergence::converged;
-    long evaluations = 0;   // of the score
-    std::string stopReason; // in words, for the table
+    // One status (fit_status.hpp), its reason in words for the table: ok (the score vanished
+    // within tolerance at a maximum, or the wrong-skew least squares), notConverged (the
+    // evaluation limit came first), stopped (no progress, or a root that is not a maximum) or
+    // boundary (stopped where ℓ still rises as σᵥ falls: the supremum lies toward σᵥ = 0, a
+    // frontier without noise, which the model does not reach).
+    FitStatus status;
+    long evaluations = 0; // of the score
     Eigen::VectorXd residuals; // ε = ln y − xᵀβ at the estimate
 };
 

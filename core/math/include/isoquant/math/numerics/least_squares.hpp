@@ -4,6 +4,8 @@
 // NIST StRD linear checks call directly (any design matrix, with or without a constant column).
 #pragma once
 
+#include "isoquant/math/numerics/fit_status.hpp"
+#include "isoquant/math/numerics/parameter_inference.hpp"
 #include "isoquant/math/numerics/regression_rows.hpp"
 
 #include <Eigen/Dense>
@@ -14,14 +16,6 @@
 
 namespace isoquant {
 
-enum class CovarianceKind {
-    classical, // σ²·(XᵀX)⁻¹ with σ² = RSS/(n−p)
-    hc1,       // White's sandwich scaled by n/(n−p)
-    hc3,       // sandwich with squared residuals divided by (1−hᵢᵢ)²
-    cluster    // CR1: Σ_g (X_gᵀe_g)(X_gᵀe_g)ᵀ in the sandwich, scaled by G/(G−1)·(n−1)/(n−p), p less
-               // the absorbed parameters nested in the clusters (LeastSquaresOptions)
-};
-
 struct LeastSquaresOptions {
     CovarianceKind covariance = CovarianceKind::classical;
     // Bounds are b ∓ t_{(1+level)/2}(n−p)·se.
@@ -30,7 +24,7 @@ struct LeastSquaresOptions {
     // design (every column scaled to unit Euclidean norm) is at most this fraction of the largest.
     double rankTolerance = 1e-13;
     // Above this 2-norm condition number of the column-scaled design the status becomes
-    // illConditioned; the numbers are still returned.
+    // FitStatusKind::illConditioned; the numbers are still returned.
     double conditionWarning = 1e10;
     // The QR factorisation runs in double (vectorised; 2.7× faster at 1M rows in the benchmark) when
     // the first-order error estimate of that solution, u·(κ + κ²·‖r‖/(‖X‖₂·‖b‖)) with u = 2⁻⁵³ and κ
@@ -40,7 +34,7 @@ struct LeastSquaresOptions {
     // NIST Wampler1 and Wampler3 took the double route and reached only LRE 9.5 and 9.6, so the
     // limit is 1e-13. 0 sends every fit the extended way.
     double doublePrecisionErrorLimit = 1e-13;
-    // The fit counts as perfect when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
+    // The fit counts as exact (FitStatusKind::exactFit) when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
     double perfectFitTolerance = 1e-12;
     // Parameters removed before the fit by demeaning within groups (the group means of a within
     // estimator): they count in p, so n − p, σ² and the HC1 factor are those of the regression
@@ -66,52 +60,16 @@ struct LeastSquaresOptions {
     Eigen::Index rowsPerBlock = 512;
 };
 
-enum class FitStatus {
-    ok,
-    illConditioned, // full rank, but the scaled condition number exceeds conditionWarning
-    perfectFit      // every residual is zero: standard errors are zero and tests are undefined
-};
-
+// The parameter block and the summary are those of every fit (parameter_inference.hpp); the
+// status is ok, illConditioned or exactFit (fit_status.hpp).
 struct LeastSquaresResult {
     bool factorisedInDouble = false; // which route doublePrecisionErrorLimit chose
-    Eigen::VectorXd coefficients;
-    Eigen::VectorXd standardErrors;
-    Eigen::VectorXd tStatistics;
-    Eigen::VectorXd pValues; // two-sided, Student t with inferenceDegreesOfFreedom
-    Eigen::VectorXd lowerBounds;
-    Eigen::VectorXd upperBounds;
-    Eigen::MatrixXd covariance;
+    // Coefficients in inference.estimates; t and p on summary.inferenceDegreesOfFreedom.
+    ParameterInference inference;
+    FitSummary summary;
     Eigen::VectorXd residuals;
-
-    Eigen::Index observations = 0;
-    Eigen::Index parameters = 0;         // columns of the design
-    Eigen::Index absorbedParameters = 0; // as in the options; p = parameters + absorbedParameters
-    double residualDegreesOfFreedom = 0; // n − p
-    // Of the t and F distributions used for inference: n − p, or G − 1 under cluster errors.
-    double inferenceDegreesOfFreedom = 0;
-    Eigen::Index clusterCount = 0;       // G under cluster errors, else 0
-    double residualSumOfSquares = 0;
-    // Centred about the mean of y when the design has a constant column, uncentred otherwise.
-    double totalSumOfSquares = 0;
-    double rSquared = 0;          // 1 − RSS/TSS
-    double adjustedRSquared = 0;  // 1 − (1 − R²)·(n − c)/(n − p), c = 1 with a constant, else 0
-    double residualStandardDeviation = 0; // √(RSS/(n−p))
-    // Wald F of all coefficients but the constant being zero, on F(q, inferenceDegreesOfFreedom)
-    // with the chosen covariance; NaN when there is nothing to test or the test is undefined
-    // (overallTestExceedsClusters).
-    double fStatistic = 0;
-    double fPValue = 0;
-    Eigen::Index overallRestrictions = 0;   // q of that test
-    bool overallTestExceedsClusters = false; // q > G − 1 under cluster errors (WaldTest)
-    // Gaussian: −n/2·(ln 2π + ln(RSS/n) + 1); AIC = −2LL + 2p; BIC = −2LL + p·ln n (p excludes σ²).
-    double logLikelihood = 0;
-    double aic = 0;
-    double bic = 0;
-    double conditionNumber = 0; // of the column-scaled design
     std::optional<Eigen::Index> interceptColumn;
-    CovarianceKind covarianceKind = CovarianceKind::classical;
-    double confidenceLevel = 0.95;
-    FitStatus status = FitStatus::ok;
+    FitStatus status;
 };
 
 // Thrown for HC3 errors when row `row` (0-based in the regression) has leverage 1: its weight
@@ -124,17 +82,6 @@ public:
 private:
     Eigen::Index row_;
 };
-
-// The Gaussian log-likelihood of a least-squares fit with n residuals and sum of squares RSS (σ²
-// estimated as RSS/n and not counted among the parameters):
-//   LL = −n/2·(ln 2π + ln(RSS/n) + 1),   AIC = −2LL + 2p,   BIC = −2LL + p·ln n.
-// The one formula of every form (least squares, ces, translog), so their criteria compare.
-struct LikelihoodCriteria {
-    double logLikelihood = 0;
-    double aic = 0;
-    double bic = 0;
-};
-LikelihoodCriteria gaussianLikelihood(double residualSumOfSquares, double observations, double parameters);
 
 // Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
 // estimate allows, else with column pivoting in long double (see LeastSquaresOptions).

@@ -5,6 +5,8 @@
 // "Did not converge" is a status of the result, not an error: the caller decides what to show.
 #pragma once
 
+#include "isoquant/math/numerics/parameter_inference.hpp"
+
 #include <Eigen/Dense>
 
 #include <string>
@@ -58,27 +60,20 @@ enum class NonlinearStatus {
 };
 
 // Classical inference from the Jacobian J at θ: V = s²·(JᵀJ)⁻¹, s² = RSS/(n−p); t = θ/se on
-// t(n−p). Standard errors are NaN when J is rank deficient (see rankTolerance).
-struct NonlinearInference {
-    Eigen::VectorXd standardErrors;
-    Eigen::VectorXd tStatistics;
-    Eigen::VectorXd pValues;
-    Eigen::VectorXd lowerBounds;
-    Eigen::VectorXd upperBounds;
-    Eigen::MatrixXd covariance;
-    double residualSumOfSquares = 0;
-    double residualDegreesOfFreedom = 0;
-    double residualStandardDeviation = 0; // √(RSS/(n−p))
-};
-
-NonlinearInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+// t(n−p) (inferParameters). Standard errors are NaN when J is rank deficient (see rankTolerance).
+ParameterInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
                                       const Eigen::VectorXd& parameters, double confidenceLevel,
                                       double rankTolerance);
+
+// The summary a nonlinear fit fills from its residuals alone: n, p, RSS, n − p (also the inference
+// degrees of freedom) and s = √(RSS/(n−p)); R², the likelihood and the rest are the caller's.
+FitSummary nonlinearSummary(const Eigen::VectorXd& residuals, Eigen::Index parameterCount);
 
 struct NonlinearLeastSquaresResult {
     Eigen::VectorXd parameters;
     Eigen::VectorXd residuals;
-    NonlinearInference inference;
+    ParameterInference inference; // estimates = parameters
+    FitSummary summary;           // nonlinearSummary
     Eigen::Index observations = 0;
     Eigen::Index evaluations = 0;         // residual evaluations
     Eigen::Index jacobianEvaluations = 0;
@@ -91,7 +86,7 @@ NonlinearLeastSquaresResult fitNonlinearLeastSquares(const NonlinearModel& model
                                                      const NonlinearLeastSquaresOptions& options = {});
 
 // The solver alone, for a caller that tries several starts and infers at the one it keeps: as
-// fitNonlinearLeastSquares but with `inference` left empty (no Jacobian at the end).
+// fitNonlinearLeastSquares but with `inference` and `summary` left empty (no Jacobian at the end).
 NonlinearLeastSquaresResult minimizeSumOfSquares(const NonlinearModel& model, const Eigen::VectorXd& start,
                                                  const NonlinearLeastSquaresOptions& options);
 

@@ -39,7 +39,8 @@ CellTable frontierTable(const ProductionFrontier& frontier);
 
 // The word of the inefficiency argument and of the title: "half-normal" or "exponential".
 std::string inefficiencyWord(InefficiencyDistribution distribution);
-std::string frontierStatusWord(FrontierConvergence convergence);
+// The convergence row's word: "converged", "not converged", "stopped" or "boundary".
+std::string frontierStatusWord(FitStatusKind kind);
 // The form row's note on the fit: wrong skew, a boundary or no convergence; empty when converged.
 std::string frontierNote(const StochasticFrontierFit& fit);
 
