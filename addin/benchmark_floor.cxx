@@ -1,6 +1,6 @@
 #include "benchmark_floor.hxx"
 
-#include "function_table.hxx"
+#include "function_arguments.hxx"
 
 namespace isoquant::addin {
 

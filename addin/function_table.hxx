@@ -18,14 +18,6 @@ struct FunctionInfo {
     std::vector<ArgumentInfo> arguments;
 };
 
-// Arguments shared by PRODFIT and PRODSTAT.
-inline constexpr ArgumentInfo outputArgument{
-    "output", "Output of each row (plant, branch or period): one column of positive numbers. A first row of text is "
-              "read as a header."};
-inline constexpr ArgumentInfo inputsArgument{
-    "inputs", "Inputs of each row, one column per input (labour, capital, …), positive numbers, as many rows as "
-              "output. A first row of text names the inputs."};
-
 // The category every function is filed under. Calc 7.4 shows add-in functions whose category is
 // not one of its own under "Add-In".
 inline constexpr std::string_view categoryName = "Production Economics";
