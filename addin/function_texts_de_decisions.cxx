@@ -103,15 +103,21 @@ std::vector<TranslatedFunction> germanCostTexts()
                        "Zahlen, so viele Zeilen wie bei den Kosten. Eine erste Zeile mit Text benennt die "
                        "Faktoren; die Homogenität wird durch Division durch den letzten Preis erzwungen."},
       {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
-      {"Kostenanteile", "Kostenanteile der Faktoren (für Kostenschätzungen noch nicht verfügbar; leer lassen)."},
+      {"Kostenanteile", "Optionale Kostenanteile der Faktoren, eine Spalte je Preis in derselben Reihenfolge, so "
+                        "viele Zeilen wie bei den Kosten, jede Zeile mit Summe 1 auf 0,01 genau (Anteile). Angegeben, "
+                        "werden die Kostengleichung und alle Anteilsgleichungen bis auf die letzte gemeinsam nach "
+                        "iterierter verallgemeinerter Methode der kleinsten Quadrate geschätzt (scheinbar "
+                        "unverbundene Regressionen)."},
       {"Standardfehler", "Standardfehler: \"classical\" (Standard), \"hc1\" oder \"hc3\" (robust gegen "
-                         "Heteroskedastizität)."},
+                         "Heteroskedastizität; nur ohne Kostenanteile)."},
       levelArgument,
       {"Kontrollvariablen", notForCostFits},
       {"Gruppen", notForCostFits},
       {"Effekte", notForCostFits},
       {"Trend", notForCostFits},
-      {"unvollständige Zeilen", notForCostFits},
+      {"unvollständige Zeilen", "WAHR, um Zeilen mit einer leeren oder Text-Zelle in Kosten, Ausbringung, "
+                                "Faktorpreisen oder Kostenanteilen auszulassen (die Tabelle zählt sie); FALSCH oder "
+                                "leer: eine solche Zelle ist ein Fehler."},
       {"Ineffizienz", "Leer (Standard): die durchschnittliche Kostenfunktion. \"half-normal\" (halbnormal) "
                       "oder \"exponential\" (exponentialverteilt): eine Kostengrenze, ln Kosten = Grenze + "
                       "Störterm + Ineffizienz, deren Tabelle Standardabweichung von Störterm und Ineffizienz, "
