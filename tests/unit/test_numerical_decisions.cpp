@@ -1,6 +1,7 @@
 // The numerical least-cost, budget and profit solves (numerical_decisions.hpp), which serve any
 // smooth technology, against the closed forms on Cobb-Douglas and on the test CES, and against
 // their own optimality conditions on the test translog. Parameters and prices are seeded draws.
+#include "solved_plan.hpp"
 #include "isoquant/math/decisions/ces_closed_forms.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
 #include "isoquant/math/forms/homogeneous_cost.hpp"
@@ -28,6 +29,8 @@ constexpr double solveTolerance = 1e-7;
 
 void requireSamePlan(const ProductionPlan& numerical, const ProductionPlan& closed)
 {
+    BOOST_TEST_REQUIRE(numerical.solved(), "no plan: " << numerical.status.reason);
+    BOOST_TEST_REQUIRE(closed.solved(), "no plan: " << closed.status.reason);
     BOOST_TEST_REQUIRE(numerical.inputs.size() == closed.inputs.size());
     for (Eigen::Index i = 0; i < closed.inputs.size(); ++i)
         BOOST_TEST(closeTo(numerical.inputs(i), closed.inputs(i), solveTolerance));
@@ -36,14 +39,11 @@ void requireSamePlan(const ProductionPlan& numerical, const ProductionPlan& clos
     BOOST_TEST(closeTo(numerical.marginalCost, closed.marginalCost, solveTolerance));
 }
 
-std::string statusOf(const std::function<void()>& solve)
+// The reason a plan does not exist, or "<a plan>".
+std::string statusOf(const std::function<ProductionPlan()>& solve)
 {
-    try {
-        solve();
-    } catch (const isoquant::NoSolution& status) {
-        return status.what();
-    }
-    return "<a plan>";
+    const ProductionPlan plan = solve();
+    return plan.solved() ? "<a plan>" : plan.status.reason;
 }
 
 } // namespace
@@ -95,14 +95,14 @@ BOOST_AUTO_TEST_CASE(translog_answers_meet_their_conditions)
     b << -0.04, 0.01, 0.005, 0.01, -0.03, 0.01, 0.005, 0.01, -0.05;
     const isoquant::testing::TranslogTestTechnology technology(0.5, Eigen::Vector3d(0.35, 0.25, 0.2), b);
     const Eigen::Vector3d w(4.0, 9.0, 2.5);
-    const auto leastCost = isoquant::solveLeastCost(technology, 20.0, w);
+    const auto leastCost = isoquant::testing::requireSolved(isoquant::solveLeastCost(technology, 20.0, w));
     BOOST_TEST(closeTo(technology.output(leastCost.inputs), 20.0, solveTolerance));
-    const auto budget = isoquant::solveBudget(technology, 500.0, w);
+    const auto budget = isoquant::testing::requireSolved(isoquant::solveBudget(technology, 500.0, w));
     BOOST_TEST(closeTo(w.dot(budget.inputs), 500.0, solveTolerance));
     for (const auto* plan : {&leastCost, &budget})
         for (int i = 0; i < 3; ++i)
             BOOST_TEST(closeTo(w(i) / technology.marginalProduct(plan->inputs, i), plan->marginalCost, solveTolerance));
-    const auto profit = isoquant::solveProfit(technology, 6.0, w);
+    const auto profit = isoquant::testing::requireSolved(isoquant::solveProfit(technology, 6.0, w));
     for (int i = 0; i < 3; ++i) BOOST_TEST(closeTo(6.0 * technology.marginalProduct(profit.inputs, i), w(i), solveTolerance));
 }
 
@@ -115,12 +115,12 @@ BOOST_AUTO_TEST_CASE(report_no_profit_maximum_as_such)
     const double unitCost = std::exp(isoquant::cesCost(constant, w).logUnitCost);
     // With δ = ½, ρ = 1: [½/x + ½/x]⁻¹ = x, so one unit needs x₁ = x₂ = 1, at cost 2.
     BOOST_TEST(closeTo(unitCost, 2.0, 1e-12));
-    BOOST_TEST(statusOf([&] { isoquant::solveProfit(ces, 10.0, w); }).rfind(
+    BOOST_TEST(statusOf([&] { return isoquant::solveProfit(ces, 10.0, w); }).rfind(
                    "No finite profit maximum: returns to scale are constant (1)", 0) == 0);
     // A translog with increasing returns everywhere (ν = 1.3): its first-order point is a
     // profit minimum, not a maximum, and it is reported as such (not as a search that did not settle).
     const isoquant::testing::TranslogTestTechnology increasing(0.0, Eigen::Vector2d(0.6, 0.7), Eigen::Matrix2d::Zero());
-    const std::string status = statusOf([&] { isoquant::solveProfit(increasing, 2.0, w); });
+    const std::string status = statusOf([&] { return isoquant::solveProfit(increasing, 2.0, w); });
     BOOST_TEST(status == "No profit maximum found: where price equals marginal value for every input, the profit "
                          "function is not concave, so that point is not a maximum");
 }

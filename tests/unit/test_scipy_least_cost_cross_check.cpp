@@ -9,6 +9,7 @@
 //
 // CTest runs the script first (test scipy_least_cost_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_SCIPY_LEAST_COST; without that file this test is skipped.
+#include "solved_plan.hpp"
 #include "isoquant/math/decisions/ces_closed_forms.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/math/decisions/numerical_decisions.hpp"
@@ -97,13 +98,13 @@ BOOST_AUTO_TEST_CASE(least_cost_bundles_agree_with_scipy, *boost::unit_test::pre
             for (std::size_t i = 0; i < row.columns(); ++i) cells(static_cast<Eigen::Index>(i)) = row.number(0, i);
             compare(name + " (PRODLEASTCOST)", cells, scipy);
             const isoquant::CobbDouglas technology(std::log(parameters(0)), parameters.tail(parameters.size() - 1));
-            compare(name + " (numerical)", isoquant::solveLeastCost(technology, target, prices).inputs, scipy);
+            compare(name + " (numerical)", isoquant::testing::requireSolved(isoquant::solveLeastCost(technology, target, prices)).inputs, scipy);
         } else {
             const isoquant::CesParameters ces{parameters(0), parameters(1), parameters(2), parameters(3)};
             compare(name + " (CES closed form)",
                     isoquant::leastCostPlan(isoquant::cesCost(ces, Eigen::Vector2d(prices)), target).inputs, scipy);
             compare(name + " (numerical)",
-                    isoquant::solveLeastCost(isoquant::testing::CesTestTechnology(ces), target, prices).inputs, scipy);
+                    isoquant::testing::requireSolved(isoquant::solveLeastCost(isoquant::testing::CesTestTechnology(ces), target, prices)).inputs, scipy);
         }
         ++compared;
     }

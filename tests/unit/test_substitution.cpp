@@ -1,6 +1,7 @@
 // Curvature verdicts and elasticities of substitution: facts of the trade on Cobb-Douglas and CES,
 // and the generic formulas against finite differences and the literal cofactor definitions, on
 // seeded random technologies (Cobb-Douglas, the test CES and the test translog) and bundles.
+#include "solved_plan.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
 #include "isoquant/math/numerics/level_roots.hpp"
 #include "isoquant/math/forms/local_shape.hpp"
@@ -85,8 +86,8 @@ Eigen::MatrixXd demandElasticities(const isoquant::Technology& technology, doubl
         Eigen::VectorXd up = prices, down = prices;
         up(j) *= std::exp(h);
         down(j) *= std::exp(-h);
-        const Eigen::VectorXd logUp = isoquant::solveLeastCost(technology, target, up).inputs.array().log();
-        const Eigen::VectorXd logDown = isoquant::solveLeastCost(technology, target, down).inputs.array().log();
+        const Eigen::VectorXd logUp = isoquant::testing::requireSolved(isoquant::solveLeastCost(technology, target, up)).inputs.array().log();
+        const Eigen::VectorXd logDown = isoquant::testing::requireSolved(isoquant::solveLeastCost(technology, target, down)).inputs.array().log();
         elasticities.col(j) = (logUp - logDown) / (2 * h);
     }
     return elasticities;
@@ -101,7 +102,7 @@ void checkAgainstDemandElasticities(const isoquant::Technology& technology, cons
     const Eigen::Index k = x.size();
     const Eigen::VectorXd prices = technology.gradient(x);
     const double target = technology.output(x);
-    const Eigen::VectorXd solved = isoquant::solveLeastCost(technology, target, prices).inputs;
+    const Eigen::VectorXd solved = isoquant::testing::requireSolved(isoquant::solveLeastCost(technology, target, prices)).inputs;
     // The solve's own accuracy, 1e-9 relative (its residual tolerance), before differences are taken.
     for (Eigen::Index i = 0; i < k; ++i) BOOST_TEST_REQUIRE(closeTo(solved(i), x(i), 1e-9));
     const Eigen::MatrixXd epsilon = demandElasticities(technology, target, prices);

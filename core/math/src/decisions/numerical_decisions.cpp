@@ -170,12 +170,8 @@ Eigen::VectorXd cobbDouglasStart(const Technology& technology, Eigen::VectorXd x
     for (int round = 0; round < options.startRounds; ++round) {
         const auto local = localCobbDouglas(technology, x);
         if (!local) break;
-        std::optional<Eigen::VectorXd> next;
-        try {
-            next = answer(*local);
-        } catch (const NoSolution&) {
-            break; // the local approximation has no answer (e.g. ν ≥ 1 for profit)
-        }
+        // Empty when the local approximation has no answer (e.g. ν ≥ 1 for profit).
+        std::optional<Eigen::VectorXd> next = answer(*local);
         if (!next || !usable(*next) || !ontoLevel(*next) || !(worse(*next) < worse(x))) break;
         x = *next;
     }
@@ -226,8 +222,10 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
     x = cobbDouglasStart(technology, x, options, closing == Closing::output ? std::optional<double>(logLevel) : std::nullopt,
                          [&](const CobbDouglas& local) -> std::optional<Eigen::VectorXd> {
                              const HomogeneousCost cost = cobbDouglasCost(local, prices);
-                             return closing == Closing::output ? leastCostPlan(cost, level).inputs
-                                                               : budgetPlan(cost, level).inputs;
+                             const ProductionPlan plan =
+                                 closing == Closing::output ? leastCostPlan(cost, level) : budgetPlan(cost, level);
+                             if (!plan.solved()) return std::nullopt;
+                             return plan.inputs;
                          },
                          [&](const Eigen::VectorXd& bundle) {
                              return closing == Closing::output ? prices.dot(bundle) : -technology.logOutput(bundle);
@@ -241,14 +239,14 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
     TangencySystem system(technology, prices, closing, logLevel);
     const std::string problem = closing == Closing::output ? "the least-cost bundle" : "the best use of the budget";
     const double residual = solveSystem(system, u, options);
-    if (!(residual <= options.residualTolerance)) throw NoSolution(notConverged(problem, residual));
+    if (!(residual <= options.residualTolerance)) return noPlan(notConverged(problem, residual));
 
     x = u.head(k).array().exp();
     const LocalShape shape = localShape(technology, x);
     if (!isFinite(shape) || !negativeDefinite(onTangentPlane(shape), shape.scaledHessian.cwiseAbs().maxCoeff(), options))
-        throw NoSolution("No " + std::string(closing == Closing::output ? "least-cost bundle" : "best use of the budget") +
-                         " found: where the isoquant touches the price line it is not bowed towards the origin, so "
-                         "that point is not an optimum");
+        return noPlan("No " + std::string(closing == Closing::output ? "least-cost bundle" : "best use of the budget") +
+                      " found: where the isoquant touches the price line it is not bowed towards the origin, so "
+                      "that point is not an optimum");
     ProductionPlan plan = planAt(technology, x, prices);
     // λ = μ/y
     plan.marginalCost = std::exp(u(k)) / plan.output;
@@ -277,12 +275,16 @@ ProductionPlan solveProfit(const Technology& technology, double outputPrice, con
     if (const auto scale = technology.constantScaleElasticity(); scale && *scale >= 1 - constantReturnsTolerance) {
         HomogeneousCost cost;
         cost.scale = *scale;
-        cost.logUnitCost = std::log(solveLeastCost(technology, 1, prices, options).cost);
-        profitPlan(cost, outputPrice); // throws NoSolution saying why
+        const ProductionPlan unit = solveLeastCost(technology, 1, prices, options);
+        if (!unit.solved()) return unit;
+        cost.logUnitCost = std::log(unit.cost);
+        if (ProductionPlan closed = profitPlan(cost, outputPrice); !closed.solved()) return closed;
     }
     Eigen::VectorXd x = cobbDouglasStart(technology, Eigen::VectorXd::Ones(prices.size()), options, std::nullopt,
                                          [&](const CobbDouglas& local) -> std::optional<Eigen::VectorXd> {
-                                             return profitPlan(cobbDouglasCost(local, prices), outputPrice).inputs;
+                                             const ProductionPlan plan = profitPlan(cobbDouglasCost(local, prices), outputPrice);
+                                             if (!plan.solved()) return std::nullopt;
+                                             return plan.inputs;
                                          },
                                          [&](const Eigen::VectorXd& bundle) {
                                              return prices.dot(bundle) - outputPrice * technology.output(bundle);
@@ -290,12 +292,12 @@ ProductionPlan solveProfit(const Technology& technology, double outputPrice, con
     Eigen::VectorXd z = exactLog(x.array());
     ProfitSystem system(technology, outputPrice, prices);
     const double residual = solveSystem(system, z, options);
-    if (!(residual <= options.residualTolerance)) throw NoSolution(notConverged("the profit maximum", residual));
+    if (!(residual <= options.residualTolerance)) return noPlan(notConverged("the profit maximum", residual));
     x = z.array().exp();
     const LocalShape shape = localShape(technology, x);
     if (!isFinite(shape) || !negativeDefinite(shape.scaledHessian, shape.scaledHessian.cwiseAbs().maxCoeff(), options))
-        throw NoSolution("No profit maximum found: where price equals marginal value for every input, the profit "
-                         "function is not concave, so that point is not a maximum");
+        return noPlan("No profit maximum found: where price equals marginal value for every input, the profit "
+                      "function is not concave, so that point is not a maximum");
     ProductionPlan plan = planAt(technology, x, prices);
     plan.marginalCost = outputPrice;
     return plan;

@@ -54,13 +54,13 @@ ProductionPlan profitPlan(const HomogeneousCost& cost, double outputPrice)
                                      : cost.logUnitCost > 0
                                          ? "more than " + localDecimal("1.8e308") + " (ln " + readable(cost.logUnitCost) + ")"
                                          : "less than " + localDecimal("2.2e-308") + " (ln " + readable(cost.logUnitCost) + ")";
-        throw NoSolution("No finite profit maximum: returns to scale are constant (1), and at these prices one "
-                         "unit of output costs " + costText + " to make and sells for " + readable(outputPrice) +
-                         ", " + comparison);
+        return noPlan("No finite profit maximum: returns to scale are constant (1), and at these prices one "
+                      "unit of output costs " + costText + " to make and sells for " + readable(outputPrice) +
+                      ", " + comparison);
     }
     if (nu > 1)
-        throw NoSolution("No finite profit maximum: returns to scale are increasing (" + readable(nu) +
-                         "), so profit grows without limit as every input is scaled up");
+        return noPlan("No finite profit maximum: returns to scale are increasing (" + readable(nu) +
+                      "), so profit grows without limit as every input is scaled up");
     return planAtLogOutput(cost, nu / (1 - nu) * (std::log(nu) + std::log(outputPrice) - cost.logUnitCost));
 }
 

@@ -23,14 +23,6 @@ namespace isoquant {
 
 namespace {
 
-bool isOmitted(const Cell& cell) { return isEmpty(cell) || (isText(cell) && std::get<std::string>(cell).empty()); }
-
-std::string describe(const Cell& cell)
-{
-    if (isText(cell)) return quoted(std::get<std::string>(cell));
-    return isNumber(cell) ? formatNumber(std::get<double>(cell)) : std::string("an empty cell");
-}
-
 // sᵢ = βᵢ + Σⱼ βᵢⱼ ln wⱼ + βᵢ_y ln y: the gradient of ln C in ln w.
 Eigen::VectorXd fittedShares(const CostModel& cost, double output, const Eigen::VectorXd& prices)
 {

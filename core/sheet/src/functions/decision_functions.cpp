@@ -143,15 +143,13 @@ CellTable rowOf(const Eigen::VectorXd& values)
     return row;
 }
 
-// Runs a decision: its plan, or the sentence of a NoSolution in a single cell.
+// Runs a decision: its plan laid out, or the reason there is none (its status) in a single cell.
 template <typename Solve, typename Layout>
 CellTable decided(Solve solve, Layout layout)
 {
-    try {
-        return layout(solve());
-    } catch (const NoSolution& status) {
-        return singleCell(std::string(status.what()));
-    }
+    const ProductionPlan plan = solve();
+    if (!plan.solved()) return singleCell(plan.status.reason);
+    return layout(plan);
 }
 
 // Under decreasing returns a profit maximum always exists, but where the price barely covers
@@ -159,12 +157,12 @@ CellTable decided(Solve solve, Layout layout)
 // output the plan is reported as producing nothing (the threshold: common practice, no source).
 constexpr double negligibleOutput = 1e-6;
 
-void refuseNegligibleSize(const ProductionPlan& plan)
+ProductionPlan withoutNegligibleSize(ProductionPlan plan)
 {
-    if (!(plan.output < negligibleOutput)) return;
+    if (!plan.solved() || !(plan.output < negligibleOutput)) return plan;
     // Three significant digits: the size is read, not computed with.
-    throw NoSolution("No profitable size: producing nothing is best at these prices (the best output, " +
-                     formatNumber(plan.output, 3) + ", is below a millionth of one unit)");
+    return noPlan("No profitable size: producing nothing is best at these prices (the best output, " +
+                  formatNumber(plan.output, 3) + ", is below a millionth of one unit)");
 }
 
 struct DecisionSetup {
@@ -306,11 +304,11 @@ CellTable profitRow(const ModelTable& model, const Cell& outputPrice, const Cell
     const double price = readPositiveNumber(outputPrice, argument::outputPrice);
     return decided(
         [&] {
-            if (const auto cost = closedFormCost(setup.model, setup.prices)) return profitPlan(*cost, price);
-            return solveProfit(*setup.model.technology, price, setup.prices);
+            if (const auto cost = closedFormCost(setup.model, setup.prices))
+                return withoutNegligibleSize(profitPlan(*cost, price));
+            return withoutNegligibleSize(solveProfit(*setup.model.technology, price, setup.prices));
         },
         [&](const ProductionPlan& plan) {
-            refuseNegligibleSize(plan);
             requireRepresentable(plan, setup.model, argument::outputPrice);
             const double profit = price * plan.output - plan.cost;
             if (!std::isfinite(profit))

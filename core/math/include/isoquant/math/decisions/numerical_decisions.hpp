@@ -33,8 +33,8 @@ struct NumericalSolveOptions {
     double curvatureTolerance = 1e-10;
 };
 
-// Each throws NoSolution when the solve does not converge or its answer fails the second-order
-// condition. Prices and the target (or budget, or output price) are positive (the caller checks).
+// Each gives noPlan, saying why, when the solve does not converge or its answer fails the
+// second-order condition. Prices and the target (or budget, or output price) are positive (the caller checks).
 ProductionPlan solveLeastCost(const Technology& technology, double target, const Eigen::VectorXd& prices,
                               const NumericalSolveOptions& options = {});
 ProductionPlan solveBudget(const Technology& technology, double budget, const Eigen::VectorXd& prices,

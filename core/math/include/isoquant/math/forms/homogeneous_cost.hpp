@@ -27,7 +27,7 @@ ProductionPlan budgetPlan(const HomogeneousCost& cost, double budget);
 // exponents summing to 1 up to rounding of a few ulps, and 1/(1 − ν) would then be about 1e16.
 inline constexpr double constantReturnsTolerance = 1e-12;
 
-// Throws NoSolution, saying why, when ν ≥ 1 (within constantReturnsTolerance of 1 counts as 1).
+// No plan (noPlan, saying why) when ν ≥ 1 (within constantReturnsTolerance of 1 counts as 1).
 ProductionPlan profitPlan(const HomogeneousCost& cost, double outputPrice);
 
 // Cobb-Douglas Y = A·Πxᵢ^bᵢ with every bᵢ > 0 (the caller checks): ν = Σbᵢ and
