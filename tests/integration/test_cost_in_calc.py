@@ -253,11 +253,11 @@ class CostBadInputTest(CostTestCase):
         set_values(CALC.sheet, "A41", [["cost", "washes"] + LABELS] + [row[:] for row in DATA[:10]])
         set_values(CALC.sheet, "A44", [[0.0]])
         set_array_formula(CALC.sheet, "J111:P132", "=PRODCOSTFIT(A41:A51;B41:B51;C41:E51)")
-        set_array_formula(CALC.sheet, "J141:P162", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;B1:B31)")
+        set_array_formula(CALC.sheet, "J141:P162", "=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;;;\"fixed\")")
         set_array_formula(CALC.sheet, "J171:P192", "=PRODCOSTFIT(A1:A31;B1:B30;C1:E31)")
         recalc(CALC.doc)
         self.assertEqual(get_cell(CALC.sheet, "J111"), "Error: cost: row 4 is 0; logs need positive values")
-        self.assertEqual(get_cell(CALC.sheet, "J141"), "Error: controls: not available yet for cost fits; leave it empty")
+        self.assertEqual(get_cell(CALC.sheet, "J141"), "Error: effects: \"fixed\" needs the groups argument, a column naming each row's plant or firm")
         self.assertEqual(get_cell(CALC.sheet, "J171"), "Error: output: has 29 rows of data but cost has 30 rows")
         self.assertTrue(CALC.office.alive(), "the office stopped answering after the error cases")
 

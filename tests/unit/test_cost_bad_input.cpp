@@ -81,10 +81,11 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     arguments = sixLaundries();
     arguments.errors = std::string("cluster");
     BOOST_TEST(fitMessage(arguments) ==
-               "errors: \"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
+               "errors: \"cluster\" needs the groups argument, a column naming each row's plant or firm");
     arguments = sixLaundries();
     arguments.controls = numberRange(Eigen::MatrixXd::Constant(6, 1, 1.0));
-    BOOST_TEST(fitMessage(arguments) == "controls: not available yet for cost fits; leave it empty");
+    BOOST_TEST(fitMessage(arguments) ==
+               "controls: control 'control 1' does not vary, so it cannot be told apart from the constant");
     arguments = sixLaundries();
     arguments.shares = numberRange(Eigen::MatrixXd::Constant(6, 2, 0.5));
     BOOST_TEST(fitMessage(arguments) == "shares: a share equation fits exactly (or two equations' errors move "

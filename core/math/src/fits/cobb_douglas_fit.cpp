@@ -1,5 +1,6 @@
 #include "isoquant/math/fits/cobb_douglas_fit.hpp"
 
+#include "isoquant/math/fits/panel_summary.hpp"
 #include "isoquant/math/fits/returns_to_scale.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
@@ -155,71 +156,6 @@ InputError collinearityError(const ProductionData& data, bool constantReturns, E
                        " are collinear (inputs taken in logs); drop one of them"};
 }
 
-// The panel options need their columns; errors name the argument to fix.
-void requirePanelColumns(const ProductionData& data, const ProductionFitOptions& options)
-{
-    const PanelColumns& panel = data.panel;
-    const auto n = static_cast<std::size_t>(data.output.size());
-    if (panel.hasGroups() && panel.groupOfRow.size() != n)
-        throw InputError({DataPart::groups, DataPart::output},
-                         "{0}: has " + std::to_string(panel.groupOfRow.size()) + " rows of data but {1} has " +
-                             std::to_string(n));
-    if (panel.hasPeriods() && static_cast<std::size_t>(panel.periods.size()) != n)
-        throw InputError({DataPart::periods, DataPart::output},
-                         "{0}: has " + std::to_string(panel.periods.size()) + " rows of data but {1} has " +
-                             std::to_string(n));
-    if (options.effects != EffectsKind::none && !panel.hasGroups())
-        throw InputError({DataPart::effects, DataPart::groups},
-                         "{0}: \"" + effectsWord(options.effects) +
-                             "\" needs the {1} argument, a column naming each row's plant or firm");
-    if (options.effects == EffectsKind::twoWay && !panel.hasPeriods())
-        throw InputError({DataPart::effects, DataPart::periods},
-                         "{0}: \"two-way\" needs the {1} argument, the column of periods (years)");
-    if (options.covariance == CovarianceKind::cluster) {
-        if (!panel.hasGroups())
-            throw InputError({DataPart::covarianceKind, DataPart::groups},
-                             "{0}: \"cluster\" needs the {1} argument, a column naming each row's plant or firm");
-        if (panel.groupLabels.size() < 2)
-            throw InputError({DataPart::groups},
-                             "every row is in the same group; cluster-robust errors need at least 2 groups");
-    }
-}
-
-PanelSummary summarisePanel(const PanelColumns& panel, EffectsKind effects, const PanelRegression& run,
-                            const LeastSquaresResult& regression, double logScaleAtControlMeans)
-{
-    PanelSummary summary;
-    summary.effects = effects;
-    summary.groups = static_cast<Eigen::Index>(panel.groupLabels.size());
-    summary.groupLabels = panel.groupLabels;
-    if (effects != EffectsKind::none) {
-        summary.withinRSquared = run.withinRSquared;
-        summary.groupEffects = run.groupEffects;
-    }
-    if (effects == EffectsKind::twoWay) {
-        summary.periods = run.periodValues;
-        const auto later = static_cast<Eigen::Index>(run.periodValues.size()) - 1;
-        summary.periodEffects.resize(later + 1);
-        summary.periodEffects << 0.0, regression.inference.estimates.segment(run.firstPeriodColumn, later);
-    }
-    if (run.trendColumn) {
-        summary.technicalChange = regression.inference.at(*run.trendColumn);
-        summary.latestPeriod = panel.periods.maxCoeff();
-        summary.trendLooksLikeDates = trendCountsDays(panel.periods);
-    }
-    summary.shiftsLogScale = effects != EffectsKind::none || run.trendColumn.has_value();
-    summary.logScaleForPredictions = logScaleAtControlMeans + run.latestPeriodShift;
-    if (effects != EffectsKind::none) {
-        // ln A at the control means holds the plain mean of the group effects; predictions use the
-        // mean over rows, Σ_g n_g·α_g / n.
-        double rowWeighted = 0;
-        for (const Eigen::Index group : panel.groupOfRow) rowWeighted += run.groupEffects(group);
-        rowWeighted /= static_cast<double>(panel.groupOfRow.size());
-        summary.logScaleForPredictions += rowWeighted - run.groupEffects.mean();
-    }
-    return summary;
-}
-
 } // namespace
 
 ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOptions& options)
@@ -228,8 +164,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     const Eigen::Index k = data.inputs.cols();
     const Eigen::Index m = data.controls.cols();
     if (k < 1) throw InputError({DataPart::inputs}, "needs at least one column");
-    requirePanelColumns(data, options);
-
+    requirePanelColumns(data.panel, data.output.size(), DataPart::output, options.effects, options.covariance);
 
     const CobbDouglasRows rows(data, options.constantReturns);
     const ParameterMap map = parameterMap(k, m, options.constantReturns);

@@ -1,5 +1,8 @@
 #include "isoquant/math/fits/cost_fit.hpp"
 
+#include "fits/cost_regression.hpp"
+#include "isoquant/math/fits/panel_summary.hpp"
+#include "isoquant/math/numerics/not_a_number.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
@@ -25,94 +28,9 @@ std::vector<std::string> costSecondOrderLabels(const std::vector<std::string>& p
     return labels;
 }
 
+Eigen::Index priceOutputStart(Eigen::Index prices) { return 3 + prices + prices * (prices + 1) / 2; }
+
 namespace {
-
-// The regression run: ln(C/w_k) on the normalised terms, and the names of its columns.
-struct NormalisedRegression {
-    Eigen::MatrixXd design;
-    Eigen::VectorXd response;
-    std::vector<std::string> termNames;
-    Eigen::MatrixXd relativeLogPrices; // ln(wᵢ/w_k), i < k: the share equations' terms
-    Eigen::VectorXd logOutput;
-};
-
-NormalisedRegression normalisedRegression(const CostData& data, CostForm form)
-{
-    const Eigen::Index n = data.cost.size();
-    const Eigen::Index k = data.prices.cols();
-    const Eigen::MatrixXd logPrices = exactLog(data.prices.array()).matrix();
-    const Eigen::VectorXd logOutput = exactLog(data.output.array()).matrix();
-    const Eigen::MatrixXd relative = logPrices.leftCols(k - 1).colwise() - logPrices.col(k - 1); // ln(wᵢ/w_k)
-    const auto lastLabel = data.priceLabels.back();
-    NormalisedRegression regression;
-    regression.relativeLogPrices = relative;
-    regression.logOutput = logOutput;
-    regression.response = exactLog(data.cost.array()).matrix() - logPrices.col(k - 1);
-    std::vector<Eigen::VectorXd> columns{Eigen::VectorXd::Ones(n), logOutput};
-    regression.termNames = {"the constant", "ln output"};
-    for (Eigen::Index i = 0; i + 1 < k; ++i) {
-        columns.push_back(relative.col(i));
-        regression.termNames.push_back("ln(" + data.priceLabels[static_cast<std::size_t>(i)] + "/" + lastLabel + ")");
-    }
-    if (form == CostForm::translog) {
-        columns.push_back(0.5 * logOutput.cwiseProduct(logOutput));
-        regression.termNames.push_back("(ln output)²");
-        for (const auto& [i, j] : translogPairs(k - 1)) {
-            columns.push_back((i == j ? 0.5 : 1.0) * relative.col(i).cwiseProduct(relative.col(j)));
-            regression.termNames.push_back(regression.termNames[static_cast<std::size_t>(2 + i)] + "·" +
-                                           regression.termNames[static_cast<std::size_t>(2 + j)]);
-        }
-        for (Eigen::Index i = 0; i + 1 < k; ++i) {
-            columns.push_back(relative.col(i).cwiseProduct(logOutput));
-            regression.termNames.push_back(regression.termNames[static_cast<std::size_t>(2 + i)] + "·ln output");
-        }
-    }
-    regression.design.resize(n, static_cast<Eigen::Index>(columns.size()));
-    for (std::size_t c = 0; c < columns.size(); ++c) regression.design.col(static_cast<Eigen::Index>(c)) = columns[c];
-    return regression;
-}
-
-// θ = T·b + t₀ (cost_fit.hpp): the full form's parameters from the regression's.
-std::pair<Eigen::MatrixXd, Eigen::VectorXd> restoredParameters(CostForm form, Eigen::Index k, Eigen::Index regressors)
-{
-    const bool translog = form == CostForm::translog;
-    const Eigen::Index pairsAll = k * (k + 1) / 2;
-    const Eigen::Index parameters = 2 + k + (translog ? 1 + pairsAll + k : 0);
-    Eigen::MatrixXd map = Eigen::MatrixXd::Zero(parameters, regressors);
-    Eigen::VectorXd shift = Eigen::VectorXd::Zero(parameters);
-    map(0, 0) = map(1, 1) = 1.0;
-    for (Eigen::Index i = 0; i + 1 < k; ++i) {
-        map(2 + i, 2 + i) = 1.0;
-        map(2 + k - 1, 2 + i) = -1.0; // β_k = 1 − Σ_{i<k} βᵢ
-    }
-    shift(2 + k - 1) = 1.0;
-    if (!translog) return {map, shift};
-    const Eigen::Index yyRow = 2 + k, yyColumn = 2 + (k - 1);
-    map(yyRow, yyColumn) = 1.0;
-    const auto reducedPairs = translogPairs(k - 1);
-    auto reducedColumn = [&](Eigen::Index i, Eigen::Index j) {
-        const auto at = std::find(reducedPairs.begin(), reducedPairs.end(), std::make_pair(std::min(i, j), std::max(i, j)));
-        return yyColumn + 1 + static_cast<Eigen::Index>(at - reducedPairs.begin());
-    };
-    Eigen::Index row = yyRow + 1;
-    for (const auto& [i, j] : translogPairs(k)) {
-        if (j < k - 1) {
-            map(row, reducedColumn(i, j)) = 1.0;
-        } else if (i < k - 1) { // β_ik = −Σ_{j<k} βᵢⱼ
-            for (Eigen::Index other = 0; other + 1 < k; ++other) map(row, reducedColumn(i, other)) -= 1.0;
-        } else { // β_kk = Σ_{i,j<k} βᵢⱼ
-            for (Eigen::Index a = 0; a + 1 < k; ++a)
-                for (Eigen::Index b = 0; b + 1 < k; ++b) map(row, reducedColumn(a, b)) += 1.0;
-        }
-        ++row;
-    }
-    const Eigen::Index outputTerms = yyColumn + 1 + static_cast<Eigen::Index>(reducedPairs.size());
-    for (Eigen::Index i = 0; i + 1 < k; ++i) {
-        map(row + i, outputTerms + i) = 1.0;
-        map(row + k - 1, outputTerms + i) = -1.0; // β_ky = −Σ_{i<k} βᵢ_y
-    }
-    return {map, shift};
-}
 
 ParameterEstimate inferenceOf(double value, double variance, double degreesOfFreedom, double level)
 {
@@ -179,7 +97,7 @@ Eigen::RowVectorXd elasticityGradient(const CostFit& fit, Eigen::Index parameter
     gradient(1) = 1.0;
     if (fit.form == CostForm::translog) {
         gradient(2 + k) = fit.meanLogOutput;
-        gradient.tail(k) = fit.meanLogPrices.transpose();
+        gradient.segment(priceOutputStart(k), k) = fit.meanLogPrices.transpose();
     }
     return gradient;
 }
@@ -192,11 +110,11 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
     const Eigen::VectorXd& theta = fit.summary.inference.estimates;
     const double curvature = theta(2 + k);
     if (!(curvature > 0)) return std::nullopt;
-    const double logScale = (1.0 - theta(1) - theta.tail(k).dot(fit.meanLogPrices)) / curvature;
+    const double logScale = (1.0 - theta(1) - theta.segment(priceOutputStart(k), k).dot(fit.meanLogPrices)) / curvature;
     Eigen::RowVectorXd gradient = Eigen::RowVectorXd::Zero(theta.size()); // of ln y*
     gradient(1) = -1.0 / curvature;
     gradient(2 + k) = -logScale / curvature;
-    gradient.tail(k) = -fit.meanLogPrices.transpose() / curvature;
+    gradient.segment(priceOutputStart(k), k) = -fit.meanLogPrices.transpose() / curvature;
     const ParameterEstimate logEstimate =
         inferenceOf(logScale, (gradient * fit.summary.inference.covariance * gradient.transpose())(0, 0), degreesOfFreedom, level);
     ParameterEstimate scale;
@@ -237,7 +155,7 @@ CostRegularityTally regularityOf(const CostFit& fit, const CostData& data)
     if (fit.form == CostForm::translog) {
         Eigen::Index at = 3 + k;
         for (const auto& [i, j] : translogPairs(k)) interactions(i, j) = interactions(j, i) = theta(at++);
-        byOutput = theta.tail(k);
+        byOutput = theta.segment(priceOutputStart(k), k);
     }
     const Eigen::MatrixXd logPrices = exactLog(data.prices.array()).matrix();
     Eigen::MatrixXd shares = logPrices * interactions + exactLog(data.output.array()).matrix() * byOutput.transpose();
@@ -257,51 +175,93 @@ CostFrontierPart fitFrontierPart(const NormalisedRegression& normalised, const L
 
 } // namespace
 
+namespace {
+
+// The combinations a cost fit does not offer (cost_fit.hpp), and the panel columns' checks.
+void requireCostOptions(const CostData& data, const CostFitOptions& options)
+{
+    requirePanelColumns(data.panel, data.cost.size(), DataPart::cost, options.effects, options.covariance);
+    const bool shares = data.shares.size() != 0;
+    if (options.inefficiency) {
+        if (shares)
+            throw InputError({DataPart::shares, DataPart::inefficiency},
+                             "{0}: a cost frontier is fitted to the cost equation alone; leave {0} empty, or "
+                             "{1} empty for the cost and share system");
+        for (const auto& [given, part] : {std::pair{data.panel.hasGroups(), DataPart::groups},
+                                          std::pair{options.effects != EffectsKind::none, DataPart::effects},
+                                          std::pair{data.panel.hasPeriods(), DataPart::periods}})
+            if (given)
+                throw InputError({part, DataPart::inefficiency},
+                                 "{0}: not available with a cost frontier, which takes controls but no panel options "
+                                 "(its inefficiency would mix with group effects or a trend); leave {0} empty");
+    }
+    if (shares && options.effects != EffectsKind::none)
+        throw InputError({DataPart::effects, DataPart::shares},
+                         "{0}: not available with {1}: the share equations would need group effects of their own; fit "
+                         "without {1} for effects");
+}
+
+// θ's covariance from the run's: the form's and the controls' block; under effects the constant
+// (the mean group effect) has none (panel_regression.hpp).
+Eigen::MatrixXd parameterBlock(const Eigen::MatrixXd& covariance, Eigen::Index regressors, bool effects)
+{
+    Eigen::MatrixXd block = covariance.topLeftCorner(regressors, regressors);
+    if (effects) {
+        block.row(0).setConstant(notANumber);
+        block.col(0).setConstant(notANumber);
+    }
+    return block;
+}
+
+// R² and R̄² of ln C, the constant at the controls' means and the panel's account.
+void describeCostFit(CostFit& fit, const CostData& data, const CostFitOptions& options, const PanelRegression& run)
+{
+    ProductionFit& summary = fit.summary;
+    const LeastSquaresResult& regression = run.regression;
+    const Eigen::Index n = data.cost.size();
+    const Eigen::VectorXd logCost = exactLog(data.cost.array()).matrix();
+    const double totalSquares = (logCost.array() - logCost.mean()).square().sum();
+    summary.rSquared = 1.0 - regression.summary.residualSumOfSquares / totalSquares;
+    summary.adjustedRSquared =
+        1.0 - (1.0 - summary.rSquared) * static_cast<double>(n - 1) / regression.summary.residualDegreesOfFreedom;
+    const Eigen::Index m = data.controls.cols();
+    summary.controlLabels = data.controlLabels;
+    summary.logScaleAtControlMeans = summary.inference.estimates(0);
+    if (m > 0)
+        summary.logScaleAtControlMeans += data.controls.colwise().mean().dot(summary.inference.estimates.tail(m));
+    if (!fit.frontier)
+        summary.panel = summarisePanel(data.panel, options.effects, run, regression, summary.logScaleAtControlMeans);
+}
+
+} // namespace
+
 CostFit fitCost(const CostData& data, const CostFitOptions& options)
 {
     const Eigen::Index k = data.prices.cols();
     const bool translog = options.form == CostForm::translog;
-    const Eigen::Index regressors = k + 1 + (translog ? 1 + k * (k - 1) / 2 + (k - 1) : 0);
+    const Eigen::Index formColumns = k + 1 + (translog ? 1 + k * (k - 1) / 2 + (k - 1) : 0);
+    const Eigen::Index regressors = formColumns + data.controls.cols();
     const bool frontier = options.inefficiency.has_value();
-    requireCostData(data, regressors + (frontier ? 2 : 0), frontier);
-    if (frontier && data.shares.size() != 0)
-        throw InputError({DataPart::shares, DataPart::inefficiency},
-                         "{0}: a cost frontier is fitted to the cost equation alone; leave {0} empty, or "
-                         "{1} empty for the cost and share system");
-    const Eigen::Index n = data.cost.size();
-    checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(regressors), DataPart::prices,
+    requireCostOptions(data, options);
+    requireCostData(data, regressors + panelParameterCount(data.panel, options.effects) + (frontier ? 2 : 0), frontier);
+    checkDesignSize(static_cast<std::size_t>(data.cost.size()), static_cast<std::size_t>(regressors), DataPart::prices,
                     translog ? "the translog cost form" : "the Cobb-Douglas cost form");
     const NormalisedRegression normalised = normalisedRegression(data, options.form);
+    const PanelRegression run = runCostRegression(normalised, data, options);
+    const LeastSquaresResult& regression = run.regression;
 
-    LeastSquaresOptions regressionOptions;
-    regressionOptions.covariance = options.covariance;
-    regressionOptions.confidenceLevel = options.confidenceLevel;
     CostFit fit;
     fit.form = options.form;
     fit.priceLabels = data.priceLabels;
     ProductionFit& summary = fit.summary;
-    LeastSquaresResult regression;
-    try {
-        if (data.shares.size() == 0)
-            regression = fitLeastSquares(normalised.design, normalised.response, 0, regressionOptions);
-        else
-            regression = fitCostShareSystem(normalised.design, normalised.response, normalised.relativeLogPrices,
-                                            normalised.logOutput, data.shares, options.form, options.confidenceLevel);
-    } catch (const CollinearColumns& collinear) {
-        std::vector<std::string> names;
-        for (const Eigen::Index column : collinear.columns())
-            names.push_back(normalised.termNames[static_cast<std::size_t>(column)]);
-        throw InputError({DataPart::prices},
-                         "the cost terms " + listOfNames(names) +
-                             " are collinear (prices divided by the last one, in logs); use fewer inputs or more varied data");
-    }
     summary.status = regression.status;
     summary.summary = regression.summary;
     summary.residuals = regression.residuals;
-    const auto [map, shift] = restoredParameters(options.form, k, regressors);
+    const auto [map, shift] = restoredParameters(options.form, k, formColumns, data.controls.cols());
     double degreesOfFreedom = regression.summary.inferenceDegreesOfFreedom;
-    Eigen::VectorXd coefficients = regression.inference.estimates;
-    Eigen::MatrixXd covariance = regression.inference.covariance;
+    Eigen::VectorXd coefficients = regression.inference.estimates.head(regressors);
+    Eigen::MatrixXd covariance =
+        parameterBlock(regression.inference.covariance, regressors, options.effects != EffectsKind::none);
     if (frontier) {
         if (summary.status.is(FitStatusKind::exactFit))
             throw InputError({DataPart::inefficiency}, "{0}: the cost function fits every row exactly, which "
@@ -313,13 +273,9 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     }
     setParameters(summary, map * coefficients + shift, map * covariance * map.transpose(), degreesOfFreedom,
                   options.confidenceLevel);
-    const Eigen::VectorXd logCost = exactLog(data.cost.array()).matrix();
-    const double totalSquares = (logCost.array() - logCost.mean()).square().sum();
-    summary.rSquared = 1.0 - regression.summary.residualSumOfSquares / totalSquares;
-    summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * static_cast<double>(n - 1) /
-                                         regression.summary.residualDegreesOfFreedom;
+    describeCostFit(fit, data, options, run);
     // Duan: mean of exp(residual of ln C); none for a frontier, whose cost is the least, not a median.
-    summary.smearingFactor = frontier ? std::nan("") : regression.residuals.array().exp().mean();
+    summary.smearingFactor = frontier ? std::nan("") : run.smearingFactor;
 
     fit.meanLogOutput = exactLog(data.output.array()).mean();
     fit.meanLogPrices = exactLog(data.prices.array()).matrix().colwise().mean().transpose();

@@ -46,8 +46,8 @@ std::vector<bool> findIncompleteRows(const RowRanges& ranges)
     std::vector<bool> incomplete(dataRows, false);
     auto mark = [&](const CellTable& range, const std::string& argument, std::size_t headerRows, bool textIsMissing) {
         if (range.rows() - headerRows != dataRows)
-            throw InputError(argument + ": has " + rowsOfData(range.rows() - headerRows) + " but output has " +
-                             rowsOfData(dataRows));
+            throw InputError(argument + ": has " + rowsOfData(range.rows() - headerRows) + " but " + ranges.outputName +
+                             " has " + rowsOfData(dataRows));
         for (std::size_t row = 0; row < dataRows; ++row)
             for (std::size_t column = 0; column < range.columns(); ++column) {
                 const std::size_t cellRow = row + headerRows;
@@ -58,8 +58,8 @@ std::vector<bool> findIncompleteRows(const RowRanges& ranges)
             }
     };
     auto headerRows = [](const CellTable& range) -> std::size_t { return hasHeaderRow(range) ? 1 : 0; };
-    mark(ranges.output, argument::output, headerRows(ranges.output), true);
-    mark(ranges.inputs, argument::inputs, headerRows(ranges.inputs), true);
+    mark(ranges.output, ranges.outputName, headerRows(ranges.output), true);
+    mark(ranges.inputs, ranges.inputsName, headerRows(ranges.inputs), true);
     if (!ranges.controls.empty()) mark(ranges.controls, argument::controls, headerRows(ranges.controls), true);
     if (!ranges.trend.empty()) mark(ranges.trend, argument::trend, headerRows(ranges.trend), true);
     if (!ranges.groups.empty()) mark(ranges.groups, argument::groups, groupsHeaderRows(ranges.groups, dataRows), false);

@@ -32,10 +32,10 @@ void requireSameRows(const NumericColumns& cost, const NumericColumns& other, co
                          rowsText(cost.values.rows()));
 }
 
-NumericColumns readOneColumn(const CellTable& range, const std::string& name,
+NumericColumns readOneColumn(const CellTable& range, const std::string& name, ValueRule rule = ValueRule::positive,
                              const std::vector<bool>* skippedRows = nullptr)
 {
-    NumericColumns column = readNumericColumns(range, name, ValueRule::positive, name, skippedRows);
+    NumericColumns column = readNumericColumns(range, name, rule, name, skippedRows);
     if (column.values.cols() != 1)
         throw InputError(name + ": must be one column; it has " + std::to_string(column.values.cols()));
     return column;
@@ -48,26 +48,14 @@ CostForm readCostForm(const Cell& cell)
                                 CostForm::cobbDouglas);
 }
 
-// The arguments this slice declares but does not yet use.
-void refuseLaterArguments(const CostFitArguments& arguments)
-{
-    auto refuse = [](const std::string& name) {
-        throw InputError(name + ": not available yet for cost fits; leave it empty");
-    };
-    if (!arguments.controls.empty()) refuse("controls");
-    if (!arguments.groups.empty()) refuse("groups");
-    if (!isOmitted(arguments.effects) && readEffectsArgument(arguments.effects) != EffectsKind::none) refuse("effects");
-    if (!arguments.trend.empty()) refuse("trend");
-}
-
-void refuseReservedLabels(const std::vector<std::string>& labels)
+void refuseReservedLabels(const std::vector<std::string>& labels, const std::string& argumentName)
 {
     for (std::size_t column = 0; column < labels.size(); ++column) {
         const std::string& label = labels[column];
         if (label.find('*') != std::string::npos || equalsIgnoringCase(label, costConstantLabel) ||
             equalsIgnoringCase(label, costOutputLabel) || equalsIgnoringCase(label, formLabel))
             throw argumentError(
-                argument::inputPrices,
+                argumentName,
                 "column " + std::to_string(column + 1) + " is labelled " + quoted(label) +
                     "; the cost table uses \"constant\", \"output\", \"form\" and \"*\" itself, so rename it");
     }
@@ -107,15 +95,54 @@ Eigen::MatrixXd readCostShares(const CellTable& range, const NumericColumns& cos
 
 } // namespace
 
-CostFit costFitFromArguments(const CostFitArguments& arguments)
+namespace {
+
+// `incomplete rows`: every row with a blank or text cell in any range (a blank in groups) is left
+// out, as PRODFIT does.
+std::vector<bool> findIncompleteCostRows(const CostFitArguments& arguments)
+{
+    std::vector<bool> incomplete = findIncompleteRowsIn({{&arguments.cost, argument::cost},
+                                                         {&arguments.output, argument::output},
+                                                         {&arguments.shares, argument::shares}});
+    const std::vector<bool> panel =
+        findIncompleteRows({arguments.cost, arguments.prices, arguments.controls, arguments.groups, arguments.trend,
+                            argument::cost, argument::inputPrices});
+    for (std::size_t row = 0; row < incomplete.size(); ++row) incomplete[row] = incomplete[row] || panel[row];
+    if (std::all_of(incomplete.begin(), incomplete.end(), [](bool flag) { return flag; }))
+        throw argumentError(argument::incompleteRows, "every row has a blank or text cell; no row is left to fit");
+    return incomplete;
+}
+
+// Controls, groups and the trend, as PRODFIT reads them.
+void readCostPanel(const CostFitArguments& arguments, const NumericColumns& cost, const std::vector<bool>* skipped,
+                   CostData& data)
+{
+    if (!arguments.controls.empty()) {
+        const NumericColumns controls =
+            readNumericColumns(arguments.controls, argument::controls, ValueRule::finite, "control", skipped);
+        requireSameRows(cost, controls, argument::controls);
+        refuseReservedLabels(controls.labels, argument::controls);
+        data.controls = controls.values;
+        data.controlLabels = controls.labels;
+    } else {
+        data.controls.resize(cost.values.rows(), 0);
+    }
+    const std::size_t dataRows = arguments.cost.rows() - (cost.hasHeader ? 1 : 0);
+    if (!arguments.groups.empty()) readGroups(arguments.groups, dataRows, skipped, data.panel);
+    if (!arguments.trend.empty()) {
+        const NumericColumns trend = readOneColumn(arguments.trend, argument::trend, ValueRule::finite, skipped);
+        requireSameRows(cost, trend, argument::trend);
+        data.panel.periods = trend.values.col(0);
+    }
+}
+
+CostFitOptions readCostFitOptions(const CostFitArguments& arguments)
 {
     CostFitOptions options;
     options.form = readCostForm(arguments.form);
     options.covariance = readErrorsArgument(arguments.errors);
-    if (options.covariance == CovarianceKind::cluster)
-        throw argumentError(argument::errors,
-                            "\"cluster\" is not available yet for cost fits; use \"classical\", \"hc1\" or \"hc3\"");
     options.confidenceLevel = readLevelArgument(arguments.level, argument::level);
+    options.effects = readEffectsArgument(arguments.effects);
     if (!isOmitted(arguments.inefficiency)) {
         options.inefficiency = readInefficiencyArgument(arguments.inefficiency);
         if (options.covariance != CovarianceKind::classical)
@@ -127,35 +154,38 @@ CostFit costFitFromArguments(const CostFitArguments& arguments)
                                 "not available with a cost frontier, which is fitted to the cost equation "
                                 "alone; leave shares empty, or inefficiency empty for the cost and share system");
     }
-    refuseLaterArguments(arguments);
-    // `incomplete rows`: leave out every row with a blank or text cell in any range (as PRODFIT).
+    if (!arguments.shares.empty() && options.covariance != CovarianceKind::classical)
+        throw argumentError(argument::errors,
+                            "with shares the system is fitted by iterated GLS, whose errors are classical; "
+                            "leave errors empty or fit without shares");
+    return options;
+}
+
+} // namespace
+
+CostFit costFitFromArguments(const CostFitArguments& arguments)
+{
+    const CostFitOptions options = readCostFitOptions(arguments);
     const bool dropIncomplete = readSwitchArgument(arguments.incompleteRows, argument::incompleteRows);
     std::vector<bool> incomplete;
-    if (dropIncomplete && !arguments.cost.empty())
-        incomplete = findIncompleteRowsIn({{&arguments.cost, "cost"}, {&arguments.output, "output"},
-                                           {&arguments.prices, "input prices"}, {&arguments.shares, "shares"}});
+    if (dropIncomplete && !arguments.cost.empty()) incomplete = findIncompleteCostRows(arguments);
     const std::vector<bool>* skipped = dropIncomplete ? &incomplete : nullptr;
 
-    const NumericColumns cost = readOneColumn(arguments.cost, argument::cost, skipped);
-    const NumericColumns output = readOneColumn(arguments.output, argument::output, skipped);
+    const NumericColumns cost = readOneColumn(arguments.cost, argument::cost, ValueRule::positive, skipped);
+    const NumericColumns output = readOneColumn(arguments.output, argument::output, ValueRule::positive, skipped);
     requireSameRows(cost, output, argument::output);
     const NumericColumns prices =
         readNumericColumns(arguments.prices, argument::inputPrices, ValueRule::positive, "input", skipped);
     requireSameRows(cost, prices, argument::inputPrices);
-    refuseReservedLabels(prices.labels);
+    refuseReservedLabels(prices.labels, argument::inputPrices);
 
     CostData data;
     data.cost = cost.values.col(0);
     data.output = output.values.col(0);
     data.prices = prices.values;
     data.priceLabels = prices.labels;
-    if (!arguments.shares.empty()) {
-        if (options.covariance != CovarianceKind::classical)
-            throw argumentError(argument::errors,
-                                "with shares the system is fitted by iterated GLS, whose errors are classical; "
-                                "leave errors empty or fit without shares");
-        data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
-    }
+    if (!arguments.shares.empty()) data.shares = readCostShares(arguments.shares, cost, prices.values.cols(), skipped);
+    readCostPanel(arguments, cost, skipped, data);
     try {
         CostFit fit = fitCost(data, options);
         fit.firstDataRow = cost.firstDataRow();

@@ -101,8 +101,8 @@ CellTable measureColumn(EfficiencyMeasure measure, const std::vector<TruncatedNo
     return column;
 }
 
-// PRODEFFICIENCY on a cost frontier: `output` holds cost, `inputs` the output then the prices in
-// PRODCOSTFIT's order; ε = ln C − c(y, w), u given ε from cost_frontier.hpp.
+// PRODEFFICIENCY on a cost frontier: `output` holds cost, `inputs` the output, the prices in
+// PRODCOSTFIT's order, then its controls; ε = ln C − c(y, w, z), u given ε from cost_frontier.hpp.
 CellTable costEfficiencyColumn(const CellTable& model, const CellTable& output, const CellTable& inputs,
                                EfficiencyMeasure measure)
 {
@@ -111,22 +111,26 @@ CellTable costEfficiencyColumn(const CellTable& model, const CellTable& output, 
     if (cost.values.cols() != 1)
         throw argumentError(argument::output,
                             "must be one column, the cost of each row; it has " + std::to_string(cost.values.cols()));
-    const NumericColumns read = readNumericColumns(inputs, argument::inputs, ValueRule::positive, "input");
+    const NumericColumns read = readNumericColumns(inputs, argument::inputs, ValueRule::finite, "input");
     if (read.values.rows() != cost.values.rows())
         throw argumentError(argument::inputs, "has " + std::to_string(read.values.rows()) +
                                                   " rows of data but output has " + std::to_string(cost.values.rows()));
     const auto k = static_cast<Eigen::Index>(frontier.cost.priceLabels.size());
-    if (read.values.cols() != 1 + k)
+    const auto m = static_cast<Eigen::Index>(frontier.cost.controlLabels.size());
+    if (read.values.cols() != 1 + k + m)
         throw argumentError(argument::inputs, "has " + std::to_string(read.values.cols()) +
-                                                  " columns, but a cost frontier needs " + std::to_string(1 + k) +
+                                                  " columns, but a cost frontier needs " + std::to_string(1 + k + m) +
                                                   ": the output column, then the " + std::to_string(k) +
-                                                  " price columns in PRODCOSTFIT's order");
+                                                  " price columns in PRODCOSTFIT's order" +
+                                                  (m > 0 ? ", then its " + std::to_string(m) + " controls" : ""));
+    requirePositiveInputs(read.values, 1 + k, read.firstDataRow());
     std::vector<TruncatedNormal> conditionals;
     for (Eigen::Index row = 0; row < read.values.rows(); ++row) {
-        const double residual = std::log(cost.values(row, 0)) -
-                                frontier.cost.logCost(read.values(row, 0), read.values.row(row).tail(k).transpose());
-        conditionals.push_back(costInefficiencyGivenResidual(frontier.distribution, residual, frontier.noiseSd,
-                                                             frontier.inefficiencySd));
+        const double fitted =
+            frontier.cost.logCostAt(read.values(row, 0), read.values.row(row).segment(1, k).transpose(),
+                                    read.values.row(row).tail(m).transpose());
+        conditionals.push_back(costInefficiencyGivenResidual(
+            frontier.distribution, std::log(cost.values(row, 0)) - fitted, frontier.noiseSd, frontier.inefficiencySd));
     }
     CellTable column = measureColumn(measure, conditionals, frontier.inefficiencySd,
                                      frontier.confidenceLevel);

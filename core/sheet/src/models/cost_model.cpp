@@ -21,6 +21,12 @@ double CostModel::logCost(double level, const Eigen::VectorXd& pricesGiven) cons
            0.5 * logPrices.dot(priceInteractions * logPrices) + logOutput * priceOutput.dot(logPrices);
 }
 
+double CostModel::logCostAt(double level, const Eigen::VectorXd& pricesGiven,
+                            const Eigen::VectorXd& controlValues) const
+{
+    return logCost(level, pricesGiven) - constant + constantAtZeroControls + controls.dot(controlValues);
+}
+
 double CostModel::costElasticity(double level, const Eigen::VectorXd& pricesGiven) const
 {
     return output + outputSquared * std::log(level) + priceOutput.dot(pricesGiven.array().log().matrix());
@@ -99,6 +105,18 @@ void applySecondOrder(CostModel& cost, const std::vector<SecondOrderRow>& rows)
     }
 }
 
+// The constant the evaluators use (cost_model.hpp), from the rows below the parameters.
+double predictionConstant(const CellTable& model, double constant)
+{
+    std::optional<double> atControlMeans, forPredictions;
+    for (std::size_t row = 0; row < model.rows(); ++row) {
+        const std::string label = labelAt(model, row);
+        if (equalsIgnoringCase(label, costPredictionLabel)) forPredictions = numberAt(model, row, label);
+        if (equalsIgnoringCase(label, costControlMeansLabel)) atControlMeans = numberAt(model, row, label);
+    }
+    return forPredictions.value_or(atControlMeans.value_or(constant));
+}
+
 } // namespace
 
 bool isCostModel(const CellTable& model)
@@ -117,7 +135,7 @@ CostModel readCostModel(const CellTable& model)
         throw argumentError(argument::model, "has no \"form\" row saying \"cobb-douglas cost\" or \"translog cost\"");
     cost.translog = equalsIgnoringCase(*word, translogCostWord);
     std::optional<double> constant, output;
-    std::vector<double> prices;
+    std::vector<double> prices, controls;
     std::vector<SecondOrderRow> secondOrder;
     // The parameter rows: from the top (after a table's title) to the first row without a label.
     for (std::size_t row = isCostTitle(labelAt(model, 0)) ? 1 : 0; row < model.rows(); ++row) {
@@ -126,7 +144,11 @@ CostModel readCostModel(const CellTable& model)
         if (equalsIgnoringCase(label, formLabel)) continue;
         const double value = numberAt(model, row, label);
         if (equalsIgnoringCase(label, costConstantLabel)) constant = value;
-        else if (equalsIgnoringCase(label, costOutputLabel)) output = value;
+        else if (endsWithIgnoringCase(label, controlSuffix)) {
+            cost.controlLabels.push_back(label.substr(0, label.size() - std::string(controlSuffix).size()));
+            controls.push_back(value);
+        } else if (equalsIgnoringCase(label, costOutputLabel))
+            output = value;
         else if (label.find('*') != std::string::npos) secondOrder.push_back({row, label, value});
         else {
             for (const auto& earlier : cost.priceLabels)
@@ -144,8 +166,10 @@ CostModel readCostModel(const CellTable& model)
     if (!cost.translog && !secondOrder.empty())
         throw InputError(rowPlace(secondOrder.front().row, secondOrder.front().label) +
                          " is a translog term, but the form is \"cobb-douglas cost\"; say \"translog cost\"");
-    cost.constant = *constant;
+    cost.constantAtZeroControls = *constant;
+    cost.constant = predictionConstant(model, *constant);
     cost.output = *output;
+    cost.controls = Eigen::Map<const Eigen::VectorXd>(controls.data(), static_cast<Eigen::Index>(controls.size()));
     cost.prices = Eigen::Map<const Eigen::VectorXd>(prices.data(), static_cast<Eigen::Index>(prices.size()));
     applySecondOrder(cost, secondOrder);
     return cost;

@@ -2,9 +2,16 @@
 
 #include "isoquant/sheet/tables/frontier_table.hpp"
 #include "tables/frontier_rows.hpp"
+#include "tables/panel_rows.hpp"
 #include "tables/table_writer.hpp"
 
 namespace isoquant {
+
+namespace {
+
+constexpr PanelRowLabels costPanelLabels{costTrendLabel, costPredictionLabel, false};
+
+} // namespace
 
 std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows, bool frontier)
 {
@@ -12,12 +19,19 @@ std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncomp
     return prices + 19 + secondOrder + (dropsIncompleteRows ? 1 : 0) + (frontier ? 6 : 0);
 }
 
+std::size_t costFitTableRows(const CostFit& fit)
+{
+    const std::size_t controls = fit.summary.controlLabels.size();
+    return costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows, fit.frontier.has_value()) +
+           controls + (controls > 0 ? 1 : 0) + panelRowCount(fit.summary.panel, costPanelLabels);
+}
+
 namespace {
 
 // Why there is no efficient scale, when there is none; and the fit's own note.
 std::string costFormNote(const CostFit& fit)
 {
-    std::string note = fit.frontier ? frontierNote(fit.frontier->mirrored) : fitStatusNote(fit.summary);
+    std::string note = fit.frontier ? frontierNote(fit.frontier->mirrored) : statusNote(fit.summary);
     auto add = [&note](const std::string& more) { note += (note.empty() ? "" : "; ") + more; };
     if (fit.form == CostForm::cobbDouglas)
         add("note: a Cobb-Douglas cost function has the same cost elasticity at every output, so no efficient scale");
@@ -67,8 +81,7 @@ CellTable costFitTable(const CostFit& fit)
 {
     const ProductionFit& summary = fit.summary;
     const bool translog = fit.form == CostForm::translog;
-    TableWriter writer(costFitTableRows(fit.form, fit.priceLabels.size(), fit.dropsIncompleteRows, fit.frontier.has_value()),
-                       summary.status.is(FitStatusKind::exactFit));
+    TableWriter writer(costFitTableRows(fit), summary.status.is(FitStatusKind::exactFit));
     writer.headerRow(costTitle(fit));
     Eigen::Index parameter = 0;
     writer.parameterRow(costConstantLabel, summary, parameter++);
@@ -76,6 +89,7 @@ CellTable costFitTable(const CostFit& fit)
     for (const auto& label : fit.priceLabels) writer.parameterRow(label, summary, parameter++);
     if (translog)
         for (const auto& label : costSecondOrderLabels(fit.priceLabels)) writer.parameterRow(label, summary, parameter++);
+    for (const auto& label : summary.controlLabels) writer.parameterRow(label + controlSuffix, summary, parameter++);
     writer.skipRow();
 
     if (fit.frontier) frontierScaleRows(writer, fit.frontier->scales);
@@ -98,7 +112,9 @@ CellTable costFitTable(const CostFit& fit)
     writer.put(costRegularityLabel, {static_cast<double>(fit.regularity.irregularRows), regularityNote(fit)});
     if (fit.frontier) frontierConvergenceRow(writer, fit.frontier->mirrored);
     writer.textRow(formLabel, {translog ? translogCostWord : cobbDouglasCostWord, costFormNote(fit)});
+    if (!summary.controlLabels.empty()) writer.valueRow(costControlMeansLabel, summary.logScaleAtControlMeans);
     writer.valueRow(smearingLabel, summary.smearingFactor);
+    writePanelRows(writer, summary.panel, costPanelLabels);
     return writer.finish();
 }
 

@@ -5,6 +5,7 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
+#include "tables/panel_rows.hpp"
 #include "tables/table_writer.hpp"
 
 #include <cmath>
@@ -50,35 +51,6 @@ std::size_t findRow(const CellTable& table, const std::string& typed)
                         quoted(typed) + " is not a row of the table; its rows are " + rowLabelList(table));
 }
 
-// Rows of the estimation options (groups, effects, trend, incomplete rows), in table order; a
-// trend adds two: technical change per period and latest period.
-std::size_t optionRows(const PanelSummary& panel)
-{
-    const bool effects = panel.effects != EffectsKind::none;
-    return (panel.groups > 0 ? 2 : 0) + (effects ? 1 : 0) + (panel.effects == EffectsKind::twoWay ? 1 : 0) +
-           (panel.technicalChange ? 2 : 0) + (panel.shiftsLogScale ? 1 : 0) + (panel.dropsIncompleteRows ? 1 : 0);
-}
-
-void writeOptionRows(TableWriter& writer, const PanelSummary& panel)
-{
-    if (panel.groups > 0) {
-        writer.valueRow(groupsLabel, static_cast<double>(panel.groups));
-        writer.textRow(effectsLabel, {effectsWord(panel.effects)});
-    }
-    if (panel.effects != EffectsKind::none) writer.valueRow(withinRSquaredLabel, panel.withinRSquared);
-    if (panel.effects == EffectsKind::twoWay) writer.valueRow(periodsLabel, static_cast<double>(panel.periods.size()));
-    if (panel.technicalChange) {
-        const ParameterEstimate& change = *panel.technicalChange;
-        writer.put(technicalChangeLabel,
-                   {change.estimate, writer.undefinedIfExact(change.standardError),
-                    writer.undefinedIfExact(change.tStatistic), writer.undefinedIfExact(change.pValue),
-                    writer.undefinedIfExact(change.lowerBound), writer.undefinedIfExact(change.upperBound)});
-    }
-    if (panel.shiftsLogScale) writer.valueRow(predictionScaleLabel, panel.logScaleForPredictions);
-    if (panel.technicalChange) writer.valueRow(latestPeriodLabel, panel.latestPeriod);
-    if (panel.dropsIncompleteRows) writer.valueRow(droppedRowsLabel, static_cast<double>(panel.incompleteRowsDropped));
-}
-
 } // namespace
 
 std::size_t fitTableRows(std::size_t inputs, std::size_t controls)
@@ -88,7 +60,8 @@ std::size_t fitTableRows(std::size_t inputs, std::size_t controls)
 
 std::size_t fitTableRows(const ProductionFit& fit)
 {
-    return fitTableRows(fit.inputLabels.size(), fit.controlLabels.size()) + optionRows(fit.panel);
+    return fitTableRows(fit.inputLabels.size(), fit.controlLabels.size()) +
+           panelRowCount(fit.panel, productionPanelLabels);
 }
 
 CellTable fitTable(const ProductionFit& fit)
@@ -125,7 +98,7 @@ CellTable fitTable(const ProductionFit& fit)
     writer.textRow(formLabel, {formWord(fit.form), statusNote(fit)});
     if (m > 0) writer.valueRow(controlMeansLabel, fit.logScaleAtControlMeans);
     writer.valueRow(smearingLabel, fit.smearingFactor);
-    writeOptionRows(writer, fit.panel);
+    writePanelRows(writer, fit.panel, productionPanelLabels);
     return writer.finish();
 }
 

@@ -23,6 +23,14 @@
 // and its covariance T·V_β·Tᵀ from the frontier's β and the observed information. Inference is then
 // the normal's (Student's t on infinitely many degrees of freedom) and the test of returns = 1 the
 // Wald χ²(1) (the F on 1 and ∞). Not with shares.
+//
+// Controls zⱼ enter ln C as they are, not logged (+ Σⱼ cⱼ zⱼ, after the form's terms; θ ends with
+// the cⱼ). Groups, effects, a trend and cluster errors are PRODFIT's (panel_regression.hpp): the
+// regression run above is the base of the panel regression, and under effects the constant is the
+// mean group effect (no standard error); the trend's coefficient is the change of ln C per period
+// at given output and prices (negative: costs fall — technical progress). With shares, controls
+// and a trend enter the cost equation only (they shift cost, not the shares), and neither effects
+// nor cluster errors are available; a cost frontier takes controls only.
 #pragma once
 
 #include "isoquant/math/fits/fit_result.hpp"
@@ -47,14 +55,18 @@ struct CostData {
     // n × k cost shares, rows summing to 1: the share equations join the cost equation
     // (cost_share_system.hpp); empty: least squares on the cost equation alone.
     Eigen::MatrixXd shares;
+    Eigen::MatrixXd controls; // n × m, finite (m may be 0)
+    std::vector<std::string> controlLabels;
+    PanelColumns panel; // groups and periods, when given
 };
 
 struct CostFitOptions {
     CostForm form = CostForm::cobbDouglas;
-    CovarianceKind covariance = CovarianceKind::classical; // classical, hc1 or hc3
+    CovarianceKind covariance = CovarianceKind::classical; // classical, hc1, hc3 or cluster (by the groups)
     double confidenceLevel = 0.95;
     // Set: the cost frontier with this distribution of u (above); empty: the average cost function.
     std::optional<InefficiencyDistribution> inefficiency;
+    EffectsKind effects = EffectsKind::none;
 };
 
 // The cost frontier's own figures: the fit of −ln(C/w_k) as a production frontier (cost_frontier.hpp:
@@ -69,7 +81,9 @@ struct CostFit {
     std::vector<std::string> priceLabels;
     // θ and its inference in table order (above), in the fields PRODFIT's tables use; the
     // regression run, R² and R̄² of ln C, the smearing factor (mean of exp(residual)) and the
-    // returns to scale (1/ε with the test of ε = 1, and the verdict) likewise.
+    // returns to scale (1/ε with the test of ε = 1, and the verdict) likewise; the controls'
+    // labels, the constant at the controls' means (logScaleAtControlMeans) and the panel options'
+    // account (panel) as PRODFIT's.
     ProductionFit summary;
     ParameterEstimate costElasticity;
     Eigen::VectorXd meanLogPrices;
@@ -89,8 +103,13 @@ struct CostFit {
 // The labels of the translog's second-order rows: "output*output", "<i>*<j>" (i ≤ j), "<i>*output".
 std::vector<std::string> costSecondOrderLabels(const std::vector<std::string>& priceLabels);
 
+// The first θ index of the translog's <i>*output terms: constant, output, k prices, output*output
+// and the k(k+1)/2 price pairs come before them.
+Eigen::Index priceOutputStart(Eigen::Index prices);
+
 // Throws InputError for too few rows, no variation in output, and collinear terms (naming them);
-// for a cost frontier also for shares and for an exact fit (a frontier needs noise).
+// for panel options without their columns or in a combination not available (above); for a cost
+// frontier also for shares and for an exact fit (a frontier needs noise).
 CostFit fitCost(const CostData& data, const CostFitOptions& options);
 
 } // namespace isoquant

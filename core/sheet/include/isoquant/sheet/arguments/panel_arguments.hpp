@@ -21,6 +21,9 @@ struct RowRanges {
     const CellTable& controls;
     const CellTable& groups;
     const CellTable& trend;
+    // How a message names `output` and `inputs` (PRODCOSTFIT passes cost and input prices).
+    std::string outputName = "output";
+    std::string inputsName = "inputs";
 };
 
 // One flag per data row of output: set where output, inputs, controls or trend hold a blank or a

@@ -7,6 +7,9 @@
 //   ε = ∂ln C/∂ln y = β_y + β_yy ln y + Σᵢ βᵢ_y ln wᵢ.
 // The model is used as given: a typed model whose price coefficients do not sum to 1 is not
 // homogeneous in prices, and no check corrects it.
+// Rows labelled "<name> (control)" are controls' coefficients cⱼ (ln C + Σⱼ cⱼ zⱼ). β₀ in ln C
+// above is then the constant the evaluators use: the table's "constant for predictions" row when
+// there is one (effects or a trend), else its "constant at control means" row, else `constant`.
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
@@ -27,8 +30,13 @@ struct CostModel {
     Eigen::VectorXd prices;            // βᵢ
     Eigen::MatrixXd priceInteractions; // βᵢⱼ, symmetric k × k
     Eigen::VectorXd priceOutput;       // βᵢ_y
+    std::vector<std::string> controlLabels; // without " (control)"
+    Eigen::VectorXd controls;               // cⱼ
+    double constantAtZeroControls = 0;      // the `constant` row itself
 
     double logCost(double output, const Eigen::VectorXd& prices) const;
+    // ln C at these controls' values: the `constant` row plus Σⱼ cⱼ zⱼ in place of β₀.
+    double logCostAt(double output, const Eigen::VectorXd& prices, const Eigen::VectorXd& controlValues) const;
     double costElasticity(double output, const Eigen::VectorXd& prices) const;
 };
 

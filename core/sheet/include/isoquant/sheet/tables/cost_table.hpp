@@ -21,6 +21,9 @@ inline constexpr const char* costOutputLabel = "output";
 inline constexpr const char* costElasticityLabel = "cost elasticity";
 inline constexpr const char* efficientScaleLabel = "efficient scale";
 inline constexpr const char* costRegularityLabel = "regularity";
+inline constexpr const char* costControlMeansLabel = "constant at control means";
+inline constexpr const char* costTrendLabel = "cost change per period";
+inline constexpr const char* costPredictionLabel = "constant for predictions";
 
 // PRODCOSTFIT's table (7 columns). Rows: the header; constant; output; one per price (k); for the
 // translog output*output, k(k+1)/2 price pairs and k price*output rows; an empty row; observations,
@@ -35,8 +38,17 @@ inline constexpr const char* costRegularityLabel = "regularity";
 // figures, are n/a; log-likelihood, AIC and BIC are the frontier's (σᵥ and σᵤ counted);
 // inefficiency test and mean efficiency (of cost, E[exp(−u)|ε] ≤ 1) after BIC (and after
 // `incomplete rows dropped`); convergence before form; the smearing factor is n/a.
+// With controls, groups, effects or a trend: one row per control after the form's parameter rows
+// ("<label> (control)"), "constant at control means" (the constant plus the controls' coefficients
+// times their means) before the smearing factor, and after it PRODFIT's option rows: groups and
+// effects (with groups), within R2 (effects), periods (two-way), "cost change per period" (a
+// trend: the change of ln C per period at given output and prices, with its inference),
+// "constant for predictions" (effects or a trend: the constant PRODCOST and the other evaluators
+// use — at the controls' means, the row-weighted mean group effect, the latest period) and latest
+// period (a trend). The first overload counts the rows without these.
 std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncompleteRows = false,
                              bool frontier = false);
+std::size_t costFitTableRows(const CostFit& fit);
 CellTable costFitTable(const CostFit& fit);
 
 } // namespace isoquant
