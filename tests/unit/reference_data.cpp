@@ -99,4 +99,17 @@ CostFitArguments riceFarmCostArguments(bool withShares)
     return arguments;
 }
 
+CostFitArguments riceFarmCostPanelArguments()
+{
+    CostFitArguments arguments = riceFarmCostArguments();
+    const auto table = CsvTable::read(dataPath("rice_farms_panel.csv"));
+    arguments.groups = columnsOf(table, {"id"});
+    arguments.controls = columnsOf(table, {"size"});
+    const auto n = static_cast<Eigen::Index>(table.rows());
+    Eigen::MatrixXd seasons(n, 1);
+    for (Eigen::Index row = 0; row < n; ++row) seasons(row, 0) = static_cast<double>(row % 6 + 1); // 6 rows a farm
+    arguments.trend = numberRange(seasons, {"season"});
+    return arguments;
+}
+
 } // namespace isoquant::testing

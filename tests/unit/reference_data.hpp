@@ -31,4 +31,8 @@ FitArguments riceFarmArguments(const std::vector<std::string>& inputs);
 // `withShares`: also each input's share of cost (under "seed share", "urea share", "labour share").
 CostFitArguments riceFarmCostArguments(bool withShares = false);
 
+// The same with the panel columns: groups = id, controls = size, trend = each farm's seasons 1 to 6
+// in the file's order (every farm has 6 consecutive rows); a test clears what it does not use.
+CostFitArguments riceFarmCostPanelArguments();
+
 } // namespace isoquant::testing

@@ -89,6 +89,17 @@ void requireCostData(const CostData& data, Eigen::Index parameters, bool frontie
 
 namespace {
 
+// gᵀVg over the parameters g involves: under effects V has no entries (NaN) for the constant,
+// which no quantity here depends on.
+double varianceOf(const Eigen::RowVectorXd& gradient, const Eigen::MatrixXd& covariance)
+{
+    double variance = 0;
+    for (Eigen::Index i = 0; i < gradient.size(); ++i)
+        for (Eigen::Index j = 0; j < gradient.size(); ++j)
+            if (gradient(i) != 0 && gradient(j) != 0) variance += gradient(i) * covariance(i, j) * gradient(j);
+    return variance;
+}
+
 // ε at the sample means of the logs as gᵀθ (cost_fit.hpp).
 Eigen::RowVectorXd elasticityGradient(const CostFit& fit, Eigen::Index parameters)
 {
@@ -116,7 +127,7 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
     gradient(2 + k) = -logScale / curvature;
     gradient.segment(priceOutputStart(k), k) = -fit.meanLogPrices.transpose() / curvature;
     const ParameterEstimate logEstimate =
-        inferenceOf(logScale, (gradient * fit.summary.inference.covariance * gradient.transpose())(0, 0), degreesOfFreedom, level);
+        inferenceOf(logScale, varianceOf(gradient, fit.summary.inference.covariance), degreesOfFreedom, level);
     ParameterEstimate scale;
     scale.estimate = std::exp(logScale);
     scale.standardError = scale.estimate * logEstimate.standardError;
@@ -129,7 +140,7 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
 void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
 {
     const Eigen::RowVectorXd gradient = elasticityGradient(fit, fit.summary.inference.estimates.size());
-    const double variance = (gradient * fit.summary.inference.covariance * gradient.transpose())(0, 0);
+    const double variance = varianceOf(gradient, fit.summary.inference.covariance);
     fit.costElasticity = inferenceOf(gradient.dot(fit.summary.inference.estimates), variance, degreesOfFreedom, level);
     const double elasticity = fit.costElasticity.estimate;
     ReturnsToScale& returns = fit.summary.returns;
@@ -201,16 +212,17 @@ void requireCostOptions(const CostData& data, const CostFitOptions& options)
                          "without {1} for effects");
 }
 
-// θ's covariance from the run's: the form's and the controls' block; under effects the constant
-// (the mean group effect) has none (panel_regression.hpp).
-Eigen::MatrixXd parameterBlock(const Eigen::MatrixXd& covariance, Eigen::Index regressors, bool effects)
+// θ's covariance T·V·Tᵀ; under effects the constant (the mean group effect) has none
+// (panel_regression.hpp): its row and column read NaN, set after the product so that they stay
+// out of every other entry.
+Eigen::MatrixXd parameterCovariance(const Eigen::MatrixXd& map, const Eigen::MatrixXd& covariance, bool effects)
 {
-    Eigen::MatrixXd block = covariance.topLeftCorner(regressors, regressors);
+    Eigen::MatrixXd mapped = map * covariance * map.transpose();
     if (effects) {
-        block.row(0).setConstant(notANumber);
-        block.col(0).setConstant(notANumber);
+        mapped.row(0).setConstant(notANumber);
+        mapped.col(0).setConstant(notANumber);
     }
-    return block;
+    return mapped;
 }
 
 // R² and R̄² of ln C, the constant at the controls' means and the panel's account.
@@ -260,8 +272,7 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
     const auto [map, shift] = restoredParameters(options.form, k, formColumns, data.controls.cols());
     double degreesOfFreedom = regression.summary.inferenceDegreesOfFreedom;
     Eigen::VectorXd coefficients = regression.inference.estimates.head(regressors);
-    Eigen::MatrixXd covariance =
-        parameterBlock(regression.inference.covariance, regressors, options.effects != EffectsKind::none);
+    Eigen::MatrixXd covariance = regression.inference.covariance.topLeftCorner(regressors, regressors);
     if (frontier) {
         if (summary.status.is(FitStatusKind::exactFit))
             throw InputError({DataPart::inefficiency}, "{0}: the cost function fits every row exactly, which "
@@ -271,7 +282,8 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
         covariance = fit.frontier->mirrored.covariance.topLeftCorner(regressors, regressors);
         degreesOfFreedom = std::numeric_limits<double>::infinity(); // the normal: maximum likelihood
     }
-    setParameters(summary, map * coefficients + shift, map * covariance * map.transpose(), degreesOfFreedom,
+    setParameters(summary, map * coefficients + shift,
+                  parameterCovariance(map, covariance, options.effects != EffectsKind::none), degreesOfFreedom,
                   options.confidenceLevel);
     describeCostFit(fit, data, options, run);
     // Duan: mean of exp(residual of ln C); none for a frontier, whose cost is the least, not a median.
