@@ -45,7 +45,7 @@ def labour_bounds_sheet(doc, last):
     style.header(sheet.getCellRangeByName("H1:N1"))
     style.align_right(sheet.getCellRangeByName("I1:N1"))
     style.column_widths(sheet, {"A": 28, "B": 22, "C": 26, "D": 26, "E": 30, "F": 26, "G": 6,
-                                "H": 42, "I": 24, "J": 22, "K": 18, "L": 22, "M": 20, "N": 20})
+                                "H": 42, "I": 24, "J": 22, "K": 18, "L": 22, "M": 26, "N": 26})
     style.columns_with_error_bars_chart(
         sheet, "labour_bounds", "Marginal product of labour with 95 % bounds (EUR per hour worked)",
         categories="A1:A%d" % last, values="B1:B%d" % last, below="E2:E%d" % last, above="F2:F%d" % last,

@@ -45,11 +45,12 @@ def furniture_workshops(office, path):
         "What it shows: a Cobb-Douglas production function fitted to last year's output, labour and capital "
         "of the company's %d workshops, with the returns-to-scale verdict, and for every workshop its fitted "
         "output and the marginal products of labour and capital (the output one more unit of each would "
-        "add). The sheet Labour bounds gives each workshop's marginal product of labour with its 95%% bounds "
+        "add). The sheet Labour bounds gives each workshop's marginal product of labour with its 95 %% bounds "
         "(PRODFIT with its covariance block, then PRODMARGINAL's lower and upper bound) and draws them as "
         "columns with the bounds as error bars." % len(rows),
         "Which cells to change: the yellow data cells on the sheet Workshops (B2:D%d). Everything else "
-        "recalculates. The fitted table is the array formula in I1:O17." % last,
+        "recalculates. The fitted table is the array formula in I1:O17 (on the sheet Labour bounds, with "
+        "its covariance block, in %s)." % (last, bounds_sheet.TABLE_CELLS),
         "Units: output and capital in thousand EUR a year, labour in thousand hours worked.",
         "Where the data came from: invented. sample-sheets/scenarios.py draws the workshops with seed %d "
         "from output = %.1f x labour^%.2f x capital^%.2f x exp(noise), noise normal with SD %.2f, so the true "
