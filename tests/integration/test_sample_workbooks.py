@@ -14,12 +14,11 @@ gradient (1, 1/b_labour + ln labour, ln capital), bounds MP exp(-/+ t s), s = sq
 1e-8 relative (STATSMODELS_RELATIVE: two implementations of the same least squares).
 """
 import glob
+import math
 import os
 import subprocess
 import tempfile
 import unittest
-
-import math
 
 from isoquant_office import HeadlessOffice, get_cell, get_range, recalc  # first: it imports uno, which makes com.sun.star importable
 from com.sun.star.sheet.CellFlags import FORMULA, VALUE, STRING
