@@ -171,7 +171,8 @@ std::vector<FunctionInfo> efficiencyFunctions()
            "frontier, the output column, then the price columns in PRODCOSTFIT's order."},
           {argument::what, "\"efficiency\" (default: E[exp(-u) | residual], Battese and Coelli), \"inefficiency\" "
                            "(E[u | residual], Jondrow et al.), \"lower bound\" or \"upper bound\" (of efficiency, at "
-                           "the table's confidence level, Horrace and Schmidt)."}}},
+                           "the table's confidence level, Horrace and Schmidt; given the residual at the fitted "
+                           "parameters, without their estimation uncertainty)."}}},
         {"prodEnvelope",
          "PRODENVELOPE",
          "Data envelopment: each row's (plant's) efficiency against the best practice of all rows, by linear "

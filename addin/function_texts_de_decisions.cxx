@@ -158,7 +158,8 @@ std::vector<TranslatedFunction> germanEfficiencyTexts()
                        "Spalte der Ausbringung, danach die Preisspalten in der Reihenfolge von PRODCOSTFIT."},
       {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
                    "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
-                   "zum Konfidenzniveau der Tabelle, Horrace und Schmidt)."}}},
+                   "zum Konfidenzniveau der Tabelle, Horrace und Schmidt; bei gegebenem Residuum und "
+                   "geschätzten Parametern, ohne deren Schätzunsicherheit)."}}},
     {"prodEnvelope",
      "Data Envelopment Analysis: die Effizienz jeder Zeile (jedes Betriebs) gegenüber der besten Praxis aller "
      "Zeilen, durch lineare Optimierung; mehrere Ausbringungen erlaubt. Eine Spalte, ein Wert je Zeile (1 = auf "

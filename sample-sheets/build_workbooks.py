@@ -14,6 +14,7 @@ import sys
 
 from isoquant_office import HeadlessOffice, extension_and_output, set_array_formula, set_formula, set_values
 
+import bounds_sheet
 import cost_workbook
 import efficiency_workbook
 import panel_workbook
@@ -44,9 +45,12 @@ def furniture_workshops(office, path):
         "What it shows: a Cobb-Douglas production function fitted to last year's output, labour and capital "
         "of the company's %d workshops, with the returns-to-scale verdict, and for every workshop its fitted "
         "output and the marginal products of labour and capital (the output one more unit of each would "
-        "add)." % len(rows),
+        "add). The sheet Labour bounds gives each workshop's marginal product of labour with its 95 %% bounds "
+        "(PRODFIT with its covariance block, then PRODMARGINAL's lower and upper bound) and draws them as "
+        "columns with the bounds as error bars." % len(rows),
         "Which cells to change: the yellow data cells on the sheet Workshops (B2:D%d). Everything else "
-        "recalculates. The fitted table is the array formula in I1:O17." % last,
+        "recalculates. The fitted table is the array formula in I1:O17 (on the sheet Labour bounds, with "
+        "its covariance block, in %s)." % (last, bounds_sheet.TABLE_CELLS),
         "Units: output and capital in thousand EUR a year, labour in thousand hours worked.",
         "Where the data came from: invented. sample-sheets/scenarios.py draws the workshops with seed %d "
         "from output = %.1f x labour^%.2f x capital^%.2f x exp(noise), noise normal with SD %.2f, so the true "
@@ -54,6 +58,7 @@ def furniture_workshops(office, path):
                                          truth["capital_exponent"], truth["noise_sd"],
                                          truth["labour_exponent"] + truth["capital_exponent"]),
         CAUTION,
+        bounds_sheet.BOUNDS_NOTE,
         SHARING,
     ])
 
@@ -94,8 +99,10 @@ def furniture_workshops(office, path):
                         actual_range="B1:B%d" % last, fitted_range="E1:E%d" % last, anchor="I25", size_mm=(160, 90))
     doc.NamedRanges.addNewByName("fitted_technology", "$Workshops.%s" % table,
                                  sheet.getCellRangeByName("A1").CellAddress, 0)
+    bounds_sheet.labour_bounds_sheet(doc, last)
     doc.calculateAll()
     check_workbook(doc, path, {"labour": truth["labour_exponent"], "capital": truth["capital_exponent"]})
+    bounds_sheet.check_labour_bounds(doc, path)
     office.store(doc, path, FLAT_ODS_FILTER)
     doc.close(True)
 

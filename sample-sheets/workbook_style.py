@@ -95,21 +95,48 @@ def xy_lines_chart(sheet, name, heading, x_range, y_range, anchor, size_mm, x_ti
 def stacked_columns_chart(sheet, name, heading, categories, series, anchor, size_mm):
     """Stacked columns of the series ranges (each with a header cell naming its series), one stack
     per category cell (with a header cell above them), placed at anchor."""
-    position = sheet.getCellRangeByName(anchor).Position
-    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
-    ranges = tuple(_address(sheet, cell_range) for cell_range in (categories,) + tuple(series))
-    sheet.Charts.addNewByName(name, rectangle, ranges, True, True)
-    chart = sheet.Charts.getByName(name).EmbeddedObject
-    chart.setDiagram(chart.createInstance("com.sun.star.chart.BarDiagram"))
-    chart.HasMainTitle = True
-    chart.Title.String = heading
+    chart = _column_chart(sheet, name, heading, (categories,) + tuple(series), anchor, size_mm)
     chart.HasLegend = True
-    chart.Diagram.Vertical = False  # upright columns
     chart.Diagram.Stacked = True
     # Year labels below the plot, not on the zero line among the negative bars.
     chart.Diagram.XAxis.LabelPosition = OUTSIDE_START
     plain_chart_background(chart)
     return chart
+
+
+def columns_with_error_bars_chart(sheet, name, heading, categories, values, below, above, anchor, size_mm):
+    """Upright columns of values (with a header cell), one per category cell (with a header cell
+    above them), each with an error bar reaching down by its cell of below and up by its cell of
+    above (lengths, not bounds; both without a header cell), placed at anchor; no legend."""
+    chart = _column_chart(sheet, name, heading, (categories, values), anchor, size_mm)
+    chart.HasLegend = False
+    series = chart.Diagram.getDataRowProperties(0)
+    series.ErrorBarStyle = uno.getConstantByName("com.sun.star.chart.ErrorBarStyle.FROM_DATA")
+    series.ErrorIndicator = uno.Enum("com.sun.star.chart.ChartErrorIndicatorType", "TOP_AND_BOTTOM")
+    series.ErrorBarRangeNegative = _representation(sheet, below)
+    series.ErrorBarRangePositive = _representation(sheet, above)
+    plain_chart_background(chart)
+    return chart
+
+
+def _column_chart(sheet, name, heading, ranges, anchor, size_mm):
+    """Upright columns of each range after the first (with a header cell naming its series), one
+    per cell of the first (the categories, with a header cell above them), placed at anchor."""
+    position = sheet.getCellRangeByName(anchor).Position
+    rectangle = Rectangle(position.X, position.Y, size_mm[0] * 100, size_mm[1] * 100)
+    addresses = tuple(_address(sheet, cell_range) for cell_range in ranges)
+    sheet.Charts.addNewByName(name, rectangle, addresses, True, True)
+    chart = sheet.Charts.getByName(name).EmbeddedObject
+    chart.setDiagram(chart.createInstance("com.sun.star.chart.BarDiagram"))
+    chart.HasMainTitle = True
+    chart.Title.String = heading
+    chart.Diagram.Vertical = False  # upright columns
+    return chart
+
+
+def _representation(sheet, cell_range):
+    """A range as the chart's data provider names it: $'Sheet name'.$E$2:$E$41."""
+    return sheet.getCellRangeByName(cell_range).AbsoluteName
 
 
 def one_page_wide(doc, sheet, landscape, one_page_high=False):
