@@ -118,11 +118,11 @@ CellTable costEfficiencyColumn(const CellTable& model, const CellTable& output, 
     const auto k = static_cast<Eigen::Index>(frontier.cost.priceLabels.size());
     const auto m = static_cast<Eigen::Index>(frontier.cost.controlLabels.size());
     if (read.values.cols() != 1 + k + m)
-        throw argumentError(argument::inputs, "has " + std::to_string(read.values.cols()) +
-                                                  " columns, but a cost frontier needs " + std::to_string(1 + k + m) +
-                                                  ": the output column, then the " + std::to_string(k) +
-                                                  " price columns in PRODCOSTFIT's order" +
-                                                  (m > 0 ? ", then its " + std::to_string(m) + " controls" : ""));
+        throw argumentError(argument::inputs,
+                            "has " + std::to_string(read.values.cols()) + " columns, but a cost frontier needs " +
+                                std::to_string(1 + k + m) + ": the output column, then the " + std::to_string(k) +
+                                " price columns in PRODCOSTFIT's order" +
+                                (m > 0 ? ", then its " + plural(static_cast<std::size_t>(m), "control") : ""));
     requirePositiveInputs(read.values, 1 + k, read.firstDataRow());
     std::vector<TruncatedNormal> conditionals;
     for (Eigen::Index row = 0; row < read.values.rows(); ++row) {
