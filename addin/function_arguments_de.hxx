@@ -81,8 +81,6 @@ inline constexpr ArgumentInfo targetArgument{"Zielausbringung", "Die zu produzie
 inline constexpr ArgumentInfo pricesArgument{
     "Faktorpreise", "Ein positiver Preis je Faktor in der Faktorreihenfolge des Modells: eine Zeile von Preisen "
                     "ergibt eine Zeile von Ergebnissen, eine Spalte eine Spalte."};
-// PRODCOSTFIT's arguments that cost fits do not use yet.
-inline constexpr std::string_view notForCostFits = "Für Kostenschätzungen noch nicht verfügbar; leer lassen.";
 
 std::vector<TranslatedFunction> germanFittingTexts();
 std::vector<TranslatedFunction> germanGrowthTexts();

@@ -118,21 +118,33 @@ std::vector<FunctionInfo> costFitFunctions()
            "cost, each row summing to 1 within 0.01 (fractions). Given, the cost equation and all but the "
            "last share equation are fitted jointly by iterated GLS (seemingly unrelated regressions)."},
           {argument::errors,
-           "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity; "
-           "without shares only)."},
+           "Standard errors: \"classical\" (default), \"hc1\" or \"hc3\" (robust to heteroskedasticity) or "
+           "\"cluster\" (by the groups; tests on G - 1 degrees of freedom); other than classical without shares "
+           "and without inefficiency only."},
           levelArgument,
-          {argument::controls, "Not available yet for cost fits; leave empty."},
-          {argument::groups, "Not available yet for cost fits; leave empty."},
-          {argument::effects, "Not available yet for cost fits; leave empty."},
-          {argument::trend, "Not available yet for cost fits; leave empty."},
+          {argument::controls,
+           "Optional extra columns entered in ln cost as they are, not logged (a rate, a 0/1 dummy), as many rows "
+           "as cost; PRODCOST then uses the constant at their means."},
+          {argument::groups,
+           "Optional column naming the plant or firm of each row (numbers or texts), as many rows as cost, a "
+           "header row allowed. Needed for effects and for \"cluster\" errors. Not with inefficiency."},
+          {argument::effects,
+           "\"none\" (default), \"fixed\" (one effect per group, within estimator) or \"two-way\" (group and "
+           "period effects; the periods come from trend). Not with shares or inefficiency."},
+          {argument::trend,
+           "Optional column of periods (years), as many rows as cost: adds a time trend, reported as the cost "
+           "change per period at given output and prices (negative: costs fall). With \"two-way\" effects it "
+           "gives the periods instead. Not with inefficiency."},
           {argument::incompleteRows,
-           "TRUE to leave out rows with a blank or text cell in cost, output, input prices or "
-           "shares (the table counts them); FALSE or empty: such a cell is an error."},
+           "TRUE to leave out rows with a blank or text cell in cost, output, input prices, shares, "
+           "controls or trend, or a blank in groups (the table counts them); FALSE or empty: such a "
+           "cell is an error."},
           {argument::inefficiency,
            "Empty (default): the average cost function. \"half-normal\" or \"exponential\": a "
            "cost frontier, ln cost = frontier + noise + inefficiency, whose table adds noise SD, "
            "inefficiency SD, lambda, the inefficiency test, mean efficiency and convergence; "
-           "PRODEFFICIENCY then gives each row's cost efficiency. Not with shares."}}},
+           "PRODEFFICIENCY then gives each row's cost efficiency. Not with shares or panel options; "
+           "controls are allowed."}}},
     };
 }
 

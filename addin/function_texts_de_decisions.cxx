@@ -109,20 +109,32 @@ std::vector<TranslatedFunction> germanCostTexts()
                         "iterierter verallgemeinerter Methode der kleinsten Quadrate geschätzt (scheinbar "
                         "unverbundene Regressionen)."},
       {"Standardfehler", "Standardfehler: \"classical\" (Standard), \"hc1\" oder \"hc3\" (robust gegen "
-                         "Heteroskedastizität; nur ohne Kostenanteile)."},
+                         "Heteroskedastizität) oder \"cluster\" (nach den Gruppen; Tests mit G - 1 Freiheitsgraden); "
+                         "andere als classical nur ohne Kostenanteile und ohne Ineffizienz."},
       levelArgument,
-      {"Kontrollvariablen", notForCostFits},
-      {"Gruppen", notForCostFits},
-      {"Effekte", notForCostFits},
-      {"Trend", notForCostFits},
+      {"Kontrollvariablen", "Optionale weitere Spalten, unlogarithmiert in ln Kosten aufgenommen (eine Quote, eine "
+                            "0/1-Variable), so viele Zeilen wie bei den Kosten; PRODCOST nimmt dann die Konstante "
+                            "bei ihren Mittelwerten."},
+      {"Gruppen", "Optionale Spalte, die Betrieb oder Unternehmen jeder Zeile benennt (Zahlen oder Texte), so "
+                  "viele Zeilen wie bei den Kosten, eine Überschrift erlaubt. Nötig für Effekte und für "
+                  "\"cluster\"-Standardfehler. Nicht mit Ineffizienz."},
+      {"Effekte", "\"none\" (Standard), \"fixed\" (ein Effekt je Gruppe, Within-Schätzer) oder \"two-way\" "
+                  "(Gruppen- und Periodeneffekte; die Perioden kommen aus dem Trend). Nicht mit Kostenanteilen "
+                  "oder Ineffizienz."},
+      {"Trend", "Optionale Spalte der Perioden (Jahre), so viele Zeilen wie bei den Kosten: fügt einen Zeittrend "
+                "hinzu, ausgewiesen als Kostenänderung je Periode bei gegebener Ausbringung und gegebenen Preisen "
+                "(negativ: die Kosten sinken). Mit \"two-way\"-Effekten liefert sie stattdessen die Perioden. "
+                "Nicht mit Ineffizienz."},
       {"unvollständige Zeilen", "WAHR, um Zeilen mit einer leeren oder Text-Zelle in Kosten, Ausbringung, "
-                                "Faktorpreisen oder Kostenanteilen auszulassen (die Tabelle zählt sie); FALSCH oder "
-                                "leer: eine solche Zelle ist ein Fehler."},
+                                "Faktorpreisen, Kostenanteilen, Kontrollvariablen oder Trend oder einer leeren "
+                                "Zelle in Gruppen auszulassen (die Tabelle zählt sie); FALSCH oder leer: eine "
+                                "solche Zelle ist ein Fehler."},
       {"Ineffizienz", "Leer (Standard): die durchschnittliche Kostenfunktion. \"half-normal\" (halbnormal) "
                       "oder \"exponential\" (exponentialverteilt): eine Kostengrenze, ln Kosten = Grenze + "
                       "Störterm + Ineffizienz, deren Tabelle Standardabweichung von Störterm und Ineffizienz, "
                       "lambda, den Ineffizienztest, die mittlere Effizienz und die Konvergenz ergänzt; "
-                      "PRODEFFICIENCY gibt dann die Kosteneffizienz jeder Zeile. Nicht mit Kostenanteilen."}}},
+                      "PRODEFFICIENCY gibt dann die Kosteneffizienz jeder Zeile. Nicht mit Kostenanteilen oder "
+                      "Panel-Optionen; Kontrollvariablen sind erlaubt."}}},
     };
 }
 
