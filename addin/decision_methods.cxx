@@ -62,7 +62,7 @@ Any ProductionFunctions::prodPriceElasticity(const AnyTable& model, const AnyTab
 Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& output, const AnyTable& prices,
                                      const Any& form, const Any& shares, const Any& errors, const Any& level,
                                      const Any& controls, const Any& groups, const Any& effects, const Any& trend,
-                                     const Any& incompleteRows, const Any& inefficiency)
+                                     const Any& incompleteRows, const Any& inefficiency, const Any& covariance)
 {
     return guardedTable([&] {
         CostFitArguments arguments;
@@ -79,7 +79,8 @@ Any ProductionFunctions::prodCostFit(const AnyTable& cost, const AnyTable& outpu
         arguments.trend = toOptionalTable(trend, argument::trend);
         arguments.incompleteRows = toSingleCell(incompleteRows, argument::incompleteRows);
         arguments.inefficiency = toSingleCell(inefficiency, argument::inefficiency);
-        return costFitTable(costFitFromArguments(arguments));
+        const Cell withCovariance = toSingleCell(covariance, argument::covariance);
+        return costFitTableWithCovariance(costFitFromArguments(arguments), withCovariance);
     });
 }
 

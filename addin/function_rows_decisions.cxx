@@ -66,11 +66,10 @@ std::vector<FunctionInfo> costModelFunctions()
            "per percent of output) or \"returns to scale\" (its inverse)."},
           {argument::statistic,
            "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\" of that figure: by "
-           "the delta method from the covariance block of a cobb-douglas PRODFIT table made with "
-           "covariance TRUE, at its level and t distribution. Cost is positive by nature: total, "
-           "marginal and average cost get bounds on the log scale, so they never cross 0; cost "
-           "elasticity and returns to scale get value -/+ t times the std. error. Not for a cost model "
-           "(PRODCOSTFIT), which has no covariance block."}}},
+           "the delta method from the covariance block of a cobb-douglas PRODFIT table or a PRODCOSTFIT "
+           "table made with covariance TRUE, at its level and t distribution. Cost is positive by nature: "
+           "total, marginal and average cost get bounds on the log scale, so they never cross 0; cost "
+           "elasticity and returns to scale get value -/+ t times the std. error."}}},
         {"prodEfficientScale",
          "PRODEFFICIENTSCALE",
          "Output at which average cost is lowest at the given input prices (the efficient scale), from a cost "
@@ -144,7 +143,12 @@ std::vector<FunctionInfo> costFitFunctions()
            "cost frontier, ln cost = frontier + noise + inefficiency, whose table adds noise SD, "
            "inefficiency SD, lambda, the inefficiency test, mean efficiency and convergence; "
            "PRODEFFICIENCY then gives each row's cost efficiency. Not with shares or panel options; "
-           "controls are allowed."}}},
+           "controls are allowed."},
+          {argument::covariance,
+           "TRUE to add below the table the estimated covariance matrix of the parameters (of the kind chosen "
+           "by errors), one row per parameter, so that PRODCOST's statistic gives bounds from this table; the "
+           "table is then max(7, p + 1) columns wide and 1 + p rows longer, p parameters. Not with "
+           "inefficiency. FALSE or empty: no block."}}},
     };
 }
 

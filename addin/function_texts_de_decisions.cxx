@@ -44,97 +44,103 @@ std::vector<TranslatedFunction> germanDecisionTexts()
 std::vector<TranslatedFunction> germanCostTexts()
 {
     return {
-    {"prodCost",
-     "Kosten der kostenminimalen Produktion der Zielausbringung zu den gegebenen Faktorpreisen: Gesamtkosten, "
-     "Grenzkosten (einer weiteren Einheit der Ausbringung), Durchschnittskosten, Kostenelastizität oder "
-     "Skalenerträge. Das Modell kann auch eine Kostenfunktion sein: eine PRODCOSTFIT-Tabelle oder eingegebene "
-     "Zeilen form | cobb-douglas cost, constant | Wert, output | Wert, dann eine Zeile je Faktor, seine "
-     "Bezeichnung | sein Preiskoeffizient. Eine Spalte von Ausbringungsmengen ergibt eine Spalte von Werten.",
-     {modelArgument,
-      {"Zielausbringung", "Die zu produzierende Ausbringungsmenge, eine positive Zahl, oder eine Spalte von "
-                          "Ausbringungsmengen (das Ergebnis ist dann eine Spalte)."},
-      {"Faktorpreise", "Ein positiver Preis je Faktor in der Reihenfolge des Modells, als Zeile oder Spalte; bei "
-                       "einer Spalte von Ausbringungsmengen eine Zeile Preise je Ausbringungsmenge (oder eine "
-                       "Zeile für alle)."},
-      {"Kennzahl", "\"total\" (Standard: Gesamtkosten), \"marginal\" (Grenzkosten), \"average\" "
-                   "(Durchschnittskosten), \"cost elasticity\" (prozentuale Änderung der Kosten je Prozent "
-                   "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."},
-      {"Statistik", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
-                    "\"upper bound\" (untere oder obere Grenze) dieser Kennzahl: nach der Delta-Methode aus dem "
-                    "Kovarianzblock einer mit Kovarianz WAHR geschätzten PRODFIT-Tabelle der Form cobb-douglas, "
-                    "auf deren Niveau und mit deren t-Verteilung. Kosten sind ihrer Natur nach positiv: Gesamt-, "
-                    "Grenz- und Durchschnittskosten erhalten Grenzen auf der Log-Skala, die nie unter 0 fallen; "
-                    "Kostenelastizität und Skalenerträge den Wert -/+ t mal Standardfehler. Nicht für ein "
-                    "Kostenmodell (PRODCOSTFIT), das keinen Kovarianzblock hat."}}},
-    {"prodEfficientScale",
-     "Ausbringung, bei der die Durchschnittskosten zu den gegebenen Faktorpreisen am niedrigsten sind (die "
-     "effiziente Betriebsgröße), aus einem Kostenmodell (PRODCOSTFIT-Tabelle oder eingetippte Zeilen, wie bei "
-     "PRODCOST) oder einem Produktionsmodell, dessen Skalenerträge mit der Größe fallen. Meldet, wenn die "
-     "Durchschnittskosten im Modell bei jeder Ausbringung fallen oder steigen.",
-     {modelArgument,
-      {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte."}}},
-    {"prodPriceElasticity",
-     "Preiselastizität zwischen den Faktoren i und j im kostenminimalen Plan für die Ausbringung: \"demand\" "
-     "(Nachfrageelastizität: prozentuale Änderung der kostenminimalen Menge von i je Prozent Preisänderung "
-     "von j, bei gleicher Ausbringung), \"allen\" oder \"morishima\". Aus einem Kostenmodell (wie bei "
-     "PRODCOST) oder, über die Dualität, aus einem Produktionsmodell.",
-     {modelArgument,
-      {"Ausbringung", "Die Ausbringung, eine positive Zahl, oder eine Spalte von Ausbringungen (das Ergebnis "
-                      "ist dann eine Spalte)."},
-      {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte; "
-                       "bei einer Spalte von Ausbringungen eine Zeile Preise je Ausbringung (oder eine für "
-                       "alle)."},
-      {"Faktor i", "Der Faktor, dessen Menge reagiert: seine Nummer (1 für den ersten) oder seine "
-                   "Bezeichnung."},
-      {"Faktor j", "Der Faktor, dessen Preis sich ändert: seine Nummer oder seine Bezeichnung."},
-      {"Art", "\"demand\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
-              "gegebenen Reihenfolge, wie bei PRODSUBSTITUTION)."}}},
-    {"prodCostFit",
-     "Schätzt eine Kostenfunktion aus beobachteten Kosten, Ausbringung und Faktorpreisen nach der Methode der "
-     "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen, oder mit Ineffizienz eine stochastische "
-     "Kostengrenze (die geringsten Kosten, nach der Maximum-Likelihood-Methode). Liefert eine Tabelle (als "
-     "Matrixformel eingeben): Schätzwerte mit Standardfehlern, Gütemaße, Kostenelastizität, Skalenerträge mit "
-     "Test und Urteil, effiziente Betriebsgröße.",
-     {{"Kosten", "Gesamtkosten jeder Zeile (Betrieb, Filiale oder Periode): eine Spalte positiver Zahlen. Eine "
-                 "erste Zeile mit Text gilt als Überschrift."},
-      {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen, so viele Zeilen wie bei den "
-                      "Kosten."},
-      {"Faktorpreise", "Die Preise, die jede Zeile für ihre Faktoren gezahlt hat, eine Spalte je Faktor, positive "
-                       "Zahlen, so viele Zeilen wie bei den Kosten. Eine erste Zeile mit Text benennt die "
-                       "Faktoren; die Homogenität wird durch Division durch den letzten Preis erzwungen."},
-      {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
-      {"Kostenanteile", "Optionale Kostenanteile der Faktoren, eine Spalte je Preis in derselben Reihenfolge, so "
-                        "viele Zeilen wie bei den Kosten, jede Zeile mit Summe 1 auf 0,01 genau (Anteile). Angegeben, "
-                        "werden die Kostengleichung und alle Anteilsgleichungen bis auf die letzte gemeinsam nach "
-                        "iterierter verallgemeinerter Methode der kleinsten Quadrate geschätzt (scheinbar "
-                        "unverbundene Regressionen)."},
-      {"Standardfehler", "Standardfehler: \"classical\" (Standard), \"hc1\" oder \"hc3\" (robust gegen "
-                         "Heteroskedastizität) oder \"cluster\" (nach den Gruppen; Tests mit G - 1 Freiheitsgraden); "
-                         "andere als classical nur ohne Kostenanteile und ohne Ineffizienz."},
-      levelArgument,
-      {"Kontrollvariablen", "Optionale weitere Spalten, unlogarithmiert in ln Kosten aufgenommen (eine Quote, eine "
-                            "0/1-Variable), so viele Zeilen wie bei den Kosten; PRODCOST nimmt dann die Konstante "
-                            "bei ihren Mittelwerten."},
-      {"Gruppen", "Optionale Spalte, die Betrieb oder Unternehmen jeder Zeile benennt (Zahlen oder Texte), so "
-                  "viele Zeilen wie bei den Kosten, eine Überschrift erlaubt. Nötig für Effekte und für "
-                  "\"cluster\"-Standardfehler. Nicht mit Ineffizienz."},
-      {"Effekte", "\"none\" (Standard), \"fixed\" (ein Effekt je Gruppe, Within-Schätzer) oder \"two-way\" "
-                  "(Gruppen- und Periodeneffekte; die Perioden kommen aus dem Trend). Nicht mit Kostenanteilen "
-                  "oder Ineffizienz."},
-      {"Trend", "Optionale Spalte der Perioden (Jahre), so viele Zeilen wie bei den Kosten: fügt einen Zeittrend "
-                "hinzu, ausgewiesen als Kostenänderung je Periode bei gegebener Ausbringung und gegebenen Preisen "
-                "(negativ: die Kosten sinken). Mit \"two-way\"-Effekten liefert sie stattdessen die Perioden. "
-                "Nicht mit Ineffizienz."},
-      {"unvollständige Zeilen", "WAHR, um Zeilen mit einer leeren oder Text-Zelle in Kosten, Ausbringung, "
-                                "Faktorpreisen, Kostenanteilen, Kontrollvariablen oder Trend oder einer leeren "
-                                "Zelle in Gruppen auszulassen (die Tabelle zählt sie); FALSCH oder leer: eine "
-                                "solche Zelle ist ein Fehler."},
-      {"Ineffizienz", "Leer (Standard): die durchschnittliche Kostenfunktion. \"half-normal\" (halbnormal) "
-                      "oder \"exponential\" (exponentialverteilt): eine Kostengrenze, ln Kosten = Grenze + "
-                      "Störterm + Ineffizienz, deren Tabelle Standardabweichung von Störterm und Ineffizienz, "
-                      "lambda, den Ineffizienztest, die mittlere Effizienz und die Konvergenz ergänzt; "
-                      "PRODEFFICIENCY gibt dann die Kosteneffizienz jeder Zeile. Nicht mit Kostenanteilen oder "
-                      "Panel-Optionen; Kontrollvariablen sind erlaubt."}}},
+        {"prodCost",
+         "Kosten der kostenminimalen Produktion der Zielausbringung zu den gegebenen Faktorpreisen: Gesamtkosten, "
+         "Grenzkosten (einer weiteren Einheit der Ausbringung), Durchschnittskosten, Kostenelastizität oder "
+         "Skalenerträge. Das Modell kann auch eine Kostenfunktion sein: eine PRODCOSTFIT-Tabelle oder eingegebene "
+         "Zeilen form | cobb-douglas cost, constant | Wert, output | Wert, dann eine Zeile je Faktor, seine "
+         "Bezeichnung | sein Preiskoeffizient. Eine Spalte von Ausbringungsmengen ergibt eine Spalte von Werten.",
+         {modelArgument,
+          {"Zielausbringung", "Die zu produzierende Ausbringungsmenge, eine positive Zahl, oder eine Spalte von "
+                              "Ausbringungsmengen (das Ergebnis ist dann eine Spalte)."},
+          {"Faktorpreise", "Ein positiver Preis je Faktor in der Reihenfolge des Modells, als Zeile oder Spalte; bei "
+                           "einer Spalte von Ausbringungsmengen eine Zeile Preise je Ausbringungsmenge (oder eine "
+                           "Zeile für alle)."},
+          {"Kennzahl", "\"total\" (Standard: Gesamtkosten), \"marginal\" (Grenzkosten), \"average\" "
+                       "(Durchschnittskosten), \"cost elasticity\" (prozentuale Änderung der Kosten je Prozent "
+                       "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."},
+          {"Statistik", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
+                        "\"upper bound\" (untere oder obere Grenze) dieser Kennzahl: nach der Delta-Methode aus dem "
+                        "Kovarianzblock einer mit Kovarianz WAHR geschätzten PRODFIT-Tabelle der Form cobb-douglas "
+                        "oder PRODCOSTFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung. Kosten sind ihrer "
+                        "Natur nach positiv: Gesamt-, Grenz- und Durchschnittskosten erhalten Grenzen auf der "
+                        "Log-Skala, die nie unter 0 fallen; Kostenelastizität und Skalenerträge den Wert -/+ t mal "
+                        "Standardfehler."}}},
+        {"prodEfficientScale",
+         "Ausbringung, bei der die Durchschnittskosten zu den gegebenen Faktorpreisen am niedrigsten sind (die "
+         "effiziente Betriebsgröße), aus einem Kostenmodell (PRODCOSTFIT-Tabelle oder eingetippte Zeilen, wie bei "
+         "PRODCOST) oder einem Produktionsmodell, dessen Skalenerträge mit der Größe fallen. Meldet, wenn die "
+         "Durchschnittskosten im Modell bei jeder Ausbringung fallen oder steigen.",
+         {modelArgument,
+          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte."}}},
+        {"prodPriceElasticity",
+         "Preiselastizität zwischen den Faktoren i und j im kostenminimalen Plan für die Ausbringung: \"demand\" "
+         "(Nachfrageelastizität: prozentuale Änderung der kostenminimalen Menge von i je Prozent Preisänderung "
+         "von j, bei gleicher Ausbringung), \"allen\" oder \"morishima\". Aus einem Kostenmodell (wie bei "
+         "PRODCOST) oder, über die Dualität, aus einem Produktionsmodell.",
+         {modelArgument,
+          {"Ausbringung", "Die Ausbringung, eine positive Zahl, oder eine Spalte von Ausbringungen (das Ergebnis "
+                          "ist dann eine Spalte)."},
+          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte; "
+                           "bei einer Spalte von Ausbringungen eine Zeile Preise je Ausbringung (oder eine für "
+                           "alle)."},
+          {"Faktor i", "Der Faktor, dessen Menge reagiert: seine Nummer (1 für den ersten) oder seine "
+                       "Bezeichnung."},
+          {"Faktor j", "Der Faktor, dessen Preis sich ändert: seine Nummer oder seine Bezeichnung."},
+          {"Art", "\"demand\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
+                  "gegebenen Reihenfolge, wie bei PRODSUBSTITUTION)."}}},
+        {"prodCostFit",
+         "Schätzt eine Kostenfunktion aus beobachteten Kosten, Ausbringung und Faktorpreisen nach der Methode der "
+         "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen, oder mit Ineffizienz eine stochastische "
+         "Kostengrenze (die geringsten Kosten, nach der Maximum-Likelihood-Methode). Liefert eine Tabelle (als "
+         "Matrixformel eingeben): Schätzwerte mit Standardfehlern, Gütemaße, Kostenelastizität, Skalenerträge mit "
+         "Test und Urteil, effiziente Betriebsgröße.",
+         {{"Kosten", "Gesamtkosten jeder Zeile (Betrieb, Filiale oder Periode): eine Spalte positiver Zahlen. Eine "
+                     "erste Zeile mit Text gilt als Überschrift."},
+          {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen, so viele Zeilen wie bei den "
+                          "Kosten."},
+          {"Faktorpreise", "Die Preise, die jede Zeile für ihre Faktoren gezahlt hat, eine Spalte je Faktor, positive "
+                           "Zahlen, so viele Zeilen wie bei den Kosten. Eine erste Zeile mit Text benennt die "
+                           "Faktoren; die Homogenität wird durch Division durch den letzten Preis erzwungen."},
+          {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
+          {"Kostenanteile",
+           "Optionale Kostenanteile der Faktoren, eine Spalte je Preis in derselben Reihenfolge, so "
+           "viele Zeilen wie bei den Kosten, jede Zeile mit Summe 1 auf 0,01 genau (Anteile). Angegeben, "
+           "werden die Kostengleichung und alle Anteilsgleichungen bis auf die letzte gemeinsam nach "
+           "iterierter verallgemeinerter Methode der kleinsten Quadrate geschätzt (scheinbar "
+           "unverbundene Regressionen)."},
+          {"Standardfehler",
+           "Standardfehler: \"classical\" (Standard), \"hc1\" oder \"hc3\" (robust gegen "
+           "Heteroskedastizität) oder \"cluster\" (nach den Gruppen; Tests mit G - 1 Freiheitsgraden); "
+           "andere als classical nur ohne Kostenanteile und ohne Ineffizienz."},
+          levelArgument,
+          {"Kontrollvariablen", "Optionale weitere Spalten, unlogarithmiert in ln Kosten aufgenommen (eine Quote, eine "
+                                "0/1-Variable), so viele Zeilen wie bei den Kosten; PRODCOST nimmt dann die Konstante "
+                                "bei ihren Mittelwerten."},
+          {"Gruppen", "Optionale Spalte, die Betrieb oder Unternehmen jeder Zeile benennt (Zahlen oder Texte), so "
+                      "viele Zeilen wie bei den Kosten, eine Überschrift erlaubt. Nötig für Effekte und für "
+                      "\"cluster\"-Standardfehler. Nicht mit Ineffizienz."},
+          {"Effekte", "\"none\" (Standard), \"fixed\" (ein Effekt je Gruppe, Within-Schätzer) oder \"two-way\" "
+                      "(Gruppen- und Periodeneffekte; die Perioden kommen aus dem Trend). Nicht mit Kostenanteilen "
+                      "oder Ineffizienz."},
+          {"Trend", "Optionale Spalte der Perioden (Jahre), so viele Zeilen wie bei den Kosten: fügt einen Zeittrend "
+                    "hinzu, ausgewiesen als Kostenänderung je Periode bei gegebener Ausbringung und gegebenen Preisen "
+                    "(negativ: die Kosten sinken). Mit \"two-way\"-Effekten liefert sie stattdessen die Perioden. "
+                    "Nicht mit Ineffizienz."},
+          {"unvollständige Zeilen", "WAHR, um Zeilen mit einer leeren oder Text-Zelle in Kosten, Ausbringung, "
+                                    "Faktorpreisen, Kostenanteilen, Kontrollvariablen oder Trend oder einer leeren "
+                                    "Zelle in Gruppen auszulassen (die Tabelle zählt sie); FALSCH oder leer: eine "
+                                    "solche Zelle ist ein Fehler."},
+          {"Ineffizienz", "Leer (Standard): die durchschnittliche Kostenfunktion. \"half-normal\" (halbnormal) "
+                          "oder \"exponential\" (exponentialverteilt): eine Kostengrenze, ln Kosten = Grenze + "
+                          "Störterm + Ineffizienz, deren Tabelle Standardabweichung von Störterm und Ineffizienz, "
+                          "lambda, den Ineffizienztest, die mittlere Effizienz und die Konvergenz ergänzt; "
+                          "PRODEFFICIENCY gibt dann die Kosteneffizienz jeder Zeile. Nicht mit Kostenanteilen oder "
+                          "Panel-Optionen; Kontrollvariablen sind erlaubt."},
+          {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Parameter anzufügen (der unter "
+                        "Standardfehler gewählten Art), eine Zeile je Parameter, damit die Statistik von PRODCOST "
+                        "Grenzen aus dieser Tabelle liefert; die Tabelle ist dann max(7, p + 1) Spalten breit und "
+                        "1 + p Zeilen länger, p Parameter. Nicht mit Ineffizienz. FALSCH oder leer: kein Block."}}},
     };
 }
 

@@ -87,8 +87,8 @@ public:
                                        const css::uno::Any& errors, const css::uno::Any& level,
                                        const css::uno::Any& controls, const css::uno::Any& groups,
                                        const css::uno::Any& effects, const css::uno::Any& trend,
-                                       const css::uno::Any& incompleteRows,
-                                       const css::uno::Any& inefficiency) override;
+                                       const css::uno::Any& incompleteRows, const css::uno::Any& inefficiency,
+                                       const css::uno::Any& covariance) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                     const css::uno::Any& what, const css::uno::Any& statistic) override;
     css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices) override;

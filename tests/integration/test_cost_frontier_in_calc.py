@@ -173,16 +173,16 @@ class CostFrontierBadInputTest(CalcTestCase):
 
 class FunctionWizardTest(unittest.TestCase):
 
-    def test_inefficiency_is_the_last_optional_argument(self):
+    def test_inefficiency_is_an_optional_argument_before_covariance(self):
         descriptions = CALC.office.service_manager.createInstanceWithContext(
             "com.sun.star.sheet.FunctionDescriptions", CALC.office.context)
         for i in range(descriptions.getCount()):
             properties = {p.Name: p.Value for p in descriptions.getByIndex(i)}
             if properties.get("Name") == "PRODCOSTFIT":
                 arguments = properties["Arguments"]
-                self.assertEqual(arguments[-1].Name, "inefficiency")
-                self.assertTrue(arguments[-1].IsOptional)
-                self.assertIn("cost frontier", arguments[-1].Description)
+                self.assertEqual([a.Name for a in arguments[-2:]], ["inefficiency", "covariance"])
+                self.assertTrue(arguments[-2].IsOptional)
+                self.assertIn("cost frontier", arguments[-2].Description)
                 return
         self.fail("PRODCOSTFIT is not listed")
 

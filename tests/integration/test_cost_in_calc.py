@@ -373,8 +373,8 @@ class FunctionWizardTest(unittest.TestCase):
         arguments = listed["PRODCOSTFIT"]["Arguments"]
         self.assertEqual([a.Name for a in arguments],
                          ["cost", "output", "input prices", "form", "shares", "errors", "level", "controls", "groups",
-                          "effects", "trend", "incomplete rows", "inefficiency"])
-        self.assertEqual([a.IsOptional for a in arguments], [i >= 3 for i in range(13)])
+                          "effects", "trend", "incomplete rows", "inefficiency", "covariance"])
+        self.assertEqual([a.IsOptional for a in arguments], [i >= 3 for i in range(14)])
         self.assertIn("cost elasticity", listed["PRODCOST"]["Description"])
 
 

@@ -81,7 +81,7 @@ GERMAN_ARGUMENTS = {
     "PRODCOST": ["Modell", "Zielausbringung", "Faktorpreise", "Kennzahl", "Statistik"],
     "PRODCOSTFIT": ["Kosten", "Ausbringung", "Faktorpreise", "Funktionsform", "Kostenanteile", "Standardfehler",
                     "Konfidenzniveau", "Kontrollvariablen", "Gruppen", "Effekte", "Trend",
-                    "unvollständige Zeilen", "Ineffizienz"],
+                    "unvollständige Zeilen", "Ineffizienz", "Kovarianz"],
     "PRODBUDGET": ["Modell", "Budget", "Faktorpreise", "Kennzahl"],
     "PRODPROFIT": ["Modell", "Produktpreis", "Faktorpreise"],
     "PRODISOQUANT": ["Modell", "Ausbringungsniveau", "Mengen von Faktor i", "Faktor i", "Faktor j"],

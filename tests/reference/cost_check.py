@@ -17,6 +17,14 @@ elasticity at the sample means of the logs (t_test), the F of elasticity = 1 (f_
 efficient scale of the translog (where the elasticity is 1 at the mean log prices) with its
 delta-method standard error, and the smearing factor mean(exp(residual)).
 
+Bounds from the table's covariance block (PRODCOST's statistic, PRODCOSTFIT's covariance TRUE): at
+the rows POINTS of the data (y and w of each), the standard errors of total, average and marginal
+cost (log scale: q·√(gᵀVg), g the gradient of ln q), of the cost elasticity and of returns to
+scale (√(gᵀVg), g the gradient of q), and the lower bound of total cost, q·exp(−t·s) with scipy's
+t quantile on the fit's degrees of freedom — V the statsmodels covariance of the full form's
+parameters (R V_b Rᵀ), g by central differences in numpy (step 1e-6·max(1, |θᵢ|): truncation and
+rounding both near 1e-10 relative, far inside the 1e-7 of the check).
+
 Writes one figure per line: dataset,form,quantity,index,value. Exits with 77 (the CTest skip code)
 when statsmodels cannot be imported, leaving no OUTPUT_CSV behind.
 """
@@ -91,6 +99,10 @@ def figures(np, sm, put, form, cov_type, cost, output, prices):
     response = np.log(cost) - log_prices[:, -1]
     design, theta = regression(np, form, log_output, relative)
     fit = sm.OLS(response, design).fit(cov_type=cov_type, use_t=True)  # t(n − p) for every kind, as the core
+    rows = np.array([row for row, _ in theta])
+    full = rows @ fit.params + np.array([constant for _, constant in theta])
+    bound_figures(np, lambda q, v, i: put(name, q, v, i), form, full, rows @ fit.cov_params() @ rows.T,
+                  fit.df_resid, output, prices)
     for index, (row, constant) in enumerate(theta):
         test = fit.t_test((row.reshape(1, -1), np.array([-constant])))
         put(name, "params", float(row @ fit.params) + constant, index)
@@ -126,6 +138,59 @@ def figures(np, sm, put, form, cov_type, cost, output, prices):
         delta[2 + (k - 1)] = -log_scale / curvature
         put(name, "efficient_scale", float(np.exp(log_scale)))
         put(name, "efficient_scale_se", float(np.exp(log_scale) * np.sqrt(delta @ fit.cov_params() @ delta)))
+
+
+POINTS = [0, 100, 500]
+
+
+def log_cost(np, theta, form, k, y, w):
+    """ln C of the full form at (y, w), θ in table order (constant, output, prices, then for the
+    translog output*output, the pairs i <= j, i*output), and the cost elasticity."""
+    ly, lw = np.log(y), np.log(w)
+    value = theta[0] + theta[1] * ly + theta[2:2 + k] @ lw
+    elasticity = theta[1]
+    if form == "translog":
+        value += 0.5 * theta[2 + k] * ly * ly
+        at = 3 + k
+        for i in range(k):
+            for j in range(i, k):
+                value += (0.5 if i == j else 1.0) * theta[at] * lw[i] * lw[j]
+                at += 1
+        value += ly * (theta[at:at + k] @ lw)
+        elasticity = theta[1] + theta[2 + k] * ly + theta[at:at + k] @ lw
+    return value, elasticity
+
+
+def bound_figures(np, put, form, theta, covariance, df, output, prices):
+    from scipy import stats
+    k = prices.shape[1]
+    critical = stats.t.ppf(0.975, df)
+    quantities = {  # name -> (q(θ), log scale)
+        "total": (lambda t, y, w: np.exp(log_cost(np, t, form, k, y, w)[0]), True),
+        "average": (lambda t, y, w: np.exp(log_cost(np, t, form, k, y, w)[0]) / y, True),
+        "marginal": (lambda t, y, w: log_cost(np, t, form, k, y, w)[1] * np.exp(log_cost(np, t, form, k, y, w)[0]) / y,
+                     True),
+        "cost elasticity": (lambda t, y, w: log_cost(np, t, form, k, y, w)[1], False),
+        "returns to scale": (lambda t, y, w: 1.0 / log_cost(np, t, form, k, y, w)[1], False),
+    }
+    for index, row in enumerate(POINTS):
+        y, w = output[row], prices[row]
+        for name, (quantity, log_scale) in quantities.items():
+            value = quantity(theta, y, w)
+            gradient = np.zeros(len(theta))
+            for i in range(len(theta)):
+                step = 1e-6 * max(1.0, abs(theta[i]))
+                up, down = theta.copy(), theta.copy()
+                up[i] += step
+                down[i] -= step
+                f_up, f_down = quantity(up, y, w), quantity(down, y, w)
+                if log_scale:
+                    f_up, f_down = np.log(f_up), np.log(f_down)
+                gradient[i] = (f_up - f_down) / (2 * step)
+            spread = float(np.sqrt(gradient @ covariance @ gradient))
+            put("bound_se_" + name, value * spread if log_scale else spread, index)
+            if name == "total":
+                put("bound_lower_total", value * np.exp(-critical * spread), index)
 
 
 def main():

@@ -287,8 +287,8 @@ BOOST_AUTO_TEST_CASE(cost_statistic_messages_name_statistic)
     BOOST_TEST(messageOf([&] {
                    isoquant::costColumnWithBounds(costModel, isoquant::testing::typedRange({{100.0}}), prices,
                                                   total, std::string("std. error"));
-               }) == "statistic: \"std. error\" needs a production model's covariance block; a cost model (a "
-                     "PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with covariance TRUE");
+               }) == "statistic: \"std. error\" needs the model's covariance block; this cost model has none (typed "
+                     "rows, or a PRODCOSTFIT table made without covariance TRUE)");
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -59,17 +59,23 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
 
 double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance)
 {
+    return answer(quantity, *read.block, read.critical, statistic, residualVariance);
+}
+
+double answer(const Linearised& quantity, const CovarianceBlock& block, double critical, Statistic statistic,
+              double residualVariance)
+{
     // gᵀVg over the parameters the quantity depends on: a parameter without a variance ("n/a", ln A
     // under effects) may stand in V where g is 0.
     double variance = 0;
     const Eigen::VectorXd& g = quantity.gradient;
     for (Eigen::Index i = 0; i < g.size(); ++i)
         for (Eigen::Index j = 0; j < g.size(); ++j)
-            if (g(i) != 0 && g(j) != 0) variance += g(i) * read.block->matrix(i, j) * g(j);
+            if (g(i) != 0 && g(j) != 0) variance += g(i) * block.matrix(i, j) * g(j);
     if (!std::isfinite(variance))
         throw argumentError(argument::what, "the covariance block has no variance for a parameter this quantity uses");
     const double spread = std::sqrt(variance);
-    const double t = read.critical;
+    const double t = critical;
     if (!quantity.logScale) {
         switch (statistic) {
         case Statistic::standardError: return spread;

@@ -47,6 +47,9 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
 // se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
 // `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).
 double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance);
+// The same from a block and the t quantile `critical` (a cost model's, say).
+double answer(const Linearised& quantity, const CovarianceBlock& block, double critical, Statistic statistic,
+              double residualVariance);
 
 // A zero gradient of the size of the block.
 Eigen::VectorXd zeroGradient(const BoundsModel& read);

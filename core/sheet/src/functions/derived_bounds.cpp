@@ -6,6 +6,7 @@
 #include "isoquant/sheet/functions/bound_functions.hpp"
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
+#include "functions/cost_model_bounds.hpp"
 #include "functions/delta_method.hpp"
 
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
@@ -167,12 +168,7 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     const CellTable values = costColumn(model, target, prices, what);
     if (asked == Statistic::value) return values;
     if (isCostModel(model.cells()))
-        throw argumentError(
-            argument::statistic,
-            "\"" + word(asked) +
-                "\" needs a production model's covariance block; a "
-                "cost model (a PRODCOSTFIT table or typed rows) has none: give a PRODFIT table made with "
-                "covariance TRUE");
+        return costModelColumnWithBounds(model.cells(), target, prices, what, asked, values);
     const CostMeasure measure = readCostMeasure(what);
     const bool needsLogScale = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
     const BoundsModel read = readBoundsModel(model, asked, needsLogScale, argument::statistic);

@@ -140,8 +140,9 @@ CostModel readCostModel(const CellTable& model)
     // The parameter rows: from the top (after a table's title) to the first row without a label.
     for (std::size_t row = isCostTitle(labelAt(model, 0)) ? 1 : 0; row < model.rows(); ++row) {
         const std::string label = labelAt(model, row);
-        if (label.empty()) break;
+        if (label.empty() || equalsIgnoringCase(label, covarianceBlockLabel)) break;
         if (equalsIgnoringCase(label, formLabel)) continue;
+        cost.parameterLabels.push_back(label);
         const double value = numberAt(model, row, label);
         if (equalsIgnoringCase(label, costConstantLabel)) constant = value;
         else if (endsWithIgnoringCase(label, controlSuffix)) {
@@ -172,6 +173,9 @@ CostModel readCostModel(const CellTable& model)
     cost.controls = Eigen::Map<const Eigen::VectorXd>(controls.data(), static_cast<Eigen::Index>(controls.size()));
     cost.prices = Eigen::Map<const Eigen::VectorXd>(prices.data(), static_cast<Eigen::Index>(prices.size()));
     applySecondOrder(cost, secondOrder);
+    for (std::size_t row = 0; row < model.rows(); ++row)
+        if (equalsIgnoringCase(labelAt(model, row), covarianceBlockLabel))
+            cost.covariance = readCovarianceBlock(model, row, cost.parameterLabels);
     return cost;
 }
 

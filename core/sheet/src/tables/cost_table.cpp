@@ -1,6 +1,10 @@
 #include "isoquant/sheet/tables/cost_table.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/frontier_table.hpp"
+#include "isoquant/math/messages/input_error.hpp"
 #include "tables/frontier_rows.hpp"
 #include "tables/panel_rows.hpp"
 #include "tables/table_writer.hpp"
@@ -116,6 +120,34 @@ CellTable costFitTable(const CostFit& fit)
     writer.valueRow(smearingLabel, summary.smearingFactor);
     writePanelRows(writer, summary.panel, costPanelLabels);
     return writer.finish();
+}
+
+std::vector<std::string> costParameterLabels(const CostFit& fit)
+{
+    std::vector<std::string> labels{costConstantLabel, costOutputLabel};
+    labels.insert(labels.end(), fit.priceLabels.begin(), fit.priceLabels.end());
+    if (fit.form == CostForm::translog)
+        for (const auto& label : costSecondOrderLabels(fit.priceLabels)) labels.push_back(label);
+    for (const auto& label : fit.summary.controlLabels) labels.push_back(label + controlSuffix);
+    return labels;
+}
+
+CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance)
+{
+    if (!readSwitchArgument(covariance, argument::covariance)) return costFitTable(fit);
+    if (fit.frontier)
+        throw argumentError(argument::covariance,
+                            "not available with inefficiency: a cost frontier's inference is the normal's, which the "
+                            "block's degrees of freedom cannot state; leave covariance empty");
+    CovarianceBlock block;
+    block.labels = costParameterLabels(fit);
+    block.matrix = fit.summary.inference.covariance;
+    // As the table's standard errors: an exact fit has none, only the rounding left in V.
+    if (fit.summary.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(notANumber);
+    block.kind = fit.summary.summary.covarianceKind;
+    block.degreesOfFreedom = fit.summary.inference.degreesOfFreedom;
+    block.level = fit.summary.inference.confidenceLevel;
+    return withCovarianceBlock(costFitTable(fit), block);
 }
 
 } // namespace isoquant

@@ -10,12 +10,16 @@
 // Rows labelled "<name> (control)" are controls' coefficients cⱼ (ln C + Σⱼ cⱼ zⱼ). β₀ in ln C
 // above is then the constant the evaluators use: the table's "constant for predictions" row when
 // there is one (effects or a trend), else its "constant at control means" row, else `constant`.
+// A "covariance" row starts the block of covariance_block.hpp, one row per parameter row above,
+// in their order; a typed model may carry one too.
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 
 #include <Eigen/Dense>
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -33,6 +37,10 @@ struct CostModel {
     std::vector<std::string> controlLabels; // without " (control)"
     Eigen::VectorXd controls;               // cⱼ
     double constantAtZeroControls = 0;      // the `constant` row itself
+    // The parameter rows' labels in the model's order, and the covariance block below them
+    // (PRODCOSTFIT's `covariance` TRUE), whose rows follow that order.
+    std::vector<std::string> parameterLabels;
+    std::optional<CovarianceBlock> covariance;
 
     double logCost(double output, const Eigen::VectorXd& prices) const;
     // ln C at these controls' values: the `constant` row plus Σⱼ cⱼ zⱼ in place of β₀.

@@ -6,6 +6,8 @@
 #include "isoquant/sheet/arguments/cells.hpp"
 
 #include <cstddef>
+#include <string>
+#include <vector>
 
 namespace isoquant {
 
@@ -50,5 +52,15 @@ std::size_t costFitTableRows(CostForm form, std::size_t prices, bool dropsIncomp
                              bool frontier = false);
 std::size_t costFitTableRows(const CostFit& fit);
 CellTable costFitTable(const CostFit& fit);
+
+// The parameters' row labels in table order: constant, output, the prices, the translog's
+// second-order terms, the controls with " (control)".
+std::vector<std::string> costParameterLabels(const CostFit& fit);
+
+// PRODCOSTFIT's table, with the covariance block of its parameters (covariance_block.hpp) when
+// `covariance` is TRUE (a switch naming "covariance"): the kind of errors, the degrees of freedom
+// of the table's t (n − p; G − 1 under cluster errors; m·n − p with shares) and its level. Not for
+// a cost frontier (a message: its inference is the normal's, on no degrees of freedom).
+CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance);
 
 } // namespace isoquant

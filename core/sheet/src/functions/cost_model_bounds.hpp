@@ -1,0 +1,20 @@
+// PRODCOST's `statistic` over a cost model that carries a covariance block (PRODCOSTFIT's
+// `covariance` TRUE), internal to the sheet library: the delta method of delta_method.hpp with the
+// gradient of the figure in the cost model's parameters (cost_model_bounds.cpp gives them).
+#pragma once
+
+#include "functions/delta_method.hpp"
+#include "isoquant/sheet/arguments/cells.hpp"
+#include "isoquant/sheet/models/cost_model.hpp"
+
+namespace isoquant {
+
+// `values` is the plain PRODCOST column of the same arguments (one number per output). Total,
+// marginal and average cost get their bounds on the log scale (a marginal cost ≤ 0: value ± t·se),
+// the cost elasticity and returns to scale value ± t·se, at the block's level on t(block's degrees
+// of freedom). Throws InputError naming `statistic` for a model without a block, and, for the
+// figures that use the constant, a model whose evaluators use a shifted constant.
+CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
+                                    const Cell& what, delta_method::Statistic statistic, const CellTable& values);
+
+} // namespace isoquant
