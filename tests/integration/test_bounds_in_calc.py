@@ -76,14 +76,10 @@ class CovarianceBlockTest(CalcTestCase):
         set_values(self.sheet, "P101", [list(row) for row in get_range(self.sheet, "F1:L21")])
         set_formula(self.sheet, "R119", "=Q120+0.01")
         set_formula(self.sheet, "N6", "=PRODMARGINAL(P101:V121;$P$90:$Q$90;1)")
-        set_formula(self.sheet, "N7", "=PRODFIT(B1:B25;C1:D25;\"translog\";;;;;;;;;TRUE())")
         recalc(CALC.doc)
         self.assert_message(get_cell(self.sheet, "N6"),
                             "Error: model: row 20: the covariance block is not symmetric (column 2 differs from row 19, "
                             "column 3)", "asymmetric block")
-        self.assert_message(get_cell(self.sheet, "N7"),
-                            "Error: covariance: the block is written for the cobb-douglas form only so far; leave "
-                            "covariance empty or FALSE for the translog form", "translog with covariance")
 
 
 class BoundsTest(CalcTestCase):

@@ -178,14 +178,9 @@ BOOST_AUTO_TEST_CASE(singular_and_partly_missing_blocks_are_read_back)
     BOOST_TEST(withEffects.text(blockRow(withEffects) + 1, 1) == "n/a"); // ln A's variance under effects
 }
 
-BOOST_AUTO_TEST_CASE(other_forms_answer_a_message)
+BOOST_AUTO_TEST_CASE(a_switch_that_is_no_switch_gets_a_message)
 {
-    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
-    arguments.form = std::string("translog");
-    const auto fit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST(messageOf([&] { isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0); }) ==
-               "covariance: the block is written for the cobb-douglas form only so far; leave covariance empty or "
-               "FALSE for the translog form");
+    const auto fit = fit1928();
     BOOST_TEST(messageOf([&] { isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, std::string("yes")); })
                    .rfind("covariance: ", 0) == 0u);
 }
