@@ -17,7 +17,7 @@
 // Central differences were tried first and are not good enough here: on Cobb & Douglas (1928)
 // the ces's gᵀVg cancels about four digits (Σ|gᵢVᵢⱼgⱼ| is up to 7e3 times gᵀVg), so the rounding
 // error of a central difference at step h = 1e-6, ε·|ln Y|/h ≈ 1e-9 (ε = 2.2e-16), would show as
-// about 1e-5 in a standard error.
+// a few parts in a million in a standard error.
 // An interior fit only: at δ = 0 or 1 the derivative in δ is 0/0, and the message says so.
 #pragma once
 
