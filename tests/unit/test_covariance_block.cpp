@@ -7,6 +7,7 @@
 #include "isoquant/sheet/models/production_model.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
+#include "covariance_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
@@ -14,7 +15,9 @@
 
 #include <cmath>
 
+using isoquant::testing::blockRow;
 using isoquant::testing::messageOf;
+using isoquant::testing::tableWithBlock;
 
 namespace {
 
@@ -23,19 +26,6 @@ isoquant::ProductionFit fit1928(isoquant::Cell errors = {})
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
     arguments.errors = std::move(errors);
     return isoquant::fitFromArguments(arguments);
-}
-
-isoquant::CellTable tableWithBlock(const isoquant::ProductionFit& fit)
-{
-    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
-}
-
-// The first row labelled "covariance".
-std::size_t blockRow(const isoquant::CellTable& table)
-{
-    for (std::size_t row = 0; row < table.rows(); ++row)
-        if (table.isText(row, 0) && table.text(row, 0) == "covariance") return row;
-    return table.rows();
 }
 
 } // namespace

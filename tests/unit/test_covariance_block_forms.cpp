@@ -8,6 +8,7 @@
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
 #include "isoquant/sheet/tables/form_tables.hpp"
+#include "covariance_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
@@ -15,7 +16,9 @@
 
 #include <cmath>
 
+using isoquant::testing::blockRow;
 using isoquant::testing::messageOf;
+using isoquant::testing::tableWithBlock;
 
 namespace {
 
@@ -24,18 +27,6 @@ isoquant::ProductionFit fitOf(isoquant::FitArguments arguments, const std::strin
     arguments.form = form;
     arguments.errors = std::move(errors);
     return isoquant::fitFromArguments(arguments);
-}
-
-isoquant::CellTable tableWithBlock(const isoquant::ProductionFit& fit)
-{
-    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
-}
-
-std::size_t blockRow(const isoquant::CellTable& table)
-{
-    for (std::size_t row = 0; row < table.rows(); ++row)
-        if (table.isText(row, 0) && table.text(row, 0) == "covariance") return row;
-    return table.rows();
 }
 
 // The block below `row` holds `labels` and the fit's covariance exactly; the model reader returns it.

@@ -11,6 +11,7 @@
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
 #include "cell_tables.hpp"
+#include "covariance_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 #include "relative_error.hpp"
@@ -30,11 +31,6 @@ isoquant::ProductionFit fitOf(isoquant::FitArguments arguments, const std::strin
     return isoquant::fitFromArguments(arguments);
 }
 
-isoquant::CellTable withBlock(const isoquant::ProductionFit& fit)
-{
-    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
-}
-
 double first(const isoquant::CellTable& column) { return column.number(0, 0); }
 
 const std::array<const char*, 3> words{"std. error", "lower bound", "upper bound"};
@@ -49,7 +45,7 @@ BOOST_AUTO_TEST_SUITE(form_bounds)
 BOOST_AUTO_TEST_CASE(translog_elasticities_at_the_mean_are_the_tables)
 {
     const auto fit = fitOf(isoquant::testing::cobbDouglas1928Arguments(), "translog");
-    const auto table = withBlock(fit);
+    const auto table = isoquant::testing::tableWithBlock(fit);
     const Eigen::VectorXd mean = fit.translog->meanLogInputs;
     isoquant::CellTable bundle(1, 2);
     for (std::size_t i = 0; i < 2; ++i) bundle.set(0, i, std::exp(mean(static_cast<Eigen::Index>(i))));
@@ -72,7 +68,7 @@ BOOST_AUTO_TEST_CASE(translog_elasticities_at_the_mean_are_the_tables)
 BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log_scale)
 {
     const auto fit = fitOf(isoquant::testing::cobbDouglas1928Arguments(), "ces");
-    const auto table = withBlock(fit);
+    const auto table = isoquant::testing::tableWithBlock(fit);
     BOOST_TEST(closeTo(first(isoquant::scaleColumnWithBounds(table, {}, std::string("lower bound"))),
                        fit.inference.lowerBounds(3), 1e-12));
     BOOST_TEST(closeTo(first(isoquant::scaleColumnWithBounds(table, {}, std::string("upper bound"))),
@@ -93,7 +89,7 @@ BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log
 
 BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
 {
-    const auto translog = withBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), "translog"));
+    const auto translog = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), "translog"));
     const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
     BOOST_TEST(messageOf([&] { isoquant::scaleColumnWithBounds(translog, {}, std::string("std. error")); }) ==
                "inputs: the translog's returns to scale and their bounds vary with the inputs; give a row of inputs");
@@ -103,7 +99,7 @@ BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
                      "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
     // With a control the evaluators' ln A is at the control's mean, which the block does not cover;
     // the elasticities do not involve ln A.
-    const auto controlled = withBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));
+    const auto controlled = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));
     const auto three = isoquant::testing::typedRange({{20000.0, 30000.0, 1000.0}});
     BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(controlled, three, {}, std::string("std. error")); })
                    .rfind("what: \"std. error\" is not available when the model's ln A is shifted", 0) == 0u);
