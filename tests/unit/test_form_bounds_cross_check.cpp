@@ -3,7 +3,8 @@
 // block, against python3-statsmodels 0.13.5 (the covariance of the same OLS regression, classical
 // and HC1) and a numerical gradient of the same quantity in numpy, recomputed at test time by
 // tests/reference/form_bounds_check.py on the Cobb & Douglas (1928) data (tests/data/README.md) at
-// three invented bundles.
+// three invented bundles. At (100, 100) the fitted εC is negative, so the marginal product of C there
+// takes the path for a quantity that is not positive (value ∓ t·se), checked as well.
 //
 // Tolerance: 1e-7 relative on every figure (the issue's). The core's gradients are analytic (ln Y
 // and the elasticities are linear in θ); the script's central differences carry about 1e-10
