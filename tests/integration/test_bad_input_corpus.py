@@ -88,6 +88,11 @@ def build_fixture(sheet):
              ["C", 0.3, None, None], ["covariance", "classical", 21.0, 0.95]]
     set_values(sheet, "DA1", typed + [["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.5], ["C", 0.0, 0.2, 0.01]])
     set_values(sheet, "DA12", typed + [["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.5], ["C", 0.0, 0.5, 0.01]])
+    # A typed translog model (6 parameters) under which a cobb-douglas-sized block (3 rows) was typed.
+    set_values(sheet, "DA24", [["form", "translog", None, None], ["ln A", 0.1, None, None], ["L", 0.6, None, None],
+                               ["C", 0.3, None, None], ["L*L", 0.01, None, None], ["L*C", 0.0, None, None],
+                               ["C*C", -0.01, None, None], ["covariance", "classical", 18.0, 0.95],
+                               ["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.0], ["C", 0.0, 0.0, 0.01]])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

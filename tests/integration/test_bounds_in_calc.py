@@ -76,14 +76,10 @@ class CovarianceBlockTest(CalcTestCase):
         set_values(self.sheet, "P101", [list(row) for row in get_range(self.sheet, "F1:L21")])
         set_formula(self.sheet, "R119", "=Q120+0.01")
         set_formula(self.sheet, "N6", "=PRODMARGINAL(P101:V121;$P$90:$Q$90;1)")
-        set_formula(self.sheet, "N7", "=PRODFIT(B1:B25;C1:D25;\"translog\";;;;;;;;;TRUE())")
         recalc(CALC.doc)
         self.assert_message(get_cell(self.sheet, "N6"),
                             "Error: model: row 20: the covariance block is not symmetric (column 2 differs from row 19, "
                             "column 3)", "asymmetric block")
-        self.assert_message(get_cell(self.sheet, "N7"),
-                            "Error: covariance: the block is written for the cobb-douglas form only so far; leave "
-                            "covariance empty or FALSE for the translog form", "translog with covariance")
 
 
 class BoundsTest(CalcTestCase):
@@ -253,6 +249,122 @@ class DerivedBoundsTest(CalcTestCase):
         plain = get_cell(self.sheet, "Q%d" % row)
         self.assert_relative(plain, 1.0, 1e-12, "PRODSUBSTITUTION of cobb-douglas")
         self.assertEqual([get_cell(self.sheet, "%s%d" % (c, row)) for c in "OP"], [plain, plain])
+
+
+def complex_step_gradient(function, theta):
+    """d function / d theta by the complex step, Im f(theta + i h e_j) / h with h = 1e-20 (Squire and
+    Trapp 1998, SIAM Review 40(1)): exact to rounding, no difference taken. Central differences lose
+    too much here: g'Vg of the translog and ces fits cancels four to five digits
+    (tests/reference/form_bounds_check.py)."""
+    gradient = np.zeros(len(theta))
+    for j in range(len(theta)):
+        shifted = np.asarray(theta, dtype=complex)
+        shifted[j] += 1e-20j
+        gradient[j] = function(shifted).imag / 1e-20
+    return gradient
+
+
+class OtherFormsTest(CalcTestCase):
+    """The block and `what` for the translog and ces forms (Cobb & Douglas 1928 data, bundle (150,
+    200) invented). Translog: the block is statsmodels' cov_params of the same regression (1e-8), the
+    marginal product's std. error and bounds that covariance with a numpy complex-step gradient of
+    e_L Y / L written out here (1e-7). Ces: the covariance is the table's own (its diagonal the
+    table's squared standard errors, 1e-12; symmetric; positive semidefinite), and the std. errors
+    sqrt(g'Vg) with V and theta read from the table and g a numpy complex-step gradient of the textbook
+    formula ln Y = ln A - (nu/rho) ln(delta L^-rho + (1 - delta) C^-rho), to 1e-6 relative."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet, cls.data = cobb_douglas_sheet(CALC, "Bounds of other forms")
+        set_values(cls.sheet, "P90", [[150.0, 200.0]])
+        set_array_formula(cls.sheet, "F1:L30", '=PRODFIT(B1:B25;C1:D25;"translog";;;;;;;;;TRUE())')
+        set_array_formula(cls.sheet, "F40:L62", '=PRODFIT(B1:B25;C1:D25;"translog")')
+        set_array_formula(cls.sheet, "F70:L94", '=PRODFIT(B1:B25;C1:D25;"ces";;;;;;;;;TRUE())')
+        for row, (model, what) in enumerate([("F1:L30", "std. error"), ("F1:L30", "lower bound"),
+                                             ("F1:L30", "upper bound"), ("F70:L94", "std. error"),
+                                             ("F70:L94", "lower bound"), ("F70:L94", "upper bound")]):
+            set_formula(cls.sheet, "N%d" % (row + 1), '=PRODMARGINAL(%s;$P$90:$Q$90;"L";"%s")' % (model, what))
+        set_formula(cls.sheet, "N7", '=PRODOUTPUT(F70:L94;$P$90:$Q$90;;"std. error")')
+        set_formula(cls.sheet, "N8", '=PRODELASTICITY(F70:L94;$P$90:$Q$90;"C";"std. error")')
+        set_formula(cls.sheet, "N9", '=PRODSCALE(F1:L30;;"std. error")')
+        set_formula(cls.sheet, "N10", '=PRODSECOND(F1:L30;$P$90:$Q$90;"L";"C";"std. error")')
+        set_values(cls.sheet, "F101", [list(row) for row in get_range(cls.sheet, "F1:L29")])  # one row short
+        set_formula(cls.sheet, "N11", '=PRODMARGINAL(F101:L130;$P$90:$Q$90;"L";"std. error")')
+        recalc(CALC.doc)
+        cls.translog, cls.plain = get_range(cls.sheet, "F1:L30"), get_range(cls.sheet, "F40:L62")
+        cls.ces = get_range(cls.sheet, "F70:L94")
+
+    def test_translog_block(self):
+        self.assertEqual(self.translog[:23], self.plain)
+        self.assertEqual(list(self.translog[23][:4]), ["covariance", "classical", 18.0, 0.95])
+        self.assertEqual([row[0] for row in self.translog[24:]], ["ln A", "L", "C", "L*L", "L*C", "C*C"])
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        l1, l2 = np.array(logs(self.data["L"])), np.array(logs(self.data["C"]))
+        result = statsmodels_fit(logs(self.data["P"]), [l1, l2, l1 * l1 / 2, l1 * l2, l2 * l2 / 2])
+        cov = np.asarray(result.cov_params())
+        for i in range(6):
+            for j in range(6):
+                self.assert_relative(self.translog[24 + i][1 + j], cov[i][j], STATSMODELS_RELATIVE,
+                                     "translog covariance %d, %d" % (i, j))
+        import scipy.stats
+        t = scipy.stats.t.ppf(0.975, result.df_resid)
+        a, b = np.log(150.0), np.log(200.0)
+
+        def log_marginal(p):
+            log_output = p[0] + p[1] * a + p[2] * b + (p[3] * a * a + 2 * p[4] * a * b + p[5] * b * b) / 2
+            return np.log(p[1] + p[3] * a + p[4] * b) + log_output - a
+        theta = np.asarray(result.params)
+        marginal = float(np.exp(log_marginal(theta)))
+        gradient = complex_step_gradient(log_marginal, theta)
+        spread = float(np.sqrt(gradient @ cov @ gradient))
+        for row, expected in enumerate([marginal * spread, marginal * np.exp(-t * spread),
+                                        marginal * np.exp(t * spread)]):
+            self.assert_relative(get_cell(self.sheet, "N%d" % (row + 1)), expected, 1e-7, "translog row %d" % row)
+
+    def test_ces_block_and_bounds(self):
+        block = np.array([row[1:5] for row in self.ces[21:25]]) if np is not None else None
+        self.assertEqual(list(self.ces[20][:4]), ["covariance", "classical", 20.0, 0.95])
+        self.assertEqual([row[0] for row in self.ces[21:25]], ["ln A", "delta", "rho", "nu"])
+        if np is None:
+            self.skipTest("numpy not importable")
+        for i in range(4):
+            self.assert_relative(np.sqrt(block[i][i]), self.ces[1 + i][2], 1e-12, "ces variance %d" % i)
+        self.assertTrue((block == block.T).all(), "ces block symmetric")
+        self.assertGreaterEqual(np.linalg.eigvalsh(block).min(), -1e-10 * np.linalg.eigvalsh(block).max())
+        theta = [row[1] for row in self.ces[1:5]]
+        a, b = np.log(150.0), np.log(200.0)
+
+        def log_output(p):
+            return p[0] - p[3] / p[2] * np.log(p[1] * np.exp(-p[2] * a) + (1 - p[1]) * np.exp(-p[2] * b))
+
+        def elasticity_c(p):  # nu (1 - delta) C^-rho / (delta L^-rho + (1 - delta) C^-rho)
+            second = (1 - p[1]) * np.exp(-p[2] * b)
+            return p[3] * second / (p[1] * np.exp(-p[2] * a) + second)
+
+        def log_marginal_l(p):
+            return np.log(p[3] - elasticity_c(p)) + log_output(p) - a
+
+        def spread(function):
+            gradient = complex_step_gradient(function, theta)
+            return float(np.sqrt(gradient @ block @ gradient))
+        output = float(np.exp(log_output(np.asarray(theta))))
+        marginal = float(np.exp(log_marginal_l(np.asarray(theta))))
+        self.assert_relative(get_cell(self.sheet, "N4"), marginal * spread(log_marginal_l), 1e-6, "ces MP se")
+        self.assert_relative(get_cell(self.sheet, "N7"), output * spread(log_output), 1e-6, "ces output se")
+        self.assert_relative(get_cell(self.sheet, "N8"), spread(elasticity_c), 1e-6, "ces elasticity se")
+        lower, upper = get_cell(self.sheet, "N5"), get_cell(self.sheet, "N6")
+        self.assert_relative(lower * upper, marginal * marginal, 1e-9, "ces MP bounds on the log scale")
+
+    def test_messages_name_the_argument(self):
+        self.assert_message(get_cell(self.sheet, "N9"), "Error: inputs: the translog's returns to scale and their "
+                            "bounds vary with the inputs; give a row of inputs", "translog scale without inputs")
+        self.assert_message(get_cell(self.sheet, "N10"),
+                            "Error: what: \"std. error\" is available for the cobb-douglas form only in this function "
+                            "(for the translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)",
+                            "translog second partial")
+        self.assert_message(get_cell(self.sheet, "N11"), "Error: model: row 24: the covariance block has 5 rows; it "
+                            "needs one row per parameter (6) and 6 numbers in each", "translog block one row short")
 
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P, Q).

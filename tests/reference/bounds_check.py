@@ -31,7 +31,6 @@ Writes one figure per line: errors,quantity,bundle,value. Exits with 77 (the CTe
 the libraries cannot be imported, leaving no OUTPUT_CSV behind.
 """
 
-import csv
 import math
 import os
 import sys
@@ -55,19 +54,11 @@ def main():
     except ImportError as error:
         return reference_script.skipped("numpy, scipy or statsmodels", error)
 
-    with open(os.path.join(data_dir, "cobb_douglas_1928.csv"), newline="") as handle:
-        rows = list(csv.DictReader(handle))
-    y = np.log([float(r["P"]) for r in rows])
-    design = sm.add_constant(np.column_stack([np.log([float(r["L"]) for r in rows]),
-                                              np.log([float(r["C"]) for r in rows])]))
+    y, log_labour, log_capital = reference_script.cobb_douglas_1928_logs(data_dir, np)
+    design = sm.add_constant(np.column_stack([log_labour, log_capital]))
     figures = []
-    for errors, cov_type in (("classical", "nonrobust"), ("hc1", "HC1")):
-        model = sm.OLS(y, design)
-        result = model.fit() if cov_type == "nonrobust" else model.fit(cov_type=cov_type, use_t=True)
-        theta = np.asarray(result.params)
-        cov = np.asarray(result.cov_params())
-        t = stats.t.ppf(0.5 + LEVEL / 2, result.df_resid)
-        smearing = float(np.mean(np.exp(result.resid)))
+    for errors, result in reference_script.classical_and_hc1_fits(sm, y, design):
+        theta, cov, t, smearing = reference_script.fit_inference(np, stats, result, LEVEL)
 
         def se(function):
             gradient = np.zeros(3)

@@ -55,3 +55,24 @@ def figure_putter(rows, np):
                 rows.append((dataset, form, quantity, index, repr(float(value))))
         return put
     return putter
+
+
+def cobb_douglas_1928_logs(data_dir, np):
+    """ln P, ln L and ln C of Cobb & Douglas (1928), tests/data/cobb_douglas_1928.csv, as arrays."""
+    with open(os.path.join(data_dir, "cobb_douglas_1928.csv"), newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    return tuple(np.log([float(row[name]) for row in rows]) for name in ("P", "L", "C"))
+
+
+def classical_and_hc1_fits(sm, y, design):
+    """(errors word, statsmodels OLS result) for classical ("nonrobust") and HC1 errors, the latter
+    with use_t: t(n - p) for every kind, as the core."""
+    model = sm.OLS(y, design)
+    return [("classical", model.fit()), ("hc1", model.fit(cov_type="HC1", use_t=True))]
+
+
+def fit_inference(np, stats, result, level):
+    """(parameters, covariance, t quantile at `level` on the residual degrees of freedom, Duan's
+    smearing factor mean(exp(residual))) of a statsmodels OLS result."""
+    return (np.asarray(result.params), np.asarray(result.cov_params()),
+            stats.t.ppf(0.5 + level / 2, result.df_resid), float(np.mean(np.exp(result.resid))))

@@ -7,6 +7,7 @@
 #include "isoquant/sheet/models/production_model.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
+#include "covariance_tables.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
@@ -14,7 +15,9 @@
 
 #include <cmath>
 
+using isoquant::testing::blockRow;
 using isoquant::testing::messageOf;
+using isoquant::testing::tableWithBlock;
 
 namespace {
 
@@ -23,19 +26,6 @@ isoquant::ProductionFit fit1928(isoquant::Cell errors = {})
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
     arguments.errors = std::move(errors);
     return isoquant::fitFromArguments(arguments);
-}
-
-isoquant::CellTable tableWithBlock(const isoquant::ProductionFit& fit)
-{
-    return isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
-}
-
-// The first row labelled "covariance".
-std::size_t blockRow(const isoquant::CellTable& table)
-{
-    for (std::size_t row = 0; row < table.rows(); ++row)
-        if (table.isText(row, 0) && table.text(row, 0) == "covariance") return row;
-    return table.rows();
 }
 
 } // namespace
@@ -178,14 +168,9 @@ BOOST_AUTO_TEST_CASE(singular_and_partly_missing_blocks_are_read_back)
     BOOST_TEST(withEffects.text(blockRow(withEffects) + 1, 1) == "n/a"); // ln A's variance under effects
 }
 
-BOOST_AUTO_TEST_CASE(other_forms_answer_a_message)
+BOOST_AUTO_TEST_CASE(a_switch_that_is_no_switch_gets_a_message)
 {
-    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
-    arguments.form = std::string("translog");
-    const auto fit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST(messageOf([&] { isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0); }) ==
-               "covariance: the block is written for the cobb-douglas form only so far; leave covariance empty or "
-               "FALSE for the translog form");
+    const auto fit = fit1928();
     BOOST_TEST(messageOf([&] { isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, std::string("yes")); })
                    .rfind("covariance: ", 0) == 0u);
 }

@@ -77,22 +77,21 @@ void requireTranslogData(const ProductionData& data, const ProductionFitOptions&
         throw InputError({DataPart::output}, "every row holds the same value; there is no variation to explain");
 }
 
-// εᵢ at l̄ and ν = Σ εᵢ as linear functions gᵀθ of the parameters.
-Eigen::MatrixXd elasticityGradients(Eigen::Index k, Eigen::Index parameters, const Eigen::VectorXd& meanLogs)
+} // namespace
+
+Eigen::MatrixXd translogElasticityGradients(Eigen::Index k, Eigen::Index parameters, const Eigen::VectorXd& logs)
 {
     Eigen::MatrixXd gradients = Eigen::MatrixXd::Zero(k + 1, parameters);
     for (Eigen::Index i = 0; i < k; ++i) gradients(i, 1 + i) = 1.0;
     Eigen::Index column = 1 + k;
     for (const auto& [i, j] : translogPairs(k)) {
-        gradients(i, column) += meanLogs(j);
-        if (i != j) gradients(j, column) += meanLogs(i);
+        gradients(i, column) += logs(j);
+        if (i != j) gradients(j, column) += logs(i);
         ++column;
     }
     gradients.row(k) = gradients.topRows(k).colwise().sum();
     return gradients;
 }
-
-} // namespace
 
 ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions& options)
 {
@@ -137,7 +136,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
 
     auto details = std::make_shared<TranslogDetails>();
     details->meanLogInputs = logs.colwise().mean().transpose();
-    const Eigen::MatrixXd gradients = elasticityGradients(k, p, details->meanLogInputs);
+    const Eigen::MatrixXd gradients = translogElasticityGradients(k, p, details->meanLogInputs);
     const Eigen::VectorXd values = gradients * fit.inference.estimates;
     const Eigen::MatrixXd covariance = gradients * fit.inference.covariance * gradients.transpose();
     const Eigen::VectorXd errors = covariance.diagonal().cwiseSqrt();

@@ -2,6 +2,7 @@
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/delta_method.hpp"
+#include "functions/form_gradients.hpp"
 
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
@@ -75,7 +76,7 @@ CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& input
 {
     const Statistic statistic = readWhat(what, true);
     if (statistic == Statistic::value) return outputColumn(model, inputs, mean);
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
     const bool prediction = statistic == Statistic::predictionLower || statistic == Statistic::predictionUpper;
     double factor = 1;
     if (readSwitchArgument(mean, argument::mean) && !prediction) {
@@ -84,10 +85,7 @@ CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& input
     }
     const double sigma = prediction ? residualSd(model.cells()) : 0;
     return columnOfBounds(inputs, read, statistic, sigma * sigma, factor == 1 ? "output" : "mean output",
-                          [&](const Eigen::VectorXd& bundle) {
-                              return Linearised{factor * read.form->output(bundle), logOutputGradient(read, bundle),
-                                                true};
-                          });
+                          [&](const Eigen::VectorXd& bundle) { return outputLinearised(read, bundle, factor); });
 }
 
 CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
@@ -95,24 +93,11 @@ CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTab
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return marginalProductColumn(model, inputs, input);
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
     const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
-    const double exponent = read.form->exponents(chosen);
-    return columnOfBounds(
-        inputs, read, statistic, 0, "marginal product of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
-        [&](const Eigen::VectorXd& bundle) {
-            // ln MPᵢ = ln bᵢ + ln Y − ln xᵢ: ∂/∂bᵢ adds 1/bᵢ. Not positive by nature when bᵢ ≤ 0: then
-            // the gradient of MPᵢ itself, MPᵢ·(g of ln Y) + Y/xᵢ at bᵢ.
-            const double marginal = read.form->marginalProduct(bundle, chosen);
-            Eigen::VectorXd gradient = logOutputGradient(read, bundle);
-            if (exponent > 0) {
-                gradient(1 + chosen) += 1 / exponent;
-                return Linearised{marginal, gradient, true};
-            }
-            gradient *= marginal;
-            gradient(1 + chosen) += read.form->output(bundle) / bundle(chosen);
-            return Linearised{marginal, gradient, false};
-        });
+    return columnOfBounds(inputs, read, statistic, 0,
+                          "marginal product of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
+                          [&](const Eigen::VectorXd& bundle) { return marginalProductLinearised(read, bundle, chosen); });
 }
 
 CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& input,
@@ -120,30 +105,29 @@ CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& i
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return elasticityColumn(model, inputs, input);
-    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
     const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
-    Eigen::VectorXd gradient = zeroGradient(read);
-    gradient(1 + chosen) = 1;
     return columnOfBounds(inputs, read, statistic, 0,
                           "output elasticity of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
-                          [&](const Eigen::VectorXd&) { return Linearised{read.form->exponents(chosen), gradient}; });
+                          [&](const Eigen::VectorXd& bundle) { return elasticityLinearised(read, bundle, chosen); });
 }
 
 CellTable scaleColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& what)
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return scaleColumn(model, inputs);
-    const BoundsModel read = readBoundsModel(model, statistic, false);
-    Eigen::VectorXd gradient = zeroGradient(read);
-    gradient.segment(1, read.form->exponents.size()).setOnes();
-    const Linearised scale{read.form->scaleElasticity(), gradient};
+    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
     if (inputs.empty()) {
+        // The translog's ν(x) = Σᵢ(αᵢ + Σⱼ βᵢⱼ ln xⱼ) and its gradient depend on the bundle.
+        if (read.model.form == ProductionForm::translog)
+            throw argumentError(argument::inputs, "the translog's returns to scale and their bounds vary with the "
+                                                  "inputs; give a row of inputs");
         CellTable single(1, 1);
-        single.set(0, 0, answer(scale, read, statistic, 0));
+        single.set(0, 0, answer(scaleLinearised(read, Eigen::VectorXd()), read, statistic, 0));
         return single;
     }
     return columnOfBounds(inputs, read, statistic, 0, "returns to scale",
-                          [&](const Eigen::VectorXd&) { return scale; });
+                          [&](const Eigen::VectorXd& bundle) { return scaleLinearised(read, bundle); });
 }
 
 } // namespace isoquant

@@ -40,15 +40,19 @@ Statistic readWhat(const Cell& what, bool allowsPrediction, const std::string& a
 std::string word(Statistic statistic) { return statisticWords[static_cast<std::size_t>(statistic)]; }
 
 BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
-                            const std::string& argumentName)
+                            const std::string& argumentName, FormsAnswered forms)
 {
     BoundsModel read{range.production()};
     const std::string asked = argumentName + ": \"" + word(statistic) + "\" ";
     if (!read.model.parameterCovariance)
         throw InputError(asked + "needs the model's covariance block; this model has none (a typed model, or a "
                                  "PRODFIT table made without covariance TRUE)");
-    read.form = dynamic_cast<const CobbDouglas*>(read.model.technology.get());
-    if (!read.form) throw InputError(asked + "is available for the cobb-douglas form only so far");
+    read.technology = read.model.technology.get();
+    read.form = dynamic_cast<const CobbDouglas*>(read.technology);
+    if (!read.form && forms == FormsAnswered::cobbDouglas)
+        throw InputError(asked + "is available for the cobb-douglas form only in this function (for the " +
+                         formWord(read.model.form) +
+                         " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
     if (needsLogScale && read.model.logScaleShifted)
         throw InputError(asked + "is not available when the model's ln A is shifted (controls at their means, "
                                  "effects or a trend): the covariance block does not cover that ln A");

@@ -33,16 +33,23 @@ struct Linearised {
 
 struct BoundsModel {
     ProductionModel model;
-    const CobbDouglas* form = nullptr;
+    const Technology* technology = nullptr; // the model's, of any form
+    const CobbDouglas* form = nullptr;      // the same when it is a Cobb-Douglas, else null
     const CovarianceBlock* block = nullptr;
     double critical = 0; // the t quantile of the block's level and degrees of freedom
 };
 
+// Which forms a function answers the words for: the decisions, TFP and the cost figures the
+// cobb-douglas form only; output, marginal products, elasticities and scale every form
+// (form_gradients.hpp).
+enum class FormsAnswered { cobbDouglas, all };
+
 // Throws InputError naming `argumentName` for a model without a covariance block (a typed model), a
-// form other than cobb-douglas, and, when `needsLogScale` (the quantity involves ln A itself), a
-// model whose evaluators use a shifted ln A.
+// form the function does not answer for, and, when `needsLogScale` (the quantity involves ln A
+// itself), a model whose evaluators use a shifted ln A.
 BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
-                            const std::string& argumentName = argument::what);
+                            const std::string& argumentName = argument::what,
+                            FormsAnswered forms = FormsAnswered::cobbDouglas);
 
 // se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
 // `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).

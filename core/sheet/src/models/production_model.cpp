@@ -274,12 +274,9 @@ ProductionModel readProductionModel(const CellTable& range)
     model.latestPeriod = rows.latestPeriod;
     model.hasPeriodEffects = rows.hasPeriodEffects;
     model.logScaleShifted = rows.logScaleForPredictions || rows.logScaleAtControlMeans;
-    if (rows.covarianceRow) {
-        if (model.form != ProductionForm::cobbDouglas)
-            throw argumentError(argument::model, "a covariance block is read for the cobb-douglas form only so far");
+    if (rows.covarianceRow)
         model.parameterCovariance = readCovarianceBlock(
-            range, *rows.covarianceRow, cobbDouglasParameterLabels(model.inputLabels, rows.controlLabels));
-    }
+            range, *rows.covarianceRow, parameterLabels(model.form, model.inputLabels, rows.controlLabels));
     // The table's ν must be the model's own (for translog it is taken at the sample mean, unknown here).
     const auto scale = model.technology->constantScaleElasticity();
     if (model.scaleTest && scale && model.form != ProductionForm::translog &&

@@ -4,6 +4,7 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/arguments/option_arguments.hpp"
 #include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/messages/text.hpp"
 
@@ -147,18 +148,41 @@ std::vector<std::string> cobbDouglasParameterLabels(const std::vector<std::strin
     return labels;
 }
 
+std::vector<std::string> translogParameterLabels(const std::vector<std::string>& inputLabels,
+                                                 const std::vector<std::string>& controlLabels)
+{
+    std::vector<std::string> labels{logScaleLabel};
+    labels.insert(labels.end(), inputLabels.begin(), inputLabels.end());
+    for (const auto& [i, j] : translogPairs(static_cast<Eigen::Index>(inputLabels.size())))
+        labels.push_back(translogPairLabel(inputLabels, i, j));
+    for (const auto& control : controlLabels) labels.push_back(control + controlSuffix);
+    return labels;
+}
+
+std::vector<std::string> cesParameterLabels()
+{
+    return {logScaleLabel, weightLabel, curvatureLabel, returnsParameterLabel};
+}
+
+std::vector<std::string> parameterLabels(ProductionForm form, const std::vector<std::string>& inputLabels,
+                                         const std::vector<std::string>& controlLabels)
+{
+    switch (form) {
+    case ProductionForm::translog: return translogParameterLabels(inputLabels, controlLabels);
+    case ProductionForm::ces: return cesParameterLabels();
+    case ProductionForm::cobbDouglas: break;
+    }
+    return cobbDouglasParameterLabels(inputLabels, controlLabels);
+}
+
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance)
 {
     if (!readSwitchArgument(covariance, argument::covariance)) return table;
-    if (fit.form != ProductionForm::cobbDouglas)
-        throw argumentError(argument::covariance,
-                            "the block is written for the cobb-douglas form only so far; leave covariance "
-                            "empty or FALSE for the " +
-                                formWord(fit.form) + " form");
     CovarianceBlock block;
-    block.labels = cobbDouglasParameterLabels(fit.inputLabels, fit.controlLabels);
+    block.labels = parameterLabels(fit.form, fit.inputLabels, fit.controlLabels);
     block.matrix = fit.inference.covariance;
-    // As the table's standard errors: an exact fit has none, only the rounding left in V.
+    // As the table's standard errors: an exact fit has none, only the rounding left in V (a ces
+    // fit without standard errors already holds NaN there).
     if (fit.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());
     block.kind = fit.summary.covarianceKind;
     block.degreesOfFreedom = fit.inference.degreesOfFreedom;

@@ -29,6 +29,11 @@ std::vector<std::pair<Eigen::Index, Eigen::Index>> translogPairs(Eigen::Index in
 // The regressors 1, ln xᵢ, ½(ln xᵢ)², ln xᵢ·ln xⱼ (i < j), then the controls, in parameter order.
 Eigen::MatrixXd translogDesign(const Eigen::MatrixXd& logInputs, const Eigen::MatrixXd& controls);
 
+// εᵢ = αᵢ + Σⱼ βᵢⱼ lⱼ at the log inputs l (k of them) and ν = Σᵢ εᵢ as linear functions gᵀθ of the
+// `parameters` θ in parameter order: row i (i < k) is the gradient of εᵢ (1 at αᵢ; at βᵢⱼ, lⱼ, and
+// lᵢ at βⱼᵢ = βᵢⱼ stored once), row k that of ν; 0 at the controls.
+Eigen::MatrixXd translogElasticityGradients(Eigen::Index k, Eigen::Index parameters, const Eigen::VectorXd& logs);
+
 // The table label of βᵢⱼ: "<label i>*<label j>".
 std::string translogPairLabel(const std::vector<std::string>& labels, Eigen::Index first, Eigen::Index second);
 

@@ -8,10 +8,19 @@
 // V is the estimated covariance matrix of the kind chosen by `errors` ("classical", "hc1", "hc3",
 // "cluster"); the degrees of freedom are those of the table's reference t distribution (n − p, or
 // G − 1 under cluster errors) and the level that of its bounds, so that an evaluator reading the
-// table back states bounds as the table does. A cell of V that has no value (ln A under effects)
+// table back states bounds as the table does. A cell of V that has no value (ln A under effects;
+// every cell of a ces fit without standard errors: at a boundary, not converged, not identified)
 // reads "n/a". The table is then max(7, p + 1) columns wide and has 1 + p rows more; the header
-// cells over columns 8 … p + 1 (six or more inputs and controls) hold the label of the parameter
-// whose covariances the column holds.
+// cells over columns 8 … p + 1 hold the label of the parameter whose covariances the column holds.
+//
+// The parameters, and so p, by form (k inputs, m controls):
+//   cobb-douglas  ln A, the inputs, the controls "<label> (control)"        p = 1 + k + m
+//   translog      ln A, the inputs (αᵢ), the pairs "<label i>*<label j>" for i ≤ j in the order
+//                 1*1, 1*2, …, 1*k, 2*2, …, k*k (βᵢⱼ), the controls          p = 1 + k + k(k+1)/2 + m
+//   ces           ln A, delta, rho, nu (its own classical inference)       p = 4
+// So a translog table of two inputs without controls (23 rows, p = 6) becomes 30 rows by 7
+// columns, of three inputs (28 rows, p = 10) 39 rows by 11 columns; a ces table (20 rows)
+// becomes 25 rows by 7 columns.
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
@@ -49,8 +58,18 @@ CellTable withCovarianceBlock(const CellTable& table, const CovarianceBlock& blo
 std::vector<std::string> cobbDouglasParameterLabels(const std::vector<std::string>& inputLabels,
                                                     const std::vector<std::string>& controlLabels);
 
+// The parameters of a translog table, as its rows label them: ln A, the inputs, the pairs
+// "<label i>*<label j>" (i ≤ j, in the table's order), the controls with " (control)".
+std::vector<std::string> translogParameterLabels(const std::vector<std::string>& inputLabels,
+                                                 const std::vector<std::string>& controlLabels);
+// The parameters of a ces table: ln A, delta, rho, nu.
+std::vector<std::string> cesParameterLabels();
+// The parameters of a table of the form `form`, in its order (the table above).
+std::vector<std::string> parameterLabels(ProductionForm form, const std::vector<std::string>& inputLabels,
+                                         const std::vector<std::string>& controlLabels);
+
 // PRODFIT's table `table` of `fit`, with the block when `covariance` is TRUE (read as a switch
-// naming "covariance"); the cobb-douglas form only for now, the others answer a message.
+// naming "covariance"), for every form.
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance);
 
 // The block whose "covariance" row is row `headerRow` of `range` (a model argument). Throws

@@ -32,6 +32,10 @@
 //   bounds); returns to scale (ν at the mean, se, F of ν = 1, p); verdict; Cobb-Douglas test (F of all βᵢⱼ = 0
 //   under "t", its p-value); form; ln A at control means (only when m > 0); smearing factor
 // so 2k + q + m + 16 rows, plus one with controls. Two inputs, no controls: 23 rows.
+//
+// With PRODFIT's covariance TRUE the covariance block follows (covariance_block.hpp): 1 + p rows
+// more and max(7, p + 1) columns, p = 1 + k + q + m for the translog (two inputs: 30 rows by 7
+// columns), p = 4 for the ces (25 rows by 7 columns).
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"

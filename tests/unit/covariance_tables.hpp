@@ -1,0 +1,24 @@
+// PRODFIT tables with their covariance block (covariance_block.hpp), as the block tests build and
+// search them.
+#pragma once
+
+#include "isoquant/sheet/tables/covariance_block.hpp"
+#include "isoquant/sheet/tables/fit_table.hpp"
+
+namespace isoquant::testing {
+
+// The fit's table with the block, as PRODFIT's covariance TRUE gives it.
+inline CellTable tableWithBlock(const ProductionFit& fit)
+{
+    return fitTableWithCovariance(fitTable(fit), fit, 1.0);
+}
+
+// The first row labelled "covariance" (the table's row count when there is none).
+inline std::size_t blockRow(const CellTable& table)
+{
+    for (std::size_t row = 0; row < table.rows(); ++row)
+        if (table.isText(row, 0) && table.text(row, 0) == "covariance") return row;
+    return table.rows();
+}
+
+} // namespace isoquant::testing
