@@ -315,7 +315,7 @@ class CostFrontierWithControlTest(CalcTestCase):
     def test_wrong_column_count_names_inputs(self):
         self.assert_message(get_cell(self.sheet, "AO1"),
                             "Error: inputs: has 4 columns, but a cost frontier needs 5: the output column, then the 3 "
-                            "price columns in PRODCOSTFIT's order, then its 1 controls", "PRODEFFICIENCY without size")
+                            "price columns in PRODCOSTFIT's order, then its 1 control", "PRODEFFICIENCY without size")
 
 
 class CostPanelErrorsTest(CalcTestCase):
