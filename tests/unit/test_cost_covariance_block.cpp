@@ -1,5 +1,5 @@
 // PRODCOSTFIT's `covariance` TRUE: the block's shape and labels, PRODCOST reading it back, and the
-// messages where it cannot serve (a cost frontier; a shifted constant; a typed model without one).
+// messages where it cannot serve (a shifted constant); a cost frontier's block (the likelihood's).
 // The figures against python3-statsmodels are in test_cost_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
@@ -12,6 +12,7 @@
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
+#include <random>
 
 using isoquant::CellTable;
 using isoquant::testing::messageOf;
@@ -77,16 +78,49 @@ BOOST_AUTO_TEST_CASE(the_block_follows_the_parameter_rows)
     BOOST_TEST(figure("std. error") > 0.0);
 }
 
-BOOST_AUTO_TEST_CASE(where_the_block_cannot_serve_a_message_says_so)
+BOOST_AUTO_TEST_CASE(a_cost_frontier_block_is_the_likelihood_s)
 {
-    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostArguments();
+    // Invented data of known inefficiency (a depot chain, as test_cost_frontier.cpp): ln C = 1 +
+    // 0.9 ln y + 0.6 ln w₁ + 0.4 ln w₂ + v + u, σᵥ = 0.05, half-normal σᵤ = 0.25.
+    std::mt19937 engine(41);
+    std::uniform_real_distribution<double> logOutput(std::log(10.0), std::log(1000.0)), logPrice(0.0, std::log(30.0));
+    std::normal_distribution<double> noise(0.0, 0.05), inefficiency(0.0, 0.25);
+    Eigen::MatrixXd cost(300, 1), output(300, 1), prices(300, 2);
+    for (int row = 0; row < 300; ++row) {
+        output(row, 0) = std::exp(logOutput(engine));
+        prices(row, 0) = std::exp(logPrice(engine));
+        prices(row, 1) = std::exp(logPrice(engine));
+        cost(row, 0) = std::exp(1 + 0.9 * std::log(output(row, 0)) + 0.6 * std::log(prices(row, 0)) +
+                                0.4 * std::log(prices(row, 1)) + noise(engine) + std::fabs(inefficiency(engine)));
+    }
+    isoquant::CostFitArguments arguments;
+    arguments.cost = isoquant::testing::numberRange(cost, {"cost"});
+    arguments.output = isoquant::testing::numberRange(output, {"parcels"});
+    arguments.prices = isoquant::testing::numberRange(prices, {"drivers", "fuel"});
     arguments.inefficiency = std::string("half-normal");
     const isoquant::CostFit frontier = isoquant::costFitFromArguments(arguments);
-    BOOST_TEST(messageOf([&] { isoquant::costFitTableWithCovariance(frontier, 1.0); }) ==
-               "covariance: not available with inefficiency: a cost frontier's inference is the normal's, which the "
-               "block's degrees of freedom cannot state; leave covariance empty");
+    const CellTable plain = isoquant::costFitTable(frontier);
+    const CellTable table = isoquant::costFitTableWithCovariance(frontier, 1.0);
+    BOOST_TEST(table.rows() == plain.rows() + 1 + 4);
+    BOOST_TEST(table.text(plain.rows(), 1) == "likelihood");
+    BOOST_TEST(table.text(plain.rows(), 2) == "normal");
+    const isoquant::CostModel model = isoquant::readCostModel(table);
+    BOOST_TEST_REQUIRE(model.covariance.has_value());
+    BOOST_TEST(std::isinf(model.covariance->degreesOfFreedom));
+    // The elasticity's bounds are the table's own (normal, at its level): the row `cost elasticity`.
+    const isoquant::ModelTable withBlock(table);
+    CellTable twoPrices(1, 2);
+    twoPrices.set(0, 0, 10.0);
+    twoPrices.set(0, 1, 5.0);
+    const double lower = isoquant::costColumnWithBounds(withBlock, oneCell(100.0), twoPrices,
+                                                        std::string("cost elasticity"), std::string("lower bound"))
+                             .number(0, 0);
+    BOOST_TEST(std::fabs(lower - frontier.costElasticity.lowerBound) <= 1e-12 * std::fabs(lower));
+}
 
-    arguments = isoquant::testing::riceFarmCostPanelArguments();
+BOOST_AUTO_TEST_CASE(where_the_block_cannot_serve_a_message_says_so)
+{
+    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostPanelArguments();
     arguments.groups = {};
     arguments.trend = {};
     const isoquant::ModelTable shifted(
