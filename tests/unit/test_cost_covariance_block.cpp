@@ -6,13 +6,13 @@
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "cell_tables.hpp"
+#include "cost_test_data.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
 #include <boost/test/unit_test.hpp>
 
 #include <cmath>
-#include <random>
 
 using isoquant::CellTable;
 using isoquant::testing::messageOf;
@@ -80,24 +80,7 @@ BOOST_AUTO_TEST_CASE(the_block_follows_the_parameter_rows)
 
 BOOST_AUTO_TEST_CASE(a_cost_frontier_block_is_the_likelihood_s)
 {
-    // Invented data of known inefficiency (a depot chain, as test_cost_frontier.cpp): ln C = 1 +
-    // 0.9 ln y + 0.6 ln w₁ + 0.4 ln w₂ + v + u, σᵥ = 0.05, half-normal σᵤ = 0.25.
-    std::mt19937 engine(41);
-    std::uniform_real_distribution<double> logOutput(std::log(10.0), std::log(1000.0)), logPrice(0.0, std::log(30.0));
-    std::normal_distribution<double> noise(0.0, 0.05), inefficiency(0.0, 0.25);
-    Eigen::MatrixXd cost(300, 1), output(300, 1), prices(300, 2);
-    for (int row = 0; row < 300; ++row) {
-        output(row, 0) = std::exp(logOutput(engine));
-        prices(row, 0) = std::exp(logPrice(engine));
-        prices(row, 1) = std::exp(logPrice(engine));
-        cost(row, 0) = std::exp(1 + 0.9 * std::log(output(row, 0)) + 0.6 * std::log(prices(row, 0)) +
-                                0.4 * std::log(prices(row, 1)) + noise(engine) + std::fabs(inefficiency(engine)));
-    }
-    isoquant::CostFitArguments arguments;
-    arguments.cost = isoquant::testing::numberRange(cost, {"cost"});
-    arguments.output = isoquant::testing::numberRange(output, {"parcels"});
-    arguments.prices = isoquant::testing::numberRange(prices, {"drivers", "fuel"});
-    arguments.inefficiency = std::string("half-normal");
+    const isoquant::CostFitArguments arguments = isoquant::testing::depots(300, 41); // invented, of known inefficiency
     const isoquant::CostFit frontier = isoquant::costFitFromArguments(arguments);
     const CellTable plain = isoquant::costFitTable(frontier);
     const CellTable table = isoquant::costFitTableWithCovariance(frontier, 1.0);
