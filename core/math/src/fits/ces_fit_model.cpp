@@ -1,6 +1,5 @@
 #include "fits/ces_fit_model.hpp"
 
-#include "isoquant/math/forms/ces.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 
 #include <cmath>
@@ -18,10 +17,9 @@ CesLogs logsOf(const ProductionData& data)
 
 Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature)
 {
-    const CesCompositeCurve curve(weight, curvature);
-    Eigen::VectorXd column(logs.logOutput.size());
-    for (Eigen::Index i = 0; i < column.size(); ++i) column(i) = logs.logSecond(i) + curve.value(logs.logRatio(i));
-    return column;
+    CesColumns columns;
+    evaluateComposite(logs.logRatio, weight, curvature, CesParts::value, columns);
+    return logs.logSecond + columns.value.matrix();
 }
 
 Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
@@ -29,21 +27,27 @@ Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
     return logs.logOutput - (raw(0) + raw(3) * compositeColumn(logs, raw(1), raw(2)).array()).matrix();
 }
 
-// H and its derivatives are taken once per row.
+namespace {
+
+// ∂r/∂(ln A, δ or t, ρ, ν) from the composite's columns; r = ln Y − ln A − ν·(b + H).
+void fillJacobian(const CesLogs& logs, const CesColumns& columns, double returnsToScale, Eigen::MatrixXd& jacobian)
+{
+    jacobian.resize(logs.logOutput.size(), parameterCount);
+    jacobian.col(0).setConstant(-1.0);
+    jacobian.col(1) = (-returnsToScale * columns.byWeight).matrix();
+    jacobian.col(2) = (-returnsToScale * columns.byCurvature).matrix();
+    jacobian.col(3) = -(logs.logSecond.array() + columns.value).matrix();
+}
+
+} // namespace
+
 Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn)
 {
-    const Eigen::Index n = logs.logOutput.size();
-    const CesCompositeCurve curve(raw(1), raw(2));
-    Eigen::MatrixXd jacobian(n, parameterCount);
-    for (Eigen::Index i = 0; i < n; ++i) {
-        const CesComposite composite = curve.at(logs.logRatio(i));
-        jacobian(i, 0) = -1.0;
-        // ∂/∂t stays finite even where δ rounds to 0 or 1
-        const double byWeight = weightColumn == WeightColumn::byLogit ? composite.byWeightLogit : composite.byWeight;
-        jacobian(i, 1) = -raw(3) * byWeight;
-        jacobian(i, 2) = -raw(3) * composite.byCurvature;
-        jacobian(i, 3) = -(logs.logSecond(i) + composite.value);
-    }
+    CesColumns columns;
+    evaluateComposite(logs.logRatio, raw(1), raw(2),
+                      weightColumn == WeightColumn::byLogit ? CesParts::byLogit : CesParts::byWeight, columns);
+    Eigen::MatrixXd jacobian;
+    fillJacobian(logs, columns, raw(3), jacobian);
     return jacobian;
 }
 
@@ -57,12 +61,39 @@ Eigen::Vector4d toSolver(const Eigen::Vector4d& raw)
     return {raw(0), std::log(raw(1) / (1 - raw(1))), std::log1p(raw(2)), raw(3)};
 }
 
-Eigen::VectorXd CesModel::residuals(const Eigen::VectorXd& solver) const { return rawResiduals(logs_, toRaw(solver)); }
+const CesColumns& CesModel::columnsAt(const Eigen::VectorXd& solver) const
+{
+    if (!(solver.head<ces_fit::parameterCount>().array() == evaluatedAt_.array()).all()) {
+        const Eigen::Vector4d raw = toRaw(solver);
+        evaluateComposite(logs_.logRatio, raw(1), raw(2), CesParts::byLogit, columns_);
+        evaluatedAt_ = solver.head<ces_fit::parameterCount>();
+    }
+    return columns_;
+}
+
+void CesModel::residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const
+{
+    const CesColumns& columns = columnsAt(solver);
+    residuals = logs_.logOutput - (solver(0) + solver(3) * (logs_.logSecond.array() + columns.value)).matrix();
+}
+
+void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const
+{
+    fillJacobian(logs_, columnsAt(solver), solver(3), jacobian);
+    jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
+}
+
+Eigen::VectorXd CesModel::residuals(const Eigen::VectorXd& solver) const
+{
+    Eigen::VectorXd residuals;
+    residualsInto(solver, residuals);
+    return residuals;
+}
 
 Eigen::MatrixXd CesModel::jacobian(const Eigen::VectorXd& solver) const
 {
-    Eigen::MatrixXd jacobian = rawJacobian(logs_, toRaw(solver), WeightColumn::byLogit);
-    jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
+    Eigen::MatrixXd jacobian;
+    jacobianInto(solver, jacobian);
     return jacobian;
 }
 

@@ -3,10 +3,13 @@
 // iterate is a CES with δ ∈ (0, 1) and ρ > −1; "raw" is (ln A, δ, ρ, ν).
 #pragma once
 
+#include "fits/ces_columns.hpp"
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 #include "isoquant/math/fits/fit_result.hpp"
 
 #include <Eigen/Dense>
+
+#include <limits>
 
 namespace isoquant::ces_fit {
 
@@ -41,6 +44,9 @@ Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, Wei
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver);
 Eigen::Vector4d toSolver(const Eigen::Vector4d& raw);
 
+// Residuals and Jacobian in solver coordinates. A residual evaluation computes the composite's
+// derivatives too and keeps them: the solver asks for the Jacobian at the point it last
+// evaluated (the step it accepted), which then costs no exp or log.
 class CesModel : public NonlinearModel {
 public:
     explicit CesModel(const CesLogs& logs) : logs_(logs) {}
@@ -48,9 +54,16 @@ public:
     Eigen::Index parameterCount() const override { return ces_fit::parameterCount; }
     Eigen::VectorXd residuals(const Eigen::VectorXd& solver) const override;
     Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override;
+    void residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const override;
+    void jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const override;
 
 private:
+    const CesColumns& columnsAt(const Eigen::VectorXd& solver) const;
+
     const CesLogs& logs_;
+    // The last point evaluated and its columns (H, ∂H/∂t, ∂H/∂ρ); a cache, hence mutable.
+    mutable Eigen::Vector4d evaluatedAt_ = Eigen::Vector4d::Constant(std::numeric_limits<double>::quiet_NaN());
+    mutable CesColumns columns_;
 };
 
 } // namespace isoquant::ces_fit

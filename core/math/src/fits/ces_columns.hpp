@@ -1,0 +1,33 @@
+// The CES composite H (ces.hpp) and its derivatives over a whole column of d = ln x₁ − ln x₂
+// (internal to the core): what the ces fit evaluates on every row, many times per fit.
+//
+// The formulas and branches are those of CesCompositeCurve (ces.cpp), K(u) = ln(δeᵘ + 1 − δ),
+// u = −ρ·d, H = d·K(u)/u: for |u| ≤ 1 K = log1p(δ·expm1(u)), for |u| > 1 the log-sum-exp form,
+// ∂H/∂ρ from its series for |u| < 10⁻³. H alone is CesCompositeCurve::value row by row; with the
+// derivatives, each row takes one exp (or expm1) and one log1p, which K, π = ∂H/∂d and the
+// derivatives share, where CesCompositeCurve::at takes six such calls. (Eigen's vectorised exp and
+// log, without AVX, took as long per value as the C library's scalar ones here: 8–10 ns.)
+#pragma once
+
+#include <Eigen/Dense>
+
+namespace isoquant::ces_fit {
+
+// Which columns to fill besides H.
+enum class CesParts {
+    value,     // H alone
+    byLogit,   // H, ∂H/∂t (δ = 1/(1 + e^(−t))) and ∂H/∂ρ: the solver's
+    byWeight   // H, ∂H/∂δ and ∂H/∂ρ: inference's
+};
+
+struct CesColumns {
+    Eigen::ArrayXd value;       // H
+    Eigen::ArrayXd byWeight;    // ∂H/∂t or ∂H/∂δ, as asked
+    Eigen::ArrayXd byCurvature; // ∂H/∂ρ
+};
+
+// Fills `columns` (resized to the rows of logRatio; the derivative columns only when asked).
+void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesParts parts,
+                       CesColumns& columns);
+
+} // namespace isoquant::ces_fit
