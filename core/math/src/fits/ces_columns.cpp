@@ -22,7 +22,8 @@ struct Shape {
 
 struct RowParts {
     double value;       // H
-    double byWeight;    // ∂H/∂t or ∂H/∂δ, as asked
+    double byLogit;     // ∂H/∂t
+    double byWeight;    // ∂H/∂δ
     double byCurvature; // ∂H/∂ρ
 };
 
@@ -36,19 +37,17 @@ double curvatureDerivative(double d, double u, double share, double cumulant, co
     return -d * d * slope;
 }
 
-// One row, with two calls of exp/expm1 and log1p where CesCompositeCurve::at makes six: K and π
-// share the exponential. The forms and branches are those of ces.cpp.
-RowParts rowParts(double d, const Shape& shape, CesParts parts)
+// One row, with two calls of exp/expm1 and log1p where CesCompositeCurve::at makes six: K, π and
+// 1 − π share the exponential. The forms and branches are those of ces.cpp.
+RowParts rowParts(double d, const Shape& shape)
 {
     const double u = -shape.curvature * d;
-    const double q = shape.weight * shape.complement;
-    if (u == 0) {
-        const double byWeight = parts == CesParts::byLogit ? q * d : d;
-        return {shape.weight * d, byWeight, curvatureDerivative(d, u, 0, 0, shape)};
-    }
+    const double q = shape.weight * shape.complement; // dδ/dt
+    if (u == 0) return {shape.weight * d, q * d, d, curvatureDerivative(d, u, 0, 0, shape)};
     double cumulant = 0; // K(u)
     double share = 0;    // π = δeᵘ/(δeᵘ + 1 − δ)
     double byWeight = 0;
+    double byLogit = 0;
     if (std::fabs(u) <= 1) {
         // K = log1p(δ·expm1(u)), ∂H/∂δ = d·expm1(u)/(u·(δeᵘ + 1 − δ))
         const double expm1 = std::expm1(u);
@@ -56,7 +55,7 @@ RowParts rowParts(double d, const Shape& shape, CesParts parts)
         cumulant = std::log1p(shape.weight * expm1);
         share = shape.weight * (1 + expm1) / mix;
         byWeight = d * expm1 / (u * mix);
-        if (parts == CesParts::byLogit) byWeight *= q;
+        byLogit = q * byWeight;
     } else {
         // K = max(a, c) + log1p(e^(min − max)), a = ln δ + u, c = ln(1−δ); π = logistic(a − c)
         const double a = shape.logWeight + u;
@@ -65,16 +64,14 @@ RowParts rowParts(double d, const Shape& shape, CesParts parts)
         const double ratio = std::exp(std::min(a, c) - larger); // e^(−|a − c|)
         cumulant = larger + std::log1p(ratio);
         share = a >= c ? 1 / (1 + ratio) : ratio / (1 + ratio);
-        if (parts == CesParts::byLogit) {
-            byWeight = d * (share - shape.weight) / u; // π − δ loses digits only for small |u|
-        } else {
-            // ∂H/∂δ = d·(eᵘ − 1)/(u·(δeᵘ + 1 − δ)), written with e^(−|u|) so that nothing overflows
-            const double small = std::exp(-std::fabs(u));
-            byWeight = u > 0 ? d * (1 - small) / (u * (shape.weight + shape.complement * small))
-                             : d * (small - 1) / (u * (shape.weight * small + shape.complement));
-        }
+        const double second = a >= c ? ratio / (1 + ratio) : 1 / (1 + ratio); // 1 − π
+        // π − δ = π(1−δ) − δ(1−π) = δ(1−δ)(eᵘ − 1)/(δeᵘ + 1 − δ): the two products differ by the
+        // factor eᵘ, at least e here, so their difference keeps its digits also where δ is near 1.
+        const double shareGap = share * shape.complement - shape.weight * second;
+        byLogit = d * shareGap / u;
+        byWeight = d * (shareGap / q) / u;
     }
-    return {d * cumulant / u, byWeight, curvatureDerivative(d, u, share, cumulant, shape)};
+    return {d * cumulant / u, byLogit, byWeight, curvatureDerivative(d, u, share, cumulant, shape)};
 }
 
 } // namespace
@@ -92,19 +89,22 @@ void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double cu
         for (Eigen::Index i = 0; i < n; ++i) columns.value(i) = curve.value(logRatio(i));
         return;
     }
+    columns.byLogit.resize(n);
     columns.byWeight.resize(n);
     columns.byCurvature.resize(n);
     const CesCompositeCurve curve(weight, curvature);
     for (Eigen::Index i = 0; i < n; ++i) {
         if (interior) {
-            const RowParts row = rowParts(logRatio(i), shape, parts);
+            const RowParts row = rowParts(logRatio(i), shape);
             columns.value(i) = row.value;
+            columns.byLogit(i) = row.byLogit;
             columns.byWeight(i) = row.byWeight;
             columns.byCurvature(i) = row.byCurvature;
         } else {
             const CesComposite composite = curve.at(logRatio(i));
             columns.value(i) = composite.value;
-            columns.byWeight(i) = parts == CesParts::byLogit ? composite.byWeightLogit : composite.byWeight;
+            columns.byLogit(i) = composite.byWeightLogit;
+            columns.byWeight(i) = composite.byWeight;
             columns.byCurvature(i) = composite.byCurvature;
         }
     }

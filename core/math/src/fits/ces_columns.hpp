@@ -13,20 +13,17 @@
 
 namespace isoquant::ces_fit {
 
-// Which columns to fill besides H.
-enum class CesParts {
-    value,     // H alone
-    byLogit,   // H, ∂H/∂t (δ = 1/(1 + e^(−t))) and ∂H/∂ρ: the solver's
-    byWeight   // H, ∂H/∂δ and ∂H/∂ρ: inference's
-};
+// Which columns to fill: H alone, or H and its derivatives.
+enum class CesParts { value, all };
 
 struct CesColumns {
     Eigen::ArrayXd value;       // H
-    Eigen::ArrayXd byWeight;    // ∂H/∂t or ∂H/∂δ, as asked
+    Eigen::ArrayXd byLogit;     // ∂H/∂t, δ = 1/(1 + e^(−t)): the solver's; finite even where δ rounds to 0 or 1
+    Eigen::ArrayXd byWeight;    // ∂H/∂δ: inference's
     Eigen::ArrayXd byCurvature; // ∂H/∂ρ
 };
 
-// Fills `columns` (resized to the rows of logRatio; the derivative columns only when asked).
+// Fills `columns` (resized to the rows of logRatio; the derivatives only for CesParts::all).
 void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesParts parts,
                        CesColumns& columns);
 

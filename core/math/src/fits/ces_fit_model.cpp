@@ -30,25 +30,32 @@ Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
 namespace {
 
 // ∂r/∂(ln A, δ or t, ρ, ν) from the composite's columns; r = ln Y − ln A − ν·(b + H).
-void fillJacobian(const CesLogs& logs, const CesColumns& columns, double returnsToScale, Eigen::MatrixXd& jacobian)
+void fillJacobian(const CesLogs& logs, const CesColumns& columns, WeightColumn weightColumn, double returnsToScale,
+                  Eigen::MatrixXd& jacobian)
 {
     jacobian.resize(logs.logOutput.size(), parameterCount);
     jacobian.col(0).setConstant(-1.0);
-    jacobian.col(1) = (-returnsToScale * columns.byWeight).matrix();
+    jacobian.col(1) =
+        (-returnsToScale * (weightColumn == WeightColumn::byLogit ? columns.byLogit : columns.byWeight)).matrix();
     jacobian.col(2) = (-returnsToScale * columns.byCurvature).matrix();
     jacobian.col(3) = -(logs.logSecond.array() + columns.value).matrix();
 }
 
+Eigen::VectorXd residualsFrom(const CesLogs& logs, const CesColumns& columns, double logScale, double returnsToScale)
+{
+    return logs.logOutput - (logScale + returnsToScale * (logs.logSecond.array() + columns.value)).matrix();
+}
+
 } // namespace
 
-Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn)
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw)
 {
     CesColumns columns;
-    evaluateComposite(logs.logRatio, raw(1), raw(2),
-                      weightColumn == WeightColumn::byLogit ? CesParts::byLogit : CesParts::byWeight, columns);
-    Eigen::MatrixXd jacobian;
-    fillJacobian(logs, columns, raw(3), jacobian);
-    return jacobian;
+    evaluateComposite(logs.logRatio, raw(1), raw(2), CesParts::all, columns);
+    RawEvaluation evaluation;
+    evaluation.residuals = residualsFrom(logs, columns, raw(0), raw(3));
+    fillJacobian(logs, columns, WeightColumn::byWeight, raw(3), evaluation.jacobian);
+    return evaluation;
 }
 
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver)
@@ -63,23 +70,25 @@ Eigen::Vector4d toSolver(const Eigen::Vector4d& raw)
 
 const CesColumns& CesModel::columnsAt(const Eigen::VectorXd& solver) const
 {
-    if (!(solver.head<ces_fit::parameterCount>().array() == evaluatedAt_.array()).all()) {
-        const Eigen::Vector4d raw = toRaw(solver);
-        evaluateComposite(logs_.logRatio, raw(1), raw(2), CesParts::byLogit, columns_);
-        evaluatedAt_ = solver.head<ces_fit::parameterCount>();
-    }
-    return columns_;
+    const Eigen::Vector4d at = solver.head<ces_fit::parameterCount>();
+    for (const Evaluated& kept : evaluated_)
+        if ((kept.at.array() == at.array()).all()) return kept.columns;
+    Evaluated& slot = evaluated_[older_];
+    older_ = 1 - older_;
+    const Eigen::Vector4d raw = toRaw(solver);
+    evaluateComposite(logs_.logRatio, raw(1), raw(2), CesParts::all, slot.columns);
+    slot.at = at;
+    return slot.columns;
 }
 
 void CesModel::residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const
 {
-    const CesColumns& columns = columnsAt(solver);
-    residuals = logs_.logOutput - (solver(0) + solver(3) * (logs_.logSecond.array() + columns.value)).matrix();
+    residuals = residualsFrom(logs_, columnsAt(solver), solver(0), solver(3));
 }
 
 void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const
 {
-    fillJacobian(logs_, columnsAt(solver), solver(3), jacobian);
+    fillJacobian(logs_, columnsAt(solver), WeightColumn::byLogit, solver(3), jacobian);
     jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
 }
 

@@ -37,16 +37,22 @@ Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw);
 // The second column of the Jacobian: by δ itself (inference) or by its logit t (the solver).
 enum class WeightColumn { byWeight, byLogit };
 
-// ∂r/∂(ln A, δ or t, ρ, ν) at raw = (ln A, δ, ρ, ν).
-Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn);
+// Residuals and the Jacobian by δ at raw from one pass over the rows: what inference needs.
+struct RawEvaluation {
+    Eigen::VectorXd residuals;
+    Eigen::MatrixXd jacobian;
+};
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw);
 
 // (ln A, t, s, ν) ↔ (ln A, δ, ρ, ν)
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver);
 Eigen::Vector4d toSolver(const Eigen::Vector4d& raw);
 
 // Residuals and Jacobian in solver coordinates. A residual evaluation computes the composite's
-// derivatives too and keeps them: the solver asks for the Jacobian at the point it last
-// evaluated (the step it accepted), which then costs no exp or log.
+// derivatives too and keeps them for the last two points: the solver asks for the Jacobian at the
+// point it accepted, which is the last one evaluated, or the one before when a trial step after it
+// was rejected (as where Levenberg–Marquardt ends and the Gauss–Newton steps begin); the Jacobian
+// then costs no exp or log.
 class CesModel : public NonlinearModel {
 public:
     explicit CesModel(const CesLogs& logs) : logs_(logs) {}
@@ -58,12 +64,16 @@ public:
     void jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const override;
 
 private:
+    struct Evaluated {
+        Eigen::Vector4d at = Eigen::Vector4d::Constant(std::numeric_limits<double>::quiet_NaN());
+        CesColumns columns;
+    };
     const CesColumns& columnsAt(const Eigen::VectorXd& solver) const;
 
     const CesLogs& logs_;
-    // The last point evaluated and its columns (H, ∂H/∂t, ∂H/∂ρ); a cache, hence mutable.
-    mutable Eigen::Vector4d evaluatedAt_ = Eigen::Vector4d::Constant(std::numeric_limits<double>::quiet_NaN());
-    mutable CesColumns columns_;
+    // A cache, hence mutable: the last two points evaluated, the older one replaced next.
+    mutable Evaluated evaluated_[2];
+    mutable int older_ = 0;
 };
 
 } // namespace isoquant::ces_fit

@@ -17,8 +17,9 @@ CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m);
 std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows);
 
 // Each start (in solver coordinates) moved to the optimum the solver reaches from it on the
-// sample rows; starts that reach the same minimum are kept once.
-std::vector<Eigen::VectorXd> movedOnSample(const CesLogs& logs, const CesLogs& sample,
+// sample rows; starts that reach the same minimum are kept once. `model` is on all rows: a moved
+// start must have finite residuals there (its evaluation stays in the model's cache for the run).
+std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
                                            const std::vector<Eigen::VectorXd>& starts,
                                            const NonlinearLeastSquaresOptions& options);
 
