@@ -145,12 +145,15 @@ CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m)
     return sample;
 }
 
-// The Kmenta start from all rows, then the best grid points from the rows of evenlySpacedRows.
+// The Kmenta start, then the best grid points, from the rows of evenlySpacedRows (the grid from at
+// most gridRows of them). Like the grid, the Kmenta regression only proposes a start, which the
+// runs on the sample and on all rows then move.
 std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows)
 {
     std::vector<Eigen::Vector4d> starts;
-    if (const auto kmenta = kmentaStart(logs)) starts.push_back(*kmenta);
-    const CesLogs searched = evenlySpacedRows(evenlySpacedRows(logs, searchRows), gridRows);
+    const CesLogs sample = evenlySpacedRows(logs, searchRows);
+    if (const auto kmenta = kmentaStart(sample)) starts.push_back(*kmenta);
+    const CesLogs searched = evenlySpacedRows(sample, gridRows);
     std::vector<ConcentratedFit> grid;
     for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, curvature));
     std::sort(grid.begin(), grid.end(),
@@ -164,16 +167,22 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
 // all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
 // coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
 // distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
-// not finite is replaced by the start itself.
+// not finite is replaced by the start itself. The runs on the sample stop at a relative step of
+// sampleStepTolerance: their point only starts the runs on all rows, whose own optimum lies about
+// √(n/m) standard errors away (sampling), far beyond that; the last steps to 1e-15 would cost about
+// a third of their evaluations.
 std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
                                            const std::vector<Eigen::VectorXd>& starts,
                                            const NonlinearLeastSquaresOptions& options)
 {
     constexpr double sameMinimum = 1e-6;
+    constexpr double sampleStepTolerance = 1e-10;
+    NonlinearLeastSquaresOptions sampleOptions = options;
+    sampleOptions.relativeStepTolerance = std::max(options.relativeStepTolerance, sampleStepTolerance);
     const CesModel sampleModel(sample);
     std::vector<Eigen::VectorXd> moved;
     for (const Eigen::VectorXd& start : starts) {
-        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, options).parameters;
+        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
         const auto same = [&](const Eigen::VectorXd& other) {
             return ((reached - other).array().abs() <= sameMinimum * (1 + other.array().abs())).all();
         };

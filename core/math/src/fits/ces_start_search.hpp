@@ -12,8 +12,8 @@ namespace isoquant::ces_fit {
 // Rows ⌊k·n/m⌋, k = 0, …, m − 1: every (n/m)-th row, from the first; all n rows when n ≤ m.
 CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m);
 
-// The Kmenta start from all rows, then the best grid points from the rows of evenlySpacedRows,
-// each as (ln A, δ, ρ, ν).
+// The Kmenta start, then the best grid points, from the rows of evenlySpacedRows (the grid on at
+// most 250 of them, evenly spaced again), each as (ln A, δ, ρ, ν).
 std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows);
 
 // Each start (in solver coordinates) moved to the optimum the solver reaches from it on the
