@@ -76,19 +76,13 @@ RowParts rowParts(double d, const Shape& shape)
 
 } // namespace
 
-void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesParts parts,
-                       CesColumns& columns)
+void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesColumns& columns)
 {
     const Eigen::Index n = logRatio.size();
     columns.value.resize(n);
     // Where δ is 0 or 1 (a boundary) the forms of CesCompositeCurve handle the infinite logs.
     const Shape shape{weight, 1 - weight, std::log(weight), std::log1p(-weight), curvature};
     const bool interior = weight > 0 && weight < 1;
-    if (parts == CesParts::value) {
-        const CesCompositeCurve curve(weight, curvature);
-        for (Eigen::Index i = 0; i < n; ++i) columns.value(i) = curve.value(logRatio(i));
-        return;
-    }
     columns.byLogit.resize(n);
     columns.byWeight.resize(n);
     columns.byCurvature.resize(n);

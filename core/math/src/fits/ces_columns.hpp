@@ -3,18 +3,15 @@
 //
 // The formulas and branches are those of CesCompositeCurve (ces.cpp), K(u) = ln(δeᵘ + 1 − δ),
 // u = −ρ·d, H = d·K(u)/u: for |u| ≤ 1 K = log1p(δ·expm1(u)), for |u| > 1 the log-sum-exp form,
-// ∂H/∂ρ from its series for |u| < 10⁻³. H alone is CesCompositeCurve::value row by row; with the
-// derivatives, each row takes one exp (or expm1) and one log1p, which K, π = ∂H/∂d and the
-// derivatives share, where CesCompositeCurve::at takes six such calls. (Eigen's vectorised exp and
-// log, without AVX, took as long per value as the C library's scalar ones here: 8–10 ns.)
+// ∂H/∂ρ from its series for |u| < 10⁻³; H is bit for bit CesCompositeCurve::value. Each row takes
+// one exp (or expm1) and one log1p, which K, π = ∂H/∂d and the derivatives share, where
+// CesCompositeCurve::at takes six such calls. (Eigen's vectorised exp and log, SSE2 without AVX
+// as the build compiles them, took as long per value as the C library's scalar ones: 8–10 ns.)
 #pragma once
 
 #include <Eigen/Dense>
 
 namespace isoquant::ces_fit {
-
-// Which columns to fill: H alone, or H and its derivatives.
-enum class CesParts { value, all };
 
 struct CesColumns {
     Eigen::ArrayXd value;       // H
@@ -23,8 +20,7 @@ struct CesColumns {
     Eigen::ArrayXd byCurvature; // ∂H/∂ρ
 };
 
-// Fills `columns` (resized to the rows of logRatio; the derivatives only for CesParts::all).
-void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesParts parts,
-                       CesColumns& columns);
+// Fills `columns`, resized to the rows of logRatio.
+void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesColumns& columns);
 
 } // namespace isoquant::ces_fit

@@ -15,18 +15,6 @@ CesLogs logsOf(const ProductionData& data)
     return logs;
 }
 
-Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature)
-{
-    CesColumns columns;
-    evaluateComposite(logs.logRatio, weight, curvature, CesParts::value, columns);
-    return logs.logSecond + columns.value.matrix();
-}
-
-Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
-{
-    return logs.logOutput - (raw(0) + raw(3) * compositeColumn(logs, raw(1), raw(2)).array()).matrix();
-}
-
 namespace {
 
 // ∂r/∂(ln A, δ or t, ρ, ν) from the composite's columns; r = ln Y − ln A − ν·(b + H).
@@ -51,7 +39,7 @@ Eigen::VectorXd residualsFrom(const CesLogs& logs, const CesColumns& columns, do
 RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw)
 {
     CesColumns columns;
-    evaluateComposite(logs.logRatio, raw(1), raw(2), CesParts::all, columns);
+    evaluateComposite(logs.logRatio, raw(1), raw(2), columns);
     RawEvaluation evaluation;
     evaluation.residuals = residualsFrom(logs, columns, raw(0), raw(3));
     fillJacobian(logs, columns, WeightColumn::byWeight, raw(3), evaluation.jacobian);
@@ -76,7 +64,7 @@ const CesColumns& CesModel::columnsAt(const Eigen::VectorXd& solver) const
     Evaluated& slot = evaluated_[older_];
     older_ = 1 - older_;
     const Eigen::Vector4d raw = toRaw(solver);
-    evaluateComposite(logs_.logRatio, raw(1), raw(2), CesParts::all, slot.columns);
+    evaluateComposite(logs_.logRatio, raw(1), raw(2), slot.columns);
     slot.at = at;
     return slot.columns;
 }

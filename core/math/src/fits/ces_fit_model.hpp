@@ -29,11 +29,6 @@ struct CesLogs {
 
 CesLogs logsOf(const ProductionData& data);
 
-// b + H(d) for every row.
-Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature);
-
-Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw);
-
 // The second column of the Jacobian: by δ itself (inference) or by its logit t (the solver).
 enum class WeightColumn { byWeight, byLogit };
 
