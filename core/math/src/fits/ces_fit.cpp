@@ -125,7 +125,7 @@ CesBoundary boundaryOf(const CesLogs& logs, const Eigen::VectorXd& solver, doubl
 }
 
 // The starts in solver coordinates: the caller's, or the Kmenta and grid starts (ces_start_search.hpp).
-std::vector<Eigen::VectorXd> solverStarts(const CesLogs& logs, const CesFitOptions& cesOptions,
+std::vector<Eigen::VectorXd> solverStarts(const CesModel& model, const CesLogs& logs, const CesFitOptions& cesOptions,
                                           const NonlinearLeastSquaresOptions& solverOptions)
 {
     std::vector<Eigen::VectorXd> starts;
@@ -139,7 +139,7 @@ std::vector<Eigen::VectorXd> solverStarts(const CesLogs& logs, const CesFitOptio
     for (const Eigen::Vector4d& start : startValues(logs, cesOptions.startSearchRows))
         starts.push_back(toSolver(start));
     if (logs.logOutput.size() > cesOptions.startSearchRows)
-        starts = movedOnSample(logs, evenlySpacedRows(logs, cesOptions.startSearchRows), starts, solverOptions);
+        starts = movedOnSample(model, evenlySpacedRows(logs, cesOptions.startSearchRows), starts, solverOptions);
     return starts;
 }
 
@@ -181,7 +181,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     NonlinearLeastSquaresOptions solverOptions = cesOptions.solver;
     solverOptions.confidenceLevel = options.confidenceLevel;
     const NonlinearLeastSquaresResult kept =
-        bestRun(model, solverStarts(logs, cesOptions, solverOptions), solverOptions);
+        bestRun(model, solverStarts(model, logs, cesOptions, solverOptions), solverOptions);
 
     CesDetails details;
     details.evaluations = kept.evaluations;

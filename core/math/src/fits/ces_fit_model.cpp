@@ -1,6 +1,5 @@
 #include "fits/ces_fit_model.hpp"
 
-#include "isoquant/math/forms/ces.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 
 #include <cmath>
@@ -16,35 +15,35 @@ CesLogs logsOf(const ProductionData& data)
     return logs;
 }
 
-Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature)
+namespace {
+
+// ∂r/∂(ln A, δ or t, ρ, ν) from the composite's columns; r = ln Y − ln A − ν·(b + H).
+void fillJacobian(const CesLogs& logs, const CesColumns& columns, WeightColumn weightColumn, double returnsToScale,
+                  Eigen::MatrixXd& jacobian)
 {
-    const CesCompositeCurve curve(weight, curvature);
-    Eigen::VectorXd column(logs.logOutput.size());
-    for (Eigen::Index i = 0; i < column.size(); ++i) column(i) = logs.logSecond(i) + curve.value(logs.logRatio(i));
-    return column;
+    jacobian.resize(logs.logOutput.size(), parameterCount);
+    jacobian.col(0).setConstant(-1.0);
+    jacobian.col(1) =
+        (-returnsToScale * (weightColumn == WeightColumn::byLogit ? columns.byLogit : columns.byWeight)).matrix();
+    jacobian.col(2) = (-returnsToScale * columns.byCurvature).matrix();
+    jacobian.col(3) = -(logs.logSecond.array() + columns.value).matrix();
 }
 
-Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw)
+Eigen::VectorXd residualsFrom(const CesLogs& logs, const CesColumns& columns, double logScale, double returnsToScale)
 {
-    return logs.logOutput - (raw(0) + raw(3) * compositeColumn(logs, raw(1), raw(2)).array()).matrix();
+    return logs.logOutput - (logScale + returnsToScale * (logs.logSecond.array() + columns.value)).matrix();
 }
 
-// H and its derivatives are taken once per row.
-Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn)
+} // namespace
+
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw)
 {
-    const Eigen::Index n = logs.logOutput.size();
-    const CesCompositeCurve curve(raw(1), raw(2));
-    Eigen::MatrixXd jacobian(n, parameterCount);
-    for (Eigen::Index i = 0; i < n; ++i) {
-        const CesComposite composite = curve.at(logs.logRatio(i));
-        jacobian(i, 0) = -1.0;
-        // ∂/∂t stays finite even where δ rounds to 0 or 1
-        const double byWeight = weightColumn == WeightColumn::byLogit ? composite.byWeightLogit : composite.byWeight;
-        jacobian(i, 1) = -raw(3) * byWeight;
-        jacobian(i, 2) = -raw(3) * composite.byCurvature;
-        jacobian(i, 3) = -(logs.logSecond(i) + composite.value);
-    }
-    return jacobian;
+    CesColumns columns;
+    evaluateComposite(logs.logRatio, raw(1), raw(2), columns);
+    RawEvaluation evaluation;
+    evaluation.residuals = residualsFrom(logs, columns, raw(0), raw(3));
+    fillJacobian(logs, columns, WeightColumn::byWeight, raw(3), evaluation.jacobian);
+    return evaluation;
 }
 
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver)
@@ -57,12 +56,41 @@ Eigen::Vector4d toSolver(const Eigen::Vector4d& raw)
     return {raw(0), std::log(raw(1) / (1 - raw(1))), std::log1p(raw(2)), raw(3)};
 }
 
-Eigen::VectorXd CesModel::residuals(const Eigen::VectorXd& solver) const { return rawResiduals(logs_, toRaw(solver)); }
+const CesColumns& CesModel::columnsAt(const Eigen::VectorXd& solver) const
+{
+    const Eigen::Vector4d at = solver.head<ces_fit::parameterCount>();
+    for (const Evaluated& kept : evaluated_)
+        if ((kept.at.array() == at.array()).all()) return kept.columns;
+    Evaluated& slot = evaluated_[older_];
+    older_ = 1 - older_;
+    const Eigen::Vector4d raw = toRaw(solver);
+    evaluateComposite(logs_.logRatio, raw(1), raw(2), slot.columns);
+    slot.at = at;
+    return slot.columns;
+}
+
+void CesModel::residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const
+{
+    residuals = residualsFrom(logs_, columnsAt(solver), solver(0), solver(3));
+}
+
+void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const
+{
+    fillJacobian(logs_, columnsAt(solver), WeightColumn::byLogit, solver(3), jacobian);
+    jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
+}
+
+Eigen::VectorXd CesModel::residuals(const Eigen::VectorXd& solver) const
+{
+    Eigen::VectorXd residuals;
+    residualsInto(solver, residuals);
+    return residuals;
+}
 
 Eigen::MatrixXd CesModel::jacobian(const Eigen::VectorXd& solver) const
 {
-    Eigen::MatrixXd jacobian = rawJacobian(logs_, toRaw(solver), WeightColumn::byLogit);
-    jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
+    Eigen::MatrixXd jacobian;
+    jacobianInto(solver, jacobian);
     return jacobian;
 }
 

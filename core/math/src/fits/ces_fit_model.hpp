@@ -3,10 +3,13 @@
 // iterate is a CES with δ ∈ (0, 1) and ρ > −1; "raw" is (ln A, δ, ρ, ν).
 #pragma once
 
+#include "fits/ces_columns.hpp"
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 #include "isoquant/math/fits/fit_result.hpp"
 
 #include <Eigen/Dense>
+
+#include <limits>
 
 namespace isoquant::ces_fit {
 
@@ -26,21 +29,25 @@ struct CesLogs {
 
 CesLogs logsOf(const ProductionData& data);
 
-// b + H(d) for every row.
-Eigen::VectorXd compositeColumn(const CesLogs& logs, double weight, double curvature);
-
-Eigen::VectorXd rawResiduals(const CesLogs& logs, const Eigen::Vector4d& raw);
-
 // The second column of the Jacobian: by δ itself (inference) or by its logit t (the solver).
 enum class WeightColumn { byWeight, byLogit };
 
-// ∂r/∂(ln A, δ or t, ρ, ν) at raw = (ln A, δ, ρ, ν).
-Eigen::MatrixXd rawJacobian(const CesLogs& logs, const Eigen::Vector4d& raw, WeightColumn weightColumn);
+// Residuals and the Jacobian by δ at raw from one pass over the rows: what inference needs.
+struct RawEvaluation {
+    Eigen::VectorXd residuals;
+    Eigen::MatrixXd jacobian;
+};
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw);
 
 // (ln A, t, s, ν) ↔ (ln A, δ, ρ, ν)
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver);
 Eigen::Vector4d toSolver(const Eigen::Vector4d& raw);
 
+// Residuals and Jacobian in solver coordinates. A residual evaluation computes the composite's
+// derivatives too and keeps them for the last two points: the solver asks for the Jacobian at the
+// point it accepted, which is the last one evaluated, or the one before when a trial step after it
+// was rejected (as where Levenberg–Marquardt ends and the Gauss–Newton steps begin); the Jacobian
+// then costs no exp or log.
 class CesModel : public NonlinearModel {
 public:
     explicit CesModel(const CesLogs& logs) : logs_(logs) {}
@@ -48,9 +55,20 @@ public:
     Eigen::Index parameterCount() const override { return ces_fit::parameterCount; }
     Eigen::VectorXd residuals(const Eigen::VectorXd& solver) const override;
     Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override;
+    void residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const override;
+    void jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const override;
 
 private:
+    struct Evaluated {
+        Eigen::Vector4d at = Eigen::Vector4d::Constant(std::numeric_limits<double>::quiet_NaN());
+        CesColumns columns;
+    };
+    const CesColumns& columnsAt(const Eigen::VectorXd& solver) const;
+
     const CesLogs& logs_;
+    // A cache, hence mutable: the last two points evaluated, the older one replaced next.
+    mutable Evaluated evaluated_[2];
+    mutable int older_ = 0;
 };
 
 } // namespace isoquant::ces_fit

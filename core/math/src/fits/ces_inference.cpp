@@ -95,9 +95,9 @@ ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Ei
                        FitStatus solverStatus, const ProductionFitOptions& options, double rankTolerance)
 {
     ProductionFit fit;
-    fit.residuals = rawResiduals(logs, raw);
-    fit.inference = nonlinearInference(rawJacobian(logs, raw, WeightColumn::byWeight), fit.residuals, raw,
-                                       options.confidenceLevel, rankTolerance);
+    RawEvaluation evaluation = evaluateRaw(logs, raw);
+    fit.residuals = std::move(evaluation.residuals);
+    fit.inference = nonlinearInference(evaluation.jacobian, fit.residuals, raw, options.confidenceLevel, rankTolerance);
     fit.status = statusAt(std::move(solverStatus), details, fit.inference);
     // At a boundary or away from an identified optimum the classical standard errors mean nothing.
     const std::string untested = untestedReason(fit.status.kind);

@@ -22,33 +22,72 @@ constexpr double kmentaWeightLimit = 0.01;
 constexpr double kmentaCurvatureLimit = 20.0;
 // Starts taken from the grid besides the Kmenta one.
 constexpr std::size_t gridStartsTried = 2;
-// Bits of precision Brent's search aims at on the logit of δ (enough for a start value).
-constexpr int brentBits = 20;
+// Bits of precision Brent's search aims at on the logit of δ: about 5e-4 relative, enough for a
+// start value, which the runs on the sample move to their optimum anyway.
+constexpr int brentBits = 12;
+// Rows of the grid at most: evenly spaced among the searched ones. The grid only ranks curvatures
+// (its best two points are starts); 250 rows rank the basins of the rice-farm panel as all its rows
+// do, and even 100 do (test_forms_fits.cpp).
+constexpr Eigen::Index gridRows = 250;
 
 struct ConcentratedFit {
     double sumOfSquares = std::numeric_limits<double>::infinity();
     Eigen::Vector4d raw = Eigen::Vector4d::Zero();
 };
 
+// The searched rows at one ρ, with what of K(u) = ln(δeᵘ + 1 − δ) does not depend on δ:
+// e = expm1(−|u|), u = −ρ·d. Each δ then costs one log1p a row,
+//   K = log1p(δ·e) for u ≤ 0,   K = u + log1p((1−δ)·e) for u > 0   (ln(δeᵘ + 1 − δ) = u + ln(δ + (1−δ)e^(−u))),
+// where CesCompositeCurve takes two calls; good to about ε·max(1, |u|) in K, which is all a
+// start needs (the estimates come from the runs on all rows).
+struct CurvatureRows {
+    const CesLogs& logs;
+    double curvature;
+    Eigen::ArrayXd u;
+    Eigen::ArrayXd shrunk; // expm1(−|u|)
+
+    CurvatureRows(const CesLogs& searched, double rho) : logs(searched), curvature(rho)
+    {
+        u = -rho * searched.logRatio.array();
+        shrunk = u.abs().unaryExpr([](double v) { return std::expm1(-v); });
+    }
+
+    // b + H for every row at δ
+    Eigen::ArrayXd composite(double weight) const
+    {
+        Eigen::ArrayXd column(u.size());
+        for (Eigen::Index i = 0; i < u.size(); ++i) {
+            const double d = logs.logRatio(i);
+            double value = weight * d; // H at u = 0
+            if (u(i) < 0) value = d * std::log1p(weight * shrunk(i)) / u(i);
+            if (u(i) > 0) value = d * (u(i) + std::log1p((1 - weight) * shrunk(i))) / u(i);
+            column(i) = logs.logSecond(i) + value;
+        }
+        return column;
+    }
+};
+
 // For fixed δ and ρ the model is linear in ln A and ν: a simple regression of ln Y on b + H.
-ConcentratedFit concentrated(const CesLogs& logs, double weight, double curvature)
+ConcentratedFit concentrated(const CurvatureRows& rows, double weight)
 {
-    const Eigen::VectorXd composite = compositeColumn(logs, weight, curvature);
-    const Eigen::ArrayXd centredX = composite.array() - composite.mean();
+    const CesLogs& logs = rows.logs;
+    const Eigen::ArrayXd composite = rows.composite(weight);
+    const Eigen::ArrayXd centredX = composite - composite.mean();
     const Eigen::ArrayXd centredY = logs.logOutput.array() - logs.logOutput.mean();
     const double sxx = centredX.square().sum();
     ConcentratedFit fit;
     if (!(sxx > 0) || !std::isfinite(sxx)) return fit;
     const double slope = (centredX * centredY).sum() / sxx;
     fit.sumOfSquares = (centredY - slope * centredX).square().sum();
-    fit.raw = {logs.logOutput.mean() - slope * composite.mean(), weight, curvature, slope};
+    fit.raw = {logs.logOutput.mean() - slope * composite.mean(), weight, rows.curvature, slope};
     return fit;
 }
 
 // Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its neighbours.
 ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
 {
-    const auto sumOfSquares = [&](double logit) { return concentrated(logs, logistic(logit), curvature).sumOfSquares; };
+    const CurvatureRows rows(logs, curvature);
+    const auto sumOfSquares = [&](double logit) { return concentrated(rows, logistic(logit)).sumOfSquares; };
     std::size_t best = 0;
     double bestValue = std::numeric_limits<double>::infinity();
     constexpr std::size_t count = std::size(gridWeightLogits);
@@ -59,7 +98,7 @@ ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
     const double low = gridWeightLogits[best == 0 ? 0 : best - 1];
     const double high = gridWeightLogits[best + 1 == count ? best : best + 1];
     const auto [logit, value] = boost::math::tools::brent_find_minima(sumOfSquares, low, high, brentBits);
-    return concentrated(logs, logistic(value <= bestValue ? logit : gridWeightLogits[best]), curvature);
+    return concentrated(rows, logistic(value <= bestValue ? logit : gridWeightLogits[best]));
 }
 
 // ln Y = β₀ + β₁ ln x₁ + β₂ ln x₂ + β₃ d², the second-order expansion of ln Y about ρ = 0:
@@ -106,12 +145,15 @@ CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m)
     return sample;
 }
 
-// The Kmenta start from all rows, then the best grid points from the rows of evenlySpacedRows.
+// The Kmenta start, then the best grid points, from the rows of evenlySpacedRows (the grid from at
+// most gridRows of them). Like the grid, the Kmenta regression only proposes a start, which the
+// runs on the sample and on all rows then move.
 std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows)
 {
     std::vector<Eigen::Vector4d> starts;
-    if (const auto kmenta = kmentaStart(logs)) starts.push_back(*kmenta);
-    const CesLogs searched = evenlySpacedRows(logs, searchRows);
+    const CesLogs sample = evenlySpacedRows(logs, searchRows);
+    if (const auto kmenta = kmentaStart(sample)) starts.push_back(*kmenta);
+    const CesLogs searched = evenlySpacedRows(sample, gridRows);
     std::vector<ConcentratedFit> grid;
     for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, curvature));
     std::sort(grid.begin(), grid.end(),
@@ -125,21 +167,27 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
 // all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
 // coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
 // distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
-// not finite is replaced by the start itself.
-std::vector<Eigen::VectorXd> movedOnSample(const CesLogs& logs, const CesLogs& sample,
+// not finite is replaced by the start itself. The runs on the sample stop at a relative step of
+// sampleStepTolerance: their point only starts the runs on all rows, whose own optimum lies about
+// √(n/m) standard errors away (sampling), far beyond that; the last steps to 1e-15 would cost about
+// a third of their evaluations.
+std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
                                            const std::vector<Eigen::VectorXd>& starts,
                                            const NonlinearLeastSquaresOptions& options)
 {
     constexpr double sameMinimum = 1e-6;
+    constexpr double sampleStepTolerance = 1e-10;
+    NonlinearLeastSquaresOptions sampleOptions = options;
+    sampleOptions.relativeStepTolerance = std::max(options.relativeStepTolerance, sampleStepTolerance);
     const CesModel sampleModel(sample);
     std::vector<Eigen::VectorXd> moved;
     for (const Eigen::VectorXd& start : starts) {
-        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, options).parameters;
+        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
         const auto same = [&](const Eigen::VectorXd& other) {
             return ((reached - other).array().abs() <= sameMinimum * (1 + other.array().abs())).all();
         };
         if (std::any_of(moved.begin(), moved.end(), same)) continue;
-        if (!rawResiduals(logs, toRaw(reached)).allFinite()) reached = start;
+        if (!model.residuals(reached).allFinite()) reached = start;
         moved.push_back(reached);
     }
     return moved;

@@ -12,13 +12,14 @@ namespace isoquant::ces_fit {
 // Rows ⌊k·n/m⌋, k = 0, …, m − 1: every (n/m)-th row, from the first; all n rows when n ≤ m.
 CesLogs evenlySpacedRows(const CesLogs& logs, Eigen::Index m);
 
-// The Kmenta start from all rows, then the best grid points from the rows of evenlySpacedRows,
-// each as (ln A, δ, ρ, ν).
+// The Kmenta start, then the best grid points, from the rows of evenlySpacedRows (the grid on at
+// most 250 of them, evenly spaced again), each as (ln A, δ, ρ, ν).
 std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searchRows);
 
 // Each start (in solver coordinates) moved to the optimum the solver reaches from it on the
-// sample rows; starts that reach the same minimum are kept once.
-std::vector<Eigen::VectorXd> movedOnSample(const CesLogs& logs, const CesLogs& sample,
+// sample rows; starts that reach the same minimum are kept once. `model` is on all rows: a moved
+// start must have finite residuals there (its evaluation stays in the model's cache for the run).
+std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
                                            const std::vector<Eigen::VectorXd>& starts,
                                            const NonlinearLeastSquaresOptions& options);
 

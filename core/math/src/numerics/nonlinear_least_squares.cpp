@@ -28,7 +28,7 @@ public:
 
     int operator()(const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) const
     {
-        residuals = model_.residuals(parameters);
+        model_.residualsInto(parameters, residuals);
         for (Eigen::Index i = 0; i < residuals.size(); ++i)
             if (!std::isfinite(residuals(i))) residuals(i) = outsideDomainResidual;
         return 0;
@@ -36,7 +36,7 @@ public:
 
     int df(const Eigen::VectorXd& parameters, Eigen::MatrixXd& jacobian) const
     {
-        jacobian = model_.jacobian(parameters);
+        model_.jacobianInto(parameters, jacobian);
         return jacobian.allFinite() ? 0 : -1; // −1 stops the solver (status "user asked")
     }
 

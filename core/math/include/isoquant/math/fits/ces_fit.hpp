@@ -64,10 +64,11 @@ struct CesFitOptions {
     double boundaryDistance = 1e-6;
     // (ln A, δ, ρ, ν) to start from instead of the Kmenta and grid starts; needs δ ∈ (0, 1), ρ > −1.
     std::optional<Eigen::Vector4d> start;
-    // With n rows and m = startSearchRows < n, the grid over ρ (with δ searched, ln A and ν
-    // concentrated out) uses only the m rows ⌊k·n/m⌋, k = 0, …, m − 1, and the Kmenta and grid
-    // starts are each run to their optimum on these rows before the runs on all rows; with n ≤ m
-    // everything uses all rows. Why this is enough: the grid and the runs on the sample only choose
+    // With n rows and m = startSearchRows < n, the Kmenta regression and the grid over ρ (with δ
+    // searched, ln A and ν concentrated out) use only the m rows ⌊k·n/m⌋, k = 0, …, m − 1 (the
+    // grid at most 250 of these, evenly spaced again), and the Kmenta and grid starts are each run
+    // to their optimum on the m rows (to a relative step of 1e-10) before the runs on all rows;
+    // with n ≤ m the runs start from the Kmenta and grid points themselves. Why this is enough: the grid and the runs on the sample only choose
     // where the runs on all rows start, and so which basin they end in; the estimates come from all
     // rows. Evenly spaced rows are deterministic and span data sorted by any column; their sum of
     // squares is m/n times that of all rows up to a relative sampling error of about √(2/m), 4.5 %

@@ -24,6 +24,16 @@ public:
     virtual Eigen::VectorXd residuals(const Eigen::VectorXd& parameters) const = 0;
     // n × p
     virtual Eigen::MatrixXd jacobian(const Eigen::VectorXd& parameters) const = 0;
+    // The same into the caller's buffers, which the solver keeps from one evaluation to the next;
+    // a model that evaluates whole columns overrides these to write in place.
+    virtual void residualsInto(const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) const
+    {
+        residuals = this->residuals(parameters);
+    }
+    virtual void jacobianInto(const Eigen::VectorXd& parameters, Eigen::MatrixXd& jacobian) const
+    {
+        jacobian = this->jacobian(parameters);
+    }
 };
 
 struct NonlinearLeastSquaresOptions {
