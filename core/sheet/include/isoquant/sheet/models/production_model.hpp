@@ -58,8 +58,11 @@ struct ProductionModel {
     // The "effects" row says "two-way": period effects, which the table does not hold.
     bool hasPeriodEffects = false;
     // ln A is shifted (controls at their means, effects or a trend): the evaluators' ln A is then
-    // not a parameter of the covariance block.
+    // not ln A of the table's parameters.
     bool logScaleShifted = false;
+    // Shifted by controls or a trend, without effects: the covariance block's last row is the
+    // evaluators' ln A (covariance_block.hpp); under effects the block has no row for it.
+    bool covarianceCoversShiftedLogScale = false;
     // The covariance block of a PRODFIT table made with covariance TRUE (covariance_block.hpp).
     std::optional<CovarianceBlock> parameterCovariance;
 };
