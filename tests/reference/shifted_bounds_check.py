@@ -102,12 +102,7 @@ def main():
             beta, cov, t, _ = reference_script.fit_inference(np, stats, result, LEVEL)
 
             def se(function):
-                gradient = np.zeros(len(beta))
-                for j in range(len(beta)):
-                    stepped = beta.astype(complex)
-                    stepped[j] += COMPLEX_STEP * 1j
-                    gradient[j] = function(stepped).imag / COMPLEX_STEP
-                return math.sqrt(gradient @ cov @ gradient)
+                return reference_script.complex_step_standard_error(np, function, beta, cov, COMPLEX_STEP)
 
             for number, bundle in enumerate(BUNDLES):
                 logs = [math.log(amount) for amount in bundle]
