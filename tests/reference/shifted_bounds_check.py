@@ -26,6 +26,14 @@ positive quantities: output Y and the marginal product of emp, MP = e_emp Y / em
 the translog's a_emp + sum_j b_emp,j ln x_j), exp(ln q -+ t se(ln q)); one new plant's output:
 exp(ln Y -+ t sqrt(se(ln Y)^2 + scale)), scale = RSS/(n - p). BUNDLES are invented, inside the
 data's range.
+For the two Cobb-Douglas fits also the decisions, with s the evaluators' ln A and b the exponents
+(PLANS, BUDGETS and OBSERVED invented, numbered as the bundles): the least-cost amount of emp for
+output y at prices w from the first-order conditions, x_i = (b_i / w_i) lam with
+ln y = s + sum_j b_j (ln b_j + ln lam - ln w_j) solved for ln lam, and the least total cost
+sum_i w_i x_i (PRODLEASTCOST, PRODCOST); the output of the budget plan, whose first-order conditions
+b_i / x_i = mu w_i with sum_i w_i x_i = B give x_i = (b_i / sum_j b_j) B / w_i (PRODBUDGET); the TFP
+of an observed output Y_obs / Y(x) (PRODTFP, without periods): all positive, on the log scale; the
+cross second partial b_pcap b_emp Y / (pcap emp) (PRODSECOND): q -+ t se.
 
 Writes one figure per line: model,errors,quantity,bundle,value. Exits with 77 (the CTest skip code)
 when the libraries cannot be imported, leaving no OUTPUT_CSV behind.
@@ -40,6 +48,9 @@ import sys
 LEVEL = 0.95
 COMPLEX_STEP = 1e-20
 BUNDLES = [(15000.0, 35000.0, 1000.0), (25000.0, 60000.0, 2000.0), (8000.0, 20000.0, 500.0)]  # (pcap, pc, emp)
+PLANS = [(30000.0, (0.1, 0.1, 20.0)), (60000.0, (0.2, 0.1, 30.0)), (15000.0, (0.1, 0.2, 10.0))]  # (y, w)
+BUDGETS = [(40000.0, (0.1, 0.1, 20.0)), (80000.0, (0.2, 0.1, 30.0)), (20000.0, (0.1, 0.2, 10.0))]  # (B, w)
+OBSERVED = [35000.0, 60000.0, 15000.0]  # one state's output at each bundle (PRODTFP)
 MODELS = ("cd_trend", "cd_control", "translog_control")
 PAIRS = [(0, 0), (0, 1), (0, 2), (1, 1), (1, 2), (2, 2)]
 
@@ -76,6 +87,38 @@ def log_output_and_elasticity(model, beta, logs, shift_weights):
             elif j == 2:
                 elasticity += beta[4 + c] * logs[i]
     return log_output, elasticity
+
+
+def cobb_douglas_decisions(number, shift_weights):
+    """(name, on the log scale?, function of beta) for the decision figures at bundle `number`: the
+    logarithm of each positive figure, the second partial itself."""
+    bundle, (target, prices), (budget, budget_prices) = BUNDLES[number], PLANS[number], BUDGETS[number]
+    logs = [math.log(amount) for amount in bundle]
+
+    def log_scale(p):
+        return sum(weight * p[j] for j, weight in shift_weights)
+
+    def log_output(p):
+        return log_scale(p) + sum(p[1 + i] * logs[i] for i in range(3))
+
+    def log_amount(p, i):
+        exponents = p[1:4]
+        log_lam = (math.log(target) - log_scale(p) -
+                   sum(exponents[j] * (cmath.log(exponents[j]) - math.log(prices[j])) for j in range(3))) / sum(exponents)
+        return cmath.log(exponents[i]) - math.log(prices[i]) + log_lam
+
+    def log_cost(p):
+        return cmath.log(sum(prices[i] * cmath.exp(log_amount(p, i)) for i in range(3)))
+
+    def log_budget_output(p):
+        exponents = p[1:4]
+        return log_scale(p) + sum(exponents[i] * cmath.log(exponents[i] / sum(exponents) * budget / budget_prices[i])
+                                  for i in range(3))
+
+    return [("least_cost_emp", True, lambda p: log_amount(p, 2)), ("cost_total", True, log_cost),
+            ("budget_output", True, log_budget_output),
+            ("tfp", True, lambda p: math.log(OBSERVED[number]) - log_output(p)),
+            ("second_pcap_emp", False, lambda p: p[1] * p[3] * cmath.exp(log_output(p)) / (bundle[0] * bundle[2]))]
 
 
 def main():
@@ -117,11 +160,20 @@ def main():
                     ln_y, elasticity = log_output_and_elasticity(model, p, logs, shift_weights)
                     return cmath.log(elasticity) + ln_y - logs[2]
 
-                for name, log_quantity in (("output", log_output), ("marginal_emp", log_marginal)):
-                    value, log_se = math.exp(log_quantity(beta).real), se(log_quantity)
-                    put(name + "_se", value * log_se)
-                    put(name + "_lower", value * math.exp(-t * log_se))
-                    put(name + "_upper", value * math.exp(t * log_se))
+                quantities = [("output", True, log_output), ("marginal_emp", True, log_marginal)]
+                if model != "translog_control":
+                    quantities += cobb_douglas_decisions(number, shift_weights)
+                for name, log_scale, function in quantities:
+                    value, spread = function(beta.astype(complex)).real, se(function)
+                    if log_scale:
+                        value = math.exp(value)
+                        put(name + "_se", value * spread)
+                        put(name + "_lower", value * math.exp(-t * spread))
+                        put(name + "_upper", value * math.exp(t * spread))
+                    else:
+                        put(name + "_se", spread)
+                        put(name + "_lower", value - t * spread)
+                        put(name + "_upper", value + t * spread)
                 output, log_se = math.exp(log_output(beta)), se(log_output)
                 spread = math.sqrt(log_se ** 2 + result.scale)
                 put("prediction_lower", output * math.exp(-t * spread))

@@ -1,4 +1,5 @@
-// Standard errors and bounds of PRODOUTPUT and PRODMARGINAL over PRODFIT tables whose evaluators
+// Standard errors and bounds of PRODOUTPUT and PRODMARGINAL (and, for the Cobb-Douglas fits,
+// PRODLEASTCOST, PRODCOST, PRODBUDGET, PRODTFP and PRODSECOND) over PRODFIT tables whose evaluators
 // use a shifted ln A (issue 20: the covariance block's row "ln A at control means" or "ln A for
 // predictions"), against python3-statsmodels (the covariance of the same OLS fit, classical and
 // HC1) and a complex-step gradient of the same quantity in numpy, recomputed at test time by
@@ -37,6 +38,21 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 constexpr std::array<std::array<double, 3>, 3> bundles{
     {{15000.0, 35000.0, 1000.0}, {25000.0, 60000.0, 2000.0}, {8000.0, 20000.0, 500.0}}};
 
+// shifted_bounds_check.py's PLANS and BUDGETS: (target output or budget, the three prices), and
+// OBSERVED, numbered as the bundles.
+constexpr std::array<std::array<double, 4>, 3> plans{
+    {{30000.0, 0.1, 0.1, 20.0}, {60000.0, 0.2, 0.1, 30.0}, {15000.0, 0.1, 0.2, 10.0}}};
+constexpr std::array<std::array<double, 4>, 3> budgets{
+    {{40000.0, 0.1, 0.1, 20.0}, {80000.0, 0.2, 0.1, 30.0}, {20000.0, 0.1, 0.2, 10.0}}};
+constexpr std::array<double, 3> observed{35000.0, 60000.0, 15000.0};
+
+isoquant::CellTable pricesOf(const std::array<double, 4>& plan)
+{
+    isoquant::CellTable prices(1, 3);
+    for (std::size_t column = 0; column < 3; ++column) prices.set(0, column, plan[column + 1]);
+    return prices;
+}
+
 // The script's model `model` ("cd_trend", "cd_control", "translog_control") with `errors`, as
 // PRODFIT's table with covariance TRUE.
 isoquant::CellTable tableOf(const std::string& model, const std::string& errors)
@@ -64,8 +80,22 @@ double coreFigure(const isoquant::ModelTable& model, const std::string& quantity
     if (name == "prediction")
         return isoquant::outputColumnWithBounds(model, inputs, {}, "prediction " + suffix).number(0, 0);
     if (name == "output") return isoquant::outputColumnWithBounds(model, inputs, {}, words.at(suffix)).number(0, 0);
+    const std::string& word = words.at(suffix);
     if (name == "marginal_emp")
-        return isoquant::marginalProductColumnWithBounds(model, inputs, std::string("emp"), words.at(suffix))
+        return isoquant::marginalProductColumnWithBounds(model, inputs, std::string("emp"), word).number(0, 0);
+    if (name == "least_cost_emp")
+        return isoquant::leastCostRowWithBounds(model, plans[bundle][0], pricesOf(plans[bundle]), word).number(0, 2);
+    if (name == "cost_total")
+        return isoquant::costColumnWithBounds(model, isoquant::singleCell(plans[bundle][0]), pricesOf(plans[bundle]),
+                                              std::string("total"), word)
+            .number(0, 0);
+    if (name == "budget_output")
+        return isoquant::budgetRowWithBounds(model, budgets[bundle][0], pricesOf(budgets[bundle]), word).number(0, 3);
+    if (name == "tfp")
+        return isoquant::productivityColumnWithBounds(model, isoquant::singleCell(observed[bundle]), inputs, {}, word)
+            .number(0, 0);
+    if (name == "second_pcap_emp")
+        return isoquant::secondPartialColumnWithBounds(model, inputs, std::string("pcap"), std::string("emp"), word)
             .number(0, 0);
     throw std::runtime_error("unknown quantity " + quantity);
 }
@@ -79,8 +109,9 @@ BOOST_AUTO_TEST_CASE(bounds_with_a_shifted_ln_a_agree_with_statsmodels_and_numpy
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_SHIFTED_BOUNDS_FIGURES"));
-    // 3 models × 2 kinds of errors × 3 bundles × (2 positive quantities × 3 + 2 prediction bounds).
-    BOOST_TEST_REQUIRE(rows.size() == 3u * 2u * 3u * 8u);
+    // 3 models × 2 kinds of errors × 3 bundles × (2 quantities × 3 + 2 prediction bounds), and for
+    // the 2 Cobb-Douglas models × 2 × 3 bundles 5 decision figures × 3.
+    BOOST_TEST_REQUIRE(rows.size() == 3u * 2u * 3u * 8u + 2u * 2u * 3u * 15u);
     std::map<std::string, isoquant::ModelTable> tables;
     for (const auto& fields : rows) {
         const std::string key = fields.at(0) + " " + fields.at(1);
