@@ -50,6 +50,26 @@ double columnMean(const isoquant::CellTable& column)
     return sum / count;
 }
 
+// The refit of `arguments` (a control and a trend) reparametrised as at the top of the file: its θ' =
+// (s, the exponents, c), so its row 0 (Var(s), Cov(s, bᵢ), Cov(s, c)) is the last row of `block` at
+// the columns (s, b₁ … b₃, c), and its ln A is s.
+void checkAgainstReparametrisedRefit(isoquant::FitArguments arguments, const isoquant::ShiftedLogScale& shifted,
+                                     const Eigen::MatrixXd& block)
+{
+    const double meanRate = columnMean(arguments.controls);
+    arguments.controls = changed(arguments.controls, [&](double rate) { return rate - meanRate; });
+    arguments.trend = changed(arguments.trend, [](double year) { return -year; });
+    const auto refit = isoquant::fitFromArguments(arguments);
+    BOOST_TEST(std::fabs(refit.inference.estimates(0) - shifted.estimate) <= 1e-9 * std::fabs(shifted.estimate));
+    const Eigen::Index last = block.rows() - 1;
+    for (Eigen::Index j = 0; j < last; ++j) {
+        const Eigen::Index column = j == 0 ? last : j;
+        const double expected = refit.inference.covariance(0, j), actual = block(last, column);
+        BOOST_TEST(std::fabs(actual - expected) <= 1e-9 * std::sqrt(block(last, last) * block(column, column)),
+                   "parameter " << j << ": " << actual << " against " << expected);
+    }
+}
+
 } // namespace
 
 BOOST_AUTO_TEST_SUITE(shifted_covariance_block)
@@ -70,23 +90,20 @@ BOOST_AUTO_TEST_CASE(a_control_and_a_trend_add_the_row_of_ln_a_for_predictions)
     BOOST_TEST((model.parameterCovariance->matrix == isoquant::testing::blockMatrixOf(fit)));
     BOOST_TEST(model.parameterCovariance->labels.back() == "ln A for predictions");
 
-    // The reparametrised refit (see the top of the file).
+    checkAgainstReparametrisedRefit(trendedPanel(), *fit.shiftedScale, model.parameterCovariance->matrix);
+}
+
+// Under constant returns θ = T·β + offset maps the regression's coefficients (ln(Y/x_k) on ln(xᵢ/x_k))
+// to the parameters; the row of s goes through the same map.
+BOOST_AUTO_TEST_CASE(the_row_under_constant_returns_and_hc1_errors)
+{
     auto arguments = trendedPanel();
-    const double meanRate = columnMean(arguments.controls);
-    arguments.controls = changed(arguments.controls, [&](double rate) { return rate - meanRate; });
-    arguments.trend = changed(arguments.trend, [](double year) { return -year; });
-    const auto refit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST(std::fabs(refit.inference.estimates(0) - fit.shiftedScale->estimate) <=
-               1e-9 * std::fabs(fit.shiftedScale->estimate));
-    // The refit's θ' = (s, the exponents, c): its row 0 is (Var(s), Cov(s, bᵢ), Cov(s, c)), which the
-    // block holds in its last row at columns (s, b₁ … b₃, c).
-    const Eigen::MatrixXd& block = model.parameterCovariance->matrix;
-    for (Eigen::Index j = 0; j < 5; ++j) {
-        const Eigen::Index column = j == 0 ? 5 : j;
-        const double expected = refit.inference.covariance(0, j), actual = block(5, column);
-        BOOST_TEST(std::fabs(actual - expected) <= 1e-9 * std::sqrt(block(5, 5) * block(column, column)),
-                   "parameter " << j << ": " << actual << " against " << expected);
-    }
+    arguments.constantReturns = 1.0; // TRUE
+    arguments.errors = std::string("hc1");
+    const auto fit = isoquant::fitFromArguments(arguments);
+    BOOST_TEST_REQUIRE(fit.shiftedScale.has_value());
+    const auto model = isoquant::readProductionModel(tableWithBlock(fit));
+    checkAgainstReparametrisedRefit(arguments, *fit.shiftedScale, model.parameterCovariance->matrix);
 }
 
 BOOST_AUTO_TEST_CASE(a_control_alone_adds_the_row_of_ln_a_at_control_means)
