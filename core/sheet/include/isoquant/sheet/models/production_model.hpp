@@ -7,7 +7,9 @@
 // starts the covariance block (covariance_block.hpp), read back and checked to the table's end. A row labelled
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
 // "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
-// is one (fixed effects or a trend: the mean group effect over rows, at the latest period).
+// is one (fixed effects or a trend: the mean group effect over rows, at the latest period). With
+// controls or a trend and no effects, the covariance block ends with the row of that ln A
+// (covariance_block.hpp), which the reader then requires.
 //
 // The form row decides what the parameter rows mean:
 // - cobb-douglas: one exponent row per input, labelled by the input.
