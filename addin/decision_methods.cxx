@@ -107,13 +107,17 @@ Any ProductionFunctions::prodProfit(const AnyTable& model, const AnyTable& outpu
 }
 
 Any ProductionFunctions::prodFrontier(const AnyTable& output, const AnyTable& inputs, const Any& form,
-                                      const Any& inefficiency, const Any& level, const Any& controls)
+                                      const Any& inefficiency, const Any& level, const Any& controls,
+                                      const Any& covariance)
 {
     return guardedTable([&] {
-        return frontierTable(frontierFromArguments(
-            {toCellTable(output, argument::output), toCellTable(inputs, argument::inputs),
-             toSingleCell(form, argument::form), toSingleCell(inefficiency, argument::inefficiency),
-             toSingleCell(level, argument::level), toOptionalTable(controls, argument::controls)}));
+        const Cell withCovariance = toSingleCell(covariance, argument::covariance);
+        return frontierTableWithCovariance(
+            frontierFromArguments(
+                {toCellTable(output, argument::output), toCellTable(inputs, argument::inputs),
+                 toSingleCell(form, argument::form), toSingleCell(inefficiency, argument::inefficiency),
+                 toSingleCell(level, argument::level), toOptionalTable(controls, argument::controls)}),
+            withCovariance);
     });
 }
 

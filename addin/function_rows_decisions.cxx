@@ -147,8 +147,9 @@ std::vector<FunctionInfo> costFitFunctions()
           {argument::covariance,
            "TRUE to add below the table the estimated covariance matrix of the parameters (of the kind chosen "
            "by errors), one row per parameter, so that PRODCOST's statistic gives bounds from this table; the "
-           "table is then max(7, p + 1) columns wide and 1 + p rows longer, p parameters. Not with "
-           "inefficiency. FALSE or empty: no block."}}},
+           "table is then max(7, p + 1) columns wide and 1 + p rows longer, p parameters (with inefficiency "
+           "the inverse observed information; its header says likelihood and normal). FALSE or empty: no "
+           "block."}}},
     };
 }
 
@@ -168,7 +169,11 @@ std::vector<FunctionInfo> efficiencyFunctions()
           {argument::form, "\"cobb-douglas\" (default) or \"translog\"."},
           {argument::inefficiency, "Distribution of inefficiency: \"half-normal\" (default) or \"exponential\"."},
           levelArgument,
-          controlsArgument}},
+          controlsArgument,
+          {argument::covariance,
+           "TRUE to add below the table the estimated covariance matrix of the frontier's coefficients (the "
+           "inverse observed information; its header says likelihood and normal), one row per coefficient; "
+           "the table is then max(7, p + 1) columns wide and 1 + p rows longer. FALSE or empty: no block."}}},
         {"prodEfficiency",
          "PRODEFFICIENCY",
          "Technical efficiency of each row from a PRODFRONTIER table: the expected share of frontier output the "

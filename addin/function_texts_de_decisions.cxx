@@ -140,7 +140,8 @@ std::vector<TranslatedFunction> germanCostTexts()
           {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Parameter anzufügen (der unter "
                         "Standardfehler gewählten Art), eine Zeile je Parameter, damit die Statistik von PRODCOST "
                         "Grenzen aus dieser Tabelle liefert; die Tabelle ist dann max(7, p + 1) Spalten breit und "
-                        "1 + p Zeilen länger, p Parameter. Nicht mit Ineffizienz. FALSCH oder leer: kein Block."}}},
+                        "1 + p Zeilen länger, p Parameter (mit Ineffizienz die inverse beobachtete Information; ihre "
+                        "Kopfzeile sagt likelihood und normal). FALSCH oder leer: kein Block."}}},
     };
 }
 
@@ -148,57 +149,63 @@ std::vector<TranslatedFunction> germanCostTexts()
 std::vector<TranslatedFunction> germanEfficiencyTexts()
 {
     return {
-    {"prodFrontier",
-     "Schätzt eine stochastische Produktionsgrenze nach der Maximum-Likelihood-Methode: ln Ausbringung = "
-     "Grenze + Störterm - Ineffizienz. Gibt eine Tabelle zurück (als Matrixformel eingeben): die Schätzwerte "
-     "der Grenze, Standardabweichung von Störterm und Ineffizienz und lambda mit Standardfehlern, die "
-     "Likelihood, einen Test, ob es überhaupt Ineffizienz gibt, die mittlere Effizienz, die Skalenerträge und "
-     "die Konvergenz. Das Ergebnis hängt von der angenommenen Verteilung der Ineffizienz ab; es misst, wie weit "
-     "eine Zeile zurückliegt, nicht warum.",
-     {germanOutputArgument, germanInputsArgument,
-      {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
-      {"Ineffizienz", "Verteilung der Ineffizienz: \"half-normal\" (Standard, halbnormal) oder \"exponential\" "
-                      "(exponentialverteilt)."},
-      levelArgument, controlsArgument}},
-    {"prodEfficiency",
-     "Technische Effizienz jeder Zeile aus einer PRODFRONTIER-Tabelle: der erwartete Anteil der Ausbringung an "
-     "der Grenze, den die Zeile erreicht (1 = auf der Grenze), oder ihre Ineffizienz oder die Grenzen ihrer "
-     "Effizienz. Aus einer PRODCOSTFIT-Kostengrenze die Kosteneffizienz: das erwartete Verhältnis der "
-     "geringsten Kosten zu den Kosten der Zeile (höchstens 1). Eine Spalte, ein Wert je Zeile.",
-     {{"Modell", "Eine ganze PRODFRONTIER-Tabelle (ihre erste Zelle lautet \"half-normal frontier\" oder "
-                 "\"exponential frontier\") oder eine mit Ineffizienz geschätzte PRODCOSTFIT-Tabelle "
-                 "(\"half-normal cost frontier\" oder \"exponential cost frontier\")."},
-      {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen. Bei einer Kostengrenze "
-                      "stattdessen die Kosten jeder Zeile."},
-      {"Faktormengen", "Faktormengen jeder Zeile in der Reihenfolge der Tabelle (danach ihre Kontrollvariablen, "
-                       "falls sie welche hat), so viele Zeilen wie die Ausbringung. Eine erste Textzeile benennt "
-                       "die Spalten, die dann nach Bezeichnung zugeordnet werden. Bei einer Kostengrenze die "
-                       "Spalte der Ausbringung, danach die Preisspalten in der Reihenfolge von PRODCOSTFIT."},
-      {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
-                   "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
-                   "zum Konfidenzniveau der Tabelle, Horrace und Schmidt; bei gegebenem Residuum und "
-                   "geschätzten Parametern, ohne deren Schätzunsicherheit)."}}},
-    {"prodEnvelope",
-     "Data Envelopment Analysis: die Effizienz jeder Zeile (jedes Betriebs) gegenüber der besten Praxis aller "
-     "Zeilen, durch lineare Optimierung; mehrere Ausbringungen erlaubt. Eine Spalte, ein Wert je Zeile (1 = auf "
-     "dem Rand). Ein Wert gilt nur relativ zu den gegebenen Zeilen: wenige Zeilen und viele Faktoren machen die "
-     "Werte hoch.",
-     {{"Ausbringungen", "Ausbringungen jeder Zeile, eine Spalte je Ausbringung, Zahlen von null an, jede Zeile "
-                        "mit einer positiven. Eine erste Textzeile benennt die Ausbringungen."},
-      {"Faktormengen", "Faktormengen jeder Zeile, eine Spalte je Faktor, Zahlen von null an, jede Zeile mit einer "
-                       "positiven, so viele Zeilen wie die Ausbringungen. Eine erste Textzeile benennt die "
-                       "Faktoren."},
-      {"Skalenerträge", "Skalenerträge des Randes: \"constant\" (Standard, konstant), \"variable\" (variabel) "
-                        "oder \"non-increasing\" (nicht steigend)."},
-      {"Orientierung", "\"input\" (Standard: der Anteil ihrer Faktormengen, den eine Zeile bräuchte) oder "
-                       "\"output\" (ihre Ausbringung als Anteil dessen, was sie erzeugen könnte, 1/phi)."},
-      {"Kennzahl", "\"score\" (Standard: der Effizienzwert), \"scale efficiency\" (Skaleneffizienz: Wert bei "
-                   "konstanten / Wert bei variablen Skalenerträgen), \"peers\" (die Vergleichszeilen und ihre "
-                   "Gewichte) oder \"target <Bezeichnung>\" (die Menge dieses Faktors oder dieser Ausbringung "
-                   "auf dem Rand, Schlupf eingeschlossen)."},
-      {"Namen", "Optionale Spalte mit dem Namen jeder Zeile (Betrieb oder Filiale), so viele Zeilen wie die "
-                "Ausbringungen, eine Kopfzeile erlaubt: Vergleichszeilen werden dann mit diesen Namen statt mit "
-                "Zeilennummern genannt."}}},
+        {"prodFrontier",
+         "Schätzt eine stochastische Produktionsgrenze nach der Maximum-Likelihood-Methode: ln Ausbringung = "
+         "Grenze + Störterm - Ineffizienz. Gibt eine Tabelle zurück (als Matrixformel eingeben): die Schätzwerte "
+         "der Grenze, Standardabweichung von Störterm und Ineffizienz und lambda mit Standardfehlern, die "
+         "Likelihood, einen Test, ob es überhaupt Ineffizienz gibt, die mittlere Effizienz, die Skalenerträge und "
+         "die Konvergenz. Das Ergebnis hängt von der angenommenen Verteilung der Ineffizienz ab; es misst, wie weit "
+         "eine Zeile zurückliegt, nicht warum.",
+         {germanOutputArgument,
+          germanInputsArgument,
+          {"Funktionsform", "\"cobb-douglas\" (Standard) oder \"translog\"."},
+          {"Ineffizienz", "Verteilung der Ineffizienz: \"half-normal\" (Standard, halbnormal) oder \"exponential\" "
+                          "(exponentialverteilt)."},
+          levelArgument,
+          controlsArgument,
+          {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Koeffizienten der Grenze "
+                        "anzufügen (die inverse beobachtete Information; ihre Kopfzeile sagt likelihood und normal), "
+                        "eine Zeile je Koeffizient; die Tabelle ist dann max(7, p + 1) Spalten breit und 1 + p Zeilen "
+                        "länger. FALSCH oder leer: kein Block."}}},
+        {"prodEfficiency",
+         "Technische Effizienz jeder Zeile aus einer PRODFRONTIER-Tabelle: der erwartete Anteil der Ausbringung an "
+         "der Grenze, den die Zeile erreicht (1 = auf der Grenze), oder ihre Ineffizienz oder die Grenzen ihrer "
+         "Effizienz. Aus einer PRODCOSTFIT-Kostengrenze die Kosteneffizienz: das erwartete Verhältnis der "
+         "geringsten Kosten zu den Kosten der Zeile (höchstens 1). Eine Spalte, ein Wert je Zeile.",
+         {{"Modell", "Eine ganze PRODFRONTIER-Tabelle (ihre erste Zelle lautet \"half-normal frontier\" oder "
+                     "\"exponential frontier\") oder eine mit Ineffizienz geschätzte PRODCOSTFIT-Tabelle "
+                     "(\"half-normal cost frontier\" oder \"exponential cost frontier\")."},
+          {"Ausbringung", "Ausbringungsmenge jeder Zeile: eine Spalte positiver Zahlen. Bei einer Kostengrenze "
+                          "stattdessen die Kosten jeder Zeile."},
+          {"Faktormengen", "Faktormengen jeder Zeile in der Reihenfolge der Tabelle (danach ihre Kontrollvariablen, "
+                           "falls sie welche hat), so viele Zeilen wie die Ausbringung. Eine erste Textzeile benennt "
+                           "die Spalten, die dann nach Bezeichnung zugeordnet werden. Bei einer Kostengrenze die "
+                           "Spalte der Ausbringung, danach die Preisspalten in der Reihenfolge von PRODCOSTFIT."},
+          {"Kennzahl", "\"efficiency\" (Standard: E[exp(-u) | Residuum], Battese und Coelli), \"inefficiency\" "
+                       "(E[u | Residuum], Jondrow u. a.), \"lower bound\" oder \"upper bound\" (der Effizienz, "
+                       "zum Konfidenzniveau der Tabelle, Horrace und Schmidt; bei gegebenem Residuum und "
+                       "geschätzten Parametern, ohne deren Schätzunsicherheit)."}}},
+        {"prodEnvelope",
+         "Data Envelopment Analysis: die Effizienz jeder Zeile (jedes Betriebs) gegenüber der besten Praxis aller "
+         "Zeilen, durch lineare Optimierung; mehrere Ausbringungen erlaubt. Eine Spalte, ein Wert je Zeile (1 = auf "
+         "dem Rand). Ein Wert gilt nur relativ zu den gegebenen Zeilen: wenige Zeilen und viele Faktoren machen die "
+         "Werte hoch.",
+         {{"Ausbringungen", "Ausbringungen jeder Zeile, eine Spalte je Ausbringung, Zahlen von null an, jede Zeile "
+                            "mit einer positiven. Eine erste Textzeile benennt die Ausbringungen."},
+          {"Faktormengen", "Faktormengen jeder Zeile, eine Spalte je Faktor, Zahlen von null an, jede Zeile mit einer "
+                           "positiven, so viele Zeilen wie die Ausbringungen. Eine erste Textzeile benennt die "
+                           "Faktoren."},
+          {"Skalenerträge", "Skalenerträge des Randes: \"constant\" (Standard, konstant), \"variable\" (variabel) "
+                            "oder \"non-increasing\" (nicht steigend)."},
+          {"Orientierung", "\"input\" (Standard: der Anteil ihrer Faktormengen, den eine Zeile bräuchte) oder "
+                           "\"output\" (ihre Ausbringung als Anteil dessen, was sie erzeugen könnte, 1/phi)."},
+          {"Kennzahl", "\"score\" (Standard: der Effizienzwert), \"scale efficiency\" (Skaleneffizienz: Wert bei "
+                       "konstanten / Wert bei variablen Skalenerträgen), \"peers\" (die Vergleichszeilen und ihre "
+                       "Gewichte) oder \"target <Bezeichnung>\" (die Menge dieses Faktors oder dieser Ausbringung "
+                       "auf dem Rand, Schlupf eingeschlossen)."},
+          {"Namen", "Optionale Spalte mit dem Namen jeder Zeile (Betrieb oder Filiale), so viele Zeilen wie die "
+                    "Ausbringungen, eine Kopfzeile erlaubt: Vergleichszeilen werden dann mit diesen Namen statt mit "
+                    "Zeilennummern genannt."}}},
     };
 }
 

@@ -103,7 +103,7 @@ public:
                                    const css::uno::Any& inputI, const css::uno::Any& inputJ) override;
     css::uno::Any SAL_CALL prodFrontier(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
                                         const css::uno::Any& inefficiency, const css::uno::Any& level,
-                                        const css::uno::Any& controls) override;
+                                        const css::uno::Any& controls, const css::uno::Any& covariance) override;
     css::uno::Any SAL_CALL prodEfficiency(const AnyTable& model, const AnyTable& output, const AnyTable& inputs,
                                           const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodEnvelope(const AnyTable& outputs, const AnyTable& inputs, const css::uno::Any& returns,

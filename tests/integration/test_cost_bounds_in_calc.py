@@ -10,17 +10,18 @@ Sources of the expected figures, named beside each check:
   the bounds C exp(-/+ t s) with scipy's t quantile on the block's degrees of freedom (python3-scipy).
   The same arithmetic in another order: 1e-10 relative (the t quantile's own accuracy is ~1e-12).
 - Figures against python3-statsmodels: tests/unit/test_cost_cross_check.cpp (cost_check.py).
-- Error messages: the wording in core/sheet/src/tables/cost_table.cpp and
-  core/sheet/src/functions/cost_model_bounds.cpp, prefixed "Error: " by the add-in.
+- "the table's own cells": the block's diagonal against the squared standard errors beside it
+  (1e-12 relative: a square root).
 """
 
 import math
 import unittest
 
-from isoquant_office import get_cell, get_range, recalc, set_array_formula
+from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_values
 
 from .support import module_session
 from .test_cost_in_calc import DATA, prepare
+from .test_cost_frontier_in_calc import DATA as DEPOTS
 
 try:  # the t quantile; its check is skipped without scipy
     from scipy import stats
@@ -42,7 +43,8 @@ class CostBlockTest(unittest.TestCase):
         for column, statistic in zip("CJ CK CL CM".split(), ["value", "std. error", "lower bound", "upper bound"]):
             set_array_formula(CALC.sheet, "%s2:%s6" % (column, column),
                               '=PRODCOST($CA$1:$CG$28;B2:B6;C2:E6;"total";"%s")' % statistic)
-        set_array_formula(CALC.sheet, "CO2", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;;;;;;"half-normal";TRUE())')
+        set_values(CALC.sheet, "DA1", [["cost", "parcels", "driver hour", "van day", "fuel"]] + DEPOTS)
+        set_array_formula(CALC.sheet, "CO1:CU34", '=PRODCOSTFIT(DA1:DA121;DB1:DB121;DC1:DE121;;;;;;;;;;"half-normal";TRUE())')
         recalc(CALC.doc)
 
     def block(self):
@@ -79,10 +81,17 @@ class CostBlockTest(unittest.TestCase):
             self.assertAlmostEqual(lower / (value * math.exp(-t * spread)), 1.0, delta=FORMULA_TOLERANCE)
             self.assertAlmostEqual(upper / (value * math.exp(t * spread)), 1.0, delta=FORMULA_TOLERANCE)
 
-    def test_a_cost_frontier_refuses_the_block(self):
-        self.assertEqual(get_cell(CALC.sheet, "CO2"),
-                         "Error: covariance: not available with inefficiency: a cost frontier's inference is the "
-                         "normal's, which the block's degrees of freedom cannot state; leave covariance empty")
+    def test_a_cost_frontier_block_is_the_likelihood_s(self):
+        """The depot chain of test_cost_frontier_in_calc.py (invented, with inefficiency): k + 25 = 28
+        rows of the frontier table, then 1 + 5: the header says likelihood and normal, the diagonal
+        holds the squared standard errors of the table's own parameter rows."""
+        table = get_range(CALC.sheet, "CO1:CU34")
+        self.assertEqual(table[0][0], "half-normal cost frontier")
+        self.assertEqual(table[25][1], "converged")
+        self.assertEqual(table[28][:3], ["covariance", "likelihood", "normal"])
+        for i in range(PARAMETERS):
+            self.assertEqual(table[29 + i][0], table[1 + i][0])
+            self.assertAlmostEqual(math.sqrt(table[29 + i][1 + i]) / table[1 + i][2], 1.0, delta=1e-12)
 
 
 if __name__ == "__main__":

@@ -160,7 +160,21 @@ class EfficiencyTest(FrontierTestCase):
         set_array_formula(CALC.sheet, "V1:V81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"lower bound")')
         set_array_formula(CALC.sheet, "W1:W81", '=PRODEFFICIENCY($M$1:$S$18;A1:A81;B1:C81;"upper bound")')
         set_array_formula(CALC.sheet, "X2", "=PRODEFFICIENCY($M$1:$S$18;A2;B2:C2)")
+        set_array_formula(CALC.sheet, "M101:S122", "=PRODFRONTIER(A1:A81;B1:C81;;;;;TRUE())")
+        set_array_formula(CALC.sheet, "U101:U181", "=PRODEFFICIENCY($M$101:$S$122;A1:A81;B1:C81)")
         recalc(CALC.doc)
+
+    def test_the_covariance_block_is_read_past(self):
+        """covariance TRUE: 18 + 1 + 3 rows; the block's diagonal is the squared standard errors of the
+        table's own coefficient rows (1e-12), and PRODEFFICIENCY reads the table as without it."""
+        table = get_range(CALC.sheet, "M101:S122")
+        self.assertEqual(table[18][:4], ["covariance", "likelihood", "normal", 0.95])
+        self.assertEqual([row[0] for row in table[19:22]], ["ln A"] + LABELS)
+        for i in range(3):
+            self.assert_close(table[19 + i][1 + i], table[1 + i][2] ** 2, FORMULA_TOLERANCE, "variance %d" % i)
+            for j in range(3):  # symmetric up to the rounding of the inverse (the reader allows 1e-8)
+                self.assertAlmostEqual(table[19 + i][1 + j], table[19 + j][1 + i], delta=1e-12 * table[19 + i][1 + i])
+        self.assertEqual(get_range(CALC.sheet, "U101:U181"), [[row[0]] for row in get_range(CALC.sheet, "U1:U81")])
 
     def test_efficiency_column_against_the_formula(self):
         import numpy as np
@@ -218,8 +232,9 @@ class FunctionWizardTest(unittest.TestCase):
         self.assertEqual(sorted(listed), ["PRODEFFICIENCY", "PRODFRONTIER"])
         self.assertIn("stochastic production frontier", listed["PRODFRONTIER"]["Description"])
         arguments = listed["PRODFRONTIER"]["Arguments"]
-        self.assertEqual([a.Name for a in arguments], ["output", "inputs", "form", "inefficiency", "level", "controls"])
-        self.assertEqual([a.IsOptional for a in arguments], [i >= 2 for i in range(6)])
+        self.assertEqual([a.Name for a in arguments],
+                         ["output", "inputs", "form", "inefficiency", "level", "controls", "covariance"])
+        self.assertEqual([a.IsOptional for a in arguments], [i >= 2 for i in range(7)])
         arguments = listed["PRODEFFICIENCY"]["Arguments"]
         self.assertEqual([a.Name for a in arguments], ["model", "output", "inputs", "what"])
         self.assertEqual([a.IsOptional for a in arguments], [i >= 3 for i in range(4)])

@@ -59,7 +59,7 @@ GERMAN_ARGUMENTS = {
     "PRODEFFICIENTSCALE": ["Modell", "Faktorpreise"],
     "PRODPRICEELASTICITY": ["Modell", "Ausbringung", "Faktorpreise", "Faktor i", "Faktor j", "Art"],
     "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
-                     "Kontrollvariablen"],
+                     "Kontrollvariablen", "Kovarianz"],
     "PRODEFFICIENCY": ["Modell", "Ausbringung", "Faktormengen", "Kennzahl"],
     "PRODENVELOPE": ["Ausbringungen", "Faktormengen", "Skalenerträge", "Orientierung", "Kennzahl", "Namen"],
     "PRODOUTPUT": AT_BUNDLES + ["Mittelwert", "Kennzahl"],

@@ -121,23 +121,35 @@ def figures(np, sm, put, form, cov_type, cost, output, prices):
     gradient[1] = 1.0
     if form == "translog":
         gradient[2 + (k - 1)] = log_output.mean()
-        mean_relative = relative.mean(axis=0)
-        gradient[-(k - 1):] = mean_relative
-    elasticity = fit.t_test(gradient.reshape(1, -1))
-    put(name, "elasticity", float(np.squeeze(elasticity.effect)))
-    put(name, "elasticity_se", float(np.squeeze(elasticity.sd)))
-    unit_test = fit.f_test((gradient.reshape(1, -1), np.array([1.0])))
-    put(name, "unit_fvalue", float(np.squeeze(unit_test.fvalue)))
-    put(name, "unit_pvalue", float(np.squeeze(unit_test.pvalue)))
-    if form == "translog":
-        curvature = fit.params[2 + (k - 1)]
-        rest = gradient.copy()
-        rest[2 + (k - 1)] = 0.0
-        log_scale = (1.0 - rest @ fit.params) / curvature
-        delta = -rest / curvature
-        delta[2 + (k - 1)] = -log_scale / curvature
-        put(name, "efficient_scale", float(np.exp(log_scale)))
-        put(name, "efficient_scale_se", float(np.exp(log_scale) * np.sqrt(delta @ fit.cov_params() @ delta)))
+        gradient[design.shape[1] - (k - 1):] = relative.mean(axis=0)
+    elasticity_figures(np, lambda q, v: put(name, q, v), fit, gradient, form, k)
+
+
+def elasticity_figures(np, put, fit, gradient, form, k, covariance=None):
+    """The cost elasticity gᵀb with its standard error and test of 1, and for the translog the
+    efficient scale (where the elasticity is 1 at the mean log prices; only where it rises with
+    output, else its absence) with its delta-method standard error; `covariance` in place of the
+    fit's own (cost_panel_check.py's cluster factor)."""
+    elasticity = fit.t_test(gradient.reshape(1, -1), cov_p=covariance)
+    put("elasticity", float(np.squeeze(elasticity.effect)))
+    put("elasticity_se", float(np.squeeze(elasticity.sd)))
+    unit_test = fit.f_test((gradient.reshape(1, -1), np.array([1.0])), cov_p=covariance)
+    put("unit_fvalue", float(np.squeeze(unit_test.fvalue)))
+    put("unit_pvalue", float(np.squeeze(unit_test.pvalue)))
+    if form != "translog":
+        return
+    curvature = fit.params[2 + (k - 1)]
+    put("efficient_scale_exists", 1.0 if curvature > 0 else 0.0)  # else average cost has no minimum
+    if curvature <= 0:
+        return
+    rest = gradient.copy()
+    rest[2 + (k - 1)] = 0.0
+    log_scale = (1.0 - rest @ fit.params) / curvature
+    delta = -rest / curvature
+    delta[2 + (k - 1)] = -log_scale / curvature
+    used = fit.cov_params() if covariance is None else covariance
+    put("efficient_scale", float(np.exp(log_scale)))
+    put("efficient_scale_se", float(np.exp(log_scale) * np.sqrt(delta @ used @ delta)))
 
 
 POINTS = [0, 100, 500]

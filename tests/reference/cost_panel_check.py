@@ -131,25 +131,7 @@ def figures(np, sm, put, name, spec, data, panel):
         gradient[2 + (k - 1)] = np.log(output).mean()
         relative = np.log(prices[:, :-1]) - np.log(prices[:, -1:])
         gradient[base_width - (k - 1):base_width] = relative.mean(axis=0)
-    elasticity = fit.t_test(gradient.reshape(1, -1), cov_p=used)
-    put(name, "elasticity", float(np.squeeze(elasticity.effect)))
-    put(name, "elasticity_se", float(np.squeeze(elasticity.sd)))
-    unit_test = fit.f_test((gradient.reshape(1, -1), np.array([1.0])), cov_p=used)
-    put(name, "unit_fvalue", float(np.squeeze(unit_test.fvalue)))
-    put(name, "unit_pvalue", float(np.squeeze(unit_test.pvalue)))
-    if form == "translog":
-        covariance = fit.cov_params() if used is None else used
-        curvature = fit.params[2 + (k - 1)]
-        put(name, "efficient_scale_exists", 1.0 if curvature > 0 else 0.0)  # else average cost has no minimum
-        if curvature <= 0:
-            return
-        rest = gradient.copy()
-        rest[2 + (k - 1)] = 0.0
-        log_scale = (1.0 - rest @ fit.params) / curvature
-        delta = -rest / curvature
-        delta[2 + (k - 1)] = -log_scale / curvature
-        put(name, "efficient_scale", float(np.exp(log_scale)))
-        put(name, "efficient_scale_se", float(np.exp(log_scale) * np.sqrt(delta @ covariance @ delta)))
+    cost_check.elasticity_figures(np, lambda q, v: put(name, q, v), fit, gradient, form, k, used)
 
 
 def main():

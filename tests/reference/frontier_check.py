@@ -129,6 +129,7 @@ def fit_figures(np, optimize, put, frontier, start_list):
     put("noise_sd", np.exp(best.x[p]))
     put("inefficiency_sd", np.exp(best.x[p + 1]))
     put("coefficient_se", np.sqrt(np.diag(covariance)[:p]))
+    put("coefficient_covariance", covariance[:p, :p].flatten())  # row by row: PRODFRONTIER's block
     put("log_noise_sd_se", np.sqrt(covariance[p, p]))
     put("log_inefficiency_sd_se", np.sqrt(covariance[p + 1, p + 1]))
 

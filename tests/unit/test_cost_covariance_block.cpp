@@ -1,11 +1,12 @@
 // PRODCOSTFIT's `covariance` TRUE: the block's shape and labels, PRODCOST reading it back, and the
-// messages where it cannot serve (a cost frontier; a shifted constant; a typed model without one).
+// messages where it cannot serve (a shifted constant); a cost frontier's block (the likelihood's).
 // The figures against python3-statsmodels are in test_cost_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "cell_tables.hpp"
+#include "cost_test_data.hpp"
 #include "input_error_message.hpp"
 #include "reference_data.hpp"
 
@@ -77,16 +78,32 @@ BOOST_AUTO_TEST_CASE(the_block_follows_the_parameter_rows)
     BOOST_TEST(figure("std. error") > 0.0);
 }
 
+BOOST_AUTO_TEST_CASE(a_cost_frontier_block_is_the_likelihood_s)
+{
+    const isoquant::CostFitArguments arguments = isoquant::testing::depots(300, 41); // invented, of known inefficiency
+    const isoquant::CostFit frontier = isoquant::costFitFromArguments(arguments);
+    const CellTable plain = isoquant::costFitTable(frontier);
+    const CellTable table = isoquant::costFitTableWithCovariance(frontier, 1.0);
+    BOOST_TEST(table.rows() == plain.rows() + 1 + 4);
+    BOOST_TEST(table.text(plain.rows(), 1) == "likelihood");
+    BOOST_TEST(table.text(plain.rows(), 2) == "normal");
+    const isoquant::CostModel model = isoquant::readCostModel(table);
+    BOOST_TEST_REQUIRE(model.covariance.has_value());
+    BOOST_TEST(std::isinf(model.covariance->degreesOfFreedom));
+    // The elasticity's bounds are the table's own (normal, at its level): the row `cost elasticity`.
+    const isoquant::ModelTable withBlock(table);
+    CellTable twoPrices(1, 2);
+    twoPrices.set(0, 0, 10.0);
+    twoPrices.set(0, 1, 5.0);
+    const double lower = isoquant::costColumnWithBounds(withBlock, oneCell(100.0), twoPrices,
+                                                        std::string("cost elasticity"), std::string("lower bound"))
+                             .number(0, 0);
+    BOOST_TEST(std::fabs(lower - frontier.costElasticity.lowerBound) <= 1e-12 * std::fabs(lower));
+}
+
 BOOST_AUTO_TEST_CASE(where_the_block_cannot_serve_a_message_says_so)
 {
-    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostArguments();
-    arguments.inefficiency = std::string("half-normal");
-    const isoquant::CostFit frontier = isoquant::costFitFromArguments(arguments);
-    BOOST_TEST(messageOf([&] { isoquant::costFitTableWithCovariance(frontier, 1.0); }) ==
-               "covariance: not available with inefficiency: a cost frontier's inference is the normal's, which the "
-               "block's degrees of freedom cannot state; leave covariance empty");
-
-    arguments = isoquant::testing::riceFarmCostPanelArguments();
+    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostPanelArguments();
     arguments.groups = {};
     arguments.trend = {};
     const isoquant::ModelTable shifted(

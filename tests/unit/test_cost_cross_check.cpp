@@ -21,6 +21,7 @@
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "cell_tables.hpp"
+#include "cost_figures.hpp"
 #include "reference_data.hpp"
 #include "reference_figures.hpp"
 #include "relative_error.hpp"
@@ -43,27 +44,6 @@ constexpr std::array<int, 3> boundPoints{0, 100, 500}; // cost_check.py's POINTS
 boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
 {
     return isoquant::testing::referenceFiguresAvailable("ISOQUANT_COST_FIGURES", "cost figures");
-}
-
-double coreFigure(const isoquant::CostFit& fit, const std::string& q, Eigen::Index i)
-{
-    const auto& summary = fit.summary;
-    if (q == "params") return summary.inference.estimates(i);
-    if (q == "bse") return summary.inference.standardErrors(i);
-    if (q == "pvalues") return summary.inference.pValues(i);
-    if (q == "rsquared") return summary.rSquared;
-    if (q == "fvalue") return summary.summary.fStatistic;
-    if (q == "llf") return summary.summary.logLikelihood;
-    if (q == "aic") return summary.summary.aic;
-    if (q == "bic") return summary.summary.bic;
-    if (q == "smearing") return summary.smearingFactor;
-    if (q == "elasticity") return fit.costElasticity.estimate;
-    if (q == "elasticity_se") return fit.costElasticity.standardError;
-    if (q == "unit_fvalue") return summary.returns.fStatistic;
-    if (q == "unit_pvalue") return summary.returns.pValue;
-    if (q == "efficient_scale") return fit.efficientScale ? fit.efficientScale->estimate : std::nan("");
-    if (q == "efficient_scale_se") return fit.efficientScale ? fit.efficientScale->standardError : std::nan("");
-    return std::numeric_limits<double>::quiet_NaN();
 }
 
 // "bound_se_<what>" or "bound_lower_total" at the point-th row of POINTS, through PRODCOST on the
@@ -109,7 +89,7 @@ BOOST_AUTO_TEST_CASE(cost_functions_agree_with_statsmodels, *boost::unit_test::p
                        form << " " << quantity << " " << fields.at(3));
             continue;
         }
-        const double actual = coreFigure(fits.at(form), quantity, std::stol(fields.at(3)));
+        const double actual = isoquant::testing::costFitFigure(fits.at(form), quantity, std::stol(fields.at(3)));
         BOOST_TEST(closeTo(actual, expected, statsmodelsTolerance), form << " " << quantity << " " << fields.at(3));
     }
 }

@@ -13,6 +13,7 @@
 // CTest runs the script first (test cost_panel_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_COST_PANEL_FIGURES; without that file this test is skipped.
 #include "isoquant/sheet/functions/cost_functions.hpp"
+#include "cost_figures.hpp"
 #include "reference_data.hpp"
 #include "reference_figures.hpp"
 #include "relative_error.hpp"
@@ -68,34 +69,6 @@ isoquant::CostFit fitModel(const ModelOptions& options)
     return isoquant::costFitFromArguments(arguments);
 }
 
-double coreFigure(const isoquant::CostFit& fit, const std::string& q, Eigen::Index i)
-{
-    const auto& summary = fit.summary;
-    const auto& trend = summary.panel.technicalChange;
-    if (q == "params") return summary.inference.estimates(i);
-    if (q == "bse") return summary.inference.standardErrors(i);
-    if (q == "pvalues") return summary.inference.pValues(i);
-    if (q == "trend") return trend ? trend->estimate : std::nan("");
-    if (q == "trend_se") return trend ? trend->standardError : std::nan("");
-    if (q == "trend_pvalue") return trend ? trend->pValue : std::nan("");
-    if (q == "rsquared") return summary.rSquared;
-    if (q == "rsquared_adj") return summary.adjustedRSquared;
-    if (q == "within_rsquared") return summary.panel.withinRSquared;
-    if (q == "fvalue") return summary.summary.fStatistic;
-    if (q == "llf") return summary.summary.logLikelihood;
-    if (q == "aic") return summary.summary.aic;
-    if (q == "bic") return summary.summary.bic;
-    if (q == "smearing") return summary.smearingFactor;
-    if (q == "elasticity") return fit.costElasticity.estimate;
-    if (q == "elasticity_se") return fit.costElasticity.standardError;
-    if (q == "unit_fvalue") return summary.returns.fStatistic;
-    if (q == "unit_pvalue") return summary.returns.pValue;
-    if (q == "efficient_scale_exists") return fit.efficientScale ? 1.0 : 0.0;
-    if (q == "efficient_scale") return fit.efficientScale ? fit.efficientScale->estimate : std::nan("");
-    if (q == "efficient_scale_se") return fit.efficientScale ? fit.efficientScale->standardError : std::nan("");
-    return std::numeric_limits<double>::quiet_NaN();
-}
-
 } // namespace
 
 BOOST_AUTO_TEST_SUITE(cost_panel_cross_check)
@@ -110,7 +83,7 @@ BOOST_AUTO_TEST_CASE(cost_panel_fits_agree_with_statsmodels, *boost::unit_test::
         const std::string& model = fields.at(1);
         if (!fits.count(model)) fits.emplace(model, fitModel(models.at(model)));
         const double expected = std::stod(fields.at(4));
-        const double actual = coreFigure(fits.at(model), fields.at(2), std::stol(fields.at(3)));
+        const double actual = isoquant::testing::costFitFigure(fits.at(model), fields.at(2), std::stol(fields.at(3)));
         BOOST_TEST(closeTo(actual, expected, statsmodelsTolerance),
                    model << " " << fields.at(2) << " " << fields.at(3) << ": " << actual << " vs " << expected);
     }

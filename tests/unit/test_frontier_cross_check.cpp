@@ -13,7 +13,8 @@
 // - parameters (β, ln σᵥ, ln σᵤ): within 1e-3 of scipy's standard error of each. On the rice data
 //   the likelihood is flat in σᵤ (se of ln σᵤ up to 2.5), so where two solvers stop differs in
 //   absolute terms; a thousandth of a standard error is far below anything a user would read.
-// - standard errors: 1e-3 relative. Both are inverses of finite-difference Hessians (the core's
+// - standard errors: 1e-3 relative, the covariance block's entries within 1e-3·seᵢ·seⱼ. Both
+//   are inverses of finite-difference Hessians (the core's
 //   by central differences of its analytic score, scipy's by second differences of ℓ with step
 //   1e-4) at optima differing as above.
 // - wrong skew: the least-squares coefficients 1e-9 relative (two factorisations) and the Gaussian
@@ -100,6 +101,18 @@ void compareMaximum(const isoquant::ProductionFrontier& frontier, const std::str
                    1e-3 * inefficiencyError);
         BOOST_TEST(closeTo(std::sqrt(fit.covariance(p, p)), noiseError, 1e-3));
         BOOST_TEST(closeTo(std::sqrt(fit.covariance(p + 1, p + 1)), inefficiencyError, 1e-3));
+        // PRODFRONTIER's covariance block (covariance TRUE): every entry of the coefficients' block
+        // within 1e-3·seᵢ·seⱼ of scipy's, the standard errors' tolerance (a correlation to 1e-3).
+        const isoquant::CellTable plain = isoquant::frontierTable(frontier);
+        const isoquant::CellTable table = isoquant::frontierTableWithCovariance(frontier, 1.0);
+        BOOST_TEST(table.text(plain.rows(), 1) == "likelihood");
+        const auto& covariance = f.at(dataset, form, "coefficient_covariance");
+        BOOST_REQUIRE_EQUAL(covariance.size(), coefficients.size() * coefficients.size());
+        for (std::size_t i = 0; i < coefficients.size(); ++i)
+            for (std::size_t j = 0; j < coefficients.size(); ++j)
+                BOOST_TEST(std::fabs(table.number(plain.rows() + 1 + i, 1 + j) -
+                                     covariance[i * coefficients.size() + j]) <= 1e-3 * errors[i] * errors[j],
+                           "covariance " << i << ", " << j);
     }
 }
 

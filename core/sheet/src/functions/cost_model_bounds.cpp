@@ -109,17 +109,27 @@ CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable
         throw InputError(asked + "is not available when the model's constant is shifted (controls at their means, "
                                  "effects or a trend): the covariance block does not cover that constant");
     const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
+    return costColumnOfBounds(target, prices, model.prices.size(), values,
+                              [&](double level, const Eigen::VectorXd& rowPrices, double value) {
+                                  return delta_method::answer(linearised(model, measure, level, rowPrices, value),
+                                                              *model.covariance, critical, statistic, 0);
+                              });
+}
+
+CellTable costColumnOfBounds(const CellTable& target, const CellTable& prices, Eigen::Index inputs,
+                             const CellTable& values,
+                             const std::function<double(double, const Eigen::VectorXd&, double)>& bound)
+{
     const NumericColumns outputs =
         readNumericColumns(target, argument::targetOutput, ValueRule::positive, "target output");
     const Eigen::Index n = outputs.values.rows();
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, model.prices.size(), argument::targetOutput);
+    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, inputs, argument::targetOutput);
     CellTable column = values;
     for (Eigen::Index row = 0; row < n; ++row) {
         const auto cell = static_cast<std::size_t>(row);
+        if (!values.isNumber(cell, 0)) continue;
         const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
-        const double result =
-            delta_method::answer(linearised(model, measure, outputs.values(row, 0), rowPrices, values.number(cell, 0)),
-                                 *model.covariance, critical, statistic, 0);
+        const double result = bound(outputs.values(row, 0), rowPrices, values.number(cell, 0));
         if (!std::isfinite(result))
             throw argumentError(argument::targetOutput, "row " + std::to_string(cell + outputs.firstDataRow()) +
                                                             " gives a result too large to represent");

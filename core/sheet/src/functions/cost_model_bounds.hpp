@@ -7,6 +7,8 @@
 #include "isoquant/sheet/arguments/cells.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
 
+#include <functional>
+
 namespace isoquant {
 
 // `values` is the plain PRODCOST column of the same arguments (one number per output). Total,
@@ -16,5 +18,12 @@ namespace isoquant {
 // figures that use the constant, a model whose evaluators use a shifted constant.
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, delta_method::Statistic statistic, const CellTable& values);
+
+// PRODCOST's plain column `values` with each number replaced by bound(output, the row's prices,
+// number), the outputs and prices read as PRODCOST reads them (`inputs` prices a row); a sentence
+// (no plan) stays. Throws InputError naming the row of a result too large to represent.
+CellTable costColumnOfBounds(const CellTable& target, const CellTable& prices, Eigen::Index inputs,
+                             const CellTable& values,
+                             const std::function<double(double, const Eigen::VectorXd&, double)>& bound);
 
 } // namespace isoquant

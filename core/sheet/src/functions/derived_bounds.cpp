@@ -178,24 +178,11 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     const BoundsModel read = readBoundsModel(model, asked, needsLogScale, argument::statistic);
     // The plain function has read the outputs (one cell, or a column with an optional header) and
     // the prices; its column has one cell per output, a sentence where no plan exists.
-    const NumericColumns outputs =
-        readNumericColumns(target, argument::targetOutput, ValueRule::positive, "target output");
-    const Eigen::Index n = outputs.values.rows();
-    const Eigen::MatrixXd priceRows = readPriceRows(prices, n, read.form->exponents.size(), argument::targetOutput);
-    CellTable column = values;
-    for (Eigen::Index row = 0; row < n; ++row) {
-        const auto cell = static_cast<std::size_t>(row);
-        if (!values.isNumber(cell, 0)) continue;
-        const Eigen::VectorXd rowPrices = priceRows.row(priceRows.rows() == 1 ? 0 : row).transpose();
-        const double result = answer(
-            costFigureLinearised(read, measure, outputs.values(row, 0), rowPrices, values.number(cell, 0)), read,
-            asked, 0);
-        if (!std::isfinite(result))
-            throw argumentError(argument::targetOutput, "row " + std::to_string(cell + outputs.firstDataRow()) +
-                                                            " gives a result too large to represent");
-        column.set(cell, 0, result);
-    }
-    return column;
+    return costColumnOfBounds(target, prices, read.form->exponents.size(), values,
+                              [&](double level, const Eigen::VectorXd& rowPrices, double value) {
+                                  return answer(costFigureLinearised(read, measure, level, rowPrices, value), read,
+                                                asked, 0);
+                              });
 }
 
 } // namespace isoquant

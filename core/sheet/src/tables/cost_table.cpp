@@ -135,11 +135,8 @@ std::vector<std::string> costParameterLabels(const CostFit& fit)
 CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance)
 {
     if (!readSwitchArgument(covariance, argument::covariance)) return costFitTable(fit);
-    if (fit.frontier)
-        throw argumentError(argument::covariance,
-                            "not available with inefficiency: a cost frontier's inference is the normal's, which the "
-                            "block's degrees of freedom cannot state; leave covariance empty");
     CovarianceBlock block;
+    block.likelihood = fit.frontier.has_value(); // the frontier's inverse observed information, the normal
     block.labels = costParameterLabels(fit);
     block.matrix = fit.summary.inference.covariance;
     // As the table's standard errors: an exact fit has none, only the rounding left in V.

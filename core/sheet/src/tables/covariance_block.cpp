@@ -46,16 +46,19 @@ void readBlockHeader(const CellTable& range, std::size_t row, CovarianceBlock& b
     if (range.columns() < 4 || !range.isText(row, 1))
         throw InputError(place + " needs the kind of errors, the degrees of freedom and the level after its label");
     try {
-        block.kind = readErrorsArgument(range.at(row, 1));
+        block.likelihood = equalsIgnoringCase(range.text(row, 1), likelihoodBlockWord);
+        if (!block.likelihood) block.kind = readErrorsArgument(range.at(row, 1));
     } catch (const InputError&) {
-        throw InputError(place + ": " + quoted(range.text(row, 1)) +
-                         " is not a kind of errors; use \"classical\", \"hc1\", \"hc3\" or \"cluster\"");
+        throw InputError(
+            place + ": " + quoted(range.text(row, 1)) +
+            " is not a kind of errors; use \"classical\", \"hc1\", \"hc3\", \"cluster\" or \"likelihood\"");
     }
-    if (!range.isNumber(row, 2) || !(range.number(row, 2) > 0))
-        throw InputError(place + " needs positive degrees of freedom in its third column");
+    const bool normal = range.isText(row, 2) && equalsIgnoringCase(range.text(row, 2), normalDistributionWord);
+    if (!normal && (!range.isNumber(row, 2) || !(range.number(row, 2) > 0)))
+        throw InputError(place + " needs positive degrees of freedom in its third column (or \"normal\")");
     if (!range.isNumber(row, 3) || !(range.number(row, 3) > 0 && range.number(row, 3) < 1))
         throw InputError(place + " needs a confidence level between 0 and 1 in its fourth column");
-    block.degreesOfFreedom = range.number(row, 2);
+    block.degreesOfFreedom = normal ? std::numeric_limits<double>::infinity() : range.number(row, 2);
     block.level = range.number(row, 3);
 }
 
@@ -127,8 +130,11 @@ CellTable withCovarianceBlock(const CellTable& table, const CovarianceBlock& blo
         result.set(0, column, block.labels[column - 1]);
     std::size_t row = table.rows();
     result.set(row, 0, covarianceBlockLabel);
-    result.set(row, 1, covarianceKindWord(block.kind));
-    result.set(row, 2, block.degreesOfFreedom);
+    result.set(row, 1, block.likelihood ? std::string(likelihoodBlockWord) : covarianceKindWord(block.kind));
+    if (std::isinf(block.degreesOfFreedom))
+        result.set(row, 2, std::string(normalDistributionWord));
+    else
+        result.set(row, 2, block.degreesOfFreedom);
     result.set(row, 3, block.level);
     for (std::size_t i = 0; i < p; ++i) {
         ++row;

@@ -1,11 +1,15 @@
 #include "isoquant/sheet/tables/frontier_table.hpp"
 
+#include "isoquant/sheet/arguments/argument_names.hpp"
+#include "isoquant/sheet/arguments/option_arguments.hpp"
+#include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
 #include "isoquant/math/fits/ces_fit.hpp" // convergedText
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "tables/frontier_rows.hpp"
 
 #include <cmath>
+#include <limits>
 
 namespace isoquant {
 
@@ -102,6 +106,20 @@ CellTable frontierTable(const ProductionFrontier& frontier)
     frontierConvergenceRow(writer, fit);
     writer.textRow(formLabel, {formWord(frontier.form), frontierNote(frontier.fit)});
     return writer.finish();
+}
+
+CellTable frontierTableWithCovariance(const ProductionFrontier& frontier, const Cell& covariance)
+{
+    const CellTable table = frontierTable(frontier);
+    if (!readSwitchArgument(covariance, argument::covariance)) return table;
+    CovarianceBlock block;
+    block.labels = parameterLabels(frontier);
+    const auto p = static_cast<Eigen::Index>(block.labels.size());
+    block.matrix = frontier.fit.covariance.topLeftCorner(p, p);
+    block.likelihood = true;
+    block.degreesOfFreedom = std::numeric_limits<double>::infinity();
+    block.level = frontier.confidenceLevel;
+    return withCovarianceBlock(table, block);
 }
 
 } // namespace isoquant

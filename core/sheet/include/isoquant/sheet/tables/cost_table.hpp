@@ -59,8 +59,8 @@ std::vector<std::string> costParameterLabels(const CostFit& fit);
 
 // PRODCOSTFIT's table, with the covariance block of its parameters (covariance_block.hpp) when
 // `covariance` is TRUE (a switch naming "covariance"): the kind of errors, the degrees of freedom
-// of the table's t (n − p; G − 1 under cluster errors; m·n − p with shares) and its level. Not for
-// a cost frontier (a message: its inference is the normal's, on no degrees of freedom).
+// of the table's t (n − p; G − 1 under cluster errors; m·n − p with shares) and its level; for a
+// cost frontier "likelihood" and "normal" in their place (covariance_block.hpp).
 CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance);
 
 } // namespace isoquant

@@ -49,9 +49,16 @@ struct CovarianceBlock {
     std::vector<std::string> labels; // the parameters' row labels, in order
     Eigen::MatrixXd matrix;          // p × p; NaN where the table says "n/a"
     CovarianceKind kind = CovarianceKind::classical;
-    double degreesOfFreedom = 0;
+    double degreesOfFreedom = 0; // infinite for a maximum-likelihood fit: the normal
     double level = 0.95;
+    // A maximum-likelihood fit's block (PRODFRONTIER, a cost frontier): the inverse observed
+    // information; its header row reads "likelihood" and "normal" in place of the kind of errors
+    // and the degrees of freedom.
+    bool likelihood = false;
 };
+
+inline constexpr const char* likelihoodBlockWord = "likelihood";
+inline constexpr const char* normalDistributionWord = "normal";
 
 std::string covarianceKindWord(CovarianceKind kind);
 

@@ -37,6 +37,13 @@ std::size_t frontierTableRows(ProductionForm form, std::size_t inputs, std::size
 
 CellTable frontierTable(const ProductionFrontier& frontier);
 
+// PRODFRONTIER's table, with the covariance block (covariance_block.hpp) of its parameter rows —
+// the frontier's coefficients, from the inverse observed information — when `covariance` is TRUE:
+// its header row reads `covariance | likelihood | normal | <level>` (maximum likelihood: the
+// normal's bounds). Noise SD and inefficiency SD keep their own rows' standard errors and bounds.
+// The table is then max(7, p + 1) columns wide and 1 + p rows longer.
+CellTable frontierTableWithCovariance(const ProductionFrontier& frontier, const Cell& covariance);
+
 // The word of the inefficiency argument and of the title: "half-normal" or "exponential".
 std::string inefficiencyWord(InefficiencyDistribution distribution);
 // The convergence row's word: "converged", "not converged", "stopped" or "boundary".
