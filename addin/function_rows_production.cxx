@@ -26,8 +26,9 @@ std::vector<FunctionInfo> productionFitFunctions()
           {argument::covariance,
            "TRUE to add below the table the estimated covariance matrix of the parameters (of the "
            "kind chosen by errors), one row per parameter, for bounds on derived numbers; the table is "
-           "then max(7, p + 1) columns wide and 1 + p rows longer, p parameters (cobb-douglas 1 + k + m, "
-           "translog 1 + k + k(k+1)/2 + m, ces 4). FALSE or empty: no block."}}},
+           "then max(7, q + 1) columns wide and 1 + q rows longer, q = p parameters (cobb-douglas 1 + k + m, "
+           "translog 1 + k + k(k+1)/2 + m, ces 4), plus 1 for the row of the ln A the evaluators use when "
+           "controls or a trend (without effects) shift it. FALSE or empty: no block."}}},
         {"prodStat",
          "PRODSTAT",
          "One value of the PRODFIT table, looked up by row and column label, without an array formula.",

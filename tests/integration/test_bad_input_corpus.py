@@ -93,6 +93,14 @@ def build_fixture(sheet):
                                ["C", 0.3, None, None], ["L*L", 0.01, None, None], ["L*C", 0.0, None, None],
                                ["C*C", -0.01, None, None], ["covariance", "classical", 18.0, 0.95],
                                ["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, 0.0], ["C", 0.0, 0.0, 0.01]])
+    # A typed cobb-douglas with a control whose block lacks the row of ln A at control means.
+    set_values(sheet, "DA40", [["form", "cobb-douglas", None, None, None], ["ln A", 0.1, None, None, None],
+                               ["L", 0.7, None, None, None], ["C", 0.3, None, None, None],
+                               ["z (control)", 0.05, None, None, None], [None] * 5,
+                               ["ln A at control means", 0.2, None, None, None],
+                               ["covariance", "classical", 20.0, 0.95, None],
+                               ["ln A", 0.01, 0.0, 0.0, 0.0], ["L", 0.0, 0.01, 0.0, 0.0],
+                               ["C", 0.0, 0.0, 0.01, 0.0], ["z (control)", 0.0, 0.0, 0.0, 0.01]])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

@@ -15,8 +15,8 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, statsmodels_fit
-from .support import CalcTestCase, module_session
+from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, state_panel_data, statsmodels_fit
+from .support import CalcTestCase, module_session, write_columns
 
 CALC = module_session()
 setUpModule, tearDownModule = CALC.start, CALC.stop
@@ -365,6 +365,39 @@ class OtherFormsTest(CalcTestCase):
                             "translog second partial")
         self.assert_message(get_cell(self.sheet, "N11"), "Error: model: row 24: the covariance block has 5 rows; it "
                             "needs one row per parameter (6) and 6 numbers in each", "translog block one row short")
+
+
+class ShiftedLogScaleTest(CalcTestCase):
+    """Munnell's (1990) state panel (tests/data) with the control unemp: 20 rows, and the block's
+    1 + q rows, q = 5 parameters + the row "ln A at control means", s = ln A + c mean(unemp). Expected:
+    statsmodels' cov_params V of the same fit and the gradient of ln Y = s + sum b_i ln x_i in beta,
+    g = (1, ln x, mean(unemp)): Var(s) = a'Va with a = (1, 0, 0, 0, mean(unemp)) to 1e-8 and
+    PRODOUTPUT's std. error Y sqrt(g'Vg) to 1e-7 relative (the issue's tolerance)."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.data = state_panel_data()
+        cls.sheet = CALC.new_sheet("Shifted bounds")
+        write_columns(cls.sheet, "A1", cls.data, ["gsp", "pcap", "pc", "emp", "unemp"])
+        set_values(cls.sheet, "P1", [[15000.0, 35000.0, 1000.0]])  # one bundle (pcap, pc, emp), invented
+        set_array_formula(cls.sheet, "H1:N27", "=PRODFIT(A1:A817;B1:D817;;;;;E1:E817;;;;;TRUE())")
+        set_formula(cls.sheet, "P3", '=PRODOUTPUT(H1:N27;P1:R1;;"std. error")')
+        recalc(CALC.doc)
+
+    def test_output_std_error_against_statsmodels(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        d = self.data
+        result = statsmodels_fit(logs(d["gsp"]), [logs(d["pcap"]), logs(d["pc"]), logs(d["emp"]), d["unemp"]])
+        beta, cov = np.asarray(result.params), np.asarray(result.cov_params())
+        mean_rate = float(np.mean(d["unemp"]))
+        table = get_range(self.sheet, "H1:N27")
+        self.assertEqual(table[26][0], "ln A at control means")
+        shift = np.array([1.0, 0.0, 0.0, 0.0, mean_rate])
+        self.assert_relative(table[26][6], shift @ cov @ shift, STATSMODELS_RELATIVE, "Var(ln A at control means)")
+        gradient = np.array([1.0, np.log(15000.0), np.log(35000.0), np.log(1000.0), mean_rate])
+        expected = np.exp(beta @ gradient) * np.sqrt(gradient @ cov @ gradient)
+        self.assert_relative(get_cell(self.sheet, "P3"), expected, 1e-7, "std. error of output")
 
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P, Q).

@@ -66,12 +66,7 @@ def main():
         theta, cov, t, smearing = reference_script.fit_inference(np, stats, result, LEVEL)
 
         def se(function):
-            gradient = np.zeros(len(theta))
-            for j in range(len(theta)):
-                shifted = theta.astype(complex)
-                shifted[j] += COMPLEX_STEP * 1j
-                gradient[j] = function(shifted).imag / COMPLEX_STEP
-            return math.sqrt(gradient @ cov @ gradient)
+            return reference_script.complex_step_standard_error(np, function, theta, cov, COMPLEX_STEP)
 
         def at_estimate(function):
             return function(theta.astype(complex)).real

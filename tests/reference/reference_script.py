@@ -76,3 +76,15 @@ def fit_inference(np, stats, result, level):
     smearing factor mean(exp(residual))) of a statsmodels OLS result."""
     return (np.asarray(result.params), np.asarray(result.cov_params()),
             stats.t.ppf(0.5 + level / 2, result.df_resid), float(np.mean(np.exp(result.resid))))
+
+
+def complex_step_standard_error(np, function, theta, cov, step=1e-20):
+    """sqrt(g' cov g) with g the gradient of function at theta by the complex step,
+    dq/dtheta_j = Im q(theta + i h e_j) / h (Squire and Trapp 1998, SIAM Review 40(1), 110-112):
+    no difference is taken, so g is exact to rounding. function must accept complex parameters."""
+    gradient = np.zeros(len(theta))
+    for j in range(len(theta)):
+        stepped = np.asarray(theta).astype(complex)
+        stepped[j] += step * 1j
+        gradient[j] = function(stepped).imag / step
+    return float(np.sqrt(gradient @ cov @ gradient))

@@ -13,6 +13,20 @@ inline CellTable tableWithBlock(const ProductionFit& fit)
     return fitTableWithCovariance(fitTable(fit), fit, 1.0);
 }
 
+// The matrix the block holds: the fit's covariance, and with a shifted ln A (fit.shiftedScale) its
+// covariances and variance as one more row and column.
+inline Eigen::MatrixXd blockMatrixOf(const ProductionFit& fit)
+{
+    Eigen::MatrixXd matrix = fit.inference.covariance;
+    if (!fit.shiftedScale) return matrix;
+    const Eigen::Index p = matrix.rows();
+    matrix.conservativeResize(p + 1, p + 1);
+    matrix.col(p).head(p) = fit.shiftedScale->withParameters;
+    matrix.row(p).head(p) = fit.shiftedScale->withParameters.transpose();
+    matrix(p, p) = fit.shiftedScale->variance;
+    return matrix;
+}
+
 // The first row labelled "covariance" (the table's row count when there is none).
 inline std::size_t blockRow(const CellTable& table)
 {

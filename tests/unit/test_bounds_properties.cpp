@@ -105,20 +105,31 @@ BOOST_AUTO_TEST_CASE(words_without_a_covariance_block_get_a_message)
                "\"prediction upper\"");
 }
 
-BOOST_AUTO_TEST_CASE(a_shifted_ln_a_gets_a_message_where_it_matters)
+BOOST_AUTO_TEST_CASE(a_shifted_ln_a_gets_a_message_only_under_effects)
 {
-    // Cobb & Douglas (1928) with a trend: the evaluators' ln A is "ln A for predictions".
+    // Cobb & Douglas (1928) with a trend: the evaluators' ln A is "ln A for predictions", the block's
+    // last row, so output is answered (on the log scale: lower < value < upper).
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
     isoquant::CellTable years(24, 1);
     for (std::size_t row = 0; row < 24; ++row) years.set(row, 0, 1899.0 + static_cast<double>(row));
     arguments.trend = years;
-    const auto table = tableWithBlock(isoquant::fitFromArguments(arguments));
+    const auto trended = tableWithBlock(isoquant::fitFromArguments(arguments));
     const auto bundle = oneBundle(150, 200);
-    BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(table, bundle, {}, std::string("lower bound")); }) ==
-               "what: \"lower bound\" is not available when the model's ln A is shifted (controls at their means, "
-               "effects or a trend): the covariance block does not cover that ln A");
+    const double value = isoquant::outputColumn(trended, bundle).number(0, 0);
+    BOOST_TEST(isoquant::outputColumnWithBounds(trended, bundle, {}, std::string("lower bound")).number(0, 0) < value);
+    BOOST_TEST(isoquant::outputColumnWithBounds(trended, bundle, {}, std::string("upper bound")).number(0, 0) > value);
+    // The rice farms (Feng and Horrace 2012, tests/data) under fixed effects: that ln A holds the
+    // group effects, without a standard error, so output gets the message.
+    auto farms = isoquant::testing::riceFarmsArguments();
+    farms.effects = std::string("fixed");
+    const auto effects = tableWithBlock(isoquant::fitFromArguments(farms));
+    isoquant::CellTable farm(1, 4);
+    for (std::size_t column = 0; column < 4; ++column) farm.set(0, column, 10.0 * static_cast<double>(column + 1));
+    BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(effects, farm, {}, std::string("lower bound")); }) ==
+               "what: \"lower bound\" is not available when the model's ln A is shifted by effects: that ln A "
+               "holds the group effects, which have no standard error, so the covariance block has no row for it");
     // The elasticities do not involve ln A: answered.
-    BOOST_TEST(isoquant::elasticityColumnWithBounds(table, bundle, 2.0, std::string("std. error")).number(0, 0) > 0);
+    BOOST_TEST(isoquant::elasticityColumnWithBounds(effects, farm, 2.0, std::string("std. error")).number(0, 0) > 0);
 }
 
 // Under cluster errors the block carries t(G − 1): the rice farms (Feng and Horrace 2012, 171 farms,

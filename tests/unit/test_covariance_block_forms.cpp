@@ -35,18 +35,19 @@ void checkBlock(const isoquant::CellTable& table, const isoquant::ProductionFit&
 {
     const std::size_t row = blockRow(table);
     const auto p = static_cast<Eigen::Index>(labels.size());
-    BOOST_TEST_REQUIRE(fit.inference.covariance.rows() == p);
+    const Eigen::MatrixXd covariance = isoquant::testing::blockMatrixOf(fit);
+    BOOST_TEST_REQUIRE(covariance.rows() == p);
     BOOST_TEST(table.rows() == row + 1 + labels.size());
     BOOST_TEST(table.columns() == std::max<std::size_t>(7, labels.size() + 1));
     for (Eigen::Index i = 0; i < p; ++i) {
         BOOST_TEST(table.text(row + 1 + static_cast<std::size_t>(i), 0) == labels[static_cast<std::size_t>(i)]);
         for (Eigen::Index j = 0; j < p; ++j)
             BOOST_TEST(table.number(row + 1 + static_cast<std::size_t>(i), 1 + static_cast<std::size_t>(j)) ==
-                       fit.inference.covariance(i, j));
+                       covariance(i, j));
     }
     const auto model = isoquant::readProductionModel(table);
     BOOST_REQUIRE(model.parameterCovariance.has_value());
-    BOOST_TEST((model.parameterCovariance->matrix == fit.inference.covariance));
+    BOOST_TEST((model.parameterCovariance->matrix == covariance));
     BOOST_TEST(model.parameterCovariance->labels == labels, boost::test_tools::per_element());
     BOOST_TEST(model.parameterCovariance->degreesOfFreedom == fit.inference.degreesOfFreedom);
 }
@@ -79,12 +80,14 @@ BOOST_AUTO_TEST_CASE(translog_block_with_a_control_is_wider_than_the_table)
 {
     const auto fit = fitOf(isoquant::testing::statePanelArguments(), "translog", std::string("hc1"));
     const auto table = tableWithBlock(fit);
-    // 3 inputs, 1 control: p = 1 + 3 + 6 + 1 = 11, so 12 columns; the header names columns 8 to 12.
+    // 3 inputs, 1 control: p = 1 + 3 + 6 + 1 = 11, and the control adds the row of the evaluators'
+    // ln A: q = 12 parameter rows, so 13 columns; the header names columns 8 to 13.
     checkBlock(table, fit,
                {"ln A", "pcap", "pc", "emp", "pcap*pcap", "pcap*pc", "pcap*emp", "pc*pc", "pc*emp", "emp*emp",
-                "unemp (control)"});
+                "unemp (control)", "ln A at control means"});
     BOOST_TEST(table.text(0, 7) == "pcap*emp"); // column 8 holds the covariances of parameter 7
     BOOST_TEST(table.text(0, 11) == "unemp (control)");
+    BOOST_TEST(table.text(0, 12) == "ln A at control means");
     BOOST_TEST(table.text(blockRow(table), 1) == "hc1");
     BOOST_TEST(std::get<double>(isoquant::tableValue(table, std::string("R2"), std::string("value"))) ==
                fit.rSquared);

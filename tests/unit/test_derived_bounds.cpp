@@ -92,8 +92,8 @@ BOOST_AUTO_TEST_CASE(tfp_bounds_on_the_log_scale)
                }) == "what: \"std. error\" " + noBlock);
 }
 
-// With a trend, PRODTFP's periods compare each row with ln A + λ·(t − t_last), a ln A the covariance
-// block does not cover (λ is not in it): the words get the message, "value" answers as before.
+// With a trend, PRODTFP's periods compare each row with ln A + λ·(t − t_last), and λ has no row of
+// the covariance block: the words get the message, "value" answers as before.
 BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_gets_a_message)
 {
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
@@ -113,8 +113,8 @@ BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_gets_a_message)
                 isoquant::productivityColumn(table, output, bundles, periods)));
     BOOST_TEST(messageOf([&] {
                    isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("upper bound"));
-               }) == "what: \"upper bound\" is not available when the model's ln A is shifted (controls at their "
-                     "means, effects or a trend): the covariance block does not cover that ln A");
+               }) == "what: \"upper bound\" needs periods left out: the covariance block does not hold the "
+                     "trend's coefficient that periods apply");
 }
 
 BOOST_AUTO_TEST_CASE(second_partials_bounds_around_the_value)
@@ -246,26 +246,30 @@ BOOST_AUTO_TEST_CASE(cost_figures_bounds_by_statistic)
 }
 
 // Munnell's (1990) state panel with its control (tests/data): the evaluators' ln A is shifted to the
-// control's mean. Total, marginal and average cost involve it and get the message; the cost
-// elasticity and returns to scale do not and are answered (ν's std. error as PRODSCALE's).
+// control's mean, and the block's last row "ln A at control means" carries it. Total, marginal and
+// average cost are answered on the log scale (lower·upper = value², 1e-12 relative), and total cost's
+// relative std. error is average cost's (C and C/y share the gradient of ln C); the cost elasticity
+// and returns to scale do not involve ln A (ν's std. error as PRODSCALE's).
 BOOST_AUTO_TEST_CASE(cost_with_a_shifted_ln_a)
 {
     const auto fit = isoquant::fitFromArguments(isoquant::testing::statePanelArguments());
     const auto table = isoquant::fitTableWithCovariance(isoquant::fitTable(fit), fit, 1.0);
     const auto prices = isoquant::testing::typedRange({{2.0, 3.0, 5.0}}); // invented
     const auto target = isoquant::singleCell(150.0);
-    for (const char* figure : {"total", "marginal", "average"})
-        BOOST_TEST(messageOf([&] {
-                       isoquant::costColumnWithBounds(table, target, prices, std::string(figure),
-                                                      std::string("lower bound"));
-                   }) == "statistic: \"lower bound\" is not available when the model's ln A is shifted (controls "
-                         "at their means, effects or a trend): the covariance block does not cover that ln A",
-                   figure);
+    auto figure = [&](const char* what, const char* statistic) {
+        return isoquant::costColumnWithBounds(table, target, prices, std::string(what), std::string(statistic))
+            .number(0, 0);
+    };
+    for (const char* cost : {"total", "marginal", "average"}) {
+        const double value = figure(cost, "value"), lower = figure(cost, "lower bound"),
+                     upper = figure(cost, "upper bound");
+        BOOST_TEST((0 < lower && lower < value && value < upper), cost);
+        BOOST_TEST(close(lower * upper, value * value), cost);
+    }
+    BOOST_TEST(close(figure("total", "std. error") / figure("total", "value"),
+                     figure("average", "std. error") / figure("average", "value")));
     const auto scaleError = isoquant::scaleColumnWithBounds(table, {}, std::string("std. error"));
-    BOOST_TEST(close(isoquant::costColumnWithBounds(table, target, prices, std::string("returns to scale"),
-                                                    std::string("std. error"))
-                         .number(0, 0),
-                     scaleError.number(0, 0)));
+    BOOST_TEST(close(figure("returns to scale", "std. error"), scaleError.number(0, 0)));
 }
 
 BOOST_AUTO_TEST_CASE(cost_statistic_messages_name_statistic)

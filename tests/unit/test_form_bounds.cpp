@@ -97,12 +97,11 @@ BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
                    isoquant::secondPartialColumnWithBounds(translog, bundle, 1.0, 2.0, std::string("std. error"));
                }) == "what: \"std. error\" is available for the cobb-douglas form only in this function (for the "
                      "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
-    // With a control the evaluators' ln A is at the control's mean, which the block does not cover;
-    // the elasticities do not involve ln A.
+    // With a control the evaluators' ln A is at the control's mean, the block's last row: output is
+    // answered (its figures: test_shifted_bounds_cross_check.cpp), and so are the elasticities.
     const auto controlled = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));
     const auto three = isoquant::testing::typedRange({{20000.0, 30000.0, 1000.0}});
-    BOOST_TEST(messageOf([&] { isoquant::outputColumnWithBounds(controlled, three, {}, std::string("std. error")); })
-                   .rfind("what: \"std. error\" is not available when the model's ln A is shifted", 0) == 0u);
+    BOOST_TEST(first(isoquant::outputColumnWithBounds(controlled, three, {}, std::string("std. error"))) > 0);
     BOOST_TEST(std::isfinite(first(isoquant::elasticityColumnWithBounds(controlled, three, 1.0, std::string("std. error")))));
     // A typed ces at delta = 1 with a block typed by hand: no derivative in delta there.
     const auto edge = isoquant::testing::typedRange(

@@ -156,6 +156,29 @@ InputError collinearityError(const ProductionData& data, bool constantReturns, E
                        " are collinear (inputs taken in logs); drop one of them"};
 }
 
+// The evaluators' ln A with controls or a trend and no effects (fit_result.hpp): s = ln A + Σⱼ cⱼ·z̄ⱼ
+// (+ λ·(t_last − t_first) with a trend). In the extended columns [base | trend] θ = [T 0]·β + offset,
+// so a = [Tᵀ·a_θ | t_last − t_first] with a_θ = (1, 0 … 0, z̄₁ … z̄ₘ).
+std::optional<ShiftedLogScale> cobbDouglasShiftedScale(const ProductionData& data, const ProductionFit& fit,
+                                                        const PanelRegression& run, const Eigen::MatrixXd& transform)
+{
+    const Eigen::Index m = data.controls.cols();
+    if (run.effectsAbsorbConstant || (m == 0 && !run.trendColumn)) return std::nullopt;
+    const Eigen::MatrixXd& covariance = fit.regressionInference.covariance;
+    const Eigen::Index columns = covariance.rows();
+    Eigen::VectorXd parameterWeights = Eigen::VectorXd::Zero(transform.rows());
+    parameterWeights(0) = 1.0;
+    if (m > 0) parameterWeights.tail(m) = data.controls.colwise().mean().transpose();
+    Eigen::VectorXd weights = Eigen::VectorXd::Zero(columns);
+    weights.head(transform.cols()) = transform.transpose() * parameterWeights;
+    if (run.trendColumn) weights(*run.trendColumn) = data.panel.periods.maxCoeff() - run.trendOrigin;
+    Eigen::MatrixXd parameterMap = Eigen::MatrixXd::Zero(transform.rows(), columns);
+    parameterMap.leftCols(transform.cols()) = transform;
+    const bool trend = run.trendColumn.has_value();
+    return shiftedLogScale(parameterMap, weights, covariance,
+                           trend ? fit.panel.logScaleForPredictions : fit.logScaleAtControlMeans, trend);
+}
+
 } // namespace
 
 ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOptions& options)
@@ -226,6 +249,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.inference.estimates.tail(m));
     fit.smearingFactor = run.smearingFactor;
     fit.panel = summarisePanel(data.panel, options.effects, run, regression, fit.logScaleAtControlMeans);
+    fit.shiftedScale = cobbDouglasShiftedScale(data, fit, run, map.transform);
     return fit;
 }
 

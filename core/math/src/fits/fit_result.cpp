@@ -16,4 +16,16 @@ bool trendCountsDays(const Eigen::VectorXd& periods)
     return true;
 }
 
+ShiftedLogScale shiftedLogScale(const Eigen::MatrixXd& parameterMap, const Eigen::VectorXd& weights,
+                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions)
+{
+    ShiftedLogScale shifted;
+    shifted.estimate = estimate;
+    const Eigen::VectorXd covarianceWithCoefficients = covariance * weights; // W·a
+    shifted.withParameters = parameterMap * covarianceWithCoefficients;
+    shifted.variance = weights.dot(covarianceWithCoefficients);
+    shifted.forPredictions = forPredictions;
+    return shifted;
+}
+
 } // namespace isoquant

@@ -133,6 +133,14 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     fit.logScaleAtControlMeans = fit.inference.estimates(0);
     fit.smearingFactor = fit.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.inference.estimates.tail(m));
+    if (m > 0) {
+        // s = ln A + Σⱼ cⱼ·z̄ⱼ on the regression's own columns (fit_result.hpp), a = (1, 0 …, z̄).
+        Eigen::VectorXd weights = Eigen::VectorXd::Zero(p);
+        weights(0) = 1.0;
+        weights.tail(m) = data.controls.colwise().mean().transpose();
+        fit.shiftedScale = shiftedLogScale(Eigen::MatrixXd::Identity(p, p), weights, fit.inference.covariance,
+                                           fit.logScaleAtControlMeans, false);
+    }
 
     auto details = std::make_shared<TranslogDetails>();
     details->meanLogInputs = logs.colwise().mean().transpose();

@@ -53,17 +53,25 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
         throw InputError(asked + "is available for the cobb-douglas form only in this function (for the " +
                          formWord(read.model.form) +
                          " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
-    if (needsLogScale && read.model.logScaleShifted)
-        throw InputError(asked + "is not available when the model's ln A is shifted (controls at their means, "
-                                 "effects or a trend): the covariance block does not cover that ln A");
     read.block = &*read.model.parameterCovariance;
+    if (read.model.covarianceCoversShiftedLogScale) {
+        read.logScaleIndex = read.block->matrix.rows() - 1;
+    } else if (needsLogScale && read.model.logScaleShifted) {
+        throw InputError(asked + "is not available when the model's ln A is shifted by effects: that ln A holds "
+                                 "the group effects, which have no standard error, so the covariance block has "
+                                 "no row for it");
+    }
     read.critical = studentCriticalValue(read.block->level, read.block->degreesOfFreedom);
     return read;
 }
 
 double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance)
 {
-    return answer(quantity, *read.block, read.critical, statistic, residualVariance);
+    if (read.logScaleIndex == 0) return answer(quantity, *read.block, read.critical, statistic, residualVariance);
+    Linearised shifted = quantity;
+    shifted.gradient(read.logScaleIndex) = quantity.gradient(0);
+    shifted.gradient(0) = 0;
+    return answer(shifted, *read.block, read.critical, statistic, residualVariance);
 }
 
 double answer(const Linearised& quantity, const CovarianceBlock& block, double critical, Statistic statistic,

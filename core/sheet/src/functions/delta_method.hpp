@@ -37,6 +37,9 @@ struct BoundsModel {
     const CobbDouglas* form = nullptr;      // the same when it is a Cobb-Douglas, else null
     const CovarianceBlock* block = nullptr;
     double critical = 0; // the t quantile of the block's level and degrees of freedom
+    // Where the evaluators' ln A stands in the block: 0, or its last row when controls or a trend
+    // shift it (covariance_block.hpp). The gradients put ln A's entry at 0; answer moves it there.
+    Eigen::Index logScaleIndex = 0;
 };
 
 // Which forms a function answers the words for: the decisions, TFP and the cost figures the
@@ -46,12 +49,15 @@ enum class FormsAnswered { cobbDouglas, all };
 
 // Throws InputError naming `argumentName` for a model without a covariance block (a typed model), a
 // form the function does not answer for, and, when `needsLogScale` (the quantity involves ln A
-// itself), a model whose evaluators use a shifted ln A.
+// itself), a model whose evaluators use a ln A shifted by effects (the block has no row for it).
 BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
                             const std::string& argumentName = argument::what,
                             FormsAnswered forms = FormsAnswered::cobbDouglas);
 
 // se = √(gᵀVg); bounds value ∓ t·se, or value·exp(∓t·se) on the log scale (se then value·se).
+// The BoundsModel overload first moves g's ln A entry to read.logScaleIndex: the evaluators' ln A is
+// s = ln A + Σⱼ cⱼ·z̄ⱼ (+ λ·Δt), and a quantity f(s, b) has ∂f/∂s where f(ln A, b) has ∂f/∂ln A, and
+// 0 at ln A itself and at the controls (held at their means, inside s).
 // `residualVariance` widens the prediction words' log-scale interval: √(gᵀVg + σ²).
 double answer(const Linearised& quantity, const BoundsModel& read, Statistic statistic, double residualVariance);
 // The same from a block and the t quantile `critical` (a cost model's, say).

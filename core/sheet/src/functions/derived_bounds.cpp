@@ -60,6 +60,10 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
     // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln A − Σ bᵢ ln xᵢ, so g of ln TFP is minus g of
     // ln f(x): (−1, −ln x₁ … −ln x_k, 0 …). Positive by nature: bounds on the log scale.
     const BoundsModel read = readBoundsModel(model, statistic, true);
+    // With periods each row's ln A moves by λ·(t − t_last), and λ has no row of the block.
+    if (!periods.empty())
+        throw argumentError(argument::what, "\"" + word(statistic) + "\" needs periods left out: the covariance "
+                                            "block does not hold the trend's coefficient that periods apply");
     return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
         return Linearised{tfp, -logOutputGradient(read, bundle), true};
     });

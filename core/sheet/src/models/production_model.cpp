@@ -70,6 +70,7 @@ struct ModelRows {
     std::optional<double> technicalChange;
     std::optional<double> latestPeriod;
     bool hasPeriodEffects = false;
+    bool hasEffects = false; // an "effects" row other than "none"
     std::optional<ScaleTest> scaleTest;
     std::vector<ParameterRow> parameters;
     std::optional<std::vector<std::string>> inputsRow; // the labels of an "inputs" row
@@ -124,6 +125,7 @@ void readStatisticRow(const CellTable& range, std::size_t row, const std::string
         rows.latestPeriod = requiredNumber(range, row, label);
     } else if (equalsIgnoringCase(label, effectsLabel) && range.isText(row, 1)) {
         rows.hasPeriodEffects = equalsIgnoringCase(range.text(row, 1), effectsWord(EffectsKind::twoWay));
+        rows.hasEffects = !equalsIgnoringCase(range.text(row, 1), effectsWord(EffectsKind::none));
     }
 }
 
@@ -274,9 +276,19 @@ ProductionModel readProductionModel(const CellTable& range)
     model.latestPeriod = rows.latestPeriod;
     model.hasPeriodEffects = rows.hasPeriodEffects;
     model.logScaleShifted = rows.logScaleForPredictions || rows.logScaleAtControlMeans;
-    if (rows.covarianceRow)
-        model.parameterCovariance = readCovarianceBlock(
-            range, *rows.covarianceRow, parameterLabels(model.form, model.inputLabels, rows.controlLabels));
+    // Controls or a trend without effects: the block's last row is the evaluators' ln A (covariance_block.hpp).
+    model.covarianceCoversShiftedLogScale =
+        model.logScaleShifted && !rows.hasEffects && model.form != ProductionForm::ces;
+    if (rows.covarianceRow) {
+        std::vector<std::string> labels = parameterLabels(model.form, model.inputLabels, rows.controlLabels);
+        std::string sizeNote;
+        if (model.covarianceCoversShiftedLogScale) {
+            labels.push_back(shiftedLogScaleLabel(rows.logScaleForPredictions.has_value()));
+            sizeNote = "; with controls or a trend (and no effects) its last row is " + quoted(labels.back()) +
+                       ", the ln A the evaluators use";
+        }
+        model.parameterCovariance = readCovarianceBlock(range, *rows.covarianceRow, labels, sizeNote);
+    }
     // The table's ν must be the model's own (for translog it is taken at the sample mean, unknown here).
     const auto scale = model.technology->constantScaleElasticity();
     if (model.scaleTest && scale && model.form != ProductionForm::translog &&

@@ -181,12 +181,26 @@ std::vector<std::string> parameterLabels(ProductionForm form, const std::vector<
     return cobbDouglasParameterLabels(inputLabels, controlLabels);
 }
 
+std::string shiftedLogScaleLabel(bool forPredictions)
+{
+    return forPredictions ? predictionScaleLabel : controlMeansLabel;
+}
+
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance)
 {
     if (!readSwitchArgument(covariance, argument::covariance)) return table;
     CovarianceBlock block;
     block.labels = parameterLabels(fit.form, fit.inputLabels, fit.controlLabels);
     block.matrix = fit.inference.covariance;
+    if (fit.shiftedScale) {
+        // One more parameter, the evaluators' ln A s: V grows by Cov(θ, s) and Var(s).
+        const Eigen::Index p = block.matrix.rows();
+        block.labels.push_back(shiftedLogScaleLabel(fit.shiftedScale->forPredictions));
+        block.matrix.conservativeResize(p + 1, p + 1);
+        block.matrix.col(p).head(p) = fit.shiftedScale->withParameters;
+        block.matrix.row(p).head(p) = fit.shiftedScale->withParameters.transpose();
+        block.matrix(p, p) = fit.shiftedScale->variance;
+    }
     // As the table's standard errors: an exact fit has none, only the rounding left in V (a ces
     // fit without standard errors already holds NaN there).
     if (fit.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());
@@ -197,7 +211,7 @@ CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fi
 }
 
 CovarianceBlock readCovarianceBlock(const CellTable& range, std::size_t headerRow,
-                                    const std::vector<std::string>& expectedLabels)
+                                    const std::vector<std::string>& expectedLabels, const std::string& sizeNote)
 {
     CovarianceBlock block;
     readBlockHeader(range, headerRow, block);
@@ -214,7 +228,7 @@ CovarianceBlock readCovarianceBlock(const CellTable& range, std::size_t headerRo
                                    std::to_string(p) + " numbers in each";
     if (rows != p || range.columns() < p + 1)
         throw InputError(rowPlace(headerRow) + ": the covariance block has " + std::to_string(rows) +
-                         (rows == 1 ? " row" : " rows") + sizeAdvice);
+                         (rows == 1 ? " row" : " rows") + sizeAdvice + sizeNote);
     block.matrix.resize(static_cast<Eigen::Index>(p), static_cast<Eigen::Index>(p));
     for (std::size_t i = 0; i < p; ++i) {
         const std::size_t row = headerRow + 1 + i;

@@ -87,6 +87,22 @@ struct ReturnsToScale {
     std::string verdict;       // "increasing", "constant", "decreasing" or "constant (imposed)"
 };
 
+// The evaluators' ln A when controls or a trend shift it and no effects do: s = aᵀβ, a linear
+// combination of the regression's coefficients β (a = 1 at ln A, z̄ⱼ at control j, t_last − t_first
+// at the trend), so with W the regression's covariance its covariances with the parameters θ = Mβ
+// are M·W·a and its variance aᵀWa, exact (no linearisation).
+struct ShiftedLogScale {
+    double estimate = 0;              // PanelSummary::logScaleForPredictions, or logScaleAtControlMeans
+    Eigen::VectorXd withParameters;   // Cov(θ, s), in the order of ProductionFit::inference
+    double variance = 0;              // Var(s)
+    bool forPredictions = false;      // with a trend: the table's "ln A for predictions" row
+};
+
+// `parameterMap` (p × c) maps the regression's coefficients to θ; `weights` (c) is a above;
+// `covariance` (c × c) is W.
+ShiftedLogScale shiftedLogScale(const Eigen::MatrixXd& parameterMap, const Eigen::VectorXd& weights,
+                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions);
+
 struct ProductionFit {
     ProductionForm form = ProductionForm::cobbDouglas;
     std::vector<std::string> inputLabels;
@@ -115,6 +131,8 @@ struct ProductionFit {
     // median prediction, into the mean prediction.
     double smearingFactor = 1;
     PanelSummary panel;
+    // With controls or a trend and no effects (cobb-douglas and translog); empty otherwise.
+    std::optional<ShiftedLogScale> shiftedScale;
     // What only the "ces" or the "translog" form has; empty for the other forms.
     std::shared_ptr<const CesDetails> ces;
     std::shared_ptr<const TranslogDetails> translog;

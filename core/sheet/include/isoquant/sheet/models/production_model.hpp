@@ -7,7 +7,9 @@
 // starts the covariance block (covariance_block.hpp), read back and checked to the table's end. A row labelled
 // "<label> (control)" is a control's coefficient; with controls the evaluators use the row
 // "ln A at control means" as ln A, and the row "ln A for predictions" before either when there
-// is one (fixed effects or a trend: the mean group effect over rows, at the latest period).
+// is one (fixed effects or a trend: the mean group effect over rows, at the latest period). With
+// controls or a trend and no effects, the covariance block ends with the row of that ln A
+// (covariance_block.hpp), which the reader then requires.
 //
 // The form row decides what the parameter rows mean:
 // - cobb-douglas: one exponent row per input, labelled by the input.
@@ -58,8 +60,11 @@ struct ProductionModel {
     // The "effects" row says "two-way": period effects, which the table does not hold.
     bool hasPeriodEffects = false;
     // ln A is shifted (controls at their means, effects or a trend): the evaluators' ln A is then
-    // not a parameter of the covariance block.
+    // not ln A of the table's parameters.
     bool logScaleShifted = false;
+    // Shifted by controls or a trend, without effects: the covariance block's last row is the
+    // evaluators' ln A (covariance_block.hpp); under effects the block has no row for it.
+    bool covarianceCoversShiftedLogScale = false;
     // The covariance block of a PRODFIT table made with covariance TRUE (covariance_block.hpp).
     std::optional<CovarianceBlock> parameterCovariance;
 };

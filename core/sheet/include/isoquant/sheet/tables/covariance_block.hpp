@@ -21,6 +21,15 @@
 // So a translog table of two inputs without controls (23 rows, p = 6) becomes 30 rows by 7
 // columns, of three inputs (28 rows, p = 10) 39 rows by 11 columns; a ces table (20 rows)
 // becomes 25 rows by 7 columns.
+//
+// A cobb-douglas or translog table with controls or a trend and without effects adds one more
+// parameter row (and column) after those p: the evaluators' ln A, s = ln A + Σⱼ cⱼ·z̄ⱼ
+// (+ λ·(t_last − t_first) with a trend), labelled as the table's own row for it, "ln A for
+// predictions" with a trend, else "ln A at control means" (fit_result.hpp, ShiftedLogScale). The
+// block then has q = p + 1 parameter rows: the table has 1 + q rows more and is max(7, q + 1)
+// columns wide. Under effects the evaluators' ln A involves the group effects, which have no
+// standard error, so no row is added there. Size formula in one line: 1 + q rows, max(7, q + 1)
+// columns, q = p + (1 if controls or a trend and no effects, else 0).
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
@@ -74,6 +83,8 @@ std::vector<std::string> cesParameterLabels();
 // The parameters of a table of the form `form`, in its order (the table above).
 std::vector<std::string> parameterLabels(ProductionForm form, const std::vector<std::string>& inputLabels,
                                          const std::vector<std::string>& controlLabels);
+// The label of the block's row for the evaluators' ln A (above): the table's own row for it.
+std::string shiftedLogScaleLabel(bool forPredictions);
 
 // PRODFIT's table `table` of `fit`, with the block when `covariance` is TRUE (read as a switch
 // naming "covariance"), for every form.
@@ -81,10 +92,12 @@ CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fi
 
 // The block whose "covariance" row is row `headerRow` of `range` (a model argument). Throws
 // InputError naming "model" and the row when: the row's degrees of freedom or level are missing
-// or out of range; the block has not one row per parameter, labelled as `expectedLabels`; a cell
+// or out of range; the block has not one row per parameter, labelled as `expectedLabels` (the
+// shifted ln A's row last when the table has one); a cell
 // is not a number; the matrix is not symmetric (relative 1e-8 of the larger diagonal entry) or not
 // positive semidefinite (an eigenvalue below −1e-10 times the largest).
+// `sizeNote` ends the message about a block of the wrong size.
 CovarianceBlock readCovarianceBlock(const CellTable& range, std::size_t headerRow,
-                                    const std::vector<std::string>& expectedLabels);
+                                    const std::vector<std::string>& expectedLabels, const std::string& sizeNote = "");
 
 } // namespace isoquant
