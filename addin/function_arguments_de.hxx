@@ -88,6 +88,7 @@ std::vector<TranslatedFunction> germanGrowthTexts();
 std::vector<TranslatedFunction> germanShapeTexts();
 std::vector<TranslatedFunction> germanDecisionTexts();
 std::vector<TranslatedFunction> germanCostTexts();
+std::vector<TranslatedFunction> germanCostFitTexts();
 std::vector<TranslatedFunction> germanEfficiencyTexts();
 
 } // namespace isoquant::addin

@@ -181,7 +181,7 @@ const Translation& germanTranslation()
     static const Translation translation = [] {
         Translation german{"Produktionsökonomik", {}};
         for (auto family : {germanFittingTexts, germanGrowthTexts, germanShapeTexts, germanDecisionTexts,
-                            germanCostTexts, germanEfficiencyTexts})
+                            germanCostTexts, germanCostFitTexts, germanEfficiencyTexts})
             for (TranslatedFunction& function : family()) german.functions.push_back(std::move(function));
         return german;
     }();

@@ -89,6 +89,13 @@ std::vector<TranslatedFunction> germanCostTexts()
           {"Faktor j", "Der Faktor, dessen Preis sich ändert: seine Nummer oder seine Bezeichnung."},
           {"Art", "\"demand\" (Standard), \"allen\" oder \"morishima\" (nicht symmetrisch: i und j in der "
                   "gegebenen Reihenfolge, wie bei PRODSUBSTITUTION)."}}},
+    };
+}
+
+// The cost function fitted from the books (PRODCOSTFIT).
+std::vector<TranslatedFunction> germanCostFitTexts()
+{
+    return {
         {"prodCostFit",
          "Schätzt eine Kostenfunktion aus beobachteten Kosten, Ausbringung und Faktorpreisen nach der Methode der "
          "kleinsten Quadrate in Logarithmen, linear homogen in den Preisen, oder mit Ineffizienz eine stochastische "
