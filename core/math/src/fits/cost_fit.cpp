@@ -4,6 +4,7 @@
 #include "isoquant/math/fits/panel_summary.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/parameter_inference.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/fits/cost_share_system.hpp"
@@ -89,17 +90,6 @@ void requireCostData(const CostData& data, Eigen::Index parameters, bool frontie
 
 namespace {
 
-// gᵀVg over the parameters g involves: under effects V has no entries (NaN) for the constant,
-// which no quantity here depends on.
-double varianceOf(const Eigen::RowVectorXd& gradient, const Eigen::MatrixXd& covariance)
-{
-    double variance = 0;
-    for (Eigen::Index i = 0; i < gradient.size(); ++i)
-        for (Eigen::Index j = 0; j < gradient.size(); ++j)
-            if (gradient(i) != 0 && gradient(j) != 0) variance += gradient(i) * covariance(i, j) * gradient(j);
-    return variance;
-}
-
 // ε at the sample means of the logs as gᵀθ (cost_fit.hpp).
 Eigen::RowVectorXd elasticityGradient(const CostFit& fit, Eigen::Index parameters)
 {
@@ -127,7 +117,8 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
     gradient(2 + k) = -logScale / curvature;
     gradient.segment(priceOutputStart(k), k) = -fit.meanLogPrices.transpose() / curvature;
     const ParameterEstimate logEstimate =
-        inferenceOf(logScale, varianceOf(gradient, fit.summary.inference.covariance), degreesOfFreedom, level);
+        inferenceOf(logScale, varianceOfCombination(gradient.transpose(), fit.summary.inference.covariance),
+                    degreesOfFreedom, level);
     ParameterEstimate scale;
     scale.estimate = std::exp(logScale);
     scale.standardError = scale.estimate * logEstimate.standardError;
@@ -140,7 +131,7 @@ std::optional<ParameterEstimate> efficientScaleOf(const CostFit& fit, double deg
 void setReturnsToScale(CostFit& fit, double degreesOfFreedom, double level)
 {
     const Eigen::RowVectorXd gradient = elasticityGradient(fit, fit.summary.inference.estimates.size());
-    const double variance = varianceOf(gradient, fit.summary.inference.covariance);
+    const double variance = varianceOfCombination(gradient.transpose(), fit.summary.inference.covariance);
     fit.costElasticity = inferenceOf(gradient.dot(fit.summary.inference.estimates), variance, degreesOfFreedom, level);
     const double elasticity = fit.costElasticity.estimate;
     ReturnsToScale& returns = fit.summary.returns;

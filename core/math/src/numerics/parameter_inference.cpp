@@ -53,4 +53,13 @@ void setInformationCriteria(FitSummary& summary)
     summary.bic = -2.0 * summary.logLikelihood + p * std::log(n);
 }
 
+double varianceOfCombination(const Eigen::VectorXd& gradient, const Eigen::MatrixXd& covariance)
+{
+    double variance = 0;
+    for (Eigen::Index i = 0; i < gradient.size(); ++i)
+        for (Eigen::Index j = 0; j < gradient.size(); ++j)
+            if (gradient(i) != 0 && gradient(j) != 0) variance += gradient(i) * covariance(i, j) * gradient(j);
+    return variance;
+}
+
 } // namespace isoquant

@@ -4,6 +4,7 @@
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/parameter_inference.hpp"
 #include "isoquant/sheet/arguments/model_inputs.hpp"
 #include "isoquant/sheet/models/model_table.hpp"
 
@@ -77,13 +78,8 @@ double answer(const Linearised& quantity, const BoundsModel& read, Statistic sta
 double answer(const Linearised& quantity, const CovarianceBlock& block, double critical, Statistic statistic,
               double residualVariance)
 {
-    // gᵀVg over the parameters the quantity depends on: a parameter without a variance ("n/a", ln A
-    // under effects) may stand in V where g is 0.
-    double variance = 0;
-    const Eigen::VectorXd& g = quantity.gradient;
-    for (Eigen::Index i = 0; i < g.size(); ++i)
-        for (Eigen::Index j = 0; j < g.size(); ++j)
-            if (g(i) != 0 && g(j) != 0) variance += g(i) * block.matrix(i, j) * g(j);
+    // gᵀVg over the parameters the quantity depends on ("n/a", ln A under effects, where g is 0).
+    const double variance = varianceOfCombination(quantity.gradient, block.matrix);
     if (!std::isfinite(variance))
         throw argumentError(argument::what, "the covariance block has no variance for a parameter this quantity uses");
     const double spread = std::sqrt(variance);

@@ -90,4 +90,9 @@ double gaussianLogLikelihood(double residualSumOfSquares, double observations); 
 // share system's).
 void setInformationCriteria(FitSummary& summary);
 
+// gᵀVg, the delta method's variance of a quantity with gradient g, summed over the parameters g
+// involves only: a parameter without a variance (NaN in V: the constant under group effects) may
+// stand in V where g is 0.
+double varianceOfCombination(const Eigen::VectorXd& gradient, const Eigen::MatrixXd& covariance);
+
 } // namespace isoquant
