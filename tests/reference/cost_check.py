@@ -22,8 +22,8 @@ the rows POINTS of the data (y and w of each), the standard errors of total, ave
 cost (log scale: q·√(gᵀVg), g the gradient of ln q), of the cost elasticity and of returns to
 scale (√(gᵀVg), g the gradient of q), and the lower bound of total cost, q·exp(−t·s) with scipy's
 t quantile on the fit's degrees of freedom — V the statsmodels covariance of the full form's
-parameters (R V_b Rᵀ), g by central differences in numpy (step 1e-6·max(1, |θᵢ|): truncation and
-rounding both near 1e-10 relative, far inside the 1e-7 of the check).
+parameters (R V_b Rᵀ), g by the complex step in numpy (reference_script.complex_step_standard_error:
+no difference is taken, so g is exact to rounding, far inside the 1e-7 of the check).
 
 Writes one figure per line: dataset,form,quantity,index,value. Exits with 77 (the CTest skip code)
 when statsmodels cannot be imported, leaving no OUTPUT_CSV behind.
@@ -116,20 +116,22 @@ def figures(np, sm, put, form, cov_type, cost, output, prices):
     put(name, "bic", fit.bic)
     put(name, "smearing", float(np.exp(fit.resid).mean()))
     # the cost elasticity at the mean logs, in the regression's coefficients
-    k = prices.shape[1]
-    gradient = np.zeros(design.shape[1])
-    gradient[1] = 1.0
-    if form == "translog":
-        gradient[2 + (k - 1)] = log_output.mean()
-        gradient[design.shape[1] - (k - 1):] = relative.mean(axis=0)
-    elasticity_figures(np, lambda q, v: put(name, q, v), fit, gradient, form, k)
+    elasticity_figures(np, lambda q, v: put(name, q, v), fit, form, log_output, relative, design.shape[1])
 
 
-def elasticity_figures(np, put, fit, gradient, form, k, covariance=None):
-    """The cost elasticity gᵀb with its standard error and test of 1, and for the translog the
+def elasticity_figures(np, put, fit, form, log_output, relative, form_columns, covariance=None):
+    """The cost elasticity gᵀb at the mean logs (g: 1 at ln y; for the translog the mean ln y at
+    (ln y)²/2 and the mean normalised log prices at the last k − 1 of the form's `form_columns`
+    columns, the ln w̃ᵢ·ln y terms) with its standard error and test of 1, and for the translog the
     efficient scale (where the elasticity is 1 at the mean log prices; only where it rises with
     output, else its absence) with its delta-method standard error; `covariance` in place of the
     fit's own (cost_panel_check.py's cluster factor)."""
+    k = relative.shape[1] + 1
+    gradient = np.zeros(len(fit.params))
+    gradient[1] = 1.0
+    if form == "translog":
+        gradient[2 + (k - 1)] = log_output.mean()
+        gradient[form_columns - (k - 1):form_columns] = relative.mean(axis=0)
     elasticity = fit.t_test(gradient.reshape(1, -1), cov_p=covariance)
     put("elasticity", float(np.squeeze(elasticity.effect)))
     put("elasticity_se", float(np.squeeze(elasticity.sd)))
@@ -189,17 +191,8 @@ def bound_figures(np, put, form, theta, covariance, df, output, prices):
         y, w = output[row], prices[row]
         for name, (quantity, log_scale) in quantities.items():
             value = quantity(theta, y, w)
-            gradient = np.zeros(len(theta))
-            for i in range(len(theta)):
-                step = 1e-6 * max(1.0, abs(theta[i]))
-                up, down = theta.copy(), theta.copy()
-                up[i] += step
-                down[i] -= step
-                f_up, f_down = quantity(up, y, w), quantity(down, y, w)
-                if log_scale:
-                    f_up, f_down = np.log(f_up), np.log(f_down)
-                gradient[i] = (f_up - f_down) / (2 * step)
-            spread = float(np.sqrt(gradient @ covariance @ gradient))
+            on_scale = (lambda t: np.log(quantity(t, y, w))) if log_scale else (lambda t: quantity(t, y, w))
+            spread = reference_script.complex_step_standard_error(np, on_scale, theta, covariance)
             put("bound_se_" + name, value * spread if log_scale else spread, index)
             if name == "total":
                 put("bound_lower_total", value * np.exp(-critical * spread), index)

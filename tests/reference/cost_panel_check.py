@@ -124,14 +124,9 @@ def figures(np, sm, put, name, spec, data, panel):
     put(name, "aic", fit.aic)
     put(name, "bic", fit.bic)
     put(name, "smearing", float(np.exp(fit.resid).mean()))
-    k = prices.shape[1]
-    gradient = np.zeros(len(fit.params))
-    gradient[1] = 1.0
-    if form == "translog":
-        gradient[2 + (k - 1)] = np.log(output).mean()
-        relative = np.log(prices[:, :-1]) - np.log(prices[:, -1:])
-        gradient[base_width - (k - 1):base_width] = relative.mean(axis=0)
-    cost_check.elasticity_figures(np, lambda q, v: put(name, q, v), fit, gradient, form, k, used)
+    relative = np.log(prices[:, :-1]) - np.log(prices[:, -1:])
+    cost_check.elasticity_figures(np, lambda q, v: put(name, q, v), fit, form, np.log(output), relative, base_width,
+                                  used)
 
 
 def main():
