@@ -3,6 +3,10 @@
 #include <com/sun/star/frame/theGlobalEventBroadcaster.hpp>
 #include <com/sun/star/lang/XServiceInfo.hpp>
 
+#if defined(__GLIBC__)
+#include <malloc.h>
+#endif
+
 namespace isoquant::addin {
 
 namespace {
@@ -15,6 +19,16 @@ bool isSpreadsheet(const css::uno::Reference<css::uno::XInterface>& document)
 {
     const css::uno::Reference<css::lang::XServiceInfo> info(document, css::uno::UNO_QUERY);
     return info.is() && info->supportsService("com.sun.star.sheet.SpreadsheetDocument");
+}
+
+// Freed blocks go back to malloc, not to the system: glibc raises its mmap threshold after the
+// first large block is freed, so later entries (tens of MB each) come from the heap and stay
+// resident after they are freed. malloc_trim hands the free pages back, the closed document's too.
+void returnFreedMemory()
+{
+#if defined(__GLIBC__)
+    malloc_trim(0);
+#endif
 }
 
 } // namespace
@@ -54,7 +68,10 @@ void ClosingDocuments::documentEventOccured(const css::document::DocumentEvent& 
 {
     try {
         if (!event.EventName.equalsAscii(closedEvent) || !isSpreadsheet(event.Source)) return;
-        if (const std::shared_ptr<FitCache> fits = fits_.lock()) fits->clear();
+        const std::shared_ptr<FitCache> fits = fits_.lock();
+        if (!fits || fits->bytesHeld() == 0) return;
+        fits->clear();
+        returnFreedMemory();
     } catch (const css::uno::Exception&) {
         // A document that answers no questions any more while closing: keep the entries.
     }

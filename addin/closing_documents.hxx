@@ -2,7 +2,8 @@
 // about the document that called it (only through a hidden first parameter that every function's
 // IDL would have to declare), so the cache cannot know which entries the closed document used:
 // all of them go. The documents still open lose nothing but time: a fit is computed again when a
-// cell over it is next recalculated (their cells keep their values until then).
+// cell over it is next recalculated (their cells keep their values until then). The freed pages are
+// then handed back to the system (glibc's malloc_trim): freed alone, most would stay resident.
 #pragma once
 
 #include "isoquant/sheet/caches/fit_cache.hpp"

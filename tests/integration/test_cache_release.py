@@ -13,12 +13,14 @@ entry; the documents still open compute their fits again at their next recalcula
 
 import os
 import unittest
+import zipfile
 
 import uno
 
 from isoquant_office import HeadlessOffice, get_cell, get_range, set_array_formula, set_formula, set_values
 from isoquant_office.uno_calls import properties
 
+from .support import EXTENSION as USER_EXTENSION
 from .support import REPO, cobb_douglas_rows
 
 EXTENSION = os.environ.get("ISOQUANT_BENCH_OXT", os.path.join(REPO, "build", "isoquant-bench.oxt"))
@@ -112,6 +114,18 @@ class CacheReleaseTest(unittest.TestCase):
             doc.close(True)
             self.assertEqual(self.cache_bytes(), 0.0, "cycle %d, document closed" % cycle)
         self.assertTrue(self.office.alive(), "the office answers after the cycles")
+
+
+class DiagnosticOnlyInBenchmarkTest(unittest.TestCase):
+    def test_user_extension_has_no_cache_diagnostic(self):
+        # Neither the type library nor the library of isoquant.oxt names the diagnostic function.
+        with zipfile.ZipFile(USER_EXTENSION) as package:
+            for member in ("isoquant.rdb", "libisoquant.so"):
+                content = package.read(member)
+                self.assertNotIn(b"benchCacheBytes", content, member)
+                self.assertNotIn(b"ISOQUANTCACHEBYTES", content, member)
+        with zipfile.ZipFile(EXTENSION) as package:
+            self.assertIn(b"ISOQUANTCACHEBYTES", package.read("libisoquant.so"))
 
 
 if __name__ == "__main__":
