@@ -13,38 +13,15 @@ import time
 
 import numpy
 from isoquant_office import HeadlessOffice, set_array_formula, set_values_in_blocks
+from isoquant_office.process_memory import memory_mb, office_process
 
 ROWS = 1000000
 LEVELS = (0.80, 0.85, 0.90, 0.95, 0.98, 0.99)
 
 
-def office_process(office):
-    """The soffice.bin process of the office's process group."""
-    for name in os.listdir("/proc"):
-        if not name.isdigit():
-            continue
-        try:
-            if os.getpgid(int(name)) != office.pgid:
-                continue
-            with open("/proc/%s/comm" % name) as handle:
-                if handle.read().strip() == "soffice.bin":
-                    return int(name)
-        except (OSError, ProcessLookupError):
-            continue
-    raise RuntimeError("soffice.bin not found")
-
-
-def resident_mb(pid):
-    with open("/proc/%d/status" % pid) as handle:
-        for line in handle:
-            if line.startswith("VmRSS:"):
-                return int(line.split()[1]) / 1024.0
-    raise RuntimeError("VmRSS not found")
-
-
 def settled_resident_mb(pid, seconds=3.0):
     time.sleep(seconds)  # let the office finish what the close started
-    return resident_mb(pid)
+    return memory_mb(pid, "VmRSS")
 
 
 def main():
