@@ -43,8 +43,8 @@ void ClosingDocuments::start(const css::uno::Reference<css::uno::XComponentConte
         broadcaster->addDocumentEventListener(this);
         const std::lock_guard<std::mutex> lock(broadcasterMutex_);
         broadcaster_ = broadcaster;
-    } catch (const css::uno::Exception&) {
-        // No office around this runtime: the cache keeps its bounds, nothing more.
+    } catch (...) {
+        // No office around this runtime (or no memory to listen): the cache keeps its bounds only.
     }
 }
 
@@ -72,8 +72,9 @@ void ClosingDocuments::documentEventOccured(const css::document::DocumentEvent& 
         if (!fits || fits->bytesHeld() == 0) return;
         fits->clear();
         returnFreedMemory();
-    } catch (const css::uno::Exception&) {
-        // A document that answers no questions any more while closing: keep the entries.
+    } catch (...) {
+        // A document that answers no questions any more while closing: keep the entries. Nothing
+        // may escape into the office, which called us.
     }
 }
 
