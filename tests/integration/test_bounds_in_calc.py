@@ -267,11 +267,14 @@ def complex_step_gradient(function, theta):
 class OtherFormsTest(CalcTestCase):
     """The block and `what` for the translog and ces forms (Cobb & Douglas 1928 data, bundle (150,
     200) invented). Translog: the block is statsmodels' cov_params of the same regression (1e-8), the
-    marginal product's std. error and bounds that covariance with a numpy complex-step gradient of
-    e_L Y / L written out here (1e-7). Ces: the covariance is the table's own (its diagonal the
+    marginal product's std. error and bounds, and PRODSECOND's std. error of f_LC, that covariance with
+    a numpy complex-step gradient of e_L Y / L and of (b_LC + e_L e_C) Y / (L C) written out here
+    (1e-7; the same figures as the core's, test_decision_bounds_cross_check.cpp). Ces: the covariance is the table's own (its diagonal the
     table's squared standard errors, 1e-12; symmetric; positive semidefinite), and the std. errors
     sqrt(g'Vg) with V and theta read from the table and g a numpy complex-step gradient of the textbook
-    formula ln Y = ln A - (nu/rho) ln(delta L^-rho + (1 - delta) C^-rho), to 1e-6 relative."""
+    formula ln Y = ln A - (nu/rho) ln(delta L^-rho + (1 - delta) C^-rho) (and of PRODMRTS's
+    ln(e_L / e_C) + ln(C / L)), to 1e-6 relative. PRODLEASTCOST answers these words for the
+    cobb-douglas form only: a message naming `what`."""
 
     @classmethod
     def setUpClass(cls):
@@ -290,6 +293,9 @@ class OtherFormsTest(CalcTestCase):
         set_formula(cls.sheet, "N10", '=PRODSECOND(F1:L30;$P$90:$Q$90;"L";"C";"std. error")')
         set_values(cls.sheet, "F101", [list(row) for row in get_range(cls.sheet, "F1:L29")])  # one row short
         set_formula(cls.sheet, "N11", '=PRODMARGINAL(F101:L130;$P$90:$Q$90;"L";"std. error")')
+        set_values(cls.sheet, "P91", [[2.0, 3.0]])  # input prices, invented
+        set_formula(cls.sheet, "N12", '=PRODLEASTCOST(F1:L30;170;$P$91:$Q$91;"std. error")')
+        set_formula(cls.sheet, "N13", '=PRODMRTS(F70:L94;$P$90:$Q$90;"L";"C";"std. error")')
         recalc(CALC.doc)
         cls.translog, cls.plain = get_range(cls.sheet, "F1:L30"), get_range(cls.sheet, "F40:L62")
         cls.ces = get_range(cls.sheet, "F70:L94")
@@ -322,6 +328,14 @@ class OtherFormsTest(CalcTestCase):
                                         marginal * np.exp(t * spread)]):
             self.assert_relative(get_cell(self.sheet, "N%d" % (row + 1)), expected, 1e-7, "translog row %d" % row)
 
+        def cross_partial(p):  # f_LC = (b_LC + e_L e_C) Y / (L C)
+            log_output = p[0] + p[1] * a + p[2] * b + (p[3] * a * a + 2 * p[4] * a * b + p[5] * b * b) / 2
+            e_l, e_c = p[1] + p[3] * a + p[4] * b, p[2] + p[4] * a + p[5] * b
+            return (p[4] + e_l * e_c) * np.exp(log_output) / (150.0 * 200.0)
+        gradient = complex_step_gradient(cross_partial, theta)
+        self.assert_relative(get_cell(self.sheet, "N10"), float(np.sqrt(gradient @ cov @ gradient)), 1e-7,
+                             "translog PRODSECOND std. error")
+
     def test_ces_block_and_bounds(self):
         block = np.array([row[1:5] for row in self.ces[21:25]]) if np is not None else None
         self.assertEqual(list(self.ces[20][:4]), ["covariance", "classical", 20.0, 0.95])
@@ -353,16 +367,21 @@ class OtherFormsTest(CalcTestCase):
         self.assert_relative(get_cell(self.sheet, "N4"), marginal * spread(log_marginal_l), 1e-6, "ces MP se")
         self.assert_relative(get_cell(self.sheet, "N7"), output * spread(log_output), 1e-6, "ces output se")
         self.assert_relative(get_cell(self.sheet, "N8"), spread(elasticity_c), 1e-6, "ces elasticity se")
+
+        def log_rate(p):  # ln MRTS = ln(e_L / e_C) + ln(C / L)
+            return np.log((p[3] - elasticity_c(p)) / elasticity_c(p)) + b - a
+        rate = float(np.exp(log_rate(np.asarray(theta))))
+        self.assert_relative(get_cell(self.sheet, "N13"), rate * spread(log_rate), 1e-6, "ces PRODMRTS std. error")
         lower, upper = get_cell(self.sheet, "N5"), get_cell(self.sheet, "N6")
         self.assert_relative(lower * upper, marginal * marginal, 1e-9, "ces MP bounds on the log scale")
 
     def test_messages_name_the_argument(self):
         self.assert_message(get_cell(self.sheet, "N9"), "Error: inputs: the translog's returns to scale and their "
                             "bounds vary with the inputs; give a row of inputs", "translog scale without inputs")
-        self.assert_message(get_cell(self.sheet, "N10"),
+        self.assert_message(get_cell(self.sheet, "N12"),
                             "Error: what: \"std. error\" is available for the cobb-douglas form only in this function "
-                            "(for the translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)",
-                            "translog second partial")
+                            "(for the translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, "
+                            "PRODMRTS, PRODSUBSTITUTION and PRODTFP)", "translog least cost")
         self.assert_message(get_cell(self.sheet, "N11"), "Error: model: row 24: the covariance block has 5 rows; it "
                             "needs one row per parameter (6) and 6 numbers in each", "translog block one row short")
 

@@ -71,6 +71,15 @@ def classical_and_hc1_fits(sm, y, design):
     return [("classical", model.fit()), ("hc1", model.fit(cov_type="HC1", use_t=True))]
 
 
+def translog_1928_fits(data_dir, np, sm):
+    """classical_and_hc1_fits of the translog on Cobb & Douglas (1928): ln P on a constant, ln L,
+    ln C, (ln L)^2 / 2, ln L ln C and (ln C)^2 / 2 (the 1/2 convention, parameters in the order of
+    the core's table)."""
+    y, l1, l2 = cobb_douglas_1928_logs(data_dir, np)
+    design = sm.add_constant(np.column_stack([l1, l2, 0.5 * l1 * l1, l1 * l2, 0.5 * l2 * l2]))
+    return classical_and_hc1_fits(sm, y, design)
+
+
 def fit_inference(np, stats, result, level):
     """(parameters, covariance, t quantile at `level` on the residual degrees of freedom, Duan's
     smearing factor mean(exp(residual))) of a statsmodels OLS result."""

@@ -1,6 +1,6 @@
-// `what` of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE on translog and ces tables with
-// their covariance block (issue 20, form_gradients.hpp): where the table itself states the same
-// quantity with its inference, `what` must give the table's figures (the translog's elasticities
+// `what` of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE and the decisions on translog and
+// ces tables with their covariance block (issue 20, form_gradients.hpp): where the table itself
+// states the same quantity with its inference, `what` must give the table's figures (the translog's elasticities
 // and returns to scale at the sample mean of the logs; the ces's nu), and the words a model cannot
 // answer get a message naming the argument. Data: Cobb & Douglas (1928) and the Munnell (1990) state
 // panel (tests/data/README.md). The figures themselves are checked against statsmodels and numpy in
@@ -87,16 +87,44 @@ BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log
     BOOST_TEST(closeTo(marginalLow * marginalHigh, marginal * marginal, 1e-12));
 }
 
+// PRODMRTS of a translog where both elasticities are positive and of a ces: bounds on the log scale
+// (lower·upper = value², 1e-12); PRODSECOND's bounds are value ∓ t·se (their mean is the value,
+// 1e-12); "value" is the plain function's answer. The figures: test_decision_bounds_cross_check.cpp.
+BOOST_AUTO_TEST_CASE(decisions_answer_on_translog_and_ces_tables)
+{
+    const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
+    for (const char* form : {"translog", "ces"}) {
+        const auto table = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), form));
+        BOOST_TEST_CONTEXT(form)
+        {
+            const double rate = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double low = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, std::string("lower bound")));
+            const double high = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, std::string("upper bound")));
+            BOOST_TEST(low < rate);
+            BOOST_TEST(closeTo(low * high, rate * rate, 1e-12));
+            const double partial = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double below = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, std::string("lower bound")));
+            const double above = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, std::string("upper bound")));
+            BOOST_TEST(closeTo((below + above) / 2, partial, 1e-12));
+            BOOST_TEST(first(isoquant::substitutionColumnWithBounds(table, bundle, 1.0, 2.0, {}, std::string("std. error"))) > 0);
+        }
+    }
+}
+
 BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
 {
     const auto translog = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), "translog"));
     const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
     BOOST_TEST(messageOf([&] { isoquant::scaleColumnWithBounds(translog, {}, std::string("std. error")); }) ==
                "inputs: the translog's returns to scale and their bounds vary with the inputs; give a row of inputs");
+    isoquant::CellTable prices(1, 2);
+    prices.set(0, 0, 2.0);
+    prices.set(0, 1, 3.0);
     BOOST_TEST(messageOf([&] {
-                   isoquant::secondPartialColumnWithBounds(translog, bundle, 1.0, 2.0, std::string("std. error"));
+                   isoquant::leastCostRowWithBounds(translog, 170.0, prices, std::string("std. error"));
                }) == "what: \"std. error\" is available for the cobb-douglas form only in this function (for the "
-                     "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
+                     "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
+                     "PRODSUBSTITUTION and PRODTFP)");
     // With a control the evaluators' ln A is at the control's mean, the block's last row: output is
     // answered (its figures: test_shifted_bounds_cross_check.cpp), and so are the elasticities.
     const auto controlled = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));

@@ -2,12 +2,15 @@
 // `statistic` (bound_functions.hpp):
 // the plain function answers first (its checks, messages and sentences unchanged), then each of
 // its numbers is replaced by its standard error or bound (delta_method.hpp), with the gradient of
-// the Cobb-Douglas form given beside each function.
+// the Cobb-Douglas form given beside each function; PRODTFP, PRODSECOND, PRODMRTS and
+// PRODSUBSTITUTION also for translog and ces models (form_gradients.hpp, shape_gradients.hpp).
 #include "isoquant/sheet/functions/bound_functions.hpp"
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/cost_model_bounds.hpp"
 #include "functions/delta_method.hpp"
+#include "functions/form_gradients.hpp"
+#include "functions/shape_gradients.hpp"
 
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
@@ -57,15 +60,16 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = productivityColumn(model, output, inputs, periods);
     if (statistic == Statistic::value) return values;
-    // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln A − Σ bᵢ ln xᵢ, so g of ln TFP is minus g of
-    // ln f(x): (−1, −ln x₁ … −ln x_k, 0 …). Positive by nature: bounds on the log scale.
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln f(x), so g of ln TFP is minus g of ln f(x):
+    // (−1, −ln x₁ … −ln x_k, 0 …) for cobb-douglas, the translog's and ces's of form_gradients.hpp.
+    // Positive by nature: bounds on the log scale.
+    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
     // With periods each row's ln A moves by λ·(t − t_last), and λ has no row of the block.
     if (!periods.empty())
         throw argumentError(argument::what, "\"" + word(statistic) + "\" needs periods left out: the covariance "
                                             "block does not hold the trend's coefficient that periods apply");
     return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
-        return Linearised{tfp, -logOutputGradient(read, bundle), true};
+        return Linearised{tfp, -logOutputGradientOf(read, bundle), true};
     });
 }
 
@@ -75,9 +79,13 @@ CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = secondPartialColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
+    if (!read.form) // translog, ces: shape_gradients.hpp
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double partial) {
+            return secondPartialLinearised(read, bundle, i, j, partial);
+        });
     const Eigen::VectorXd& b = read.form->exponents;
     // fᵢⱼ = c·Y/(xᵢxⱼ) with c = bᵢ(bⱼ − δᵢⱼ): g = fᵢⱼ·(g of ln Y) + Y/(xᵢxⱼ)·∂c/∂θ, where
     // ∂c/∂bᵢ = bⱼ − δᵢⱼ and ∂c/∂bⱼ = bᵢ (together 2bᵢ − 1 when i = j). Its sign varies with the
@@ -97,9 +105,13 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = technicalRateColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
+    if (!read.form) // translog, ces: shape_gradients.hpp
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double rate) {
+            return technicalRateLinearised(read, bundle, i, j, rate);
+        });
     const double bi = read.form->exponents(i), bj = read.form->exponents(j);
     // MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ), free of ln A. With both exponents positive (both marginal products
     // positive) it is positive by nature: ln MRTS = ln bᵢ − ln bⱼ + ln(xⱼ/xᵢ), g = 1/bᵢ at bᵢ and
@@ -155,7 +167,15 @@ CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = substitutionColumn(model, inputs, first, second, kind);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
+    if (!read.form) { // translog, ces: shape_gradients.hpp
+        const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+        const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
+        const SubstitutionKind chosen = readSubstitutionKind(kind);
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double sigma) {
+            return substitutionLinearised(read, bundle, i, j, chosen, sigma);
+        });
+    }
     // The cobb-douglas form fixes the direct, Allen and Morishima elasticities at 1 whatever its
     // parameters (σᵢⱼ = −fᵢfⱼ(xᵢfᵢ + xⱼfⱼ)/(xᵢxⱼ(fᵢᵢfⱼ² − 2fᵢⱼfᵢfⱼ + fⱼⱼfᵢ²)) = 1 for fᵢ = bᵢY/xᵢ):
     // the gradient is 0, so the std. error is 0 and both bounds are the value. The form allows the

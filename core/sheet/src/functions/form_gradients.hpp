@@ -25,6 +25,14 @@
 
 namespace isoquant::delta_method {
 
+// The ces gradient as it is, or InputError naming "what" where it is not finite: δ of 0 or 1 leaves
+// ∂/∂δ undefined (0/0).
+Eigen::VectorXd finiteCesGradient(Eigen::VectorXd gradient);
+// g of ln Y, by form: cobb-douglas (1, ln x, 0 …), translog and ces as above.
+Eigen::VectorXd logOutputGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle);
+// g of εᵢ, by form (cobb-douglas: εᵢ = bᵢ, 1 at bᵢ).
+Eigen::VectorXd elasticityGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle, Eigen::Index input);
+
 // Y (times `factor`, the smearing factor of a mean prediction) with the gradient of ln Y: log scale.
 Linearised outputLinearised(const BoundsModel& read, const Eigen::VectorXd& bundle, double factor);
 // ∂Y/∂xᵢ: log scale where it is positive by nature (cobb-douglas bᵢ > 0, translog and ces εᵢ > 0).

@@ -1,0 +1,113 @@
+// Standard errors and bounds of the decisions' derived numbers on translog and ces models (issue 20:
+// PRODTFP, PRODSECOND, PRODMRTS and PRODSUBSTITUTION with `what`), against
+// tests/reference/decision_bounds_check.py, recomputed at test time:
+// - translog: a PRODFIT table with its covariance block of the Cobb & Douglas (1928) data
+//   (tests/data/README.md), against python3-statsmodels' covariance of the same OLS regression
+//   (classical and HC1) and a complex-step gradient in numpy of each quantity written from the
+//   textbook partials f_i, f_ij (not the core's scaled local shape);
+// - ces: a typed model with a typed covariance block (the script's CES_THETA and CES_COVARIANCE,
+//   invented, typed here again), so the covariance and parameters are the table's own; the
+//   gradient again numpy's complex step.
+// At (100, 100) the translog's εC is negative, so its MRTS takes the path of a quantity that is not
+// positive (value ∓ t·se), checked as well. With two inputs the direct, Allen and Morishima
+// elasticities coincide in value, but each is differentiated by its own formula in both programs.
+//
+// Tolerance: 1e-7 relative on every figure (the issue's). Both gradients are exact to rounding; the
+// two covariance matrices agree to about 1e-12, and gᵀVg cancels up to five digits here, which
+// leaves 1e-7 room to spare and still catches a wrong term (a slope's sign, a missing ½).
+#include "isoquant/sheet/functions/bound_functions.hpp"
+#include "cell_tables.hpp"
+#include "covariance_tables.hpp"
+#include "reference_data.hpp"
+#include "reference_figures.hpp"
+#include "relative_error.hpp"
+
+#include <boost/test/unit_test.hpp>
+
+#include <array>
+#include <map>
+
+namespace {
+
+using isoquant::Cell;
+
+boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit_id)
+{
+    return isoquant::testing::referenceFiguresAvailable("ISOQUANT_DECISION_BOUNDS_FIGURES",
+                                                        "translog and ces decision bounds figures");
+}
+
+// decision_bounds_check.py's BUNDLES (L, C) and OBSERVED outputs.
+constexpr std::array<std::array<double, 2>, 3> bundles{{{150.0, 200.0}, {250.0, 400.0}, {100.0, 100.0}}};
+constexpr std::array<double, 3> observed{160.0, 230.0, 110.0};
+
+isoquant::CellTable translogTable(const std::string& errors)
+{
+    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
+    arguments.form = std::string("translog");
+    arguments.errors = errors;
+    return isoquant::testing::tableWithBlock(isoquant::fitFromArguments(arguments));
+}
+
+// The script's CES_THETA, CES_COVARIANCE and CES_DEGREES_OF_FREEDOM.
+isoquant::CellTable typedCes()
+{
+    const Cell none{};
+    return isoquant::testing::typedRange(
+        {{std::string("form"), std::string("ces"), none, none, none},
+         {std::string("ln A"), -0.285, none, none, none},
+         {std::string("delta"), 0.831, none, none, none},
+         {std::string("rho"), -0.526, none, none, none},
+         {std::string("nu"), 1.064, none, none, none},
+         {std::string("covariance"), std::string("classical"), 20.0, 0.95, none},
+         {std::string("ln A"), 0.364816, -0.062816, 0.746544, -0.070668},
+         {std::string("delta"), -0.062816, 0.043264, -0.299936, 0.010816},
+         {std::string("rho"), 0.746544, -0.299936, 4.2436, -0.1339},
+         {std::string("nu"), -0.070668, 0.010816, -0.1339, 0.0169}});
+}
+
+// The core's figure for a quantity of decision_bounds_check.py ("mrts_se", "second_LC_upper", …).
+double coreFigure(const isoquant::CellTable& model, const std::string& quantity, std::size_t bundle)
+{
+    isoquant::CellTable inputs(1, 2), output(1, 1);
+    inputs.set(0, 0, bundles[bundle][0]);
+    inputs.set(0, 1, bundles[bundle][1]);
+    output.set(0, 0, observed[bundle]);
+    const std::map<std::string, std::string> words{
+        {"se", "std. error"}, {"lower", "lower bound"}, {"upper", "upper bound"}};
+    const auto split = quantity.rfind('_');
+    const std::string name = quantity.substr(0, split);
+    const Cell what = words.at(quantity.substr(split + 1));
+    const std::map<char, double> input{{'L', 1.0}, {'C', 2.0}};
+    if (name == "tfp") return isoquant::productivityColumnWithBounds(model, output, inputs, {}, what).number(0, 0);
+    if (name.rfind("second_", 0) == 0)
+        return isoquant::secondPartialColumnWithBounds(model, inputs, input.at(name[7]), input.at(name[8]), what)
+            .number(0, 0);
+    if (name == "mrts") return isoquant::technicalRateColumnWithBounds(model, inputs, 1.0, 2.0, what).number(0, 0);
+    if (name.rfind("substitution_", 0) == 0)
+        return isoquant::substitutionColumnWithBounds(model, inputs, 1.0, 2.0, name.substr(13), what).number(0, 0);
+    throw std::runtime_error("unknown quantity " + quantity);
+}
+
+} // namespace
+
+BOOST_AUTO_TEST_SUITE(decision_bounds_cross_check)
+
+BOOST_AUTO_TEST_CASE(translog_and_ces_decision_bounds_agree_with_numpy, *boost::unit_test::precondition(figuresAvailable))
+{
+    const auto rows = isoquant::testing::readReferenceRows(
+        isoquant::testing::referenceFiguresPath("ISOQUANT_DECISION_BOUNDS_FIGURES"));
+    // (translog classical, translog hc1, typed ces) × 3 bundles × 8 quantities × 3 words.
+    BOOST_TEST_REQUIRE(rows.size() == 3u * 3u * 24u);
+    std::map<std::string, isoquant::CellTable> tables{{"typed", typedCes()}};
+    for (const auto& fields : rows) {
+        const std::string& errors = fields.at(1);
+        if (!tables.count(errors)) tables.emplace(errors, translogTable(errors));
+        const double expected = std::stod(fields.at(4));
+        const double core = coreFigure(tables.at(errors), fields.at(2), std::stoul(fields.at(3)));
+        BOOST_TEST_CONTEXT(fields.at(0) << " " << errors << " " << fields.at(2) << " at bundle " << fields.at(3))
+        BOOST_TEST(isoquant::testing::closeTo(core, expected, 1e-7), core << " against " << expected);
+    }
+}
+
+BOOST_AUTO_TEST_SUITE_END()
