@@ -17,15 +17,14 @@
 // leaves 1e-7 room to spare and still catches a wrong term (a slope's sign, a missing ½).
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "cell_tables.hpp"
-#include "covariance_tables.hpp"
-#include "reference_data.hpp"
+#include "form_figures.hpp"
 #include "reference_figures.hpp"
-#include "relative_error.hpp"
 
 #include <boost/test/unit_test.hpp>
 
 #include <array>
 #include <map>
+#include <string>
 
 namespace {
 
@@ -40,31 +39,6 @@ boost::test_tools::assertion_result figuresAvailable(boost::unit_test::test_unit
 // decision_bounds_check.py's BUNDLES (L, C) and OBSERVED outputs.
 constexpr std::array<std::array<double, 2>, 3> bundles{{{150.0, 200.0}, {250.0, 400.0}, {100.0, 100.0}}};
 constexpr std::array<double, 3> observed{160.0, 230.0, 110.0};
-
-isoquant::CellTable translogTable(const std::string& errors)
-{
-    auto arguments = isoquant::testing::cobbDouglas1928Arguments();
-    arguments.form = std::string("translog");
-    arguments.errors = errors;
-    return isoquant::testing::tableWithBlock(isoquant::fitFromArguments(arguments));
-}
-
-// The script's CES_THETA, CES_COVARIANCE and CES_DEGREES_OF_FREEDOM.
-isoquant::CellTable typedCes()
-{
-    const Cell none{};
-    return isoquant::testing::typedRange(
-        {{std::string("form"), std::string("ces"), none, none, none},
-         {std::string("ln A"), -0.285, none, none, none},
-         {std::string("delta"), 0.831, none, none, none},
-         {std::string("rho"), -0.526, none, none, none},
-         {std::string("nu"), 1.064, none, none, none},
-         {std::string("covariance"), std::string("classical"), 20.0, 0.95, none},
-         {std::string("ln A"), 0.364816, -0.062816, 0.746544, -0.070668},
-         {std::string("delta"), -0.062816, 0.043264, -0.299936, 0.010816},
-         {std::string("rho"), 0.746544, -0.299936, 4.2436, -0.1339},
-         {std::string("nu"), -0.070668, 0.010816, -0.1339, 0.0169}});
-}
 
 // The core's figure for a quantity of decision_bounds_check.py ("mrts_se", "second_LC_upper", …).
 double coreFigure(const isoquant::CellTable& model, const std::string& quantity, std::size_t bundle)
@@ -99,15 +73,7 @@ BOOST_AUTO_TEST_CASE(translog_and_ces_decision_bounds_agree_with_numpy, *boost::
         isoquant::testing::referenceFiguresPath("ISOQUANT_DECISION_BOUNDS_FIGURES"));
     // (translog classical, translog hc1, typed ces) × 3 bundles × 8 quantities × 3 words.
     BOOST_TEST_REQUIRE(rows.size() == 3u * 3u * 24u);
-    std::map<std::string, isoquant::CellTable> tables{{"typed", typedCes()}};
-    for (const auto& fields : rows) {
-        const std::string& errors = fields.at(1);
-        if (!tables.count(errors)) tables.emplace(errors, translogTable(errors));
-        const double expected = std::stod(fields.at(4));
-        const double core = coreFigure(tables.at(errors), fields.at(2), std::stoul(fields.at(3)));
-        BOOST_TEST_CONTEXT(fields.at(0) << " " << errors << " " << fields.at(2) << " at bundle " << fields.at(3))
-        BOOST_TEST(isoquant::testing::closeTo(core, expected, 1e-7), core << " against " << expected);
-    }
+    isoquant::testing::checkFormFigures(rows, coreFigure);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -4,9 +4,10 @@
 // and returns to scale at the sample mean of the logs; the ces's nu), and the words a model cannot
 // answer get a message naming the argument. Data: Cobb & Douglas (1928) and the Munnell (1990) state
 // panel (tests/data/README.md). The figures themselves are checked against statsmodels and numpy in
-// test_form_bounds_cross_check.cpp and tests/integration/test_bounds_in_calc.py.
+// test_form_bounds_cross_check.cpp and tests/integration/test_form_bounds_in_calc.py.
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
@@ -87,9 +88,10 @@ BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log
     BOOST_TEST(closeTo(marginalLow * marginalHigh, marginal * marginal, 1e-12));
 }
 
-// PRODMRTS of a translog where both elasticities are positive and of a ces: bounds on the log scale
-// (lower·upper = value², 1e-12); PRODSECOND's bounds are value ∓ t·se (their mean is the value,
-// 1e-12); "value" is the plain function's answer. The figures: test_decision_bounds_cross_check.cpp.
+// PRODMRTS of a translog where both elasticities are positive and of a ces, the least-cost amounts
+// and the budget plan's output: bounds on the log scale (lower·upper = value², 1e-12); PRODSECOND's
+// bounds are value ∓ t·se (their mean is the value, 1e-12). Prices (4, 3), output 180 and budget
+// 1000 invented. The figures: test_decision_bounds_cross_check.cpp, test_plan_bounds_cross_check.cpp.
 BOOST_AUTO_TEST_CASE(decisions_answer_on_translog_and_ces_tables)
 {
     const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
@@ -107,6 +109,17 @@ BOOST_AUTO_TEST_CASE(decisions_answer_on_translog_and_ces_tables)
             const double above = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, std::string("upper bound")));
             BOOST_TEST(closeTo((below + above) / 2, partial, 1e-12));
             BOOST_TEST(first(isoquant::substitutionColumnWithBounds(table, bundle, 1.0, 2.0, {}, std::string("std. error"))) > 0);
+            // The plans: amounts and output on the log scale.
+            const auto prices = isoquant::testing::typedRange({{4.0, 3.0}});
+            const double amount = isoquant::leastCostRow(table, 180.0, prices).number(0, 1);
+            const double amountLow = isoquant::leastCostRowWithBounds(table, 180.0, prices, std::string("lower bound")).number(0, 1);
+            const double amountHigh = isoquant::leastCostRowWithBounds(table, 180.0, prices, std::string("upper bound")).number(0, 1);
+            BOOST_TEST(closeTo(amountLow * amountHigh, amount * amount, 1e-12));
+            const double output = isoquant::budgetRow(table, 1000.0, prices).number(0, 2);
+            const double outputLow = isoquant::budgetRowWithBounds(table, 1000.0, prices, std::string("lower bound")).number(0, 2);
+            const double outputHigh = isoquant::budgetRowWithBounds(table, 1000.0, prices, std::string("upper bound")).number(0, 2);
+            BOOST_TEST(outputLow < output);
+            BOOST_TEST(closeTo(outputLow * outputHigh, output * output, 1e-12));
         }
     }
 }
@@ -117,14 +130,6 @@ BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
     const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
     BOOST_TEST(messageOf([&] { isoquant::scaleColumnWithBounds(translog, {}, std::string("std. error")); }) ==
                "inputs: the translog's returns to scale and their bounds vary with the inputs; give a row of inputs");
-    isoquant::CellTable prices(1, 2);
-    prices.set(0, 0, 2.0);
-    prices.set(0, 1, 3.0);
-    BOOST_TEST(messageOf([&] {
-                   isoquant::leastCostRowWithBounds(translog, 170.0, prices, std::string("std. error"));
-               }) == "what: \"std. error\" is available for the cobb-douglas form only in this function (for the "
-                     "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
-                     "PRODSUBSTITUTION and PRODTFP)");
     // With a control the evaluators' ln A is at the control's mean, the block's last row: output is
     // answered (its figures: test_shifted_bounds_cross_check.cpp), and so are the elasticities.
     const auto controlled = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));

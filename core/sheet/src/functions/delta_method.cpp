@@ -54,7 +54,7 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
         throw InputError(asked + "is available for the cobb-douglas form only in this function (for the " +
                          formWord(read.model.form) +
                          " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
-                                                 "PRODSUBSTITUTION and PRODTFP)");
+                                                 "PRODSUBSTITUTION, PRODTFP, PRODLEASTCOST, PRODBUDGET and PRODCOST)");
     read.block = &*read.model.parameterCovariance;
     if (read.model.covarianceCoversShiftedLogScale) {
         read.logScaleIndex = read.block->matrix.rows() - 1;

@@ -1,4 +1,4 @@
-// The quantities of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE linearised in the
+// The quantities of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE and PRODTFP linearised in the
 // parameters θ of the model's form, in the order of its covariance block (covariance_block.hpp), for
 // the delta method (delta_method.hpp), every gradient analytic. Internal to the sheet library.
 //
