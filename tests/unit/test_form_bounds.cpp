@@ -94,32 +94,34 @@ BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log
 // 1000 invented. The figures: test_decision_bounds_cross_check.cpp, test_plan_bounds_cross_check.cpp.
 BOOST_AUTO_TEST_CASE(decisions_answer_on_translog_and_ces_tables)
 {
-    const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
+    using namespace isoquant;
+    const auto bundle = testing::typedRange({{150.0, 200.0}});
+    const auto prices = testing::typedRange({{4.0, 3.0}});
+    const Cell low = std::string("lower bound"), high = std::string("upper bound");
     for (const char* form : {"translog", "ces"}) {
-        const auto table = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), form));
+        const auto table = testing::tableWithBlock(fitOf(testing::cobbDouglas1928Arguments(), form));
         BOOST_TEST_CONTEXT(form)
         {
-            const double rate = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, {}));
-            const double low = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, std::string("lower bound")));
-            const double high = first(isoquant::technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, std::string("upper bound")));
-            BOOST_TEST(low < rate);
-            BOOST_TEST(closeTo(low * high, rate * rate, 1e-12));
-            const double partial = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, {}));
-            const double below = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, std::string("lower bound")));
-            const double above = first(isoquant::secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, std::string("upper bound")));
+            const double rate = first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double rateLow = first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, low));
+            BOOST_TEST(rateLow < rate);
+            BOOST_TEST(closeTo(rateLow * first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, high)),
+                               rate * rate, 1e-12));
+            const double partial = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double below = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, low));
+            const double above = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, high));
             BOOST_TEST(closeTo((below + above) / 2, partial, 1e-12));
-            BOOST_TEST(first(isoquant::substitutionColumnWithBounds(table, bundle, 1.0, 2.0, {}, std::string("std. error"))) > 0);
+            BOOST_TEST(first(substitutionColumnWithBounds(table, bundle, 1.0, 2.0, {}, std::string("std. error"))) > 0);
             // The plans: amounts and output on the log scale.
-            const auto prices = isoquant::testing::typedRange({{4.0, 3.0}});
-            const double amount = isoquant::leastCostRow(table, 180.0, prices).number(0, 1);
-            const double amountLow = isoquant::leastCostRowWithBounds(table, 180.0, prices, std::string("lower bound")).number(0, 1);
-            const double amountHigh = isoquant::leastCostRowWithBounds(table, 180.0, prices, std::string("upper bound")).number(0, 1);
-            BOOST_TEST(closeTo(amountLow * amountHigh, amount * amount, 1e-12));
-            const double output = isoquant::budgetRow(table, 1000.0, prices).number(0, 2);
-            const double outputLow = isoquant::budgetRowWithBounds(table, 1000.0, prices, std::string("lower bound")).number(0, 2);
-            const double outputHigh = isoquant::budgetRowWithBounds(table, 1000.0, prices, std::string("upper bound")).number(0, 2);
+            const double amount = leastCostRow(table, 180.0, prices).number(0, 1);
+            BOOST_TEST(closeTo(leastCostRowWithBounds(table, 180.0, prices, low).number(0, 1) *
+                                   leastCostRowWithBounds(table, 180.0, prices, high).number(0, 1),
+                               amount * amount, 1e-12));
+            const double output = budgetRow(table, 1000.0, prices).number(0, 2);
+            const double outputLow = budgetRowWithBounds(table, 1000.0, prices, low).number(0, 2);
             BOOST_TEST(outputLow < output);
-            BOOST_TEST(closeTo(outputLow * outputHigh, output * output, 1e-12));
+            BOOST_TEST(closeTo(outputLow * budgetRowWithBounds(table, 1000.0, prices, high).number(0, 2),
+                               output * output, 1e-12));
         }
     }
 }
