@@ -64,6 +64,15 @@ def cobb_douglas_1928_logs(data_dir, np):
     return tuple(np.log([float(row[name]) for row in rows]) for name in ("P", "L", "C"))
 
 
+def rice_farm_logs(data_dir, np, inputs):
+    """ln goutput and the list of ln of each input column of the rice-farm panel
+    (tests/data/rice_farms_panel.csv)."""
+    with open(os.path.join(data_dir, "rice_farms_panel.csv"), newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    return (np.log([float(row["goutput"]) for row in rows]),
+            [np.log([float(row[name]) for row in rows]) for name in inputs])
+
+
 def classical_and_hc1_fits(sm, y, design):
     """(errors word, statsmodels OLS result) for classical ("nonrobust") and HC1 errors, the latter
     with use_t: t(n - p) for every kind, as the core."""
