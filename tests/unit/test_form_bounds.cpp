@@ -138,6 +138,10 @@ BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
     const auto three = isoquant::testing::typedRange({{20000.0, 30000.0, 1000.0}});
     BOOST_TEST(first(isoquant::outputColumnWithBounds(controlled, three, {}, std::string("std. error"))) > 0);
     BOOST_TEST(std::isfinite(first(isoquant::elasticityColumnWithBounds(controlled, three, 1.0, std::string("std. error")))));
+    // So are TFP (through that shifted ln A) and the MRTS (free of it); the observed output is invented.
+    const auto observed = isoquant::testing::typedRange({{30000.0}});
+    BOOST_TEST(first(isoquant::productivityColumnWithBounds(controlled, observed, three, {}, std::string("std. error"))) > 0);
+    BOOST_TEST(first(isoquant::technicalRateColumnWithBounds(controlled, three, 1.0, 3.0, std::string("std. error"))) > 0);
     // A typed ces at delta = 1 with a block typed by hand: no derivative in delta there.
     const auto edge = isoquant::testing::typedRange(
         {{std::string("form"), std::string("ces"), isoquant::Cell{}, isoquant::Cell{}, isoquant::Cell{}},
