@@ -53,7 +53,8 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
     if (!read.form && forms == FormsAnswered::cobbDouglas)
         throw InputError(asked + "is available for the cobb-douglas form only in this function (for the " +
                          formWord(read.model.form) +
-                         " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
+                         " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
+                                                 "PRODSUBSTITUTION, PRODTFP, PRODLEASTCOST, PRODBUDGET and PRODCOST)");
     read.block = &*read.model.parameterCovariance;
     if (read.model.covarianceCoversShiftedLogScale) {
         read.logScaleIndex = read.block->matrix.rows() - 1;
