@@ -93,6 +93,19 @@ Linearised linearised(const CostModel& model, CostMeasure measure, double level,
     return {value, g.logCost, true};
 }
 
+// The gradient in the block's parameters: with the shifted constant s as the block's last row, the
+// figure f(s, θ) has ∂f/∂s where the gradient above has ∂f/∂constant, and 0 at the constant itself
+// and at the controls (held at their means, inside s).
+Linearised onBlock(const CostModel& model, Linearised quantity)
+{
+    if (!model.covarianceCoversShiftedConstant) return quantity;
+    const Eigen::Index last = quantity.gradient.size();
+    quantity.gradient.conservativeResize(last + 1);
+    quantity.gradient(last) = quantity.gradient(0);
+    quantity.gradient(0) = 0;
+    return quantity;
+}
+
 } // namespace
 
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
@@ -105,14 +118,17 @@ CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable
                                  "PRODCOSTFIT table made without covariance TRUE)");
     const CostMeasure measure = readCostMeasure(what);
     const bool usesConstant = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
-    if (usesConstant && model.constant != model.constantAtZeroControls)
-        throw InputError(asked + "is not available when the model's constant is shifted (controls at their means, "
-                                 "effects or a trend): the covariance block does not cover that constant");
+    const bool shifted = model.constant != model.constantAtZeroControls || model.covarianceCoversShiftedConstant;
+    if (usesConstant && shifted && !model.covarianceCoversShiftedConstant)
+        throw InputError(asked + "is not available when the model's constant is shifted by effects: that constant "
+                                 "holds the group effects, which have no standard error, so the covariance block "
+                                 "has no row for it");
     const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
     return costColumnOfBounds(target, prices, model.prices.size(), values,
                               [&](double level, const Eigen::VectorXd& rowPrices, double value) {
-                                  return delta_method::answer(linearised(model, measure, level, rowPrices, value),
-                                                              *model.covariance, critical, statistic, 0);
+                                  return delta_method::answer(
+                                      onBlock(model, linearised(model, measure, level, rowPrices, value)),
+                                      *model.covariance, critical, statistic, 0);
                               });
 }
 

@@ -15,7 +15,8 @@ namespace isoquant {
 // marginal and average cost get their bounds on the log scale (a marginal cost ≤ 0: value ± t·se),
 // the cost elasticity and returns to scale value ± t·se, at the block's level on t(block's degrees
 // of freedom). Throws InputError naming `statistic` for a model without a block, and, for the
-// figures that use the constant, a model whose evaluators use a shifted constant.
+// figures that use the constant, a model whose evaluators use a constant shifted by effects (with
+// controls or a trend alone the block's last row is that constant, cost_table.hpp).
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, delta_method::Statistic statistic, const CellTable& values);
 
