@@ -7,8 +7,8 @@ Usage: /usr/bin/python3 cost_scale_check.py DATA_DIR OUTPUT_CSV
 Data: rice_farms_panel.csv (Feng and Horrace 2012, as in plm 2.6 RiceFarms; tests/data/README.md):
 cost, output and prices as in cost_check.py; control size, trend the farm's season (cost_panel_check.py).
 
-Shifted constant (models "cd_control" and "translog_trend_control" of cost_panel_check.py, classical
-errors): the evaluators' constant s = constant + c·mean(size) (+ λ·(6 − 1) with the trend, the
+Shifted constant (models "cd_control" and "translog_trend_control" of cost_panel_check.py and a
+translog with the trend alone, "translog_trend"; classical errors): the evaluators' constant s = constant + c·mean(size) (+ λ·(6 − 1) with the trend, the
 latest season less the first). Its row J_s over the regression's coefficients b replaces the
 constant's row of the full form's map, so (s, θ₁ …) = J·b + c₀ with covariance J·V_b·Jᵀ, V_b the
 statsmodels covariance. At the data rows cost_check.POINTS: the standard errors of total, average
@@ -16,8 +16,9 @@ and marginal cost and the lower bound of total cost (cost_check.bound_figures: c
 gradient of ln q, scipy's t quantile on n − p).
 
 Efficient scale (PRODEFFICIENTSCALE): for the plain translog (classical and HC3, cost_check.py's
-fits) and "translog_trend_control", at the prices of each row of POINTS, y* where the cost
-elasticity is 1: ln y* = (1 − β_y − Σᵢ βᵢ_y ln wᵢ)/β_yy (closed form), its standard error
+fits), "translog_trend_control" and "translog_trend", at the prices of each row of POINTS, y* where the cost
+elasticity is 1: ln y* = (1 − β_y − Σᵢ βᵢ_y ln wᵢ)/β_yy (closed form; only where β_yy > 0, the
+elasticity rising with output, else whether there is one: average cost then has a top), its standard error
 y*·√(gᵀVg) with g the complex-step gradient of ln y* in θ, and the bounds y*·exp(∓t·√(gᵀVg)).
 
 Writes one figure per line: dataset,form,quantity,index,value. Exits with 77 (the CTest skip code)
@@ -30,16 +31,22 @@ import cost_check  # this folder: the data, the normalised regression, the bound
 import cost_panel_check  # this folder: the panel columns and the models with a control and a trend
 import reference_script  # this folder: command line, skip code, writing the figures
 
-SHIFTED_MODELS = ["cd_control", "translog_trend_control"]
+# name -> cost_panel_check.py's spec: (form, control, groups, effects, trend, covariance)
+SHIFTED_MODELS = {
+    "cd_control": cost_panel_check.MODELS["cd_control"],
+    "translog_trend_control": cost_panel_check.MODELS["translog_trend_control"],
+    "translog_trend": ("translog", False, False, "none", True, "classical"),  # β_yy > 0: an efficient scale
+}
 LAST_SEASON_LESS_FIRST = 5.0
 
 
-def shifted_parameters(np, fit, rows, trend_column, size):
+def shifted_parameters(np, fit, rows, trend_column, size, control):
     """(s, θ₁ …) and their covariance: the constant's row of θ = R b + c replaced by s's."""
     matrix = np.array([row for row, _ in rows])
     constants = np.array([constant for _, constant in rows])
     shifted = matrix[0].copy()
-    shifted += matrix[-1] * size.mean()  # the control is θ's last entry
+    if control:
+        shifted += matrix[-1] * size.mean()  # the control is θ's last entry
     if trend_column is not None:
         shifted[trend_column] += LAST_SEASON_LESS_FIRST
     matrix[0] = shifted
@@ -58,6 +65,9 @@ def efficient_scale_figures(np, put, theta, covariance, df, prices):
 
     for index, row in enumerate(cost_check.POINTS):
         w = prices[row]
+        put("scale_exists", 1.0 if theta[curvature_at] > 0 else 0.0, index)  # else ε = 1 is average cost's top
+        if theta[curvature_at] <= 0:
+            continue
         scale = float(np.exp(log_scale(theta, w)))
         spread = reference_script.complex_step_standard_error(np, lambda t: log_scale(t, w), theta, covariance)
         put("scale_value", scale, index)
@@ -94,10 +104,9 @@ def main():
     def putter(model):
         return lambda quantity, value, index=0: rows.append(["rice_farms", model, quantity, index, repr(float(value))])
 
-    for name in SHIFTED_MODELS:
-        spec = cost_panel_check.MODELS[name]
+    for name, spec in SHIFTED_MODELS.items():
         fit, _, theta_rows, trend_column, _, _ = cost_panel_check.model_fit(np, sm, spec, data, panel)
-        theta, covariance = shifted_parameters(np, fit, theta_rows, trend_column, panel[2])
+        theta, covariance = shifted_parameters(np, fit, theta_rows, trend_column, panel[2], spec[1])
         cost_check.bound_figures(np, putter(name), spec[0], theta, covariance, fit.df_resid, output, prices)
         if spec[0] == "translog":
             efficient_scale_figures(np, putter(name), theta, covariance, fit.df_resid, prices)

@@ -3,6 +3,7 @@
 // shifted by effects, a typed block without the shifted row); a cost frontier's block.
 // The figures against python3-statsmodels are in test_cost_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/models/cost_model.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
@@ -193,6 +194,50 @@ BOOST_AUTO_TEST_CASE(a_typed_block_without_the_shifted_constant_s_row_is_refused
                "model: row 9: the covariance block has 5 rows; it needs one row per parameter (6) and 6 numbers in "
                "each; with controls or a trend (and no effects) its last row is 'constant at control means', the "
                "constant the evaluators use");
+}
+
+// PRODEFFICIENTSCALE's `what`: a message naming `what` where there is no covariance (a typed cost
+// model, a production model), the value route's sentence where there is no efficient scale, and
+// bounds under effects too (ln y* does not involve the constant).
+BOOST_AUTO_TEST_CASE(efficient_scale_words_answer_or_say_why_not)
+{
+    const CellTable prices = pricesRow(80.0, 75.0, 60.0);
+    isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostArguments();
+    arguments.form = std::string("translog");
+    const isoquant::ModelTable plain(isoquant::costFitTable(isoquant::costFitFromArguments(arguments)));
+    BOOST_TEST(messageOf([&] { isoquant::efficientScaleCell(plain, prices, std::string("std. error")); }) ==
+               "what: \"std. error\" needs the model's covariance block; this cost model has none (typed rows, or a "
+               "PRODCOSTFIT table made without covariance TRUE)");
+    BOOST_TEST(messageOf([&] { isoquant::efficientScaleCell(plain, prices, std::string("median")); }) ==
+               "what: give \"value\", \"std. error\", \"lower bound\" or \"upper bound\"");
+    const isoquant::ModelTable production(isoquant::testing::typedRange(
+        {{"form", "cobb-douglas"}, {"ln A", 0.5}, {"labour", 0.7}, {"capital", 0.2}}));
+    BOOST_TEST(messageOf([&] {
+                   isoquant::efficientScaleCell(production, pricesRow(1.0, 2.0, 3.0), std::string("lower bound"));
+               }) == "what: \"lower bound\" is available in PRODEFFICIENTSCALE from a cost model only (a PRODCOSTFIT "
+                     "table made with covariance TRUE)");
+    arguments.form = std::string("cobb-douglas");
+    const isoquant::ModelTable cobbDouglas(
+        isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));
+    BOOST_TEST(isoquant::efficientScaleCell(cobbDouglas, prices, std::string("upper bound")).text(0, 0) ==
+               isoquant::efficientScaleCell(cobbDouglas, prices).text(0, 0));
+
+    arguments = isoquant::testing::riceFarmCostPanelArguments();
+    arguments.form = std::string("translog");
+    arguments.effects = std::string("fixed");
+    arguments.controls = {};
+    arguments.trend = {};
+    const isoquant::ModelTable effects(
+        isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));
+    const CellTable value = isoquant::efficientScaleCell(effects, prices);
+    BOOST_TEST_REQUIRE(value.isNumber(0, 0));
+    const double lower = isoquant::efficientScaleCell(effects, prices, std::string("lower bound")).number(0, 0);
+    const double upper = isoquant::efficientScaleCell(effects, prices, std::string("upper bound")).number(0, 0);
+    BOOST_TEST(lower > 0.0);
+    BOOST_TEST(lower < value.number(0, 0));
+    BOOST_TEST(upper > value.number(0, 0));
+    // Log-scale bounds: the value is their geometric mean.
+    BOOST_TEST(std::fabs(std::sqrt(lower * upper) - value.number(0, 0)) <= 1e-12 * value.number(0, 0));
 }
 
 BOOST_AUTO_TEST_SUITE_END()

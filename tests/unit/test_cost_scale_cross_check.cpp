@@ -1,11 +1,14 @@
 // PRODCOST's statistic on cost tables whose constant is shifted by a control (size) or by a control
 // and a trend (the farm's season), read from the covariance block's last row ("constant at control
-// means", "constant for predictions"), on the rice-farm panel (Feng and Horrace 2012, as in plm 2.6
+// means", "constant for predictions"; a translog with the trend alone too), on the rice-farm panel (Feng and Horrace 2012, as in plm 2.6
 // RiceFarms; cost = pseed·seed + purea·urea + wage·totlabor, output goutput, prices pseed, purea,
 // wage) against python3-statsmodels 0.13.5 OLS of the same regression with the shifted constant's
 // covariance taken from statsmodels' V_b and a numpy complex-step gradient, recomputed at test time
 // by tests/reference/cost_scale_check.py: the standard errors of total, average and marginal cost,
 // cost elasticity and returns to scale, and the lower bound of total cost at three rows of the data.
+// PRODEFFICIENTSCALE's `what` on the translog (classical and HC3 errors, and with the control and
+// the trend) at the prices of the same rows: y* by the closed form, its standard error and bounds
+// with the complex-step gradient of ln y* (the core's is analytic, by implicit differentiation).
 //
 // Tolerance: 1e-7 relative (the issue's tolerance for delta-method figures; the complex step is
 // exact to rounding and both covariances come from the same least squares, good to about 1e-11).
@@ -13,6 +16,7 @@
 // CTest runs the script first (test cost_scale_figures) and passes the file it wrote in the
 // environment variable ISOQUANT_COST_SCALE_FIGURES; without that file this test is skipped.
 #include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/cost_decisions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "reference_data.hpp"
@@ -44,6 +48,7 @@ isoquant::ModelTable modelNamed(const std::string& name)
     isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostPanelArguments();
     arguments.groups = {};
     if (name == "cd_control") arguments.trend = {};
+    if (name == "translog_trend") arguments.controls = {};
     if (name != "cd_control") arguments.form = std::string("translog");
     if (name == "translog" || name == "translog_hc3") {
         arguments = isoquant::testing::riceFarmCostArguments();
@@ -80,29 +85,47 @@ double boundFigure(const isoquant::ModelTable& table, const std::string& quantit
         .number(0, 0);
 }
 
+// "scale_value", "scale_se", "scale_lower" or "scale_upper" through PRODEFFICIENTSCALE.
+double scaleFigure(const isoquant::ModelTable& table, const std::string& quantity, long index)
+{
+    static const std::map<std::string, std::string> words{{"scale_value", "value"},
+                                                          {"scale_se", "std. error"},
+                                                          {"scale_lower", "lower bound"},
+                                                          {"scale_upper", "upper bound"}};
+    if (quantity == "scale_exists") // a number, or the sentence saying there is none
+        return isoquant::efficientScaleCell(table, pointAt(index).prices).isNumber(0, 0) ? 1.0 : 0.0;
+    return isoquant::efficientScaleCell(table, pointAt(index).prices, words.at(quantity)).number(0, 0);
+}
+
 } // namespace
 
 BOOST_AUTO_TEST_SUITE(cost_scale_cross_check)
 
-BOOST_AUTO_TEST_CASE(shifted_constant_bounds_agree_with_statsmodels, *boost::unit_test::precondition(figuresAvailable))
+BOOST_AUTO_TEST_CASE(cost_bounds_agree_with_statsmodels, *boost::unit_test::precondition(figuresAvailable))
 {
     const auto rows =
         isoquant::testing::readReferenceRows(isoquant::testing::referenceFiguresPath("ISOQUANT_COST_SCALE_FIGURES"));
     BOOST_TEST_REQUIRE(rows.size() > 60u);
     std::map<std::string, isoquant::ModelTable> tables;
     std::size_t checked = 0;
+    long scalesFound = 0;
     for (const auto& fields : rows) {
         const std::string& model = fields.at(1);
         const std::string& quantity = fields.at(2);
-        if (quantity.rfind("bound_", 0) != 0) continue;
         if (!tables.count(model)) tables.emplace(model, modelNamed(model));
         const double expected = std::stod(fields.at(4));
-        const double actual = boundFigure(tables.at(model), quantity, std::stol(fields.at(3)));
+        const bool bound = quantity.rfind("bound_", 0) == 0;
+        const double actual = bound ? boundFigure(tables.at(model), quantity, std::stol(fields.at(3)))
+                                    : scaleFigure(tables.at(model), quantity, std::stol(fields.at(3)));
+        if (quantity == "scale_exists") scalesFound += expected == 1.0 ? 1 : 0;
         BOOST_TEST(closeTo(actual, expected, deltaMethodTolerance),
                    model << " " << quantity << " " << fields.at(3) << ": " << actual << " vs " << expected);
         ++checked;
     }
-    BOOST_TEST(checked == 36u); // 2 models × 3 rows × 6 figures
+    // 3 models × 3 rows × 6 bound figures; 4 translog models × 3 rows whether y* exists (not with the
+    // control and the trend, whose cost elasticity falls with output), and 4 figures where it does.
+    BOOST_TEST(scalesFound == 9);
+    BOOST_TEST(checked == 54u + 12u + 36u);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -108,14 +108,20 @@ Linearised onBlock(const CostModel& model, Linearised quantity)
 
 } // namespace
 
+void requireCostBlock(const CostModel& model, const std::string& argumentName, Statistic statistic)
+{
+    if (!model.covariance)
+        throw InputError(argumentName + ": \"" + delta_method::word(statistic) +
+                         "\" needs the model's covariance block; this cost model has none (typed rows, or a "
+                         "PRODCOSTFIT table made without covariance TRUE)");
+}
+
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, Statistic statistic, const CellTable& values)
 {
     const CostModel model = readCostModel(modelCells);
     const std::string asked = std::string(argument::statistic) + ": \"" + delta_method::word(statistic) + "\" ";
-    if (!model.covariance)
-        throw InputError(asked + "needs the model's covariance block; this cost model has none (typed rows, or a "
-                                 "PRODCOSTFIT table made without covariance TRUE)");
+    requireCostBlock(model, argument::statistic, statistic);
     const CostMeasure measure = readCostMeasure(what);
     const bool usesConstant = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
     const bool shifted = model.constant != model.constantAtZeroControls || model.covarianceCoversShiftedConstant;
@@ -152,6 +158,19 @@ CellTable costColumnOfBounds(const CellTable& target, const CellTable& prices, E
         column.set(cell, 0, result);
     }
     return column;
+}
+
+double efficientScaleWithBounds(const CostModel& model, const Eigen::VectorXd& prices, double scale,
+                                Statistic statistic)
+{
+    requireCostBlock(model, argument::what, statistic);
+    // ln y* solves ε(ln y, θ) = 1; implicitly ∂ln y*/∂θ = −(∂ε/∂θ)/(∂ε/∂ln y) at y*, with ∂ε/∂ln y = β_yy
+    // (> 0 where y* exists). y* > 0: bounds on the log scale.
+    const Linearised quantity{scale, -gradientsAt(model, scale, prices).elasticity / model.outputSquared, true};
+    const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
+    const double result = delta_method::answer(onBlock(model, quantity), *model.covariance, critical, statistic, 0);
+    if (!std::isfinite(result)) throw argumentError(argument::inputPrices, "give a result too large to represent");
+    return result;
 }
 
 } // namespace isoquant

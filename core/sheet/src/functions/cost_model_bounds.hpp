@@ -20,6 +20,15 @@ namespace isoquant {
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, delta_method::Statistic statistic, const CellTable& values);
 
+// Throws InputError naming `argumentName` and the word when `model` has no covariance block.
+void requireCostBlock(const CostModel& model, const std::string& argumentName, delta_method::Statistic statistic);
+
+// PRODEFFICIENTSCALE's `statistic` of the efficient scale y* = `scale` of a translog cost model at
+// `prices` (β_yy > 0): the gradient of ln y* by implicit differentiation of ε(y*) = 1, bounds on the
+// log scale at the block's level and t. Throws InputError naming `what` for a model without a block.
+double efficientScaleWithBounds(const CostModel& model, const Eigen::VectorXd& prices, double scale,
+                                delta_method::Statistic statistic);
+
 // PRODCOST's plain column `values` with each number replaced by bound(output, the row's prices,
 // number), the outputs and prices read as PRODCOST reads them (`inputs` prices a row); a sentence
 // (no plan) stays. Throws InputError naming the row of a result too large to represent.
