@@ -151,6 +151,33 @@ BOOST_AUTO_TEST_CASE(a_shifted_constant_is_the_block_s_last_row)
     BOOST_TEST(withTrend.text(withTrend.rows() - 1, 0) == "constant for predictions");
 }
 
+BOOST_AUTO_TEST_CASE(a_cost_frontier_with_a_control_has_the_shifted_row_too)
+{
+    // The depots with an invented control outside the cost (a weekday share): s = constant + c·z̄ on
+    // the frontier's own θ, so Var(s) = aᵀV a, a = (1, 0, 0, 0, z̄) (no trend: a frontier takes none).
+    isoquant::CostFitArguments arguments = isoquant::testing::depots(300, 41);
+    Eigen::MatrixXd weekdays(300, 1);
+    for (Eigen::Index row = 0; row < 300; ++row) weekdays(row, 0) = static_cast<double>((row * 7) % 11) / 10.0;
+    arguments.controls = isoquant::testing::numberRange(weekdays, {"weekday share"});
+    const isoquant::CostFit frontier = isoquant::costFitFromArguments(arguments);
+    const CellTable table = isoquant::costFitTableWithCovariance(frontier, 1.0);
+    BOOST_TEST(table.text(table.rows() - 1, 0) == "constant at control means");
+    Eigen::VectorXd weights = Eigen::VectorXd::Zero(5);
+    weights(0) = 1.0;
+    weights(4) = weekdays.mean();
+    const double variance = weights.dot(frontier.summary.inference.covariance * weights);
+    BOOST_TEST(std::fabs(table.number(table.rows() - 1, 6) - variance) <= 1e-10 * variance);
+    const isoquant::ModelTable withBlock(table);
+    CellTable twoPrices(1, 2);
+    twoPrices.set(0, 0, 10.0);
+    twoPrices.set(0, 1, 5.0);
+    const double se = isoquant::costColumnWithBounds(withBlock, oneCell(100.0), twoPrices, std::string("total"),
+                                                     std::string("std. error"))
+                          .number(0, 0);
+    BOOST_TEST(se > 0.0);
+    BOOST_TEST(std::isfinite(se));
+}
+
 BOOST_AUTO_TEST_CASE(where_the_block_cannot_serve_a_message_says_so)
 {
     isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostPanelArguments();
