@@ -40,11 +40,11 @@ Any ProductionFunctions::prodCost(const AnyTable& model, const AnyTable& targetO
     });
 }
 
-Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices)
+Any ProductionFunctions::prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices, const Any& what)
 {
     return guardedTable([&] {
         const CellTable prices = toCellTable(inputPrices, argument::inputPrices);
-        return efficientScaleCell(models_.table(model, argument::model), prices);
+        return efficientScaleCell(models_.table(model, argument::model), prices, toSingleCell(what, argument::what));
     });
 }
 

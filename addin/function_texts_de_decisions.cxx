@@ -72,7 +72,13 @@ std::vector<TranslatedFunction> germanCostTexts()
          "PRODCOST) oder einem Produktionsmodell, dessen Skalenerträge mit der Größe fallen. Meldet, wenn die "
          "Durchschnittskosten im Modell bei jeder Ausbringung fallen oder steigen.",
          {modelArgument,
-          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte."}}},
+          {"Faktorpreise", "Ein positiver Preis je Faktor, in der Reihenfolge des Modells, als Zeile oder Spalte."},
+          {"Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
+                       "\"upper bound\" (untere oder obere Grenze) der effizienten Betriebsgröße: nach der "
+                       "Delta-Methode aus dem Kovarianzblock einer mit Kovarianz WAHR geschätzten translog-"
+                       "PRODCOSTFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung. Die Betriebsgröße ist "
+                       "ihrer Natur nach positiv: ihre Grenzen werden auf der Log-Skala bestimmt und fallen nie "
+                       "unter 0."}}},
         {"prodPriceElasticity",
          "Preiselastizität zwischen den Faktoren i und j im kostenminimalen Plan für die Ausbringung: \"demand\" "
          "(Nachfrageelastizität: prozentuale Änderung der kostenminimalen Menge von i je Prozent Preisänderung "

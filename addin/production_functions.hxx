@@ -92,7 +92,8 @@ public:
                                        const css::uno::Any& covariance) override;
     css::uno::Any SAL_CALL prodCost(const AnyTable& model, const AnyTable& targetOutput, const AnyTable& inputPrices,
                                     const css::uno::Any& what, const css::uno::Any& statistic) override;
-    css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices) override;
+    css::uno::Any SAL_CALL prodEfficientScale(const AnyTable& model, const AnyTable& inputPrices,
+                                              const css::uno::Any& what) override;
     css::uno::Any SAL_CALL prodPriceElasticity(const AnyTable& model, const AnyTable& output,
                                                const AnyTable& inputPrices, const AnyTable& inputI,
                                                const AnyTable& inputJ, const css::uno::Any& kind) override;

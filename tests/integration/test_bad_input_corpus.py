@@ -101,6 +101,18 @@ def build_fixture(sheet):
                                ["covariance", "classical", 20.0, 0.95, None],
                                ["ln A", 0.01, 0.0, 0.0, 0.0], ["L", 0.0, 0.01, 0.0, 0.0],
                                ["C", 0.0, 0.0, 0.01, 0.0], ["z (control)", 0.0, 0.0, 0.0, 0.01]])
+    # A typed translog cost model without a block (PRODEFFICIENTSCALE's words), and a typed cost model
+    # with a control whose block lacks the row of the constant at control means.
+    set_values(sheet, "DA60", [["form", "translog cost"], ["constant", 1.0], ["output", 0.5], ["L", 0.6], ["C", 0.4],
+                               ["output*output", 0.1], ["L*L", 0.1], ["L*C", -0.1], ["C*C", 0.1], ["L*output", 0.0],
+                               ["C*output", 0.0]])
+    none = [None] * 4
+    set_values(sheet, "DA75", [["form", "cobb-douglas cost"] + none, ["constant", 1.0] + none, ["output", 0.8] + none,
+                               ["L", 0.6] + none, ["C", 0.4] + none, ["z (control)", 0.1] + none, [None] * 6,
+                               ["constant at control means", 1.2] + none,
+                               ["covariance", "classical", 50.0, 0.95, None, None]]
+               + [[label] + [0.01 if i == j else 0.0 for j in range(5)]
+                  for i, label in enumerate(["constant", "output", "L", "C", "z (control)"])])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

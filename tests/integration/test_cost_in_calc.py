@@ -365,7 +365,7 @@ class FunctionWizardTest(unittest.TestCase):
             if properties.get("Name") in ("PRODCOSTFIT", "PRODCOST", "PRODEFFICIENTSCALE", "PRODPRICEELASTICITY"):
                 listed[properties["Name"]] = properties
         self.assertEqual(sorted(listed), ["PRODCOST", "PRODCOSTFIT", "PRODEFFICIENTSCALE", "PRODPRICEELASTICITY"])
-        self.assertEqual([a.Name for a in listed["PRODEFFICIENTSCALE"]["Arguments"]], ["model", "input prices"])
+        self.assertEqual([a.Name for a in listed["PRODEFFICIENTSCALE"]["Arguments"]], ["model", "input prices", "what"])
         elasticity = listed["PRODPRICEELASTICITY"]["Arguments"]
         self.assertEqual([a.Name for a in elasticity], ["model", "output", "input prices", "input i", "input j", "kind"])
         self.assertEqual([a.IsOptional for a in elasticity], [False] * 5 + [True])

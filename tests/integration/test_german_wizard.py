@@ -56,7 +56,7 @@ GERMAN_ARGUMENTS = {
     "PRODFIT": ["Ausbringung", "Faktormengen"] + FIT_ARGUMENTS + ["Kovarianz"],
     "PRODSTAT": ["Ausbringung", "Faktormengen", "Zeilenbezeichnung", "Spaltenbezeichnung"] + FIT_ARGUMENTS,
     "PRODVALUE": ["Tabelle", "Zeilenbezeichnung", "Spaltenbezeichnung"],
-    "PRODEFFICIENTSCALE": ["Modell", "Faktorpreise"],
+    "PRODEFFICIENTSCALE": ["Modell", "Faktorpreise", "Kennzahl"],
     "PRODPRICEELASTICITY": ["Modell", "Ausbringung", "Faktorpreise", "Faktor i", "Faktor j", "Art"],
     "PRODFRONTIER": ["Ausbringung", "Faktormengen", "Funktionsform", "Ineffizienz", "Konfidenzniveau",
                      "Kontrollvariablen", "Kovarianz"],

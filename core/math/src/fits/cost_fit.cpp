@@ -236,6 +236,29 @@ void describeCostFit(CostFit& fit, const CostData& data, const CostFitOptions& o
         summary.panel = summarisePanel(data.panel, options.effects, run, regression, summary.logScaleAtControlMeans);
 }
 
+// The evaluators' constant with controls or a trend and no effects (fit_result.hpp): s = β₀ +
+// Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first) with a trend). θ = T·b + t₀ on the regression's first columns, so
+// on all of them (the trend's, a frontier's σᵥ and σᵤ after) a = [Tᵀ·a_θ | Δt at the trend | 0],
+// a_θ = (1, 0 … 0, z̄₁ … z̄ₘ), and θ's map is [T 0].
+std::optional<ShiftedLogScale> costShiftedScale(const CostFit& fit, const CostData& data, const PanelRegression& run,
+                                                const Eigen::MatrixXd& map, const Eigen::MatrixXd& covariance)
+{
+    const Eigen::Index m = data.controls.cols();
+    if (run.effectsAbsorbConstant || (m == 0 && !run.trendColumn)) return std::nullopt;
+    Eigen::VectorXd parameterWeights = Eigen::VectorXd::Zero(map.rows());
+    parameterWeights(0) = 1.0;
+    if (m > 0) parameterWeights.tail(m) = data.controls.colwise().mean().transpose();
+    Eigen::VectorXd weights = Eigen::VectorXd::Zero(covariance.rows());
+    weights.head(map.cols()) = map.transpose() * parameterWeights;
+    if (run.trendColumn) weights(*run.trendColumn) = data.panel.periods.maxCoeff() - run.trendOrigin;
+    Eigen::MatrixXd parameterMap = Eigen::MatrixXd::Zero(map.rows(), covariance.rows());
+    parameterMap.leftCols(map.cols()) = map;
+    const bool trend = run.trendColumn.has_value();
+    return shiftedLogScale(parameterMap, weights, covariance,
+                           trend ? fit.summary.panel.logScaleForPredictions : fit.summary.logScaleAtControlMeans,
+                           trend);
+}
+
 } // namespace
 
 CostFit fitCost(const CostData& data, const CostFitOptions& options)
@@ -277,6 +300,8 @@ CostFit fitCost(const CostData& data, const CostFitOptions& options)
                   parameterCovariance(map, covariance, options.effects != EffectsKind::none), degreesOfFreedom,
                   options.confidenceLevel);
     describeCostFit(fit, data, options, run);
+    summary.shiftedScale = costShiftedScale(
+        fit, data, run, map, frontier ? fit.frontier->mirrored.covariance : regression.inference.covariance);
     // Duan: mean of exp(residual of ln C); none for a frontier, whose cost is the least, not a median.
     summary.smearingFactor = frontier ? std::nan("") : run.smearingFactor;
 

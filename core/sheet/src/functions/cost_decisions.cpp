@@ -1,5 +1,7 @@
 #include "isoquant/sheet/functions/cost_decisions.hpp"
 
+#include "functions/cost_model_bounds.hpp"
+#include "functions/delta_method.hpp"
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
@@ -142,16 +144,27 @@ CellTable productionEfficientScale(const ModelTable& model, const CellTable& pri
 
 } // namespace
 
-CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRange)
+CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRange, const Cell& what)
 {
-    if (!isCostModel(model.cells())) return productionEfficientScale(model, priceRange);
+    const auto statistic = delta_method::readWhat(what, false);
+    const bool bounds = statistic != delta_method::Statistic::value;
+    if (!isCostModel(model.cells())) {
+        if (bounds)
+            throw argumentError(argument::what, "\"" + delta_method::word(statistic) +
+                                                    "\" is available in PRODEFFICIENTSCALE from a cost model "
+                                                    "only (a PRODCOSTFIT table made with covariance TRUE)");
+        return productionEfficientScale(model, priceRange);
+    }
     const CostModel cost = readCostModel(model.cells());
     const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     // ε(y) = a + b·ln y with a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy
     const double atUnitOutput = cost.output + cost.priceOutput.dot(prices.array().log().matrix());
     const EfficientScale scale = efficientScaleOfLogQuadratic(atUnitOutput, cost.outputSquared);
-    if (scale.output) return singleCell(*scale.output);
-    return singleCell(scale.whyNone);
+    // Without a block the words answer that message, whatever the form: no guess.
+    if (bounds) requireCostBlock(cost, argument::what, statistic);
+    if (!scale.output) return singleCell(scale.whyNone);
+    if (!bounds) return singleCell(*scale.output);
+    return singleCell(efficientScaleWithBounds(cost, prices, *scale.output, statistic));
 }
 
 namespace {

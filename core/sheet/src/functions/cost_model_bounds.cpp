@@ -93,26 +93,48 @@ Linearised linearised(const CostModel& model, CostMeasure measure, double level,
     return {value, g.logCost, true};
 }
 
+// The gradient in the block's parameters: with the shifted constant s as the block's last row, the
+// figure f(s, θ) has ∂f/∂s where the gradient above has ∂f/∂constant, and 0 at the constant itself
+// and at the controls (held at their means, inside s).
+Linearised onBlock(const CostModel& model, Linearised quantity)
+{
+    if (!model.covarianceCoversShiftedConstant) return quantity;
+    const Eigen::Index last = quantity.gradient.size();
+    quantity.gradient.conservativeResize(last + 1);
+    quantity.gradient(last) = quantity.gradient(0);
+    quantity.gradient(0) = 0;
+    return quantity;
+}
+
 } // namespace
+
+void requireCostBlock(const CostModel& model, const std::string& argumentName, Statistic statistic)
+{
+    if (!model.covariance)
+        throw InputError(argumentName + ": \"" + delta_method::word(statistic) +
+                         "\" needs the model's covariance block; this cost model has none (typed rows, or a "
+                         "PRODCOSTFIT table made without covariance TRUE)");
+}
 
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, Statistic statistic, const CellTable& values)
 {
     const CostModel model = readCostModel(modelCells);
     const std::string asked = std::string(argument::statistic) + ": \"" + delta_method::word(statistic) + "\" ";
-    if (!model.covariance)
-        throw InputError(asked + "needs the model's covariance block; this cost model has none (typed rows, or a "
-                                 "PRODCOSTFIT table made without covariance TRUE)");
+    requireCostBlock(model, argument::statistic, statistic);
     const CostMeasure measure = readCostMeasure(what);
     const bool usesConstant = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
-    if (usesConstant && model.constant != model.constantAtZeroControls)
-        throw InputError(asked + "is not available when the model's constant is shifted (controls at their means, "
-                                 "effects or a trend): the covariance block does not cover that constant");
+    const bool shifted = model.constant != model.constantAtZeroControls || model.covarianceCoversShiftedConstant;
+    if (usesConstant && shifted && !model.covarianceCoversShiftedConstant)
+        throw InputError(asked + "is not available when the model's constant is shifted by effects: that constant "
+                                 "holds the group effects, which have no standard error, so the covariance block "
+                                 "has no row for it");
     const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
     return costColumnOfBounds(target, prices, model.prices.size(), values,
                               [&](double level, const Eigen::VectorXd& rowPrices, double value) {
-                                  return delta_method::answer(linearised(model, measure, level, rowPrices, value),
-                                                              *model.covariance, critical, statistic, 0);
+                                  return delta_method::answer(
+                                      onBlock(model, linearised(model, measure, level, rowPrices, value)),
+                                      *model.covariance, critical, statistic, 0);
                               });
 }
 
@@ -136,6 +158,19 @@ CellTable costColumnOfBounds(const CellTable& target, const CellTable& prices, E
         column.set(cell, 0, result);
     }
     return column;
+}
+
+double efficientScaleWithBounds(const CostModel& model, const Eigen::VectorXd& prices, double scale,
+                                Statistic statistic)
+{
+    requireCostBlock(model, argument::what, statistic);
+    // ln y* solves ε(ln y, θ) = 1; implicitly ∂ln y*/∂θ = −(∂ε/∂θ)/(∂ε/∂ln y) at y*, with ∂ε/∂ln y = β_yy
+    // (> 0 where y* exists). y* > 0: bounds on the log scale.
+    const Linearised quantity{scale, -gradientsAt(model, scale, prices).elasticity / model.outputSquared, true};
+    const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
+    const double result = delta_method::answer(onBlock(model, quantity), *model.covariance, critical, statistic, 0);
+    if (!std::isfinite(result)) throw argumentError(argument::inputPrices, "give a result too large to represent");
+    return result;
 }
 
 } // namespace isoquant

@@ -15,9 +15,19 @@ namespace isoquant {
 // marginal and average cost get their bounds on the log scale (a marginal cost ≤ 0: value ± t·se),
 // the cost elasticity and returns to scale value ± t·se, at the block's level on t(block's degrees
 // of freedom). Throws InputError naming `statistic` for a model without a block, and, for the
-// figures that use the constant, a model whose evaluators use a shifted constant.
+// figures that use the constant, a model whose evaluators use a constant shifted by effects (with
+// controls or a trend alone the block's last row is that constant, cost_table.hpp).
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, delta_method::Statistic statistic, const CellTable& values);
+
+// Throws InputError naming `argumentName` and the word when `model` has no covariance block.
+void requireCostBlock(const CostModel& model, const std::string& argumentName, delta_method::Statistic statistic);
+
+// PRODEFFICIENTSCALE's `statistic` of the efficient scale y* = `scale` of a translog cost model at
+// `prices` (β_yy > 0): the gradient of ln y* by implicit differentiation of ε(y*) = 1, bounds on the
+// log scale at the block's level and t. Throws InputError naming `what` for a model without a block.
+double efficientScaleWithBounds(const CostModel& model, const Eigen::VectorXd& prices, double scale,
+                                delta_method::Statistic statistic);
 
 // PRODCOST's plain column `values` with each number replaced by bound(output, the row's prices,
 // number), the outputs and prices read as PRODCOST reads them (`inputs` prices a row); a sentence

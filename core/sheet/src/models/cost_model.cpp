@@ -2,6 +2,7 @@
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/cost_fit.hpp"
+#include "isoquant/math/fits/panel_regression.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
@@ -105,16 +106,46 @@ void applySecondOrder(CostModel& cost, const std::vector<SecondOrderRow>& rows)
     }
 }
 
-// The constant the evaluators use (cost_model.hpp), from the rows below the parameters.
-double predictionConstant(const CellTable& model, double constant)
+// The constant the evaluators use (cost_model.hpp), from the rows below the parameters, and which
+// row gave it.
+struct PredictionConstant {
+    double value = 0;
+    std::optional<std::string> shiftedLabel; // "constant for predictions" or "constant at control means"
+    bool effects = false;                    // an "effects" row other than "none"
+};
+
+PredictionConstant predictionConstant(const CellTable& model, double constant)
 {
     std::optional<double> atControlMeans, forPredictions;
+    PredictionConstant read;
     for (std::size_t row = 0; row < model.rows(); ++row) {
         const std::string label = labelAt(model, row);
+        if (equalsIgnoringCase(label, covarianceBlockLabel)) break; // the block's last row bears the same label
         if (equalsIgnoringCase(label, costPredictionLabel)) forPredictions = numberAt(model, row, label);
         if (equalsIgnoringCase(label, costControlMeansLabel)) atControlMeans = numberAt(model, row, label);
+        if (equalsIgnoringCase(label, effectsLabel) && model.columns() > 1 && model.isText(row, 1))
+            read.effects = !equalsIgnoringCase(model.text(row, 1), effectsWord(EffectsKind::none));
     }
-    return forPredictions.value_or(atControlMeans.value_or(constant));
+    read.value = forPredictions.value_or(atControlMeans.value_or(constant));
+    if (forPredictions || atControlMeans) read.shiftedLabel = forPredictions ? costPredictionLabel : costControlMeansLabel;
+    return read;
+}
+
+// The covariance block, whose last row is the evaluators' constant when controls or a trend shift
+// it and no effects do (cost_table.hpp).
+void readCostCovariance(const CellTable& model, const PredictionConstant& constant, CostModel& cost)
+{
+    std::vector<std::string> labels = cost.parameterLabels;
+    std::string sizeNote;
+    cost.covarianceCoversShiftedConstant = constant.shiftedLabel && !constant.effects;
+    if (cost.covarianceCoversShiftedConstant) {
+        labels.push_back(*constant.shiftedLabel);
+        sizeNote = "; with controls or a trend (and no effects) its last row is " + quoted(labels.back()) +
+                   ", the constant the evaluators use";
+    }
+    for (std::size_t row = 0; row < model.rows(); ++row)
+        if (equalsIgnoringCase(labelAt(model, row), covarianceBlockLabel))
+            cost.covariance = readCovarianceBlock(model, row, labels, sizeNote);
 }
 
 } // namespace
@@ -168,14 +199,13 @@ CostModel readCostModel(const CellTable& model)
         throw InputError(rowPlace(secondOrder.front().row, secondOrder.front().label) +
                          " is a translog term, but the form is \"cobb-douglas cost\"; say \"translog cost\"");
     cost.constantAtZeroControls = *constant;
-    cost.constant = predictionConstant(model, *constant);
+    const PredictionConstant evaluated = predictionConstant(model, *constant);
+    cost.constant = evaluated.value;
     cost.output = *output;
     cost.controls = Eigen::Map<const Eigen::VectorXd>(controls.data(), static_cast<Eigen::Index>(controls.size()));
     cost.prices = Eigen::Map<const Eigen::VectorXd>(prices.data(), static_cast<Eigen::Index>(prices.size()));
     applySecondOrder(cost, secondOrder);
-    for (std::size_t row = 0; row < model.rows(); ++row)
-        if (equalsIgnoringCase(labelAt(model, row), covarianceBlockLabel))
-            cost.covariance = readCovarianceBlock(model, row, cost.parameterLabels);
+    readCostCovariance(model, evaluated, cost);
     return cost;
 }
 

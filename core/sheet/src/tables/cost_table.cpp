@@ -132,6 +132,11 @@ std::vector<std::string> costParameterLabels(const CostFit& fit)
     return labels;
 }
 
+std::string costShiftedConstantLabel(bool forPredictions)
+{
+    return forPredictions ? costPredictionLabel : costControlMeansLabel;
+}
+
 CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance)
 {
     if (!readSwitchArgument(covariance, argument::covariance)) return costFitTable(fit);
@@ -139,6 +144,8 @@ CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance)
     block.likelihood = fit.frontier.has_value(); // the frontier's inverse observed information, the normal
     block.labels = costParameterLabels(fit);
     block.matrix = fit.summary.inference.covariance;
+    if (const auto& shifted = fit.summary.shiftedScale)
+        appendShiftedParameter(block, *shifted, costShiftedConstantLabel(shifted->forPredictions));
     // As the table's standard errors: an exact fit has none, only the rounding left in V.
     if (fit.summary.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(notANumber);
     block.kind = fit.summary.summary.covarianceKind;

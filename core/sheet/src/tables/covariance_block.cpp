@@ -186,21 +186,25 @@ std::string shiftedLogScaleLabel(bool forPredictions)
     return forPredictions ? predictionScaleLabel : controlMeansLabel;
 }
 
+void appendShiftedParameter(CovarianceBlock& block, const ShiftedLogScale& shifted, const std::string& label)
+{
+    // One more parameter s: V grows by Cov(θ, s) and Var(s).
+    const Eigen::Index p = block.matrix.rows();
+    block.labels.push_back(label);
+    block.matrix.conservativeResize(p + 1, p + 1);
+    block.matrix.col(p).head(p) = shifted.withParameters;
+    block.matrix.row(p).head(p) = shifted.withParameters.transpose();
+    block.matrix(p, p) = shifted.variance;
+}
+
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance)
 {
     if (!readSwitchArgument(covariance, argument::covariance)) return table;
     CovarianceBlock block;
     block.labels = parameterLabels(fit.form, fit.inputLabels, fit.controlLabels);
     block.matrix = fit.inference.covariance;
-    if (fit.shiftedScale) {
-        // One more parameter, the evaluators' ln A s: V grows by Cov(θ, s) and Var(s).
-        const Eigen::Index p = block.matrix.rows();
-        block.labels.push_back(shiftedLogScaleLabel(fit.shiftedScale->forPredictions));
-        block.matrix.conservativeResize(p + 1, p + 1);
-        block.matrix.col(p).head(p) = fit.shiftedScale->withParameters;
-        block.matrix.row(p).head(p) = fit.shiftedScale->withParameters.transpose();
-        block.matrix(p, p) = fit.shiftedScale->variance;
-    }
+    if (fit.shiftedScale)
+        appendShiftedParameter(block, *fit.shiftedScale, shiftedLogScaleLabel(fit.shiftedScale->forPredictions));
     // As the table's standard errors: an exact fit has none, only the rounding left in V (a ces
     // fit without standard errors already holds NaN there).
     if (fit.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());

@@ -18,7 +18,12 @@ CellTable leastCostAnyRow(const ModelTable& model, const Cell& target, const Cel
 // input, a row or a column). A cost model: ln y* = (1 − β_y − Σᵢβᵢ_y ln wᵢ)/β_yy when β_yy > 0. A
 // production model: the output whose least-cost plan has cost elasticity 1, found on a grid of
 // outputs from 1e-9 to 1e9 and refined by bisection in ln y. Else the sentence saying why none.
-CellTable efficientScaleCell(const ModelTable& model, const CellTable& prices);
+// `what`: "value" (empty: the default), "std. error", "lower bound" or "upper bound" — for a cost
+// model with its covariance block (PRODCOSTFIT's covariance TRUE), by the delta method with the
+// gradient of ln y* by implicit differentiation of ε(y*) = 1, ∂ln y*/∂θ = −(∂ε/∂θ)/β_yy, bounds
+// y*·exp(∓t·se(ln y*)) at the block's level and t. Throws InputError naming `what` for a cost
+// model without a block and for a production model; where there is no efficient scale, its sentence.
+CellTable efficientScaleCell(const ModelTable& model, const CellTable& prices, const Cell& what = Cell{});
 
 // PRODPRICEELASTICITY: per output (one, or a column with one row of prices per output or one for
 // all) the "demand" (default) ∂ln xᵢ/∂ln wⱼ, "allen" or "morishima" elasticity.

@@ -57,10 +57,18 @@ CellTable costFitTable(const CostFit& fit);
 // second-order terms, the controls with " (control)".
 std::vector<std::string> costParameterLabels(const CostFit& fit);
 
+// The label of the block's row for the evaluators' constant: the table's own row for it,
+// "constant for predictions" with a trend, else "constant at control means".
+std::string costShiftedConstantLabel(bool forPredictions);
+
 // PRODCOSTFIT's table, with the covariance block of its parameters (covariance_block.hpp) when
 // `covariance` is TRUE (a switch naming "covariance"): the kind of errors, the degrees of freedom
 // of the table's t (n − p; G − 1 under cluster errors; m·n − p with shares) and its level; for a
-// cost frontier "likelihood" and "normal" in their place (covariance_block.hpp).
+// cost frontier "likelihood" and "normal" in their place (covariance_block.hpp). With controls or
+// a trend and no effects the block has one more row (and column) after the p parameters: the
+// constant the evaluators use, s = constant + Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first)), labelled as the
+// table's row for it (costShiftedConstantLabel); so 1 + q rows and max(7, q + 1) columns, q = p + 1.
+// Under effects s holds the group effects, which have no standard error: no row is added.
 CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance);
 
 } // namespace isoquant

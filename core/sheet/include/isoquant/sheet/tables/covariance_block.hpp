@@ -86,6 +86,10 @@ std::vector<std::string> parameterLabels(ProductionForm form, const std::vector<
 // The label of the block's row for the evaluators' ln A (above): the table's own row for it.
 std::string shiftedLogScaleLabel(bool forPredictions);
 
+// The block with one more parameter row and column, `label`, the evaluators' shifted ln A (or a
+// cost table's shifted constant) with its covariances.
+void appendShiftedParameter(CovarianceBlock& block, const ShiftedLogScale& shifted, const std::string& label);
+
 // PRODFIT's table `table` of `fit`, with the block when `covariance` is TRUE (read as a switch
 // naming "covariance"), for every form.
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance);
