@@ -59,14 +59,26 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
     if (statistic == Statistic::value) return values;
     // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln A − Σ bᵢ ln xᵢ, so g of ln TFP is minus g of
     // ln f(x): (−1, −ln x₁ … −ln x_k, 0 …). Positive by nature: bounds on the log scale.
-    const BoundsModel read = readBoundsModel(model, statistic, true);
-    // With periods each row's ln A moves by λ·(t − t_last), and λ has no row of the block.
-    if (!periods.empty())
-        throw argumentError(argument::what, "\"" + word(statistic) + "\" needs periods left out: the covariance "
-                                            "block does not hold the trend's coefficient that periods apply");
-    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
-        return Linearised{tfp, -logOutputGradient(read, bundle), true};
-    });
+    const BoundsModel read = readBoundsModel(model, statistic);
+    if (periods.empty())
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
+            return Linearised{tfp, -logOutputGradient(read, bundle), true};
+        });
+    // With periods row i's ln A is s + λ·(tᵢ − t_last): g of ln TFP gains −(tᵢ − t_last) at λ,
+    // whose row the block holds with a trend (the plain function has refused periods without one).
+    if (read.technicalChangeIndex < 0)
+        throw argumentError(argument::what, "\"" + word(statistic) + "\" with periods needs the trend's row "
+                                            "\"technical change per period\" in the covariance block; refit the "
+                                            "table with PRODFIT and covariance TRUE");
+    const Eigen::VectorXd sinceLatest =
+        readNumericColumns(periods, argument::periods, ValueRule::finite, "period").values.col(0).array() -
+        *read.model.latestPeriod;
+    return boundsOfValueColumn(values, inputs, read, statistic,
+                               [&](Eigen::Index row, const Eigen::VectorXd& bundle, double tfp) {
+                                   Eigen::VectorXd gradient = -logOutputGradient(read, bundle);
+                                   gradient(read.technicalChangeIndex) = -sinceLatest(row);
+                                   return Linearised{tfp, gradient, true};
+                               });
 }
 
 CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
@@ -75,7 +87,7 @@ CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = secondPartialColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const BoundsModel read = readBoundsModel(model, statistic);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
     const Eigen::VectorXd& b = read.form->exponents;
@@ -97,7 +109,7 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = technicalRateColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const BoundsModel read = readBoundsModel(model, statistic);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
     const double bi = read.form->exponents(i), bj = read.form->exponents(j);
@@ -123,7 +135,7 @@ CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const
     const Statistic statistic = readWhat(what, false);
     const CellTable plan = budgetRow(model, budget, prices);
     if (statistic == Statistic::value || !plan.isNumber(0, 0)) return plan; // a sentence (no plan) stays
-    const BoundsModel read = readBoundsModel(model, statistic, true);
+    const BoundsModel read = readBoundsModel(model, statistic);
     const Eigen::VectorXd& b = read.form->exponents;
     const Eigen::Index k = b.size();
     // The plan (every bᵢ > 0, as the plain function requires): xᵢ = (bᵢ/ν)·B/wᵢ, so g of ln xᵢ is
@@ -155,7 +167,7 @@ CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = substitutionColumn(model, inputs, first, second, kind);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false);
+    const BoundsModel read = readBoundsModel(model, statistic);
     // The cobb-douglas form fixes the direct, Allen and Morishima elasticities at 1 whatever its
     // parameters (σᵢⱼ = −fᵢfⱼ(xᵢfᵢ + xⱼfⱼ)/(xᵢxⱼ(fᵢᵢfⱼ² − 2fᵢⱼfᵢfⱼ + fⱼⱼfᵢ²)) = 1 for fᵢ = bᵢY/xᵢ):
     // the gradient is 0, so the std. error is 0 and both bounds are the value. The form allows the
@@ -174,8 +186,7 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     if (isCostModel(model.cells()))
         return costModelColumnWithBounds(model.cells(), target, prices, what, asked, values);
     const CostMeasure measure = readCostMeasure(what);
-    const bool needsLogScale = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
-    const BoundsModel read = readBoundsModel(model, asked, needsLogScale, argument::statistic);
+    const BoundsModel read = readBoundsModel(model, asked, argument::statistic);
     // The plain function has read the outputs (one cell, or a column with an optional header) and
     // the prices; its column has one cell per output, a sentence where no plan exists.
     return costColumnOfBounds(target, prices, read.form->exponents.size(), values,

@@ -55,6 +55,17 @@ struct PanelColumns {
     bool hasPeriods() const { return periods.size() > 0; }
 };
 
+// Under effects: the group effects weighted by their rows, m = Σ_g n_g·α_g / n = ȳ − x̄ᵀb (x̄ the
+// means of the columns run over all rows), a linear estimator of the regression with one dummy per
+// group, so its variance and its covariances with b are exact, of the covariance kind of the fit:
+// classically σ²/n + x̄ᵀVx̄ and −Vx̄; robust ones from that regression's own sandwich
+// (mean_effect_inference.cpp).
+struct MeanEffectInference {
+    double estimate = 0;
+    Eigen::VectorXd withColumns; // Cov(column j, m) in the extended column space, 0 at column 0
+    double variance = 0;
+};
+
 struct PanelRegression {
     // In the extended column space described above.
     LeastSquaresResult regression;
@@ -69,6 +80,7 @@ struct PanelRegression {
     // Under effects: α_g of every group, and the within R² = 1 − RSS / Σ(y − ȳ_g)².
     Eigen::VectorXd groupEffects;
     double withinRSquared = 0;
+    MeanEffectInference meanEffect;
     // What moves ln A to the latest period: λ·(t_last − t_first) with a trend, the last period's
     // effect under two-way effects, 0 otherwise.
     double latestPeriodShift = 0;
