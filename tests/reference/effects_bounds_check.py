@@ -12,7 +12,10 @@ unemp, the groups state, the periods year. Three Cobb-Douglas fits (MODELS):
 - "two_way": ln gsp on one dummy per state, ln pcap, ln pc, ln emp, unemp and one dummy per year
   after 1970; errors classical, hc1 and cluster;
 - "trend": ln gsp on a constant, ln pcap, ln pc, ln emp, unemp and year - 1970; errors classical
-  and cluster.
+  and cluster;
+- "fixed_unbalanced": "fixed_trend" on the file's rows after the first DROPPED (the sixth state then
+  keeps 2 of its 17 rows, the 42 after it all 17), so that the states' weights n_g / n differ;
+  errors classical and cluster.
 The evaluators' ln A is s = sum_g (n_g / n) alpha_g + c mean(unemp) + lambda (1986 - 1970) (fixed,
 trend), + delta_1986 instead of the trend (two-way), and beta_0 + c mean(unemp) + lambda 16
 without effects: s = w'beta, se(s) = sqrt(w'Vw) with V = cov_params(). Every figure below is
@@ -42,13 +45,14 @@ BUNDLES = [(15000.0, 35000.0, 1000.0), (25000.0, 60000.0, 2000.0), (8000.0, 2000
 OBSERVED = [35000.0, 60000.0, 15000.0]  # one state's output at each bundle (PRODTFP)
 PERIODS = [1975.0, 1980.0, 1986.0]      # the period of each of those rows
 MODELS = {"fixed_trend": ("classical", "hc1", "hc3", "cluster"), "two_way": ("classical", "hc1", "cluster"),
-          "trend": ("classical", "cluster")}
+          "trend": ("classical", "cluster"), "fixed_unbalanced": ("classical", "cluster")}
+DROPPED = 100
 COV_TYPES = {"classical": "nonrobust", "hc1": "HC1", "hc3": "HC3", "cluster": "cluster"}
 
 
-def read_panel(data_dir, np):
+def read_panel(data_dir, np, dropped):
     with open(os.path.join(data_dir, "us_states_produc_1970_1986.csv"), newline="") as handle:
-        rows = list(csv.DictReader(handle))
+        rows = list(csv.DictReader(handle))[dropped:]
     column = lambda name: np.array([float(row[name]) for row in rows])
     states = sorted(set(row["state"] for row in rows))
     group = np.array([states.index(row["state"]) for row in rows])
@@ -110,9 +114,9 @@ def main():
     except ImportError as error:
         return reference_script.skipped("numpy, scipy or statsmodels", error)
 
-    y, log_inputs, unemp, year, group = read_panel(data_dir, np)
     figures = []
     for model, kinds in MODELS.items():
+        y, log_inputs, unemp, year, group = read_panel(data_dir, np, DROPPED if model == "fixed_unbalanced" else 0)
         design, weights, first_input, trend, nested = design_and_weights(np, model, log_inputs, unemp, year, group)
         for errors in kinds:
             beta, cov, df = fit(sm, np, y, design, errors, group, nested)

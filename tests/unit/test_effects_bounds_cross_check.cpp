@@ -39,12 +39,27 @@ constexpr std::array<std::array<double, 3>, 3> bundles{
 constexpr std::array<double, 3> observed{35000.0, 60000.0, 15000.0};
 constexpr std::array<double, 3> periods{1975.0, 1980.0, 1986.0};
 
-// The script's model ("fixed_trend", "two_way", "trend") with `errors`, as PRODFIT's table with
-// covariance TRUE: groups state, the control unemp, the trend (or periods) year.
+// The range without its data rows 1 … `dropped` (row 0 the header).
+isoquant::CellTable withoutFirstRows(const isoquant::CellTable& range, std::size_t dropped)
+{
+    isoquant::CellTable kept(range.rows() - dropped, range.columns());
+    for (std::size_t row = 0; row < kept.rows(); ++row)
+        for (std::size_t column = 0; column < range.columns(); ++column)
+            kept.set(row, column, range.at(row == 0 ? 0 : row + dropped, column));
+    return kept;
+}
+
+// The script's model ("fixed_trend", "two_way", "trend", "fixed_unbalanced") with `errors`, as
+// PRODFIT's table with covariance TRUE: groups state, the control unemp, the trend (or periods) year.
 isoquant::CellTable tableOf(const std::string& model, const std::string& errors)
 {
     auto arguments = isoquant::testing::statePanelWithPanelColumns(); // the control unemp included
-    if (model == "fixed_trend") arguments.effects = std::string("fixed");
+    if (model == "fixed_unbalanced") {
+        constexpr std::size_t dropped = 100; // the script's DROPPED
+        for (auto* range : {&arguments.output, &arguments.inputs, &arguments.controls, &arguments.groups, &arguments.trend})
+            *range = withoutFirstRows(*range, dropped);
+    }
+    if (model == "fixed_trend" || model == "fixed_unbalanced") arguments.effects = std::string("fixed");
     if (model == "two_way") arguments.effects = std::string("two-way");
     arguments.errors = errors;
     return isoquant::testing::tableWithBlock(isoquant::fitFromArguments(arguments));
@@ -100,8 +115,9 @@ BOOST_AUTO_TEST_CASE(bounds_under_effects_and_with_periods_agree_with_the_dummy_
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_EFFECTS_BOUNDS_FIGURES"));
-    // Trend models (4 kinds fixed_trend + 2 trend) × (4 + 3 bundles × 6); two_way 3 kinds × (2 + 3 × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 6u * (4u + 18u) + 3u * (2u + 9u));
+    // Trend models (4 kinds fixed_trend, 2 trend, 2 fixed_unbalanced) × (4 + 3 bundles × 6); two_way
+    // 3 kinds × (2 + 3 × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 8u * (4u + 18u) + 3u * (2u + 9u));
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string key = fields.at(0) + " " + fields.at(1);
