@@ -22,7 +22,8 @@
 // Under fixed or two-way effects, column 0 of the returned regression carries the mean of the
 // group effects, (1/G)·Σ_g α_g with α_g = ȳ_g − x̄_gᵀ·b (group means of the columns run), with
 // zero variance in the covariance and NaN standard error, t, p and bounds: the group effects are
-// nuisance parameters estimated from each group's few rows, and no standard error is reported.
+// nuisance parameters estimated from each group's few rows, and no standard error is reported. The
+// row-weighted mean effect, which the evaluators use, has one (MeanEffectInference).
 //
 // Trend: the column t − t_first (t_first the earliest period), so that ln A refers to the first
 // period and the coefficient λ is the rate of Hicks-neutral technical change per period.
