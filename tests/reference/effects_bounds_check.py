@@ -15,7 +15,10 @@ unemp, the groups state, the periods year. Three Cobb-Douglas fits (MODELS):
   and cluster;
 - "fixed_unbalanced": "fixed_trend" on the file's rows after the first DROPPED (the sixth state then
   keeps 2 of its 17 rows, the 42 after it all 17), so that the states' weights n_g / n differ;
-  errors classical and cluster.
+  errors classical and cluster;
+- "fixed_constant_returns": "fixed_trend" with constant returns imposed, ln(gsp/emp) on the
+  dummies, ln(pcap/emp), ln(pc/emp), unemp and year - 1970 (b_emp = 1 - b_pcap - b_pc, so
+  ln Y = s + b_pcap ln(pcap/emp) + b_pc ln(pc/emp) + ln emp); errors classical and cluster.
 The evaluators' ln A is s = sum_g (n_g / n) alpha_g + c mean(unemp) + lambda (1986 - 1970) (fixed,
 trend), + delta_1986 instead of the trend (two-way), and beta_0 + c mean(unemp) + lambda 16
 without effects: s = w'beta, se(s) = sqrt(w'Vw) with V = cov_params(). Every figure below is
@@ -45,7 +48,8 @@ BUNDLES = [(15000.0, 35000.0, 1000.0), (25000.0, 60000.0, 2000.0), (8000.0, 2000
 OBSERVED = [35000.0, 60000.0, 15000.0]  # one state's output at each bundle (PRODTFP)
 PERIODS = [1975.0, 1980.0, 1986.0]      # the period of each of those rows
 MODELS = {"fixed_trend": ("classical", "hc1", "hc3", "cluster"), "two_way": ("classical", "hc1", "cluster"),
-          "trend": ("classical", "cluster"), "fixed_unbalanced": ("classical", "cluster")}
+          "trend": ("classical", "cluster"), "fixed_unbalanced": ("classical", "cluster"),
+          "fixed_constant_returns": ("classical", "cluster")}
 DROPPED = 100
 COV_TYPES = {"classical": "nonrobust", "hc1": "HC1", "hc3": "HC3", "cluster": "cluster"}
 
@@ -61,9 +65,10 @@ def read_panel(data_dir, np, dropped):
 
 
 def design_and_weights(np, model, logs, unemp, year, group):
-    """The dummy-variable design, the weights w of s = w'beta, the positions of b (3 inputs) and
-    of lambda (None without a trend), and the number of state dummies nested in the clusters."""
-    n = len(unemp)
+    """The dummy-variable design, the weights w of s = w'beta, the positions of b (the columns of
+    `logs`) and of lambda (None without a trend), and the number of state dummies nested in the
+    clusters."""
+    n, inputs = len(unemp), logs.shape[1]
     if model == "trend":
         leading = np.ones((n, 1))
         leading_weights = np.array([1.0])
@@ -73,7 +78,7 @@ def design_and_weights(np, model, logs, unemp, year, group):
         leading[np.arange(n), group] = 1.0
         leading_weights = leading.sum(axis=0) / n  # n_g / n
     columns = [leading, logs, unemp[:, None]]
-    extra_weights = [0.0, 0.0, 0.0, float(unemp.mean())]
+    extra_weights = [0.0] * inputs + [float(unemp.mean())]
     trend = None
     if model == "two_way":
         years = sorted(set(year))
@@ -83,7 +88,7 @@ def design_and_weights(np, model, logs, unemp, year, group):
     else:
         columns.append((year - year.min())[:, None])
         extra_weights.append(float(year.max() - year.min()))
-        trend = leading.shape[1] + 4
+        trend = leading.shape[1] + inputs + 1
     design = np.column_stack(columns)
     weights = np.concatenate([leading_weights, extra_weights])
     return design, weights, leading.shape[1], trend, (leading.shape[1] - 1 if model != "trend" else 0)
@@ -117,6 +122,9 @@ def main():
     figures = []
     for model, kinds in MODELS.items():
         y, log_inputs, unemp, year, group = read_panel(data_dir, np, DROPPED if model == "fixed_unbalanced" else 0)
+        ratios = model == "fixed_constant_returns"  # the regression in logs of ratios to emp
+        if ratios:
+            y, log_inputs = y - log_inputs[:, 2], log_inputs[:, :2] - log_inputs[:, 2:]
         design, weights, first_input, trend, nested = design_and_weights(np, model, log_inputs, unemp, year, group)
         for errors in kinds:
             beta, cov, df = fit(sm, np, y, design, errors, group, nested)
@@ -143,12 +151,15 @@ def main():
                 put("trend_scale_cov", 0, float(cov[trend] @ weights))
             for number, bundle in enumerate(BUNDLES):
                 gradient = weights.copy()
-                gradient[first_input:first_input + 3] += np.log(bundle)
-                put_log_bounds("output", number, gradient, 0.0)
+                log_bundle = np.log(bundle)
+                offset = log_bundle[2] if ratios else 0.0  # ln emp, its exponent 1 - the others'
+                gradient[first_input:first_input + log_inputs.shape[1]] += \
+                    log_bundle[:2] - log_bundle[2] if ratios else log_bundle
+                put_log_bounds("output", number, gradient, offset)
                 if trend is not None:
                     tfp = -gradient
                     tfp[trend] -= PERIODS[number] - year.max()
-                    put_log_bounds("tfp_period", number, tfp, math.log(OBSERVED[number]))
+                    put_log_bounds("tfp_period", number, tfp, math.log(OBSERVED[number]) - offset)
 
     reference_script.write_figures(output_path, ["model", "errors", "quantity", "bundle", "value"], figures)
     return 0

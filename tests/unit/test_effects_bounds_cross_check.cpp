@@ -2,9 +2,10 @@
 // the covariance block's rows "ln A for predictions" and "technical change per period"), against
 // python3-statsmodels OLS of the explicit dummy-variable regression (one dummy per state, and per
 // year under two-way effects; classical, HC1, HC3 and cluster errors) recomputed at test time by
-// tests/reference/effects_bounds_check.py on Munnell's (1990) US state panel (tests/data/README.md):
-// the evaluators' ln A s and its standard error, λ's standard error and Cov(λ, s) from the block,
-// PRODOUTPUT's and PRODTFP's (with periods) standard errors and bounds at three invented bundles.
+// tests/reference/effects_bounds_check.py on Munnell's (1990) US state panel (tests/data/README.md),
+// balanced and unbalanced, with and without constant returns imposed: the evaluators' ln A s and its
+// standard error, λ's standard error and Cov(λ, s) from the block, PRODOUTPUT's and PRODTFP's (with
+// periods) standard errors and bounds at three invented bundles.
 //
 // Tolerance: 1e-7 relative on every figure (the issue's). The within estimator and the
 // dummy-variable regression are two computations of the same fit, agreeing to about 1e-10; a
@@ -49,8 +50,9 @@ isoquant::CellTable withoutFirstRows(const isoquant::CellTable& range, std::size
     return kept;
 }
 
-// The script's model ("fixed_trend", "two_way", "trend", "fixed_unbalanced") with `errors`, as
-// PRODFIT's table with covariance TRUE: groups state, the control unemp, the trend (or periods) year.
+// The script's model ("fixed_trend", "two_way", "trend", "fixed_unbalanced", "fixed_constant_returns")
+// with `errors`, as PRODFIT's table with covariance TRUE: groups state, the control unemp, the trend
+// (or periods) year.
 isoquant::CellTable tableOf(const std::string& model, const std::string& errors)
 {
     auto arguments = isoquant::testing::statePanelWithPanelColumns(); // the control unemp included
@@ -59,7 +61,8 @@ isoquant::CellTable tableOf(const std::string& model, const std::string& errors)
         for (auto* range : {&arguments.output, &arguments.inputs, &arguments.controls, &arguments.groups, &arguments.trend})
             *range = withoutFirstRows(*range, dropped);
     }
-    if (model == "fixed_trend" || model == "fixed_unbalanced") arguments.effects = std::string("fixed");
+    if (model == "fixed_constant_returns") arguments.constantReturns = 1.0; // TRUE
+    if (model != "trend" && model != "two_way") arguments.effects = std::string("fixed");
     if (model == "two_way") arguments.effects = std::string("two-way");
     arguments.errors = errors;
     return isoquant::testing::tableWithBlock(isoquant::fitFromArguments(arguments));
@@ -115,9 +118,9 @@ BOOST_AUTO_TEST_CASE(bounds_under_effects_and_with_periods_agree_with_the_dummy_
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_EFFECTS_BOUNDS_FIGURES"));
-    // Trend models (4 kinds fixed_trend, 2 trend, 2 fixed_unbalanced) × (4 + 3 bundles × 6); two_way
-    // 3 kinds × (2 + 3 × 3).
-    BOOST_TEST_REQUIRE(rows.size() == 8u * (4u + 18u) + 3u * (2u + 9u));
+    // Trend models (4 kinds fixed_trend, 2 trend, 2 fixed_unbalanced, 2 fixed_constant_returns) ×
+    // (4 + 3 bundles × 6); two_way 3 kinds × (2 + 3 × 3).
+    BOOST_TEST_REQUIRE(rows.size() == 10u * (4u + 18u) + 3u * (2u + 9u));
     std::map<std::string, isoquant::CellTable> tables;
     for (const auto& fields : rows) {
         const std::string key = fields.at(0) + " " + fields.at(1);
