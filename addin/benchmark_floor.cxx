@@ -9,7 +9,8 @@ std::vector<FunctionInfo> buildSpecificFunctions()
     // Only in the benchmark extension (tests/benchmarks): never in isoquant.oxt.
     return {{"benchFloor", "ISOQUANTFLOOR",
              "Benchmark only: receives the ranges of a fit and does nothing with them; returns the rows of output.",
-             {outputArgument, inputsArgument}}};
+             {outputArgument, inputsArgument}},
+            {"benchCacheBytes", "ISOQUANTCACHEBYTES", "Benchmark only: the bytes the fit cache holds now.", {}}};
 }
 
 cppu::OWeakObject* createAddIn(const css::uno::Reference<css::uno::XComponentContext>& context)
@@ -21,5 +22,7 @@ double BenchmarkProductionFunctions::benchFloor(const AnyTable& output, const An
 {
     return static_cast<double>(output.getLength());
 }
+
+double BenchmarkProductionFunctions::benchCacheBytes() { return static_cast<double>(fitCache().bytesHeld()); }
 
 } // namespace isoquant::addin

@@ -1,5 +1,6 @@
-// Only in the benchmark extension: the add-in with one more cell function, ISOQUANTFLOOR, which
-// receives PRODFIT's ranges and does nothing with them (the floor of any call over those ranges).
+// Only in the benchmark extension: the add-in with two more cell functions, ISOQUANTFLOOR, which
+// receives PRODFIT's ranges and does nothing with them (the floor of any call over those ranges),
+// and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for the test of its release).
 #pragma once
 
 #include "production_functions.hxx"
@@ -18,6 +19,7 @@ public:
     {
     }
     double SAL_CALL benchFloor(const AnyTable& output, const AnyTable& inputs) override;
+    double SAL_CALL benchCacheBytes() override;
 };
 
 } // namespace isoquant::addin

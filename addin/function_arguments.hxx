@@ -75,7 +75,7 @@ inline constexpr ArgumentInfo boundsArgument{
     "covariance block of a PRODFIT table made with covariance TRUE, at its level and t distribution; output, "
     "marginal products, least-cost and budget amounts, TFP and rates of substitution get bounds on the log "
     "scale. "
-    "Cobb-douglas form; PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE also translog and ces."};
+    "Every form: cobb-douglas, translog and ces."};
 
 // Arguments shared by the decision functions.
 inline constexpr ArgumentInfo firstInputArgument{argument::firstInput,

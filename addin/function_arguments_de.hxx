@@ -71,8 +71,8 @@ inline constexpr ArgumentInfo boundsArgument{
                 "bound\" (untere oder obere Grenze): nach der Delta-Methode aus dem Kovarianzblock einer mit Kovarianz "
                 "WAHR geschätzten PRODFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung; Ausbringung, "
                 "Grenzprodukte, kostenminimale und budgetoptimale Mengen, TFP und Grenzraten der Substitution "
-                "erhalten Grenzen auf der Log-Skala. Form cobb-douglas; PRODOUTPUT, PRODMARGINAL, PRODELASTICITY "
-                "und PRODSCALE auch translog und ces."};
+                "erhalten Grenzen auf der Log-Skala. Jede Form: cobb-douglas, translog und "
+                "ces."};
 
 // Arguments shared by the decision functions.
 inline constexpr ArgumentInfo firstInputArgument{"Faktor i", "Der erste Faktor: seine Nummer (1 für den ersten) oder seine "

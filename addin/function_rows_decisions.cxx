@@ -66,7 +66,7 @@ std::vector<FunctionInfo> costModelFunctions()
            "per percent of output) or \"returns to scale\" (its inverse)."},
           {argument::statistic,
            "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\" of that figure: by "
-           "the delta method from the covariance block of a cobb-douglas PRODFIT table or a PRODCOSTFIT "
+           "the delta method from the covariance block of a PRODFIT table (any form) or a PRODCOSTFIT "
            "table made with covariance TRUE, at its level and t distribution. Cost is positive by nature: "
            "total, marginal and average cost get bounds on the log scale, so they never cross 0; cost "
            "elasticity and returns to scale get value -/+ t times the std. error."}}},

@@ -220,7 +220,8 @@ std::vector<FunctionInfo> shapeFunctions()
                            "given)."},
           {argument::what,
            "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\", as for PRODMRTS. The "
-           "cobb-douglas form fixes every elasticity of substitution at 1: std. error 0, both bounds 1."}}},
+           "cobb-douglas form fixes every elasticity of substitution at 1: std. error 0, both bounds 1; translog "
+           "and ces: value -/+ t times the std. error."}}},
     };
 }
 

@@ -173,7 +173,7 @@ std::vector<TranslatedFunction> germanShapeTexts()
               "angegebenen Reihenfolge)."},
       {"Kennzahl", "\"value\" (Standard), \"std. error\", \"lower bound\" oder \"upper bound\", wie bei PRODMRTS. "
                    "Die Form cobb-douglas legt jede Substitutionselastizität auf 1 fest: Standardfehler 0, beide "
-                   "Grenzen 1."}}},
+                   "Grenzen 1; translog und ces: Wert -/+ t mal Standardfehler."}}},
     };
 }
 

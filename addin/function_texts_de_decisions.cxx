@@ -61,8 +61,8 @@ std::vector<TranslatedFunction> germanCostTexts()
                        "Ausbringung) oder \"returns to scale\" (deren Kehrwert)."},
           {"Statistik", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
                         "\"upper bound\" (untere oder obere Grenze) dieser Kennzahl: nach der Delta-Methode aus dem "
-                        "Kovarianzblock einer mit Kovarianz WAHR geschätzten PRODFIT-Tabelle der Form cobb-douglas "
-                        "oder PRODCOSTFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung. Kosten sind ihrer "
+                        "Kovarianzblock einer mit Kovarianz WAHR geschätzten PRODFIT-Tabelle (jede Form) oder "
+                        "PRODCOSTFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung. Kosten sind ihrer "
                         "Natur nach positiv: Gesamt-, Grenz- und Durchschnittskosten erhalten Grenzen auf der "
                         "Log-Skala, die nie unter 0 fallen; Kostenelastizität und Skalenerträge den Wert -/+ t mal "
                         "Standardfehler."}}},

@@ -39,11 +39,16 @@ css::uno::Sequence<OUString> supportedServiceNames()
 }
 
 ProductionFunctions::ProductionFunctions(const css::uno::Reference<css::uno::XComponentContext>& context)
-    : punctuation_(new LocalePunctuation(context))
+    : closing_(new ClosingDocuments(fits_)), punctuation_(new LocalePunctuation(context))
 {
+    closing_->start(context);
 }
 
-ProductionFunctions::~ProductionFunctions() { punctuation_->stop(); }
+ProductionFunctions::~ProductionFunctions()
+{
+    closing_->stop();
+    punctuation_->stop();
+}
 
 FitArguments ProductionFunctions::fitArguments(const AnyTable& output, const AnyTable& inputs, const Any& form,
                                                const Any& constantReturns, const Any& errors, const Any& level,
@@ -77,7 +82,7 @@ Any ProductionFunctions::prodFit(const AnyTable& output, const AnyTable& inputs,
 {
     return guardedTable([&] {
         // Cut before the cache: a whole column's empty tail is neither hashed nor kept.
-        const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
+        const auto fit = fits_->fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
             incompleteRows)));
         return fitTableWithCovariance(fitTable(*fit), *fit, toSingleCell(covariance, argument::covariance));
@@ -90,7 +95,7 @@ Any ProductionFunctions::prodStat(const AnyTable& output, const AnyTable& inputs
                                   const Any& effects, const Any& trend, const Any& incompleteRows)
 {
     return guardedValue([&] {
-        const auto fit = fits_.fit(withoutTrailingEmptyRows(withPanelArguments(
+        const auto fit = fits_->fit(withoutTrailingEmptyRows(withPanelArguments(
             fitArguments(output, inputs, form, constantReturns, errors, level, controls), groups, effects, trend,
             incompleteRows)));
         return lookUpFit(*fit, toSingleCell(Any(rowLabel), argument::rowLabel),

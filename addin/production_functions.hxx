@@ -3,6 +3,7 @@
 // shows only "Err:502" or "#VALUE!", and a crash would take the user's unsaved work with it.
 #pragma once
 
+#include "closing_documents.hxx"
 #include "model_ranges.hxx"
 #include "office_locale.hxx"
 
@@ -129,6 +130,10 @@ public:
     sal_Bool SAL_CALL supportsService(const OUString& name) override;
     css::uno::Sequence<OUString> SAL_CALL getSupportedServiceNames() override;
 
+protected:
+    // For the benchmark extension's diagnostics (benchmark_floor.cxx).
+    const FitCache& fitCache() const { return *fits_; }
+
 private:
     FitArguments fitArguments(const AnyTable& output, const AnyTable& inputs, const css::uno::Any& form,
                               const css::uno::Any& constantReturns, const css::uno::Any& errors,
@@ -139,8 +144,10 @@ private:
                                            const css::uno::Any& incompleteRows);
 
     // Every cache of the cell functions lives here, owned by this instance: fits by their
-    // arguments, models by their ranges. The core keeps none of its own.
-    FitCache fits_;
+    // arguments, models by their ranges. The core keeps none of its own. The fits are shared only
+    // weakly, with the listener that empties them when a spreadsheet closes (closing_documents.hxx).
+    std::shared_ptr<FitCache> fits_ = std::make_shared<FitCache>();
+    rtl::Reference<ClosingDocuments> closing_;
     ModelRanges models_;
     css::lang::Locale locale_;
     const Translation* wizardTranslation_ = nullptr; // Function Wizard texts; null: English

@@ -8,13 +8,13 @@ tests/integration/README.md):
     PYTHONPATH=addin/python /usr/bin/python3 -m unittest -v tests/integration/test_million_rows.py
 The extension comes from ISOQUANT_OXT (default build/isoquant.oxt).
 """
-import os
 import time
 import unittest
 
 import numpy
 import statsmodels.api as sm
 from isoquant_office import HeadlessOffice, get_cell, get_range, set_array_formula, set_values_in_blocks
+from isoquant_office.process_memory import memory_mb, office_process
 
 from .support import EXTENSION
 
@@ -34,30 +34,6 @@ def invented():
 def fill(sheet, output, inputs):
     """Header in row 1, output in A, inputs in B:C, rows 2 … ROWS + 1."""
     set_values_in_blocks(sheet, ["routes done", "fuel", "driver hours"], numpy.column_stack([output, inputs]), CHUNK)
-
-
-def office_process(office):
-    """The soffice.bin process of the office's process group."""
-    for name in os.listdir("/proc"):
-        if not name.isdigit():
-            continue
-        try:
-            if os.getpgid(int(name)) != office.pgid:
-                continue
-            with open("/proc/%s/comm" % name) as handle:
-                if handle.read().strip() == "soffice.bin":
-                    return int(name)
-        except (OSError, ProcessLookupError):
-            continue
-    raise RuntimeError("soffice.bin not found")
-
-
-def memory_mb(pid, field):
-    with open("/proc/%d/status" % pid) as handle:
-        for line in handle:
-            if line.startswith(field + ":"):
-                return int(line.split()[1]) / 1024.0
-    raise RuntimeError(field + " not found")
 
 
 def reset_peak(pid):

@@ -59,10 +59,8 @@ def main():
     except ImportError as error:
         return reference_script.skipped("numpy, scipy or statsmodels", error)
 
-    y, l1, l2 = reference_script.cobb_douglas_1928_logs(data_dir, np)
-    design = sm.add_constant(np.column_stack([l1, l2, 0.5 * l1 * l1, l1 * l2, 0.5 * l2 * l2]))
     figures = []
-    for errors, result in reference_script.classical_and_hc1_fits(sm, y, design):
+    for errors, result in reference_script.translog_1928_fits(data_dir, np, sm):
         theta, cov, t, smearing = reference_script.fit_inference(np, stats, result, LEVEL)
 
         def se(function):

@@ -64,11 +64,29 @@ def cobb_douglas_1928_logs(data_dir, np):
     return tuple(np.log([float(row[name]) for row in rows]) for name in ("P", "L", "C"))
 
 
+def rice_farm_logs(data_dir, np, inputs):
+    """ln goutput and the list of ln of each input column of the rice-farm panel
+    (tests/data/rice_farms_panel.csv)."""
+    with open(os.path.join(data_dir, "rice_farms_panel.csv"), newline="") as handle:
+        rows = list(csv.DictReader(handle))
+    return (np.log([float(row["goutput"]) for row in rows]),
+            [np.log([float(row[name]) for row in rows]) for name in inputs])
+
+
 def classical_and_hc1_fits(sm, y, design):
     """(errors word, statsmodels OLS result) for classical ("nonrobust") and HC1 errors, the latter
     with use_t: t(n - p) for every kind, as the core."""
     model = sm.OLS(y, design)
     return [("classical", model.fit()), ("hc1", model.fit(cov_type="HC1", use_t=True))]
+
+
+def translog_1928_fits(data_dir, np, sm):
+    """classical_and_hc1_fits of the translog on Cobb & Douglas (1928): ln P on a constant, ln L,
+    ln C, (ln L)^2 / 2, ln L ln C and (ln C)^2 / 2 (the 1/2 convention, parameters in the order of
+    the core's table)."""
+    y, l1, l2 = cobb_douglas_1928_logs(data_dir, np)
+    design = sm.add_constant(np.column_stack([l1, l2, 0.5 * l1 * l1, l1 * l2, 0.5 * l2 * l2]))
+    return classical_and_hc1_fits(sm, y, design)
 
 
 def fit_inference(np, stats, result, level):

@@ -8,6 +8,8 @@
 
 #include <boost/test/unit_test.hpp>
 
+#include <thread>
+
 using isoquant::FitArguments;
 using isoquant::FitCache;
 
@@ -145,6 +147,32 @@ BOOST_AUTO_TEST_CASE(footprint_counts_cells_and_texts)
     BOOST_TEST(numbers >= 27000000u);
     inputs.set(7, 1, std::string(1000, 'x'));
     BOOST_TEST(isoquant::footprintBytes(inputs) >= numbers + 1000u);
+}
+
+// What the add-in relies on when a spreadsheet closes (addin/closing_documents.hxx): clear() gives
+// back every byte, a fit handed out before stays usable, and clearing from another thread while
+// cells are being fitted leaves a consistent cache.
+BOOST_AUTO_TEST_CASE(clear_releases_every_entry)
+{
+    FitCache cache;
+    const auto held = cache.fit(withLevel(0.90));
+    cache.fit(withLevel(0.95));
+    BOOST_TEST(cache.size() == 2u);
+    cache.clear();
+    BOOST_TEST(cache.size() == 0u);
+    BOOST_TEST(cache.bytesHeld() == 0u);
+    BOOST_TEST(held->inference.standardErrors(1) > 0.0);
+    BOOST_TEST(cache.fit(withLevel(0.90)) != held); // fitted again, a new object
+    BOOST_TEST(cache.fitsComputed() == 3u);
+
+    std::thread closing([&] {
+        for (int round = 0; round < 200; ++round) cache.clear();
+    });
+    for (int call = 0; call < 200; ++call) cache.fit(withLevel(call % 2 == 0 ? 0.90 : 0.95));
+    closing.join();
+    BOOST_TEST(cache.size() <= 2u);
+    cache.clear();
+    BOOST_TEST(cache.bytesHeld() == 0u);
 }
 
 BOOST_AUTO_TEST_CASE(errors_are_not_cached)

@@ -1,12 +1,13 @@
-// `what` of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE on translog and ces tables with
-// their covariance block (issue 20, form_gradients.hpp): where the table itself states the same
-// quantity with its inference, `what` must give the table's figures (the translog's elasticities
+// `what` of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE and the decisions on translog and
+// ces tables with their covariance block (issue 20, form_gradients.hpp): where the table itself
+// states the same quantity with its inference, `what` must give the table's figures (the translog's elasticities
 // and returns to scale at the sample mean of the logs; the ces's nu), and the words a model cannot
 // answer get a message naming the argument. Data: Cobb & Douglas (1928) and the Munnell (1990) state
 // panel (tests/data/README.md). The figures themselves are checked against statsmodels and numpy in
-// test_form_bounds_cross_check.cpp and tests/integration/test_bounds_in_calc.py.
+// test_form_bounds_cross_check.cpp and tests/integration/test_form_bounds_in_calc.py.
 #include "isoquant/math/fits/translog_fit.hpp"
 #include "isoquant/sheet/functions/bound_functions.hpp"
+#include "isoquant/sheet/functions/decision_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/tables/covariance_block.hpp"
 #include "isoquant/sheet/tables/fit_table.hpp"
@@ -87,22 +88,60 @@ BOOST_AUTO_TEST_CASE(ces_scale_is_the_tables_nu_and_output_bounds_are_on_the_log
     BOOST_TEST(closeTo(marginalLow * marginalHigh, marginal * marginal, 1e-12));
 }
 
+// PRODMRTS of a translog where both elasticities are positive and of a ces, the least-cost amounts
+// and the budget plan's output: bounds on the log scale (lower·upper = value², 1e-12); PRODSECOND's
+// bounds are value ∓ t·se (their mean is the value, 1e-12). Prices (4, 3), output 180 and budget
+// 1000 invented. The figures: test_decision_bounds_cross_check.cpp, test_plan_bounds_cross_check.cpp.
+BOOST_AUTO_TEST_CASE(decisions_answer_on_translog_and_ces_tables)
+{
+    using namespace isoquant;
+    const auto bundle = testing::typedRange({{150.0, 200.0}});
+    const auto prices = testing::typedRange({{4.0, 3.0}});
+    const Cell low = std::string("lower bound"), high = std::string("upper bound");
+    for (const char* form : {"translog", "ces"}) {
+        const auto table = testing::tableWithBlock(fitOf(testing::cobbDouglas1928Arguments(), form));
+        BOOST_TEST_CONTEXT(form)
+        {
+            const double rate = first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double rateLow = first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, low));
+            BOOST_TEST(rateLow < rate);
+            BOOST_TEST(closeTo(rateLow * first(technicalRateColumnWithBounds(table, bundle, 1.0, 2.0, high)),
+                               rate * rate, 1e-12));
+            const double partial = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, {}));
+            const double below = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, low));
+            const double above = first(secondPartialColumnWithBounds(table, bundle, 1.0, 2.0, high));
+            BOOST_TEST(closeTo((below + above) / 2, partial, 1e-12));
+            BOOST_TEST(first(substitutionColumnWithBounds(table, bundle, 1.0, 2.0, {}, std::string("std. error"))) > 0);
+            // The plans: amounts and output on the log scale.
+            const double amount = leastCostRow(table, 180.0, prices).number(0, 1);
+            BOOST_TEST(closeTo(leastCostRowWithBounds(table, 180.0, prices, low).number(0, 1) *
+                                   leastCostRowWithBounds(table, 180.0, prices, high).number(0, 1),
+                               amount * amount, 1e-12));
+            const double output = budgetRow(table, 1000.0, prices).number(0, 2);
+            const double outputLow = budgetRowWithBounds(table, 1000.0, prices, low).number(0, 2);
+            BOOST_TEST(outputLow < output);
+            BOOST_TEST(closeTo(outputLow * budgetRowWithBounds(table, 1000.0, prices, high).number(0, 2),
+                               output * output, 1e-12));
+        }
+    }
+}
+
 BOOST_AUTO_TEST_CASE(words_other_forms_cannot_answer_get_a_message)
 {
     const auto translog = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::cobbDouglas1928Arguments(), "translog"));
     const auto bundle = isoquant::testing::typedRange({{150.0, 200.0}});
     BOOST_TEST(messageOf([&] { isoquant::scaleColumnWithBounds(translog, {}, std::string("std. error")); }) ==
                "inputs: the translog's returns to scale and their bounds vary with the inputs; give a row of inputs");
-    BOOST_TEST(messageOf([&] {
-                   isoquant::secondPartialColumnWithBounds(translog, bundle, 1.0, 2.0, std::string("std. error"));
-               }) == "what: \"std. error\" is available for the cobb-douglas form only in this function (for the "
-                     "translog form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
     // With a control the evaluators' ln A is at the control's mean, the block's last row: output is
     // answered (its figures: test_shifted_bounds_cross_check.cpp), and so are the elasticities.
     const auto controlled = isoquant::testing::tableWithBlock(fitOf(isoquant::testing::statePanelArguments(), "translog"));
     const auto three = isoquant::testing::typedRange({{20000.0, 30000.0, 1000.0}});
     BOOST_TEST(first(isoquant::outputColumnWithBounds(controlled, three, {}, std::string("std. error"))) > 0);
     BOOST_TEST(std::isfinite(first(isoquant::elasticityColumnWithBounds(controlled, three, 1.0, std::string("std. error")))));
+    // So are TFP (through that shifted ln A) and the MRTS (free of it); the observed output is invented.
+    const auto observed = isoquant::testing::typedRange({{30000.0}});
+    BOOST_TEST(first(isoquant::productivityColumnWithBounds(controlled, observed, three, {}, std::string("std. error"))) > 0);
+    BOOST_TEST(first(isoquant::technicalRateColumnWithBounds(controlled, three, 1.0, 3.0, std::string("std. error"))) > 0);
     // A typed ces at delta = 1 with a block typed by hand: no derivative in delta there.
     const auto edge = isoquant::testing::typedRange(
         {{std::string("form"), std::string("ces"), isoquant::Cell{}, isoquant::Cell{}, isoquant::Cell{}},

@@ -18,6 +18,7 @@ to every test and target that runs Python.
 - session: CalcSession, one office and one spreadsheet for a whole test module or benchmark.
 - cells: writing and reading cells, the formula grammar of the UNO API, Calc's error texts.
 - command_line: --extension and --output of the scripts that start an office.
+- process_memory: the office's soffice.bin process and its memory figures from /proc.
 """
 
 from .cells import (ERROR_TEXT, error_text, get_cell, get_range, recalc, set_array_formula, set_formula,

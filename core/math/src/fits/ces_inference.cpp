@@ -2,6 +2,7 @@
 
 #include "isoquant/math/fits/returns_to_scale.hpp"
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/least_squares.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
@@ -118,7 +119,7 @@ ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Ei
     fit.rSquared = fit.summary.rSquared;
     fit.adjustedRSquared = fit.summary.adjustedRSquared;
     fit.logScaleAtControlMeans = raw(0);
-    fit.smearingFactor = fit.residuals.array().exp().mean(); // Duan: mean of exp(residual of ln Y)
+    fit.smearingFactor = exactExp(fit.residuals.array()).mean(); // Duan: mean of exp(residual of ln Y)
     setSubstitution(details, fit.inference);
     fit.ces = std::make_shared<CesDetails>(std::move(details));
     setReturns(fit, untested, options.confidenceLevel);

@@ -46,22 +46,26 @@ public:
 private:
     Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
 
+    // The logs go straight into the kept columns (each contiguous), then into the block.
     void takeLogs(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const
     {
         const Eigen::Index count = design.rows();
         const Eigen::Index k = data_.inputs.cols();
-        response = exactLog(data_.output.segment(first, count).array()).matrix();
-        design.middleCols(1, slopes()) = exactLog(data_.inputs.block(first, 0, count, slopes()).array()).matrix();
+        const bool keep = first == rowsKept_; // kept only as the first pass takes the rows in order
+        if (keep && first == 0) keptLogs_.resize(rows(), 1 + slopes());
+        Eigen::MatrixXd scratch;
+        if (!keep) scratch.resize(count, 1 + slopes());
+        auto logs = keep ? keptLogs_.middleRows(first, count) : scratch.middleRows(0, count);
+        exactLogs(data_.output.data() + first, &logs(0, 0), count);
+        for (Eigen::Index j = 0; j < slopes(); ++j) exactLogs(&data_.inputs(first, j), &logs(0, 1 + j), count);
         if (constantReturns_) {
-            const Eigen::VectorXd lastLog = exactLog(data_.inputs.col(k - 1).segment(first, count).array()).matrix();
-            response -= lastLog;
-            design.middleCols(1, slopes()).colwise() -= lastLog;
+            Eigen::VectorXd lastLog(count);
+            exactLogs(&data_.inputs(first, k - 1), lastLog.data(), count);
+            logs.colwise() -= lastLog;
         }
-        if (first != rowsKept_) return; // kept only as the first pass takes the rows in order
-        if (first == 0) keptLogs_.resize(rows(), 1 + slopes());
-        keptLogs_.col(0).segment(first, count) = response;
-        keptLogs_.block(first, 1, count, slopes()) = design.middleCols(1, slopes());
-        rowsKept_ = first + count;
+        response = logs.col(0);
+        design.middleCols(1, slopes()) = logs.rightCols(slopes());
+        if (keep) rowsKept_ = first + count;
     }
 
     const ProductionData& data_;

@@ -171,7 +171,7 @@ PanelRegression runShareSystem(const NormalisedRegression& normalised, const Cos
     if (run.trendColumn)
         run.latestPeriodShift =
             run.regression.inference.estimates(*run.trendColumn) * (data.panel.periods.maxCoeff() - run.trendOrigin);
-    run.smearingFactor = run.regression.residuals.array().exp().mean();
+    run.smearingFactor = exactExp(run.regression.residuals.array()).mean();
     return run;
 }
 

@@ -3,6 +3,7 @@
 #include "fits/mean_effect_inference.hpp"
 
 #include "isoquant/math/messages/input_error.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
@@ -237,7 +238,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
         result.latestPeriodShift = coefficients(*result.trendColumn) * (panel.periods.maxCoeff() - result.trendOrigin);
     if (effects == EffectsKind::twoWay)
         result.latestPeriodShift = coefficients(result.firstPeriodColumn + static_cast<Eigen::Index>(result.periodValues.size()) - 2);
-    result.smearingFactor = result.regression.residuals.array().exp().mean();
+    result.smearingFactor = exactExp(result.regression.residuals.array()).mean();
     return result;
 }
 

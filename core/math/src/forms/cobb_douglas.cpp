@@ -8,11 +8,17 @@ namespace {
 
 // Sums of logs and their exponentials are formed in extended precision: exp(L) carries a relative
 // error of about |L|·ε, which for bundles near 1e±300 (|L| ≈ 700) would cost three digits in double.
-long double extendedLogOutput(const CobbDouglas& technology, const Eigen::VectorXd& inputs)
+// With `chosen`, ln x_chosen is also handed back in `chosenLog`, so that a caller needing it does
+// not take that (slow, extended) log twice: a column of marginal products is mostly these logs.
+long double extendedLogOutput(const CobbDouglas& technology, const Eigen::VectorXd& inputs, Eigen::Index chosen = -1,
+                              long double* chosenLog = nullptr)
 {
     long double sum = technology.logScale;
-    for (Eigen::Index i = 0; i < inputs.size(); ++i)
-        sum += static_cast<long double>(technology.exponents(i)) * std::log(static_cast<long double>(inputs(i)));
+    for (Eigen::Index i = 0; i < inputs.size(); ++i) {
+        const long double logInput = std::log(static_cast<long double>(inputs(i)));
+        if (i == chosen) *chosenLog = logInput;
+        sum += static_cast<long double>(technology.exponents(i)) * logInput;
+    }
     return sum;
 }
 
@@ -30,8 +36,9 @@ double CobbDouglas::output(const Eigen::VectorXd& inputs) const
 
 double CobbDouglas::marginalProduct(const Eigen::VectorXd& inputs, Eigen::Index input) const
 {
-    return scaledExponential(exponents(input),
-                             extendedLogOutput(*this, inputs) - std::log(static_cast<long double>(inputs(input))));
+    long double logInput = 0;
+    const long double logOutput = extendedLogOutput(*this, inputs, input, &logInput);
+    return scaledExponential(exponents(input), logOutput - logInput);
 }
 
 double CobbDouglas::secondPartial(const Eigen::VectorXd& inputs, Eigen::Index first, Eigen::Index second) const

@@ -3,6 +3,7 @@
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/delta_method.hpp"
 #include "functions/form_gradients.hpp"
+#include "functions/plan_gradients.hpp"
 
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/math/forms/cobb_douglas.hpp"
@@ -57,7 +58,16 @@ CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, co
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return leastCostAnyRow(model, target, prices); // production or cost model
-    const BoundsModel read = readBoundsModel(model, statistic);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
+    if (!read.form) { // translog, ces: the plain function's plan (a sentence, no plan, stays), plan_gradients.hpp
+        const CellTable plan = leastCostAnyRow(model, target, prices);
+        if (!plan.isNumber(0, 0)) return plan;
+        const Eigen::Index k = read.technology->inputCount();
+        const Eigen::VectorXd wages = readPrices(prices, argument::inputPrices, k);
+        const Eigen::MatrixXd sensitivity = planSensitivity(read, planNumbers(plan, k), wages, PlanClosing::output);
+        return planRowOfBounds(plan, read, statistic, sensitivity.topRows(k), argument::targetOutput,
+                               "gives amounts too large to represent");
+    }
     if ((read.form->exponents.array() <= 0).any())
         throw argumentError(argument::what,
                             "\"" + word(statistic) + "\" needs every exponent positive, as the least-cost plan does");

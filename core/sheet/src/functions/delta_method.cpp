@@ -53,7 +53,8 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic,
     if (!read.form && forms == FormsAnswered::cobbDouglas)
         throw InputError(asked + "is available for the cobb-douglas form only in this function (for the " +
                          formWord(read.model.form) +
-                         " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE)");
+                         " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
+                                                 "PRODSUBSTITUTION, PRODTFP, PRODLEASTCOST, PRODBUDGET and PRODCOST)");
     read.block = &*read.model.parameterCovariance;
     const Eigen::Index rows = read.block->matrix.rows();
     if (read.model.covarianceCoversTechnicalChange) read.technicalChangeIndex = rows - 1;

@@ -45,9 +45,9 @@ struct BoundsModel {
     Eigen::Index technicalChangeIndex = -1;
 };
 
-// Which forms a function answers the words for: the decisions, TFP and the cost figures the
-// cobb-douglas form only; output, marginal products, elasticities and scale every form
-// (form_gradients.hpp).
+// Which forms a function answers the words for: every function of a production model now answers
+// them for every form (form_gradients.hpp, shape_gradients.hpp, plan_gradients.hpp); the default,
+// cobbDouglas, is for a function whose gradients are written for that form alone (read.form set).
 enum class FormsAnswered { cobbDouglas, all };
 
 // Throws InputError naming `argumentName` for a model without a covariance block (a typed model) and

@@ -2,12 +2,16 @@
 // `statistic` (bound_functions.hpp):
 // the plain function answers first (its checks, messages and sentences unchanged), then each of
 // its numbers is replaced by its standard error or bound (delta_method.hpp), with the gradient of
-// the Cobb-Douglas form given beside each function.
+// the Cobb-Douglas form given beside each function; translog and ces models through
+// form_gradients.hpp, shape_gradients.hpp and plan_gradients.hpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "functions/cost_model_bounds.hpp"
 #include "functions/delta_method.hpp"
+#include "functions/form_gradients.hpp"
+#include "functions/plan_gradients.hpp"
+#include "functions/shape_gradients.hpp"
 
 #include "isoquant/sheet/arguments/decision_arguments.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
@@ -49,6 +53,47 @@ Linearised costFigureLinearised(const BoundsModel& read, CostMeasure measure, do
     return Linearised{figure, gradient, true};
 }
 
+// The cobb-douglas budget plan (every bᵢ > 0, as the plain function requires): xᵢ = (bᵢ/ν)·B/wᵢ,
+// so g of ln xᵢ (row i) is [m = i]/bᵢ − 1/ν at each bₘ and 0 at ln A. Its output Y = A·Π xⱼ^bⱼ: g
+// of ln Y (row k) is 1 at ln A and ln xₘ at bₘ (the amounts' own change adds Σⱼ bⱼ·([m = j]/bⱼ −
+// 1/ν) = 0). All positive by nature: bounds on the log scale.
+Eigen::MatrixXd cobbDouglasBudgetGradients(const BoundsModel& read, const Eigen::VectorXd& amounts)
+{
+    const Eigen::VectorXd& b = read.form->exponents;
+    const Eigen::Index k = b.size();
+    Eigen::MatrixXd gradients = Eigen::MatrixXd::Zero(k + 1, zeroGradient(read).size());
+    for (Eigen::Index cell = 0; cell < k; ++cell) {
+        gradients.row(cell).segment(1, k).setConstant(-1 / b.sum());
+        gradients(cell, 1 + cell) += 1 / b(cell);
+    }
+    gradients(k, 0) = 1;
+    gradients.row(k).segment(1, k) = amounts.array().log().matrix().transpose();
+    return gradients;
+}
+
+// PRODCOST's figure of a translog or ces least-cost plan (plan_gradients.hpp): the plan is the
+// plain PRODLEASTCOST's at this output and these prices, the figure `figure` the plain PRODCOST's.
+Linearised planCostFigureLinearised(const ModelTable& model, const BoundsModel& read, CostMeasure measure,
+                                    double level, const Eigen::VectorXd& prices, double figure)
+{
+    CellTable priceRow(1, static_cast<std::size_t>(prices.size()));
+    for (Eigen::Index i = 0; i < prices.size(); ++i) priceRow.set(0, static_cast<std::size_t>(i), prices(i));
+    const Eigen::VectorXd amounts = planNumbers(leastCostRow(model, level, priceRow), prices.size());
+    const Eigen::MatrixXd sensitivity = planSensitivity(read, amounts, prices, PlanClosing::output);
+    const Eigen::VectorXd ofLogCost = logCostGradient(sensitivity, amounts, prices);
+    const Eigen::VectorXd ofLogMultiplier = sensitivity.row(prices.size()).transpose(); // d ln μ = d ln λ
+    switch (measure) {
+    case CostMeasure::marginal:
+        if (figure > 0) return {figure, ofLogMultiplier, true};
+        return {figure, figure * ofLogMultiplier, false};
+    case CostMeasure::costElasticity: return {figure, figure * (ofLogMultiplier - ofLogCost), false};
+    case CostMeasure::returnsToScale: return {figure, figure * (ofLogCost - ofLogMultiplier), false};
+    case CostMeasure::total:
+    case CostMeasure::average: break;
+    }
+    return {figure, ofLogCost, true};
+}
+
 } // namespace
 
 CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable& output, const CellTable& inputs,
@@ -57,12 +102,13 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = productivityColumn(model, output, inputs, periods);
     if (statistic == Statistic::value) return values;
-    // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln A − Σ bᵢ ln xᵢ, so g of ln TFP is minus g of
-    // ln f(x): (−1, −ln x₁ … −ln x_k, 0 …). Positive by nature: bounds on the log scale.
-    const BoundsModel read = readBoundsModel(model, statistic);
+    // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln f(x), so g of ln TFP is minus g of ln f(x):
+    // (−1, −ln x₁ … −ln x_k, 0 …) for cobb-douglas, the translog's and ces's of form_gradients.hpp.
+    // Positive by nature: bounds on the log scale.
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     if (periods.empty())
         return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
-            return Linearised{tfp, -logOutputGradient(read, bundle), true};
+            return Linearised{tfp, -logOutputGradientOf(read, bundle), true};
         });
     // With periods row i's ln A is s + λ·(tᵢ − t_last): g of ln TFP gains −(tᵢ − t_last) at λ,
     // whose row the block holds with a trend (the plain function has refused periods without one).
@@ -75,7 +121,7 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
         *read.model.latestPeriod;
     return boundsOfValueColumn(values, inputs, read, statistic,
                                [&](Eigen::Index row, const Eigen::VectorXd& bundle, double tfp) {
-                                   Eigen::VectorXd gradient = -logOutputGradient(read, bundle);
+                                   Eigen::VectorXd gradient = -logOutputGradientOf(read, bundle);
                                    gradient(read.technicalChangeIndex) = -sinceLatest(row);
                                    return Linearised{tfp, gradient, true};
                                });
@@ -87,9 +133,13 @@ CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = secondPartialColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
+    if (!read.form) // translog, ces: shape_gradients.hpp
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double partial) {
+            return secondPartialLinearised(read, bundle, i, j, partial);
+        });
     const Eigen::VectorXd& b = read.form->exponents;
     // fᵢⱼ = c·Y/(xᵢxⱼ) with c = bᵢ(bⱼ − δᵢⱼ): g = fᵢⱼ·(g of ln Y) + Y/(xᵢxⱼ)·∂c/∂θ, where
     // ∂c/∂bᵢ = bⱼ − δᵢⱼ and ∂c/∂bⱼ = bᵢ (together 2bᵢ − 1 when i = j). Its sign varies with the
@@ -109,9 +159,13 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = technicalRateColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
+    if (!read.form) // translog, ces: shape_gradients.hpp
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double rate) {
+            return technicalRateLinearised(read, bundle, i, j, rate);
+        });
     const double bi = read.form->exponents(i), bj = read.form->exponents(j);
     // MRTS = (bᵢ/bⱼ)·(xⱼ/xᵢ), free of ln A. With both exponents positive (both marginal products
     // positive) it is positive by nature: ln MRTS = ln bᵢ − ln bⱼ + ln(xⱼ/xᵢ), g = 1/bᵢ at bᵢ and
@@ -135,30 +189,19 @@ CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const
     const Statistic statistic = readWhat(what, false);
     const CellTable plan = budgetRow(model, budget, prices);
     if (statistic == Statistic::value || !plan.isNumber(0, 0)) return plan; // a sentence (no plan) stays
-    const BoundsModel read = readBoundsModel(model, statistic);
-    const Eigen::VectorXd& b = read.form->exponents;
-    const Eigen::Index k = b.size();
-    // The plan (every bᵢ > 0, as the plain function requires): xᵢ = (bᵢ/ν)·B/wᵢ, so g of ln xᵢ is
-    // [m = i]/bᵢ − 1/ν at each bₘ and 0 at ln A. Its output Y = A·Π xⱼ^bⱼ: g of ln Y is 1 at ln A
-    // and ln xₘ at bₘ (the amounts' own change adds Σⱼ bⱼ·([m = j]/bⱼ − 1/ν) = 0). All positive by
-    // nature: bounds on the log scale.
-    CellTable row(1, static_cast<std::size_t>(k + 1));
-    for (Eigen::Index cell = 0; cell <= k; ++cell) {
-        Eigen::VectorXd gradient = zeroGradient(read);
-        if (cell < k) {
-            gradient.segment(1, k).setConstant(-1 / b.sum());
-            gradient(1 + cell) += 1 / b(cell);
-        } else {
-            gradient(0) = 1;
-            for (Eigen::Index m = 0; m < k; ++m)
-                gradient(1 + m) = std::log(plan.number(0, static_cast<std::size_t>(m)));
-        }
-        const auto column = static_cast<std::size_t>(cell);
-        const double result = answer(Linearised{plan.number(0, column), gradient, true}, read, statistic, 0);
-        if (!std::isfinite(result)) throw argumentError(argument::budget, "gives a plan too large to represent");
-        row.set(0, column, result);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
+    const Eigen::Index k = read.technology->inputCount();
+    const Eigen::VectorXd amounts = planNumbers(plan, k);
+    Eigen::MatrixXd gradients(k + 1, zeroGradient(read).size());
+    if (read.form) {
+        gradients = cobbDouglasBudgetGradients(read, amounts);
+    } else { // translog, ces: plan_gradients.hpp
+        const Eigen::VectorXd wages = readPrices(prices, argument::inputPrices, k);
+        const Eigen::MatrixXd sensitivity = planSensitivity(read, amounts, wages, PlanClosing::spending);
+        gradients.topRows(k) = sensitivity.topRows(k);
+        gradients.row(k) = budgetOutputGradient(read, sensitivity, amounts).transpose();
     }
-    return row;
+    return planRowOfBounds(plan, read, statistic, gradients, argument::budget, "gives a plan too large to represent");
 }
 
 CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
@@ -167,7 +210,15 @@ CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = substitutionColumn(model, inputs, first, second, kind);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
+    if (!read.form) { // translog, ces: shape_gradients.hpp
+        const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
+        const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
+        const SubstitutionKind chosen = readSubstitutionKind(kind);
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double sigma) {
+            return substitutionLinearised(read, bundle, i, j, chosen, sigma);
+        });
+    }
     // The cobb-douglas form fixes the direct, Allen and Morishima elasticities at 1 whatever its
     // parameters (σᵢⱼ = −fᵢfⱼ(xᵢfᵢ + xⱼfⱼ)/(xᵢxⱼ(fᵢᵢfⱼ² − 2fᵢⱼfᵢfⱼ + fⱼⱼfᵢ²)) = 1 for fᵢ = bᵢY/xᵢ):
     // the gradient is 0, so the std. error is 0 and both bounds are the value. The form allows the
@@ -186,13 +237,16 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     if (isCostModel(model.cells()))
         return costModelColumnWithBounds(model.cells(), target, prices, what, asked, values);
     const CostMeasure measure = readCostMeasure(what);
-    const BoundsModel read = readBoundsModel(model, asked, argument::statistic);
+    const BoundsModel read = readBoundsModel(model, asked, argument::statistic, FormsAnswered::all);
     // The plain function has read the outputs (one cell, or a column with an optional header) and
     // the prices; its column has one cell per output, a sentence where no plan exists.
-    return costColumnOfBounds(target, prices, read.form->exponents.size(), values,
+    return costColumnOfBounds(target, prices, read.technology->inputCount(), values,
                               [&](double level, const Eigen::VectorXd& rowPrices, double value) {
-                                  return answer(costFigureLinearised(read, measure, level, rowPrices, value), read,
-                                                asked, 0);
+                                  const Linearised figure =
+                                      read.form ? costFigureLinearised(read, measure, level, rowPrices, value)
+                                                : planCostFigureLinearised(model, read, measure, level, rowPrices,
+                                                                           value);
+                                  return answer(figure, read, asked, 0);
                               });
 }
 

@@ -47,15 +47,6 @@ CesAtBundle cesAt(const BoundsModel& read, const Eigen::VectorXd& bundle)
     return {ces, logRatio, std::log(bundle(1)), cesComposite(logRatio, ces.weight, ces.curvature)};
 }
 
-// A δ of 0 or 1 leaves ∂/∂δ undefined (0/0): the fit's table has no standard errors there either.
-Eigen::VectorXd finiteCesGradient(Eigen::VectorXd gradient)
-{
-    if (!gradient.allFinite())
-        throw argumentError(argument::what, "the ces parameters lie on the edge of their range (delta 0 or 1), where "
-                                            "this quantity has no derivative in them; bounds need an interior fit");
-    return gradient;
-}
-
 // ln Y = ln A + ν·(b + H): g = (1, ν·∂H/∂δ, ν·∂H/∂ρ, b + H).
 Eigen::VectorXd cesLogOutputGradient(const CesAtBundle& at)
 {
@@ -78,7 +69,17 @@ Eigen::VectorXd cesElasticityGradient(const CesAtBundle& at, Eigen::Index input)
     return finiteCesGradient(gradient);
 }
 
-// g of ln Y, by form.
+} // namespace
+
+// A δ of 0 or 1 leaves ∂/∂δ undefined (0/0): the fit's table has no standard errors there either.
+Eigen::VectorXd finiteCesGradient(Eigen::VectorXd gradient)
+{
+    if (!gradient.allFinite())
+        throw argumentError(argument::what, "the ces parameters lie on the edge of their range (delta 0 or 1), where "
+                                            "this quantity has no derivative in them; bounds need an interior fit");
+    return gradient;
+}
+
 Eigen::VectorXd logOutputGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle)
 {
     switch (read.model.form) {
@@ -89,7 +90,6 @@ Eigen::VectorXd logOutputGradientOf(const BoundsModel& read, const Eigen::Vector
     return logOutputGradient(read, bundle); // (1, ln x, 0 …)
 }
 
-// g of εᵢ, by form (cobb-douglas: εᵢ = bᵢ, 1 at bᵢ).
 Eigen::VectorXd elasticityGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle, Eigen::Index input)
 {
     switch (read.model.form) {
@@ -101,8 +101,6 @@ Eigen::VectorXd elasticityGradientOf(const BoundsModel& read, const Eigen::Vecto
     gradient(1 + input) = 1;
     return gradient;
 }
-
-} // namespace
 
 Linearised outputLinearised(const BoundsModel& read, const Eigen::VectorXd& bundle, double factor)
 {

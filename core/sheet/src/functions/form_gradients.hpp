@@ -1,4 +1,4 @@
-// The quantities of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY and PRODSCALE linearised in the
+// The quantities of PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE and PRODTFP linearised in the
 // parameters θ of the model's form, in the order of its covariance block (covariance_block.hpp), for
 // the delta method (delta_method.hpp), every gradient analytic. Internal to the sheet library.
 //
@@ -24,6 +24,14 @@
 #include "functions/delta_method.hpp"
 
 namespace isoquant::delta_method {
+
+// The ces gradient as it is, or InputError naming "what" where it is not finite: δ of 0 or 1 leaves
+// ∂/∂δ undefined (0/0).
+Eigen::VectorXd finiteCesGradient(Eigen::VectorXd gradient);
+// g of ln Y, by form: cobb-douglas (1, ln x, 0 …), translog and ces as above.
+Eigen::VectorXd logOutputGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle);
+// g of εᵢ, by form (cobb-douglas: εᵢ = bᵢ, 1 at bᵢ).
+Eigen::VectorXd elasticityGradientOf(const BoundsModel& read, const Eigen::VectorXd& bundle, Eigen::Index input);
 
 // Y (times `factor`, the smearing factor of a mean prediction) with the gradient of ln Y: log scale.
 Linearised outputLinearised(const BoundsModel& read, const Eigen::VectorXd& bundle, double factor);

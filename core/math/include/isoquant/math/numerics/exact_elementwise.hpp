@@ -1,34 +1,54 @@
 // Logs and exponentials of whole columns that stay exact outside the normal doubles.
-// Eigen 3.4's vectorised kernels are exact only there: its log takes any subnormal x (below
-// 2.2e-308) for 2.2e-308, and its exp returns 5.6e-309 for every argument below about −709.4,
-// where the true value is subnormal or 0. Each function looks once at the smallest coefficient:
-// when every value is in the kernel's range (the common case) the vectorised kernel runs, else
-// std::log / std::exp coefficient by coefficient.
+// Eigen 3.4's vectorised kernels (column_kernels.hpp) are exact only there: its log takes any
+// subnormal x (below 2.2e-308) for 2.2e-308, and its exp returns 5.6e-309 for every argument below
+// about −709.4, where the true value is subnormal or 0. Each function looks once at the smallest
+// coefficient: when every value is in the kernel's range (the common case) the vectorised kernel
+// runs, else std::log / std::exp coefficient by coefficient.
 #pragma once
+
+#include "isoquant/math/numerics/column_kernels.hpp"
 
 #include <Eigen/Dense>
 
 #include <cmath>
+#include <cstddef>
 #include <limits>
+#include <type_traits>
 
 namespace isoquant {
 
 // ln of the smallest normal double, ln 2.2250738585072014e-308
 inline constexpr double logOfSmallestNormal = -708.39641853226410622;
 
+// out[i] = ln values[i] for a column held contiguously (out may be values), by the rule above.
+inline void exactLogs(const double* values, double* out, Eigen::Index count)
+{
+    const Eigen::Map<const Eigen::ArrayXd> column(values, count);
+    if (count == 0 || column.minCoeff() >= std::numeric_limits<double>::min()) {
+        column_kernels::logs(values, out, static_cast<std::size_t>(count));
+        return;
+    }
+    for (Eigen::Index i = 0; i < count; ++i) out[i] = std::log(values[i]);
+}
+
 template <typename Derived>
 typename Derived::PlainObject exactLog(const Eigen::ArrayBase<Derived>& values)
 {
-    const typename Derived::PlainObject plain = values;
-    if (plain.size() == 0 || plain.minCoeff() >= std::numeric_limits<double>::min()) return plain.log();
-    return plain.unaryExpr([](double value) { return std::log(value); });
+    static_assert(std::is_same_v<typename Derived::Scalar, double>, "columns of doubles only");
+    typename Derived::PlainObject plain = values;
+    exactLogs(plain.data(), plain.data(), plain.size());
+    return plain;
 }
 
 template <typename Derived>
 typename Derived::PlainObject exactExp(const Eigen::ArrayBase<Derived>& values)
 {
-    const typename Derived::PlainObject plain = values;
-    if (plain.size() == 0 || plain.minCoeff() >= logOfSmallestNormal) return plain.exp();
+    static_assert(std::is_same_v<typename Derived::Scalar, double>, "columns of doubles only");
+    typename Derived::PlainObject plain = values;
+    if (plain.size() == 0 || plain.minCoeff() >= logOfSmallestNormal) {
+        column_kernels::exps(plain.data(), plain.data(), static_cast<std::size_t>(plain.size()));
+        return plain;
+    }
     return plain.unaryExpr([](double value) { return std::exp(value); });
 }
 

@@ -37,6 +37,8 @@ public:
     // Entries held and the bytes they count against the budget.
     std::size_t size() const;
     std::size_t bytesHeld() const;
+    // Drops every entry (the add-in does when a spreadsheet closes); fits already handed out stay
+    // valid for whoever holds them. Safe while other threads fit.
     void clear();
 
 private:

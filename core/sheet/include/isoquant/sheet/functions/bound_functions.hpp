@@ -5,9 +5,11 @@
 // delta method with the analytic gradient of the quantity in the parameters θ = (ln A, b₁ … b_k,
 // controls) of the Cobb-Douglas form: se = √(gᵀ V g), bounds at the block's level with its t
 // distribution (t(n − p), or t(G − 1) under cluster errors: the block's degrees of freedom).
-// Output, marginal products, elasticities and returns to scale also from translog and ces tables,
-// with the gradients of form_gradients.hpp (src/functions); every other function answers these
-// words for the cobb-douglas form only, and a message naming "what" for the others.
+// Every function below answers these words for translog and ces tables too, with the gradients of
+// form_gradients.hpp (output, marginal products, elasticities, scale, TFP), shape_gradients.hpp
+// (second partials, MRTS, elasticities of substitution) and plan_gradients.hpp (the least-cost and
+// budget plans and PRODCOST's figures, by the implicit function theorem on the plan's first-order
+// conditions), all in src/functions; the formulas below are the cobb-douglas form's.
 // - output Y = exp(ln A + Σ bᵢ ln xᵢ): g of ln Y = (1, ln x₁ … ln x_k, 0 …); se(Y) = Y·s with
 //   s = √(gᵀVg); bounds exp(ln Y ± t·s), on the log scale so that they never cross 0. The mean
 //   prediction (mean TRUE) is S·Y with the smearing factor S taken as known: every figure times S.

@@ -1,0 +1,38 @@
+// Compiled with -mavx2 and without -mfma (core/math/CMakeLists.txt): see column_kernels.hpp for why.
+// Only Eigen's packet functions of Packet4d are used here, so that no inline function shared with
+// the rest of the library (whose copies are SSE2) is instantiated in this file with AVX2 code: the
+// linker could otherwise keep this file's copy for every caller. The test column_kernels_symbols
+// checks what this object defines.
+#include "numerics/column_kernels_wide.hpp"
+
+#include <Eigen/Core>
+
+#if !defined(__AVX2__) || defined(__FMA__)
+#error "column_kernels_avx2.cpp must be built with -mavx2 and without -mfma"
+#endif
+
+namespace isoquant::column_kernels::avx2 {
+
+namespace {
+
+using Eigen::internal::Packet4d;
+
+template <typename Kernel> void eachPacket(const double* values, double* out, std::size_t count, Kernel kernel)
+{
+    for (std::size_t i = 0; i < count; i += 4)
+        Eigen::internal::pstoreu(out + i, kernel(Eigen::internal::ploadu<Packet4d>(values + i)));
+}
+
+} // namespace
+
+void logs(const double* values, double* out, std::size_t count)
+{
+    eachPacket(values, out, count, [](const Packet4d& x) { return Eigen::internal::plog(x); });
+}
+
+void exps(const double* values, double* out, std::size_t count)
+{
+    eachPacket(values, out, count, [](const Packet4d& x) { return Eigen::internal::pexp(x); });
+}
+
+} // namespace isoquant::column_kernels::avx2
