@@ -28,7 +28,8 @@ std::vector<FunctionInfo> productionFitFunctions()
            "kind chosen by errors), one row per parameter, for bounds on derived numbers; the table is "
            "then max(7, q + 1) columns wide and 1 + q rows longer, q = p parameters (cobb-douglas 1 + k + m, "
            "translog 1 + k + k(k+1)/2 + m, ces 4), plus 1 for the row of the ln A the evaluators use when "
-           "controls or a trend (without effects) shift it. FALSE or empty: no block."}}},
+           "controls, effects or a trend shift it, and 1 for the trend's technical change per period. FALSE or "
+           "empty: no block."}}},
         {"prodStat",
          "PRODSTAT",
          "One value of the PRODFIT table, looked up by row and column label, without an array formula.",

@@ -20,8 +20,9 @@ std::vector<TranslatedFunction> germanFittingTexts()
                     "Standardfehler gewählten Art), eine Zeile je Parameter, für Grenzen abgeleiteter Größen; die "
                     "Tabelle ist dann max(7, q + 1) Spalten breit und 1 + q Zeilen länger, q = p Parameter "
                     "(cobb-douglas 1 + k + m, translog 1 + k + k(k+1)/2 + m, ces 4), dazu 1 für die Zeile des "
-                    "von den Auswertungsfunktionen benutzten ln A, wenn Kontrollvariablen oder ein Trend (ohne "
-                    "Effekte) es verschieben. FALSCH oder leer: kein Block."}}},
+                    "von den Auswertungsfunktionen benutzten ln A, wenn Kontrollvariablen, Effekte oder ein Trend "
+                    "es verschieben, und 1 für den technischen Fortschritt je Periode eines Trends. FALSCH oder "
+                    "leer: kein Block."}}},
     {"prodStat",
      "Ein Wert der PRODFIT-Tabelle, gesucht nach Zeilen- und Spaltenbezeichnung, ohne Matrixformel.",
      {germanOutputArgument, germanInputsArgument,

@@ -113,6 +113,17 @@ def build_fixture(sheet):
                                ["covariance", "classical", 50.0, 0.95, None, None]]
                + [[label] + [0.01 if i == j else 0.0 for j in range(5)]
                   for i, label in enumerate(["constant", "output", "L", "C", "z (control)"])])
+    # A typed cobb-douglas with a trend whose block lacks the row of the trend's λ.
+    set_values(sheet, "DA100", [["form", "cobb-douglas", None, None, None], ["ln A", 0.1, None, None, None],
+                               ["L", 0.7, None, None, None], ["C", 0.3, None, None, None], [None] * 5,
+                               ["technical change per period", 0.02, None, None, None],
+                               ["ln A for predictions", 0.2, None, None, None],
+                               ["latest period", 1990.0, None, None, None],
+                               ["covariance", "classical", 20.0, 0.95, None],
+                               ["ln A", 0.01, 0.0, 0.0, 0.0], ["L", 0.0, 0.01, 0.0, 0.0],
+                               ["C", 0.0, 0.0, 0.01, 0.0], ["ln A for predictions", 0.0, 0.0, 0.0, 0.01]])
+    # A typed cobb-douglas whose block has n/a between L and C, which both have variances.
+    set_values(sheet, "DA120", typed + [["ln A", 0.01, 0.0, 0.0], ["L", 0.0, 0.01, "n/a"], ["C", 0.0, "n/a", 0.01]])
     set_formula(sheet, "AT2", "=NA()")
     set_values(sheet, "AT1", [["P"]])
     for row in range(3, 26):

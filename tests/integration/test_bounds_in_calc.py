@@ -15,8 +15,8 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, state_panel_data, statsmodels_fit
-from .support import CalcTestCase, module_session, write_columns
+from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, sm, state_panel_data, statsmodels_fit
+from .support import CalcTestCase, module_session, read_rows, row_of, write_columns
 
 CALC = module_session()
 setUpModule, tearDownModule = CALC.start, CALC.stop
@@ -282,6 +282,65 @@ class ShiftedLogScaleTest(CalcTestCase):
         gradient = np.array([1.0, np.log(15000.0), np.log(35000.0), np.log(1000.0), mean_rate])
         expected = np.exp(beta @ gradient) * np.sqrt(gradient @ cov @ gradient)
         self.assert_relative(get_cell(self.sheet, "P3"), expected, 1e-7, "std. error of output")
+
+
+class EffectsAndPeriodsBoundsTest(CalcTestCase):
+    """Munnell's (1990) state panel (tests/data) with state fixed effects, the control unemp and the
+    trend year: 26 rows and the block's 1 + q rows, q = 5 parameters + "ln A for predictions" +
+    "technical change per period" = 7, so 34 rows by 8 columns. Expected: statsmodels OLS of the
+    dummy-variable regression (one dummy per state, no constant; classical) at test time. The
+    evaluators' ln A s = sum_g (n_g / n) alpha_g + c mean(unemp) + lambda 16 = w'beta; PRODOUTPUT's
+    std. error Y sqrt(g'Vg), g = w + ln x at the inputs, and PRODTFP's with a period t,
+    TFP sqrt(h'Vh), h = g + (t - 1986) at lambda, each to 1e-7 relative (the issue's tolerance)."""
+
+    BUNDLE = [15000.0, 35000.0, 1000.0]  # (pcap, pc, emp), invented
+    OBSERVED, PERIOD = 35000.0, 1975.0   # invented
+
+    @classmethod
+    def setUpClass(cls):
+        cls.rows = read_rows("us_states_produc_1970_1986.csv")
+        names = ["state", "year", "gsp", "pcap", "pc", "emp", "unemp"]
+        cls.sheet = CALC.new_sheet("Effects bounds")
+        set_values(cls.sheet, "A1", [names] + [[row["state"]] + [float(row[n]) for n in names[1:]]
+                                               for row in cls.rows])
+        set_values(cls.sheet, "R1", [cls.BUNDLE + [cls.OBSERVED, cls.PERIOD]])
+        set_array_formula(cls.sheet, "I1:P34",
+                          '=PRODFIT(C1:C817;D1:F817;;;;;G1:G817;A1:A817;"fixed";B1:B817;;TRUE())')
+        set_formula(cls.sheet, "R3", '=PRODOUTPUT(I1:P34;R1:T1;;"std. error")')
+        set_formula(cls.sheet, "R4", '=PRODTFP(I1:P34;U1;R1:T1;V1;"std. error")')
+        recalc(CALC.doc)
+        cls.table = get_range(cls.sheet, "I1:P34")
+
+    def test_the_block_has_the_two_rows(self):
+        labels = [row[0] for row in self.table]
+        self.assertEqual(labels[-2:], ["ln A for predictions", "technical change per period"])
+        self.assertEqual(self.table[0][7], "technical change per period")
+        self.assertEqual(self.table[-7][1], "n/a")  # ln A, the plain mean of the effects
+
+    def test_output_and_tfp_with_periods_against_the_dummy_variable_regression(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        states = sorted(set(row["state"] for row in self.rows))
+        column = lambda name: np.array([float(row[name]) for row in self.rows])
+        n = len(self.rows)
+        dummies = np.zeros((n, len(states)))
+        dummies[np.arange(n), [states.index(row["state"]) for row in self.rows]] = 1.0
+        year, unemp = column("year"), column("unemp")
+        design = np.column_stack([dummies] + [np.log(column(name)) for name in ("pcap", "pc", "emp")] +
+                                 [unemp, year - year.min()])
+        result = sm.OLS(np.log(column("gsp")), design).fit()
+        beta, cov = np.asarray(result.params), np.asarray(result.cov_params())
+        weights = np.concatenate([dummies.sum(axis=0) / n, [0.0, 0.0, 0.0, unemp.mean(), year.max() - year.min()]])
+        self.assert_relative(row_of(self.table, "ln A for predictions")[1], weights @ beta, STATSMODELS_RELATIVE,
+                             "ln A for predictions")
+        gradient = weights.copy()
+        gradient[len(states):len(states) + 3] += np.log(self.BUNDLE)
+        expected = np.exp(gradient @ beta) * np.sqrt(gradient @ cov @ gradient)
+        self.assert_relative(get_cell(self.sheet, "R3"), expected, 1e-7, "std. error of output under effects")
+        gradient[-1] += self.PERIOD - year.max()
+        tfp = self.OBSERVED / np.exp(gradient @ beta)
+        self.assert_relative(get_cell(self.sheet, "R4"), tfp * np.sqrt(gradient @ cov @ gradient), 1e-7,
+                             "std. error of TFP with periods")
 
 
 # Per quantity: its row on the sheet, and its formula with %s for `what` (columns N, O, P, Q).

@@ -14,17 +14,24 @@ inline CellTable tableWithBlock(const ProductionFit& fit)
     return fitTableWithCovariance(fitTable(fit), fit, 1.0);
 }
 
-// The matrix the block holds: the fit's covariance, and with a shifted ln A (fit.shiftedScale) its
-// covariances and variance as one more row and column.
+// The matrix the block holds: the fit's covariance, then with a shifted ln A (fit.shiftedScale) its
+// covariances and variance as one more row and column, then with a trend (fit.trendCovariance) λ's.
 inline Eigen::MatrixXd blockMatrixOf(const ProductionFit& fit)
 {
     Eigen::MatrixXd matrix = fit.inference.covariance;
-    if (!fit.shiftedScale) return matrix;
-    const Eigen::Index p = matrix.rows();
-    matrix.conservativeResize(p + 1, p + 1);
-    matrix.col(p).head(p) = fit.shiftedScale->withParameters;
-    matrix.row(p).head(p) = fit.shiftedScale->withParameters.transpose();
-    matrix(p, p) = fit.shiftedScale->variance;
+    auto append = [&matrix](const Eigen::VectorXd& withEarlier, double variance) {
+        const Eigen::Index p = matrix.rows();
+        matrix.conservativeResize(p + 1, p + 1);
+        matrix.col(p).head(p) = withEarlier;
+        matrix.row(p).head(p) = withEarlier.transpose();
+        matrix(p, p) = variance;
+    };
+    if (fit.shiftedScale) append(fit.shiftedScale->withParameters, fit.shiftedScale->variance);
+    if (fit.trendCovariance) {
+        Eigen::VectorXd withEarlier(matrix.rows());
+        withEarlier << fit.trendCovariance->withParameters, fit.trendCovariance->withShiftedScale;
+        append(withEarlier, fit.trendCovariance->variance);
+    }
     return matrix;
 }
 

@@ -92,9 +92,11 @@ BOOST_AUTO_TEST_CASE(tfp_bounds_on_the_log_scale)
                }) == "what: \"std. error\" " + noBlock);
 }
 
-// With a trend, PRODTFP's periods compare each row with ln A + λ·(t − t_last), and λ has no row of
-// the covariance block: the words get the message, "value" answers as before.
-BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_gets_a_message)
+// With a trend, PRODTFP's periods compare each row with s + λ·(t − t_last), λ the block's last row:
+// "value" answers as before, the bounds lie around it, and a row of the latest period (where λ drops
+// out) has the standard error of PRODTFP without periods (the figures against the dummy-variable
+// regression: test_effects_bounds_cross_check.cpp).
+BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_is_answered)
 {
     auto arguments = isoquant::testing::cobbDouglas1928Arguments();
     isoquant::CellTable years(24, 1);
@@ -107,14 +109,21 @@ BOOST_AUTO_TEST_CASE(tfp_with_periods_of_a_trend_gets_a_message)
         output.set(row, 0, 170.0 + 10.0 * static_cast<double>(row)); // invented
         bundles.set(row, 0, 150.0);
         bundles.set(row, 1, 200.0);
-        periods.set(row, 0, 1910.0 + static_cast<double>(row));
+        periods.set(row, 0, row == 0 ? 1910.0 : 1922.0); // 1922 the latest period of the fit
     }
     BOOST_TEST((isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("value")) ==
                 isoquant::productivityColumn(table, output, bundles, periods)));
-    BOOST_TEST(messageOf([&] {
-                   isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("upper bound"));
-               }) == "what: \"upper bound\" needs periods left out: the covariance block does not hold the "
-                     "trend's coefficient that periods apply");
+    const auto values = isoquant::productivityColumn(table, output, bundles, periods);
+    const auto lower = isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("lower bound"));
+    const auto upper = isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("upper bound"));
+    for (std::size_t row = 0; row < 2; ++row) {
+        BOOST_TEST(lower.number(row, 0) < values.number(row, 0));
+        BOOST_TEST(upper.number(row, 0) > values.number(row, 0));
+    }
+    const auto errors = isoquant::productivityColumnWithBounds(table, output, bundles, periods, std::string("std. error"));
+    const auto withoutPeriods = isoquant::productivityColumnWithBounds(table, output, bundles, {}, std::string("std. error"));
+    BOOST_TEST(std::fabs(errors.number(1, 0) - withoutPeriods.number(1, 0)) <= 1e-12 * withoutPeriods.number(1, 0));
+    BOOST_TEST(errors.number(0, 0) != withoutPeriods.number(0, 0));
 }
 
 BOOST_AUTO_TEST_CASE(second_partials_bounds_around_the_value)

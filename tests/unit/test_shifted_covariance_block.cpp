@@ -1,15 +1,16 @@
-// The covariance block's row for a shifted ln A (issue 20, covariance_block.hpp): a cobb-douglas
-// table with controls or a trend and no effects gets one more parameter row, "ln A at control means"
-// or "ln A for predictions" (q = p + 1 rows, max(7, q + 1) columns), read back by the model reader;
-// under effects the block keeps p rows. Data: Munnell's (1990) US state panel with the control unemp
-// and the trend year (tests/data/README.md).
+// The covariance block's rows for a shifted ln A and a trend (issue 20, covariance_block.hpp): a
+// cobb-douglas table with controls, effects or a trend gets one more parameter row, "ln A at control
+// means" or "ln A for predictions", and with a trend one more, "technical change per period"
+// (q = p + 1 or p + 2 rows, max(7, q + 1) columns), read back by the model reader. Data: Munnell's
+// (1990) US state panel with the control unemp and the trend year (tests/data/README.md).
 //
 // The row's figures are checked by reparametrising the same regression, which OLS leaves
 // unchanged but for the constant: with the control entered as unemp − mean(unemp) and the trend as
 // −year (so the core's trend column t − t_first becomes 1986 − year), the refit's ln A is exactly the
 // evaluators' ln A s = ln A + c·mean(unemp) + λ·(1986 − 1970) of the original fit, and its covariance
-// row is Cov(s, θ). Both fits' rounding differs (different columns), so 1e-9 relative to
-// √(Var(s)·Var(θⱼ)).
+// row is Cov(s, θ); its trend coefficient is −λ, so Cov(s, λ) and Var(λ) are minus its
+// Cov(ln A, trend) and its Var(trend). Both fits' rounding differs (different columns), so 1e-9
+// relative to √(Var(s)·Var(θⱼ)).
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/models/production_model.hpp"
@@ -51,8 +52,8 @@ double columnMean(const isoquant::CellTable& column)
 }
 
 // The refit of `arguments` (a control and a trend) reparametrised as at the top of the file: its θ' =
-// (s, the exponents, c), so its row 0 (Var(s), Cov(s, bᵢ), Cov(s, c)) is the last row of `block` at
-// the columns (s, b₁ … b₃, c), and its ln A is s.
+// (s, the exponents, c), so its row 0 (Var(s), Cov(s, bᵢ), Cov(s, c)) is the row of s in `block`
+// (the one before λ's, the last) at the columns (s, b₁ … b₃, c), and its ln A is s.
 void checkAgainstReparametrisedRefit(isoquant::FitArguments arguments, const isoquant::ShiftedLogScale& shifted,
                                      const Eigen::MatrixXd& block)
 {
@@ -61,13 +62,18 @@ void checkAgainstReparametrisedRefit(isoquant::FitArguments arguments, const iso
     arguments.trend = changed(arguments.trend, [](double year) { return -year; });
     const auto refit = isoquant::fitFromArguments(arguments);
     BOOST_TEST(std::fabs(refit.inference.estimates(0) - shifted.estimate) <= 1e-9 * std::fabs(shifted.estimate));
-    const Eigen::Index last = block.rows() - 1;
-    for (Eigen::Index j = 0; j < last; ++j) {
-        const Eigen::Index column = j == 0 ? last : j;
-        const double expected = refit.inference.covariance(0, j), actual = block(last, column);
-        BOOST_TEST(std::fabs(actual - expected) <= 1e-9 * std::sqrt(block(last, last) * block(column, column)),
+    const Eigen::Index trend = block.rows() - 1, scale = trend - 1;
+    for (Eigen::Index j = 0; j < scale; ++j) {
+        const Eigen::Index column = j == 0 ? scale : j;
+        const double expected = refit.inference.covariance(0, j), actual = block(scale, column);
+        BOOST_TEST(std::fabs(actual - expected) <= 1e-9 * std::sqrt(block(scale, scale) * block(column, column)),
                    "parameter " << j << ": " << actual << " against " << expected);
     }
+    const Eigen::MatrixXd& regression = refit.regressionInference.covariance;
+    const Eigen::Index refitTrend = regression.rows() - 1;
+    BOOST_TEST(std::fabs(block(trend, scale) + regression(0, refitTrend)) <=
+               1e-9 * std::sqrt(block(scale, scale) * block(trend, trend)));
+    BOOST_TEST(std::fabs(block(trend, trend) - regression(refitTrend, refitTrend)) <= 1e-9 * block(trend, trend));
 }
 
 } // namespace
@@ -80,15 +86,18 @@ BOOST_AUTO_TEST_CASE(a_control_and_a_trend_add_the_row_of_ln_a_for_predictions)
     BOOST_TEST_REQUIRE(fit.shiftedScale.has_value());
     const auto table = tableWithBlock(fit);
     const std::size_t row = blockRow(table);
-    // p = 1 + 3 inputs + 1 control = 5 parameters and the evaluators' ln A: q = 6 rows, max(7, 7) columns.
-    BOOST_TEST(table.rows() == row + 1 + 6);
-    BOOST_TEST(table.columns() == 7u);
+    // p = 1 + 3 inputs + 1 control = 5 parameters, the evaluators' ln A and λ: q = 7 rows, max(7, 8)
+    // columns, the eighth headed by λ's label.
+    BOOST_TEST(table.rows() == row + 1 + 7);
+    BOOST_TEST(table.columns() == 8u);
     BOOST_TEST(table.text(row + 6, 0) == "ln A for predictions");
+    BOOST_TEST(table.text(row + 7, 0) == "technical change per period");
+    BOOST_TEST(table.text(0, 7) == "technical change per period");
     const auto model = isoquant::readProductionModel(table);
     BOOST_TEST(model.covarianceCoversShiftedLogScale);
     BOOST_REQUIRE(model.parameterCovariance.has_value());
     BOOST_TEST((model.parameterCovariance->matrix == isoquant::testing::blockMatrixOf(fit)));
-    BOOST_TEST(model.parameterCovariance->labels.back() == "ln A for predictions");
+    BOOST_TEST(model.parameterCovariance->labels.back() == "technical change per period");
 
     checkAgainstReparametrisedRefit(trendedPanel(), *fit.shiftedScale, model.parameterCovariance->matrix);
 }
@@ -131,21 +140,33 @@ BOOST_AUTO_TEST_CASE(a_block_without_the_row_gets_a_message_naming_model)
     BOOST_TEST(messageOf([&] { isoquant::readProductionModel(table); }) ==
                "model: row " + std::to_string(row + 1) +
                    ": the covariance block has 5 rows; it needs one row per parameter (6) and 6 numbers in each; "
-                   "with controls or a trend (and no effects) its last row is 'ln A at control means', the ln A "
-                   "the evaluators use");
+                   "with controls, effects or a trend a row 'ln A at control means' follows the parameters, the "
+                   "ln A the evaluators use");
 }
 
-BOOST_AUTO_TEST_CASE(effects_keep_the_block_of_the_parameters)
+// Under effects ln A (the plain mean effect) keeps n/a; the evaluators' ln A, which weights the
+// group effects by their rows, has its row (its figures: test_effects_bounds_cross_check.cpp).
+BOOST_AUTO_TEST_CASE(effects_add_the_row_of_ln_a_for_predictions)
 {
     auto arguments = isoquant::testing::statePanelWithPanelColumns();
     arguments.effects = std::string("fixed");
     const auto fit = isoquant::fitFromArguments(arguments);
-    BOOST_TEST(!fit.shiftedScale.has_value());
+    BOOST_TEST(fit.shiftedScale.has_value());
     const auto table = tableWithBlock(fit);
-    BOOST_TEST(table.rows() == blockRow(table) + 1 + 5);
+    const std::size_t row = blockRow(table);
+    BOOST_TEST(table.rows() == row + 1 + 7);
+    BOOST_TEST(table.text(row + 1, 1) == "n/a");
+    BOOST_TEST(table.text(row + 6, 1) == "n/a");
+    BOOST_TEST(table.number(row + 6, 6) > 0);
     const auto model = isoquant::readProductionModel(table);
-    BOOST_TEST(!model.covarianceCoversShiftedLogScale);
-    BOOST_TEST(model.parameterCovariance->labels.back() == "unemp (control)");
+    BOOST_TEST(model.covarianceCoversShiftedLogScale);
+    BOOST_TEST(model.covarianceCoversTechnicalChange);
+    BOOST_TEST((model.parameterCovariance->labels.at(5) == "ln A for predictions"));
+    // Two-way effects: no trend (the period effects absorb it), so no row for λ.
+    arguments.effects = std::string("two-way");
+    const auto twoWay = tableWithBlock(isoquant::fitFromArguments(arguments));
+    BOOST_TEST(twoWay.rows() == blockRow(twoWay) + 1 + 6);
+    BOOST_TEST(isoquant::readProductionModel(twoWay).parameterCovariance->labels.back() == "ln A for predictions");
 }
 
 BOOST_AUTO_TEST_SUITE_END()

@@ -160,27 +160,50 @@ InputError collinearityError(const ProductionData& data, bool constantReturns, E
                        " are collinear (inputs taken in logs); drop one of them"};
 }
 
-// The evaluators' ln A with controls or a trend and no effects (fit_result.hpp): s = ln A + Σⱼ cⱼ·z̄ⱼ
-// (+ λ·(t_last − t_first) with a trend). In the extended columns [base | trend] θ = [T 0]·β + offset,
-// so a = [Tᵀ·a_θ | t_last − t_first] with a_θ = (1, 0 … 0, z̄₁ … z̄ₘ).
+// The evaluators' ln A with controls, a trend or effects (fit_result.hpp): s = ln A + Σⱼ cⱼ·z̄ⱼ
+// (+ λ·(t_last − t_first) with a trend, + the last period's effect under two-way effects), where
+// under effects the row-weighted mean effect m stands for ln A. In the extended columns
+// [base | trend | period effects] θ = [T 0]·β + offset, so a = [Tᵀ·a_θ | t_last − t_first | 0 … 1]
+// with a_θ = (1, 0 … 0, z̄₁ … z̄ₘ), its 1 at ln A replaced by m under effects.
 std::optional<ShiftedLogScale> cobbDouglasShiftedScale(const ProductionData& data, const ProductionFit& fit,
                                                         const PanelRegression& run, const Eigen::MatrixXd& transform)
 {
     const Eigen::Index m = data.controls.cols();
-    if (run.effectsAbsorbConstant || (m == 0 && !run.trendColumn)) return std::nullopt;
+    const bool effects = run.effectsAbsorbConstant;
+    if (!effects && m == 0 && !run.trendColumn) return std::nullopt;
     const Eigen::MatrixXd& covariance = fit.regressionInference.covariance;
     const Eigen::Index columns = covariance.rows();
     Eigen::VectorXd parameterWeights = Eigen::VectorXd::Zero(transform.rows());
-    parameterWeights(0) = 1.0;
+    parameterWeights(0) = effects ? 0.0 : 1.0;
     if (m > 0) parameterWeights.tail(m) = data.controls.colwise().mean().transpose();
     Eigen::VectorXd weights = Eigen::VectorXd::Zero(columns);
     weights.head(transform.cols()) = transform.transpose() * parameterWeights;
     if (run.trendColumn) weights(*run.trendColumn) = data.panel.periods.maxCoeff() - run.trendOrigin;
+    if (!run.periodValues.empty()) weights(columns - 1) = 1.0; // the last period's effect
     Eigen::MatrixXd parameterMap = Eigen::MatrixXd::Zero(transform.rows(), columns);
     parameterMap.leftCols(transform.cols()) = transform;
-    const bool trend = run.trendColumn.has_value();
-    return shiftedLogScale(parameterMap, weights, covariance,
-                           trend ? fit.panel.logScaleForPredictions : fit.logScaleAtControlMeans, trend);
+    const bool forPredictions = effects || run.trendColumn.has_value();
+    ShiftedLogScale shifted =
+        shiftedLogScale(parameterMap, weights, covariance,
+                        forPredictions ? fit.panel.logScaleForPredictions : fit.logScaleAtControlMeans, forPredictions,
+                        effects ? &run.meanEffect : nullptr);
+    if (effects) shifted.withParameters(0) = notANumber; // ln A, the plain mean effect, has no covariance
+    return shifted;
+}
+
+// λ's row of the covariance block with a trend (fit_result.hpp, TrendCovariance).
+std::optional<TrendCovariance> cobbDouglasTrendCovariance(const ProductionFit& fit, const PanelRegression& run,
+                                                          const Eigen::MatrixXd& transform)
+{
+    if (!run.trendColumn) return std::nullopt;
+    const Eigen::MatrixXd& covariance = fit.regressionInference.covariance;
+    const Eigen::Index trend = *run.trendColumn;
+    TrendCovariance result;
+    result.withParameters = transform * covariance.col(trend).head(transform.cols());
+    if (run.effectsAbsorbConstant) result.withParameters(0) = notANumber;
+    result.withShiftedScale = fit.shiftedScale->withColumns(trend);
+    result.variance = covariance(trend, trend);
+    return result;
 }
 
 } // namespace
@@ -254,6 +277,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     fit.smearingFactor = run.smearingFactor;
     fit.panel = summarisePanel(data.panel, options.effects, run, regression, fit.logScaleAtControlMeans);
     fit.shiftedScale = cobbDouglasShiftedScale(data, fit, run, map.transform);
+    fit.trendCovariance = cobbDouglasTrendCovariance(fit, run, map.transform);
     return fit;
 }
 

@@ -17,13 +17,18 @@ bool trendCountsDays(const Eigen::VectorXd& periods)
 }
 
 ShiftedLogScale shiftedLogScale(const Eigen::MatrixXd& parameterMap, const Eigen::VectorXd& weights,
-                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions)
+                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions,
+                                const MeanEffectInference* meanEffect)
 {
     ShiftedLogScale shifted;
     shifted.estimate = estimate;
-    const Eigen::VectorXd covarianceWithCoefficients = covariance * weights; // W·a
-    shifted.withParameters = parameterMap * covarianceWithCoefficients;
-    shifted.variance = weights.dot(covarianceWithCoefficients);
+    shifted.withColumns = covariance * weights; // W·a
+    shifted.variance = weights.dot(shifted.withColumns);
+    if (meanEffect) {
+        shifted.variance += 2.0 * weights.dot(meanEffect->withColumns) + meanEffect->variance;
+        shifted.withColumns += meanEffect->withColumns;
+    }
+    shifted.withParameters = parameterMap * shifted.withColumns;
     shifted.forPredictions = forPredictions;
     return shifted;
 }

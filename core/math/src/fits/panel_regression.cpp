@@ -1,5 +1,7 @@
 #include "isoquant/math/fits/panel_regression.hpp"
 
+#include "fits/mean_effect_inference.hpp"
+
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
@@ -216,6 +218,8 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
             options.absorbedLeverage.resize(n);
             for (Eigen::Index i = 0; i < n; ++i) options.absorbedLeverage(i) = 1.0 / groupSizes(panel.groupOfRow[static_cast<std::size_t>(i)]);
             fitRows(MatrixRows(runDesign, runResponse));
+            result.meanEffect = meanEffectInference(runDesign, slopes.colwise().mean().transpose(), response.mean(), run,
+                                                    options);
         } else {
             fitRows(MatrixRows(extended, response));
         }

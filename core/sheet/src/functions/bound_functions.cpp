@@ -58,7 +58,7 @@ CellTable leastCostRowWithBounds(const ModelTable& model, const Cell& target, co
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return leastCostAnyRow(model, target, prices); // production or cost model
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     if (!read.form) { // translog, ces: the plain function's plan (a sentence, no plan, stays), plan_gradients.hpp
         const CellTable plan = leastCostAnyRow(model, target, prices);
         if (!plan.isNumber(0, 0)) return plan;
@@ -86,7 +86,7 @@ CellTable outputColumnWithBounds(const ModelTable& model, const CellTable& input
 {
     const Statistic statistic = readWhat(what, true);
     if (statistic == Statistic::value) return outputColumn(model, inputs, mean);
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const bool prediction = statistic == Statistic::predictionLower || statistic == Statistic::predictionUpper;
     double factor = 1;
     if (readSwitchArgument(mean, argument::mean) && !prediction) {
@@ -103,7 +103,7 @@ CellTable marginalProductColumnWithBounds(const ModelTable& model, const CellTab
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return marginalProductColumn(model, inputs, input);
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
     return columnOfBounds(inputs, read, statistic, 0,
                           "marginal product of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
@@ -115,7 +115,7 @@ CellTable elasticityColumnWithBounds(const ModelTable& model, const CellTable& i
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return elasticityColumn(model, inputs, input);
-    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index chosen = readInputSelector(input, read.model, argument::input);
     return columnOfBounds(inputs, read, statistic, 0,
                           "output elasticity of " + read.model.inputLabels[static_cast<std::size_t>(chosen)],
@@ -126,7 +126,7 @@ CellTable scaleColumnWithBounds(const ModelTable& model, const CellTable& inputs
 {
     const Statistic statistic = readWhat(what, false);
     if (statistic == Statistic::value) return scaleColumn(model, inputs);
-    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     if (inputs.empty()) {
         // The translog's ν(x) = Σᵢ(αᵢ + Σⱼ βᵢⱼ ln xⱼ) and its gradient depend on the bundle.
         if (read.model.form == ProductionForm::translog)

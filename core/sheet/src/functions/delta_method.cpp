@@ -40,7 +40,7 @@ Statistic readWhat(const Cell& what, bool allowsPrediction, const std::string& a
 
 std::string word(Statistic statistic) { return statisticWords[static_cast<std::size_t>(statistic)]; }
 
-BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic,
                             const std::string& argumentName, FormsAnswered forms)
 {
     BoundsModel read{range.production()};
@@ -56,13 +56,10 @@ BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool n
                          " form in PRODOUTPUT, PRODMARGINAL, PRODELASTICITY, PRODSCALE, PRODSECOND, PRODMRTS, "
                                                  "PRODSUBSTITUTION, PRODTFP, PRODLEASTCOST, PRODBUDGET and PRODCOST)");
     read.block = &*read.model.parameterCovariance;
-    if (read.model.covarianceCoversShiftedLogScale) {
-        read.logScaleIndex = read.block->matrix.rows() - 1;
-    } else if (needsLogScale && read.model.logScaleShifted) {
-        throw InputError(asked + "is not available when the model's ln A is shifted by effects: that ln A holds "
-                                 "the group effects, which have no standard error, so the covariance block has "
-                                 "no row for it");
-    }
+    const Eigen::Index rows = read.block->matrix.rows();
+    if (read.model.covarianceCoversTechnicalChange) read.technicalChangeIndex = rows - 1;
+    if (read.model.covarianceCoversShiftedLogScale)
+        read.logScaleIndex = rows - 1 - (read.model.covarianceCoversTechnicalChange ? 1 : 0);
     read.critical = studentCriticalValue(read.block->level, read.block->degreesOfFreedom);
     return read;
 }
@@ -132,6 +129,16 @@ CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, 
                               Statistic statistic,
                               const std::function<Linearised(const Eigen::VectorXd&, double)>& linearise)
 {
+    return boundsOfValueColumn(values, inputs, read, statistic,
+                               [&](Eigen::Index, const Eigen::VectorXd& bundle, double value) {
+                                   return linearise(bundle, value);
+                               });
+}
+
+CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, const BoundsModel& read,
+                              Statistic statistic,
+                              const std::function<Linearised(Eigen::Index, const Eigen::VectorXd&, double)>& linearise)
+{
     const NumericColumns bundles = readModelInputs(inputs, read.model);
     const auto rows = static_cast<std::size_t>(bundles.values.rows());
     const std::size_t headerRows = values.rows() - rows; // 0, or 1 for the header cell
@@ -139,9 +146,9 @@ CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, 
     if (headerRows == 1 && values.isText(0, 0)) column.set(0, 0, word(statistic) + " of " + values.text(0, 0));
     for (std::size_t row = 0; row < rows; ++row) {
         if (!values.isNumber(headerRows + row, 0)) continue;
-        const Eigen::VectorXd bundle = bundles.values.row(static_cast<Eigen::Index>(row)).transpose();
-        const double result =
-            answer(linearise(bundle, values.number(headerRows + row, 0)), read, statistic, 0);
+        const auto index = static_cast<Eigen::Index>(row);
+        const Eigen::VectorXd bundle = bundles.values.row(index).transpose();
+        const double result = answer(linearise(index, bundle, values.number(headerRows + row, 0)), read, statistic, 0);
         if (!std::isfinite(result)) throw InputError(tooLarge(row + bundles.firstDataRow()));
         column.set(headerRows + row, 0, result);
     }

@@ -37,9 +37,12 @@ struct BoundsModel {
     const CobbDouglas* form = nullptr;      // the same when it is a Cobb-Douglas, else null
     const CovarianceBlock* block = nullptr;
     double critical = 0; // the t quantile of the block's level and degrees of freedom
-    // Where the evaluators' ln A stands in the block: 0, or its last row when controls or a trend
-    // shift it (covariance_block.hpp). The gradients put ln A's entry at 0; answer moves it there.
+    // Where the evaluators' ln A stands in the block: 0, or the row after the parameters when
+    // controls, effects or a trend shift it (covariance_block.hpp). The gradients put ln A's entry
+    // at 0; answer moves it there.
     Eigen::Index logScaleIndex = 0;
+    // λ's row with a trend (the block's last), else −1.
+    Eigen::Index technicalChangeIndex = -1;
 };
 
 // Which forms a function answers the words for: every function of a production model now answers
@@ -47,10 +50,9 @@ struct BoundsModel {
 // cobbDouglas, is for a function whose gradients are written for that form alone (read.form set).
 enum class FormsAnswered { cobbDouglas, all };
 
-// Throws InputError naming `argumentName` for a model without a covariance block (a typed model), a
-// form the function does not answer for, and, when `needsLogScale` (the quantity involves ln A
-// itself), a model whose evaluators use a ln A shifted by effects (the block has no row for it).
-BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic, bool needsLogScale,
+// Throws InputError naming `argumentName` for a model without a covariance block (a typed model) and
+// a form the function does not answer for.
+BoundsModel readBoundsModel(const ModelTable& range, Statistic statistic,
                             const std::string& argumentName = argument::what,
                             FormsAnswered forms = FormsAnswered::cobbDouglas);
 
@@ -82,5 +84,9 @@ CellTable columnOfBounds(const CellTable& inputs, const BoundsModel& read, Stati
 CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, const BoundsModel& read,
                               Statistic statistic,
                               const std::function<Linearised(const Eigen::VectorXd&, double)>& linearise);
+// The same with the row (0-based among the data rows) given to `linearise` first.
+CellTable boundsOfValueColumn(const CellTable& values, const CellTable& inputs, const BoundsModel& read,
+                              Statistic statistic,
+                              const std::function<Linearised(Eigen::Index, const Eigen::VectorXd&, double)>& linearise);
 
 } // namespace isoquant::delta_method

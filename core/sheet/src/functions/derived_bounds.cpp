@@ -105,14 +105,26 @@ CellTable productivityColumnWithBounds(const ModelTable& model, const CellTable&
     // TFP = Y/f(x) with Y observed: ln TFP = ln Y − ln f(x), so g of ln TFP is minus g of ln f(x):
     // (−1, −ln x₁ … −ln x_k, 0 …) for cobb-douglas, the translog's and ces's of form_gradients.hpp.
     // Positive by nature: bounds on the log scale.
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
-    // With periods each row's ln A moves by λ·(t − t_last), and λ has no row of the block.
-    if (!periods.empty())
-        throw argumentError(argument::what, "\"" + word(statistic) + "\" needs periods left out: the covariance "
-                                            "block does not hold the trend's coefficient that periods apply");
-    return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
-        return Linearised{tfp, -logOutputGradientOf(read, bundle), true};
-    });
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
+    if (periods.empty())
+        return boundsOfValueColumn(values, inputs, read, statistic, [&](const Eigen::VectorXd& bundle, double tfp) {
+            return Linearised{tfp, -logOutputGradientOf(read, bundle), true};
+        });
+    // With periods row i's ln A is s + λ·(tᵢ − t_last): g of ln TFP gains −(tᵢ − t_last) at λ,
+    // whose row the block holds with a trend (the plain function has refused periods without one).
+    if (read.technicalChangeIndex < 0)
+        throw argumentError(argument::what, "\"" + word(statistic) + "\" with periods needs the trend's row "
+                                            "\"technical change per period\" in the covariance block; refit the "
+                                            "table with PRODFIT and covariance TRUE");
+    const Eigen::VectorXd sinceLatest =
+        readNumericColumns(periods, argument::periods, ValueRule::finite, "period").values.col(0).array() -
+        *read.model.latestPeriod;
+    return boundsOfValueColumn(values, inputs, read, statistic,
+                               [&](Eigen::Index row, const Eigen::VectorXd& bundle, double tfp) {
+                                   Eigen::VectorXd gradient = -logOutputGradientOf(read, bundle);
+                                   gradient(read.technicalChangeIndex) = -sinceLatest(row);
+                                   return Linearised{tfp, gradient, true};
+                               });
 }
 
 CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable& inputs, const Cell& first,
@@ -121,7 +133,7 @@ CellTable secondPartialColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = secondPartialColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = isOmitted(second) ? i : readInputSelector(second, read.model, argument::secondInput);
     if (!read.form) // translog, ces: shape_gradients.hpp
@@ -147,7 +159,7 @@ CellTable technicalRateColumnWithBounds(const ModelTable& model, const CellTable
     const Statistic statistic = readWhat(what, false);
     const CellTable values = technicalRateColumn(model, inputs, first, second);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
     const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
     if (!read.form) // translog, ces: shape_gradients.hpp
@@ -177,7 +189,7 @@ CellTable budgetRowWithBounds(const ModelTable& model, const Cell& budget, const
     const Statistic statistic = readWhat(what, false);
     const CellTable plan = budgetRow(model, budget, prices);
     if (statistic == Statistic::value || !plan.isNumber(0, 0)) return plan; // a sentence (no plan) stays
-    const BoundsModel read = readBoundsModel(model, statistic, true, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     const Eigen::Index k = read.technology->inputCount();
     const Eigen::VectorXd amounts = planNumbers(plan, k);
     Eigen::MatrixXd gradients(k + 1, zeroGradient(read).size());
@@ -198,7 +210,7 @@ CellTable substitutionColumnWithBounds(const ModelTable& model, const CellTable&
     const Statistic statistic = readWhat(what, false);
     const CellTable values = substitutionColumn(model, inputs, first, second, kind);
     if (statistic == Statistic::value) return values;
-    const BoundsModel read = readBoundsModel(model, statistic, false, argument::what, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, statistic, argument::what, FormsAnswered::all);
     if (!read.form) { // translog, ces: shape_gradients.hpp
         const Eigen::Index i = readInputSelector(first, read.model, argument::firstInput);
         const Eigen::Index j = readInputSelector(second, read.model, argument::secondInput);
@@ -225,11 +237,7 @@ CellTable costColumnWithBounds(const ModelTable& model, const CellTable& target,
     if (isCostModel(model.cells()))
         return costModelColumnWithBounds(model.cells(), target, prices, what, asked, values);
     const CostMeasure measure = readCostMeasure(what);
-    // A translog's or ces's plan, and with it each figure, moves with ln A; a cobb-douglas's cost
-    // elasticity and returns to scale do not.
-    const bool needsLogScale = (measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale) ||
-                               model.production().form != ProductionForm::cobbDouglas;
-    const BoundsModel read = readBoundsModel(model, asked, needsLogScale, argument::statistic, FormsAnswered::all);
+    const BoundsModel read = readBoundsModel(model, asked, argument::statistic, FormsAnswered::all);
     // The plain function has read the outputs (one cell, or a column with an optional header) and
     // the prices; its column has one cell per output, a sentence where no plan exists.
     return costColumnOfBounds(target, prices, read.technology->inputCount(), values,

@@ -276,16 +276,21 @@ ProductionModel readProductionModel(const CellTable& range)
     model.latestPeriod = rows.latestPeriod;
     model.hasPeriodEffects = rows.hasPeriodEffects;
     model.logScaleShifted = rows.logScaleForPredictions || rows.logScaleAtControlMeans;
-    // Controls or a trend without effects: the block's last row is the evaluators' ln A (covariance_block.hpp).
-    model.covarianceCoversShiftedLogScale =
-        model.logScaleShifted && !rows.hasEffects && model.form != ProductionForm::ces;
+    // Controls, effects or a trend: the block's row after the parameters is the evaluators' ln A,
+    // and with a trend the next one λ (covariance_block.hpp).
+    model.covarianceCoversShiftedLogScale = model.logScaleShifted && model.form != ProductionForm::ces;
+    model.covarianceCoversTechnicalChange = model.technicalChange.has_value() && model.form != ProductionForm::ces;
     if (rows.covarianceRow) {
         std::vector<std::string> labels = parameterLabels(model.form, model.inputLabels, rows.controlLabels);
         std::string sizeNote;
         if (model.covarianceCoversShiftedLogScale) {
             labels.push_back(shiftedLogScaleLabel(rows.logScaleForPredictions.has_value()));
-            sizeNote = "; with controls or a trend (and no effects) its last row is " + quoted(labels.back()) +
-                       ", the ln A the evaluators use";
+            sizeNote = "; with controls, effects or a trend a row " + quoted(labels.back()) +
+                       " follows the parameters, the ln A the evaluators use";
+        }
+        if (model.covarianceCoversTechnicalChange) {
+            labels.push_back(technicalChangeLabel);
+            sizeNote += "; with a trend the last row is " + quoted(labels.back());
         }
         model.parameterCovariance = readCovarianceBlock(range, *rows.covarianceRow, labels, sizeNote);
     }

@@ -82,16 +82,23 @@ void refuseAsymmetry(const Eigen::MatrixXd& matrix, std::size_t headerRow)
         }
 }
 
-// Positive semidefinite on the parameters that have a variance (a row of n/a has none).
+// Positive semidefinite on the parameters that have a variance (ln A under effects has none: n/a
+// in its row and column); between two that have one, n/a is refused.
 void refuseNegativeVariance(const Eigen::MatrixXd& matrix, std::size_t headerRow)
 {
     std::vector<Eigen::Index> kept;
     for (Eigen::Index i = 0; i < matrix.rows(); ++i)
-        if (matrix.row(i).allFinite()) kept.push_back(i);
+        if (std::isfinite(matrix(i, i))) kept.push_back(i);
+    if (kept.empty()) return;
     Eigen::MatrixXd finite(kept.size(), kept.size());
     for (std::size_t a = 0; a < kept.size(); ++a)
-        for (std::size_t b = 0; b < kept.size(); ++b) finite(a, b) = matrix(kept[a], kept[b]);
-    if (kept.empty()) return;
+        for (std::size_t b = 0; b < kept.size(); ++b) {
+            finite(a, b) = matrix(kept[a], kept[b]);
+            if (!std::isfinite(finite(a, b)))
+                throw InputError(rowPlace(headerRow + 1 + static_cast<std::size_t>(kept[a])) +
+                                 ": the covariance block has n/a in column " + std::to_string(kept[b] + 2) +
+                                 " between two parameters that have variances");
+        }
     const Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver(finite, Eigen::EigenvaluesOnly);
     const double largest = std::max(0.0, solver.eigenvalues().maxCoeff());
     if (solver.eigenvalues().minCoeff() < -1e-10 * std::max(largest, std::numeric_limits<double>::min()))
@@ -186,15 +193,25 @@ std::string shiftedLogScaleLabel(bool forPredictions)
     return forPredictions ? predictionScaleLabel : controlMeansLabel;
 }
 
-void appendShiftedParameter(CovarianceBlock& block, const ShiftedLogScale& shifted, const std::string& label)
+namespace {
+
+// One more parameter in the block: V grows by its covariances with those before it and its variance.
+void appendParameter(CovarianceBlock& block, const std::string& label, const Eigen::VectorXd& withEarlier,
+                     double variance)
 {
-    // One more parameter s: V grows by Cov(θ, s) and Var(s).
     const Eigen::Index p = block.matrix.rows();
     block.labels.push_back(label);
     block.matrix.conservativeResize(p + 1, p + 1);
-    block.matrix.col(p).head(p) = shifted.withParameters;
-    block.matrix.row(p).head(p) = shifted.withParameters.transpose();
-    block.matrix(p, p) = shifted.variance;
+    block.matrix.col(p).head(p) = withEarlier;
+    block.matrix.row(p).head(p) = withEarlier.transpose();
+    block.matrix(p, p) = variance;
+}
+
+} // namespace
+
+void appendShiftedParameter(CovarianceBlock& block, const ShiftedLogScale& shifted, const std::string& label)
+{
+    appendParameter(block, label, shifted.withParameters, shifted.variance);
 }
 
 CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fit, const Cell& covariance)
@@ -203,8 +220,14 @@ CellTable fitTableWithCovariance(const CellTable& table, const ProductionFit& fi
     CovarianceBlock block;
     block.labels = parameterLabels(fit.form, fit.inputLabels, fit.controlLabels);
     block.matrix = fit.inference.covariance;
+    // The evaluators' ln A s, then the trend's λ (covariance_block.hpp).
     if (fit.shiftedScale)
         appendShiftedParameter(block, *fit.shiftedScale, shiftedLogScaleLabel(fit.shiftedScale->forPredictions));
+    if (fit.trendCovariance) {
+        Eigen::VectorXd withEarlier(block.matrix.rows());
+        withEarlier << fit.trendCovariance->withParameters, fit.trendCovariance->withShiftedScale;
+        appendParameter(block, technicalChangeLabel, withEarlier, fit.trendCovariance->variance);
+    }
     // As the table's standard errors: an exact fit has none, only the rounding left in V (a ces
     // fit without standard errors already holds NaN there).
     if (fit.status.is(FitStatusKind::exactFit)) block.matrix.setConstant(std::numeric_limits<double>::quiet_NaN());

@@ -10,7 +10,7 @@
 // - The returns-to-scale verdict tests ν = Σ bᵢ = 1 at α = 1 − confidence level.
 // - Groups, effects, a trend and cluster errors: see panel_regression.hpp. Under cluster errors
 //   inference uses t(G−1) and F(q, G−1); under effects p counts the G group means, and ln A is
-//   the mean group effect (no standard error).
+//   the mean group effect (no standard error; the evaluators' ln A has one: ShiftedLogScale).
 #pragma once
 
 #include "isoquant/math/fits/panel_regression.hpp"
@@ -87,21 +87,34 @@ struct ReturnsToScale {
     std::string verdict;       // "increasing", "constant", "decreasing" or "constant (imposed)"
 };
 
-// The evaluators' ln A when controls or a trend shift it and no effects do: s = aᵀβ, a linear
-// combination of the regression's coefficients β (a = 1 at ln A, z̄ⱼ at control j, t_last − t_first
-// at the trend), so with W the regression's covariance its covariances with the parameters θ = Mβ
-// are M·W·a and its variance aᵀWa, exact (no linearisation).
+// The evaluators' ln A when controls, a trend or effects shift it: s = aᵀβ (+ m under effects), a
+// linear combination of the regression's coefficients β (a = 1 at ln A, z̄ⱼ at control j,
+// t_last − t_first at the trend, 1 at the last period's effect under two-way effects; 0 at ln A
+// under effects, where m, the row-weighted mean group effect of MeanEffectInference, takes its
+// place). With W the regression's covariance, Cov(β, s) = W·a (+ Cov(β, m)) and
+// Var(s) = aᵀWa (+ 2aᵀCov(β, m) + Var(m)), exact (no linearisation); θ = Mβ then has Cov(θ, s) =
+// M·Cov(β, s). Under effects ln A (the plain mean effect) has no covariance: NaN there.
 struct ShiftedLogScale {
     double estimate = 0;              // PanelSummary::logScaleForPredictions, or logScaleAtControlMeans
     Eigen::VectorXd withParameters;   // Cov(θ, s), in the order of ProductionFit::inference
+    Eigen::VectorXd withColumns;      // Cov(β, s), in the regression's columns
     double variance = 0;              // Var(s)
-    bool forPredictions = false;      // with a trend: the table's "ln A for predictions" row
+    bool forPredictions = false;      // with a trend or effects: the table's "ln A for predictions" row
 };
 
 // `parameterMap` (p × c) maps the regression's coefficients to θ; `weights` (c) is a above;
-// `covariance` (c × c) is W.
+// `covariance` (c × c) is W; `meanEffect` m under effects, else null.
 ShiftedLogScale shiftedLogScale(const Eigen::MatrixXd& parameterMap, const Eigen::VectorXd& weights,
-                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions);
+                                const Eigen::MatrixXd& covariance, double estimate, bool forPredictions,
+                                const MeanEffectInference* meanEffect = nullptr);
+
+// With a trend: λ's covariances with θ (NaN at ln A under effects) and with s, and its variance,
+// from the regression's covariance W: M·W·e_λ, Cov(β, s)_λ and W_λλ.
+struct TrendCovariance {
+    Eigen::VectorXd withParameters;
+    double withShiftedScale = 0;
+    double variance = 0;
+};
 
 struct ProductionFit {
     ProductionForm form = ProductionForm::cobbDouglas;
@@ -131,8 +144,10 @@ struct ProductionFit {
     // median prediction, into the mean prediction.
     double smearingFactor = 1;
     PanelSummary panel;
-    // With controls or a trend and no effects (cobb-douglas and translog); empty otherwise.
+    // With controls, a trend or effects (cobb-douglas; translog with controls); empty otherwise.
     std::optional<ShiftedLogScale> shiftedScale;
+    // With a trend (cobb-douglas); empty otherwise.
+    std::optional<TrendCovariance> trendCovariance;
     // What only the "ces" or the "translog" form has; empty for the other forms.
     std::shared_ptr<const CesDetails> ces;
     std::shared_ptr<const TranslogDetails> translog;

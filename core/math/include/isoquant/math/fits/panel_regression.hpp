@@ -22,7 +22,8 @@
 // Under fixed or two-way effects, column 0 of the returned regression carries the mean of the
 // group effects, (1/G)·Σ_g α_g with α_g = ȳ_g − x̄_gᵀ·b (group means of the columns run), with
 // zero variance in the covariance and NaN standard error, t, p and bounds: the group effects are
-// nuisance parameters estimated from each group's few rows, and no standard error is reported.
+// nuisance parameters estimated from each group's few rows, and no standard error is reported. The
+// row-weighted mean effect, which the evaluators use, has one (MeanEffectInference).
 //
 // Trend: the column t − t_first (t_first the earliest period), so that ln A refers to the first
 // period and the coefficient λ is the rate of Hicks-neutral technical change per period.
@@ -55,6 +56,17 @@ struct PanelColumns {
     bool hasPeriods() const { return periods.size() > 0; }
 };
 
+// Under effects: the group effects weighted by their rows, m = Σ_g n_g·α_g / n = ȳ − x̄ᵀb (x̄ the
+// means of the columns run over all rows), a linear estimator of the regression with one dummy per
+// group, so its variance and its covariances with b are exact, of the covariance kind of the fit:
+// classically σ²/n + x̄ᵀVx̄ and −Vx̄; robust ones from that regression's own sandwich
+// (mean_effect_inference.cpp).
+struct MeanEffectInference {
+    double estimate = 0;
+    Eigen::VectorXd withColumns; // Cov(column j, m) in the extended column space, 0 at column 0
+    double variance = 0;
+};
+
 struct PanelRegression {
     // In the extended column space described above.
     LeastSquaresResult regression;
@@ -69,6 +81,7 @@ struct PanelRegression {
     // Under effects: α_g of every group, and the within R² = 1 − RSS / Σ(y − ȳ_g)².
     Eigen::VectorXd groupEffects;
     double withinRSquared = 0;
+    MeanEffectInference meanEffect;
     // What moves ln A to the latest period: λ·(t_last − t_first) with a trend, the last period's
     // effect under two-way effects, 0 otherwise.
     double latestPeriodShift = 0;

@@ -62,9 +62,11 @@ struct ProductionModel {
     // ln A is shifted (controls at their means, effects or a trend): the evaluators' ln A is then
     // not ln A of the table's parameters.
     bool logScaleShifted = false;
-    // Shifted by controls or a trend, without effects: the covariance block's last row is the
-    // evaluators' ln A (covariance_block.hpp); under effects the block has no row for it.
+    // Shifted by controls, effects or a trend: the covariance block's row after the parameters is
+    // the evaluators' ln A (covariance_block.hpp).
     bool covarianceCoversShiftedLogScale = false;
+    // A trend: the block's last row is λ, "technical change per period".
+    bool covarianceCoversTechnicalChange = false;
     // The covariance block of a PRODFIT table made with covariance TRUE (covariance_block.hpp).
     std::optional<CovarianceBlock> parameterCovariance;
 };

@@ -22,14 +22,16 @@
 // columns, of three inputs (28 rows, p = 10) 39 rows by 11 columns; a ces table (20 rows)
 // becomes 25 rows by 7 columns.
 //
-// A cobb-douglas or translog table with controls or a trend and without effects adds one more
-// parameter row (and column) after those p: the evaluators' ln A, s = ln A + Σⱼ cⱼ·z̄ⱼ
-// (+ λ·(t_last − t_first) with a trend), labelled as the table's own row for it, "ln A for
-// predictions" with a trend, else "ln A at control means" (fit_result.hpp, ShiftedLogScale). The
-// block then has q = p + 1 parameter rows: the table has 1 + q rows more and is max(7, q + 1)
-// columns wide. Under effects the evaluators' ln A involves the group effects, which have no
-// standard error, so no row is added there. Size formula in one line: 1 + q rows, max(7, q + 1)
-// columns, q = p + (1 if controls or a trend and no effects, else 0).
+// A cobb-douglas or translog table with controls, effects or a trend adds one more parameter row
+// (and column) after those p: the evaluators' ln A, s = ln A + Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first)
+// with a trend, + the last period's effect under two-way effects), where under effects ln A is the
+// row-weighted mean group effect Σ_g n_g·α_g / n, labelled as the table's own row for it, "ln A
+// for predictions" with effects or a trend, else "ln A at control means" (fit_result.hpp,
+// ShiftedLogScale). A cobb-douglas table with a trend adds one more after it, "technical change
+// per period" (λ; its covariances with the parameters, then with s). So q = p + (1 with controls,
+// effects or a trend) + (1 with a trend) parameter rows: the table has 1 + q rows more and is
+// max(7, q + 1) columns wide. Under effects ln A itself (the plain mean effect) has no variance:
+// n/a in its row and column.
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"

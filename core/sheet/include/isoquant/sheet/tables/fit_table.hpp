@@ -26,8 +26,9 @@
 // so the table has k + m + 15 rows, plus 1 with controls, plus 2 with groups, 1 under effects,
 // 1 more under two-way effects, 2 for a trend, 1 for "ln A for predictions" (effects or a trend)
 // and 1 when incomplete rows are dropped. Two inputs, no options: 17 rows.
-// With PRODFIT's covariance TRUE the covariance block follows (covariance_block.hpp): 1 + p rows
-// more (p = 1 + k + m parameters) and max(7, p + 1) columns (the other forms: form_tables.hpp).
+// With PRODFIT's covariance TRUE the covariance block follows (covariance_block.hpp): 1 + q rows
+// more and max(7, q + 1) columns, q = p (1 + k + m parameters) + 1 with controls, effects or a trend
+// (the evaluators' ln A) + 1 with a trend (λ) (the other forms: form_tables.hpp).
 // Statistic rows use the same columns: a value under "value", its standard error under
 // "std. error", a test statistic under "t", its p-value under "p-value". A number that is not
 // finite (an exact fit's t, say) is shown as the text "n/a". The form row's third cell holds notes
