@@ -51,13 +51,10 @@ def main():
     sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
     import reference_script
 
-    data_dir, output_path = reference_script.paths(__doc__)
-    try:
-        import numpy as np
-        import statsmodels.api as sm
-        from scipy import stats
-    except ImportError as error:
-        return reference_script.skipped("numpy, scipy or statsmodels", error)
+    opened = reference_script.start(__doc__)
+    if isinstance(opened, int):
+        return opened
+    data_dir, output_path, np, sm, stats = opened
 
     figures = []
     for errors, result in reference_script.translog_1928_fits(data_dir, np, sm):

@@ -38,6 +38,28 @@ def skipped(libraries, error):
     return SKIP
 
 
+def numpy_statsmodels_scipy_stats():
+    """(numpy, statsmodels.api, scipy.stats), or, when one of them does not import, the exit code of
+    `skipped` (an int) for main() to return."""
+    try:
+        import numpy
+        import statsmodels.api
+        from scipy import stats
+    except ImportError as error:
+        return skipped("numpy, scipy or statsmodels", error)
+    return numpy, statsmodels.api, stats
+
+
+def start(usage):
+    """main()'s opening: (data folder, output path, numpy, statsmodels.api, scipy.stats), or the exit
+    code (an int) for main() to return when a library is missing."""
+    data_dir, output_path = paths(usage)
+    libraries = numpy_statsmodels_scipy_stats()
+    if isinstance(libraries, int):
+        return libraries
+    return (data_dir, output_path) + libraries
+
+
 def write_figures(output_path, header, rows):
     os.makedirs(os.path.dirname(os.path.abspath(output_path)), exist_ok=True)
     with open(output_path, "w", newline="") as handle:
