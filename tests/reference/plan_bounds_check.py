@@ -29,8 +29,9 @@ when the libraries cannot be imported, leaving no OUTPUT_CSV behind.
 
 import cmath
 import math
-import os
 import sys
+
+import reference_script  # this folder: complex-step Jacobian, command line, skip code, figures
 
 LEVEL = 0.95
 PRICES = (4.0, 3.0)  # w_L, w_C, invented
@@ -182,7 +183,4 @@ def main():
 
 
 if __name__ == "__main__":
-    sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-    import reference_script
-
     sys.exit(main())

@@ -27,8 +27,9 @@ code) when the libraries cannot be imported, leaving no OUTPUT_CSV behind.
 """
 
 import cmath
-import os
 import sys
+
+import reference_script  # this folder: complex-step Jacobian, command line, skip code, figures
 
 LEVEL = 0.95
 INPUTS = ("seed", "urea", "totlabor")
@@ -137,7 +138,4 @@ def main():
 
 
 if __name__ == "__main__":
-    sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-    import reference_script
-
     sys.exit(main())
