@@ -79,9 +79,9 @@ std::vector<FunctionInfo> costModelFunctions()
           {argument::inputPrices, "One positive price per input, in the model's order, as a row or a column."},
           {argument::what,
            "\"value\" (default), \"std. error\", \"lower bound\" or \"upper bound\" of the efficient scale: by "
-           "the delta method from the covariance block of a translog PRODCOSTFIT table made with covariance TRUE, "
-           "at its level and t distribution. The scale is positive by nature: its bounds are taken on the log "
-           "scale, so they never cross 0."}}},
+           "the delta method from the covariance block of a translog PRODCOSTFIT table, or of a translog PRODFIT "
+           "table (through its least-cost plans), made with covariance TRUE, at its level and t distribution. The "
+           "scale is positive by nature: its bounds are taken on the log scale, so they never cross 0."}}},
         {"prodPriceElasticity",
          "PRODPRICEELASTICITY",
          "Price elasticity between inputs i and j at the least-cost plan for the output: \"demand\" (percent change "

@@ -76,7 +76,8 @@ std::vector<TranslatedFunction> germanCostTexts()
           {"Kennzahl", "\"value\" (Standard: der Wert), \"std. error\" (Standardfehler), \"lower bound\" oder "
                        "\"upper bound\" (untere oder obere Grenze) der effizienten Betriebsgröße: nach der "
                        "Delta-Methode aus dem Kovarianzblock einer mit Kovarianz WAHR geschätzten translog-"
-                       "PRODCOSTFIT-Tabelle, auf deren Niveau und mit deren t-Verteilung. Die Betriebsgröße ist "
+                       "PRODCOSTFIT-Tabelle oder translog-PRODFIT-Tabelle (über deren kostenminimale Pläne), auf "
+                       "deren Niveau und mit deren t-Verteilung. Die Betriebsgröße ist "
                        "ihrer Natur nach positiv: ihre Grenzen werden auf der Log-Skala bestimmt und fallen nie "
                        "unter 0."}}},
         {"prodPriceElasticity",

@@ -8,7 +8,9 @@ tests/integration/README.md):
 Sources of the expected figures: Cobb & Douglas (1928) data (tests/data); the covariance matrix of
 the same least squares recomputed by python3-statsmodels at test time, to 1e-8 relative
 (STATSMODELS_RELATIVE); gradients by the complex step in numpy; the plan of PRODLEASTCOST solved by
-scipy in tests/reference/plan_bounds_check.py.
+scipy in tests/reference/plan_bounds_check.py; the rice-farm panel (Feng and Horrace 2012, as in plm
+2.6 RiceFarms; tests/data) and PRODEFFICIENTSCALE's y* found by scipy in
+tests/reference/scale_bounds_check.py.
 """
 
 import unittest
@@ -16,7 +18,7 @@ import unittest
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
 from .fit_checks import STATSMODELS_RELATIVE, cobb_douglas_sheet, logs, np, statsmodels_fit
-from .support import CalcTestCase, module_session
+from .support import CalcTestCase, module_session, read_columns, write_columns
 
 CALC = module_session()
 setUpModule, tearDownModule = CALC.start, CALC.stop
@@ -170,6 +172,44 @@ class OtherFormsTest(CalcTestCase):
 
         self.assert_message(get_cell(self.sheet, "N11"), "Error: model: row 24: the covariance block has 5 rows; it "
                             "needs one row per parameter (6) and 6 numbers in each", "translog block one row short")
+
+
+class EfficientScaleBoundsTest(CalcTestCase):
+    """PRODEFFICIENTSCALE's std. error on a translog PRODFIT table with its block: the rice-farm panel's
+    goutput on seed, urea and totlabor, at the panel's mean prices rounded (112, 79, 80), against y*
+    found by scipy and differentiated through the textbook conditions by the complex step in
+    tests/reference/scale_bounds_check.py, with statsmodels' classical covariance (1e-7; the core's
+    own figures are checked against the same in test_scale_bounds_cross_check.cpp)."""
+
+    LABELS = ["seed", "urea", "totlabor"]
+
+    @classmethod
+    def setUpClass(cls):
+        cls.data = read_columns("rice_farms_panel.csv", ["goutput"] + cls.LABELS)
+        cls.sheet = CALC.new_sheet("Efficient scale bounds")
+        write_columns(cls.sheet, "A1", cls.data, ["goutput"] + cls.LABELS)
+        # 2k + k(k+1)/2 + 16 = 28 rows for three inputs, then the block's header and 10 rows.
+        set_array_formula(cls.sheet, "F1:P39", '=PRODFIT(A1:A1027;B1:D1027;"translog";;;;;;;;;TRUE())')
+        set_values(cls.sheet, "R1", [[112.0, 79.0, 80.0]])
+        set_formula(cls.sheet, "R2", '=PRODEFFICIENTSCALE(F1:P39;R1:T1;"std. error")')
+        recalc(CALC.doc)
+
+    def test_std_error_of_the_efficient_scale(self):
+        if np is None:
+            self.skipTest("python3-statsmodels/numpy not importable")
+        import os
+        import sys
+        from scipy import optimize
+        sys.path.insert(0, os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "reference"))
+        import scale_bounds_check
+        self.assertEqual(scale_bounds_check.PRICES, (112.0, 79.0, 80.0))
+        columns = [np.array(logs(self.data[label])) for label in self.LABELS]
+        terms = [columns[i] * columns[j] * (0.5 if i == j else 1.0) for i in range(3) for j in range(i, 3)]
+        result = statsmodels_fit(logs(self.data["goutput"]), columns + terms)
+        _, sensitivity = scale_bounds_check.efficient_scale(np, optimize, np.asarray(result.params))
+        cov = np.asarray(result.cov_params())
+        self.assert_relative(get_cell(self.sheet, "R2"), float(np.sqrt(sensitivity[-1] @ cov @ sensitivity[-1])),
+                             1e-7, "translog PRODEFFICIENTSCALE std. error")
 
 
 if __name__ == "__main__":

@@ -29,8 +29,9 @@ when the libraries cannot be imported, leaving no OUTPUT_CSV behind.
 
 import cmath
 import math
-import os
 import sys
+
+import reference_script  # this folder: complex-step Jacobian, command line, skip code, figures
 
 LEVEL = 0.95
 PRICES = (4.0, 3.0)  # w_L, w_C, invented
@@ -61,16 +62,6 @@ def conditions(p, v, kind, level):
     return [f[0] - v[2] * PRICES[0], f[1] - v[2] * PRICES[1], PRICES[0] * v[0] + PRICES[1] * v[1] - level]
 
 
-def complex_jacobian(np, function, point):
-    """d function / d point by the complex step, function mapping a complex vector to a list."""
-    columns = []
-    for j in range(len(point)):
-        stepped = np.asarray(point, dtype=complex)
-        stepped[j] += STEP * 1j
-        columns.append(np.imag(np.asarray(function(stepped), dtype=complex)) / STEP)
-    return np.column_stack(columns)
-
-
 def translog_plan(np, optimize, theta, kind, level):
     """(v, dv/dtheta) of a translog plan: v solved by scipy, its gradient by the implicit function
     theorem with complex-step Jacobians."""
@@ -82,16 +73,16 @@ def translog_plan(np, optimize, theta, kind, level):
     assert solution.success, solution.message
     v = solution.x
     for _ in range(3):  # Newton steps polish root's answer (xtol 1.5e-8) to rounding
-        v = v - np.linalg.solve(complex_jacobian(np, lambda u: conditions(theta, u, kind, level), v),
-                                np.real(conditions(theta, v, kind, level)))
+        by_plan = reference_script.complex_jacobian(np, lambda u: conditions(theta, u, kind, level), v)
+        v = v - np.linalg.solve(by_plan, np.real(conditions(theta, v, kind, level)))
     # Second-order condition of both problems: f curves down along the isoquant's tangent
     # (f_C, -f_L), so the point is a least cost (budget: a most output), not a saddle.
     gradient = np.real(translog_partials(np.asarray(theta, dtype=complex), v[:2].astype(complex))[1])
-    hessian = complex_jacobian(np, lambda u: list(translog_partials(theta, u)[1]), v[:2])
+    hessian = reference_script.complex_jacobian(np, lambda u: list(translog_partials(theta, u)[1]), v[:2])
     tangent = np.array([gradient[1], -gradient[0]])
     assert tangent @ hessian @ tangent < 0, "the plan fails the second-order condition"
-    by_plan = complex_jacobian(np, lambda u: conditions(theta, u, kind, level), v)
-    by_parameters = complex_jacobian(np, lambda q: conditions(q, v, kind, level), theta)
+    by_plan = reference_script.complex_jacobian(np, lambda u: conditions(theta, u, kind, level), v)
+    by_parameters = reference_script.complex_jacobian(np, lambda q: conditions(q, v, kind, level), theta)
     return v, -np.linalg.solve(by_plan, by_parameters)
 
 
@@ -106,7 +97,8 @@ def translog_figures(np, optimize, theta, cov, put):
             quantities.append(("amount_" + name, v[i], dv[i], True))
         if kind == "budget":
             y, f = translog_partials(np.asarray(theta, dtype=complex), v[:2])
-            output_by_theta = complex_jacobian(np, lambda q: [translog_partials(q, v[:2])[0]], theta)[0]
+            output_by_theta = reference_script.complex_jacobian(
+                np, lambda q: [translog_partials(q, v[:2])[0]], theta)[0]
             quantities.append(("output", y.real, output_by_theta + np.real(f[0]) * dv[0] + np.real(f[1]) * dv[1],
                                True))
         else:
@@ -191,7 +183,4 @@ def main():
 
 
 if __name__ == "__main__":
-    sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-    import reference_script
-
     sys.exit(main())

@@ -118,6 +118,17 @@ def fit_inference(np, stats, result, level):
             stats.t.ppf(0.5 + level / 2, result.df_resid), float(np.mean(np.exp(result.resid))))
 
 
+def complex_jacobian(np, function, point, step=1e-20):
+    """d function / d point by the complex step (as complex_step_standard_error below), function
+    mapping a complex vector to a list."""
+    columns = []
+    for j in range(len(point)):
+        stepped = np.asarray(point, dtype=complex)
+        stepped[j] += step * 1j
+        columns.append(np.imag(np.asarray(function(stepped), dtype=complex)) / step)
+    return np.column_stack(columns)
+
+
 def complex_step_standard_error(np, function, theta, cov, step=1e-20):
     """sqrt(g' cov g) with g the gradient of function at theta by the complex step,
     dq/dtheta_j = Im q(theta + i h e_j) / h (Squire and Trapp 1998, SIAM Review 40(1), 110-112):

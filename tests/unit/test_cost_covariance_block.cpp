@@ -224,7 +224,7 @@ BOOST_AUTO_TEST_CASE(a_typed_block_without_the_shifted_constant_s_row_is_refused
 }
 
 // PRODEFFICIENTSCALE's `what`: a message naming `what` where there is no covariance (a typed cost
-// model, a production model), the value route's sentence where there is no efficient scale, and
+// model, a typed production model), the value route's sentence where there is no efficient scale, and
 // bounds under effects too (ln y* does not involve the constant).
 BOOST_AUTO_TEST_CASE(efficient_scale_words_answer_or_say_why_not)
 {
@@ -241,8 +241,8 @@ BOOST_AUTO_TEST_CASE(efficient_scale_words_answer_or_say_why_not)
         {{"form", "cobb-douglas"}, {"ln A", 0.5}, {"labour", 0.7}, {"capital", 0.2}}));
     BOOST_TEST(messageOf([&] {
                    isoquant::efficientScaleCell(production, pricesRow(1.0, 2.0, 3.0), std::string("lower bound"));
-               }) == "what: \"lower bound\" is available in PRODEFFICIENTSCALE from a cost model only (a PRODCOSTFIT "
-                     "table made with covariance TRUE)");
+               }) == "what: \"lower bound\" needs the model's covariance block; this model has none (a typed model, "
+                     "or a PRODFIT table made without covariance TRUE)");
     arguments.form = std::string("cobb-douglas");
     const isoquant::ModelTable cobbDouglas(
         isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));

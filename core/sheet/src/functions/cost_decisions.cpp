@@ -2,6 +2,7 @@
 
 #include "functions/cost_model_bounds.hpp"
 #include "functions/delta_method.hpp"
+#include "functions/plan_gradients.hpp"
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
 #include "isoquant/sheet/functions/cost_functions.hpp"
@@ -142,19 +143,35 @@ CellTable productionEfficientScale(const ModelTable& model, const CellTable& pri
     return singleCell("No efficient scale: no least-cost plan could be found at these prices" + searched);
 }
 
+// The word's figure of a production model's y* on the log scale (y* > 0), d ln y*/dθ by the implicit
+// function theorem at the least-cost plan of y* (plan_gradients.hpp). Without a block the words
+// answer that message first, whatever the form; then the value route's sentences stand (no y* for a
+// form of constant scale elasticity, or none found).
+CellTable productionEfficientScaleWithBounds(const ModelTable& model, const CellTable& priceRange,
+                                             delta_method::Statistic statistic)
+{
+    const auto read = delta_method::readBoundsModel(model, statistic, argument::what, delta_method::FormsAnswered::all);
+    const CellTable scale = productionEfficientScale(model, priceRange);
+    if (!scale.isNumber(0, 0)) return scale;
+    const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, read.technology->inputCount());
+    const Eigen::VectorXd amounts =
+        delta_method::planNumbers(leastCostRow(model, Cell(scale.number(0, 0)), rowTable(prices)), prices.size());
+    const delta_method::Linearised logScale{scale.number(0, 0),
+                                            delta_method::efficientScaleLogGradient(read, amounts, prices), true};
+    const double result = delta_method::answer(logScale, read, statistic, 0);
+    if (!std::isfinite(result)) throw argumentError(argument::inputPrices, "give a result too large to represent");
+    return singleCell(result);
+}
+
 } // namespace
 
 CellTable efficientScaleCell(const ModelTable& model, const CellTable& priceRange, const Cell& what)
 {
     const auto statistic = delta_method::readWhat(what, false);
     const bool bounds = statistic != delta_method::Statistic::value;
-    if (!isCostModel(model.cells())) {
-        if (bounds)
-            throw argumentError(argument::what, "\"" + delta_method::word(statistic) +
-                                                    "\" is available in PRODEFFICIENTSCALE from a cost model "
-                                                    "only (a PRODCOSTFIT table made with covariance TRUE)");
-        return productionEfficientScale(model, priceRange);
-    }
+    if (!isCostModel(model.cells()))
+        return bounds ? productionEfficientScaleWithBounds(model, priceRange, statistic)
+                      : productionEfficientScale(model, priceRange);
     const CostModel cost = readCostModel(model.cells());
     const Eigen::VectorXd prices = readPrices(priceRange, argument::inputPrices, cost.prices.size());
     // ε(y) = a + b·ln y with a = β_y + Σᵢ βᵢ_y ln wᵢ, b = β_yy

@@ -16,6 +16,9 @@
 //   the budget plan's output ln Y = ln f(x(θ); θ): g(ln f) + Σ eⱼ·dlⱼ.
 // PRODCOST's cost elasticity μ/C and returns to scale C/μ: value ∓ t·se, g = value·(dm − d ln C)
 // and value·(d ln C − dm).
+// PRODEFFICIENTSCALE's y*, where ε = μ/C of the least-cost plan is 1: F(ln y, θ) = ln ε = m − ln C = 0
+// defines ln y* implicitly, so d ln y*/dθ = −(∂F/∂θ)/(∂F/∂ln y), with ∂F/∂θ = dm − d ln C above and
+// ∂F/∂ln y the same from dz/d ln y = −G_z⁻¹·∂G/∂ln y, ∂G/∂ln y = (0 … 0, −1) (the closing condition).
 #pragma once
 
 #include "functions/delta_method.hpp"
@@ -28,6 +31,11 @@ enum class PlanClosing { output, spending };
 // G_z is singular (a flat optimum: the plan does not move smoothly with θ there).
 Eigen::MatrixXd planSensitivity(const BoundsModel& read, const Eigen::VectorXd& amounts, const Eigen::VectorXd& prices,
                                 PlanClosing closing);
+
+// d ln y*/dθ of the efficient scale, the least-cost plan `amounts` at y* given. Throws InputError
+// naming "what" where G_z is singular or ε only touches 1 (∂F/∂ln y = 0).
+Eigen::VectorXd efficientScaleLogGradient(const BoundsModel& read, const Eigen::VectorXd& amounts,
+                                          const Eigen::VectorXd& prices);
 
 // d ln C/dθ of a plan from its sensitivity.
 Eigen::VectorXd logCostGradient(const Eigen::MatrixXd& sensitivity, const Eigen::VectorXd& amounts,
