@@ -9,17 +9,18 @@ The technology: statsmodels OLS of ln P on a constant, ln L, ln C, (ln L)^2/2, l
 Its elasticities e = a + Bz change sign inside the data (B11 is about -4.5), so both marginal
 products are positive only in a narrow wedge.
 
-At prices (2, 3) and each output y below, the isoquant ln f = ln y is walked in ln C (step 1e-3
-over -5..15; for each ln C the ln L with e_L > 0 solves the quadratic), and every change of sign
-of the tangency gap ln(w_L L e_C) - ln(w_C C e_L) where both elasticities are positive is narrowed
+At each pair of prices and output y below (CASES), the isoquant ln f = ln y is walked in ln C
+(step 1e-3 over -5..15, the ends of the wedge found by bisection; for each ln C the ln L with
+e_L > 0 solves the quadratic), and every change of sign of the tangency gap
+ln(w_L L e_C) - ln(w_C C e_L) where both elasticities are positive is narrowed
 by scipy.optimize.brentq. A tangency where the isoquant is convex (f_LL f_C^2 - 2 f_LC f_L f_C +
 f_CC f_L^2 < 0) is the plan; none means no plan. Each plan is confirmed by scipy.optimize.minimize
 (SLSQP: cost on the isoquant with e >= 0, from the data's mean logs), which must agree to 1e-6.
 
-OUTPUT_CSV rows: what, output, values (';'-separated):
-  parameters, (empty), a0;a1;a2;B11;B12;B22
-  plan, y, L;C;marginal cost (w_L / f_L)
-  no plan, y, (empty)
+OUTPUT_CSV rows: what, prices (w_L;w_C), output, values (';'-separated):
+  parameters, (empty), (empty), a0;a1;a2;B11;B12;B22
+  plan, prices, y, L;C;marginal cost (w_L / f_L)
+  no plan, prices, y, (empty)
 Run with Debian's /usr/bin/python3. Exits with 77 (the CTest skip code) when statsmodels or scipy
 cannot be imported, leaving no OUTPUT_CSV behind.
 """
@@ -29,9 +30,10 @@ import sys
 
 import reference_script  # this folder: command line, skip code, data readers, writing the figures
 
-PRICES = (2.0, 3.0)
-# Below about 144 (the output at the stationary point of ln f) the tangency path has not begun.
-OUTPUTS = [100.0, 120.0, 140.0, 150.0, 170.0, 200.0, 230.0, 260.0]
+# (prices (w_L, w_C), outputs). At (2, 3) the walk finds no tangency below an output of about 144;
+# at (1, 5) no ray of equal spending meets the wedge, and the plans lie next to its edge (e_L small).
+CASES = [((2.0, 3.0), [100.0, 120.0, 140.0, 150.0, 170.0, 200.0, 230.0, 260.0]),
+         ((1.0, 5.0), [160.0, 240.0, 320.0])]
 SLSQP_AGREEMENT = 1e-6
 
 
@@ -58,12 +60,13 @@ class Translog:
         root = self.np.sqrt(self.np.where(discriminant > 0, discriminant, self.np.nan))
         return (root - linear) / b11
 
-    def tangency_gap(self, c, log_level):
+    def tangency_gap(self, c, log_level, prices):
         l = self.log_labour_on_isoquant(c, log_level)
         e = self.a[:, None] + self.b @ self.np.vstack([l, c])
         positive = (e[0] > 0) & (e[1] > 0)
-        gap = (math.log(PRICES[0]) + l + self.np.log(self.np.abs(e[1]))
-               - math.log(PRICES[1]) - c - self.np.log(self.np.abs(e[0])))
+        with self.np.errstate(divide="ignore"):
+            gap = (math.log(prices[0]) + l + self.np.log(self.np.abs(e[1]))
+                   - math.log(prices[1]) - c - self.np.log(self.np.abs(e[0])))
         return self.np.where(positive, gap, self.np.nan)
 
     def isoquant_convex(self, z):
@@ -77,24 +80,48 @@ class Translog:
                 + second[1, 1] * first[0] ** 2) < 0
 
 
-def plans_on_isoquant(np, optimize, technology, level):
-    """The convex tangencies z = (ln L, ln C) on the isoquant of output `level`."""
+def finite_edge(np, gap, inside, outside):
+    """The point next to where gap stops being finite between `inside` (finite) and `outside`, by
+    bisection to rounding level."""
+    for _ in range(200):
+        middle = 0.5 * (inside + outside)
+        if middle in (inside, outside):
+            break
+        if np.isfinite(gap(middle)):
+            inside = middle
+        else:
+            outside = middle
+    return inside
+
+
+def plans_on_isoquant(np, optimize, technology, level, prices):
+    """The convex tangencies z = (ln L, ln C) on the isoquant of output `level`. Where the walk
+    leaves the wedge (an elasticity reaches 0, and the gap grows without bound) the end of the wedge
+    is found by bisection and taken as a grid point too, so a tangency next to it is not missed."""
     log_level = math.log(level)
+    gap = lambda v: float(technology.tangency_gap(np.array([v]), log_level, prices)[0])
     grid = np.arange(-5.0, 15.0, 1e-3)
-    gap = technology.tangency_gap(grid, log_level)
+    values = technology.tangency_gap(grid, log_level, prices)
+    finite = np.isfinite(values)
+    brackets = [(grid[i], grid[i + 1]) for i in np.flatnonzero(finite[:-1] & finite[1:] &
+                                                               (np.sign(values[:-1]) != np.sign(values[1:])))]
+    for i in np.flatnonzero(finite[:-1] != finite[1:]):
+        low, high = grid[i], grid[i + 1]
+        low, high = (low, finite_edge(np, gap, low, high)) if finite[i] else (finite_edge(np, gap, high, low), high)
+        if low != high and np.sign(gap(low)) != np.sign(gap(high)):
+            brackets.append((low, high))
     plans = []
-    for i in np.flatnonzero(np.isfinite(gap[:-1]) & np.isfinite(gap[1:]) & (np.sign(gap[:-1]) != np.sign(gap[1:]))):
-        c = optimize.brentq(lambda v: float(technology.tangency_gap(np.array([v]), log_level)[0]),
-                            grid[i], grid[i + 1], xtol=1e-15, rtol=4 * np.finfo(float).eps)
+    for low, high in brackets:
+        c = optimize.brentq(gap, low, high, xtol=1e-15, rtol=4 * np.finfo(float).eps)
         z = np.array([float(technology.log_labour_on_isoquant(np.array([c]), log_level)[0]), c])
         if technology.isoquant_convex(z):
             plans.append(z)
     return plans
 
 
-def slsqp_bundle(np, optimize, technology, level, start):
+def slsqp_bundle(np, optimize, technology, level, prices, start):
     """scipy's least cost on the isoquant among bundles with both elasticities non-negative."""
-    prices = np.array(PRICES)
+    prices = np.array(prices)
     scale = prices @ np.exp(start)
     result = optimize.minimize(
         lambda z: prices @ np.exp(z) / scale, start, method="SLSQP",
@@ -102,6 +129,22 @@ def slsqp_bundle(np, optimize, technology, level, start):
                      {"type": "ineq", "fun": technology.elasticities}],
         options={"ftol": 1e-15, "maxiter": 1000})
     return np.exp(result.x)
+
+
+def plan_row(np, optimize, technology, level, prices, start):
+    """(what, prices, output, values) of one output at one pair of prices."""
+    plans = plans_on_isoquant(np, optimize, technology, level, prices)
+    price_text = ";".join(map(repr, prices))
+    if len(plans) > 1:
+        raise RuntimeError("output %r: %d convex tangencies; the check expects at most one" % (level, len(plans)))
+    if not plans:
+        return "no plan", price_text, repr(level), ""
+    bundle = np.exp(plans[0])
+    confirmed = slsqp_bundle(np, optimize, technology, level, prices, start)
+    if np.max(np.abs(confirmed / bundle - 1)) > SLSQP_AGREEMENT:
+        raise RuntimeError("output %r: SLSQP found %r, the isoquant walk %r" % (level, confirmed, bundle))
+    marginal_product = technology.elasticities(plans[0])[0] * level / bundle[0]
+    return "plan", price_text, repr(level), ";".join(repr(float(v)) for v in (*bundle, prices[0] / marginal_product))
 
 
 def main():
@@ -118,22 +161,11 @@ def main():
     technology = Translog(np, parameters)
     _, log_labour, log_capital = reference_script.cobb_douglas_1928_logs(data_dir, np)
     start = np.array([log_labour.mean(), log_capital.mean()])
-    rows = [["parameters", "", ";".join(repr(float(v)) for v in parameters)]]
-    for level in OUTPUTS:
-        plans = plans_on_isoquant(np, optimize, technology, level)
-        if len(plans) > 1:
-            raise RuntimeError("output %r: %d convex tangencies; the check expects at most one" % (level, len(plans)))
-        if not plans:
-            rows.append(["no plan", repr(level), ""])
-            continue
-        z = plans[0]
-        bundle = np.exp(z)
-        confirmed = slsqp_bundle(np, optimize, technology, level, start)
-        if np.max(np.abs(confirmed / bundle - 1)) > SLSQP_AGREEMENT:
-            raise RuntimeError("output %r: SLSQP found %r, the isoquant walk %r" % (level, confirmed, bundle))
-        marginal_product = technology.elasticities(z)[0] * level / bundle[0]
-        rows.append(["plan", repr(level), ";".join(repr(float(v)) for v in (*bundle, PRICES[0] / marginal_product))])
-    reference_script.write_figures(output_path, ["what", "output", "values"], rows)
+    rows = [["parameters", "", "", ";".join(repr(float(v)) for v in parameters)]]
+    for prices, outputs in CASES:
+        for level in outputs:
+            rows.append([*plan_row(np, optimize, technology, level, prices, start)])
+    reference_script.write_figures(output_path, ["what", "prices", "output", "values"], rows)
     print(f"scipy {scipy.__version__}: {len(rows) - 1} translog least-cost answers written to {output_path}")
     return 0
 

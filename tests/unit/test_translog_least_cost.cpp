@@ -8,9 +8,11 @@
 // translog_least_cost: each answer against its own conditions, computed here from the technology's
 // marginal products and second partials (not from the solver's code): output = target, wᵢ/fᵢ = λ
 // for both inputs, and an isoquant bowed towards the origin, f_LL·f_C² − 2f_LC·f_L·f_C + f_CC·f_L² < 0.
-// translog_least_cost_cross_check: the bundles against statsmodels + scipy, recomputed at test
-// time by tests/reference/translog_least_cost_check.py (test translog_least_cost_figures), whose
-// file the environment variable ISOQUANT_TRANSLOG_LEAST_COST_FIGURES names; skipped without it.
+// translog_least_cost_cross_check: the bundles, marginal costs and "no plan" verdicts against
+// statsmodels + scipy, recomputed at test time by tests/reference/translog_least_cost_check.py
+// (test translog_least_cost_figures), at prices (2, 3) and also (1, 5), where no equal-spending
+// ray meets the wedge at all; the file is named by the environment variable
+// ISOQUANT_TRANSLOG_LEAST_COST_FIGURES, and the case is skipped without it.
 #include "isoquant/math/decisions/numerical_decisions.hpp"
 #include "isoquant/math/forms/translog.hpp"
 #include "isoquant/sheet/functions/decision_functions.hpp"
@@ -161,10 +163,10 @@ BOOST_AUTO_TEST_CASE(plans_agree_with_scipy, *boost::unit_test::precondition(fig
 {
     const auto rows = isoquant::testing::readReferenceRows(
         isoquant::testing::referenceFiguresPath("ISOQUANT_TRANSLOG_LEAST_COST_FIGURES"));
-    BOOST_TEST_REQUIRE(rows.size() == 9u);
+    BOOST_TEST_REQUIRE(rows.size() == 12u);
     BOOST_TEST_REQUIRE(rows[0][0] == "parameters");
     // statsmodels' coefficients: a0, a_L, a_C, B_LL, B_LC, B_CC
-    const Eigen::VectorXd coefficients = numbersOf(rows[0][2]);
+    const Eigen::VectorXd coefficients = numbersOf(rows[0][3]);
     BOOST_TEST_REQUIRE(coefficients.size() == 6);
     Eigen::Matrix2d interactions;
     interactions << coefficients(3), coefficients(4), coefficients(4), coefficients(5);
@@ -179,27 +181,29 @@ BOOST_AUTO_TEST_CASE(plans_agree_with_scipy, *boost::unit_test::precondition(fig
             BOOST_TEST(closeTo(fitted.interactions(i, j), interactions(i, j), coefficientTolerance));
     }
 
-    const auto priceRow = isoquant::testing::numberRange(prices.transpose());
     int plans = 0;
     for (std::size_t r = 1; r < rows.size(); ++r) {
-        const double target = std::stod(rows[r][1]);
+        const Eigen::VectorXd w = numbersOf(rows[r][1]);
+        const auto priceRow = isoquant::testing::numberRange(w.transpose());
+        const double target = std::stod(rows[r][2]);
+        const std::string where = "prices " + rows[r][1] + ", output " + rows[r][2];
         const bool scipyHasPlan = rows[r][0] == "plan";
         for (const isoquant::Technology* technology : {static_cast<const isoquant::Technology*>(&statsmodelsTranslog),
                                                        &technologyOf(model)}) {
-            const auto plan = isoquant::solveLeastCost(*technology, target, prices);
-            BOOST_TEST(plan.solved() == scipyHasPlan, "output " << target << ": " << plan.status.reason);
+            const auto plan = isoquant::solveLeastCost(*technology, target, w);
+            BOOST_TEST(plan.solved() == scipyHasPlan, where << ": " << plan.status.reason);
             if (!plan.solved() || !scipyHasPlan) continue;
-            const Eigen::VectorXd scipy = numbersOf(rows[r][2]); // L, C, marginal cost
+            const Eigen::VectorXd scipy = numbersOf(rows[r][3]); // L, C, marginal cost
             for (Eigen::Index i = 0; i < 2; ++i)
-                BOOST_TEST(closeTo(plan.inputs(i), scipy(i), scipyTolerance), "output " << target << ", input " << i + 1);
-            BOOST_TEST(closeTo(plan.marginalCost, scipy(2), scipyTolerance), "output " << target);
-            const Eigen::VectorXd budget = rowValues(isoquant::budgetRow(model, prices.dot(scipy.head(2)), priceRow));
+                BOOST_TEST(closeTo(plan.inputs(i), scipy(i), scipyTolerance), where << ", input " << i + 1);
+            BOOST_TEST(closeTo(plan.marginalCost, scipy(2), scipyTolerance), where);
+            const Eigen::VectorXd budget = rowValues(isoquant::budgetRow(model, w.dot(scipy.head(2)), priceRow));
             for (Eigen::Index i = 0; i < 2; ++i)
-                BOOST_TEST(closeTo(budget(i), scipy(i), scipyTolerance), "budget for output " << target << ", input " << i + 1);
+                BOOST_TEST(closeTo(budget(i), scipy(i), scipyTolerance), "budget for " << where << ", input " << i + 1);
         }
         plans += scipyHasPlan ? 1 : 0;
     }
-    BOOST_TEST(plans == 5);
+    BOOST_TEST(plans == 8);
 }
 
 BOOST_AUTO_TEST_SUITE_END()

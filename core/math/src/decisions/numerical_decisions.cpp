@@ -193,10 +193,11 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
     // The start may lie outside the tangency's basin, or off the level altogether; the path from
     // a point where every elasticity is positive can still reach it (tangency_continuation.cpp).
     // Its answer passes the same checks; otherwise the first attempt's reason stands.
-    if (const auto continued = tangencyByContinuation(technology, prices, closing, logLevel, options)) {
-        ProductionPlan found = checkedTangency(technology, prices, closing, *continued, options);
-        if (found.solved()) return found;
-    }
+    const auto optimal = [&](const Eigen::VectorXd& root) {
+        return checkedTangency(technology, prices, closing, root, options).solved();
+    };
+    if (const auto continued = tangencyByContinuation(technology, prices, closing, logLevel, options, optimal))
+        return checkedTangency(technology, prices, closing, *continued, options);
     return plan;
 }
 

@@ -11,6 +11,7 @@
 #include <unsupported/Eigen/LevenbergMarquardt>
 
 #include <cmath>
+#include <functional>
 #include <optional>
 
 namespace isoquant::decisions_detail {
@@ -101,10 +102,12 @@ double solveSystem(System& system, Eigen::VectorXd& start, const NumericalSolveO
     return residuals.cwiseAbs().maxCoeff();
 }
 
-// u = (ln x, ln μ) solving the tangency system at `logLevel`, reached from a point where every
-// elasticity is positive by continuation in the prices and the level; empty where the path breaks.
+// u = (ln x, ln μ) solving the tangency system at `logLevel` that `acceptable` takes, reached from
+// a point where every elasticity is positive by continuation in the prices and the level; empty
+// where no path tried ends in one.
 std::optional<Eigen::VectorXd> tangencyByContinuation(const Technology& technology, const Eigen::VectorXd& prices,
                                                       Closing closing, double logLevel,
-                                                      const NumericalSolveOptions& options);
+                                                      const NumericalSolveOptions& options,
+                                                      const std::function<bool(const Eigen::VectorXd&)>& acceptable);
 
 } // namespace isoquant::decisions_detail
