@@ -33,16 +33,18 @@ constexpr int raySearchSteps = 80;
 // any price between e⁻⁹⁰ and e⁹⁰ (a share is at least 1/20·1/(k − 1)).
 constexpr double rayLogRange = logBound - 100;
 
+Eigen::ArrayXd elasticitiesAt(const Technology& technology, const Eigen::VectorXd& x)
+{
+    Eigen::ArrayXd elasticities(x.size());
+    for (Eigen::Index i = 0; i < x.size(); ++i) elasticities(i) = technology.elasticity(x, i);
+    return elasticities;
+}
+
 // minᵢ eᵢ(x), or −∞ where an elasticity is not finite.
 double smallestElasticity(const Technology& technology, const Eigen::VectorXd& x)
 {
-    double smallest = std::numeric_limits<double>::infinity();
-    for (Eigen::Index i = 0; i < x.size(); ++i) {
-        const double elasticity = technology.elasticity(x, i);
-        if (!std::isfinite(elasticity)) return -std::numeric_limits<double>::infinity();
-        smallest = std::min(smallest, elasticity);
-    }
-    return smallest;
+    const Eigen::ArrayXd elasticities = elasticitiesAt(technology, x);
+    return elasticities.allFinite() ? elasticities.minCoeff() : -std::numeric_limits<double>::infinity();
 }
 
 // The bundle on the ray ln x = s + direction where the smallest elasticity is largest, by
@@ -74,13 +76,6 @@ std::optional<Eigen::VectorXd> widestPointOnRay(const Technology& technology, co
     const Eigen::VectorXd best = bundleAt(0.5 * (low + high));
     if (!(smallestElasticity(technology, best) > 0) || !std::isfinite(technology.logOutput(best))) return std::nullopt;
     return best;
-}
-
-Eigen::ArrayXd elasticitiesAt(const Technology& technology, const Eigen::VectorXd& x)
-{
-    Eigen::ArrayXd elasticities(x.size());
-    for (Eigen::Index i = 0; i < x.size(); ++i) elasticities(i) = technology.elasticity(x, i);
-    return elasticities;
 }
 
 // Points x₀ to start the path from, the nearest first: the widest point on the ray of each
