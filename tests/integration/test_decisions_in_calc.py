@@ -9,7 +9,8 @@ tests/integration/README.md):
 One office with the extension serves the whole module. The data are invented: a bakery whose
 output (loaves a day) depends on baker hours and oven hours, with typed Cobb-Douglas models of
 increasing (0.7, 0.5), decreasing (0.45, 0.35) and constant (0.6, 0.4) returns, the scenario of
-the README's worked examples.
+the README's worked examples. TranslogLeastCostTest fits the published data of Cobb & Douglas (1928)
+(tests/data/cobb_douglas_1928.csv).
 
 Sources of the expected figures, named beside each check:
 - "Cobb-Douglas calculus": fi = bi*Y/xi, fii = bi*(bi - 1)*Y/xi^2, fij = bi*bj*Y/(xi*xj).
@@ -19,6 +20,8 @@ Sources of the expected figures, named beside each check:
 - "common practice, no source": Cobb-Douglas budget shares b_i/sum(b); sigma = 1 for Cobb-Douglas;
   exponents 0.7 and 0.5 give diminishing returns to each input and increasing returns to scale.
 - "first-order conditions": p*f_i = w_i at the profit maximum; MRTS = w1/w2 at the least-cost bundle.
+- "statsmodels + scipy": the translog plans of Cobb & Douglas (1928) (tests/data), recomputed at test
+  time by tests/reference/translog_least_cost_check.py (TranslogLeastCostTest).
 Formula recomputations agree to 1e-12 relative (the same powers and products in another order);
 isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the issue's rule).
 - Error messages: the wording in core/sheet/src/arguments/decision_arguments.cpp, decision_cell_functions.cpp,
@@ -26,14 +29,17 @@ isoquant points give their level back through PRODOUTPUT to 1e-9 relative (the i
 """
 
 import math
+import os
+import sys
 import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_formula, set_values
 
-from .support import CalcTestCase, module_session
+from .support import DATA_DIR, REPO, CalcTestCase, cobb_douglas_rows, module_session, skip_missing_reference
 
 FORMULA_TOLERANCE = 1e-12
 ISOQUANT_TOLERANCE = 1e-9
+TRANSLOG_PLAN_TOLERANCE = 1e-7
 
 # (A, (bakers, ovens)) of the three typed models
 GROWING = (12.0, (0.7, 0.5))      # A1:B4: the README's bakery
@@ -227,6 +233,60 @@ class TranslogIsoquantTest(CalcTestCase):
         # The root is narrowed to a few ulps of ln x2: 1e-12 relative.
         self.assert_relative(get_cell(CALC.sheet, "D100"), expected, 1e-12, "x2 on the translog isoquant")
         self.assert_relative(get_cell(CALC.sheet, "D101"), 31.50039, ISOQUANT_TOLERANCE, "PRODOUTPUT of that point")
+
+
+class TranslogLeastCostTest(CalcTestCase):
+    """PRODLEASTCOST, PRODCOST and PRODBUDGET on PRODFIT "translog" of Cobb & Douglas (1928) at prices
+    (2, 3), where both marginal products are positive only in a narrow wedge that the equal-spending
+    ray misses above an output of about 155. Expected: the isoquant walk of
+    tests/reference/translog_least_cost_check.py on the statsmodels OLS coefficients (scipy brentq,
+    confirmed by SLSQP), 1e-7 relative (the core's acceptance rule; it agrees to about 1e-11)."""
+
+    @classmethod
+    def setUpClass(cls):
+        cls.sheet = CALC.new_sheet("Translog plans")
+        set_values(cls.sheet, "A1", [["P", "L", "C"]] + cobb_douglas_rows())
+        set_array_formula(cls.sheet, "F1:L23", '=PRODFIT(A1:A25;B1:C25;"translog")')
+        set_values(cls.sheet, "N1", [[2.0, 3.0]])
+        set_array_formula(cls.sheet, "N3:O3", "=PRODLEASTCOST(F1:L23;170;N1:O1)")
+        set_formula(cls.sheet, "N4", "=PRODCOST(F1:L23;170;N1:O1)")
+        set_formula(cls.sheet, "N5", '=PRODCOST(F1:L23;170;N1:O1;"marginal")')
+        set_array_formula(cls.sheet, "N6:P6", "=PRODBUDGET(F1:L23;N4;N1:O1)")
+        set_array_formula(cls.sheet, "N8:O8", "=PRODLEASTCOST(F1:L23;120;N1:O1)")
+        recalc(CALC.doc)
+
+    def test_plan_at_output_170(self):
+        try:
+            import numpy as np
+            import statsmodels.api as sm
+            from scipy import optimize
+        except ImportError as missing:
+            return skip_missing_reference(self, "python3-numpy/scipy/statsmodels not importable (%s)" % missing)
+        sys.path.insert(0, os.path.join(REPO, "tests", "reference"))
+        import reference_script
+        import translog_least_cost_check as walk
+        parameters = np.asarray(reference_script.translog_1928_fits(DATA_DIR, np, sm)[0][1].params)
+        technology = walk.Translog(np, parameters)
+        plans = walk.plans_on_isoquant(np, optimize, technology, 170.0, (2.0, 3.0))
+        self.assertEqual(len(plans), 1)
+        bundle = [math.exp(v) for v in plans[0]]
+        marginal_cost = 2.0 / (technology.elasticities(plans[0])[0] * 170.0 / bundle[0])
+        plan, budget = get_range(self.sheet, "N3:O3")[0], get_range(self.sheet, "N6:P6")[0]
+        for i, name in enumerate(("L", "C")):
+            self.assert_relative(plan[i], bundle[i], TRANSLOG_PLAN_TOLERANCE, "PRODLEASTCOST " + name)
+            self.assert_relative(budget[i], bundle[i], TRANSLOG_PLAN_TOLERANCE, "PRODBUDGET " + name)
+        self.assert_relative(budget[2], 170.0, TRANSLOG_PLAN_TOLERANCE, "PRODBUDGET output")
+        self.assert_relative(get_cell(self.sheet, "N4"), 2 * bundle[0] + 3 * bundle[1], TRANSLOG_PLAN_TOLERANCE,
+                             "PRODCOST total")
+        self.assert_relative(get_cell(self.sheet, "N5"), marginal_cost, TRANSLOG_PLAN_TOLERANCE, "PRODCOST marginal")
+        self.assertEqual(walk.plans_on_isoquant(np, optimize, technology, 120.0, (2.0, 3.0)), [])
+
+    def test_no_plan_at_output_120_is_said_so(self):
+        # The walk finds no tangency below about 144 (checked in test_plan_at_output_170).
+        result = get_range(self.sheet, "N8:O8")
+        self.assertTrue(str(result[0][0]).startswith("Did not converge: the numerical search for the least-cost "
+                                                     "bundle"), result[0][0])
+        self.assertEqual([v for v in result[0] if isinstance(v, float)], [], "numbers beside the message")
 
 
 def error(text):

@@ -7,8 +7,7 @@
 #include "isoquant/math/forms/local_shape.hpp"
 #include "isoquant/math/numerics/log_sum.hpp"
 #include "isoquant/math/messages/text.hpp"
-
-#include <unsupported/Eigen/LevenbergMarquardt>
+#include "tangency_system.hpp"
 
 #include <cmath>
 #include <optional>
@@ -17,74 +16,12 @@ namespace isoquant {
 
 namespace {
 
-// Returned for a trial point outside the doubles: Levenberg–Marquardt then rejects the step and
-// shortens its trust region, instead of stopping.
-constexpr double offDomainResidual = 1e50;
-// |ln x| beyond this leaves the ordinary doubles (e^700 ≈ 1e304).
-constexpr double logBound = 700;
-
-enum class Closing { output, spending };
-
-// The tangency system of the least-cost and budget problems (numerical_decisions.hpp).
-struct TangencySystem : Eigen::DenseFunctor<double> {
-    TangencySystem(const Technology& technology, const Eigen::VectorXd& prices, Closing closing, double logLevel)
-        : Eigen::DenseFunctor<double>(static_cast<int>(prices.size()) + 1, static_cast<int>(prices.size()) + 1),
-          technology(technology), logPrices(exactLog(prices.array())), closing(closing), logLevel(logLevel)
-    {
-    }
-
-    const Technology& technology;
-    Eigen::ArrayXd logPrices;
-    Closing closing;
-    double logLevel;
-
-    Eigen::Index k() const { return logPrices.size(); }
-
-    bool inDomain(const Eigen::VectorXd& u) const
-    {
-        return u.allFinite() && u.head(k()).cwiseAbs().maxCoeff() <= logBound && std::fabs(u(k())) <= 2 * logBound;
-    }
-
-    // wᵢxᵢ/μ
-    Eigen::ArrayXd spendingOverMu(const Eigen::VectorXd& u) const
-    {
-        return exactExp(u.head(k()).array() + logPrices - u(k()));
-    }
-
-    int operator()(const Eigen::VectorXd& u, Eigen::VectorXd& residuals) const
-    {
-        residuals.setConstant(offDomainResidual);
-        if (!inDomain(u)) return 0;
-        const Eigen::VectorXd x = u.head(k()).array().exp();
-        for (Eigen::Index i = 0; i < k(); ++i) residuals(i) = spendingOverMu(u)(i) - technology.elasticity(x, i);
-        residuals(k()) = closing == Closing::output ? technology.logOutput(x) - logLevel
-                                                    : logSumExp(u.head(k()).array() + logPrices) - logLevel;
-        if (!residuals.allFinite()) residuals.setConstant(offDomainResidual);
-        return 0;
-    }
-
-    // ∂(wᵢxᵢ/μ − eᵢ)/∂ln xⱼ = δᵢⱼ·wᵢxᵢ/μ − (δᵢⱼeᵢ + Sᵢⱼ − eᵢeⱼ);  ∂/∂ln μ = −wᵢxᵢ/μ;
-    // ∂ln f/∂ln xⱼ = eⱼ;  ∂ln Σwx/∂ln xⱼ = wⱼxⱼ/Σwx.
-    int df(const Eigen::VectorXd& u, Eigen::MatrixXd& jacobian) const
-    {
-        const Eigen::VectorXd x = u.head(k()).array().exp();
-        const LocalShape shape = localShape(technology, x);
-        if (!isFinite(shape)) return -1;
-        const Eigen::VectorXd& e = shape.elasticities;
-        const Eigen::VectorXd spending = spendingOverMu(u).matrix();
-        jacobian.setZero(k() + 1, k() + 1);
-        jacobian.topLeftCorner(k(), k()) = Eigen::MatrixXd(spending.asDiagonal()) -
-                                           (Eigen::MatrixXd(e.asDiagonal()) + shape.scaledHessian - e * e.transpose());
-        jacobian.col(k()).head(k()) = -spending;
-        if (closing == Closing::output) {
-            jacobian.row(k()).head(k()) = e.transpose();
-        } else {
-            const Eigen::ArrayXd logSpending = u.head(k()).array() + logPrices;
-            jacobian.row(k()).head(k()) = (logSpending - logSumExp(logSpending)).exp().matrix().transpose();
-        }
-        return jacobian.allFinite() ? 0 : -1;
-    }
-};
+using decisions_detail::Closing;
+using decisions_detail::logBound;
+using decisions_detail::offDomainResidual;
+using decisions_detail::solveSystem;
+using decisions_detail::tangencyByContinuation;
+using decisions_detail::TangencySystem;
 
 // The profit system p·fᵢ(x)/wᵢ − 1 = 0 in z = ln x; ∂/∂ln xⱼ = p·fᵢⱼ·xⱼ/wᵢ.
 struct ProfitSystem : Eigen::DenseFunctor<double> {
@@ -120,23 +57,6 @@ struct ProfitSystem : Eigen::DenseFunctor<double> {
     }
 };
 
-// Runs Levenberg–Marquardt from `start` (overwritten with the answer); returns the largest
-// |residual| there.
-template <typename System>
-double solveSystem(System& system, Eigen::VectorXd& start, const NumericalSolveOptions& options)
-{
-    Eigen::LevenbergMarquardt<System> solver(system);
-    solver.setMaxfev(options.maxEvaluations);
-    // Stop on the step size or the reduction only when they reach rounding level; acceptance is
-    // judged below on the residuals themselves.
-    solver.setXtol(1e-14);
-    solver.setFtol(1e-14);
-    solver.minimize(start);
-    Eigen::VectorXd residuals(system.values());
-    system(start, residuals);
-    return residuals.cwiseAbs().maxCoeff();
-}
-
 // The Cobb-Douglas with f's value and elasticities at x, or empty where an elasticity is not positive.
 std::optional<CobbDouglas> localCobbDouglas(const Technology& technology, const Eigen::VectorXd& x)
 {
@@ -153,8 +73,10 @@ bool usable(const Eigen::VectorXd& x)
 }
 
 // Rounds of: the local Cobb-Douglas answer, then onto the level along the ray (least cost only);
-// a round is kept only when it improves `worse` (a number to lower: cost, −output, −profit), so
-// that a poor approximation (a CES far from σ = 1, say) cannot carry the start away.
+// a round is kept only when it improves `worse` (a number to lower: cost, −output, −profit) and
+// lands where every elasticity is positive, so that a poor approximation (a CES far from σ = 1, a
+// translog whose elasticities change sign) cannot carry the start away. Outside that region no
+// bundle is optimal, and there an isoquant may bend back to ever cheaper points.
 template <typename CobbDouglasAnswer, typename Objective>
 Eigen::VectorXd cobbDouglasStart(const Technology& technology, Eigen::VectorXd x, const NumericalSolveOptions& options,
                                  std::optional<double> logTarget, CobbDouglasAnswer answer, Objective worse)
@@ -172,7 +94,9 @@ Eigen::VectorXd cobbDouglasStart(const Technology& technology, Eigen::VectorXd x
         if (!local) break;
         // Empty when the local approximation has no answer (e.g. ν ≥ 1 for profit).
         std::optional<Eigen::VectorXd> next = answer(*local);
-        if (!next || !usable(*next) || !ontoLevel(*next) || !(worse(*next) < worse(x))) break;
+        if (!next || !usable(*next) || !ontoLevel(*next) || !(worse(*next) < worse(x)) ||
+            !localCobbDouglas(technology, *next))
+            break;
         x = *next;
     }
     return x;
@@ -211,15 +135,16 @@ ProductionPlan planAt(const Technology& technology, const Eigen::VectorXd& x, co
     return plan;
 }
 
-ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd& prices, Closing closing,
-                             double level, const NumericalSolveOptions& options)
+// u = (ln x, ln μ) to start the tangency system from: equal spending on every input, then the
+// local Cobb-Douglas rounds; μ = C/ν at the answer (Σ wᵢxᵢ = μ·Σ eᵢ), so the start takes the local ν.
+Eigen::VectorXd tangencyStart(const Technology& technology, const Eigen::VectorXd& prices, Closing closing,
+                              double level, const NumericalSolveOptions& options)
 {
     const Eigen::Index k = prices.size();
-    const double logLevel = std::log(level);
-    // Equal spending on every input, then the local Cobb-Douglas rounds.
     Eigen::VectorXd x = prices.cwiseInverse();
     if (closing == Closing::spending) x *= level / static_cast<double>(k);
-    x = cobbDouglasStart(technology, x, options, closing == Closing::output ? std::optional<double>(logLevel) : std::nullopt,
+    const auto logTarget = closing == Closing::output ? std::optional<double>(std::log(level)) : std::nullopt;
+    x = cobbDouglasStart(technology, x, options, logTarget,
                          [&](const CobbDouglas& local) -> std::optional<Eigen::VectorXd> {
                              const HomogeneousCost cost = cobbDouglasCost(local, prices);
                              const ProductionPlan plan =
@@ -230,18 +155,19 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
                          [&](const Eigen::VectorXd& bundle) {
                              return closing == Closing::output ? prices.dot(bundle) : -technology.logOutput(bundle);
                          });
-    // μ = C/ν at the answer (Σ wᵢxᵢ = μ·Σ eᵢ); the start takes the local ν.
     Eigen::VectorXd u(k + 1);
     u.head(k) = exactLog(x.array());
     u(k) = std::log(prices.dot(x) / technology.scaleElasticity(x));
     if (!std::isfinite(u(k))) u(k) = std::log(prices.dot(x));
+    return u;
+}
 
-    TangencySystem system(technology, prices, closing, logLevel);
-    const std::string problem = closing == Closing::output ? "the least-cost bundle" : "the best use of the budget";
-    const double residual = solveSystem(system, u, options);
-    if (!(residual <= options.residualTolerance)) return noPlan(notConverged(problem, residual));
-
-    x = u.head(k).array().exp();
+// The plan at a root u of the tangency system, or noPlan where it fails the second-order condition.
+ProductionPlan checkedTangency(const Technology& technology, const Eigen::VectorXd& prices, Closing closing,
+                               const Eigen::VectorXd& u, const NumericalSolveOptions& options)
+{
+    const Eigen::Index k = prices.size();
+    const Eigen::VectorXd x = u.head(k).array().exp();
     const LocalShape shape = localShape(technology, x);
     if (!isFinite(shape) || !negativeDefinite(onTangentPlane(shape), shape.scaledHessian.cwiseAbs().maxCoeff(), options))
         return noPlan("No " + std::string(closing == Closing::output ? "least-cost bundle" : "best use of the budget") +
@@ -250,6 +176,28 @@ ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd
     ProductionPlan plan = planAt(technology, x, prices);
     // λ = μ/y
     plan.marginalCost = std::exp(u(k)) / plan.output;
+    return plan;
+}
+
+ProductionPlan solveTangency(const Technology& technology, const Eigen::VectorXd& prices, Closing closing,
+                             double level, const NumericalSolveOptions& options)
+{
+    const double logLevel = std::log(level);
+    Eigen::VectorXd u = tangencyStart(technology, prices, closing, level, options);
+    TangencySystem system(technology, prices, closing, logLevel);
+    const double residual = solveSystem(system, u, options);
+    const std::string problem = closing == Closing::output ? "the least-cost bundle" : "the best use of the budget";
+    ProductionPlan plan = residual <= options.residualTolerance ? checkedTangency(technology, prices, closing, u, options)
+                                                                : noPlan(notConverged(problem, residual));
+    if (plan.solved()) return plan;
+    // The start may lie outside the tangency's basin, or off the level altogether; the path from
+    // a point where every elasticity is positive can still reach it (tangency_continuation.cpp).
+    // Its answer passes the same checks; otherwise the first attempt's reason stands.
+    const auto optimal = [&](const Eigen::VectorXd& root) {
+        return checkedTangency(technology, prices, closing, root, options).solved();
+    };
+    if (const auto continued = tangencyByContinuation(technology, prices, closing, logLevel, options, optimal))
+        return checkedTangency(technology, prices, closing, *continued, options);
     return plan;
 }
 

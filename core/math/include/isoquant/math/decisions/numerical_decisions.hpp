@@ -11,7 +11,10 @@
 // The system is solved by Eigen's Levenberg–Marquardt with its analytic Jacobian (from the
 // Hessian), started from the closed-form answer of the Cobb-Douglas that matches f and its
 // elasticities at the current point, repeated a few rounds (exact in one round when f is itself
-// Cobb-Douglas).
+// Cobb-Douglas; a round is kept only where every elasticity stays positive). When that fails, the
+// least-cost and budget solves follow a path in prices and level from a bundle where every
+// elasticity is positive (src/decisions/tangency_continuation.cpp); either answer must pass the
+// same checks.
 #pragma once
 
 #include "isoquant/math/decisions/production_plan.hpp"
