@@ -123,7 +123,8 @@ std::string notConverged(const std::string& problem, double residual)
 {
     return "Did not converge: the numerical search for " + problem +
            " stopped before its conditions held (largest error " + formatNumber(residual) +
-           "); the prices or the level may lie far from the data the model was fitted on";
+           "); there may be no such plan at these prices and this level (a form like the translog has "
+           "one only where every input still adds output), or they lie far from the data the model was fitted on";
 }
 
 ProductionPlan planAt(const Technology& technology, const Eigen::VectorXd& x, const Eigen::VectorXd& prices)
