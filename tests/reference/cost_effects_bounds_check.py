@@ -8,7 +8,9 @@ Data: rice_farms_panel.csv (Feng and Horrace 2012, as in plm 2.6 RiceFarms; test
 cost, output and prices as in cost_check.py; groups = farm (id), periods = the farm's season 1 to 6,
 control size (cost_panel_check.py, whose model_fit builds the regression: a constant, the form's
 columns, the control, the trend season - 1, one dummy per farm after the first and, two-way, one
-per season after the first).
+per season after the first). Model "cd_fixed_unbalanced_cluster" drops the file's first DROPPED
+rows (as incomplete rows), so that the first farm keeps 3 rows and the weights n_g / n differ; the
+bounds are still taken at the data rows POINTS.
 
 The evaluators' constant under effects ("constant for predictions") is the row-weighted mean farm
 effect plus the control at its mean, plus lambda (6 - 1) with the trend, plus the last season's
@@ -41,7 +43,10 @@ EFFECTS_MODELS = {
     "cd_two_way_cluster": ("cobb-douglas", True, True, "two-way", False, "cluster"),
     "translog_fixed_trend": ("translog", False, True, "fixed", True, "classical"),
     "translog_fixed_trend_cluster": ("translog", True, True, "fixed", True, "cluster"),
+    "cd_fixed_unbalanced_cluster": ("cobb-douglas", True, True, "fixed", False, "cluster"),
 }
+UNBALANCED = "cd_fixed_unbalanced_cluster"  # on the file's rows after the first DROPPED
+DROPPED = 3  # the first farm keeps 3 of its 6 rows, so the farms' weights n_g / n differ
 LAST_SEASON_LESS_FIRST = 5.0
 
 
@@ -83,8 +88,14 @@ def main():
         return lambda quantity, value, index=0: rows.append(["rice_farms", model, quantity, index, repr(float(value))])
 
     for name, spec in EFFECTS_MODELS.items():
-        fit, used, theta_rows, trend_column, slopes, _ = cost_panel_check.model_fit(np, sm, spec, data, panel)
-        theta, covariance = shifted_parameters(np, spec, fit, used, theta_rows, trend_column, slopes, panel)
+        dropped = DROPPED if name == UNBALANCED else 0
+
+        def rows_of(columns):
+            return tuple(column[dropped:] for column in columns)
+
+        fit, used, theta_rows, trend_column, slopes, _ = cost_panel_check.model_fit(np, sm, spec, rows_of(data),
+                                                                                  rows_of(panel))
+        theta, covariance = shifted_parameters(np, spec, fit, used, theta_rows, trend_column, slopes, rows_of(panel))
         df = float(panel[0].max()) if spec[5] == "cluster" else fit.df_resid  # G − 1 under cluster errors
         put = putter(name)
         put("constant_for_predictions", theta[0])

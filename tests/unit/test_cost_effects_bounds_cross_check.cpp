@@ -2,7 +2,8 @@
 // covariance block's last row "constant for predictions" (the row-weighted mean farm effect, plus
 // the control at its mean, the trend to the latest season or the last season's effect), on the
 // rice-farm panel (Feng and Horrace 2012, as in plm 2.6 RiceFarms; groups = farm, periods = season,
-// control size) under fixed and two-way effects, classical and cluster errors, against
+// control size) under fixed and two-way effects, classical and cluster errors (and fixed effects on
+// an unbalanced panel, the first farm's first 3 rows dropped as incomplete rows), against
 // python3-statsmodels 0.13.5 OLS of the explicit dummy-variable cost regression with a numpy
 // complex-step gradient, recomputed at test time by tests/reference/cost_effects_bounds_check.py:
 // that constant and its standard error, and at three rows of the data the standard errors of total,
@@ -59,7 +60,9 @@ const std::map<std::string, ModelOptions> models{
     {"cd_two_way_cluster", {"cobb-douglas", true, "two-way", true, "cluster"}},
     {"translog_fixed_trend", {"translog", false, "fixed", true, "classical"}},
     {"translog_fixed_trend_cluster", {"translog", true, "fixed", true, "cluster"}},
+    {"cd_fixed_unbalanced_cluster", {"cobb-douglas", true, "fixed", false, "cluster"}},
 };
+constexpr std::size_t droppedRows = 3; // the unbalanced model's: the first farm keeps 3 of its 6 rows
 
 isoquant::ModelTable modelNamed(const std::string& name)
 {
@@ -70,6 +73,10 @@ isoquant::ModelTable modelNamed(const std::string& name)
     arguments.effects = std::string(options.effects);
     if (!options.control) arguments.controls = {};
     if (!options.trend) arguments.trend = {};
+    if (name == "cd_fixed_unbalanced_cluster") { // dropped as incomplete rows
+        for (std::size_t row = 1; row <= droppedRows; ++row) arguments.cost.setEmpty(row, 0); // under the header
+        arguments.incompleteRows = 1.0;
+    }
     return isoquant::ModelTable(isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));
 }
 
@@ -109,8 +116,8 @@ BOOST_AUTO_TEST_CASE(cost_bounds_under_effects_agree_with_statsmodels,
                    model << " " << quantity << " " << fields.at(3) << ": " << actual << " vs " << expected);
         ++checked;
     }
-    // 6 models × (the constant and its standard error + 3 rows × 6 bound figures).
-    BOOST_TEST(checked == 6u * (2u + 3u * 6u));
+    // 7 models × (the constant and its standard error + 3 rows × 6 bound figures).
+    BOOST_TEST(checked == 7u * (2u + 3u * 6u));
 }
 
 BOOST_AUTO_TEST_SUITE_END()
