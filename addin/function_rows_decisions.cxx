@@ -151,8 +151,9 @@ std::vector<FunctionInfo> costFitFunctions()
            "controls are allowed."},
           {argument::covariance,
            "TRUE to add below the table the estimated covariance matrix of the parameters (of the kind chosen "
-           "by errors), one row per parameter, so that PRODCOST's statistic gives bounds from this table; the "
-           "table is then max(7, p + 1) columns wide and 1 + p rows longer, p parameters (with inefficiency "
+           "by errors), one row per parameter, so that PRODCOST's statistic gives bounds from this table; with "
+           "controls, effects or a trend one more row, the constant for predictions. The "
+           "table is then max(7, q + 1) columns wide and 1 + q rows longer, q those rows (with inefficiency "
            "the inverse observed information; its header says likelihood and normal). FALSE or empty: no "
            "block."}}},
     };

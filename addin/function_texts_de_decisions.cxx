@@ -153,9 +153,10 @@ std::vector<TranslatedFunction> germanCostFitTexts()
                           "Panel-Optionen; Kontrollvariablen sind erlaubt."},
           {"Kovarianz", "WAHR, um unter der Tabelle die geschätzte Kovarianzmatrix der Parameter anzufügen (der unter "
                         "Standardfehler gewählten Art), eine Zeile je Parameter, damit die Statistik von PRODCOST "
-                        "Grenzen aus dieser Tabelle liefert; die Tabelle ist dann max(7, p + 1) Spalten breit und "
-                        "1 + p Zeilen länger, p Parameter (mit Ineffizienz die inverse beobachtete Information; ihre "
-                        "Kopfzeile sagt likelihood und normal). FALSCH oder leer: kein Block."}}},
+                        "Grenzen aus dieser Tabelle liefert; mit Kontrollvariablen, Effekten oder Trend eine Zeile "
+                        "mehr, die Konstante für Vorhersagen. Die Tabelle ist dann max(7, q + 1) Spalten breit und "
+                        "1 + q Zeilen länger, q diese Zeilen (mit Ineffizienz die inverse beobachtete Information; "
+                        "ihre Kopfzeile sagt likelihood und normal). FALSCH oder leer: kein Block."}}},
     };
 }
 

@@ -19,6 +19,11 @@ Sources of the expected figures, named beside each check:
   block's cells; bounds y* exp(-/+ t s) with scipy's t quantile refined by one Newton step
   (t_quantile). 1e-10 relative, as above.
 - Figures against python3-statsmodels: tests/unit/test_cost_scale_cross_check.cpp (cost_scale_check.py).
+- "statsmodels": python3-statsmodels OLS of the explicit dummy-variable cost regression under fixed
+  effects (ln(C/w3) on a constant, ln y, ln(w1/w3), ln(w2/w3) and one dummy per branch after the
+  first), recomputed here at test time: the standard error of total cost C·sqrt(g'Vg) with g the
+  gradient of ln C at the row-weighted mean branch effect, 1e-8 relative (two implementations of the
+  same least squares). More figures: tests/unit/test_cost_effects_bounds_cross_check.cpp.
 """
 
 import math
@@ -27,7 +32,7 @@ import unittest
 
 from isoquant_office import get_cell, get_range, recalc, set_array_formula, set_values
 
-from .support import module_session
+from .support import module_session, skip_missing_reference
 from .test_cost_in_calc import DATA, prepare
 from .test_cost_frontier_in_calc import DATA as DEPOTS
 
@@ -35,6 +40,11 @@ try:  # the t quantile; its check is skipped without scipy
     from scipy import stats
 except ImportError:
     stats = None
+try:  # the dummy-variable regression under effects
+    import numpy as np
+    import statsmodels.api as sm
+except ImportError:
+    np = sm = None
 
 CALC = module_session(prepare)
 setUpModule, tearDownModule = CALC.start, CALC.stop
@@ -200,6 +210,49 @@ class ShiftedConstantAndScaleTest(unittest.TestCase):
         self.assertEqual(get_cell(CALC.sheet, "GN4"),
                          'Error: what: "std. error" needs the model\'s covariance block; this cost model has none (typed '
                          'rows, or a PRODCOSTFIT table made without covariance TRUE)')
+
+BRANCHES = ["branch %d" % (row % 6 + 1) for row in range(len(DATA))]  # invented: 6 branches of 5 rows
+
+
+def statsmodels_total_cost_se(row):
+    """C·sqrt(g'Vg) by statsmodels OLS of the dummy-variable regression (classical errors), g = (1, ln y,
+    ln(w1/w3), ln(w2/w3), n_g/n of each branch after the first): ln C at the row-weighted mean effect."""
+    data = np.array(DATA)
+    log_prices = np.log(data[:, 2:])
+    groups = np.array([int(label.split()[1]) - 1 for label in BRANCHES])
+    columns = [np.ones(len(data)), np.log(data[:, 1])] + [log_prices[:, i] - log_prices[:, 2] for i in range(2)]
+    columns += [(groups == g).astype(float) for g in range(1, 6)]
+    fit = sm.OLS(np.log(data[:, 0]) - log_prices[:, 2], np.column_stack(columns)).fit()
+    y, w = DATA[row][1], np.log(DATA[row][2:])
+    gradient = np.concatenate([[1.0, math.log(y), w[0] - w[2], w[1] - w[2]],
+                               [np.mean(groups == g) for g in range(1, 6)]])
+    cost = math.exp(gradient @ fit.params + w[2])
+    return cost * math.sqrt(gradient @ fit.cov_params() @ gradient)
+
+
+class EffectsConstantTest(unittest.TestCase):
+
+    @classmethod
+    def setUpClass(cls):
+        set_values(CALC.sheet, "HA1", [["branch"]] + [[label] for label in BRANCHES])  # HA1:HA31
+        # 22 rows + groups, effects, within R2 and constant for predictions = 26; then 1 + q, q = 5 + 1.
+        set_array_formula(CALC.sheet, "HC1:HI33", '=PRODCOSTFIT(A1:A31;B1:B31;C1:E31;;;;;;HA1:HA31;"fixed";;;;TRUE())')
+        set_array_formula(CALC.sheet, "HK2:HK4", '=PRODCOST($HC$1:$HI$33;B2:B4;C2:E4;"total";"std. error")')
+        recalc(CALC.doc)
+
+    def test_the_block_ends_with_the_constant_for_predictions(self):
+        table = get_range(CALC.sheet, "HC1:HI33")
+        self.assertEqual(table[25][0], "constant for predictions")
+        self.assertEqual([row[0] for row in table[27:]], ["constant", "output", "labour", "machines", "energy",
+                                                          "constant for predictions"])
+
+    def test_total_cost_std_error_under_fixed_effects_agrees_with_statsmodels(self):
+        if sm is None:
+            skip_missing_reference(self, "python3-statsmodels/numpy not importable")
+        for row in range(3):
+            expected = statsmodels_total_cost_se(row)
+            self.assertAlmostEqual(get_cell(CALC.sheet, "HK%d" % (2 + row)) / expected, 1.0, delta=1e-8)  # statsmodels
+
 
 if __name__ == "__main__":
     unittest.main()

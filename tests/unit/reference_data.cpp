@@ -1,5 +1,7 @@
 #include "reference_data.hpp"
 
+#include "isoquant/sheet/functions/bound_functions.hpp"
+
 #include "cell_tables.hpp"
 #include "csv_table.hpp"
 #include "test_data.hpp"
@@ -110,6 +112,25 @@ CostFitArguments riceFarmCostPanelArguments()
     for (Eigen::Index row = 0; row < n; ++row) seasons(row, 0) = static_cast<double>(row % 6 + 1); // 6 rows a farm
     arguments.trend = numberRange(seasons, {"season"});
     return arguments;
+}
+
+CostPoint riceFarmCostPoint(std::size_t dataRow)
+{
+    static const CostFitArguments data = riceFarmCostArguments();
+    CostPoint point;
+    point.output.set(0, 0, data.output.at(dataRow + 1, 0)); // under the header
+    for (std::size_t i = 0; i < 3; ++i) point.prices.set(0, i, data.prices.at(dataRow + 1, i));
+    return point;
+}
+
+double riceFarmCostBound(const ModelTable& table, const std::string& quantity, std::size_t dataRow)
+{
+    const CostPoint point = riceFarmCostPoint(dataRow);
+    const bool lower = quantity == "bound_lower_total";
+    const std::string what = lower ? "total" : quantity.substr(std::string("bound_se_").size());
+    return costColumnWithBounds(table, point.output, point.prices, what,
+                                std::string(lower ? "lower bound" : "std. error"))
+        .number(0, 0);
 }
 
 } // namespace isoquant::testing

@@ -4,6 +4,7 @@
 
 #include "isoquant/sheet/functions/cost_functions.hpp"
 #include "isoquant/sheet/functions/production_functions.hpp"
+#include "isoquant/sheet/models/model_table.hpp"
 
 namespace isoquant::testing {
 
@@ -34,5 +35,17 @@ CostFitArguments riceFarmCostArguments(bool withShares = false);
 // The same with the panel columns: groups = id, controls = size, trend = each farm's seasons 1 to 6
 // in the file's order (every farm has 6 consecutive rows); a test clears what it does not use.
 CostFitArguments riceFarmCostPanelArguments();
+
+// The output (1 × 1) and the three prices (1 × 3) of the rice-farm data row `dataRow` (0 the first
+// row under the header), as PRODCOST's target and prices.
+struct CostPoint {
+    CellTable output = CellTable(1, 1);
+    CellTable prices = CellTable(1, 3);
+};
+CostPoint riceFarmCostPoint(std::size_t dataRow);
+
+// PRODCOST's "bound_se_<what>" (std. error of what) or "bound_lower_total" (lower bound of total
+// cost), the figures of cost_check.bound_figures, on `table` at the rice-farm data row `dataRow`.
+double riceFarmCostBound(const ModelTable& table, const std::string& quantity, std::size_t dataRow);
 
 } // namespace isoquant::testing

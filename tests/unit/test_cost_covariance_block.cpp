@@ -1,6 +1,6 @@
 // PRODCOSTFIT's `covariance` TRUE: the block's shape and labels, its row for a constant shifted by
-// controls or a trend, PRODCOST reading it back, and the messages where it cannot serve (a constant
-// shifted by effects, a typed block without the shifted row); a cost frontier's block.
+// controls, effects or a trend, PRODCOST reading it back, and the message where it cannot serve (a
+// typed block without the shifted row); a cost frontier's block.
 // The figures against python3-statsmodels are in test_cost_cross_check.cpp.
 #include "isoquant/sheet/functions/bound_functions.hpp"
 #include "isoquant/sheet/functions/cost_decisions.hpp"
@@ -178,24 +178,31 @@ BOOST_AUTO_TEST_CASE(a_cost_frontier_with_a_control_has_the_shifted_row_too)
     BOOST_TEST(std::isfinite(se));
 }
 
-BOOST_AUTO_TEST_CASE(where_the_block_cannot_serve_a_message_says_so)
+BOOST_AUTO_TEST_CASE(under_effects_the_block_ends_with_the_constant_for_predictions)
 {
     isoquant::CostFitArguments arguments = isoquant::testing::riceFarmCostPanelArguments();
     arguments.effects = std::string("fixed");
     arguments.trend = {};
-    const isoquant::ModelTable shifted(
-        isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));
-    BOOST_TEST(messageOf([&] {
-                   isoquant::costColumnWithBounds(shifted, oneCell(5000.0), pricesRow(80.0, 75.0, 60.0),
-                                                  std::string("total"), std::string("upper bound"));
-               }) == "statistic: \"upper bound\" is not available when the model's constant is shifted by effects: "
-                     "that constant holds the group effects, which have no standard error, so the covariance block "
-                     "has no row for it");
-    // The elasticity does not use the constant: it has its bounds.
-    const double lower = isoquant::costColumnWithBounds(shifted, oneCell(5000.0), pricesRow(80.0, 75.0, 60.0),
-                                                        std::string("cost elasticity"), std::string("lower bound"))
+    const isoquant::CostFit fit = isoquant::costFitFromArguments(arguments);
+    const CellTable table = isoquant::costFitTableWithCovariance(fit, 1.0);
+    BOOST_TEST(table.text(table.rows() - 1, 0) == "constant for predictions");
+    // The plain mean of the group effects (the `constant` row) has no covariance; the row-weighted
+    // one the evaluators use has a variance (its figures: test_cost_effects_bounds_cross_check.cpp).
+    BOOST_TEST(!table.isNumber(table.rows() - 1, 1));
+    BOOST_TEST(table.number(table.rows() - 1, table.columns() - 1) > 0.0); // q = 7 parameters: 8 columns
+    const isoquant::ModelTable shifted(table);
+    const auto bound = [&](const char* what, const char* statistic) {
+        return isoquant::costColumnWithBounds(shifted, oneCell(5000.0), pricesRow(80.0, 75.0, 60.0),
+                                              std::string(what), std::string(statistic))
+            .number(0, 0);
+    };
+    const double total = isoquant::costColumn(shifted, oneCell(5000.0), pricesRow(80.0, 75.0, 60.0),
+                                              std::string("total"))
                              .number(0, 0);
-    BOOST_TEST(lower < isoquant::readCostModel(shifted.cells()).output);
+    BOOST_TEST(bound("total", "lower bound") < total);
+    BOOST_TEST(bound("total", "upper bound") > total);
+    BOOST_TEST(bound("marginal", "std. error") > 0.0);
+    BOOST_TEST(bound("cost elasticity", "lower bound") < isoquant::readCostModel(shifted.cells()).output);
 }
 
 BOOST_AUTO_TEST_CASE(a_typed_block_without_the_shifted_constant_s_row_is_refused)
@@ -219,7 +226,7 @@ BOOST_AUTO_TEST_CASE(a_typed_block_without_the_shifted_constant_s_row_is_refused
          {"size (control)", 0.0, 0.0, 0.0, 0.0, 0.01}});
     BOOST_TEST(messageOf([&] { isoquant::readCostModel(typed); }) ==
                "model: row 9: the covariance block has 5 rows; it needs one row per parameter (6) and 6 numbers in "
-               "each; with controls or a trend (and no effects) its last row is 'constant at control means', the "
+               "each; with controls, effects or a trend its last row is 'constant at control means', the "
                "constant the evaluators use");
 }
 

@@ -58,31 +58,17 @@ isoquant::ModelTable modelNamed(const std::string& name)
     return isoquant::ModelTable(isoquant::costFitTableWithCovariance(isoquant::costFitFromArguments(arguments), 1.0));
 }
 
-struct Point {
-    isoquant::CellTable output = isoquant::CellTable(1, 1);
-    isoquant::CellTable prices = isoquant::CellTable(1, 3);
-};
-
 // The output and the prices of the data row at points[index].
-Point pointAt(long index)
+isoquant::testing::CostPoint pointAt(long index)
 {
-    static const isoquant::CostFitArguments data = isoquant::testing::riceFarmCostArguments();
-    const auto row = static_cast<std::size_t>(points.at(static_cast<std::size_t>(index))) + 1; // under the header
-    Point point;
-    point.output.set(0, 0, data.output.at(row, 0));
-    for (std::size_t i = 0; i < 3; ++i) point.prices.set(0, i, data.prices.at(row, i));
-    return point;
+    return isoquant::testing::riceFarmCostPoint(static_cast<std::size_t>(points.at(static_cast<std::size_t>(index))));
 }
 
 // "bound_se_<what>" or "bound_lower_total" through PRODCOST on the table with its block.
 double boundFigure(const isoquant::ModelTable& table, const std::string& quantity, long index)
 {
-    const Point point = pointAt(index);
-    const bool lower = quantity == "bound_lower_total";
-    const std::string what = lower ? "total" : quantity.substr(std::string("bound_se_").size());
-    return isoquant::costColumnWithBounds(table, point.output, point.prices, what,
-                                          std::string(lower ? "lower bound" : "std. error"))
-        .number(0, 0);
+    return isoquant::testing::riceFarmCostBound(table, quantity,
+                                                static_cast<std::size_t>(points.at(static_cast<std::size_t>(index))));
 }
 
 // "scale_value", "scale_se", "scale_lower" or "scale_upper" through PRODEFFICIENTSCALE.

@@ -236,27 +236,34 @@ void describeCostFit(CostFit& fit, const CostData& data, const CostFitOptions& o
         summary.panel = summarisePanel(data.panel, options.effects, run, regression, summary.logScaleAtControlMeans);
 }
 
-// The evaluators' constant with controls or a trend and no effects (fit_result.hpp): s = β₀ +
-// Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first) with a trend). θ = T·b + t₀ on the regression's first columns, so
-// on all of them (the trend's, a frontier's σᵥ and σᵤ after) a = [Tᵀ·a_θ | Δt at the trend | 0],
-// a_θ = (1, 0 … 0, z̄₁ … z̄ₘ), and θ's map is [T 0].
+// The evaluators' constant with controls, a trend or effects (fit_result.hpp): s = β₀ + Σⱼ cⱼ·z̄ⱼ
+// (+ λ·(t_last − t_first) with a trend, + the last period's effect under two-way effects), where
+// under effects the row-weighted mean group effect m stands for β₀. θ = T·b + t₀ on the
+// regression's first columns, so on all of them (the trend's or the period effects', a frontier's
+// σᵥ and σᵤ after) a = [Tᵀ·a_θ | Δt at the trend | 0 … 1 at the last period | 0], a_θ =
+// (1, 0 … 0, z̄₁ … z̄ₘ) with its 1 at β₀ replaced by m under effects, and θ's map is [T 0].
 std::optional<ShiftedLogScale> costShiftedScale(const CostFit& fit, const CostData& data, const PanelRegression& run,
                                                 const Eigen::MatrixXd& map, const Eigen::MatrixXd& covariance)
 {
     const Eigen::Index m = data.controls.cols();
-    if (run.effectsAbsorbConstant || (m == 0 && !run.trendColumn)) return std::nullopt;
+    const bool effects = run.effectsAbsorbConstant;
+    if (!effects && m == 0 && !run.trendColumn) return std::nullopt;
     Eigen::VectorXd parameterWeights = Eigen::VectorXd::Zero(map.rows());
-    parameterWeights(0) = 1.0;
+    parameterWeights(0) = effects ? 0.0 : 1.0;
     if (m > 0) parameterWeights.tail(m) = data.controls.colwise().mean().transpose();
     Eigen::VectorXd weights = Eigen::VectorXd::Zero(covariance.rows());
     weights.head(map.cols()) = map.transpose() * parameterWeights;
     if (run.trendColumn) weights(*run.trendColumn) = data.panel.periods.maxCoeff() - run.trendOrigin;
+    if (!run.periodValues.empty()) weights(covariance.rows() - 1) = 1.0; // the last period's effect
     Eigen::MatrixXd parameterMap = Eigen::MatrixXd::Zero(map.rows(), covariance.rows());
     parameterMap.leftCols(map.cols()) = map;
-    const bool trend = run.trendColumn.has_value();
-    return shiftedLogScale(parameterMap, weights, covariance,
-                           trend ? fit.summary.panel.logScaleForPredictions : fit.summary.logScaleAtControlMeans,
-                           trend);
+    const bool forPredictions = effects || run.trendColumn.has_value();
+    ShiftedLogScale shifted = shiftedLogScale(
+        parameterMap, weights, covariance,
+        forPredictions ? fit.summary.panel.logScaleForPredictions : fit.summary.logScaleAtControlMeans,
+        forPredictions, effects ? &run.meanEffect : nullptr);
+    if (effects) shifted.withParameters(0) = notANumber; // β₀, the plain mean effect, has no covariance
+    return shifted;
 }
 
 } // namespace

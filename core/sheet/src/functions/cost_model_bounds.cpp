@@ -120,15 +120,8 @@ CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable
                                     const Cell& what, Statistic statistic, const CellTable& values)
 {
     const CostModel model = readCostModel(modelCells);
-    const std::string asked = std::string(argument::statistic) + ": \"" + delta_method::word(statistic) + "\" ";
     requireCostBlock(model, argument::statistic, statistic);
     const CostMeasure measure = readCostMeasure(what);
-    const bool usesConstant = measure != CostMeasure::costElasticity && measure != CostMeasure::returnsToScale;
-    const bool shifted = model.constant != model.constantAtZeroControls || model.covarianceCoversShiftedConstant;
-    if (usesConstant && shifted && !model.covarianceCoversShiftedConstant)
-        throw InputError(asked + "is not available when the model's constant is shifted by effects: that constant "
-                                 "holds the group effects, which have no standard error, so the covariance block "
-                                 "has no row for it");
     const double critical = studentCriticalValue(model.covariance->level, model.covariance->degreesOfFreedom);
     return costColumnOfBounds(target, prices, model.prices.size(), values,
                               [&](double level, const Eigen::VectorXd& rowPrices, double value) {

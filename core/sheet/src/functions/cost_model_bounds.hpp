@@ -14,9 +14,8 @@ namespace isoquant {
 // `values` is the plain PRODCOST column of the same arguments (one number per output). Total,
 // marginal and average cost get their bounds on the log scale (a marginal cost ≤ 0: value ± t·se),
 // the cost elasticity and returns to scale value ± t·se, at the block's level on t(block's degrees
-// of freedom). Throws InputError naming `statistic` for a model without a block, and, for the
-// figures that use the constant, a model whose evaluators use a constant shifted by effects (with
-// controls or a trend alone the block's last row is that constant, cost_table.hpp).
+// of freedom). With controls, effects or a trend the block's last row is the constant the
+// evaluators use (cost_table.hpp). Throws InputError naming `statistic` for a model without a block.
 CellTable costModelColumnWithBounds(const CellTable& modelCells, const CellTable& target, const CellTable& prices,
                                     const Cell& what, delta_method::Statistic statistic, const CellTable& values);
 

@@ -2,7 +2,6 @@
 
 #include "isoquant/sheet/arguments/argument_names.hpp"
 #include "isoquant/math/fits/cost_fit.hpp"
-#include "isoquant/math/fits/panel_regression.hpp"
 #include "isoquant/sheet/tables/cost_table.hpp"
 #include "isoquant/math/messages/input_error.hpp"
 #include "isoquant/sheet/tables/table_labels.hpp"
@@ -111,7 +110,6 @@ void applySecondOrder(CostModel& cost, const std::vector<SecondOrderRow>& rows)
 struct PredictionConstant {
     double value = 0;
     std::optional<std::string> shiftedLabel; // "constant for predictions" or "constant at control means"
-    bool effects = false;                    // an "effects" row other than "none"
 };
 
 PredictionConstant predictionConstant(const CellTable& model, double constant)
@@ -123,24 +121,22 @@ PredictionConstant predictionConstant(const CellTable& model, double constant)
         if (equalsIgnoringCase(label, covarianceBlockLabel)) break; // the block's last row bears the same label
         if (equalsIgnoringCase(label, costPredictionLabel)) forPredictions = numberAt(model, row, label);
         if (equalsIgnoringCase(label, costControlMeansLabel)) atControlMeans = numberAt(model, row, label);
-        if (equalsIgnoringCase(label, effectsLabel) && model.columns() > 1 && model.isText(row, 1))
-            read.effects = !equalsIgnoringCase(model.text(row, 1), effectsWord(EffectsKind::none));
     }
     read.value = forPredictions.value_or(atControlMeans.value_or(constant));
     if (forPredictions || atControlMeans) read.shiftedLabel = forPredictions ? costPredictionLabel : costControlMeansLabel;
     return read;
 }
 
-// The covariance block, whose last row is the evaluators' constant when controls or a trend shift
-// it and no effects do (cost_table.hpp).
+// The covariance block, whose last row is the evaluators' constant when controls, effects or a
+// trend shift it (cost_table.hpp).
 void readCostCovariance(const CellTable& model, const PredictionConstant& constant, CostModel& cost)
 {
     std::vector<std::string> labels = cost.parameterLabels;
     std::string sizeNote;
-    cost.covarianceCoversShiftedConstant = constant.shiftedLabel && !constant.effects;
+    cost.covarianceCoversShiftedConstant = constant.shiftedLabel.has_value();
     if (cost.covarianceCoversShiftedConstant) {
         labels.push_back(*constant.shiftedLabel);
-        sizeNote = "; with controls or a trend (and no effects) its last row is " + quoted(labels.back()) +
+        sizeNote = "; with controls, effects or a trend its last row is " + quoted(labels.back()) +
                    ", the constant the evaluators use";
     }
     for (std::size_t row = 0; row < model.rows(); ++row)

@@ -11,9 +11,9 @@
 // above is then the constant the evaluators use: the table's "constant for predictions" row when
 // there is one (effects or a trend), else its "constant at control means" row, else `constant`.
 // A "covariance" row starts the block of covariance_block.hpp, one row per parameter row above,
-// in their order, and with a "constant for predictions" or "constant at control means" row and no
-// effects one more, labelled as that row (the constant the evaluators use); a typed model may
-// carry one too.
+// in their order, and with a "constant for predictions" or "constant at control means" row one
+// more, labelled as that row (the constant the evaluators use; under effects the row-weighted mean
+// group effect stands in it); a typed model may carry one too.
 #pragma once
 
 #include "isoquant/sheet/arguments/cells.hpp"
@@ -43,8 +43,8 @@ struct CostModel {
     // (PRODCOSTFIT's `covariance` TRUE), whose rows follow that order.
     std::vector<std::string> parameterLabels;
     std::optional<CovarianceBlock> covariance;
-    // Controls or a trend shift the constant and no effects do: the block's last row is the
-    // evaluators' constant (cost_table.hpp), after the parameter rows.
+    // Controls, effects or a trend shift the constant: the block's last row is the evaluators'
+    // constant (cost_table.hpp), after the parameter rows.
     bool covarianceCoversShiftedConstant = false;
 
     double logCost(double output, const Eigen::VectorXd& prices) const;

@@ -58,17 +58,20 @@ CellTable costFitTable(const CostFit& fit);
 std::vector<std::string> costParameterLabels(const CostFit& fit);
 
 // The label of the block's row for the evaluators' constant: the table's own row for it,
-// "constant for predictions" with a trend, else "constant at control means".
+// "constant for predictions" with effects or a trend, else "constant at control means".
 std::string costShiftedConstantLabel(bool forPredictions);
 
 // PRODCOSTFIT's table, with the covariance block of its parameters (covariance_block.hpp) when
 // `covariance` is TRUE (a switch naming "covariance"): the kind of errors, the degrees of freedom
 // of the table's t (n − p; G − 1 under cluster errors; m·n − p with shares) and its level; for a
-// cost frontier "likelihood" and "normal" in their place (covariance_block.hpp). With controls or
-// a trend and no effects the block has one more row (and column) after the p parameters: the
-// constant the evaluators use, s = constant + Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first)), labelled as the
-// table's row for it (costShiftedConstantLabel); so 1 + q rows and max(7, q + 1) columns, q = p + 1.
-// Under effects s holds the group effects, which have no standard error: no row is added.
+// cost frontier "likelihood" and "normal" in their place (covariance_block.hpp). With controls,
+// effects or a trend the block has one more row (and column) after the p parameters: the constant
+// the evaluators use, s = constant + Σⱼ cⱼ·z̄ⱼ (+ λ·(t_last − t_first) with a trend, + the last
+// period's effect under two-way effects), under effects with the row-weighted mean group effect
+// Σ_g n_g·α_g / n in place of the constant (its variance and covariances exact, of the fit's kind
+// of errors: MeanEffectInference), labelled as the table's row for it (costShiftedConstantLabel);
+// so 1 + q rows and max(7, q + 1) columns, q = p + 1. Under effects the `constant` row (the plain
+// mean of the group effects) has no covariance: n/a in its row and column.
 CellTable costFitTableWithCovariance(const CostFit& fit, const Cell& covariance);
 
 } // namespace isoquant
