@@ -73,19 +73,15 @@ def shifted_parameters(np, spec, fit, used, rows, trend_column, slopes, panel):
 
 def main():
     data_dir, output_path = reference_script.paths(__doc__)
-    try:
-        import numpy as np
-        import statsmodels
-        import statsmodels.api as sm
-    except ImportError as error:
-        return reference_script.skipped("statsmodels", error)
+    libraries = reference_script.numpy_and_statsmodels()
+    if isinstance(libraries, int):
+        return libraries
+    np, statsmodels, sm = libraries
     data = cost_check.read_data(data_dir, np)
     panel = cost_panel_check.read_panel(data_dir, np)
     _, output, prices = data
     rows = []
-
-    def putter(model):
-        return lambda quantity, value, index=0: rows.append(["rice_farms", model, quantity, index, repr(float(value))])
+    putter = reference_script.model_putter(rows, "rice_farms")
 
     for name, spec in EFFECTS_MODELS.items():
         dropped = DROPPED if name == UNBALANCED else 0

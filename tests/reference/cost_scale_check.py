@@ -90,19 +90,15 @@ def plain_translog(np, sm, cov_type, data):
 
 def main():
     data_dir, output_path = reference_script.paths(__doc__)
-    try:
-        import numpy as np
-        import statsmodels
-        import statsmodels.api as sm
-    except ImportError as error:
-        return reference_script.skipped("statsmodels", error)
+    libraries = reference_script.numpy_and_statsmodels()
+    if isinstance(libraries, int):
+        return libraries
+    np, statsmodels, sm = libraries
     data = cost_check.read_data(data_dir, np)
     panel = cost_panel_check.read_panel(data_dir, np)
     _, output, prices = data
     rows = []
-
-    def putter(model):
-        return lambda quantity, value, index=0: rows.append(["rice_farms", model, quantity, index, repr(float(value))])
+    putter = reference_script.model_putter(rows, "rice_farms")
 
     for name, spec in SHIFTED_MODELS.items():
         fit, _, theta_rows, trend_column, _, _ = cost_panel_check.model_fit(np, sm, spec, data, panel)

@@ -50,6 +50,28 @@ def numpy_statsmodels_scipy_stats():
     return numpy, statsmodels.api, stats
 
 
+def numpy_and_statsmodels():
+    """(numpy, statsmodels, statsmodels.api), or, when one of them does not import, the exit code of
+    `skipped` (an int) for main() to return."""
+    try:
+        import numpy
+        import statsmodels
+        import statsmodels.api
+    except ImportError as error:
+        return skipped("statsmodels", error)
+    return numpy, statsmodels, statsmodels.api
+
+
+def model_putter(rows, dataset):
+    """putter(model) -> put(quantity, value, index=0), which appends the figure line
+    (dataset, model, quantity, index, value) to `rows`."""
+    def putter(model):
+        def put(quantity, value, index=0):
+            rows.append([dataset, model, quantity, index, repr(float(value))])
+        return put
+    return putter
+
+
 def start(usage):
     """main()'s opening: (data folder, output path, numpy, statsmodels.api, scipy.stats), or the exit
     code (an int) for main() to return when a library is missing."""
