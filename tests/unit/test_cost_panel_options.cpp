@@ -224,6 +224,23 @@ BOOST_AUTO_TEST_CASE(a_typed_model_takes_control_rows)
     BOOST_TEST(closeTo(model.logCostAt(100.0, prices, Eigen::VectorXd::Constant(1, 3.0)), 1.0 + 0.3 + rest, 1e-14));
 }
 
+BOOST_AUTO_TEST_CASE(a_typed_model_reads_its_constant_rows_without_an_empty_row_before_them)
+{
+    // Typed straight under the parameters, the table's own rows are not read as input prices.
+    const CellTable typed = isoquant::testing::typedRange({{std::string("form"), std::string("cobb-douglas cost")},
+                                                           {std::string("constant"), 1.0},
+                                                           {std::string("output"), 0.8},
+                                                           {std::string("labour"), 0.6},
+                                                           {std::string("energy"), 0.4},
+                                                           {std::string("rain (control)"), 0.1},
+                                                           {std::string("constant at control means"), 1.25},
+                                                           {std::string("cost change per period"), 0.02}});
+    const isoquant::CostModel model = isoquant::readCostModel(typed);
+    BOOST_TEST(model.priceLabels == (std::vector<std::string>{"labour", "energy"}), boost::test_tools::per_element());
+    BOOST_TEST(model.constant == 1.25);
+    BOOST_TEST(model.controlLabels.size() == 1u);
+}
+
 BOOST_AUTO_TEST_CASE(a_cost_frontier_takes_controls)
 {
     constexpr int chain = 40;

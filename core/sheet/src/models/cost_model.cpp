@@ -105,6 +105,16 @@ void applySecondOrder(CostModel& cost, const std::vector<SecondOrderRow>& rows)
     }
 }
 
+// A row of the cost table below its parameters (cost_table.hpp): typed straight under them, without
+// the empty row a table has there, it is still not a price.
+bool isTableStatistic(const std::string& label)
+{
+    for (const char* statistic : {costControlMeansLabel, costPredictionLabel, costTrendLabel, costElasticityLabel,
+                                  efficientScaleLabel, costRegularityLabel})
+        if (equalsIgnoringCase(label, statistic)) return true;
+    return false;
+}
+
 // The constant the evaluators use (cost_model.hpp), from the rows below the parameters, and which
 // row gave it.
 struct PredictionConstant {
@@ -168,7 +178,7 @@ CostModel readCostModel(const CellTable& model)
     for (std::size_t row = isCostTitle(labelAt(model, 0)) ? 1 : 0; row < model.rows(); ++row) {
         const std::string label = labelAt(model, row);
         if (label.empty() || equalsIgnoringCase(label, covarianceBlockLabel)) break;
-        if (equalsIgnoringCase(label, formLabel)) continue;
+        if (equalsIgnoringCase(label, formLabel) || isTableStatistic(label)) continue;
         cost.parameterLabels.push_back(label);
         const double value = numberAt(model, row, label);
         if (equalsIgnoringCase(label, costConstantLabel)) constant = value;
