@@ -206,16 +206,31 @@ BOOST_AUTO_TEST_CASE(evaluators_use_the_constant_for_predictions)
     BOOST_TEST(closeTo(total.number(0, 0), expected, 1e-12));
 }
 
+namespace {
+
+// A typed cobb-douglas cost model (constant 1, output 0.8, labour 0.6, energy 0.4, a control rain
+// 0.1) with `below` under its parameter rows.
+CellTable typedCostModelWithControl(std::vector<std::vector<Cell>> below)
+{
+    std::vector<std::vector<Cell>> rows{{std::string("form"), std::string("cobb-douglas cost")},
+                                        {std::string("constant"), 1.0},
+                                        {std::string("output"), 0.8},
+                                        {std::string("labour"), 0.6},
+                                        {std::string("energy"), 0.4},
+                                        {std::string("rain (control)"), 0.1}};
+    rows.insert(rows.end(), below.begin(), below.end());
+    CellTable range(rows.size(), 2);
+    for (std::size_t row = 0; row < rows.size(); ++row)
+        for (std::size_t column = 0; column < 2; ++column) range.set(row, column, rows[row][column]);
+    return range;
+}
+
+} // namespace
+
 BOOST_AUTO_TEST_CASE(a_typed_model_takes_control_rows)
 {
-    const CellTable typed = isoquant::testing::typedRange({{std::string("form"), std::string("cobb-douglas cost")},
-                                                           {std::string("constant"), 1.0},
-                                                           {std::string("output"), 0.8},
-                                                           {std::string("labour"), 0.6},
-                                                           {std::string("energy"), 0.4},
-                                                           {std::string("rain (control)"), 0.1},
-                                                           {Cell{}, Cell{}},
-                                                           {std::string("constant at control means"), 1.25}});
+    const CellTable typed =
+        typedCostModelWithControl({{Cell{}, Cell{}}, {std::string("constant at control means"), 1.25}});
     const isoquant::CostModel model = isoquant::readCostModel(typed);
     BOOST_TEST(model.constant == 1.25);
     const Eigen::Vector2d prices(10.0, 2.0);
@@ -227,14 +242,8 @@ BOOST_AUTO_TEST_CASE(a_typed_model_takes_control_rows)
 BOOST_AUTO_TEST_CASE(a_typed_model_reads_its_constant_rows_without_an_empty_row_before_them)
 {
     // Typed straight under the parameters, the table's own rows are not read as input prices.
-    const CellTable typed = isoquant::testing::typedRange({{std::string("form"), std::string("cobb-douglas cost")},
-                                                           {std::string("constant"), 1.0},
-                                                           {std::string("output"), 0.8},
-                                                           {std::string("labour"), 0.6},
-                                                           {std::string("energy"), 0.4},
-                                                           {std::string("rain (control)"), 0.1},
-                                                           {std::string("constant at control means"), 1.25},
-                                                           {std::string("cost change per period"), 0.02}});
+    const CellTable typed = typedCostModelWithControl(
+        {{std::string("constant at control means"), 1.25}, {std::string("cost change per period"), 0.02}});
     const isoquant::CostModel model = isoquant::readCostModel(typed);
     BOOST_TEST(model.priceLabels == (std::vector<std::string>{"labour", "energy"}), boost::test_tools::per_element());
     BOOST_TEST(model.constant == 1.25);
