@@ -99,3 +99,39 @@ BOOST_AUTO_TEST_CASE(a_later_block_of_larger_values_rescales_the_factor)
     BOOST_TEST(relativeDifference(blocked.inference.estimates, whole.inference.estimates) <= 1e-12);
     BOOST_TEST(blocked.inference.estimates.allFinite());
 }
+
+// Tiny columns are scaled the same way: 2^−1000 times smaller gives the coefficient 2^1000 times
+// larger, bit for bit.
+BOOST_AUTO_TEST_CASE(tiny_columns_are_scaled_up_exactly)
+{
+    const Regression data = invented(300);
+    Eigen::MatrixXd tiny = data.design;
+    const double factor = std::ldexp(1.0, -1000);
+    tiny.col(2) *= factor;
+    isoquant::LeastSquaresOptions options;
+    options.rowsPerBlock = 50;
+    const auto plain = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    const auto scaled = isoquant::fitLeastSquares(tiny, data.response, 0, options);
+    BOOST_TEST(scaled.inference.estimates(2) * factor == plain.inference.estimates(2));
+    BOOST_TEST(scaled.inference.estimates(3) == plain.inference.estimates(3));
+}
+
+// A column of subnormal values (below 2.2e−308) cannot be brought to unit order (its scale 2^1074
+// overflows) and its coefficient would overflow: it is refused as a zero column, naming it. The
+// fuzzer found the old failure: a scale of +inf, then NaN in the factor.
+BOOST_AUTO_TEST_CASE(a_column_of_subnormal_values_is_refused_as_collinear)
+{
+    const Regression data = invented(60);
+    Eigen::MatrixXd subnormal = data.design;
+    for (Eigen::Index i = 0; i < subnormal.rows(); ++i) subnormal(i, 2) = (i % 3 + 1) * 5e-324;
+    for (const Eigen::Index rowsPerBlock : {Eigen::Index{10}, Eigen::Index{100000}}) {
+        isoquant::LeastSquaresOptions options;
+        options.rowsPerBlock = rowsPerBlock;
+        try {
+            isoquant::fitLeastSquares(subnormal, data.response, 0, options);
+            BOOST_ERROR("a subnormal column was fitted");
+        } catch (const isoquant::CollinearColumns& error) {
+            BOOST_TEST(error.columns() == std::vector<Eigen::Index>{2}, boost::test_tools::per_element());
+        }
+    }
+}

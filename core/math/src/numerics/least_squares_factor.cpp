@@ -18,8 +18,13 @@ void addSingularValues(LeastSquaresFactor& factor)
     factor.nullDirection = factor.permutation * svd.matrixV().col(factor.upper.cols() - 1);
 }
 
-// 2^−e with 2^e ≤ |value| < 2^(e+1): the power of two that brings `value` into [1, 2).
+// 2^−e with 2^e ≤ |value| < 2^(e+1): the power of two that brings `value` into [1, 2). Only for
+// normal numbers: below DBL_MIN, 2^−e overflows (2^1074 for the smallest subnormal).
 double unitScale(double value) { return std::ldexp(1.0, -std::ilogb(value)); }
+
+// A column whose largest magnitude is subnormal cannot be scaled to unit order, and a coefficient on
+// it would overflow: it counts as a zero column, which the factor refuses as collinear.
+bool negligible(double magnitude) { return magnitude < std::numeric_limits<double>::min(); }
 
 // Mean and centred sum of squares of the response, merged block by block (Chan, Golub and
 // LeVeque's pairwise update: M2 = M2ₐ + M2_b + δ²·nₐ·n_b/(nₐ + n_b), δ the difference of the means).
@@ -58,7 +63,7 @@ DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Inde
         // Keep every scaled value below 2 in magnitude, so no squared norm can overflow.
         for (Eigen::Index j = 0; j < width; ++j) {
             const double largest = j < p ? design.col(j).cwiseAbs().maxCoeff() : response.cwiseAbs().maxCoeff();
-            if (largest == 0) continue;
+            if (negligible(largest)) continue;
             const double wanted = unitScale(largest);
             const auto column = static_cast<std::size_t>(j);
             if (scaled[column] && wanted >= scales(j)) continue;
@@ -80,7 +85,7 @@ DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Inde
     // ‖design·e_j‖ = ‖R·e_j‖ (Q is orthogonal): a power of two more gives every column unit order.
     for (Eigen::Index j = 0; j < p; ++j) {
         const double norm = factor.upper.col(j).norm();
-        if (norm == 0) throw CollinearColumns({j});
+        if (negligible(norm)) throw CollinearColumns({j});
         const double extra = unitScale(norm);
         factor.upper.col(j) *= extra;
         factor.columnScales(j) = scales(j) * extra;
