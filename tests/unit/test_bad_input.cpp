@@ -183,6 +183,39 @@ BOOST_AUTO_TEST_CASE(output_without_variation_is_refused)
     }
 }
 
+// A column that is 0 in every row after taking logs (an input of 1 in every row, inputs equal in
+// every row under constant returns, a control of zeros or of subnormal numbers) is a column alone
+// in the null direction, without ln A: it is named as not varying, once, in the singular. The
+// translog names the input before its terms (its log, square and products all vanish at once).
+BOOST_AUTO_TEST_CASE(columns_of_zero_logs_are_named_as_not_varying)
+{
+    auto arguments = goodArguments();
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row) arguments.inputs.set(row, 1, 1.0);
+    BOOST_TEST(fitMessage(arguments) == "inputs: 'C' does not vary, so it cannot be told apart from ln A");
+    arguments.form = std::string("translog");
+    BOOST_TEST(fitMessage(arguments) == "inputs: 'C' does not vary, so it cannot be told apart from ln A");
+
+    arguments = goodArguments();
+    for (std::size_t row = 1; row < arguments.inputs.rows(); ++row)
+        arguments.inputs.set(row, 1, arguments.inputs.number(row, 0));
+    arguments.constantReturns = 1.0;
+    BOOST_TEST(fitMessage(arguments) == "inputs: 'L' (as ratios to 'C', since constant returns are imposed) does "
+                                        "not vary, so it cannot be told apart from ln A");
+
+    for (const double tiny : {0.0, 1e-310}) {
+        arguments = goodArguments();
+        Eigen::MatrixXd control(24, 1);
+        for (Eigen::Index row = 0; row < 24; ++row) control(row, 0) = (row % 3) * tiny;
+        arguments.controls = isoquant::testing::numberRange(control, {"overtime"});
+        BOOST_TEST_INFO("control values (0, 1, 2)·" << tiny);
+        BOOST_TEST(fitMessage(arguments) == "controls: control 'overtime' does not vary (numbers below 2.2e-308 "
+                                            "count as 0), so it cannot be told apart from ln A");
+    }
+    arguments.form = std::string("translog");
+    arguments.controls = isoquant::testing::numberRange(Eigen::MatrixXd::Constant(24, 1, 5.0), {"unemp"});
+    BOOST_TEST(fitMessage(arguments) == "controls: control 'unemp' does not vary, so it cannot be told apart from ln A");
+}
+
 // A control that does not vary is named as a control; one collinear with an input names both.
 BOOST_AUTO_TEST_CASE(collinear_controls_are_named)
 {

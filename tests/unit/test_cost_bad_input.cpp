@@ -86,6 +86,16 @@ BOOST_AUTO_TEST_CASE(shapes_and_options_are_checked)
     arguments.controls = numberRange(Eigen::MatrixXd::Constant(6, 1, 1.0));
     BOOST_TEST(fitMessage(arguments) ==
                "controls: control 'control 1' does not vary, so it cannot be told apart from the constant");
+    // A price equal to the last one in every row: its normalised log is 0 in every row.
+    arguments = sixLaundries();
+    for (std::size_t row = 1; row < arguments.prices.rows(); ++row)
+        arguments.prices.set(row, 0, arguments.prices.number(row, 1));
+    BOOST_TEST(fitMessage(arguments) ==
+               "input prices: ln(labour/energy) does not vary, so it cannot be told apart from the constant");
+    arguments = sixLaundries();
+    arguments.controls = numberRange(Eigen::MatrixXd::Zero(6, 1));
+    BOOST_TEST(fitMessage(arguments) == "controls: control 'control 1' does not vary (numbers below 2.2e-308 count "
+                                        "as 0), so it cannot be told apart from the constant");
     arguments = sixLaundries();
     arguments.shares = numberRange(Eigen::MatrixXd::Constant(6, 2, 0.5));
     BOOST_TEST(fitMessage(arguments) == "shares: a share equation fits exactly (or two equations' errors move "

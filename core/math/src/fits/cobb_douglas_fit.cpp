@@ -150,11 +150,15 @@ InputError collinearityError(const ProductionData& data, bool constantReturns, E
     const std::string constant = groupEffects ? "the group effects" : "ln A";
     if (parts.empty()) parts.push_back(DataPart::inputs);
     if (names.empty()) return {parts, "the data cannot identify " + constant + note};
-    if (withConstant && names.size() == 1) {
+    // One column alone: with the constant, it does not vary; without it, it is 0 in every row (an
+    // input of 1 in every row has the log 0; a control of zeros, or of numbers too small to scale).
+    if (names.size() == 1) {
         const bool plural = names.front() == "the period effects";
+        const bool tinyControl = !withConstant && parts.front() == DataPart::controls;
         return {parts, names.front() + note + (plural ? " do not vary" : " does not vary") +
-                           (groupEffects ? " within any group" : "") + ", so " + (plural ? "they" : "it") +
-                           " cannot be told apart from " + constant};
+                           (groupEffects ? " within any group" : "") +
+                           (tinyControl ? " (numbers below 2.2e-308 count as 0)" : "") + ", so " +
+                           (plural ? "they" : "it") + " cannot be told apart from " + constant};
     }
     return {parts, listOfNames(names) + (withConstant ? " together with " + constant : "") + note +
                        " are collinear (inputs taken in logs); drop one of them"};

@@ -140,8 +140,11 @@ InputError collinearTerms(const NormalisedRegression& normalised, const std::vec
     }
     if (parts.empty()) parts.push_back(DataPart::prices);
     const std::string constant = effects ? "the group effects" : "the constant";
-    if (withConstant && names.size() == 1)
+    // One term alone: with the constant, it does not vary; without it, it is 0 in every row (a
+    // price equal to the last one in every row, a control of zeros or of numbers too small to scale).
+    if (names.size() == 1)
         return {parts, names.front() + " does not vary" + (effects ? " within any group" : "") +
+                           (!withConstant && parts.front() == DataPart::controls ? " (numbers below 2.2e-308 count as 0)" : "") +
                            ", so it cannot be told apart from " + constant};
     if (withConstant) names.push_back(constant);
     return {parts,

@@ -7,6 +7,7 @@
 #include "isoquant/math/messages/text.hpp"
 #include "isoquant/math/fits/returns_to_scale.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 namespace isoquant {
@@ -56,11 +57,31 @@ std::vector<std::string> termLabels(const ProductionData& data)
 InputError collinearTerms(const ProductionData& data, const std::vector<Eigen::Index>& columns)
 {
     const std::vector<std::string> labels = termLabels(data);
+    const auto firstControl = static_cast<Eigen::Index>(labels.size() - data.controlLabels.size());
     std::vector<std::string> names;
-    for (const Eigen::Index column : columns) names.push_back(labels[static_cast<std::size_t>(column)]);
-    return {{DataPart::inputs},
-            "the translog terms " + listOfNames(names) +
-                " are collinear (inputs taken in logs); use fewer inputs or more varied data"};
+    std::vector<DataPart> parts;
+    for (const Eigen::Index column : columns) {
+        if (column > 0) names.push_back(labels[static_cast<std::size_t>(column)]);
+        const DataPart part = column >= firstControl ? DataPart::controls : DataPart::inputs;
+        if (std::find(parts.begin(), parts.end(), part) == parts.end()) parts.push_back(part);
+    }
+    // One term alone (with ln A, or 0 in every row): say so rather than list one name as collinear.
+    if (names.size() == 1)
+        return {parts, "the translog term " + names.front() + " does not vary, so it cannot be told apart from ln A"};
+    if (std::find(columns.begin(), columns.end(), Eigen::Index{0}) != columns.end()) names.insert(names.begin(), "ln A");
+    return {parts, "the translog terms " + listOfNames(names) +
+                       " are collinear (inputs taken in logs); use fewer inputs or more varied data"};
+}
+
+// A column that does not vary: named before the terms it makes collinear (an input's log, square
+// and products, all at once).
+void requireVariation(const Eigen::MatrixXd& columns, const std::vector<std::string>& labels, DataPart part,
+                      const std::string& prefix)
+{
+    for (Eigen::Index j = 0; j < columns.cols(); ++j)
+        if (columns.rows() > 0 && columns.col(j).maxCoeff() == columns.col(j).minCoeff())
+            throw InputError({part}, prefix + quoted(labels[static_cast<std::size_t>(j)]) +
+                                         " does not vary, so it cannot be told apart from ln A");
 }
 
 void requireTranslogData(const ProductionData& data, const ProductionFitOptions& options)
@@ -108,6 +129,8 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
 
     checkDesignSize(static_cast<std::size_t>(n), static_cast<std::size_t>(p), DataPart::inputs,
                     "the translog form of " + std::to_string(k) + (k == 1 ? " input" : " inputs"));
+    requireVariation(data.inputs, data.inputLabels, DataPart::inputs, "");
+    requireVariation(data.controls, data.controlLabels, DataPart::controls, "control ");
     const Eigen::MatrixXd logs = exactLog(data.inputs.array()).matrix();
     const Eigen::MatrixXd design = translogDesign(logs, data.controls);
 
