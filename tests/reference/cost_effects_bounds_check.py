@@ -72,16 +72,12 @@ def shifted_parameters(np, spec, fit, used, rows, trend_column, slopes, panel):
 
 
 def main():
-    data_dir, output_path = reference_script.paths(__doc__)
-    libraries = reference_script.numpy_and_statsmodels()
-    if isinstance(libraries, int):
-        return libraries
-    np, statsmodels, sm = libraries
-    data = cost_check.read_data(data_dir, np)
-    panel = cost_panel_check.read_panel(data_dir, np)
+    opening = cost_panel_check.rice_farm_opening(__doc__)
+    if isinstance(opening, int):
+        return opening
+    np, statsmodels, sm = opening.np, opening.statsmodels, opening.sm
+    data, panel, rows, putter = opening.data, opening.panel, opening.rows, opening.putter
     _, output, prices = data
-    rows = []
-    putter = reference_script.model_putter(rows, "rice_farms")
 
     for name, spec in EFFECTS_MODELS.items():
         dropped = DROPPED if name == UNBALANCED else 0
@@ -97,9 +93,9 @@ def main():
         put("constant_for_predictions", theta[0])
         put("constant_for_predictions_se", np.sqrt(covariance[0, 0]))
         cost_check.bound_figures(np, put, spec[0], theta, covariance, df, output, prices)
-    reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
+    reference_script.write_figures(opening.output_path, ["dataset", "form", "quantity", "index", "value"], rows)
     print(f"statsmodels {statsmodels.__version__}: {len(rows)} cost bound figures under effects written to "
-          f"{output_path}")
+          f"{opening.output_path}")
     return 0
 
 

@@ -26,6 +26,7 @@ when statsmodels cannot be imported, leaving no OUTPUT_CSV behind.
 import csv
 import os
 import sys
+import types
 
 import cost_check  # this folder: the data and the normalised regression
 import reference_script  # this folder: command line, skip code, writing the figures
@@ -54,6 +55,21 @@ def read_panel(data_dir, np):
         seasons.append(sum(1 for earlier in farms[:-1] if earlier == farm) + 1)
     size = np.array([float(row["size"]) for row in rows])
     return np.array(farms), np.array(seasons, dtype=float), size
+
+
+def rice_farm_opening(doc):
+    """The opening of the cost-bounds scripts' main(): the command line (doc is the script's
+    usage), numpy and statsmodels (else the skip code, an int), the rice-farm cost data and panel,
+    and an empty list of figure rows with its model_putter."""
+    data_dir, output_path = reference_script.paths(doc)
+    libraries = reference_script.numpy_and_statsmodels()
+    if isinstance(libraries, int):
+        return libraries
+    np, statsmodels, sm = libraries
+    rows = []
+    return types.SimpleNamespace(output_path=output_path, np=np, statsmodels=statsmodels, sm=sm,
+                                 data=cost_check.read_data(data_dir, np), panel=read_panel(data_dir, np),
+                                 rows=rows, putter=reference_script.model_putter(rows, "rice_farms"))
 
 
 def model_fit(np, sm, spec, data, panel):

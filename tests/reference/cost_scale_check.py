@@ -89,16 +89,12 @@ def plain_translog(np, sm, cov_type, data):
 
 
 def main():
-    data_dir, output_path = reference_script.paths(__doc__)
-    libraries = reference_script.numpy_and_statsmodels()
-    if isinstance(libraries, int):
-        return libraries
-    np, statsmodels, sm = libraries
-    data = cost_check.read_data(data_dir, np)
-    panel = cost_panel_check.read_panel(data_dir, np)
+    opening = cost_panel_check.rice_farm_opening(__doc__)
+    if isinstance(opening, int):
+        return opening
+    np, statsmodels, sm = opening.np, opening.statsmodels, opening.sm
+    data, panel, rows, putter = opening.data, opening.panel, opening.rows, opening.putter
     _, output, prices = data
-    rows = []
-    putter = reference_script.model_putter(rows, "rice_farms")
 
     for name, spec in SHIFTED_MODELS.items():
         fit, _, theta_rows, trend_column, _, _ = cost_panel_check.model_fit(np, sm, spec, data, panel)
@@ -109,8 +105,8 @@ def main():
     for name, cov_type in [("translog", "nonrobust"), ("translog_hc3", "HC3")]:
         theta, covariance, df = plain_translog(np, sm, cov_type, data)
         efficient_scale_figures(np, putter(name), theta, covariance, df, prices)
-    reference_script.write_figures(output_path, ["dataset", "form", "quantity", "index", "value"], rows)
-    print(f"statsmodels {statsmodels.__version__}: {len(rows)} cost bound figures written to {output_path}")
+    reference_script.write_figures(opening.output_path, ["dataset", "form", "quantity", "index", "value"], rows)
+    print(f"statsmodels {statsmodels.__version__}: {len(rows)} cost bound figures written to {opening.output_path}")
     return 0
 
 
