@@ -213,14 +213,14 @@ int main(int argc, char** argv)
         for (const double limit : {isoquant::LeastSquaresOptions{}.doublePrecisionErrorLimit, 0.0}) {
             isoquant::LeastSquaresOptions options;
             options.doublePrecisionErrorLimit = limit;
-            bool inDouble = false;
+            const char* route = "";
             const double seconds = medianSeconds(runs, [&] {
                 const auto fit = isoquant::fitLeastSquares(design, logOutput, 0, options);
-                inDouble = fit.factorisedInDouble;
+                route = fit.fromNormalEquations ? "normal-equations" : fit.factorisedInDouble ? "double" : "long-double";
                 sink = fit.inference.estimates(1);
             });
             std::printf("%s %ld %.6g %d route %s\n", limit > 0 ? "least_squares_default" : "least_squares_extended",
-                        static_cast<long>(rows), seconds, runs, inDouble ? "double" : "long-double");
+                        static_cast<long>(rows), seconds, runs, route);
         }
 
         // The whole core path a PRODFIT cell takes after the add-in's conversion: reading the

@@ -11,6 +11,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <utility>
 
 namespace isoquant {
 
@@ -41,6 +42,18 @@ public:
         }
         // Without controls their matrix has no storage: a block of it would offset a null pointer.
         if (data_.controls.cols() > 0) design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
+    }
+
+    // Once the first pass has kept every row's logs: the constant, the kept slopes, the controls.
+    std::optional<HeldColumns> heldColumns() const override
+    {
+        if (rowsKept_ < rows()) return std::nullopt;
+        HeldColumns held;
+        held.design.push_back(nullptr);
+        for (Eigen::Index j = 0; j < slopes(); ++j) held.design.push_back(keptLogs_.col(1 + j).data());
+        for (Eigen::Index j = 0; j < data_.controls.cols(); ++j) held.design.push_back(data_.controls.col(j).data());
+        held.response = keptLogs_.col(0).data();
+        return held;
     }
 
 private:
@@ -257,7 +270,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
     fit.summary = regression.summary;
-    fit.residuals = regression.residuals;
+    fit.residuals = std::move(run.regression.residuals); // not read again below (a million rows: 8 MB)
     fit.regressionInference = regression.inference;
     // The form's parameters come from the base columns; the trend and period effects are reported apart.
     Eigen::MatrixXd covariance = map.transform * regression.inference.covariance.topLeftCorner(baseColumns, baseColumns) *

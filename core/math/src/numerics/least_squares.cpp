@@ -148,10 +148,26 @@ struct ChosenFactor {
     LeastSquaresFactor factor;
     ResponseMoments response;
     bool inDouble = false;
+    bool fromNormalEquations = false; // its coefficients still need the refinement step
 };
+
+// Many rows of a well-conditioned design take the normal equations (LeastSquaresOptions).
+std::optional<ChosenFactor> normalEquationsFactor(const RegressionRows& rows, const LeastSquaresOptions& options)
+{
+    if (rows.rows() < options.normalEquationsFromRows || !(options.doublePrecisionErrorLimit > 0)) return std::nullopt;
+    std::optional<DoubleRouteFactor> normal = factorByNormalEquations(rows, options.rowsPerBlock);
+    if (!normal || !(normal->errorEstimate <= options.doublePrecisionErrorLimit)) return std::nullopt;
+    ChosenFactor chosen;
+    chosen.factor = std::move(normal->factor);
+    chosen.response = normal->response;
+    chosen.inDouble = true;
+    chosen.fromNormalEquations = true;
+    return chosen;
+}
 
 ChosenFactor chooseFactor(const RegressionRows& rows, const LeastSquaresOptions& options)
 {
+    if (std::optional<ChosenFactor> normal = normalEquationsFactor(rows, options)) return std::move(*normal);
     DoubleRouteFactor fast = factorByBlocksInDouble(rows, options.rowsPerBlock);
     ChosenFactor chosen;
     chosen.response = fast.response;
@@ -226,6 +242,8 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     summary.conditionNumber = singularValues(0) / singularValues(p - 1);
     result.interceptColumn = interceptColumn;
     result.factorisedInDouble = chosen.inDouble;
+    result.fromNormalEquations = chosen.fromNormalEquations;
+    if (chosen.fromNormalEquations) refineCoefficients(rows, options.rowsPerBlock, factor);
 
     const double df = static_cast<double>(n - allParameters);
     summary.residualDegreesOfFreedom = df;
@@ -240,10 +258,19 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     MeatAccumulator meat(options, bread, n, clusterCount, df);
     if (factor.residuals.size() != n) factor.residuals.resize(n);
     const bool needResiduals = chosen.inDouble;
-    if (needResiduals || robust) {
+    const std::optional<HeldColumns> held = rows.heldColumns();
+    if (needResiduals && !robust && held) {
+        // Held in memory: the residuals are formed in place, a block of rows at a time.
+        const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(options.rowsPerBlock, n));
+        for (Eigen::Index first = 0; first < n; first += blockRows)
+            residualsOfHeldRows(*held, first, factor.coefficients, factor.residuals.segment(first, std::min(blockRows, n - first)));
+    } else if (needResiduals || robust) {
         forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
             auto residuals = factor.residuals.segment(first, design.rows());
-            if (needResiduals) residuals = response - design * factor.coefficients;
+            if (needResiduals) {
+                residuals = response;
+                residuals.noalias() -= design * factor.coefficients;
+            }
             if (robust) meat.add(first, design, residuals);
         });
     }

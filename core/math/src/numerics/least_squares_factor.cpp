@@ -9,8 +9,6 @@
 
 namespace isoquant {
 
-namespace {
-
 void addSingularValues(LeastSquaresFactor& factor)
 {
     const Eigen::JacobiSVD<Eigen::MatrixXd> svd(factor.upper, Eigen::ComputeFullV);
@@ -18,16 +16,12 @@ void addSingularValues(LeastSquaresFactor& factor)
     factor.nullDirection = factor.permutation * svd.matrixV().col(factor.upper.cols() - 1);
 }
 
-// 2^−e with 2^e ≤ |value| < 2^(e+1): the power of two that brings `value` into [1, 2). Only for
-// normal numbers: below DBL_MIN, 2^−e overflows (2^1074 for the smallest subnormal).
 double unitScale(double value) { return std::ldexp(1.0, -std::ilogb(value)); }
 
-// A column whose largest magnitude is subnormal cannot be scaled to unit order, and a coefficient on
-// it would overflow: it counts as a zero column, which the factor refuses as collinear.
 bool negligible(double magnitude) { return magnitude < std::numeric_limits<double>::min(); }
 
-// Mean and centred sum of squares of the response, merged block by block (Chan, Golub and
-// LeVeque's pairwise update: M2 = M2ₐ + M2_b + δ²·nₐ·n_b/(nₐ + n_b), δ the difference of the means).
+// Chan, Golub and LeVeque's pairwise update: M2 = M2ₐ + M2_b + δ²·nₐ·n_b/(nₐ + n_b), δ the
+// difference of the means.
 void addToMoments(ResponseMoments& moments, double& counted, const Eigen::Ref<const Eigen::VectorXd>& response)
 {
     const double count = static_cast<double>(response.size());
@@ -40,8 +34,6 @@ void addToMoments(ResponseMoments& moments, double& counted, const Eigen::Ref<co
     moments.sumOfSquares += response.squaredNorm();
     counted = total;
 }
-
-} // namespace
 
 DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Index rowsPerBlock)
 {
@@ -102,11 +94,17 @@ DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Inde
         factor.upper.triangularView<Eigen::Upper>().solve(augmented.col(p).head(p));
     factor.coefficients = factor.columnScales.cwiseProduct(scaledCoefficients) / scales(p);
     factor.upperInverse = factor.upper.triangularView<Eigen::Upper>().solve(Eigen::MatrixXd::Identity(p, p));
-    const double condition = largest / smallest;
-    const double unitRoundoff = std::ldexp(1.0, -53);
-    result.errorEstimate = unitRoundoff * (condition + condition * condition * std::fabs(augmented(p, p)) /
-                                                           (largest * scaledCoefficients.norm()));
+    result.errorEstimate =
+        householderErrorEstimate(largest / smallest, largest, std::fabs(augmented(p, p)), scaledCoefficients.norm());
     return result;
+}
+
+// u·(κ + κ²·‖r‖/(‖X‖₂·‖b‖)) with u = 2⁻⁵³ (Golub and Van Loan, Matrix Computations, §5.3.8).
+double householderErrorEstimate(double condition, double largestSingularValue, double residualNorm,
+                                double coefficientNorm)
+{
+    const double unitRoundoff = std::ldexp(1.0, -53);
+    return unitRoundoff * (condition + condition * condition * residualNorm / (largestSingularValue * coefficientNorm));
 }
 
 LeastSquaresFactor factorInExtendedPrecision(const RegressionRows& rows, const Eigen::VectorXd& columnScales)

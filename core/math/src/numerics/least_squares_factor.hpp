@@ -1,6 +1,7 @@
-// The triangular factor of a column-scaled design, by one of two routes (least_squares.cpp):
-// a blocked Householder QR in double when its error estimate allows, else column-pivoting
-// Householder QR in long double on the whole design. Internal to the core.
+// The triangular factor of a column-scaled design, by one of three routes (least_squares.cpp):
+// the normal equations for many well-conditioned rows, a blocked Householder QR in double when its
+// error estimate allows, else column-pivoting Householder QR in long double on the whole design.
+// Internal to the core.
 #pragma once
 
 #include "isoquant/math/numerics/regression_rows.hpp"
@@ -8,6 +9,7 @@
 #include <Eigen/Core>
 
 #include <algorithm>
+#include <optional>
 
 namespace isoquant {
 
@@ -37,6 +39,25 @@ struct DoubleRouteFactor {
     double errorEstimate = 0;
 };
 
+// 2^−e with 2^e ≤ |value| < 2^(e+1): the power of two that brings `value` into [1, 2). Only for
+// normal numbers: below DBL_MIN, 2^−e overflows (2^1074 for the smallest subnormal).
+double unitScale(double value);
+
+// A column whose largest magnitude is subnormal cannot be scaled to unit order, and a coefficient on
+// it would overflow: it counts as a zero column, which the factor refuses as collinear.
+bool negligible(double magnitude);
+
+// Fills the singular values of factor.upper and the right singular vector of the smallest.
+void addSingularValues(LeastSquaresFactor& factor);
+
+// Adds a block of the response to the moments of the blocks before it (`counted` rows so far).
+void addToMoments(ResponseMoments& moments, double& counted, const Eigen::Ref<const Eigen::VectorXd>& response);
+
+// DoubleRouteFactor::errorEstimate from the condition number κ, σ₁ = ‖X‖₂, ‖r‖ and ‖b‖, all in
+// the column-scaled units.
+double householderErrorEstimate(double condition, double largestSingularValue, double residualNorm,
+                                double coefficientNorm);
+
 // Calls visit(first, design, response) for consecutive blocks of at most rowsPerBlock rows.
 template <typename Visit>
 void forEachBlock(const RegressionRows& rows, Eigen::Index rowsPerBlock, Visit&& visit)
@@ -60,6 +81,29 @@ void forEachBlock(const RegressionRows& rows, Eigen::Index rowsPerBlock, Visit&&
 // second pass). The singular values and null direction are always filled, so the caller can decide
 // rank first. Throws std::invalid_argument for a value that is not finite.
 DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Index rowsPerBlock);
+
+// One pass over the rows forms the Gram matrix [X y]ᵀ[X y] a block at a time (no Householder
+// steps: half the flops of the TSQR, and vectorised); scaled by powers of two to unit diagonal,
+// its Cholesky factor R stands for the QR's R (RᵀR = D·XᵀX·D, the same matrix in exact
+// arithmetic) and gives the coefficients of the normal equations, whose error is of order u·κ²
+// rather than the QR's u·κ; refineCoefficients brings them back to the QR's accuracy. The error
+// estimate is the Householder route's, so that both routes are held to the same rule. Nothing is
+// returned, and the caller takes the Householder route, when a column holds a value that is not
+// finite or values too large or too small to square unscaled, when the Cholesky factorisation
+// fails, or when u·κ² is too large for one step of refinement to suffice
+// (normal_equations_factor.cpp).
+std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerBlock);
+
+// r = y − X·b for the rows first … first + residuals.size() − 1 of held columns: each row's terms
+// subtracted in column order, whatever the block, so the result does not depend on how the rows
+// are cut.
+void residualsOfHeldRows(const HeldColumns& held, Eigen::Index first, const Eigen::VectorXd& coefficients,
+                         Eigen::Ref<Eigen::VectorXd> residuals);
+
+// One step of iterative refinement of factor.coefficients: a pass forms r = y − X·b and Xᵀr, and
+// b += (XᵀX)⁻¹·Xᵀr through the factor. The residuals are not kept (the caller's residual pass
+// forms them from the refined b).
+void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor);
 
 // Column-pivoting Householder QR in long double (64-bit mantissa) of the whole design, scaled by
 // `columnScales`: the NIST StRD Wampler and Filip sets need the extra digits. Fills residuals.

@@ -34,6 +34,16 @@ struct LeastSquaresOptions {
     // NIST Wampler1 and Wampler3 took the double route and reached only LRE 9.5 and 9.6, so the
     // limit is 1e-13. 0 sends every fit the extended way.
     double doublePrecisionErrorLimit = 1e-13;
+    // From this many rows up, the double route is first tried through the normal equations: one
+    // pass forms the Gram matrix of the design (half the flops of the Householder QR, vectorised),
+    // its Cholesky factor stands for the QR's R, and one step of iterative refinement in the
+    // residual pass gives the coefficients the QR's accuracy (least_squares_factor.hpp). It is
+    // held to the same doublePrecisionErrorLimit, and left for the Householder route when the
+    // Cholesky factorisation fails, when a column's values are beyond 2^±400 or when u·κ² exceeds
+    // 1e-9. Below this many rows the Householder QR costs under a millisecond, and it is kept there
+    // so that the NIST StRD sets and the published-data checks keep its digits. 0 sends every fit
+    // that qualifies this way (the tests); the largest Eigen::Index sends none.
+    Eigen::Index normalEquationsFromRows = 16384;
     // The fit counts as exact (FitStatusKind::exactFit) when ‖residuals‖ ≤ perfectFitTolerance·‖y‖.
     double perfectFitTolerance = 1e-12;
     // Parameters removed before the fit by demeaning within groups (the group means of a within
@@ -64,6 +74,7 @@ struct LeastSquaresOptions {
 // status is ok, illConditioned or exactFit (fit_status.hpp).
 struct LeastSquaresResult {
     bool factorisedInDouble = false; // which route doublePrecisionErrorLimit chose
+    bool fromNormalEquations = false; // the double route through the normal equations (then also in double)
     // Coefficients in inference.estimates; t and p on summary.inferenceDegreesOfFreedom.
     ParameterInference inference;
     FitSummary summary;

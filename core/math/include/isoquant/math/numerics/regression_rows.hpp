@@ -3,11 +3,19 @@
 
 #include <Eigen/Dense>
 
+#include <optional>
 #include <stdexcept>
 #include <utility>
 #include <vector>
 
 namespace isoquant {
+
+// The design's columns and the response where they are held in memory, each contiguous over all
+// rows, so that the passes after the first read them in place rather than copying blocks.
+struct HeldColumns {
+    std::vector<const double*> design; // one per design column; nullptr stands for a column of ones
+    const double* response = nullptr;
+};
 
 // The rows of a regression, produced a block at a time, so that a fit over a million rows never
 // holds its design in memory (the Cobb-Douglas fit takes logs block by block).
@@ -19,6 +27,8 @@ public:
     // Writes rows first … first + design.rows() − 1 of the design and of the response.
     virtual void fill(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design,
                       Eigen::Ref<Eigen::VectorXd> response) const = 0;
+    // The same rows as fill gives, held in memory, where they are (by default they are not).
+    virtual std::optional<HeldColumns> heldColumns() const { return std::nullopt; }
 };
 
 // A design and response held in memory, as rows.
@@ -31,6 +41,13 @@ public:
     {
         design = design_.middleRows(first, design.rows());
         response = response_.segment(first, response.size());
+    }
+    std::optional<HeldColumns> heldColumns() const override
+    {
+        HeldColumns held;
+        for (Eigen::Index j = 0; j < design_.cols(); ++j) held.design.push_back(design_.col(j).data());
+        held.response = response_.data();
+        return held;
     }
 
 private:

@@ -1,0 +1,139 @@
+// The normal-equations route of the least-squares factor (least_squares_factor.hpp).
+#include "numerics/least_squares_factor.hpp"
+
+#include <Eigen/Cholesky>
+
+#include <cmath>
+#include <limits>
+#include <stdexcept>
+
+namespace isoquant {
+
+namespace {
+
+// The Gram matrix is formed from the unscaled values, so it is used only when every column's
+// squared norm is finite and at least 2^−900: the products that underflow (below 2^−1022) then add
+// up to at most n·2^−1022, a relative n·2^−122 that no digit of the result can see. Other columns
+// take the Householder route, which scales before it squares (and names a value that is not finite).
+bool withinGramRange(double squaredNorm) { return squaredNorm >= std::ldexp(1.0, -900); }
+
+// One step of refinement makes the coefficients as accurate as the Householder route's when
+// c·u·κ² is well below 1 (u = 2⁻⁵³, κ the condition number of the column-scaled design): the step
+// contracts the normal equations' error by about that factor (Higham, Accuracy and Stability of
+// Numerical Algorithms, 2nd ed., ch. 20, on refinement for least squares; from memory). With
+// u·κ² ≤ 1e-9 the error left after the step is below 1e-17 relative, c up to a few hundred. The
+// default doublePrecisionErrorLimit already keeps κ below about 900 (u·κ² ≤ 9e-11); this bound
+// holds the route when that limit is raised.
+constexpr double squaredConditionLimit = 1e-9;
+
+} // namespace
+
+std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerBlock)
+{
+    const Eigen::Index n = rows.rows();
+    const Eigen::Index p = rows.columns();
+    const Eigen::Index width = p + 1; // the design and the response
+    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, n));
+
+    // One pass: G = [X y]ᵀ[X y] and the response's moments. A value that is not finite makes its
+    // column's diagonal entry so; so does a square that overflows.
+    Eigen::MatrixXd block(blockRows, width);
+    Eigen::MatrixXd gram = Eigen::MatrixXd::Zero(width, width);
+    DoubleRouteFactor result;
+    double counted = 0;
+    for (Eigen::Index first = 0; first < n; first += blockRows) {
+        const Eigen::Index count = std::min(blockRows, n - first);
+        auto rowsOfBlock = block.topRows(count);
+        rows.fill(first, rowsOfBlock.leftCols(p), rowsOfBlock.col(p));
+        addToMoments(result.response, counted, rowsOfBlock.col(p));
+        // The lower triangle, a dot product of two columns each (vectorised; Eigen's rankUpdate
+        // packs the block first, which costs more than these few columns take).
+        for (Eigen::Index j = 0; j < width; ++j)
+            for (Eigen::Index k = j; k < width; ++k) gram(k, j) += rowsOfBlock.col(k).dot(rowsOfBlock.col(j));
+    }
+    gram.triangularView<Eigen::StrictlyUpper>() = gram.transpose();
+    if (!gram.allFinite()) return std::nullopt;
+    for (Eigen::Index j = 0; j < width; ++j)
+        if (!withinGramRange(gram(j, j))) return std::nullopt;
+
+    // D G D with D the powers of two that give the design's columns unit order; the response is
+    // scaled the same way (s). ‖X·e_j‖² = G_jj.
+    Eigen::VectorXd scales(width);
+    for (Eigen::Index j = 0; j < width; ++j) scales(j) = unitScale(std::sqrt(gram(j, j)));
+    const Eigen::MatrixXd scaledGram = scales.asDiagonal() * gram * scales.asDiagonal();
+    const Eigen::LLT<Eigen::MatrixXd> cholesky(scaledGram.topLeftCorner(p, p));
+    if (cholesky.info() != Eigen::Success) return std::nullopt;
+
+    LeastSquaresFactor& factor = result.factor;
+    factor.columnScales = scales.head(p);
+    factor.permutation.setIdentity(p);
+    factor.upper = cholesky.matrixU();
+    if (!factor.upper.allFinite()) return std::nullopt;
+    addSingularValues(factor);
+    const double largestValue = factor.singularValues(0);
+    const double smallestValue = factor.singularValues(p - 1);
+    if (!(smallestValue > 0)) return std::nullopt;
+    const double condition = largestValue / smallestValue;
+    const double unitRoundoff = std::ldexp(1.0, -53);
+    if (unitRoundoff * condition * condition > squaredConditionLimit) return std::nullopt;
+
+    // Rᵀz = D·Xᵀy·s, c = R⁻¹z (scaled units), b = D·c/s; ‖r·s‖² = (s²·yᵀy − ‖z‖²), whose
+    // cancellation only matters for the error estimate's second term, which it then leaves small.
+    const Eigen::VectorXd projected =
+        factor.upper.transpose().triangularView<Eigen::Lower>().solve(scaledGram.col(p).head(p));
+    const Eigen::VectorXd scaledCoefficients = factor.upper.triangularView<Eigen::Upper>().solve(projected);
+    factor.coefficients = factor.columnScales.cwiseProduct(scaledCoefficients) / scales(p);
+    factor.upperInverse = factor.upper.triangularView<Eigen::Upper>().solve(Eigen::MatrixXd::Identity(p, p));
+    const double residualNorm = std::sqrt(std::max(0.0, scaledGram(p, p) - projected.squaredNorm()));
+    result.errorEstimate = householderErrorEstimate(condition, largestValue, residualNorm, scaledCoefficients.norm());
+    return result;
+}
+
+void residualsOfHeldRows(const HeldColumns& held, Eigen::Index first, const Eigen::VectorXd& coefficients,
+                         Eigen::Ref<Eigen::VectorXd> residuals)
+{
+    const Eigen::Index count = residuals.size();
+    residuals = Eigen::Map<const Eigen::VectorXd>(held.response + first, count);
+    for (std::size_t j = 0; j < held.design.size(); ++j) {
+        const double coefficient = coefficients(static_cast<Eigen::Index>(j));
+        if (held.design[j] == nullptr)
+            residuals.array() -= coefficient;
+        else
+            residuals -= coefficient * Eigen::Map<const Eigen::VectorXd>(held.design[j] + first, count);
+    }
+}
+
+void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor)
+{
+    // δ = (XᵀX)⁻¹·Xᵀr with r = y − X·b, through the factor: XᵀX = D⁻¹RᵀRD⁻¹, so δ = D·R⁻¹R⁻ᵀ·D·Xᵀr.
+    const Eigen::Index p = rows.columns();
+    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(p);
+    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows.rows()));
+    Eigen::VectorXd residuals(blockRows);
+    if (const std::optional<HeldColumns> held = rows.heldColumns()) {
+        // In place: no block is copied, so the pass reads each value once from memory.
+        for (Eigen::Index first = 0; first < rows.rows(); first += blockRows) {
+            auto blockResiduals = residuals.head(std::min(blockRows, rows.rows() - first));
+            residualsOfHeldRows(*held, first, factor.coefficients, blockResiduals);
+            for (Eigen::Index j = 0; j < p; ++j) {
+                const double* column = held->design[static_cast<std::size_t>(j)];
+                gradient(j) += column == nullptr
+                                   ? blockResiduals.sum()
+                                   : Eigen::Map<const Eigen::VectorXd>(column + first, blockResiduals.size()).dot(blockResiduals);
+            }
+        }
+    } else {
+        forEachBlock(rows, rowsPerBlock, [&](Eigen::Index, const auto& design, const auto& response) {
+            auto blockResiduals = residuals.head(design.rows());
+            blockResiduals = response;
+            blockResiduals.noalias() -= design * factor.coefficients;
+            gradient.noalias() += design.transpose() * blockResiduals;
+        });
+    }
+    const Eigen::VectorXd scaledGradient = factor.columnScales.cwiseProduct(gradient);
+    const Eigen::VectorXd projected = factor.upper.transpose().triangularView<Eigen::Lower>().solve(scaledGradient);
+    const Eigen::VectorXd step = factor.upper.triangularView<Eigen::Upper>().solve(projected);
+    factor.coefficients += factor.columnScales.cwiseProduct(step);
+}
+
+} // namespace isoquant

@@ -1,0 +1,201 @@
+// The normal-equations route of the least-squares engine against the Householder route on the same
+// rows (LeastSquaresOptions::normalEquationsFromRows). Invented data (property tests); the NIST
+// StRD certified values through this route are in test_nist_linear.cpp.
+#include "isoquant/math/fits/production_fit.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+#include "isoquant/math/numerics/least_squares.hpp"
+
+#include <boost/test/data/test_case.hpp>
+#include <boost/test/unit_test.hpp>
+
+#include <cmath>
+#include <limits>
+#include <random>
+#include <stdexcept>
+
+namespace bdata = boost::unit_test::data;
+
+namespace {
+
+constexpr Eigen::Index manyRows = 20000; // above the default normalEquationsFromRows (16384)
+
+struct Regression {
+    Eigen::MatrixXd design;
+    Eigen::VectorXd response;
+    std::vector<Eigen::Index> clusters;
+};
+
+// A constant and three slopes near 3 (the constant and the slopes are collinear enough for the
+// normal equations to lose digits before refinement), heteroskedastic noise, 23 clusters.
+Regression invented(Eigen::Index rows)
+{
+    std::mt19937 generator(20261203u);
+    std::normal_distribution<double> normal;
+    Regression data;
+    data.design.resize(rows, 4);
+    data.response.resize(rows);
+    for (Eigen::Index i = 0; i < rows; ++i) {
+        data.design(i, 0) = 1.0;
+        for (Eigen::Index j = 1; j < 4; ++j) data.design(i, j) = 3.0 + 0.4 * normal(generator);
+        const double noise = (0.5 + std::fabs(data.design(i, 1) - 3.0)) * normal(generator);
+        data.response(i) = 0.5 + 0.3 * data.design(i, 1) + 0.6 * data.design(i, 2) - 0.2 * data.design(i, 3) + noise;
+        data.clusters.push_back(i % 23);
+    }
+    return data;
+}
+
+double relativeDifference(const Eigen::VectorXd& a, const Eigen::VectorXd& b)
+{
+    return (a - b).norm() / std::max(a.norm(), b.norm());
+}
+
+isoquant::LeastSquaresOptions householderOnly()
+{
+    isoquant::LeastSquaresOptions options;
+    options.normalEquationsFromRows = std::numeric_limits<Eigen::Index>::max();
+    return options;
+}
+
+// The same rows, not held in memory as far as the engine can tell: every pass copies blocks.
+class RowsInBlocksOnly : public isoquant::MatrixRows {
+public:
+    using MatrixRows::MatrixRows;
+    std::optional<isoquant::HeldColumns> heldColumns() const override { return std::nullopt; }
+};
+
+const int kinds[] = {static_cast<int>(isoquant::CovarianceKind::classical), static_cast<int>(isoquant::CovarianceKind::hc1),
+                     static_cast<int>(isoquant::CovarianceKind::hc3), static_cast<int>(isoquant::CovarianceKind::cluster)};
+
+} // namespace
+
+// Against the long double Householder route (the most exact the engine has): the refined
+// coefficients within 1e-15, the standard errors within 1e-13 (the normal equations' covariance
+// carries u·κ², κ about 40 here), every covariance kind.
+BOOST_DATA_TEST_CASE(the_normal_equations_agree_with_the_householder_routes, bdata::make(kinds), kind)
+{
+    const Regression data = invented(manyRows);
+    isoquant::LeastSquaresOptions options;
+    options.covariance = static_cast<isoquant::CovarianceKind>(kind);
+    options.clusters = data.clusters;
+    const auto normal = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    BOOST_TEST(normal.fromNormalEquations);
+    BOOST_TEST(normal.factorisedInDouble);
+
+    isoquant::LeastSquaresOptions extendedOptions = householderOnly();
+    extendedOptions.covariance = options.covariance;
+    extendedOptions.clusters = data.clusters;
+    extendedOptions.doublePrecisionErrorLimit = 0;
+    const auto extended = isoquant::fitLeastSquares(data.design, data.response, 0, extendedOptions);
+    BOOST_TEST(!extended.factorisedInDouble);
+    // Tolerances (common practice, no source): a few units of rounding for the refined
+    // coefficients and residuals; u·κ² with κ ≈ 40 and a few hundred units for the covariance.
+    BOOST_TEST(relativeDifference(normal.inference.estimates, extended.inference.estimates) <= 1e-15);
+    BOOST_TEST(relativeDifference(normal.residuals, extended.residuals) <= 1e-14);
+    BOOST_TEST(relativeDifference(normal.inference.standardErrors, extended.inference.standardErrors) <= 1e-13);
+    BOOST_TEST(std::fabs(normal.summary.rSquared - extended.summary.rSquared) <= 1e-15);
+    BOOST_TEST(std::fabs(normal.summary.conditionNumber / extended.summary.conditionNumber - 1) <= 1e-12);
+
+    isoquant::LeastSquaresOptions doubleOptions = householderOnly();
+    doubleOptions.covariance = options.covariance;
+    doubleOptions.clusters = data.clusters;
+    const auto householder = isoquant::fitLeastSquares(data.design, data.response, 0, doubleOptions);
+    BOOST_TEST(householder.factorisedInDouble);
+    BOOST_TEST(!householder.fromNormalEquations);
+}
+
+// The passes that copy blocks (rows not held in memory) give the fit of the passes that read
+// held columns in place, to rounding: the residuals are summed in another order.
+BOOST_AUTO_TEST_CASE(rows_in_blocks_give_the_same_fit_as_rows_held_in_memory)
+{
+    const Regression data = invented(manyRows);
+    const auto held = isoquant::fitLeastSquares(isoquant::MatrixRows(data.design, data.response), 0);
+    const auto blocks = isoquant::fitLeastSquares(RowsInBlocksOnly(data.design, data.response), 0);
+    BOOST_TEST(held.fromNormalEquations);
+    BOOST_TEST(blocks.fromNormalEquations);
+    BOOST_TEST(relativeDifference(held.inference.estimates, blocks.inference.estimates) <= 1e-15);
+    BOOST_TEST(relativeDifference(held.residuals, blocks.residuals) <= 1e-14);
+    BOOST_TEST(relativeDifference(held.inference.standardErrors, blocks.inference.standardErrors) <= 1e-14);
+}
+
+// Power-of-two units are exact on this route too: squares scale by powers of four, the scaled
+// Gram matrix is the same bit for bit, and so is every digit of the fit.
+BOOST_AUTO_TEST_CASE(power_of_two_units_change_no_digit)
+{
+    const Regression data = invented(manyRows);
+    Eigen::MatrixXd scaled = data.design;
+    const double factor = std::ldexp(1.0, 200);
+    scaled.col(2) *= factor;
+    const auto plain = isoquant::fitLeastSquares(data.design, data.response, 0);
+    const auto wide = isoquant::fitLeastSquares(scaled, data.response, 0);
+    BOOST_TEST(wide.fromNormalEquations);
+    BOOST_TEST(wide.inference.estimates(2) * factor == plain.inference.estimates(2));
+    BOOST_TEST(wide.inference.estimates(1) == plain.inference.estimates(1));
+    BOOST_TEST(wide.inference.standardErrors(3) == plain.inference.standardErrors(3));
+}
+
+// Columns whose squares would overflow or underflow, and values that are not finite, leave the
+// route to the Householder one, which scales first or names the value.
+BOOST_AUTO_TEST_CASE(columns_beyond_the_gram_range_take_the_householder_route)
+{
+    const Regression data = invented(manyRows);
+    for (const int exponent : {600, -600}) {
+        Eigen::MatrixXd extreme = data.design;
+        extreme.col(3) *= std::ldexp(1.0, exponent);
+        const auto fit = isoquant::fitLeastSquares(extreme, data.response, 0);
+        BOOST_TEST(!fit.fromNormalEquations);
+        BOOST_TEST(fit.factorisedInDouble);
+        BOOST_TEST(fit.inference.estimates.allFinite());
+    }
+    Eigen::MatrixXd withNaN = data.design;
+    withNaN(manyRows / 2, 1) = std::numeric_limits<double>::quiet_NaN();
+    BOOST_CHECK_THROW(isoquant::fitLeastSquares(withNaN, data.response, 0), std::invalid_argument);
+}
+
+// Ill-conditioned rows (κ far above what one refinement step repairs) stay on the Householder
+// routes: here two slopes differ by noise of 1e-6 of their size.
+BOOST_AUTO_TEST_CASE(ill_conditioned_rows_are_not_taken_through_the_normal_equations)
+{
+    Regression data = invented(manyRows);
+    std::mt19937 generator(7u);
+    std::normal_distribution<double> normal;
+    for (Eigen::Index i = 0; i < manyRows; ++i) data.design(i, 3) = data.design(i, 2) * (1.0 + 1e-6 * normal(generator));
+    const auto fit = isoquant::fitLeastSquares(data.design, data.response, 0);
+    BOOST_TEST(!fit.fromNormalEquations);
+    BOOST_TEST(!fit.factorisedInDouble);
+}
+
+// A Cobb-Douglas fit of many rows (its logs kept and read in place by the later passes, controls
+// included) against the Householder route on the same logs.
+BOOST_AUTO_TEST_CASE(a_cobb_douglas_fit_of_many_rows_agrees_with_the_householder_route)
+{
+    std::mt19937 generator(20261203u);
+    std::normal_distribution<double> normal;
+    isoquant::ProductionData data;
+    data.output.resize(manyRows);
+    data.inputs.resize(manyRows, 3);
+    data.controls.resize(manyRows, 1);
+    data.inputLabels = {"labour", "capital", "energy"};
+    data.controlLabels = {"shift"};
+    for (Eigen::Index i = 0; i < manyRows; ++i) {
+        double logOutput = 0.4 + 0.1 * normal(generator);
+        for (Eigen::Index j = 0; j < 3; ++j) {
+            const double logInput = 4.0 + 0.6 * normal(generator);
+            data.inputs(i, j) = std::exp(logInput);
+            logOutput += (0.2 + 0.2 * static_cast<double>(j)) * logInput;
+        }
+        data.controls(i, 0) = static_cast<double>(i % 3);
+        data.output(i) = std::exp(logOutput + 0.05 * data.controls(i, 0));
+    }
+    const isoquant::ProductionFit fit = isoquant::fitProduction(data, {});
+
+    Eigen::MatrixXd design(manyRows, 5);
+    Eigen::VectorXd response(manyRows);
+    design.col(0).setOnes();
+    for (Eigen::Index j = 0; j < 3; ++j) isoquant::exactLogs(&data.inputs(0, j), &design(0, 1 + j), manyRows);
+    design.col(4) = data.controls.col(0);
+    isoquant::exactLogs(data.output.data(), response.data(), manyRows);
+    const auto householder = isoquant::fitLeastSquares(design, response, 0, householderOnly());
+    BOOST_TEST(relativeDifference(fit.inference.estimates, householder.inference.estimates) <= 1e-14);
+    BOOST_TEST(relativeDifference(fit.inference.standardErrors, householder.inference.standardErrors) <= 1e-13);
+    BOOST_TEST(relativeDifference(fit.residuals, householder.residuals) <= 1e-12);
+}
