@@ -119,7 +119,7 @@ ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Ei
     fit.rSquared = fit.summary.rSquared;
     fit.adjustedRSquared = fit.summary.adjustedRSquared;
     fit.logScaleAtControlMeans = raw(0);
-    fit.smearingFactor = exactExp(fit.residuals.array()).mean(); // Duan: mean of exp(residual of ln Y)
+    fit.smearingFactor = meanOfExactExps(fit.residuals); // Duan: mean of exp(residual of ln Y)
     setSubstitution(details, fit.inference);
     fit.ces = std::make_shared<CesDetails>(std::move(details));
     setReturns(fit, untested, options.confidenceLevel);

@@ -174,7 +174,7 @@ PanelRegression runShareSystem(const NormalisedRegression& normalised, const Cos
     if (run.trendColumn)
         run.latestPeriodShift =
             run.regression.inference.estimates(*run.trendColumn) * (data.panel.periods.maxCoeff() - run.trendOrigin);
-    run.smearingFactor = exactExp(run.regression.residuals.array()).mean();
+    run.smearingFactor = meanOfExactExps(run.regression.residuals);
     return run;
 }
 

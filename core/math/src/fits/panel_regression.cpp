@@ -238,7 +238,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
         result.latestPeriodShift = coefficients(*result.trendColumn) * (panel.periods.maxCoeff() - result.trendOrigin);
     if (effects == EffectsKind::twoWay)
         result.latestPeriodShift = coefficients(result.firstPeriodColumn + static_cast<Eigen::Index>(result.periodValues.size()) - 2);
-    result.smearingFactor = exactExp(result.regression.residuals.array()).mean();
+    result.smearingFactor = meanOfExactExps(result.regression.residuals);
     return result;
 }
 

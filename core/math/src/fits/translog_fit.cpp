@@ -154,7 +154,7 @@ ProductionFit fitTranslog(const ProductionData& data, const ProductionFitOptions
     fit.rSquared = regression.summary.rSquared;
     fit.adjustedRSquared = regression.summary.adjustedRSquared;
     fit.logScaleAtControlMeans = fit.inference.estimates(0);
-    fit.smearingFactor = exactExp(fit.residuals.array()).mean(); // Duan: mean of exp(residual of ln Y)
+    fit.smearingFactor = meanOfExactExps(fit.residuals); // Duan: mean of exp(residual of ln Y)
     if (m > 0) fit.logScaleAtControlMeans += data.controls.colwise().mean().dot(fit.inference.estimates.tail(m));
     if (m > 0) {
         // s = ln A + Σⱼ cⱼ·z̄ⱼ on the regression's own columns (fit_result.hpp), a = (1, 0 …, z̄).
