@@ -3,7 +3,6 @@
 #include "fits/mean_effect_inference.hpp"
 
 #include "isoquant/math/messages/input_error.hpp"
-#include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/work_limits.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
@@ -178,6 +177,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
     const Eigen::Index n = base.rows();
     const auto groups = static_cast<Eigen::Index>(panel.groupLabels.size());
     if (options.covariance == CovarianceKind::cluster) options.clusters = panel.groupOfRow;
+    options.sumExpResiduals = true; // for the smearing factor, while the residuals are in cache
 
     LeastSquaresResult run;
     auto fitRows = [&](const RegressionRows& rows) {
@@ -238,7 +238,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
         result.latestPeriodShift = coefficients(*result.trendColumn) * (panel.periods.maxCoeff() - result.trendOrigin);
     if (effects == EffectsKind::twoWay)
         result.latestPeriodShift = coefficients(result.firstPeriodColumn + static_cast<Eigen::Index>(result.periodValues.size()) - 2);
-    result.smearingFactor = meanOfExactExps(result.regression.residuals);
+    result.smearingFactor = result.regression.sumOfExpResiduals / static_cast<double>(n);
     return result;
 }
 

@@ -1,6 +1,7 @@
 #include "isoquant/math/numerics/least_squares.hpp"
 
 #include "isoquant/math/numerics/distributions.hpp"
+#include "isoquant/math/numerics/exact_elementwise.hpp"
 #include "isoquant/math/numerics/not_a_number.hpp"
 
 #include "numerics/least_squares_factor.hpp"
@@ -259,11 +260,18 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     if (factor.residuals.size() != n) factor.residuals.resize(n);
     const bool needResiduals = chosen.inDouble;
     const std::optional<HeldColumns> held = rows.heldColumns();
+    CompensatedSum sumOfExps;
+    const auto addExps = [&](const Eigen::Ref<const Eigen::VectorXd>& residuals) {
+        if (options.sumExpResiduals) sumOfExps.add(sumOfExactExps(residuals));
+    };
     if (needResiduals && !robust && held) {
         // Held in memory: the residuals are formed in place, a block of rows at a time.
         const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(options.rowsPerBlock, n));
-        for (Eigen::Index first = 0; first < n; first += blockRows)
-            residualsOfHeldRows(*held, first, factor.coefficients, factor.residuals.segment(first, std::min(blockRows, n - first)));
+        for (Eigen::Index first = 0; first < n; first += blockRows) {
+            auto residuals = factor.residuals.segment(first, std::min(blockRows, n - first));
+            residualsOfHeldRows(*held, first, factor.coefficients, residuals);
+            addExps(residuals);
+        }
     } else if (needResiduals || robust) {
         forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
             auto residuals = factor.residuals.segment(first, design.rows());
@@ -272,8 +280,12 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
                 residuals.noalias() -= design * factor.coefficients;
             }
             if (robust) meat.add(first, design, residuals);
+            addExps(residuals);
         });
+    } else {
+        addExps(factor.residuals); // the long double route's, formed with its factor
     }
+    if (options.sumExpResiduals) result.sumOfExpResiduals = sumOfExps.value();
     result.residuals = std::move(factor.residuals);
     summary.residualSumOfSquares = result.residuals.squaredNorm();
     summary.totalSumOfSquares = interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;

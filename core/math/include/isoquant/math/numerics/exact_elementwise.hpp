@@ -54,13 +54,30 @@ typename Derived::PlainObject exactExp(const Eigen::ArrayBase<Derived>& values)
     return plain.unaryExpr([](double value) { return std::exp(value); });
 }
 
-// The mean of e^v over a column, by the rule above, a chunk at a time: no column of exponentials
-// is allocated (a million residuals would take 8 MB and its page faults). Duan's smearing factor.
-inline double meanOfExactExps(const Eigen::Ref<const Eigen::VectorXd>& values)
+// A running sum with Neumaier's compensation: the rounding of each addition is kept apart and
+// added back at the end, so a sum of many partial sums does not drift with their number.
+class CompensatedSum {
+public:
+    void add(double term)
+    {
+        const double total = sum_ + term;
+        compensation_ += std::fabs(sum_) >= std::fabs(term) ? (sum_ - total) + term : (term - total) + sum_;
+        sum_ = total;
+    }
+    double value() const { return sum_ + compensation_; }
+
+private:
+    double sum_ = 0;
+    double compensation_ = 0;
+};
+
+// Σ e^v over a column, by the rule above, a chunk at a time: no column of exponentials is
+// allocated (a million residuals would take 8 MB and its page faults).
+inline double sumOfExactExps(const Eigen::Ref<const Eigen::VectorXd>& values)
 {
     constexpr Eigen::Index chunk = 1024;
     std::array<double, chunk> exps{};
-    double sum = 0;
+    CompensatedSum sum;
     for (Eigen::Index first = 0; first < values.size(); first += chunk) {
         const Eigen::Index count = std::min(chunk, values.size() - first);
         Eigen::Map<Eigen::ArrayXd> out(exps.data(), count);
@@ -69,9 +86,15 @@ inline double meanOfExactExps(const Eigen::Ref<const Eigen::VectorXd>& values)
             column_kernels::exps(out.data(), out.data(), static_cast<std::size_t>(count));
         else
             out = out.unaryExpr([](double value) { return std::exp(value); });
-        sum += out.sum();
+        sum.add(out.sum());
     }
-    return sum / static_cast<double>(values.size());
+    return sum.value();
+}
+
+// The mean of e^v: Duan's smearing factor from residuals of ln Y.
+inline double meanOfExactExps(const Eigen::Ref<const Eigen::VectorXd>& values)
+{
+    return sumOfExactExps(values) / static_cast<double>(values.size());
 }
 
 } // namespace isoquant

@@ -10,6 +10,7 @@
 
 #include <Eigen/Dense>
 
+#include <limits>
 #include <optional>
 #include <stdexcept>
 #include <vector>
@@ -63,6 +64,9 @@ struct LeastSquaresOptions {
     Eigen::VectorXd absorbedLeverage;
     // For CovarianceKind::cluster: the cluster (0 … G−1) of every row; ignored otherwise.
     std::vector<Eigen::Index> clusters;
+    // When set, the pass that forms the residuals also sums e^rᵢ while each block of them is in
+    // cache (LeastSquaresResult::sumOfExpResiduals; Duan's smearing factor is its mean).
+    bool sumExpResiduals = false;
     // Rows factorised at a time by the double route (a TSQR: each block is stacked under the
     // triangular factor so far), and visited at a time by the passes for residuals and robust
     // errors. Memory beyond the results stays O(rowsPerBlock·p) for any n; results do not depend
@@ -79,6 +83,7 @@ struct LeastSquaresResult {
     ParameterInference inference;
     FitSummary summary;
     Eigen::VectorXd residuals;
+    double sumOfExpResiduals = std::numeric_limits<double>::quiet_NaN(); // Σ e^rᵢ, with sumExpResiduals
     std::optional<Eigen::Index> interceptColumn;
     FitStatus status;
 };
