@@ -249,8 +249,9 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
                          " of data for " + std::to_string(p) + " parameters to estimate" + groupNote +
                          "; need at least " + std::to_string(p + 1));
     }
-    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly.
-    if (data.output.maxCoeff() == data.output.minCoeff())
+    // Compared on the data, not on TSS: the mean of equal logs need not round back exactly. The
+    // search stops at the first value that differs (the second row, as a rule), not after 2n reads.
+    if (std::all_of(data.output.begin(), data.output.end(), [&](double value) { return value == data.output(0); }))
         throw InputError({DataPart::output}, "every row holds the same value; there is no variation to explain");
 
     LeastSquaresOptions regressionOptions;
