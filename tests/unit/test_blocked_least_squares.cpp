@@ -1,6 +1,7 @@
 // The blocked (TSQR) factorisation against itself: results must not depend on the block size or
 // on the units of the data. Invented data (property tests).
 #include "isoquant/math/numerics/least_squares.hpp"
+#include "invented_regression.hpp"
 
 #include <boost/test/data/test_case.hpp>
 #include <boost/test/unit_test.hpp>
@@ -12,34 +13,10 @@ namespace bdata = boost::unit_test::data;
 
 namespace {
 
-struct Regression {
-    Eigen::MatrixXd design;
-    Eigen::VectorXd response;
-    std::vector<Eigen::Index> clusters;
-};
+using isoquant::testing::relativeDifference;
+using Regression = isoquant::testing::InventedRegression;
 
-Regression invented(Eigen::Index rows)
-{
-    std::mt19937 generator(20261202u);
-    std::normal_distribution<double> normal;
-    Regression data;
-    data.design.resize(rows, 4);
-    data.response.resize(rows);
-    for (Eigen::Index i = 0; i < rows; ++i) {
-        data.design(i, 0) = 1.0;
-        for (Eigen::Index j = 1; j < 4; ++j) data.design(i, j) = 3.0 + normal(generator);
-        const double noise = (0.5 + std::fabs(data.design(i, 1) - 3.0)) * normal(generator); // heteroskedastic
-        data.response(i) = 0.5 + 0.3 * data.design(i, 1) + 0.6 * data.design(i, 2) - 0.2 * data.design(i, 3) + noise;
-        data.clusters.push_back(i % 17);
-    }
-    return data;
-}
-
-// Relative agreement of two vectors, measured against the larger norm.
-double relativeDifference(const Eigen::VectorXd& a, const Eigen::VectorXd& b)
-{
-    return (a - b).norm() / std::max(a.norm(), b.norm());
-}
+Regression invented(Eigen::Index rows) { return isoquant::testing::inventedRegression(rows, 20261202u, 1.0, 17); }
 
 const int kinds[] = {static_cast<int>(isoquant::CovarianceKind::classical), static_cast<int>(isoquant::CovarianceKind::hc1),
                      static_cast<int>(isoquant::CovarianceKind::hc3), static_cast<int>(isoquant::CovarianceKind::cluster)};

@@ -46,10 +46,12 @@ std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& r
         auto rowsOfBlock = block.topRows(count);
         rows.fill(first, rowsOfBlock.leftCols(p), rowsOfBlock.col(p));
         addToMoments(result.response, counted, rowsOfBlock.col(p));
-        // The lower triangle, a dot product of two columns each (vectorised; Eigen's rankUpdate
-        // packs the block first, which costs more than these few columns take).
+        // The lower triangle, a column at a time: Eigen's transposed matrix-vector product forms
+        // several dot products per pass over the block, so their additions do not wait on each
+        // other (one dot product at a time waits on its own additions; rankUpdate packs the
+        // block first, which costs more than these few columns take).
         for (Eigen::Index j = 0; j < width; ++j)
-            for (Eigen::Index k = j; k < width; ++k) gram(k, j) += rowsOfBlock.col(k).dot(rowsOfBlock.col(j));
+            gram.col(j).tail(width - j).noalias() += rowsOfBlock.rightCols(width - j).transpose() * rowsOfBlock.col(j);
     }
     gram.triangularView<Eigen::StrictlyUpper>() = gram.transpose();
     if (!gram.allFinite()) return std::nullopt;
