@@ -40,8 +40,8 @@ struct LeastSquaresOptions {
     // its Cholesky factor stands for the QR's R, and one step of iterative refinement in the
     // residual pass gives the coefficients the QR's accuracy (least_squares_factor.hpp). It is
     // held to the same doublePrecisionErrorLimit, and left for the Householder route when the
-    // Cholesky factorisation fails, when a column's values are beyond 2^±400 or when u·κ² exceeds
-    // 1e-9. Below this many rows the Householder QR costs under a millisecond, and it is kept there
+    // Cholesky factorisation fails, when a column's squared norm is below 2^−900 or not finite (a
+    // value that is not finite, or squares that overflow), or when u·κ² exceeds 1e-9. Below this many rows the Householder QR costs under a millisecond, and it is kept there
     // so that the NIST StRD sets and the published-data checks keep its digits. 0 sends every fit
     // that qualifies this way (the tests); the largest Eigen::Index sends none.
     Eigen::Index normalEquationsFromRows = 16384;
@@ -99,8 +99,9 @@ private:
     Eigen::Index row_;
 };
 
-// Fits y = X·b by Householder QR of the column-scaled design: blocked in double when the error
-// estimate allows, else with column pivoting in long double (see LeastSquaresOptions).
+// Fits y = X·b on the column-scaled design: for many rows through the normal equations with a
+// refinement step, else by Householder QR, blocked in double, when the error estimate allows; else
+// with column pivoting in long double (see LeastSquaresOptions).
 // `interceptColumn` names the constant column, if any: it decides how TSS, R² and the overall F
 // are formed. Requires rows(X) > cols(X) + absorbedParameters, cols(X) ≥ 1, finite data and, for
 // cluster errors, a cluster for every row and at least 2 clusters (std::invalid_argument
