@@ -135,7 +135,8 @@ BOOST_AUTO_TEST_CASE(special_values_follow_the_c_library)
 BOOST_AUTO_TEST_SUITE_END()
 
 // Σ e^v of a million residual-sized values (the smearing factor's sum) against the long double
-// sum of expl: within 4 units of rounding of the sum, whichever way the rows are cut; without the
+// sum of expl: within 4 units of rounding of the sum (common practice, no source), whichever way
+// the rows are cut; without the
 // compensation across chunks the plain running sum of their partial sums drifts by more
 // (measured 10 units on this column). Invented values (a property test).
 BOOST_AUTO_TEST_CASE(the_sum_of_exponentials_does_not_drift_with_the_number_of_chunks)

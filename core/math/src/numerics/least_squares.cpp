@@ -266,12 +266,8 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     };
     if (needResiduals && !robust && held) {
         // Held in memory: the residuals are formed in place, a block of rows at a time.
-        const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(options.rowsPerBlock, n));
-        for (Eigen::Index first = 0; first < n; first += blockRows) {
-            auto residuals = factor.residuals.segment(first, std::min(blockRows, n - first));
-            residualsOfHeldRows(*held, first, factor.coefficients, residuals);
-            addExps(residuals);
-        }
+        forEachHeldBlock(*held, n, options.rowsPerBlock, factor.coefficients, factor.residuals,
+                         [&](Eigen::Index, const auto& residuals) { addExps(residuals); });
     } else if (needResiduals || robust) {
         forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
             auto residuals = factor.residuals.segment(first, design.rows());

@@ -103,7 +103,6 @@ DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Inde
 double householderErrorEstimate(double condition, double largestSingularValue, double residualNorm,
                                 double coefficientNorm)
 {
-    const double unitRoundoff = std::ldexp(1.0, -53);
     return unitRoundoff * (condition + condition * condition * residualNorm / (largestSingularValue * coefficientNorm));
 }
 

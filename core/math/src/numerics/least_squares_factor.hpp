@@ -9,6 +9,7 @@
 #include <Eigen/Core>
 
 #include <algorithm>
+#include <cmath>
 #include <optional>
 
 namespace isoquant {
@@ -52,6 +53,9 @@ void addSingularValues(LeastSquaresFactor& factor);
 
 // Adds a block of the response to the moments of the blocks before it (`counted` rows so far).
 void addToMoments(ResponseMoments& moments, double& counted, const Eigen::Ref<const Eigen::VectorXd>& response);
+
+// u = 2⁻⁵³, the unit roundoff of double.
+inline const double unitRoundoff = std::ldexp(1.0, -53);
 
 // DoubleRouteFactor::errorEstimate from the condition number κ, σ₁ = ‖X‖₂, ‖r‖ and ‖b‖, all in
 // the column-scaled units.
@@ -99,6 +103,22 @@ std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& r
 // are cut.
 void residualsOfHeldRows(const HeldColumns& held, Eigen::Index first, const Eigen::VectorXd& coefficients,
                          Eigen::Ref<Eigen::VectorXd> residuals);
+
+// Calls visit(first, residuals) for consecutive blocks of at most rowsPerBlock held rows, with
+// residuals = y − X·b of the block (residualsOfHeldRows) written into `out` (n values, or one block).
+template <typename Visit>
+void forEachHeldBlock(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
+                      const Eigen::VectorXd& coefficients, Eigen::Ref<Eigen::VectorXd> out, Visit&& visit)
+{
+    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows));
+    const bool wholeColumn = out.size() == rows;
+    for (Eigen::Index first = 0; first < rows; first += blockRows) {
+        const Eigen::Index count = std::min(blockRows, rows - first);
+        auto residuals = out.segment(wholeColumn ? first : 0, count);
+        residualsOfHeldRows(held, first, coefficients, residuals);
+        visit(first, residuals);
+    }
+}
 
 // One step of iterative refinement of factor.coefficients: a pass forms r = y − X·b and Xᵀr, and
 // b += (XᵀX)⁻¹·Xᵀr through the factor. The residuals are not kept (the caller's residual pass

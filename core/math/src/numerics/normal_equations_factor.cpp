@@ -76,7 +76,6 @@ std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& r
     const double smallestValue = factor.singularValues(p - 1);
     if (!(smallestValue > 0)) return std::nullopt;
     const double condition = largestValue / smallestValue;
-    const double unitRoundoff = std::ldexp(1.0, -53);
     if (unitRoundoff * condition * condition > squaredConditionLimit) return std::nullopt;
 
     // Rᵀz = D·Xᵀy·s, c = R⁻¹z (scaled units), b = D·c/s; ‖r·s‖² = (s²·yᵀy − ‖z‖²), whose
@@ -114,16 +113,15 @@ void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, L
     Eigen::VectorXd residuals(blockRows);
     if (const std::optional<HeldColumns> held = rows.heldColumns()) {
         // In place: no block is copied, so the pass reads each value once from memory.
-        for (Eigen::Index first = 0; first < rows.rows(); first += blockRows) {
-            auto blockResiduals = residuals.head(std::min(blockRows, rows.rows() - first));
-            residualsOfHeldRows(*held, first, factor.coefficients, blockResiduals);
-            for (Eigen::Index j = 0; j < p; ++j) {
-                const double* column = held->design[static_cast<std::size_t>(j)];
-                gradient(j) += column == nullptr
-                                   ? blockResiduals.sum()
-                                   : Eigen::Map<const Eigen::VectorXd>(column + first, blockResiduals.size()).dot(blockResiduals);
-            }
-        }
+        forEachHeldBlock(*held, rows.rows(), rowsPerBlock, factor.coefficients, residuals,
+                         [&](Eigen::Index first, const auto& blockResiduals) {
+                             for (Eigen::Index j = 0; j < p; ++j) {
+                                 const double* column = held->design[static_cast<std::size_t>(j)];
+                                 gradient(j) += column == nullptr ? blockResiduals.sum()
+                                                                  : Eigen::Map<const Eigen::VectorXd>(column + first, blockResiduals.size())
+                                                                        .dot(blockResiduals);
+                             }
+                         });
     } else {
         forEachBlock(rows, rowsPerBlock, [&](Eigen::Index, const auto& design, const auto& response) {
             auto blockResiduals = residuals.head(design.rows());
@@ -132,8 +130,8 @@ void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, L
             gradient.noalias() += design.transpose() * blockResiduals;
         });
     }
-    const Eigen::VectorXd scaledGradient = factor.columnScales.cwiseProduct(gradient);
-    const Eigen::VectorXd projected = factor.upper.transpose().triangularView<Eigen::Lower>().solve(scaledGradient);
+    const Eigen::VectorXd projected =
+        factor.upper.transpose().triangularView<Eigen::Lower>().solve(factor.columnScales.cwiseProduct(gradient));
     const Eigen::VectorXd step = factor.upper.triangularView<Eigen::Upper>().solve(projected);
     factor.coefficients += factor.columnScales.cwiseProduct(step);
 }
