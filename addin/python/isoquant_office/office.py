@@ -12,6 +12,7 @@ import time
 
 import uno
 from com.sun.star.connection import NoConnectException
+from com.sun.star.uno import RuntimeException as UnoRuntimeException
 
 from .uno_calls import ApprovingCommandEnvironment, properties, with_timeout
 
@@ -139,7 +140,11 @@ class HeadlessOffice:
                 left = max(1.0, deadline - time.monotonic())
                 self.context = with_timeout(lambda: resolver.resolve(url), left, "connect")
                 break
-            except NoConnectException:
+            except (NoConnectException, UnoRuntimeException):
+                # An office still starting may accept the socket before its initial object is
+                # ready: the bridge then answers with a wrong object ("initial object
+                # queryInterface ... returned ANY of type boolean", seen once in CI). Both mean
+                # "not yet"; the deadline still bounds the wait.
                 if time.monotonic() > deadline:
                     raise TimeoutError("soffice did not accept a connection within %.0f s; log:\n%s"
                                        % (self.START_TIMEOUT, self.log_tail()))
