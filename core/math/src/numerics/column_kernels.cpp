@@ -1,5 +1,6 @@
 #include "isoquant/math/numerics/column_kernels.hpp"
 
+#include "numerics/column_kernels_packet.hpp"
 #include "numerics/column_kernels_wide.hpp"
 
 #include <Eigen/Core>
@@ -14,8 +15,8 @@ namespace {
 using Packet = Eigen::internal::packet_traits<double>::type;
 constexpr std::size_t packetSize = Eigen::internal::packet_traits<double>::size;
 
-// A packet a step; the last values (fewer than a packet) are padded with 1 (ln 1 = 0, exp 1 = e:
-// both harmless) and taken by the same packet kernel.
+// A packet a step; the last values (fewer than a packet) are padded with 1 (ln 1 = 0, exp 1 = e,
+// log1p 1 = ln 2: all harmless) and taken by the same packet kernel.
 template <typename Kernel> void eachPacket(const double* values, double* out, std::size_t count, Kernel kernel)
 {
     std::size_t i = 0;
@@ -31,25 +32,52 @@ template <typename Kernel> void eachPacket(const double* values, double* out, st
 
 Packet packetLog(const Packet& x) { return Eigen::internal::plog(x); }
 Packet packetExp(const Packet& x) { return Eigen::internal::pexp(x); }
+Packet packetLog1p(const Packet& x) { return log1p(x); }
+
+// eᶻ and eᶻ − 1 of a packet, stored; the last values padded likewise.
+void packetExpPairs(const double* values, double* exps, double* expm1s, std::size_t count)
+{
+    const auto store = [](const Packet& z, double* exp, double* expm1) {
+        const ExpPair<Packet> pair = expAndExpm1(z);
+        Eigen::internal::pstoreu(exp, pair.exp);
+        Eigen::internal::pstoreu(expm1, pair.expm1);
+    };
+    std::size_t i = 0;
+    for (; i + packetSize <= count; i += packetSize) store(Eigen::internal::ploadu<Packet>(values + i), exps + i, expm1s + i);
+    if (i == count) return;
+    double padded[packetSize], paddedExps[packetSize], paddedExpm1s[packetSize];
+    std::fill(padded, padded + packetSize, 1.0);
+    std::copy(values + i, values + count, padded);
+    store(Eigen::internal::ploadu<Packet>(padded), paddedExps, paddedExpm1s);
+    std::copy(paddedExps, paddedExps + (count - i), exps + i);
+    std::copy(paddedExpm1s, paddedExpm1s + (count - i), expm1s + i);
+}
 
 using WideKernel = void (*)(const double*, double*, std::size_t);
 #if defined(ISOQUANT_HAVE_AVX2_KERNELS)
 constexpr WideKernel wideLogs = &avx2::logs;
 constexpr WideKernel wideExps = &avx2::exps;
+constexpr WideKernel wideLog1ps = &avx2::log1ps;
+constexpr auto wideExpPairs = &avx2::expsAndExpm1s;
 #else
 constexpr WideKernel wideLogs = nullptr;
 constexpr WideKernel wideExps = nullptr;
+constexpr WideKernel wideLog1ps = nullptr;
+constexpr void (*wideExpPairs)(const double*, double*, double*, std::size_t) = nullptr;
 #endif
 
-// The whole packets of four in the AVX2 copy where the processor has it, the rest here.
+// How many leading values (whole packets of four) the AVX2 copy takes: all it can where the
+// processor has it; the rest are taken here.
+std::size_t wideShare(std::size_t count, Width width, bool wideBuilt)
+{
+    return wideBuilt && width != Width::twoDoubles && fourDoublesAvailable() ? count - count % 4 : 0;
+}
+
 template <typename Narrow>
 void dispatch(const double* values, double* out, std::size_t count, Width width, WideKernel wide, Narrow narrow)
 {
-    std::size_t done = 0;
-    if (wide && width != Width::twoDoubles && fourDoublesAvailable()) {
-        done = count - count % 4;
-        wide(values, out, done);
-    }
+    const std::size_t done = wideShare(count, width, wide != nullptr);
+    if (done > 0) wide(values, out, done);
     eachPacket(values + done, out + done, count - done, narrow);
 }
 
@@ -73,6 +101,18 @@ void logs(const double* values, double* out, std::size_t count, Width width)
 void exps(const double* values, double* out, std::size_t count, Width width)
 {
     dispatch(values, out, count, width, wideExps, packetExp);
+}
+
+void log1ps(const double* values, double* out, std::size_t count, Width width)
+{
+    dispatch(values, out, count, width, wideLog1ps, packetLog1p);
+}
+
+void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count, Width width)
+{
+    const std::size_t done = wideShare(count, width, wideExpPairs != nullptr);
+    if (done > 0) wideExpPairs(values, exps, expm1s, done);
+    packetExpPairs(values + done, exps + done, expm1s + done, count - done);
 }
 
 } // namespace isoquant::column_kernels

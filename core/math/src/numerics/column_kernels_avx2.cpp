@@ -1,8 +1,10 @@
 // Compiled with -mavx2 and without -mfma (core/math/CMakeLists.txt): see column_kernels.hpp for why.
-// Only Eigen's packet functions of Packet4d are used here, so that no inline function shared with
+// Only Eigen's packet functions of Packet4d (and column_kernels_packet.hpp's, which are this file's
+// own) are used here, so that no inline function shared with
 // the rest of the library (whose copies are SSE2) is instantiated in this file with AVX2 code: the
 // linker could otherwise keep this file's copy for every caller. The test column_kernels_symbols
 // checks what this object defines.
+#include "numerics/column_kernels_packet.hpp"
 #include "numerics/column_kernels_wide.hpp"
 
 #include <Eigen/Core>
@@ -33,6 +35,20 @@ void logs(const double* values, double* out, std::size_t count)
 void exps(const double* values, double* out, std::size_t count)
 {
     eachPacket(values, out, count, [](const Packet4d& x) { return Eigen::internal::pexp(x); });
+}
+
+void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count)
+{
+    for (std::size_t i = 0; i < count; i += 4) {
+        const ExpPair<Packet4d> pair = expAndExpm1(Eigen::internal::ploadu<Packet4d>(values + i));
+        Eigen::internal::pstoreu(exps + i, pair.exp);
+        Eigen::internal::pstoreu(expm1s + i, pair.expm1);
+    }
+}
+
+void log1ps(const double* values, double* out, std::size_t count)
+{
+    eachPacket(values, out, count, [](const Packet4d& x) { return log1p(x); });
 }
 
 } // namespace isoquant::column_kernels::avx2

@@ -1,4 +1,4 @@
-// ln and exp of a whole column of doubles in Eigen 3.4's packet kernels, four doubles a step (AVX2)
+// ln, exp, ln(1 + x) and eˣ − 1 of a whole column of doubles in Eigen 3.4's packet kernels, four doubles a step (AVX2)
 // where the processor has AVX2, else two (SSE2).
 //
 // Why two widths give the same numbers: both run Eigen's one polynomial (plog_impl_double /
@@ -23,5 +23,11 @@ bool fourDoublesAvailable();
 // tests: `fourDoubles` where the processor lacks AVX2 falls back to two.
 void logs(const double* values, double* out, std::size_t count, Width width = Width::automatic);
 void exps(const double* values, double* out, std::size_t count, Width width = Width::automatic);
+// out[i] = ln(1 + values[i]) for values[i] > −1; exps[i] = e^values[i] and expm1s[i] = e^values[i] − 1
+// from one exp. Kahan's corrections on the kernels' ln and exp (numerics/column_kernels_packet.hpp),
+// within 4 ulp; the same bits at both widths and positions, like ln and exp.
+void log1ps(const double* values, double* out, std::size_t count, Width width = Width::automatic);
+void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count,
+                   Width width = Width::automatic);
 
 } // namespace isoquant::column_kernels
