@@ -3,7 +3,7 @@
 // iterate is a CES with δ ∈ (0, 1) and ρ > −1; "raw" is (ln A, δ, ρ, ν).
 #pragma once
 
-#include "fits/ces_columns.hpp"
+#include "isoquant/math/forms/ces_columns.hpp"
 #include "isoquant/math/numerics/nonlinear_least_squares.hpp"
 #include "isoquant/math/fits/fit_result.hpp"
 

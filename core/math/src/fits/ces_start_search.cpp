@@ -1,5 +1,6 @@
 #include "fits/ces_start_search.hpp"
 
+#include "isoquant/math/numerics/column_kernels.hpp"
 #include "isoquant/math/numerics/least_squares.hpp"
 
 #include <boost/math/tools/minima.hpp>
@@ -36,34 +37,35 @@ struct ConcentratedFit {
 };
 
 // The searched rows at one ρ, with what of K(u) = ln(δeᵘ + 1 − δ) does not depend on δ:
-// e = expm1(−|u|), u = −ρ·d. Each δ then costs one log1p a row,
+// e = expm1(−|u|), u = −ρ·d. Each δ then costs one log1p a row (the column kernels'),
 //   K = log1p(δ·e) for u ≤ 0,   K = u + log1p((1−δ)·e) for u > 0   (ln(δeᵘ + 1 − δ) = u + ln(δ + (1−δ)e^(−u))),
 // where CesCompositeCurve takes two calls; good to about ε·max(1, |u|) in K, which is all a
-// start needs (the estimates come from the runs on all rows).
+// start needs (the estimates come from the runs on all rows). ln Y about its mean is the same at
+// every ρ and δ, and is formed once.
 struct CurvatureRows {
     const CesLogs& logs;
+    const Eigen::ArrayXd& centredOutput;
     double curvature;
     Eigen::ArrayXd u;
     Eigen::ArrayXd shrunk; // expm1(−|u|)
+    // Work columns of concentrated(), reused for every δ.
+    mutable Eigen::ArrayXd argument, logged, column;
 
-    CurvatureRows(const CesLogs& searched, double rho) : logs(searched), curvature(rho)
+    CurvatureRows(const CesLogs& searched, const Eigen::ArrayXd& centred, double rho)
+        : logs(searched), centredOutput(centred), curvature(rho), u(-rho * searched.logRatio.array()),
+          shrunk(u.size()), argument(u.size()), logged(u.size()), column(u.size())
     {
-        u = -rho * searched.logRatio.array();
-        shrunk = u.abs().unaryExpr([](double v) { return std::expm1(-v); });
+        argument = -u.abs();
+        column_kernels::expsAndExpm1s(argument.data(), column.data(), shrunk.data(), static_cast<std::size_t>(u.size()));
     }
 
-    // b + H for every row at δ
-    Eigen::ArrayXd composite(double weight) const
+    // b + H for every row at δ, into `column`
+    void composite(double weight) const
     {
-        Eigen::ArrayXd column(u.size());
-        for (Eigen::Index i = 0; i < u.size(); ++i) {
-            const double d = logs.logRatio(i);
-            double value = weight * d; // H at u = 0
-            if (u(i) < 0) value = d * std::log1p(weight * shrunk(i)) / u(i);
-            if (u(i) > 0) value = d * (u(i) + std::log1p((1 - weight) * shrunk(i))) / u(i);
-            column(i) = logs.logSecond(i) + value;
-        }
-        return column;
+        const Eigen::ArrayXd& d = logs.logRatio.array();
+        argument = (u < 0).select(weight * shrunk, (1 - weight) * shrunk);
+        column_kernels::log1ps(argument.data(), logged.data(), static_cast<std::size_t>(u.size()));
+        column = logs.logSecond.array() + (u == 0).select(weight * d, d * (u > 0).select(u + logged, logged) / u);
     }
 };
 
@@ -71,22 +73,22 @@ struct CurvatureRows {
 ConcentratedFit concentrated(const CurvatureRows& rows, double weight)
 {
     const CesLogs& logs = rows.logs;
-    const Eigen::ArrayXd composite = rows.composite(weight);
-    const Eigen::ArrayXd centredX = composite - composite.mean();
-    const Eigen::ArrayXd centredY = logs.logOutput.array() - logs.logOutput.mean();
-    const double sxx = centredX.square().sum();
+    rows.composite(weight);
+    const double mean = rows.column.mean();
+    rows.column -= mean; // centred
+    const double sxx = rows.column.square().sum();
     ConcentratedFit fit;
     if (!(sxx > 0) || !std::isfinite(sxx)) return fit;
-    const double slope = (centredX * centredY).sum() / sxx;
-    fit.sumOfSquares = (centredY - slope * centredX).square().sum();
-    fit.raw = {logs.logOutput.mean() - slope * composite.mean(), weight, rows.curvature, slope};
+    const double slope = (rows.column * rows.centredOutput).sum() / sxx;
+    fit.sumOfSquares = (rows.centredOutput - slope * rows.column).square().sum();
+    fit.raw = {logs.logOutput.mean() - slope * mean, weight, rows.curvature, slope};
     return fit;
 }
 
 // Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its neighbours.
-ConcentratedFit bestWeightFor(const CesLogs& logs, double curvature)
+ConcentratedFit bestWeightFor(const CesLogs& logs, const Eigen::ArrayXd& centredOutput, double curvature)
 {
-    const CurvatureRows rows(logs, curvature);
+    const CurvatureRows rows(logs, centredOutput, curvature);
     const auto sumOfSquares = [&](double logit) { return concentrated(rows, logistic(logit)).sumOfSquares; };
     std::size_t best = 0;
     double bestValue = std::numeric_limits<double>::infinity();
@@ -154,8 +156,9 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
     const CesLogs sample = evenlySpacedRows(logs, searchRows);
     if (const auto kmenta = kmentaStart(sample)) starts.push_back(*kmenta);
     const CesLogs searched = evenlySpacedRows(sample, gridRows);
+    const Eigen::ArrayXd centredOutput = searched.logOutput.array() - searched.logOutput.mean();
     std::vector<ConcentratedFit> grid;
-    for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, curvature));
+    for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, centredOutput, curvature));
     std::sort(grid.begin(), grid.end(),
               [](const ConcentratedFit& a, const ConcentratedFit& b) { return a.sumOfSquares < b.sumOfSquares; });
     for (std::size_t i = 0; i < std::min(gridStartsTried, grid.size()); ++i)

@@ -1,17 +1,22 @@
-// The CES composite H (ces.hpp) and its derivatives over a whole column of d = ln x₁ − ln x₂
-// (internal to the core): what the ces fit evaluates on every row, many times per fit.
+// The CES composite H (ces.hpp) and its derivatives over a whole column of d = ln x₁ − ln x₂: what
+// the ces fit evaluates on every row, many times per fit.
 //
 // The formulas and branches are those of CesCompositeCurve (ces.cpp), K(u) = ln(δeᵘ + 1 − δ),
 // u = −ρ·d, H = d·K(u)/u: for |u| ≤ 1 K = log1p(δ·expm1(u)), for |u| > 1 the log-sum-exp form,
-// ∂H/∂ρ from its series for |u| < 10⁻³; H is bit for bit CesCompositeCurve::value. Each row takes
-// one exp (or expm1) and one log1p, which K, π = ∂H/∂d and the derivatives share, where
-// CesCompositeCurve::at takes six such calls. (Eigen's vectorised exp and log, SSE2 without AVX
-// as the build compiles them, took as long per value as the C library's scalar ones: 8–10 ns.)
+// ∂H/∂ρ from its series for |u| < 10⁻³. At an interior δ each row takes one exp (with expm1 from
+// it) and one log1p, shared by K, π = ∂H/∂d and the derivatives, in packets of four rows where the
+// processor has AVX2, else two (numerics/column_kernels.hpp: Eigen's packet exp and log, Kahan's
+// corrections for expm1 and log1p, no fused multiply-adds, so both widths give the same bits).
+// Each value is within a few units in the last place of the same formulas in long double
+// (tests/unit/test_ces_columns.cpp); CesCompositeCurve takes six scalar calls a row instead.
+// Where δ is 0 or 1 the rows go through CesCompositeCurve itself (its forms handle the infinite logs).
 #pragma once
+
+#include "isoquant/math/numerics/column_kernels.hpp"
 
 #include <Eigen/Dense>
 
-namespace isoquant::ces_fit {
+namespace isoquant {
 
 struct CesColumns {
     Eigen::ArrayXd value;       // H
@@ -20,7 +25,8 @@ struct CesColumns {
     Eigen::ArrayXd byCurvature; // ∂H/∂ρ
 };
 
-// Fills `columns`, resized to the rows of logRatio.
-void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesColumns& columns);
+// Fills `columns`, resized to the rows of logRatio. `width` is for the tests, as in column_kernels.hpp.
+void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesColumns& columns,
+                       column_kernels::Width width = column_kernels::Width::automatic);
 
-} // namespace isoquant::ces_fit
+} // namespace isoquant

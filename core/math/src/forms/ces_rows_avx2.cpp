@@ -1,0 +1,19 @@
+// Compiled with -mavx2 and without -mfma, like numerics/column_kernels_avx2.cpp and for the same
+// reasons: only Eigen's packet functions of Packet4d and this file's own copies of the packet forms
+// are used here (the test column_kernels_symbols checks what this object defines).
+#include "forms/ces_rows_wide.hpp"
+
+#if !defined(__AVX2__) || defined(__FMA__)
+#error "ces_rows_avx2.cpp must be built with -mavx2 and without -mfma"
+#endif
+
+namespace isoquant::ces_rows::avx2 {
+
+void composite(const double* logRatio, std::size_t count, const Shape& shape, const Outputs& out)
+{
+    for (std::size_t i = 0; i < count; i += 4)
+        compositePacket<Eigen::internal::Packet4d>(
+            logRatio + i, shape, {out.value + i, out.byLogit + i, out.byWeight + i, out.byCurvature + i});
+}
+
+} // namespace isoquant::ces_rows::avx2
