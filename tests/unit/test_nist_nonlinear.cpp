@@ -110,4 +110,31 @@ BOOST_AUTO_TEST_CASE(evaluation_limit_is_a_status_not_an_error)
     BOOST_TEST(fit.parameters.allFinite());
 }
 
+// Gauss–Newton steps alone (minimizeByGaussNewton, what the ces fit runs on all rows from a
+// start moved on a sample), from the certified values moved by 1 % in each parameter: they reach
+// the certified values to the same required LRE. Source: NIST StRD Misra1a, as above.
+BOOST_AUTO_TEST_CASE(gauss_newton_steps_from_near_the_optimum_reach_the_certified_values)
+{
+    const Misra1a model;
+    const auto reached = isoquant::minimizeByGaussNewton(model, Eigen::Vector2d(certifiedB1 * 1.01, certifiedB2 * 0.99));
+    BOOST_TEST_REQUIRE(reached.has_value());
+    BOOST_TEST((reached->status == isoquant::NonlinearStatus::converged));
+    BOOST_TEST(reached->stopReason == "Gauss–Newton steps settled");
+    BOOST_TEST(logRelativeError(reached->parameters(0), certifiedB1) >= requiredLre);
+    BOOST_TEST(logRelativeError(reached->parameters(1), certifiedB2) >= requiredLre);
+    BOOST_TEST(logRelativeError(reached->residuals.squaredNorm(), certifiedResidualSumOfSquares) >= requiredLre);
+    BOOST_TEST(reached->evaluations <= 10);
+}
+
+// Where the steps cannot be trusted they give way (no result) and the caller runs
+// Levenberg–Marquardt: a zero column of J (b1 = 0 makes ∂r/∂b2 vanish), and NIST's first start,
+// far from the optimum, where the first step overshoots and raises the sum of squares.
+BOOST_AUTO_TEST_CASE(gauss_newton_steps_give_way_where_they_cannot_be_trusted)
+{
+    const Misra1a model;
+    BOOST_TEST(!isoquant::minimizeByGaussNewton(model, Eigen::Vector2d(0.0, 5e-4)).has_value());
+    // From (500, 1e-4) the first step goes to b1 ≈ −3767 and the sum of squares from 1.1e4 to 2.7e7.
+    BOOST_TEST(!isoquant::minimizeByGaussNewton(model, Eigen::Vector2d(500, 1e-4)).has_value());
+}
+
 BOOST_AUTO_TEST_SUITE_END()

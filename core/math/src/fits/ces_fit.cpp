@@ -143,19 +143,30 @@ std::vector<Eigen::VectorXd> solverStarts(const CesModel& model, const CesLogs& 
     return starts;
 }
 
-// The run with the lowest sum of squares, preferring converged runs.
-NonlinearLeastSquaresResult bestRun(const CesModel& model, const std::vector<Eigen::VectorXd>& starts,
-                                    NonlinearLeastSquaresOptions solverOptions)
+// A run on all rows, and whether it already ends with Gauss–Newton steps to rounding.
+struct Run {
+    NonlinearLeastSquaresResult result;
+    bool refined = false;
+};
+
+// The run with the lowest sum of squares, preferring converged runs. From starts moved to the
+// optimum of the sample rows, each run first tries Gauss–Newton steps alone (the start lies a few
+// standard errors from the optimum of all rows, where each step shrinks the next by a large
+// factor), and Levenberg–Marquardt where they give up.
+Run bestRun(const CesModel& model, const std::vector<Eigen::VectorXd>& starts, bool startsMoved,
+            NonlinearLeastSquaresOptions solverOptions)
 {
     // The runs on all rows share the work cap (work_limits.hpp).
     solverOptions.maximumEvaluations = static_cast<Eigen::Index>(
         evaluationsPerRun(static_cast<std::size_t>(model.observationCount()), starts.size(),
                           static_cast<std::size_t>(solverOptions.maximumEvaluations)));
-    std::optional<NonlinearLeastSquaresResult> kept;
+    std::optional<Run> kept;
     for (const Eigen::VectorXd& start : starts) {
-        NonlinearLeastSquaresResult run = minimizeSumOfSquares(model, start, solverOptions);
-        const auto rank = [](const NonlinearLeastSquaresResult& r) {
-            return std::make_pair(r.status != NonlinearStatus::converged, r.residuals.squaredNorm());
+        std::optional<NonlinearLeastSquaresResult> steps;
+        if (startsMoved) steps = minimizeByGaussNewton(model, start);
+        Run run{steps ? std::move(*steps) : minimizeSumOfSquares(model, start, solverOptions), steps.has_value()};
+        const auto rank = [](const Run& r) {
+            return std::make_pair(r.result.status != NonlinearStatus::converged, r.result.residuals.squaredNorm());
         };
         if (!kept || rank(run) < rank(*kept)) kept = std::move(run);
     }
@@ -180,8 +191,9 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
 
     NonlinearLeastSquaresOptions solverOptions = cesOptions.solver;
     solverOptions.confidenceLevel = options.confidenceLevel;
-    const NonlinearLeastSquaresResult kept =
-        bestRun(model, solverStarts(model, logs, cesOptions, solverOptions), solverOptions);
+    const bool startsMoved = !cesOptions.start && logs.logOutput.size() > cesOptions.startSearchRows;
+    const Run run = bestRun(model, solverStarts(model, logs, cesOptions, solverOptions), startsMoved, solverOptions);
+    const NonlinearLeastSquaresResult& kept = run.result;
 
     CesDetails details;
     details.evaluations = kept.evaluations;
@@ -190,7 +202,7 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     if (kept.status == NonlinearStatus::evaluationLimit) status.kind = FitStatusKind::notConverged;
     if (kept.status == NonlinearStatus::stopped) status.kind = FitStatusKind::stopped;
     Eigen::VectorXd reached = kept.parameters;
-    if (kept.status == NonlinearStatus::converged &&
+    if (kept.status == NonlinearStatus::converged && !run.refined &&
         boundaryOf(logs, reached, cesOptions.boundaryDistance) == CesBoundary::none)
         reached = refinedByGaussNewton(model, reached, gaussNewtonSteps, cesOptions.solver.rankTolerance);
     details.boundary = boundaryOf(logs, reached, cesOptions.boundaryDistance);
@@ -203,7 +215,8 @@ ProductionFit fitCes(const ProductionData& data, const ProductionFitOptions& opt
     case CesBoundary::fixedProportions: // ρ keeps the value reached
     case CesBoundary::none: break;
     }
-    return reportAt(data, logs, raw, std::move(details), std::move(status), options, cesOptions.solver.rankTolerance);
+    return reportAt(data, model, logs, raw, std::move(details), std::move(status), options,
+                    cesOptions.solver.rankTolerance);
 }
 
 } // namespace isoquant

@@ -36,13 +36,16 @@ Eigen::VectorXd residualsFrom(const CesLogs& logs, const CesColumns& columns, do
 
 } // namespace
 
-RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw)
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw, const CesColumns* evaluated)
 {
     CesColumns columns;
-    evaluateComposite(logs.logRatio, raw(1), raw(2), columns);
+    if (!evaluated) {
+        evaluateComposite(logs.logRatio, raw(1), raw(2), columns);
+        evaluated = &columns;
+    }
     RawEvaluation evaluation;
-    evaluation.residuals = residualsFrom(logs, columns, raw(0), raw(3));
-    fillJacobian(logs, columns, WeightColumn::byWeight, raw(3), evaluation.jacobian);
+    evaluation.residuals = residualsFrom(logs, *evaluated, raw(0), raw(3));
+    fillJacobian(logs, *evaluated, WeightColumn::byWeight, raw(3), evaluation.jacobian);
     return evaluation;
 }
 
@@ -66,7 +69,15 @@ const CesColumns& CesModel::columnsAt(const Eigen::VectorXd& solver) const
     const Eigen::Vector4d raw = toRaw(solver);
     evaluateComposite(logs_.logRatio, raw(1), raw(2), slot.columns);
     slot.at = at;
+    slot.shape = {raw(1), raw(2)};
     return slot.columns;
+}
+
+const CesColumns* CesModel::evaluatedAt(double weight, double curvature) const
+{
+    for (const Evaluated& kept : evaluated_)
+        if (kept.shape(0) == weight && kept.shape(1) == curvature) return &kept.columns;
+    return nullptr;
 }
 
 void CesModel::residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const

@@ -37,7 +37,8 @@ struct RawEvaluation {
     Eigen::VectorXd residuals;
     Eigen::MatrixXd jacobian;
 };
-RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw);
+// `evaluated`, when given, is the composite already evaluated at raw's δ and ρ (CesModel::evaluatedAt).
+RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw, const CesColumns* evaluated = nullptr);
 
 // (ln A, t, s, ν) ↔ (ln A, δ, ρ, ν)
 Eigen::Vector4d toRaw(const Eigen::VectorXd& solver);
@@ -57,10 +58,13 @@ public:
     Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override;
     void residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const override;
     void jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const override;
+    // The composite's columns kept for δ and ρ exactly, if either of the last two points had them.
+    const CesColumns* evaluatedAt(double weight, double curvature) const;
 
 private:
     struct Evaluated {
         Eigen::Vector4d at = Eigen::Vector4d::Constant(std::numeric_limits<double>::quiet_NaN());
+        Eigen::Vector2d shape = Eigen::Vector2d::Constant(std::numeric_limits<double>::quiet_NaN()); // (δ, ρ)
         CesColumns columns;
     };
     const CesColumns& columnsAt(const Eigen::VectorXd& solver) const;

@@ -92,11 +92,12 @@ void setReturns(ProductionFit& fit, const std::string& untested, double level)
 
 } // namespace
 
-ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Eigen::Vector4d& raw, CesDetails details,
-                       FitStatus solverStatus, const ProductionFitOptions& options, double rankTolerance)
+ProductionFit reportAt(const ProductionData& data, const CesModel& model, const CesLogs& logs, const Eigen::Vector4d& raw,
+                       CesDetails details, FitStatus solverStatus, const ProductionFitOptions& options,
+                       double rankTolerance)
 {
     ProductionFit fit;
-    RawEvaluation evaluation = evaluateRaw(logs, raw);
+    RawEvaluation evaluation = evaluateRaw(logs, raw, model.evaluatedAt(raw(1), raw(2)));
     fit.residuals = std::move(evaluation.residuals);
     fit.inference = nonlinearInference(evaluation.jacobian, fit.residuals, raw, options.confidenceLevel, rankTolerance);
     fit.status = statusAt(std::move(solverStatus), details, fit.inference);

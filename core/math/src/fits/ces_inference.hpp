@@ -12,8 +12,10 @@ namespace isoquant::ces_fit {
 // its evaluations and boundary; `solverStatus` ok, notConverged or stopped with the solver's stop
 // reason. The fit's status is settled here (ces_fit.hpp): a converged interior point whose
 // Jacobian is rank deficient (rankTolerance) becomes notIdentified, a converged boundary point
-// boundary, a converged interior one with zero residuals exactFit.
-ProductionFit reportAt(const ProductionData& data, const CesLogs& logs, const Eigen::Vector4d& raw, CesDetails details,
-                       FitStatus solverStatus, const ProductionFitOptions& options, double rankTolerance);
+// boundary, a converged interior one with zero residuals exactFit. `model` may already hold the
+// composite at raw's δ and ρ (the solver's last points), which is then not evaluated again.
+ProductionFit reportAt(const ProductionData& data, const CesModel& model, const CesLogs& logs, const Eigen::Vector4d& raw,
+                       CesDetails details, FitStatus solverStatus, const ProductionFitOptions& options,
+                       double rankTolerance);
 
 } // namespace isoquant::ces_fit

@@ -2,9 +2,12 @@
 
 #include "isoquant/math/numerics/not_a_number.hpp"
 
+#include <Eigen/Cholesky>
+#include <Eigen/Eigenvalues>
 #include <Eigen/SVD>
 #include <unsupported/Eigen/NonLinearOptimization>
 
+#include <algorithm>
 #include <cmath>
 #include <limits>
 #include <optional>
@@ -91,6 +94,31 @@ std::optional<GaussNewtonStep> gaussNewtonStep(const NonlinearModel& model, cons
     return step;
 }
 
+// Δ = −(JᵀJ)⁻¹·Jᵀr solved as S·(S·JᵀJ·S)⁻¹·S·(−Jᵀr), S = diag(JᵀJ)^(−1/2), by Cholesky; empty
+// where J is not finite, has a zero column, or the scaled matrix's eigenvalues are further apart
+// than conditionLimit. The length ‖J·Δ‖ is √(Δᵀ·JᵀJ·Δ).
+std::optional<GaussNewtonStep> normalEquationsStep(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+                                                   double conditionLimit)
+{
+    if (!jacobian.allFinite()) return std::nullopt;
+    const Eigen::Index p = jacobian.cols();
+    Eigen::MatrixXd gram = Eigen::MatrixXd::Zero(p, p);
+    gram.selfadjointView<Eigen::Lower>().rankUpdate(jacobian.transpose());
+    gram = gram.selfadjointView<Eigen::Lower>();
+    const Eigen::VectorXd scale = gram.diagonal().cwiseSqrt().cwiseInverse();
+    if (!scale.allFinite()) return std::nullopt;
+    const Eigen::MatrixXd scaled = scale.asDiagonal() * gram * scale.asDiagonal();
+    const Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> spectrum(scaled, Eigen::EigenvaluesOnly);
+    const double smallest = spectrum.eigenvalues()(0);
+    if (!(smallest > 0) || spectrum.eigenvalues()(p - 1) > conditionLimit * smallest) return std::nullopt;
+    const Eigen::LLT<Eigen::MatrixXd> factor(scaled);
+    if (factor.info() != Eigen::Success) return std::nullopt;
+    GaussNewtonStep step;
+    step.direction = -(scale.asDiagonal() * factor.solve(scale.asDiagonal() * (jacobian.transpose() * residuals)));
+    step.length = std::sqrt(std::max(0.0, step.direction.dot(gram * step.direction)));
+    return step;
+}
+
 } // namespace
 
 Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& parameters, int maximumSteps,
@@ -106,6 +134,55 @@ Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::V
         step = std::move(following);
     }
     return refined;
+}
+
+std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& start,
+                                                                 const GaussNewtonOptions& options)
+{
+    const Eigen::Index n = model.observationCount();
+    const Eigen::Index p = model.parameterCount();
+    if (p < 1 || start.size() != p) throw std::invalid_argument("start: needs one value per parameter");
+    if (n <= p) throw std::invalid_argument("model: needs more observations than parameters");
+    Eigen::MatrixXd jacobian; // reused from one evaluation to the next
+    Eigen::Index evaluations = 0;
+    const auto stepAt = [&](const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) -> std::optional<GaussNewtonStep> {
+        ++evaluations;
+        model.residualsInto(parameters, residuals);
+        if (!residuals.allFinite()) return std::nullopt;
+        model.jacobianInto(parameters, jacobian);
+        return normalEquationsStep(jacobian, residuals, options.conditionLimit);
+    };
+    Eigen::VectorXd parameters = start;
+    Eigen::VectorXd residuals;
+    std::optional<GaussNewtonStep> step = stepAt(parameters, residuals);
+    if (!step) return std::nullopt;
+    double sumOfSquares = residuals.squaredNorm();
+    for (int k = 0; k < options.maximumSteps; ++k) {
+        Eigen::VectorXd next = parameters + step->direction;
+        Eigen::VectorXd nextResiduals;
+        std::optional<GaussNewtonStep> following = stepAt(next, nextResiduals);
+        if (!following) return std::nullopt;
+        const double nextSumOfSquares = nextResiduals.squaredNorm();
+        if (nextSumOfSquares > sumOfSquares * (1 + options.sumOfSquaresSlack)) return std::nullopt;
+        const double deviation = std::sqrt(sumOfSquares / static_cast<double>(n - p));
+        if (step->length <= options.settledLength * deviation) {
+            NonlinearLeastSquaresResult result;
+            result.parameters = std::move(next);
+            result.residuals = std::move(nextResiduals);
+            result.observations = n;
+            result.evaluations = evaluations;
+            result.jacobianEvaluations = evaluations;
+            result.status = NonlinearStatus::converged;
+            result.stopReason = "Gauss–Newton steps settled";
+            return result;
+        }
+        if (!(following->length < step->length)) return std::nullopt; // stalled above settledLength
+        parameters = std::move(next);
+        residuals = std::move(nextResiduals);
+        sumOfSquares = nextSumOfSquares;
+        step = std::move(following);
+    }
+    return std::nullopt;
 }
 
 ParameterInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
