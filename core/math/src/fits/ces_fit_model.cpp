@@ -29,9 +29,11 @@ void fillJacobian(const CesLogs& logs, const CesColumns& columns, WeightColumn w
     jacobian.col(3) = -(logs.logSecond.array() + columns.value).matrix();
 }
 
-Eigen::VectorXd residualsFrom(const CesLogs& logs, const CesColumns& columns, double logScale, double returnsToScale)
+// Into `residuals`, whose storage is reused when it already has the rows.
+void residualsFrom(const CesLogs& logs, const CesColumns& columns, double logScale, double returnsToScale,
+                   Eigen::VectorXd& residuals)
 {
-    return logs.logOutput - (logScale + returnsToScale * (logs.logSecond.array() + columns.value)).matrix();
+    residuals = logs.logOutput - (logScale + returnsToScale * (logs.logSecond.array() + columns.value)).matrix();
 }
 
 } // namespace
@@ -44,7 +46,7 @@ RawEvaluation evaluateRaw(const CesLogs& logs, const Eigen::Vector4d& raw, const
         evaluated = &columns;
     }
     RawEvaluation evaluation;
-    evaluation.residuals = residualsFrom(logs, *evaluated, raw(0), raw(3));
+    residualsFrom(logs, *evaluated, raw(0), raw(3), evaluation.residuals);
     fillJacobian(logs, *evaluated, WeightColumn::byWeight, raw(3), evaluation.jacobian);
     return evaluation;
 }
@@ -82,7 +84,7 @@ const CesColumns* CesModel::evaluatedAt(double weight, double curvature) const
 
 void CesModel::residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const
 {
-    residuals = residualsFrom(logs_, columnsAt(solver), solver(0), solver(3));
+    residualsFrom(logs_, columnsAt(solver), solver(0), solver(3), residuals);
 }
 
 void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const

@@ -99,7 +99,7 @@ ProductionFit reportAt(const ProductionData& data, const CesModel& model, const 
     ProductionFit fit;
     RawEvaluation evaluation = evaluateRaw(logs, raw, model.evaluatedAt(raw(1), raw(2)));
     fit.residuals = std::move(evaluation.residuals);
-    fit.inference = nonlinearInference(evaluation.jacobian, fit.residuals, raw, options.confidenceLevel, rankTolerance);
+    fit.inference = nonlinearInference(std::move(evaluation.jacobian), fit.residuals, raw, options.confidenceLevel, rankTolerance);
     fit.status = statusAt(std::move(solverStatus), details, fit.inference);
     // At a boundary or away from an identified optimum the classical standard errors mean nothing.
     const std::string untested = untestedReason(fit.status.kind);

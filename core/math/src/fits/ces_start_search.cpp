@@ -170,8 +170,11 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
 // all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
 // coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
 // distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
-// not finite is replaced by the start itself. The runs on the sample stop at a relative step of
-// sampleStepTolerance: their point only starts the runs on all rows, whose own optimum lies about
+// not finite is replaced by the start itself. Each start first tries Gauss–Newton steps alone
+// (minimizeByGaussNewton: from a grid or Kmenta start that lies in a well-behaved basin they settle
+// in a few steps of one evaluation each, where Levenberg–Marquardt also factorises the Jacobian);
+// where they give way, Levenberg–Marquardt runs, stopping at a relative step of
+// sampleStepTolerance: its point only starts the runs on all rows, whose own optimum lies about
 // √(n/m) standard errors away (sampling), far beyond that; the last steps to 1e-15 would cost about
 // a third of their evaluations.
 std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
@@ -185,7 +188,8 @@ std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs&
     const CesModel sampleModel(sample);
     std::vector<Eigen::VectorXd> moved;
     for (const Eigen::VectorXd& start : starts) {
-        Eigen::VectorXd reached = minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
+        const std::optional<NonlinearLeastSquaresResult> steps = minimizeByGaussNewton(sampleModel, start);
+        Eigen::VectorXd reached = steps ? steps->parameters : minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
         const auto same = [&](const Eigen::VectorXd& other) {
             return ((reached - other).array().abs() <= sameMinimum * (1 + other.array().abs())).all();
         };

@@ -4,6 +4,7 @@
 
 #include <Eigen/Cholesky>
 #include <Eigen/Eigenvalues>
+#include <Eigen/QR>
 #include <Eigen/SVD>
 #include <unsupported/Eigen/NonLinearOptimization>
 
@@ -95,16 +96,20 @@ std::optional<GaussNewtonStep> gaussNewtonStep(const NonlinearModel& model, cons
 }
 
 // Δ = −(JᵀJ)⁻¹·Jᵀr solved as S·(S·JᵀJ·S)⁻¹·S·(−Jᵀr), S = diag(JᵀJ)^(−1/2), by Cholesky; empty
-// where J is not finite, has a zero column, or the scaled matrix's eigenvalues are further apart
+// where JᵀJ is not finite, J has a zero column, or the scaled matrix's eigenvalues are further apart
 // than conditionLimit. The length ‖J·Δ‖ is √(Δᵀ·JᵀJ·Δ).
 std::optional<GaussNewtonStep> normalEquationsStep(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
                                                    double conditionLimit)
 {
-    if (!jacobian.allFinite()) return std::nullopt;
     const Eigen::Index p = jacobian.cols();
-    Eigen::MatrixXd gram = Eigen::MatrixXd::Zero(p, p);
-    gram.selfadjointView<Eigen::Lower>().rankUpdate(jacobian.transpose());
-    gram = gram.selfadjointView<Eigen::Lower>();
+    // JᵀJ a column pair at a time: for the few columns of a model one pass of dot products each
+    // costs a fifth of Eigen's general matrix product, which packs J into blocks first.
+    Eigen::MatrixXd gram(p, p);
+    for (Eigen::Index j = 0; j < p; ++j)
+        for (Eigen::Index k = 0; k <= j; ++k) gram(j, k) = gram(k, j) = jacobian.col(j).dot(jacobian.col(k));
+    // An infinite or NaN entry of J makes its column's ‖·‖² infinite or NaN (and so does a finite
+    // column too large to square, which then goes to Levenberg–Marquardt as well).
+    if (!gram.allFinite()) return std::nullopt;
     const Eigen::VectorXd scale = gram.diagonal().cwiseSqrt().cwiseInverse();
     if (!scale.allFinite()) return std::nullopt;
     const Eigen::MatrixXd scaled = scale.asDiagonal() * gram * scale.asDiagonal();
@@ -148,18 +153,18 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
     const auto stepAt = [&](const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) -> std::optional<GaussNewtonStep> {
         ++evaluations;
         model.residualsInto(parameters, residuals);
-        if (!residuals.allFinite()) return std::nullopt;
+        if (!std::isfinite(residuals.squaredNorm())) return std::nullopt; // a residual not finite, or too large to square
         model.jacobianInto(parameters, jacobian);
         return normalEquationsStep(jacobian, residuals, options.conditionLimit);
     };
     Eigen::VectorXd parameters = start;
     Eigen::VectorXd residuals;
+    Eigen::VectorXd nextResiduals; // the two residual buffers trade places at each step taken
     std::optional<GaussNewtonStep> step = stepAt(parameters, residuals);
     if (!step) return std::nullopt;
     double sumOfSquares = residuals.squaredNorm();
     for (int k = 0; k < options.maximumSteps; ++k) {
         Eigen::VectorXd next = parameters + step->direction;
-        Eigen::VectorXd nextResiduals;
         std::optional<GaussNewtonStep> following = stepAt(next, nextResiduals);
         if (!following) return std::nullopt;
         const double nextSumOfSquares = nextResiduals.squaredNorm();
@@ -178,14 +183,14 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
         }
         if (!(following->length < step->length)) return std::nullopt; // stalled above settledLength
         parameters = std::move(next);
-        residuals = std::move(nextResiduals);
+        residuals.swap(nextResiduals);
         sumOfSquares = nextSumOfSquares;
         step = std::move(following);
     }
     return std::nullopt;
 }
 
-ParameterInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+ParameterInference nonlinearInference(Eigen::MatrixXd jacobian, const Eigen::VectorXd& residuals,
                                       const Eigen::VectorXd& parameters, double confidenceLevel,
                                       double rankTolerance)
 {
@@ -194,13 +199,18 @@ ParameterInference nonlinearInference(const Eigen::MatrixXd& jacobian, const Eig
     const double residualDegreesOfFreedom = static_cast<double>(n - p);
     const double variance = residuals.squaredNorm() / residualDegreesOfFreedom;
 
-    // (JᵀJ)⁻¹ from the SVD of the column-scaled Jacobian J·S: (JᵀJ)⁻¹ = S·V·Σ⁻²·Vᵀ·S.
+    // (JᵀJ)⁻¹ from the SVD of the column-scaled Jacobian J·S = Q·R, whose singular values and right
+    // singular vectors are R's: (JᵀJ)⁻¹ = S·V·Σ⁻²·Vᵀ·S. J·S and its Householder QR are formed in
+    // the Jacobian's own storage, and only the p × p factor R goes to the SVD.
     Eigen::MatrixXd covariance = Eigen::MatrixXd::Constant(p, p, notANumber);
-    Eigen::VectorXd columnNorms = jacobian.colwise().norm().transpose();
-    bool deficient = (columnNorms.array() == 0).any() || !jacobian.allFinite();
+    const Eigen::VectorXd columnNorms = jacobian.colwise().norm().transpose();
+    // A column's norm is infinite or NaN where it holds such a value (or overflows when squared).
+    bool deficient = (columnNorms.array() == 0).any() || !columnNorms.allFinite();
     if (!deficient) {
-        const Eigen::MatrixXd scaled = jacobian * columnNorms.cwiseInverse().asDiagonal();
-        const Eigen::JacobiSVD<Eigen::MatrixXd> svd(scaled, Eigen::ComputeThinV);
+        jacobian *= columnNorms.cwiseInverse().asDiagonal();
+        const Eigen::HouseholderQR<Eigen::Ref<Eigen::MatrixXd>> factor(jacobian);
+        const Eigen::MatrixXd upper = factor.matrixQR().topRows(p).triangularView<Eigen::Upper>();
+        const Eigen::JacobiSVD<Eigen::MatrixXd> svd(upper, Eigen::ComputeFullV);
         const Eigen::VectorXd singular = svd.singularValues();
         deficient = singular(p - 1) <= rankTolerance * singular(0);
         if (!deficient) {
