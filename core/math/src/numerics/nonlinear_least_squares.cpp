@@ -181,7 +181,7 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
             result.stopReason = "Gauss–Newton steps settled";
             return result;
         }
-        if (!(following->length < step->length)) return std::nullopt; // stalled above settledLength
+        if (!(following->length <= options.slowestShrink * step->length)) return std::nullopt; // stalled
         parameters = std::move(next);
         residuals.swap(nextResiduals);
         sumOfSquares = nextSumOfSquares;
