@@ -93,6 +93,36 @@ void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jaco
     jacobian.col(2) *= std::exp(solver(2)); // dρ/ds = 1 + ρ
 }
 
+// J's columns are −1, −ν·∂H/∂t, −ν·(1 + ρ)·∂H/∂ρ and −(b + H) (fillJacobian, jacobianInto): JᵀJ
+// and Jᵀr are the sums of their products, the constant factors taken out of each sum.
+void CesModel::normalEquationsInto(const Eigen::VectorXd& solver, const Eigen::VectorXd& residuals, Eigen::MatrixXd&,
+                                   Eigen::MatrixXd& gram, Eigen::VectorXd& gradient) const
+{
+    const CesColumns& columns = columnsAt(solver);
+    const auto logit = columns.byLogit;
+    const auto curvature = columns.byCurvature;
+    const auto level = logs_.logSecond.array() + columns.value; // b + H
+    const auto r = residuals.array();
+    const double factors[] = {-1.0, -solver(3), -solver(3) * std::exp(solver(2)), -1.0};
+    gram.resize(ces_fit::parameterCount, ces_fit::parameterCount);
+    gram(0, 0) = static_cast<double>(logs_.logOutput.size());
+    gram(1, 0) = logit.sum();
+    gram(2, 0) = curvature.sum();
+    gram(3, 0) = level.sum();
+    gram(1, 1) = logit.square().sum();
+    gram(2, 1) = (logit * curvature).sum();
+    gram(3, 1) = (logit * level).sum();
+    gram(2, 2) = curvature.square().sum();
+    gram(3, 2) = (curvature * level).sum();
+    gram(3, 3) = level.square().sum();
+    gradient.resize(ces_fit::parameterCount);
+    gradient << r.sum(), (logit * r).sum(), (curvature * r).sum(), (level * r).sum();
+    for (Eigen::Index j = 0; j < ces_fit::parameterCount; ++j) {
+        gradient(j) *= factors[j];
+        for (Eigen::Index k = 0; k <= j; ++k) gram(k, j) = gram(j, k) *= factors[j] * factors[k];
+    }
+}
+
 Eigen::VectorXd CesModel::residuals(const Eigen::VectorXd& solver) const
 {
     Eigen::VectorXd residuals;

@@ -58,6 +58,9 @@ public:
     Eigen::MatrixXd jacobian(const Eigen::VectorXd& solver) const override;
     void residualsInto(const Eigen::VectorXd& solver, Eigen::VectorXd& residuals) const override;
     void jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jacobian) const override;
+    // From the composite's columns: no n × 4 Jacobian is formed.
+    void normalEquationsInto(const Eigen::VectorXd& solver, const Eigen::VectorXd& residuals, Eigen::MatrixXd& unused,
+                             Eigen::MatrixXd& gram, Eigen::VectorXd& gradient) const override;
     // The composite's columns kept for δ and ρ exactly, if either of the last two points had them.
     const CesColumns* evaluatedAt(double weight, double curvature) const;
 

@@ -16,6 +16,19 @@
 
 namespace isoquant {
 
+void NonlinearModel::normalEquationsInto(const Eigen::VectorXd& parameters, const Eigen::VectorXd& residuals,
+                                         Eigen::MatrixXd& jacobianBuffer, Eigen::MatrixXd& gram,
+                                         Eigen::VectorXd& gradient) const
+{
+    jacobianInto(parameters, jacobianBuffer);
+    const Eigen::Index p = jacobianBuffer.cols();
+    gram.resize(p, p);
+    for (Eigen::Index j = 0; j < p; ++j)
+        for (Eigen::Index k = 0; k <= j; ++k) gram(j, k) = gram(k, j) = jacobianBuffer.col(j).dot(jacobianBuffer.col(k));
+    gradient.resize(p);
+    for (Eigen::Index j = 0; j < p; ++j) gradient(j) = jacobianBuffer.col(j).dot(residuals);
+}
+
 namespace {
 
 // Stands in for a residual outside the model's domain: finite, so the solver's norms stay finite,
@@ -96,20 +109,15 @@ std::optional<GaussNewtonStep> gaussNewtonStep(const NonlinearModel& model, cons
 }
 
 // Δ = −(JᵀJ)⁻¹·Jᵀr solved as S·(S·JᵀJ·S)⁻¹·S·(−Jᵀr), S = diag(JᵀJ)^(−1/2), by Cholesky; empty
-// where JᵀJ is not finite, J has a zero column, or the scaled matrix's eigenvalues are further apart
+// where JᵀJ or Jᵀr is not finite, J has a zero column, or the scaled matrix's eigenvalues are further apart
 // than conditionLimit. The length ‖J·Δ‖ is √(Δᵀ·JᵀJ·Δ).
-std::optional<GaussNewtonStep> normalEquationsStep(const Eigen::MatrixXd& jacobian, const Eigen::VectorXd& residuals,
+std::optional<GaussNewtonStep> normalEquationsStep(const Eigen::MatrixXd& gram, const Eigen::VectorXd& gradient,
                                                    double conditionLimit)
 {
-    const Eigen::Index p = jacobian.cols();
-    // JᵀJ a column pair at a time: for the few columns of a model one pass of dot products each
-    // costs a fifth of Eigen's general matrix product, which packs J into blocks first.
-    Eigen::MatrixXd gram(p, p);
-    for (Eigen::Index j = 0; j < p; ++j)
-        for (Eigen::Index k = 0; k <= j; ++k) gram(j, k) = gram(k, j) = jacobian.col(j).dot(jacobian.col(k));
+    const Eigen::Index p = gram.cols();
     // An infinite or NaN entry of J makes its column's ‖·‖² infinite or NaN (and so does a finite
     // column too large to square, which then goes to Levenberg–Marquardt as well).
-    if (!gram.allFinite()) return std::nullopt;
+    if (!gram.allFinite() || !gradient.allFinite()) return std::nullopt;
     const Eigen::VectorXd scale = gram.diagonal().cwiseSqrt().cwiseInverse();
     if (!scale.allFinite()) return std::nullopt;
     const Eigen::MatrixXd scaled = scale.asDiagonal() * gram * scale.asDiagonal();
@@ -119,7 +127,7 @@ std::optional<GaussNewtonStep> normalEquationsStep(const Eigen::MatrixXd& jacobi
     const Eigen::LLT<Eigen::MatrixXd> factor(scaled);
     if (factor.info() != Eigen::Success) return std::nullopt;
     GaussNewtonStep step;
-    step.direction = -(scale.asDiagonal() * factor.solve(scale.asDiagonal() * (jacobian.transpose() * residuals)));
+    step.direction = -(scale.asDiagonal() * factor.solve(scale.asDiagonal() * gradient));
     step.length = std::sqrt(std::max(0.0, step.direction.dot(gram * step.direction)));
     return step;
 }
@@ -148,14 +156,16 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
     const Eigen::Index p = model.parameterCount();
     if (p < 1 || start.size() != p) throw std::invalid_argument("start: needs one value per parameter");
     if (n <= p) throw std::invalid_argument("model: needs more observations than parameters");
-    Eigen::MatrixXd jacobian; // reused from one evaluation to the next
+    Eigen::MatrixXd jacobian; // reused from one evaluation to the next, where the model forms J
+    Eigen::MatrixXd gram;
+    Eigen::VectorXd gradient;
     Eigen::Index evaluations = 0;
     const auto stepAt = [&](const Eigen::VectorXd& parameters, Eigen::VectorXd& residuals) -> std::optional<GaussNewtonStep> {
         ++evaluations;
         model.residualsInto(parameters, residuals);
         if (!std::isfinite(residuals.squaredNorm())) return std::nullopt; // a residual not finite, or too large to square
-        model.jacobianInto(parameters, jacobian);
-        return normalEquationsStep(jacobian, residuals, options.conditionLimit);
+        model.normalEquationsInto(parameters, residuals, jacobian, gram, gradient);
+        return normalEquationsStep(gram, gradient, options.conditionLimit);
     };
     Eigen::VectorXd parameters = start;
     Eigen::VectorXd residuals;

@@ -35,6 +35,14 @@ public:
     {
         jacobian = this->jacobian(parameters);
     }
+    // JᵀJ (p × p) and Jᵀr (p) at θ for the residuals r at θ, what a Gauss–Newton step needs. This
+    // forms J in `jacobianBuffer` and takes dot products of its columns (for the few columns of a
+    // model a fifth of the cost of Eigen's general matrix product, which packs J into blocks
+    // first); a model that knows J's columns as scaled columns of its own overrides it to form
+    // the sums without J.
+    virtual void normalEquationsInto(const Eigen::VectorXd& parameters, const Eigen::VectorXd& residuals,
+                                     Eigen::MatrixXd& jacobianBuffer, Eigen::MatrixXd& gram,
+                                     Eigen::VectorXd& gradient) const;
 };
 
 struct NonlinearLeastSquaresOptions {
