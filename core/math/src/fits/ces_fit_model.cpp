@@ -99,8 +99,8 @@ void CesModel::normalEquationsInto(const Eigen::VectorXd& solver, const Eigen::V
                                    Eigen::MatrixXd& gram, Eigen::VectorXd& gradient) const
 {
     const CesColumns& columns = columnsAt(solver);
-    const auto logit = columns.byLogit;
-    const auto curvature = columns.byCurvature;
+    const Eigen::ArrayXd& logit = columns.byLogit;
+    const Eigen::ArrayXd& curvature = columns.byCurvature;
     const auto level = logs_.logSecond.array() + columns.value; // b + H
     const auto r = residuals.array();
     const double factors[] = {-1.0, -solver(3), -solver(3) * std::exp(solver(2)), -1.0};
