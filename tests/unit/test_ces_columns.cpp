@@ -103,6 +103,29 @@ BOOST_AUTO_TEST_CASE(columns_agree_with_the_formulas_in_long_double)
     BOOST_TEST(worstCurvature <= 1e-12);
 }
 
+BOOST_AUTO_TEST_CASE(a_subnormal_weight_gives_finite_columns)
+{
+    // δ = 1e-310 is subnormal: 1/(δ(1 − δ)) overflows, so these rows take CesCompositeCurve's forms
+    // (the packets would multiply by that infinity). Every column finite, and H, which is of the
+    // order of d, within 1e-15 of the long double formulas; the derivatives by δ and t are
+    // themselves near the subnormal range here and carry only its few significant bits.
+    const Eigen::VectorXd d = logRatios();
+    const double weight = 1e-310;
+    for (const double curvature : curvatures) {
+        isoquant::CesColumns columns;
+        isoquant::evaluateComposite(d, weight, curvature, columns);
+        BOOST_TEST(columns.value.allFinite());
+        BOOST_TEST(columns.byWeight.allFinite());
+        BOOST_TEST(columns.byLogit.allFinite());
+        BOOST_TEST(columns.byCurvature.allFinite());
+        double worstValue = 0;
+        for (Eigen::Index i = 0; i < d.size(); ++i)
+            worstValue = std::max(worstValue, relativeGap(columns.value(i), referenceAt(d(i), weight, curvature).value,
+                                                          std::max(std::fabs(d(i)), 1e-300)));
+        BOOST_TEST(worstValue <= 1e-15, "rho " << curvature);
+    }
+}
+
 BOOST_AUTO_TEST_CASE(both_widths_and_every_length_give_the_same_bits)
 {
     if (!isoquant::column_kernels::fourDoublesAvailable())

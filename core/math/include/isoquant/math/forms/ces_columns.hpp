@@ -9,7 +9,8 @@
 // corrections for expm1 and log1p, no fused multiply-adds, so both widths give the same bits).
 // Each value is within a few units in the last place of the same formulas in long double
 // (tests/unit/test_ces_columns.cpp); CesCompositeCurve takes six scalar calls a row instead.
-// Where δ is 0 or 1 the rows go through CesCompositeCurve itself (its forms handle the infinite logs).
+// Where δ is 0 or 1, or so near that δ(1 − δ) is subnormal, the rows go through CesCompositeCurve
+// itself (its forms handle the infinite logs).
 #pragma once
 
 #include "isoquant/math/numerics/column_kernels.hpp"
