@@ -46,7 +46,7 @@ void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double cu
     columns.byWeight.resize(n);
     columns.byCurvature.resize(n);
     // The packets take 1/(δ(1 − δ)) once; a weight so near 0 or 1 that it overflows (δ subnormal)
-    // goes through CesCompositeCurve with the boundary weights.
+    // goes through CesCompositeCurve's scalar forms, as δ = 0 or 1 does.
     if (weight > 0 && weight < 1 && std::isfinite(1 / (weight * (1 - weight)))) {
         const ces_rows::Shape shape{weight, 1 - weight, std::log(weight), std::log1p(-weight), curvature};
         const auto count = static_cast<std::size_t>(n);
