@@ -25,16 +25,6 @@ std::string unknownChoiceMessage(const Cell& cell, const std::string& argument, 
     return argument + ": " + describe(cell) + " is not " + what + "; use " + offered;
 }
 
-std::string formWord(ProductionForm form)
-{
-    switch (form) {
-    case ProductionForm::cobbDouglas: return "cobb-douglas";
-    case ProductionForm::ces: return "ces";
-    case ProductionForm::translog: return "translog";
-    }
-    return "cobb-douglas";
-}
-
 ProductionForm readFormArgument(const Cell& cell)
 {
     return readChoice<ProductionForm>(cell, argument::form, "a form",
