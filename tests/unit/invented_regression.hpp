@@ -7,6 +7,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <random>
 #include <vector>
 
@@ -39,6 +40,9 @@ inline InventedRegression inventedRegression(Eigen::Index rows, unsigned seed, d
 // Relative agreement of two vectors, measured against the larger norm.
 inline double relativeDifference(const Eigen::VectorXd& a, const Eigen::VectorXd& b)
 {
+    // Vectors of different sizes are as far apart as can be (Eigen without assertions would
+    // subtract the shorter one's length only, and an empty vector would pass any tolerance).
+    if (a.size() != b.size()) return std::numeric_limits<double>::infinity();
     return (a - b).norm() / std::max(a.norm(), b.norm());
 }
 

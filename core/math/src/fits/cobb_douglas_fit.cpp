@@ -21,7 +21,7 @@ namespace {
 //   ln Y = ln A + Σᵢ bᵢ ln xᵢ + Σⱼ cⱼ zⱼ,   or with constant returns imposed
 //   ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + Σⱼ cⱼ zⱼ,  b_k = 1 − Σ_{i<k} bᵢ.
 // The logs of the first pass are kept (n × (1 + slopes) doubles, the size of the data itself), so
-// that the residual pass copies them instead of taking them again: the logs are most of a fit's
+// that the passes after the first read them instead of taking them again: the logs are most of a fit's
 // time (tests/benchmarks/RESULTS.md), the copy is bitwise the same numbers.
 class CobbDouglasRows : public RegressionRows {
 public:
@@ -257,6 +257,7 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     LeastSquaresOptions regressionOptions;
     regressionOptions.covariance = options.covariance;
     regressionOptions.confidenceLevel = options.confidenceLevel;
+    regressionOptions.keepResiduals = false; // no figure reads them (fit_result.hpp)
     ProductionFit fit;
     PanelRegression run;
     try {
@@ -271,7 +272,6 @@ ProductionFit fitCobbDouglas(const ProductionData& data, const ProductionFitOpti
     fit.controlLabels = data.controlLabels;
     fit.status = regression.status;
     fit.summary = regression.summary;
-    fit.residuals = std::move(run.regression.residuals); // not read again below (a million rows: 8 MB)
     fit.regressionInference = regression.inference;
     // The form's parameters come from the base columns; the trend and period effects are reported apart.
     Eigen::MatrixXd covariance = map.transform * regression.inference.covariance.topLeftCorner(baseColumns, baseColumns) *

@@ -178,6 +178,10 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
     const auto groups = static_cast<Eigen::Index>(panel.groupLabels.size());
     if (options.covariance == CovarianceKind::cluster) options.clusters = panel.groupOfRow;
     options.sumExpResiduals = true; // for the smearing factor, while the residuals are in cache
+    // The mean effect's inference reads the within run's residuals; they are dropped after it when
+    // the caller keeps none.
+    const bool keepResiduals = options.keepResiduals;
+    if (effects != EffectsKind::none) options.keepResiduals = true;
 
     LeastSquaresResult run;
     auto fitRows = [&](const RegressionRows& rows) {
@@ -239,6 +243,7 @@ PanelRegression fitPanelRegression(const RegressionRows& base, const PanelColumn
     if (effects == EffectsKind::twoWay)
         result.latestPeriodShift = coefficients(result.firstPeriodColumn + static_cast<Eigen::Index>(result.periodValues.size()) - 2);
     result.smearingFactor = result.regression.sumOfExpResiduals / static_cast<double>(n);
+    if (!keepResiduals) result.regression.residuals = Eigen::VectorXd();
     return result;
 }
 

@@ -197,6 +197,43 @@ FitStatus leastSquaresStatus(const FitSummary& summary, double responseNorm, con
     return status;
 }
 
+// A pass after the factor: the residuals (the extended route has them already) with Σr², Σe^r
+// (LeastSquaresOptions::sumExpResiduals) and the robust meat, which it returns (empty for classical errors).
+Eigen::MatrixXd formResiduals(const RegressionRows& rows, const std::optional<HeldColumns>& held, const LeastSquaresOptions& options,
+                   LeastSquaresFactor& factor, const Eigen::MatrixXd& bread, LeastSquaresResult& result)
+{
+    const Eigen::Index n = rows.rows();
+    const bool robust = options.covariance != CovarianceKind::classical;
+    MeatAccumulator meat(options, bread, n, result.summary.clusterCount, result.summary.residualDegreesOfFreedom);
+    if (factor.residuals.size() != n) factor.residuals.resize(n);
+    const bool needResiduals = result.factorisedInDouble;
+    CompensatedSum sumOfExps;
+    const auto addExps = [&](const Eigen::Ref<const Eigen::VectorXd>& residuals) {
+        if (options.sumExpResiduals) sumOfExps.add(sumOfExactExps(residuals));
+    };
+    if (needResiduals && !robust && held) {
+        // Held in memory: the residuals are formed in place, a block of rows at a time.
+        forEachHeldBlock(*held, n, options.rowsPerBlock, factor.coefficients, factor.residuals,
+                         [&](Eigen::Index, const auto& residuals) { addExps(residuals); });
+    } else if (needResiduals || robust) {
+        forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
+            auto residuals = factor.residuals.segment(first, design.rows());
+            if (needResiduals) {
+                residuals = response;
+                residuals.noalias() -= design * factor.coefficients;
+            }
+            if (robust) meat.add(first, design, residuals);
+            addExps(residuals);
+        });
+    } else {
+        addExps(factor.residuals); // the long double route's, formed with its factor
+    }
+    if (options.sumExpResiduals) result.sumOfExpResiduals = sumOfExps.value();
+    result.residuals = std::move(factor.residuals);
+    result.summary.residualSumOfSquares = result.residuals.squaredNorm();
+    return robust ? meat.meat() : Eigen::MatrixXd();
+}
+
 } // namespace
 
 UnitLeverage::UnitLeverage(Eigen::Index row)
@@ -244,7 +281,6 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     result.interceptColumn = interceptColumn;
     result.factorisedInDouble = chosen.inDouble;
     result.fromNormalEquations = chosen.fromNormalEquations;
-    if (chosen.fromNormalEquations) refineCoefficients(rows, options.rowsPerBlock, factor);
 
     const double df = static_cast<double>(n - allParameters);
     summary.residualDegreesOfFreedom = df;
@@ -254,43 +290,31 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
 
     // (XᵀX)⁻¹ = H·Hᵀ with H = D·P·R⁻¹ (D the column scales, P the pivoting).
     const Eigen::MatrixXd bread = factor.columnScales.asDiagonal() * (factor.permutation * factor.upperInverse);
-    // A second pass: the residuals (the extended route has them already) and the robust meat.
     const bool robust = options.covariance != CovarianceKind::classical;
-    MeatAccumulator meat(options, bread, n, clusterCount, df);
-    if (factor.residuals.size() != n) factor.residuals.resize(n);
-    const bool needResiduals = chosen.inDouble;
     const std::optional<HeldColumns> held = rows.heldColumns();
-    CompensatedSum sumOfExps;
-    const auto addExps = [&](const Eigen::Ref<const Eigen::VectorXd>& residuals) {
-        if (options.sumExpResiduals) sumOfExps.add(sumOfExactExps(residuals));
-    };
-    if (needResiduals && !robust && held) {
-        // Held in memory: the residuals are formed in place, a block of rows at a time.
-        forEachHeldBlock(*held, n, options.rowsPerBlock, factor.coefficients, factor.residuals,
-                         [&](Eigen::Index, const auto& residuals) { addExps(residuals); });
-    } else if (needResiduals || robust) {
-        forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
-            auto residuals = factor.residuals.segment(first, design.rows());
-            if (needResiduals) {
-                residuals = response;
-                residuals.noalias() -= design * factor.coefficients;
-            }
-            if (robust) meat.add(first, design, residuals);
-            addExps(residuals);
-        });
-    } else {
-        addExps(factor.residuals); // the long double route's, formed with its factor
+    // Without residuals to keep, the refinement's pass gives their sums too (one pass, not two).
+    std::optional<ResidualSums> sums;
+    Eigen::MatrixXd meat;
+    if (chosen.fromNormalEquations) {
+        if (!options.keepResiduals && !robust && held)
+            sums = refineWithResidualSums(*held, n, options.rowsPerBlock, factor, options.sumExpResiduals);
+        else
+            refineCoefficients(rows, options.rowsPerBlock, factor);
     }
-    if (options.sumExpResiduals) result.sumOfExpResiduals = sumOfExps.value();
-    result.residuals = std::move(factor.residuals);
-    summary.residualSumOfSquares = result.residuals.squaredNorm();
+    if (sums) {
+        summary.residualSumOfSquares = sums->squares;
+        result.sumOfExpResiduals = sums->exps;
+    } else {
+        meat = formResiduals(rows, held, options, factor, bread, result);
+        if (!options.keepResiduals) result.residuals = Eigen::VectorXd();
+    }
     summary.totalSumOfSquares = interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;
     summary.rSquared = 1.0 - summary.residualSumOfSquares / summary.totalSumOfSquares;
     const double centring = interceptColumn ? 1.0 : 0.0;
     summary.adjustedRSquared = 1.0 - (1.0 - summary.rSquared) * (static_cast<double>(n) - centring) / df;
     summary.residualStandardDeviation = std::sqrt(summary.residualSumOfSquares / df);
 
-    Eigen::MatrixXd covariance = robust ? Eigen::MatrixXd(bread * meat.meat() * bread.transpose())
+    Eigen::MatrixXd covariance = robust ? Eigen::MatrixXd(bread * meat * bread.transpose())
                                         : Eigen::MatrixXd((summary.residualSumOfSquares / df) * (bread * bread.transpose()));
     result.inference = inferParameters(factor.coefficients, std::move(covariance), inferenceDf, options.confidenceLevel);
     addOverallTest(result);

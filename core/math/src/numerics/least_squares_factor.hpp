@@ -10,6 +10,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <optional>
 
 namespace isoquant {
@@ -124,6 +125,23 @@ void forEachHeldBlock(const HeldColumns& held, Eigen::Index rows, Eigen::Index r
 // b += (XᵀX)⁻¹·Xᵀr through the factor. The residuals are not kept (the caller's residual pass
 // forms them from the refined b).
 void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor);
+
+// Σr² and Σe^r of the residuals r of the refined coefficients (exps: NaN unless asked for).
+struct ResidualSums {
+    double squares = 0;
+    double exps = std::numeric_limits<double>::quiet_NaN();
+};
+
+// refineCoefficients over held columns, for a caller that keeps no residuals: the refinement's pass
+// also yields their sums, so the rows are read once after the Gram pass instead of twice. With r the
+// residuals of b before the step δ, r' = r − X·δ those after it, and z = R⁻ᵀ·D·Xᵀr (δ = D·R⁻¹·z):
+//   Σr'² = Σr² − ‖z‖²   (δ solves the normal equations of r: Xᵀr' = 0, so ‖X·δ‖² = δᵀXᵀr = ‖z‖²);
+//   Σe^{r'} = Σe^r·e^{−xᵢᵀδ} = Σe^r − δᵀ·Σxᵢe^{rᵢ} + E,  0 ≤ E ≤ ½·m²·e^m·Σe^r,  m = maxᵢ|xᵢᵀδ|,
+// with m ≤ Σⱼ|δⱼ|·‖X·eⱼ‖. The coefficients are always refined; nothing is returned, and the caller
+// forms the residuals of the refined b in a pass of its own, when that bound on E exceeds 2⁻⁶⁰ of
+// the sum (δ is of order u·κ² relative, so it never does on the designs this route accepts).
+std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
+                                                   LeastSquaresFactor& factor, bool sumExps);
 
 // Column-pivoting Householder QR in long double (64-bit mantissa) of the whole design, scaled by
 // `columnScales`: the NIST StRD Wampler and Filip sets need the extra digits. Fills residuals.

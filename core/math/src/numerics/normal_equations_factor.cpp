@@ -1,6 +1,8 @@
 // The normal-equations route of the least-squares factor (least_squares_factor.hpp).
 #include "numerics/least_squares_factor.hpp"
 
+#include "isoquant/math/numerics/exact_elementwise.hpp"
+
 #include <Eigen/Cholesky>
 
 #include <cmath>
@@ -104,36 +106,96 @@ void residualsOfHeldRows(const HeldColumns& held, Eigen::Index first, const Eige
     }
 }
 
+namespace {
+
+// Σᵢ xᵢⱼ·vᵢ over the rows first … first + v.size() − 1 of held column j (a column of ones: Σv).
+double heldColumnDot(const HeldColumns& held, std::size_t j, Eigen::Index first, const Eigen::Ref<const Eigen::VectorXd>& v)
+{
+    const double* column = held.design[j];
+    return column == nullptr ? v.sum() : Eigen::Map<const Eigen::VectorXd>(column + first, v.size()).dot(v);
+}
+
+// Xᵀr with r = y − X·b over held columns, in place (no block is copied, so the pass reads each value
+// once from memory); visit(first, r) sees each block of residuals while it is in cache.
+template <typename Visit>
+Eigen::VectorXd heldGradient(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
+                             const Eigen::VectorXd& coefficients, Visit&& visit)
+{
+    const Eigen::Index p = coefficients.size();
+    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(p);
+    Eigen::VectorXd residuals(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows)));
+    forEachHeldBlock(held, rows, rowsPerBlock, coefficients, residuals, [&](Eigen::Index first, const auto& blockResiduals) {
+        for (Eigen::Index j = 0; j < p; ++j) gradient(j) += heldColumnDot(held, static_cast<std::size_t>(j), first, blockResiduals);
+        visit(first, blockResiduals);
+    });
+    return gradient;
+}
+
+struct RefinementStep {
+    Eigen::VectorXd projected; // z = R⁻ᵀ·D·Xᵀr
+    Eigen::VectorXd delta;     // δ = D·R⁻¹·z, added to the coefficients
+};
+
+// δ = (XᵀX)⁻¹·Xᵀr through the factor: XᵀX = D⁻¹RᵀRD⁻¹, so δ = D·R⁻¹R⁻ᵀ·D·Xᵀr; b += δ.
+RefinementStep applyRefinement(LeastSquaresFactor& factor, const Eigen::VectorXd& gradient)
+{
+    RefinementStep step;
+    step.projected = factor.upper.transpose().triangularView<Eigen::Lower>().solve(factor.columnScales.cwiseProduct(gradient));
+    step.delta = factor.columnScales.cwiseProduct(factor.upper.triangularView<Eigen::Upper>().solve(step.projected));
+    factor.coefficients += step.delta;
+    return step;
+}
+
+// E ≤ 2⁻⁶⁰·Σe^r (least_squares_factor.hpp, refineWithResidualSums).
+const double firstOrderExpsLimit = std::ldexp(1.0, -60);
+
+} // namespace
+
 void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor)
 {
-    // δ = (XᵀX)⁻¹·Xᵀr with r = y − X·b, through the factor: XᵀX = D⁻¹RᵀRD⁻¹, so δ = D·R⁻¹R⁻ᵀ·D·Xᵀr.
-    const Eigen::Index p = rows.columns();
-    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(p);
-    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows.rows()));
-    Eigen::VectorXd residuals(blockRows);
     if (const std::optional<HeldColumns> held = rows.heldColumns()) {
-        // In place: no block is copied, so the pass reads each value once from memory.
-        forEachHeldBlock(*held, rows.rows(), rowsPerBlock, factor.coefficients, residuals,
-                         [&](Eigen::Index first, const auto& blockResiduals) {
-                             for (Eigen::Index j = 0; j < p; ++j) {
-                                 const double* column = held->design[static_cast<std::size_t>(j)];
-                                 gradient(j) += column == nullptr ? blockResiduals.sum()
-                                                                  : Eigen::Map<const Eigen::VectorXd>(column + first, blockResiduals.size())
-                                                                        .dot(blockResiduals);
-                             }
-                         });
-    } else {
-        forEachBlock(rows, rowsPerBlock, [&](Eigen::Index, const auto& design, const auto& response) {
-            auto blockResiduals = residuals.head(design.rows());
-            blockResiduals = response;
-            blockResiduals.noalias() -= design * factor.coefficients;
-            gradient.noalias() += design.transpose() * blockResiduals;
-        });
+        applyRefinement(factor, heldGradient(*held, rows.rows(), rowsPerBlock, factor.coefficients, [](Eigen::Index, const auto&) {}));
+        return;
     }
-    const Eigen::VectorXd projected =
-        factor.upper.transpose().triangularView<Eigen::Lower>().solve(factor.columnScales.cwiseProduct(gradient));
-    const Eigen::VectorXd step = factor.upper.triangularView<Eigen::Upper>().solve(projected);
-    factor.coefficients += factor.columnScales.cwiseProduct(step);
+    Eigen::VectorXd gradient = Eigen::VectorXd::Zero(rows.columns());
+    Eigen::VectorXd residuals(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows.rows())));
+    forEachBlock(rows, rowsPerBlock, [&](Eigen::Index, const auto& design, const auto& response) {
+        auto blockResiduals = residuals.head(design.rows());
+        blockResiduals = response;
+        blockResiduals.noalias() -= design * factor.coefficients;
+        gradient.noalias() += design.transpose() * blockResiduals;
+    });
+    applyRefinement(factor, gradient);
+}
+
+std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
+                                                   LeastSquaresFactor& factor, bool sumExps)
+{
+    const Eigen::Index p = factor.coefficients.size();
+    CompensatedSum squares;
+    CompensatedSum exps;
+    Eigen::VectorXd weightedExps = Eigen::VectorXd::Zero(p); // Σ xᵢⱼ·e^{rᵢ}
+    Eigen::VectorXd blockExps(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows)));
+    const Eigen::VectorXd gradient =
+        heldGradient(held, rows, rowsPerBlock, factor.coefficients, [&](Eigen::Index first, const auto& residuals) {
+            squares.add(residuals.squaredNorm());
+            if (!sumExps) return;
+            auto blockOfExps = blockExps.head(residuals.size());
+            blockOfExps = residuals;
+            exactExpsInPlace(blockOfExps.data(), blockOfExps.size());
+            exps.add(blockOfExps.sum());
+            for (Eigen::Index j = 0; j < p; ++j) weightedExps(j) += heldColumnDot(held, static_cast<std::size_t>(j), first, blockOfExps);
+        });
+    const RefinementStep step = applyRefinement(factor, gradient);
+    ResidualSums sums;
+    sums.squares = std::max(0.0, squares.value() - step.projected.squaredNorm());
+    if (!sumExps) return sums;
+    double largestShift = 0; // m ≤ Σⱼ|δⱼ|·‖X·eⱼ‖, ‖X·eⱼ‖ = ‖R·eⱼ‖/Dⱼ
+    for (Eigen::Index j = 0; j < p; ++j)
+        largestShift += std::fabs(step.delta(j)) * factor.upper.col(j).norm() / factor.columnScales(j);
+    if (!(0.5 * largestShift * largestShift * std::exp(largestShift) <= firstOrderExpsLimit)) return std::nullopt;
+    sums.exps = exps.value() - step.delta.dot(weightedExps);
+    return sums;
 }
 
 } // namespace isoquant

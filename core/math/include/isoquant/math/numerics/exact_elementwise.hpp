@@ -33,6 +33,17 @@ inline void exactLogs(const double* values, double* out, Eigen::Index count)
     for (Eigen::Index i = 0; i < count; ++i) out[i] = std::log(values[i]);
 }
 
+// values[i] = e^values[i] for a column held contiguously, by the rule above.
+inline void exactExpsInPlace(double* values, Eigen::Index count)
+{
+    Eigen::Map<Eigen::ArrayXd> column(values, count);
+    if (count == 0 || column.minCoeff() >= logOfSmallestNormal) {
+        column_kernels::exps(values, values, static_cast<std::size_t>(count));
+        return;
+    }
+    column = column.unaryExpr([](double value) { return std::exp(value); });
+}
+
 template <typename Derived>
 typename Derived::PlainObject exactLog(const Eigen::ArrayBase<Derived>& values)
 {
@@ -47,11 +58,8 @@ typename Derived::PlainObject exactExp(const Eigen::ArrayBase<Derived>& values)
 {
     static_assert(std::is_same_v<typename Derived::Scalar, double>, "columns of doubles only");
     typename Derived::PlainObject plain = values;
-    if (plain.size() == 0 || plain.minCoeff() >= logOfSmallestNormal) {
-        column_kernels::exps(plain.data(), plain.data(), static_cast<std::size_t>(plain.size()));
-        return plain;
-    }
-    return plain.unaryExpr([](double value) { return std::exp(value); });
+    exactExpsInPlace(plain.data(), plain.size());
+    return plain;
 }
 
 // A running sum with Neumaier's compensation: the rounding of each addition is kept apart and
@@ -82,10 +90,7 @@ inline double sumOfExactExps(const Eigen::Ref<const Eigen::VectorXd>& values)
         const Eigen::Index count = std::min(chunk, values.size() - first);
         Eigen::Map<Eigen::ArrayXd> out(exps.data(), count);
         out = values.segment(first, count).array();
-        if (out.minCoeff() >= logOfSmallestNormal)
-            column_kernels::exps(out.data(), out.data(), static_cast<std::size_t>(count));
-        else
-            out = out.unaryExpr([](double value) { return std::exp(value); });
+        exactExpsInPlace(out.data(), count);
         sum.add(out.sum());
     }
     return sum.value();

@@ -67,6 +67,11 @@ struct LeastSquaresOptions {
     // When set, the pass that forms the residuals also sums e^rᵢ while each block of them is in
     // cache (LeastSquaresResult::sumOfExpResiduals; Duan's smearing factor is its mean).
     bool sumExpResiduals = false;
+    // When false, LeastSquaresResult::residuals comes back empty (a million rows: 8 MB less), and on
+    // the normal-equations route over held columns with classical errors the refinement's pass also
+    // forms Σr² and Σe^r, so the rows are read once after the Gram pass instead of twice
+    // (least_squares_factor.hpp, refineWithResidualSums).
+    bool keepResiduals = true;
     // Rows factorised at a time by the double route (a TSQR: each block is stacked under the
     // triangular factor so far), and visited at a time by the passes for residuals and robust
     // errors. Memory beyond the results stays O(rowsPerBlock·p) for any n; results do not depend
@@ -82,7 +87,7 @@ struct LeastSquaresResult {
     // Coefficients in inference.estimates; t and p on summary.inferenceDegreesOfFreedom.
     ParameterInference inference;
     FitSummary summary;
-    Eigen::VectorXd residuals;
+    Eigen::VectorXd residuals; // empty unless LeastSquaresOptions::keepResiduals
     double sumOfExpResiduals = std::numeric_limits<double>::quiet_NaN(); // Σ e^rᵢ, with sumExpResiduals
     std::optional<Eigen::Index> interceptColumn;
     FitStatus status;
