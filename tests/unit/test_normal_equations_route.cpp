@@ -100,6 +100,28 @@ BOOST_AUTO_TEST_CASE(rows_in_blocks_give_the_same_fit_as_rows_held_in_memory)
     BOOST_TEST(relativeDifference(held.inference.standardErrors, blocks.inference.standardErrors) <= 1e-14);
 }
 
+// Rows filled in longer runs than they are summed (LeastSquaresOptions::rowsPerFill) give the same
+// partial sums whenever the run is a whole number of summed blocks: every digit of the fit, the
+// Cobb-Douglas fit's kept logs included, is that of 512-row blocks.
+BOOST_AUTO_TEST_CASE(longer_fills_change_no_digit)
+{
+    const Regression data = invented(manyRows);
+    isoquant::LeastSquaresOptions options;
+    options.sumExpResiduals = true;
+    options.keepResiduals = false;
+    options.rowsPerFill = options.rowsPerBlock;
+    const auto reference = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+    for (const Eigen::Index fill : {Eigen::Index{4096}, Eigen::Index{8192}, manyRows}) {
+        options.rowsPerFill = fill;
+        const auto fit = isoquant::fitLeastSquares(data.design, data.response, 0, options);
+        BOOST_TEST(fit.fromNormalEquations);
+        BOOST_TEST((fit.inference.estimates.array() == reference.inference.estimates.array()).all());
+        BOOST_TEST((fit.inference.standardErrors.array() == reference.inference.standardErrors.array()).all());
+        BOOST_TEST(fit.summary.residualSumOfSquares == reference.summary.residualSumOfSquares);
+        BOOST_TEST(fit.sumOfExpResiduals == reference.sumOfExpResiduals);
+    }
+}
+
 // Power-of-two units are exact on this route too: squares scale by powers of four, the scaled
 // Gram matrix is the same bit for bit, and so is every digit of the fit.
 BOOST_AUTO_TEST_CASE(power_of_two_units_change_no_digit)

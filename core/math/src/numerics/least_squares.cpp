@@ -47,6 +47,7 @@ void validateShape(const RegressionRows& rows, std::optional<Eigen::Index> inter
     if (options.absorbedParameters < 0 || rows.rows() <= rows.columns() + options.absorbedParameters)
         throw std::invalid_argument("design: needs more rows than parameters, absorbed ones included");
     if (options.rowsPerBlock < 1) throw std::invalid_argument("rowsPerBlock: must be at least 1");
+    if (options.rowsPerFill < 1) throw std::invalid_argument("rowsPerFill: must be at least 1");
 }
 
 // G, after checking that every row has a cluster in 0 … G−1 and that G ≥ 2.
@@ -156,7 +157,7 @@ struct ChosenFactor {
 std::optional<ChosenFactor> normalEquationsFactor(const RegressionRows& rows, const LeastSquaresOptions& options)
 {
     if (rows.rows() < options.normalEquationsFromRows || !(options.doublePrecisionErrorLimit > 0)) return std::nullopt;
-    std::optional<DoubleRouteFactor> normal = factorByNormalEquations(rows, options.rowsPerBlock);
+    std::optional<DoubleRouteFactor> normal = factorByNormalEquations(rows, options.rowsPerFill, options.rowsPerBlock);
     if (!normal || !(normal->errorEstimate <= options.doublePrecisionErrorLimit)) return std::nullopt;
     ChosenFactor chosen;
     chosen.factor = std::move(normal->factor);
@@ -200,7 +201,8 @@ FitStatus leastSquaresStatus(const FitSummary& summary, double responseNorm, con
 // A pass after the factor: the residuals (the extended route has them already) with Σr², Σe^r
 // (LeastSquaresOptions::sumExpResiduals) and the robust meat, which it returns (empty for classical errors).
 Eigen::MatrixXd formResiduals(const RegressionRows& rows, const std::optional<HeldColumns>& held, const LeastSquaresOptions& options,
-                   LeastSquaresFactor& factor, const Eigen::MatrixXd& bread, LeastSquaresResult& result)
+                              Eigen::Index rowsPerBlock, LeastSquaresFactor& factor, const Eigen::MatrixXd& bread,
+                              LeastSquaresResult& result)
 {
     const Eigen::Index n = rows.rows();
     const bool robust = options.covariance != CovarianceKind::classical;
@@ -213,10 +215,10 @@ Eigen::MatrixXd formResiduals(const RegressionRows& rows, const std::optional<He
     };
     if (needResiduals && !robust && held) {
         // Held in memory: the residuals are formed in place, a block of rows at a time.
-        forEachHeldBlock(*held, n, options.rowsPerBlock, factor.coefficients, factor.residuals,
+        forEachHeldBlock(*held, n, rowsPerBlock, factor.coefficients, factor.residuals,
                          [&](Eigen::Index, const auto& residuals) { addExps(residuals); });
     } else if (needResiduals || robust) {
-        forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
+        forEachBlock(rows, rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
             auto residuals = factor.residuals.segment(first, design.rows());
             if (needResiduals) {
                 residuals = response;
@@ -297,15 +299,16 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
     Eigen::MatrixXd meat;
     if (chosen.fromNormalEquations) {
         if (!options.keepResiduals && !robust && held)
-            sums = refineWithResidualSums(*held, n, options.rowsPerBlock, factor, options.sumExpResiduals);
+            sums = refineWithResidualSums(*held, n, options.rowsPerFill, options.rowsPerBlock, factor,
+                                          options.sumExpResiduals);
         else
-            refineCoefficients(rows, options.rowsPerBlock, factor);
+            refineCoefficients(rows, options.rowsPerFill, options.rowsPerBlock, factor);
     }
     if (sums) {
         summary.residualSumOfSquares = sums->squares;
         result.sumOfExpResiduals = sums->exps;
     } else {
-        meat = formResiduals(rows, held, options, factor, bread, result);
+        meat = formResiduals(rows, held, options, options.rowsPerBlock, factor, bread, result);
         if (!options.keepResiduals) result.residuals = Eigen::VectorXd();
     }
     summary.totalSumOfSquares = interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;

@@ -97,7 +97,10 @@ DoubleRouteFactor factorByBlocksInDouble(const RegressionRows& rows, Eigen::Inde
 // finite or values too large or too small to square unscaled, when the Cholesky factorisation
 // fails, or when u·κ² is too large for one step of refinement to suffice
 // (normal_equations_factor.cpp).
-std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerBlock);
+// The rows are filled `rowsPerFill` at a time and summed `rowsPerSum` at a time (the partial sums
+// of a longer run would carry more rounding).
+std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerFill,
+                                                         Eigen::Index rowsPerSum);
 
 // r = y − X·b for the rows first … first + residuals.size() − 1 of held columns: each row's terms
 // subtracted in column order, whatever the block, so the result does not depend on how the rows
@@ -124,7 +127,9 @@ void forEachHeldBlock(const HeldColumns& held, Eigen::Index rows, Eigen::Index r
 // One step of iterative refinement of factor.coefficients: a pass forms r = y − X·b and Xᵀr, and
 // b += (XᵀX)⁻¹·Xᵀr through the factor. The residuals are not kept (the caller's residual pass
 // forms them from the refined b).
-void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor);
+// Held rows are visited `rowsPerFill` at a time and summed `rowsPerBlock` at a time; rows that are
+// not held, `rowsPerBlock` at a time.
+void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerFill, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor);
 
 // Σr² and Σe^r of the residuals r of the refined coefficients (exps: NaN unless asked for).
 struct ResidualSums {
@@ -140,8 +145,8 @@ struct ResidualSums {
 // with m ≤ Σⱼ|δⱼ|·‖X·eⱼ‖. The coefficients are always refined; nothing is returned, and the caller
 // forms the residuals of the refined b in a pass of its own, when that bound on E exceeds 2⁻⁶⁰ of
 // the sum (δ is of order u·κ² relative, so it never does on the designs this route accepts).
-std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
-                                                   LeastSquaresFactor& factor, bool sumExps);
+std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerFill,
+                                                   Eigen::Index rowsPerBlock, LeastSquaresFactor& factor, bool sumExps);
 
 // Column-pivoting Householder QR in long double (64-bit mantissa) of the whole design, scaled by
 // `columnScales`: the NIST StRD Wampler and Filip sets need the extra digits. Fills residuals.

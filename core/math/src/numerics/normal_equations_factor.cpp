@@ -30,30 +30,34 @@ constexpr double squaredConditionLimit = 1e-9;
 
 } // namespace
 
-std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerBlock)
+std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerFill,
+                                                         Eigen::Index rowsPerSum)
 {
     const Eigen::Index n = rows.rows();
     const Eigen::Index p = rows.columns();
     const Eigen::Index width = p + 1; // the design and the response
-    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, n));
+    const Eigen::Index fillRows = std::max<Eigen::Index>(1, std::min(rowsPerFill, n));
+    const Eigen::Index sumRows = std::max<Eigen::Index>(1, std::min(rowsPerSum, fillRows));
 
     // One pass: G = [X y]ᵀ[X y] and the response's moments. A value that is not finite makes its
     // column's diagonal entry so; so does a square that overflows.
-    Eigen::MatrixXd block(blockRows, width);
+    Eigen::MatrixXd block(fillRows, width);
     Eigen::MatrixXd gram = Eigen::MatrixXd::Zero(width, width);
     DoubleRouteFactor result;
     double counted = 0;
-    for (Eigen::Index first = 0; first < n; first += blockRows) {
-        const Eigen::Index count = std::min(blockRows, n - first);
-        auto rowsOfBlock = block.topRows(count);
-        rows.fill(first, rowsOfBlock.leftCols(p), rowsOfBlock.col(p));
-        addToMoments(result.response, counted, rowsOfBlock.col(p));
-        // The lower triangle, a column at a time: Eigen's transposed matrix-vector product forms
-        // several dot products per pass over the block, so their additions do not wait on each
-        // other (one dot product at a time waits on its own additions; rankUpdate packs the
-        // block first, which costs more than these few columns take).
-        for (Eigen::Index j = 0; j < width; ++j)
-            gram.col(j).tail(width - j).noalias() += rowsOfBlock.rightCols(width - j).transpose() * rowsOfBlock.col(j);
+    for (Eigen::Index first = 0; first < n; first += fillRows) {
+        const Eigen::Index filled = std::min(fillRows, n - first);
+        rows.fill(first, block.topLeftCorner(filled, p), block.col(p).head(filled));
+        for (Eigen::Index sumFirst = 0; sumFirst < filled; sumFirst += sumRows) {
+            auto rowsOfBlock = block.middleRows(sumFirst, std::min(sumRows, filled - sumFirst));
+            addToMoments(result.response, counted, rowsOfBlock.col(p));
+            // The lower triangle, a column at a time: Eigen's transposed matrix-vector product forms
+            // several dot products per pass over the block, so their additions do not wait on each
+            // other (one dot product at a time waits on its own additions; rankUpdate packs the
+            // block first, which costs more than these few columns take).
+            for (Eigen::Index j = 0; j < width; ++j)
+                gram.col(j).tail(width - j).noalias() += rowsOfBlock.rightCols(width - j).transpose() * rowsOfBlock.col(j);
+        }
     }
     gram.triangularView<Eigen::StrictlyUpper>() = gram.transpose();
     if (!gram.allFinite()) return std::nullopt;
@@ -116,17 +120,24 @@ double heldColumnDot(const HeldColumns& held, std::size_t j, Eigen::Index first,
 }
 
 // Xᵀr with r = y − X·b over held columns, in place (no block is copied, so the pass reads each value
-// once from memory); visit(first, r) sees each block of residuals while it is in cache.
+// once from memory), the residuals formed `rowsPerFill` rows at a time and summed `rowsPerSum` at a
+// time; visit(first, r) sees each summed block of residuals while it is in cache.
 template <typename Visit>
-Eigen::VectorXd heldGradient(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
+Eigen::VectorXd heldGradient(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerFill, Eigen::Index rowsPerSum,
                              const Eigen::VectorXd& coefficients, Visit&& visit)
 {
     const Eigen::Index p = coefficients.size();
     Eigen::VectorXd gradient = Eigen::VectorXd::Zero(p);
-    Eigen::VectorXd residuals(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows)));
-    forEachHeldBlock(held, rows, rowsPerBlock, coefficients, residuals, [&](Eigen::Index first, const auto& blockResiduals) {
-        for (Eigen::Index j = 0; j < p; ++j) gradient(j) += heldColumnDot(held, static_cast<std::size_t>(j), first, blockResiduals);
-        visit(first, blockResiduals);
+    const Eigen::Index fillRows = std::max<Eigen::Index>(1, std::min(rowsPerFill, rows));
+    const Eigen::Index sumRows = std::max<Eigen::Index>(1, std::min(rowsPerSum, fillRows));
+    Eigen::VectorXd residuals(fillRows);
+    forEachHeldBlock(held, rows, fillRows, coefficients, residuals, [&](Eigen::Index first, const auto& filled) {
+        for (Eigen::Index sumFirst = 0; sumFirst < filled.size(); sumFirst += sumRows) {
+            const auto blockResiduals = filled.segment(sumFirst, std::min(sumRows, filled.size() - sumFirst));
+            for (Eigen::Index j = 0; j < p; ++j)
+                gradient(j) += heldColumnDot(held, static_cast<std::size_t>(j), first + sumFirst, blockResiduals);
+            visit(first + sumFirst, blockResiduals);
+        }
     });
     return gradient;
 }
@@ -151,10 +162,11 @@ const double firstOrderExpsLimit = std::ldexp(1.0, -60);
 
 } // namespace
 
-void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor)
+void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerFill, Eigen::Index rowsPerBlock, LeastSquaresFactor& factor)
 {
     if (const std::optional<HeldColumns> held = rows.heldColumns()) {
-        applyRefinement(factor, heldGradient(*held, rows.rows(), rowsPerBlock, factor.coefficients, [](Eigen::Index, const auto&) {}));
+        applyRefinement(factor, heldGradient(*held, rows.rows(), rowsPerFill, rowsPerBlock, factor.coefficients,
+                                             [](Eigen::Index, const auto&) {}));
         return;
     }
     Eigen::VectorXd gradient = Eigen::VectorXd::Zero(rows.columns());
@@ -168,8 +180,8 @@ void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerBlock, L
     applyRefinement(factor, gradient);
 }
 
-std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerBlock,
-                                                   LeastSquaresFactor& factor, bool sumExps)
+std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerFill,
+                                                   Eigen::Index rowsPerBlock, LeastSquaresFactor& factor, bool sumExps)
 {
     const Eigen::Index p = factor.coefficients.size();
     CompensatedSum squares;
@@ -177,7 +189,7 @@ std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eige
     Eigen::VectorXd weightedExps = Eigen::VectorXd::Zero(p); // Σ xᵢⱼ·e^{rᵢ}
     Eigen::VectorXd blockExps(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows)));
     const Eigen::VectorXd gradient =
-        heldGradient(held, rows, rowsPerBlock, factor.coefficients, [&](Eigen::Index first, const auto& residuals) {
+        heldGradient(held, rows, rowsPerFill, rowsPerBlock, factor.coefficients, [&](Eigen::Index first, const auto& residuals) {
             squares.add(residuals.squaredNorm());
             if (!sumExps) return;
             auto blockOfExps = blockExps.head(residuals.size());
