@@ -37,17 +37,22 @@ bool sameValue(double a, double b)
 // The number of values in `values` told apart by sameValue (sorted, each compared with the last
 // kept), counted up to `enough`. For positive values sameValue(v, kept) with v ≥ kept holds
 // exactly while v·(1 − tolerance) ≤ kept, so the next value kept is the smallest v not same as the
-// last: found by linear passes, with no sort (a million-row column costs a sort about 0.1 s).
+// last: found by linear passes, with no sort (a million-row column costs a sort about 0.1 s). The
+// last pass only asks whether such a value exists, so it stops at the first (mostly the first row).
 std::size_t distinctValues(std::vector<double> values, std::size_t enough)
 {
-    if (!values.empty() && *std::min_element(values.begin(), values.end()) > 0) {
-        double kept = *std::min_element(values.begin(), values.end());
+    const auto smallest = std::min_element(values.begin(), values.end());
+    if (smallest != values.end() && *smallest > 0) {
+        double kept = *smallest;
         std::size_t count = 1;
         while (count < enough) {
+            const bool last = count + 1 == enough;
             bool found = false;
             double next = 0;
-            for (const double value : values)
+            for (const double value : values) {
                 if (value > kept && !sameValue(value, kept) && (!found || value < next)) found = true, next = value;
+                if (found && last) break;
+            }
             if (!found) break;
             kept = next;
             ++count;
