@@ -54,25 +54,28 @@ template <typename Packet> void compositePacket(const double* logRatio, const Sh
     const Packet small = pcmp_le(pabs(u), one);
     const Packet a = padd(pset1<Packet>(shape.logWeight), u);
     const Packet c = pset1<Packet>(shape.logComplement);
-    const column_kernels::ExpPair<Packet> e =
-        column_kernels::expAndExpm1(pselect(small, u, pmul(minusOne, pabs(psub(a, c)))));
-    const Packet logged = column_kernels::log1p(pselect(small, pmul(weight, e.expm1), e.exp));
+    // expm1(u) of the rows with |u| ≤ 1 by its series; r = e^(−|a − c|) only where some row of the
+    // packet has |u| > 1 (or u NaN), which at the usual curvatures is a packet in ten or fewer.
+    const Packet expm1 = column_kernels::expm1OnUnitInterval(pselect(small, u, pzero(u)));
+    Packet exp = pzero(u);
+    if (predux_any(pandnot(ptrue(u), small))) exp = pexp(pselect(small, pzero(u), pmul(minusOne, pabs(psub(a, c)))));
+    const Packet logged = column_kernels::log1p(pselect(small, pmul(weight, expm1), exp));
     const Packet cumulant = pselect(small, logged, padd(pmax(a, c), logged)); // K
 
-    // Four divisions a row (Kahan's two, 1/u, and 1/m or 1/(1 + r)): the rest are products.
-    const Packet mix = padd(one, pmul(weight, e.expm1));
+    // Three divisions a row (Kahan's log1p, 1/u, and 1/m or 1/(1 + r)): the rest are products.
+    const Packet mix = padd(one, pmul(weight, expm1));
     const Packet firstLarger = pcmp_le(c, a);
-    const Packet reciprocal = pdiv(one, pselect(small, mix, padd(one, e.exp))); // 1/m or 1/(1 + r)
-    const Packet larger = reciprocal;                                          // 1/(1 + r)
-    const Packet smaller = pmul(e.exp, reciprocal);                            // r/(1 + r)
-    const Packet share = pselect(small, pmul(pmul(weight, padd(one, e.expm1)), reciprocal),
+    const Packet reciprocal = pdiv(one, pselect(small, mix, padd(one, exp))); // 1/m or 1/(1 + r)
+    const Packet larger = reciprocal;                                        // 1/(1 + r)
+    const Packet smaller = pmul(exp, reciprocal);                            // r/(1 + r)
+    const Packet share = pselect(small, pmul(pmul(weight, padd(one, expm1)), reciprocal),
                                  pselect(firstLarger, larger, smaller));
     const Packet gap = psub(pmul(share, complement), pmul(weight, pselect(firstLarger, smaller, larger))); // π − δ
 
     const Packet zero = pcmp_eq(u, pzero(u));
     const Packet overU = pdiv(one, u);
     const Packet dOverU = pmul(d, overU);
-    const Packet byWeight = pselect(small, pmul(pmul(dOverU, e.expm1), reciprocal),
+    const Packet byWeight = pselect(small, pmul(pmul(dOverU, expm1), reciprocal),
                                     pmul(dOverU, pmul(gap, pset1<Packet>(1 / q))));
     pstoreu(out.value, pselect(zero, pmul(weight, d), pmul(dOverU, cumulant)));
     pstoreu(out.byWeight, pselect(zero, d, byWeight));

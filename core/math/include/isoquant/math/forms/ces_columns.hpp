@@ -3,10 +3,11 @@
 //
 // The formulas and branches are those of CesCompositeCurve (ces.cpp), K(u) = ln(δeᵘ + 1 − δ),
 // u = −ρ·d, H = d·K(u)/u: for |u| ≤ 1 K = log1p(δ·expm1(u)), for |u| > 1 the log-sum-exp form,
-// ∂H/∂ρ from its series for |u| < 10⁻³. At an interior δ each row takes one exp (with expm1 from
-// it) and one log1p, shared by K, π = ∂H/∂d and the derivatives, in packets of four rows where the
-// processor has AVX2, else two (numerics/column_kernels.hpp: Eigen's packet exp and log, Kahan's
-// corrections for expm1 and log1p, no fused multiply-adds, so both widths give the same bits).
+// ∂H/∂ρ from its series for |u| < 10⁻³. At an interior δ each row takes one expm1 (|u| ≤ 1, by its
+// series) or one exp (|u| > 1), and one log1p, shared by K, π = ∂H/∂d and the derivatives, in
+// packets of four rows where the processor has AVX2, else two (numerics/column_kernels_packet.hpp:
+// Eigen's packet exp and log, Kahan's correction for log1p, no fused multiply-adds, so both widths
+// give the same bits; a packet whose rows all have |u| ≤ 1 takes no exp).
 // Each value is within a few units in the last place of the same formulas in long double
 // (tests/unit/test_ces_columns.cpp); CesCompositeCurve takes six scalar calls a row instead.
 // Where δ is 0 or 1, or so near that δ(1 − δ) is subnormal, the rows go through CesCompositeCurve
