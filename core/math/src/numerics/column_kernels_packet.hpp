@@ -34,9 +34,11 @@ template <typename Packet> ExpPair<Packet> expAndExpm1(const Packet& z)
 
 // eᶻ − 1 for |z| ≤ 1 with neither exp nor log nor division: z + z²·Σⱼ zʲ/(j + 2)!, cut after
 // z¹⁶/18! (what is left, at most 1/19! ≈ 8e-18, is below a tenth of a unit in the last place of
-// |eᶻ − 1| ≥ 0.63·|z|), by Horner's rule. The factorials up to 18! < 2⁵³ are exact doubles, so
-// every coefficient is correctly rounded. Against expm1l on 20 million points of [−1, 1]: 1.5 units
-// in the last place at most (at z ≈ −0.994, where z and the tail partly cancel).
+// |eᶻ − 1| ≥ 0.63·|z|), by two Horner chains in z², one of the even and one of the odd
+// coefficients, which run side by side (one chain of 16 dependent steps made the rows wait on its
+// latency: 6 % of the ces fit). The factorials up to 18! < 2⁵³ are exact doubles, so every
+// coefficient is correctly rounded. Against expm1l on 20 million points of [−1, 1]: 1.9 units in
+// the last place at most (one chain: 1.5), where z and the tail partly cancel near z = −1.
 template <typename Packet> Packet expm1OnUnitInterval(const Packet& z)
 {
     using namespace Eigen::internal;
@@ -45,10 +47,12 @@ template <typename Packet> Packet expm1OnUnitInterval(const Packet& z)
         1.0 / 40320,       1.0 / 362880,      1.0 / 3628800,      1.0 / 39916800,      1.0 / 479001600,
         1.0 / 6227020800.0, 1.0 / 87178291200.0, 1.0 / 1307674368000.0, 1.0 / 20922789888000.0,
         1.0 / 355687428096000.0, 1.0 / 6402373705728000.0};
-    constexpr int last = static_cast<int>(sizeof(inverseFactorials) / sizeof(double)) - 1;
-    Packet tail = pset1<Packet>(inverseFactorials[last]);
-    for (int j = last - 1; j >= 0; --j) tail = padd(pmul(tail, z), pset1<Packet>(inverseFactorials[j]));
-    return padd(z, pmul(pmul(z, z), tail));
+    const Packet square = pmul(z, z);
+    Packet even = pset1<Packet>(inverseFactorials[16]);
+    for (int j = 14; j >= 0; j -= 2) even = padd(pmul(even, square), pset1<Packet>(inverseFactorials[j]));
+    Packet odd = pset1<Packet>(inverseFactorials[15]);
+    for (int j = 13; j >= 1; j -= 2) odd = padd(pmul(odd, square), pset1<Packet>(inverseFactorials[j]));
+    return padd(z, pmul(square, padd(even, pmul(z, odd))));
 }
 
 // ln(1 + w) = w·ln(1 + w)/((1 + w) − 1) with 1 + w rounded, which cancels its rounding (Kahan),
