@@ -131,7 +131,7 @@ struct ProductionFit {
     // AIC, BIC, condition number.
     FitSummary summary;
     // Of ln Y, one per row; empty for the Cobb-Douglas form, whose figures come from their sums
-    // (a million rows would hold 8 MB in the fit cache, and the pass that formed them cost 10 % of the fit).
+    // (a million rows would hold 8 MB in the fit cache, and forming them took a pass over the rows).
     Eigen::VectorXd residuals;
     // One verdict (fit_status.hpp): ok, illConditioned or exactFit for least squares; for the ces
     // also notConverged, stopped, boundary (where: CesDetails::boundary) or notIdentified, the
