@@ -22,7 +22,7 @@ namespace {
 //   ln(Y/x_k) = ln A + Σ_{i<k} bᵢ ln(xᵢ/x_k) + Σⱼ cⱼ zⱼ,  b_k = 1 − Σ_{i<k} bᵢ.
 // The logs of the first pass are kept (n × (1 + slopes) doubles, the size of the data itself), so
 // that the passes after the first read them instead of taking them again: the logs are most of a fit's
-// time (tests/benchmarks/RESULTS.md), the copy is bitwise the same numbers.
+// time (tests/benchmarks/RESULTS.md), and the kept values are bitwise those of the first pass.
 class CobbDouglasRows : public RegressionRows {
 public:
     CobbDouglasRows(const ProductionData& data, bool constantReturns) : data_(data), constantReturns_(constantReturns) {}
