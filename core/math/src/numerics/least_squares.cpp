@@ -201,8 +201,7 @@ FitStatus leastSquaresStatus(const FitSummary& summary, double responseNorm, con
 // A pass after the factor: the residuals (the extended route has them already) with Σr², Σe^r
 // (LeastSquaresOptions::sumExpResiduals) and the robust meat, which it returns (empty for classical errors).
 Eigen::MatrixXd formResiduals(const RegressionRows& rows, const std::optional<HeldColumns>& held, const LeastSquaresOptions& options,
-                              Eigen::Index rowsPerBlock, LeastSquaresFactor& factor, const Eigen::MatrixXd& bread,
-                              LeastSquaresResult& result)
+                              LeastSquaresFactor& factor, const Eigen::MatrixXd& bread, LeastSquaresResult& result)
 {
     const Eigen::Index n = rows.rows();
     const bool robust = options.covariance != CovarianceKind::classical;
@@ -215,10 +214,10 @@ Eigen::MatrixXd formResiduals(const RegressionRows& rows, const std::optional<He
     };
     if (needResiduals && !robust && held) {
         // Held in memory: the residuals are formed in place, a block of rows at a time.
-        forEachHeldBlock(*held, n, rowsPerBlock, factor.coefficients, factor.residuals,
+        forEachHeldBlock(*held, n, options.rowsPerBlock, factor.coefficients, factor.residuals,
                          [&](Eigen::Index, const auto& residuals) { addExps(residuals); });
     } else if (needResiduals || robust) {
-        forEachBlock(rows, rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
+        forEachBlock(rows, options.rowsPerBlock, [&](Eigen::Index first, const auto& design, const auto& response) {
             auto residuals = factor.residuals.segment(first, design.rows());
             if (needResiduals) {
                 residuals = response;
@@ -308,7 +307,7 @@ LeastSquaresResult fitLeastSquares(const RegressionRows& rows, std::optional<Eig
         summary.residualSumOfSquares = sums->squares;
         result.sumOfExpResiduals = sums->exps;
     } else {
-        meat = formResiduals(rows, held, options, options.rowsPerBlock, factor, bread, result);
+        meat = formResiduals(rows, held, options, factor, bread, result);
         if (!options.keepResiduals) result.residuals = Eigen::VectorXd();
     }
     summary.totalSumOfSquares = interceptColumn ? chosen.response.centredSumOfSquares : chosen.response.sumOfSquares;
