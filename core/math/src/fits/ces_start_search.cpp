@@ -36,51 +36,83 @@ struct ConcentratedFit {
     Eigen::Vector4d raw = Eigen::Vector4d::Zero();
 };
 
-// The searched rows at one ρ, with what of K(u) = ln(δeᵘ + 1 − δ) does not depend on δ:
-// e = expm1(−|u|), u = −ρ·d. Each δ then costs one log1p a row (the column kernels'),
-//   K = log1p(δ·e) for u ≤ 0,   K = u + log1p((1−δ)·e) for u > 0   (ln(δeᵘ + 1 − δ) = u + ln(δ + (1−δ)e^(−u))),
-// where CesCompositeCurve takes two calls; good to about ε·max(1, |u|) in K, which is all a
-// start needs (the estimates come from the runs on all rows). ln Y about its mean is the same at
-// every ρ and δ, and is formed once.
+// The searched rows at one ρ, with what of b + H does not depend on δ. With u = −ρ·d and
+// e = expm1(−|u|), K(u) = ln(δeᵘ + 1 − δ) is ln(1 + δ·e) for u ≤ 0 and u + ln(1 + (1 − δ)·e) for
+// u > 0 (ln(δeᵘ + 1 − δ) = u + ln(δ + (1 − δ)e^(−u))), and H = d·K/u = −K/ρ. So each δ costs one
+// ln a row (the column kernels') and no division:
+//   b + H = base − ln(1 + δ·below + (1 − δ)·above)/ρ,  base = b − max(u, 0)/ρ,
+// where `below` holds e on the rows with u ≤ 0 and 0 elsewhere, `above` the reverse; at ρ = 0,
+// b + H = b + δ·d. ln(1 + x) rather than log1p(x) is good to ε absolute in K, ε/|ρ| ≤ 4ε in H on
+// the grid's curvatures, which is all a start needs (the estimates come from the runs on all
+// rows). ln Y about its mean is the same at every ρ and δ, and is formed once.
 struct CurvatureRows {
     const CesLogs& logs;
     const Eigen::ArrayXd& centredOutput;
+    double outputSquares; // Syy
     double curvature;
-    Eigen::ArrayXd u;
-    Eigen::ArrayXd shrunk; // expm1(−|u|)
-    // Work columns of concentrated(), reused for every δ.
-    mutable Eigen::ArrayXd argument, logged, column;
+    Eigen::ArrayXd base, below, above;
+    // Work column of concentrated(), reused for every δ.
+    mutable Eigen::ArrayXd column;
 
     CurvatureRows(const CesLogs& searched, const Eigen::ArrayXd& centred, double rho)
-        : logs(searched), centredOutput(centred), curvature(rho), u(-rho * searched.logRatio.array()),
-          shrunk(u.size()), argument(u.size()), logged(u.size()), column(u.size())
+        : logs(searched), centredOutput(centred), outputSquares(centred.square().sum()), curvature(rho),
+          column(searched.logRatio.size())
     {
-        argument = -u.abs();
-        column_kernels::expsAndExpm1s(argument.data(), column.data(), shrunk.data(), static_cast<std::size_t>(u.size()));
+        if (rho == 0) return;
+        const Eigen::ArrayXd u = -rho * searched.logRatio.array();
+        Eigen::ArrayXd exps(u.size()), shrunk(u.size());
+        column = -u.abs();
+        column_kernels::expsAndExpm1s(column.data(), exps.data(), shrunk.data(), static_cast<std::size_t>(u.size()));
+        below = (u > 0).select(0.0, shrunk);
+        above = (u > 0).select(shrunk, 0.0);
+        base = searched.logSecond.array() - u.max(0.0) / rho;
     }
 
     // b + H for every row at δ, into `column`
     void composite(double weight) const
     {
-        const Eigen::ArrayXd& d = logs.logRatio.array();
-        argument = (u < 0).select(weight * shrunk, (1 - weight) * shrunk);
-        column_kernels::log1ps(argument.data(), logged.data(), static_cast<std::size_t>(u.size()));
-        column = logs.logSecond.array() + (u == 0).select(weight * d, d * (u > 0).select(u + logged, logged) / u);
+        if (curvature == 0) {
+            column = logs.logSecond.array() + weight * logs.logRatio.array();
+            return;
+        }
+        column = 1 + weight * below + (1 - weight) * above;
+        column_kernels::logs(column.data(), column.data(), static_cast<std::size_t>(column.size()));
+        column = base + (-1 / curvature) * column;
     }
 };
 
-// For fixed δ and ρ the model is linear in ln A and ν: a simple regression of ln Y on b + H.
+// For fixed δ and ρ the model is linear in ln A and ν: a simple regression of the centred ln Y on
+// the centred b + H, whose sum of squares is Syy − slope·Sxy (slope = Sxy/Sxx). That difference
+// loses digits where the fit is close, about ε·Syy absolute, which only blurs the ranking of
+// points whose fits are equally close to exact; Sxx and Sxy come from one pass over the rows.
 ConcentratedFit concentrated(const CurvatureRows& rows, double weight)
 {
     const CesLogs& logs = rows.logs;
     rows.composite(weight);
     const double mean = rows.column.mean();
-    rows.column -= mean; // centred
-    const double sxx = rows.column.square().sum();
+    const Eigen::Index m = rows.column.size();
+    const double* column = rows.column.data();
+    const double* output = rows.centredOutput.data();
+    constexpr int lanes = 4;
+    double squares[lanes] = {}, products[lanes] = {};
+    Eigen::Index i = 0;
+    for (; i + lanes <= m; i += lanes)
+        for (int lane = 0; lane < lanes; ++lane) {
+            const double centred = column[i + lane] - mean;
+            squares[lane] += centred * centred;
+            products[lane] += centred * output[i + lane];
+        }
+    for (int lane = 0; i < m; ++i, ++lane) {
+        const double centred = column[i] - mean;
+        squares[lane] += centred * centred;
+        products[lane] += centred * output[i];
+    }
+    const double sxx = (squares[0] + squares[1]) + (squares[2] + squares[3]);
+    const double sxy = (products[0] + products[1]) + (products[2] + products[3]);
     ConcentratedFit fit;
     if (!(sxx > 0) || !std::isfinite(sxx)) return fit;
-    const double slope = (rows.column * rows.centredOutput).sum() / sxx;
-    fit.sumOfSquares = (rows.centredOutput - slope * rows.column).square().sum();
+    const double slope = sxy / sxx;
+    fit.sumOfSquares = std::max(0.0, rows.outputSquares - slope * sxy);
     fit.raw = {logs.logOutput.mean() - slope * mean, weight, rows.curvature, slope};
     return fit;
 }
