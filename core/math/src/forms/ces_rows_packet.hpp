@@ -17,6 +17,8 @@ struct Shape {
     double logWeight;     // ln δ
     double logComplement; // ln(1 − δ)
     double curvature;     // ρ
+    double slope;         // d/u = −1/ρ (unused at ρ = 0, where every u is 0)
+    double slopeSquared;  // 1/ρ²
 };
 
 // The four output columns, each at the packet's first row.
@@ -32,15 +34,19 @@ inline constexpr double seriesLimit = 1e-3;
 
 namespace {
 
-// Both branches of each formula are formed and each row's own is chosen; a division by u = 0 in a
-// branch not chosen is harmless. With a = ln δ + u, c = ln(1 − δ):
-//   |u| ≤ 1: K = log1p(δ·expm1(u)),  π = δ·eᵘ/m with m = 1 + δ·expm1(u),  ∂H/∂δ = d·expm1(u)/(u·m);
-//   |u| > 1: K = max(a, c) + log1p(r), r = e^(−|a − c|),  π = logistic(a − c),
+// Both branches of each formula are formed and each row's own is chosen. With a = ln δ + u,
+// c = ln(1 − δ), and d/u = −1/ρ taken once for all rows (so no row divides by its u):
+//   |u| ≤ 1: K = ln(1 + x), x = δ·expm1(u),  π = δ·eᵘ/m with m = 1 + x,  ∂H/∂δ = −expm1(u)/(ρ·m);
+//   |u| > 1: K = max(a, c) + ln(1 + x), x = r = e^(−|a − c|),  π = logistic(a − c),
 //            π − δ = π(1 − δ) − δ(1 − π) (the two products differ by the factor eᵘ, at least e, so
-//            their difference keeps its digits also where δ is near 1),  ∂H/∂δ = d·(π − δ)/(q·u);
-//   H = d·K/u, ∂H/∂t = q·∂H/∂δ (q = δ(1 − δ)), ∂H/∂ρ = −d²·(u·π − K)/u², or below seriesLimit
+//            their difference keeps its digits also where δ is near 1),  ∂H/∂δ = −(π − δ)/(ρ·q);
+//   H = −K/ρ, ∂H/∂t = q·∂H/∂δ (q = δ(1 − δ)), ∂H/∂ρ = −(u·π − K)/ρ², or below seriesLimit
 //   −d²·(κ₂/2 + κ₃u/3 + κ₄u²/8 + κ₅u³/30) with the Bernoulli cumulants κ₂ = q, κ₃ = q(1 − 2δ),
 //   κ₄ = q(1 − 6q), κ₅ = q(1 − 2δ)(1 − 12q); at u = 0: H = δ·d, ∂H/∂δ = d.
+// ln(1 + x) = ln w + (x − (w − 1))/w with w = 1 + x rounded: the second term undoes the rounding
+// of w to first order (its square, below ε², is left), and 1/w is the 1/m or 1/(1 + r) the
+// derivatives need anyway, so K costs a log and no division of its own; where w rounds to 1 it
+// gives x. Two divisions a row in all: 1/w, and the one inside Eigen's log.
 template <typename Packet> void compositePacket(const double* logRatio, const Shape& shape, const Outputs& out)
 {
     using namespace Eigen::internal;
@@ -48,6 +54,7 @@ template <typename Packet> void compositePacket(const double* logRatio, const Sh
     const Packet minusOne = pset1<Packet>(-1.0); // −x as (−1)·x: Eigen's pnegate gives −0 or +0 for 0 by width
     const Packet weight = pset1<Packet>(shape.weight);
     const Packet complement = pset1<Packet>(shape.complement);
+    const Packet slope = pset1<Packet>(shape.slope); // d/u
     const double q = shape.weight * shape.complement;
     const Packet d = ploadu<Packet>(logRatio);
     const Packet u = pmul(pset1<Packet>(-shape.curvature), d);
@@ -59,38 +66,35 @@ template <typename Packet> void compositePacket(const double* logRatio, const Sh
     const Packet expm1 = column_kernels::expm1OnUnitInterval(pselect(small, u, pzero(u)));
     Packet exp = pzero(u);
     if (predux_any(pandnot(ptrue(u), small))) exp = pexp(pselect(small, pzero(u), pmul(minusOne, pabs(psub(a, c)))));
-    const Packet logged = column_kernels::log1p(pselect(small, pmul(weight, expm1), exp));
+    const Packet argument = pselect(small, pmul(weight, expm1), exp); // x
+    const Packet sum = padd(one, argument);                           // w: m, or 1 + r
+    const Packet reciprocal = pdiv(one, sum);                         // 1/m or 1/(1 + r)
+    const Packet logged = padd(plog(sum), pmul(psub(argument, psub(sum, one)), reciprocal));
     const Packet cumulant = pselect(small, logged, padd(pmax(a, c), logged)); // K
 
-    // Three divisions a row (Kahan's log1p, 1/u, and 1/m or 1/(1 + r)): the rest are products.
-    const Packet mix = padd(one, pmul(weight, expm1));
     const Packet firstLarger = pcmp_le(c, a);
-    const Packet reciprocal = pdiv(one, pselect(small, mix, padd(one, exp))); // 1/m or 1/(1 + r)
-    const Packet larger = reciprocal;                                        // 1/(1 + r)
-    const Packet smaller = pmul(exp, reciprocal);                            // r/(1 + r)
+    const Packet larger = reciprocal;             // 1/(1 + r)
+    const Packet smaller = pmul(exp, reciprocal); // r/(1 + r)
     const Packet share = pselect(small, pmul(pmul(weight, padd(one, expm1)), reciprocal),
                                  pselect(firstLarger, larger, smaller));
     const Packet gap = psub(pmul(share, complement), pmul(weight, pselect(firstLarger, smaller, larger))); // π − δ
 
     const Packet zero = pcmp_eq(u, pzero(u));
-    const Packet overU = pdiv(one, u);
-    const Packet dOverU = pmul(d, overU);
-    const Packet byWeight = pselect(small, pmul(pmul(dOverU, expm1), reciprocal),
-                                    pmul(dOverU, pmul(gap, pset1<Packet>(1 / q))));
-    pstoreu(out.value, pselect(zero, pmul(weight, d), pmul(dOverU, cumulant)));
+    const Packet byWeight = pselect(small, pmul(pmul(slope, expm1), reciprocal), pmul(slope, pmul(gap, pset1<Packet>(1 / q))));
+    pstoreu(out.value, pselect(zero, pmul(weight, d), pmul(slope, cumulant)));
     pstoreu(out.byWeight, pselect(zero, d, byWeight));
     pstoreu(out.byLogit, pselect(zero, pmul(pset1<Packet>(q), d),
-                                 pselect(small, pmul(pset1<Packet>(q), byWeight), pmul(dOverU, gap))));
+                                 pselect(small, pmul(pset1<Packet>(q), byWeight), pmul(slope, gap))));
 
     const double skew = 1 - 2 * shape.weight;
     // κ₂/2 + u·(κ₃/3 + u·(κ₄/8 + u·κ₅/30))
-    const Packet slope = padd(pset1<Packet>(q / 2),
-                              pmul(u, padd(pset1<Packet>(q * skew / 3),
-                                           pmul(u, padd(pset1<Packet>(q * (1 - 6 * q) / 8),
-                                                        pmul(u, pset1<Packet>(q * skew * (1 - 12 * q) / 30)))))));
-    const Packet exact = pmul(psub(pmul(u, share), cumulant), pmul(overU, overU));
+    const Packet cumulants = padd(pset1<Packet>(q / 2),
+                                  pmul(u, padd(pset1<Packet>(q * skew / 3),
+                                               pmul(u, padd(pset1<Packet>(q * (1 - 6 * q) / 8),
+                                                            pmul(u, pset1<Packet>(q * skew * (1 - 12 * q) / 30)))))));
     const Packet series = pcmp_lt(pabs(u), pset1<Packet>(seriesLimit));
-    pstoreu(out.byCurvature, pmul(minusOne, pmul(pmul(d, d), pselect(series, slope, exact))));
+    pstoreu(out.byCurvature, pselect(series, pmul(minusOne, pmul(pmul(d, d), cumulants)),
+                                     pmul(psub(cumulant, pmul(u, share)), pset1<Packet>(shape.slopeSquared))));
 }
 
 } // namespace

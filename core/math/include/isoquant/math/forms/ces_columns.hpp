@@ -6,12 +6,13 @@
 // ∂H/∂ρ from its series for |u| < 10⁻³. At an interior δ each row takes one expm1 (|u| ≤ 1, by its
 // series) or one exp (|u| > 1), and one log1p, shared by K, π = ∂H/∂d and the derivatives, in
 // packets of four rows where the processor has AVX2, else two (numerics/column_kernels_packet.hpp:
-// Eigen's packet exp and log, Kahan's correction for log1p, no fused multiply-adds, so both widths
-// give the same bits; a packet whose rows all have |u| ≤ 1 takes no exp).
+// Eigen's packet exp and log, the rounding of 1 + x undone to first order for log1p, no fused
+// multiply-adds, so both widths give the same bits; a packet whose rows all have |u| ≤ 1 takes no
+// exp; d/u = −1/ρ is taken once, not per row).
 // Each value is within a few units in the last place of the same formulas in long double
 // (tests/unit/test_ces_columns.cpp); CesCompositeCurve takes six scalar calls a row instead.
 // Where δ is 0 or 1, or so near that δ(1 − δ) is subnormal, the rows go through CesCompositeCurve
-// itself (its forms handle the infinite logs).
+// itself (its forms handle the infinite logs), as they do where ρ ≠ 0 is so small that 1/ρ overflows.
 #pragma once
 
 #include "isoquant/math/numerics/column_kernels.hpp"
