@@ -6,6 +6,7 @@
 // checks what this object defines.
 #include "numerics/column_kernels_packet.hpp"
 #include "numerics/column_kernels_wide.hpp"
+#include "numerics/packet_pair_avx2.hpp"
 
 #include <Eigen/Core>
 
@@ -19,36 +20,49 @@ namespace {
 
 using Eigen::internal::Packet4d;
 
+// Eight values a step (packet_pair_avx2.hpp: the same bits as two steps of four), the last four
+// alone; `kernel` takes either.
 template <typename Kernel> void eachPacket(const double* values, double* out, std::size_t count, Kernel kernel)
 {
-    for (std::size_t i = 0; i < count; i += 4)
-        Eigen::internal::pstoreu(out + i, kernel(Eigen::internal::ploadu<Packet4d>(values + i)));
+    std::size_t i = 0;
+    for (; i + 8 <= count; i += 8) pstoreu(out + i, kernel(Eigen::internal::ploadu<PacketPair>(values + i)));
+    if (i < count) Eigen::internal::pstoreu(out + i, kernel(Eigen::internal::ploadu<Packet4d>(values + i)));
 }
 
 } // namespace
 
 void logs(const double* values, double* out, std::size_t count)
 {
-    eachPacket(values, out, count, [](const Packet4d& x) { return Eigen::internal::plog(x); });
+    eachPacket(values, out, count, [](const auto& x) {
+        using Eigen::internal::plog;
+        return plog(x);
+    });
 }
 
 void exps(const double* values, double* out, std::size_t count)
 {
-    eachPacket(values, out, count, [](const Packet4d& x) { return Eigen::internal::pexp(x); });
+    eachPacket(values, out, count, [](const auto& x) {
+        using Eigen::internal::pexp;
+        return pexp(x);
+    });
 }
 
 void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count)
 {
-    for (std::size_t i = 0; i < count; i += 4) {
-        const ExpPair<Packet4d> pair = expAndExpm1(Eigen::internal::ploadu<Packet4d>(values + i));
-        Eigen::internal::pstoreu(exps + i, pair.exp);
-        Eigen::internal::pstoreu(expm1s + i, pair.expm1);
-    }
+    const auto step = [&](std::size_t i, auto packet) {
+        using Eigen::internal::pstoreu;
+        const auto pair = expAndExpm1(Eigen::internal::ploadu<decltype(packet)>(values + i));
+        pstoreu(exps + i, pair.exp);
+        pstoreu(expm1s + i, pair.expm1);
+    };
+    std::size_t i = 0;
+    for (; i + 8 <= count; i += 8) step(i, PacketPair{});
+    if (i < count) step(i, Packet4d{});
 }
 
 void log1ps(const double* values, double* out, std::size_t count)
 {
-    eachPacket(values, out, count, [](const Packet4d& x) { return log1p(x); });
+    eachPacket(values, out, count, [](const auto& x) { return log1p(x); });
 }
 
 } // namespace isoquant::column_kernels::avx2
