@@ -126,6 +126,37 @@ BOOST_AUTO_TEST_CASE(gauss_newton_steps_from_near_the_optimum_reach_the_certifie
     BOOST_TEST(reached->evaluations <= 10);
 }
 
+// A caller's `known` rule ends the run at the first point a step leads to where it holds, before
+// evaluating there (status stopped, no residuals), and is never asked about the start; a rule
+// that never holds changes nothing. The rule here: within 1e-6 relative of NIST's certified values
+// (Misra1a, as above), which the unstopped run passes on its way to them.
+BOOST_AUTO_TEST_CASE(gauss_newton_steps_stop_where_the_caller_knows_the_point)
+{
+    const Misra1a model;
+    const Eigen::Vector2d start(certifiedB1 * 1.01, certifiedB2 * 0.99);
+    const Eigen::Vector2d certified(certifiedB1, certifiedB2);
+    const auto full = isoquant::minimizeByGaussNewton(model, start);
+    BOOST_TEST_REQUIRE(full.has_value());
+    int asked = 0;
+    const auto nearCertified = [&](const Eigen::VectorXd& point) {
+        ++asked;
+        BOOST_TEST(!point.isApprox(start));
+        return ((point - certified).array().abs() <= 1e-6 * certified.array().abs()).all();
+    };
+    const auto stopped = isoquant::minimizeByGaussNewton(model, start, {}, nearCertified);
+    BOOST_TEST_REQUIRE(stopped.has_value());
+    BOOST_TEST((stopped->status == isoquant::NonlinearStatus::stopped));
+    BOOST_TEST(nearCertified(stopped->parameters));
+    BOOST_TEST(stopped->residuals.size() == 0);
+    BOOST_TEST(stopped->evaluations < full->evaluations);
+    BOOST_TEST(asked == stopped->evaluations + 1); // each point a step led to, and the check above
+
+    const auto never = isoquant::minimizeByGaussNewton(model, start, {}, [](const Eigen::VectorXd&) { return false; });
+    BOOST_TEST_REQUIRE(never.has_value());
+    BOOST_TEST(never->parameters == full->parameters);
+    BOOST_TEST(never->evaluations == full->evaluations);
+}
+
 // Where the steps cannot be trusted they give way (no result) and the caller runs
 // Levenberg–Marquardt: a zero column of J (b1 = 0 makes ∂r/∂b2 vanish), and NIST's first start,
 // far from the optimum, where the first step overshoots and raises the sum of squares.

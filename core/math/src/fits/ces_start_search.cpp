@@ -201,31 +201,40 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
 // Each start moved to the optimum the solver reaches from it on the sample rows, so that the runs on
 // all rows start close to their optimum. Moved starts that agree to 1e-6·(1 + |θ|) in every solver
 // coordinate reached the same minimum (runs into one minimum stop within about 1e-8 of each other,
-// distinct minima lie O(1) apart) and are kept once. A moved start where some row's residual is
-// not finite is replaced by the start itself. Each start first tries Gauss–Newton steps alone
-// (minimizeByGaussNewton: from a grid or Kmenta start that lies in a well-behaved basin they settle
-// in a few steps of one evaluation each, where Levenberg–Marquardt also factorises the Jacobian);
-// where they give way, Levenberg–Marquardt runs, stopping at a relative step of
-// sampleStepTolerance: its point only starts the runs on all rows, whose own optimum lies about
-// √(n/m) standard errors away (sampling), far beyond that; the last steps to 1e-15 would cost about
-// a third of their evaluations.
+// distinct minima lie O(1) apart) and are kept once; a Gauss–Newton run whose next point already
+// agrees so with a moved start ends there, since it has come to that start's minimum. A moved start
+// where some row's residual is not finite is replaced by the start itself. Each start first tries
+// Gauss–Newton steps alone (minimizeByGaussNewton: from a grid or Kmenta start that lies in a
+// well-behaved basin they settle in a few steps of one evaluation each, where Levenberg–Marquardt
+// also factorises the Jacobian), settled at a step of sampleSettledLength; where they give way,
+// Levenberg–Marquardt runs, stopping at a relative step of sampleStepTolerance. Either point only
+// starts the runs on all rows, whose own optimum lies about √(n/m) standard errors away
+// (sampling), far beyond that; the last steps to 1e-10 standard errors (Gauss–Newton) or 1e-15
+// (Levenberg–Marquardt) would cost about a third of their evaluations.
 std::vector<Eigen::VectorXd> movedOnSample(const CesModel& model, const CesLogs& sample,
                                            const std::vector<Eigen::VectorXd>& starts,
                                            const NonlinearLeastSquaresOptions& options)
 {
     constexpr double sameMinimum = 1e-6;
     constexpr double sampleStepTolerance = 1e-10;
+    constexpr double sampleSettledLength = 1e-6;
     NonlinearLeastSquaresOptions sampleOptions = options;
     sampleOptions.relativeStepTolerance = std::max(options.relativeStepTolerance, sampleStepTolerance);
+    GaussNewtonOptions sampleSteps;
+    sampleSteps.settledLength = sampleSettledLength;
     const CesModel sampleModel(sample);
     std::vector<Eigen::VectorXd> moved;
-    for (const Eigen::VectorXd& start : starts) {
-        const std::optional<NonlinearLeastSquaresResult> steps = minimizeByGaussNewton(sampleModel, start);
-        Eigen::VectorXd reached = steps ? steps->parameters : minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
-        const auto same = [&](const Eigen::VectorXd& other) {
+    const auto alreadyMoved = [&](const Eigen::VectorXd& reached) {
+        return std::any_of(moved.begin(), moved.end(), [&](const Eigen::VectorXd& other) {
             return ((reached - other).array().abs() <= sameMinimum * (1 + other.array().abs())).all();
-        };
-        if (std::any_of(moved.begin(), moved.end(), same)) continue;
+        });
+    };
+    for (const Eigen::VectorXd& start : starts) {
+        const std::optional<NonlinearLeastSquaresResult> steps =
+            minimizeByGaussNewton(sampleModel, start, sampleSteps, alreadyMoved);
+        if (steps && steps->status == NonlinearStatus::stopped) continue; // at a moved start's minimum
+        Eigen::VectorXd reached = steps ? steps->parameters : minimizeSumOfSquares(sampleModel, start, sampleOptions).parameters;
+        if (alreadyMoved(reached)) continue;
         if (!model.residuals(reached).allFinite()) reached = start;
         moved.push_back(reached);
     }

@@ -150,7 +150,8 @@ Eigen::VectorXd refinedByGaussNewton(const NonlinearModel& model, const Eigen::V
 }
 
 std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& start,
-                                                                 const GaussNewtonOptions& options)
+                                                                 const GaussNewtonOptions& options,
+                                                                 const std::function<bool(const Eigen::VectorXd&)>& known)
 {
     const Eigen::Index n = model.observationCount();
     const Eigen::Index p = model.parameterCount();
@@ -175,6 +176,16 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
     double sumOfSquares = residuals.squaredNorm();
     for (int k = 0; k < options.maximumSteps; ++k) {
         Eigen::VectorXd next = parameters + step->direction;
+        if (known && known(next)) {
+            NonlinearLeastSquaresResult result;
+            result.parameters = std::move(next);
+            result.observations = n;
+            result.evaluations = evaluations;
+            result.jacobianEvaluations = evaluations;
+            result.status = NonlinearStatus::stopped;
+            result.stopReason = "reached a point the caller knows";
+            return result;
+        }
         std::optional<GaussNewtonStep> following = stepAt(next, nextResiduals);
         if (!following) return std::nullopt;
         const double nextSumOfSquares = nextResiduals.squaredNorm();

@@ -9,6 +9,7 @@
 
 #include <Eigen/Dense>
 
+#include <functional>
 #include <optional>
 #include <string>
 
@@ -147,8 +148,13 @@ struct GaussNewtonOptions {
 // not settled within maximumSteps. A step costs one residual and one Jacobian evaluation and a p × p
 // solve, where a Levenberg–Marquardt iteration factorises the n × p Jacobian. The result has
 // status converged and no inference or summary, as minimizeSumOfSquares.
-std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& start,
-                                                                 const GaussNewtonOptions& options = {});
+//
+// `known`, when given, is asked about each point a step leads to before that point is evaluated;
+// where it holds, the run ends there with status stopped, the point as its parameters and no
+// residuals (the start search stops a run that has come to an optimum another start reached).
+std::optional<NonlinearLeastSquaresResult>
+minimizeByGaussNewton(const NonlinearModel& model, const Eigen::VectorXd& start, const GaussNewtonOptions& options = {},
+                      const std::function<bool(const Eigen::VectorXd&)>& known = {});
 
 // Gauss–Newton steps Δ = −J⁺·r from θ (meant for a converged θ), at most maximumSteps, each taken
 // only while the step that would follow it is shorter in ‖J·Δ‖, the part of r the model could still
