@@ -161,8 +161,9 @@ BOOST_AUTO_TEST_CASE(both_widths_and_every_length_give_the_same_bits)
                                      sameBits(narrow.byCurvature(i), wide.byCurvature(i))
                                  ? 0
                                  : 1;
-            // A column of 1 to 7 rows: the last rows (fewer than a packet) go through the same packet code.
-            for (Eigen::Index length = 1; length <= 7; ++length) {
+            // A column of 1 to 19 rows: the last rows (fewer than a pair of packets, or than a
+            // packet) go through the same packet code.
+            for (Eigen::Index length = 1; length <= 19; ++length) {
                 isoquant::CesColumns part;
                 isoquant::evaluateComposite(d.head(length), weight, curvature, part);
                 for (Eigen::Index i = 0; i < length; ++i)

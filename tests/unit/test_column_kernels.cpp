@@ -92,7 +92,10 @@ BOOST_AUTO_TEST_CASE(both_widths_give_the_same_bits)
 
 BOOST_AUTO_TEST_CASE(a_value_gets_the_same_bits_at_every_position_and_length)
 {
-    const std::vector<double> values{0.7, 3.5, 1e-5, 42.0, 2.5e8, 1.0, 0.125};
+    // Nineteen values: a column of up to 19 takes pairs of packets (eight values, on AVX2), a single
+    // packet and the padded two-doubles rest, in every combination.
+    const std::vector<double> values{0.7, 3.5,  1e-5, 42.0, 2.5e8, 1.0,   0.125, 9.75,   1e300, 2.2e-308,
+                                     0.3, 77.0, 1e-9, 5.5,  0.999, 1.001, 6e7,   0.0625, 13.0};
     for (const Width width : {Width::twoDoubles, Width::fourDoubles}) {
         const std::vector<double> alone = applied(&isoquant::column_kernels::logs, values, width);
         for (std::size_t length = 1; length <= values.size(); ++length)
@@ -182,8 +185,9 @@ BOOST_AUTO_TEST_CASE(log1p_and_expm1_give_the_same_bits_at_both_widths_and_every
         std::size_t differing = 0;
         for (std::size_t i = 0; i < values.size(); ++i) differing += sameBits(narrow[i], wide[i]) ? 0 : 1;
         BOOST_TEST(differing == 0u);
-        // The last values of a column (fewer than a packet) go through the same packet code.
-        for (std::size_t length = 1; length <= 7; ++length) {
+        // The last values of a column (fewer than a packet, or than a pair of packets on AVX2) go
+        // through the same packet code.
+        for (std::size_t length = 1; length <= 19; ++length) {
             const std::vector<double> part(values.begin(), values.begin() + static_cast<long>(length));
             const std::vector<double> alone = applied(kernel, part, Width::automatic);
             for (std::size_t i = 0; i < length; ++i) BOOST_TEST(sameBits(alone[i], wide[i]));
