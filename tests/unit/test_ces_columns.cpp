@@ -173,4 +173,43 @@ BOOST_AUTO_TEST_CASE(both_widths_and_every_length_give_the_same_bits)
     BOOST_TEST(differing == 0u);
 }
 
+// cesNormalSums: the same bits at both widths and at every length up to 19 rows (a packet of four,
+// and the rows after the last whole packet, in every combination), and each sum within
+// 1e-15·Σ|term| of the same sum in long double (a sum of n terms in double is within about
+// n·ε·Σ|term| in the worst case, √n·ε typically; here four lanes of 500).
+BOOST_AUTO_TEST_CASE(normal_sums_agree_at_both_widths_and_with_long_double_sums)
+{
+    const Eigen::VectorXd d = logRatios();
+    const Eigen::Index n = d.size();
+    isoquant::CesColumns columns;
+    isoquant::evaluateComposite(d, 0.4, 0.5, columns);
+    std::mt19937_64 generator(20261203u);
+    std::normal_distribution<double> spread(0.0, 1.0);
+    Eigen::VectorXd second(n), residuals(n);
+    for (Eigen::Index i = 0; i < n; ++i) second(i) = 1.5 + 0.6 * spread(generator), residuals(i) = 0.1 * spread(generator);
+
+    const auto narrow = isoquant::cesNormalSums(columns, second, residuals, Width::twoDoubles);
+    const auto wide = isoquant::cesNormalSums(columns, second, residuals, Width::fourDoubles);
+    for (int k = 0; k < isoquant::cesNormalSumCount; ++k) BOOST_TEST(sameBits(narrow[k], wide[k]), "sum " << k);
+
+    long double reference[isoquant::cesNormalSumCount] = {}, magnitude[isoquant::cesNormalSumCount] = {};
+    for (Eigen::Index i = 0; i < n; ++i) {
+        const long double g = columns.byLogit(i), c = columns.byCurvature(i), l = second(i) + columns.value(i),
+                          r = residuals(i);
+        const long double terms[] = {g, c, l, g * g, c * g, l * g, c * c, l * c, l * l, r, g * r, c * r, l * r};
+        for (int k = 0; k < isoquant::cesNormalSumCount; ++k) reference[k] += terms[k], magnitude[k] += std::fabs(terms[k]);
+    }
+    for (int k = 0; k < isoquant::cesNormalSumCount; ++k)
+        BOOST_TEST(std::fabs(wide[k] - reference[k]) <= 1e-15L * magnitude[k], "sum " << k);
+
+    for (Eigen::Index length = 1; length <= 19; ++length) {
+        isoquant::CesColumns part;
+        isoquant::evaluateComposite(d.head(length), 0.4, 0.5, part);
+        const auto partNarrow = isoquant::cesNormalSums(part, second.head(length), residuals.head(length), Width::twoDoubles);
+        const auto partWide = isoquant::cesNormalSums(part, second.head(length), residuals.head(length));
+        for (int k = 0; k < isoquant::cesNormalSumCount; ++k)
+            BOOST_TEST(sameBits(partNarrow[k], partWide[k]), "length " << length << ", sum " << k);
+    }
+}
+
 BOOST_AUTO_TEST_SUITE_END()

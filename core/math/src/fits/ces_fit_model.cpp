@@ -94,38 +94,13 @@ void CesModel::jacobianInto(const Eigen::VectorXd& solver, Eigen::MatrixXd& jaco
 }
 
 // J's columns are −1, −ν·∂H/∂t, −ν·(1 + ρ)·∂H/∂ρ and −(b + H) (fillJacobian, jacobianInto): JᵀJ
-// and Jᵀr are the sums of their products, the constant factors taken out of each sum. The thirteen
-// sums are taken in one pass over the rows, each in four lanes (row i in lane i mod 4, the lanes
-// added at the end), which the compiler keeps in vector registers: thirteen passes of Eigen's sums
-// read the columns thirteen times.
+// and Jᵀr are the sums of their products (cesNormalSums, one pass over the rows), the constant
+// factors taken out of each sum.
 void CesModel::normalEquationsInto(const Eigen::VectorXd& solver, const Eigen::VectorXd& residuals, Eigen::MatrixXd&,
                                    Eigen::MatrixXd& gram, Eigen::VectorXd& gradient) const
 {
-    const CesColumns& columns = columnsAt(solver);
-    constexpr int lanes = 4;
-    constexpr int sumCount = 13; // the Gram matrix's lower triangle without (0, 0), then Jᵀr
+    const std::array<double, cesNormalSumCount> total = cesNormalSums(columnsAt(solver), logs_.logSecond, residuals);
     const Eigen::Index n = logs_.logOutput.size();
-    const double* logit = columns.byLogit.data();
-    const double* curvature = columns.byCurvature.data();
-    const double* value = columns.value.data();
-    const double* second = logs_.logSecond.data();
-    const double* r = residuals.data();
-    double sums[sumCount][lanes] = {};
-    const auto addRow = [&](Eigen::Index i, int lane) {
-        const double level = second[i] + value[i]; // b + H
-        const double terms[sumCount] = {logit[i],          curvature[i],          level,
-                                        logit[i] * logit[i], curvature[i] * logit[i], level * logit[i],
-                                        curvature[i] * curvature[i], level * curvature[i], level * level,
-                                        r[i],              logit[i] * r[i],       curvature[i] * r[i],
-                                        level * r[i]};
-        for (int k = 0; k < sumCount; ++k) sums[k][lane] += terms[k];
-    };
-    Eigen::Index i = 0;
-    for (; i + lanes <= n; i += lanes)
-        for (int lane = 0; lane < lanes; ++lane) addRow(i + lane, lane);
-    for (int lane = 0; i < n; ++i, ++lane) addRow(i, lane);
-    double total[sumCount];
-    for (int k = 0; k < sumCount; ++k) total[k] = (sums[k][0] + sums[k][1]) + (sums[k][2] + sums[k][3]);
     const double factors[] = {-1.0, -solver(3), -solver(3) * std::exp(solver(2)), -1.0};
     gram.resize(ces_fit::parameterCount, ces_fit::parameterCount);
     gram(0, 0) = static_cast<double>(n);

@@ -75,4 +75,34 @@ void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double cu
     }
 }
 
+std::array<double, cesNormalSumCount> cesNormalSums(const CesColumns& columns, const Eigen::VectorXd& logSecond,
+                                                    const Eigen::VectorXd& residuals, column_kernels::Width width)
+{
+    constexpr int lanes = ces_rows::sumLanes;
+    const auto n = static_cast<std::size_t>(logSecond.size());
+    const ces_rows::NormalRows rows{columns.byLogit.data(), columns.byCurvature.data(), logSecond.data(),
+                                    columns.value.data(), residuals.data()};
+    double sums[cesNormalSumCount][lanes] = {};
+    // Row i into lane `lane`: the same products and additions as the packets' (no fused
+    // multiply-adds in either), so a lane's sum is the same bits whichever code took its rows.
+    const auto addRow = [&](std::size_t i, int lane) {
+        const double g = rows.logit[i], c = rows.curvature[i], l = rows.second[i] + rows.value[i], r = rows.residuals[i];
+        const double terms[cesNormalSumCount] = {g, c, l, g * g, c * g, l * g, c * c, l * c, l * l, r, g * r, c * r, l * r};
+        for (int k = 0; k < cesNormalSumCount; ++k) sums[k][lane] += terms[k];
+    };
+    std::size_t i = 0;
+#if defined(ISOQUANT_HAVE_AVX2_KERNELS)
+    if (width != column_kernels::Width::twoDoubles && column_kernels::fourDoublesAvailable()) {
+        i = n - n % lanes;
+        ces_rows::avx2::addNormalSums(rows, i, sums);
+    }
+#endif
+    for (; i + lanes <= n; i += lanes)
+        for (int lane = 0; lane < lanes; ++lane) addRow(i + static_cast<std::size_t>(lane), lane);
+    for (int lane = 0; i < n; ++i, ++lane) addRow(i, lane);
+    std::array<double, cesNormalSumCount> total{};
+    for (int k = 0; k < cesNormalSumCount; ++k) total[static_cast<std::size_t>(k)] = (sums[k][0] + sums[k][1]) + (sums[k][2] + sums[k][3]);
+    return total;
+}
+
 } // namespace isoquant

@@ -29,6 +29,18 @@ struct Outputs {
     double* byCurvature; // ∂H/∂ρ
 };
 
+// The columns the normal equations' sums read (ces_columns.hpp, cesNormalSums), each at row 0.
+struct NormalRows {
+    const double* logit;     // ∂H/∂t
+    const double* curvature; // ∂H/∂ρ
+    const double* second;    // b = ln x₂
+    const double* value;     // H
+    const double* residuals; // r
+};
+
+// Lanes of each sum: row i in lane i mod 4, at both widths.
+inline constexpr int sumLanes = 4;
+
 // As in ces.cpp: below this |u| ∂H/∂ρ comes from the series of d/du[K(u)/u].
 inline constexpr double seriesLimit = 1e-3;
 

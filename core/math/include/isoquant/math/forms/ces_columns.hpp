@@ -19,6 +19,8 @@
 
 #include <Eigen/Dense>
 
+#include <array>
+
 namespace isoquant {
 
 struct CesColumns {
@@ -31,5 +33,15 @@ struct CesColumns {
 // Fills `columns`, resized to the rows of logRatio. `width` is for the tests, as in column_kernels.hpp.
 void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double curvature, CesColumns& columns,
                        column_kernels::Width width = column_kernels::Width::automatic);
+
+// The thirteen sums the ces fit's Gauss–Newton steps take over the rows, with g = ∂H/∂t,
+// c = ∂H/∂ρ, l = b + H (b = ln x₂) and r the residuals, in this order:
+//   Σg, Σc, Σl, Σg², Σcg, Σlg, Σc², Σlc, Σl², Σr, Σgr, Σcr, Σlr.
+// One pass over the rows; each sum in four lanes (row i in lane i mod 4), the lanes added as
+// (0 + 1) + (2 + 3), so both widths give the same bits. `width` is for the tests.
+inline constexpr int cesNormalSumCount = 13;
+std::array<double, cesNormalSumCount> cesNormalSums(const CesColumns& columns, const Eigen::VectorXd& logSecond,
+                                                    const Eigen::VectorXd& residuals,
+                                                    column_kernels::Width width = column_kernels::Width::automatic);
 
 } // namespace isoquant
