@@ -117,22 +117,28 @@ ConcentratedFit concentrated(const CurvatureRows& rows, double weight)
     return fit;
 }
 
-// Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its neighbours.
+// Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its
+// neighbours. The best point evaluated is kept as it is evaluated, not evaluated again.
 ConcentratedFit bestWeightFor(const CesLogs& logs, const Eigen::ArrayXd& centredOutput, double curvature)
 {
     const CurvatureRows rows(logs, centredOutput, curvature);
-    const auto sumOfSquares = [&](double logit) { return concentrated(rows, logistic(logit)).sumOfSquares; };
-    std::size_t best = 0;
+    ConcentratedFit best;
+    const auto sumOfSquares = [&](double logit) {
+        ConcentratedFit fit = concentrated(rows, logistic(logit));
+        if (fit.sumOfSquares < best.sumOfSquares) best = fit;
+        return fit.sumOfSquares;
+    };
+    std::size_t bestIndex = 0;
     double bestValue = std::numeric_limits<double>::infinity();
     constexpr std::size_t count = std::size(gridWeightLogits);
     for (std::size_t i = 0; i < count; ++i) {
         const double value = sumOfSquares(gridWeightLogits[i]);
-        if (value < bestValue) bestValue = value, best = i;
+        if (value < bestValue) bestValue = value, bestIndex = i;
     }
-    const double low = gridWeightLogits[best == 0 ? 0 : best - 1];
-    const double high = gridWeightLogits[best + 1 == count ? best : best + 1];
-    const auto [logit, value] = boost::math::tools::brent_find_minima(sumOfSquares, low, high, brentBits);
-    return concentrated(rows, logistic(value <= bestValue ? logit : gridWeightLogits[best]));
+    const double low = gridWeightLogits[bestIndex == 0 ? 0 : bestIndex - 1];
+    const double high = gridWeightLogits[bestIndex + 1 == count ? bestIndex : bestIndex + 1];
+    boost::math::tools::brent_find_minima(sumOfSquares, low, high, brentBits);
+    return best;
 }
 
 // ln Y = β₀ + β₁ ln x₁ + β₂ ln x₂ + β₃ d², the second-order expansion of ln Y about ρ = 0:
