@@ -168,6 +168,18 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
         model.normalEquationsInto(parameters, residuals, jacobian, gram, gradient);
         return normalEquationsStep(gram, gradient, options.conditionLimit);
     };
+    const auto endedAt = [&](Eigen::VectorXd point, Eigen::VectorXd residualsThere, NonlinearStatus status,
+                             const char* reason) {
+        NonlinearLeastSquaresResult result;
+        result.parameters = std::move(point);
+        result.residuals = std::move(residualsThere);
+        result.observations = n;
+        result.evaluations = evaluations;
+        result.jacobianEvaluations = evaluations;
+        result.status = status;
+        result.stopReason = reason;
+        return result;
+    };
     Eigen::VectorXd parameters = start;
     Eigen::VectorXd residuals;
     Eigen::VectorXd nextResiduals; // the two residual buffers trade places at each step taken
@@ -176,32 +188,15 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
     double sumOfSquares = residuals.squaredNorm();
     for (int k = 0; k < options.maximumSteps; ++k) {
         Eigen::VectorXd next = parameters + step->direction;
-        if (known && known(next)) {
-            NonlinearLeastSquaresResult result;
-            result.parameters = std::move(next);
-            result.observations = n;
-            result.evaluations = evaluations;
-            result.jacobianEvaluations = evaluations;
-            result.status = NonlinearStatus::stopped;
-            result.stopReason = "reached a point the caller knows";
-            return result;
-        }
+        if (known && known(next))
+            return endedAt(std::move(next), Eigen::VectorXd(), NonlinearStatus::stopped, "reached a point the caller knows");
         std::optional<GaussNewtonStep> following = stepAt(next, nextResiduals);
         if (!following) return std::nullopt;
         const double nextSumOfSquares = nextResiduals.squaredNorm();
         if (nextSumOfSquares > sumOfSquares * (1 + options.sumOfSquaresSlack)) return std::nullopt;
         const double deviation = std::sqrt(sumOfSquares / static_cast<double>(n - p));
-        if (step->length <= options.settledLength * deviation) {
-            NonlinearLeastSquaresResult result;
-            result.parameters = std::move(next);
-            result.residuals = std::move(nextResiduals);
-            result.observations = n;
-            result.evaluations = evaluations;
-            result.jacobianEvaluations = evaluations;
-            result.status = NonlinearStatus::converged;
-            result.stopReason = "Gauss–Newton steps settled";
-            return result;
-        }
+        if (step->length <= options.settledLength * deviation)
+            return endedAt(std::move(next), std::move(nextResiduals), NonlinearStatus::converged, "Gauss–Newton steps settled");
         if (!(following->length <= options.slowestShrink * step->length)) return std::nullopt; // stalled
         parameters = std::move(next);
         residuals.swap(nextResiduals);
