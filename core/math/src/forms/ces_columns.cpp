@@ -78,6 +78,7 @@ void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double cu
 std::array<double, cesNormalSumCount> cesNormalSums(const CesColumns& columns, const Eigen::VectorXd& logSecond,
                                                     const Eigen::VectorXd& residuals, column_kernels::Width width)
 {
+    static_assert(cesNormalSumCount == ces_rows::normalSumCount);
     constexpr int lanes = ces_rows::sumLanes;
     const auto n = static_cast<std::size_t>(logSecond.size());
     const ces_rows::NormalRows rows{columns.byLogit.data(), columns.byCurvature.data(), logSecond.data(),

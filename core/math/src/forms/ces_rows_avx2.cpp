@@ -21,21 +21,21 @@ void composite(const double* logRatio, std::size_t count, const Shape& shape, co
     if (i < count) compositePacket<Eigen::internal::Packet4d>(logRatio + i, shape, outputsAt(i));
 }
 
-void addNormalSums(const NormalRows& rows, std::size_t count, double (&sums)[13][sumLanes])
+void addNormalSums(const NormalRows& rows, std::size_t count, double (&sums)[normalSumCount][sumLanes])
 {
     using namespace Eigen::internal;
-    Packet4d total[13];
-    for (int k = 0; k < 13; ++k) total[k] = ploadu<Packet4d>(sums[k]);
+    Packet4d total[normalSumCount];
+    for (int k = 0; k < normalSumCount; ++k) total[k] = ploadu<Packet4d>(sums[k]);
     for (std::size_t i = 0; i < count; i += 4) {
         const Packet4d g = ploadu<Packet4d>(rows.logit + i);
         const Packet4d c = ploadu<Packet4d>(rows.curvature + i);
         const Packet4d l = padd(ploadu<Packet4d>(rows.second + i), ploadu<Packet4d>(rows.value + i));
         const Packet4d r = ploadu<Packet4d>(rows.residuals + i);
-        const Packet4d terms[13] = {g,          c,          l,          pmul(g, g), pmul(c, g), pmul(l, g), pmul(c, c),
+        const Packet4d terms[normalSumCount] = {g,          c,          l,          pmul(g, g), pmul(c, g), pmul(l, g), pmul(c, c),
                                     pmul(l, c), pmul(l, l), r,          pmul(g, r), pmul(c, r), pmul(l, r)};
-        for (int k = 0; k < 13; ++k) total[k] = padd(total[k], terms[k]);
+        for (int k = 0; k < normalSumCount; ++k) total[k] = padd(total[k], terms[k]);
     }
-    for (int k = 0; k < 13; ++k) pstoreu(sums[k], total[k]);
+    for (int k = 0; k < normalSumCount; ++k) pstoreu(sums[k], total[k]);
 }
 
 } // namespace isoquant::ces_rows::avx2

@@ -38,7 +38,9 @@ struct NormalRows {
     const double* residuals; // r
 };
 
-// Lanes of each sum: row i in lane i mod 4, at both widths.
+// The normal equations' sums (cesNormalSums), and the lanes of each: row i in lane i mod 4, at
+// both widths.
+inline constexpr int normalSumCount = 13;
 inline constexpr int sumLanes = 4;
 
 // As in ces.cpp: below this |u| ∂H/∂ρ comes from the series of d/du[K(u)/u].

@@ -14,6 +14,6 @@ void composite(const double* logRatio, std::size_t count, const Shape& shape, co
 // Adds rows [0, count) to `sums` (cesNormalSums' thirteen, each in sumLanes lanes), one packet of
 // four a step: lane j of each sum takes rows j, j + 4, … in order, as the two-doubles code does.
 // `count` a multiple of 4.
-void addNormalSums(const NormalRows& rows, std::size_t count, double (&sums)[13][sumLanes]);
+void addNormalSums(const NormalRows& rows, std::size_t count, double (&sums)[normalSumCount][sumLanes]);
 
 } // namespace isoquant::ces_rows::avx2
