@@ -144,6 +144,32 @@ BOOST_AUTO_TEST_CASE(a_subnormal_weight_gives_finite_columns)
     }
 }
 
+BOOST_AUTO_TEST_CASE(a_curvature_too_small_to_square_or_invert_gives_the_cobb_douglas_columns)
+{
+    // The packets take d/u = −1/ρ and 1/ρ² once. At |ρ| = 1e-200 the first is finite and the second
+    // overflows (every row's |u| is then far below the series limit, so ∂H/∂ρ comes from the
+    // series); at 1e-310 (subnormal) and the smallest double even 1/ρ would overflow, and ρ is
+    // taken as 0 (u would be subnormal, and 1/u overflow). Either way the columns are
+    // those of ρ = 0 to rounding: H = δ·d, ∂H/∂δ = d, ∂H/∂t = δ(1 − δ)·d, ∂H/∂ρ = −d²·δ(1 − δ)/2
+    // (the series' first term; the next is of order u).
+    const Eigen::VectorXd d = logRatios();
+    for (const double weight : {0.05, 0.4, 0.93})
+        for (const double curvature : {1e-200, -1e-200, 1e-310, -1e-310, 4.9e-324}) {
+            isoquant::CesColumns columns;
+            isoquant::evaluateComposite(d, weight, curvature, columns);
+            const double q = weight * (1 - weight);
+            double worst = 0;
+            for (Eigen::Index i = 0; i < d.size(); ++i) {
+                const double scale = std::max(std::fabs(d(i)), 1e-300);
+                worst = std::max({worst, std::fabs(columns.value(i) - weight * d(i)) / scale,
+                                  std::fabs(columns.byWeight(i) - d(i)) / scale,
+                                  std::fabs(columns.byLogit(i) - q * d(i)) / scale,
+                                  std::fabs(columns.byCurvature(i) + d(i) * d(i) * q / 2) / (scale * scale)});
+            }
+            BOOST_TEST(worst <= 4e-16, "delta " << weight << ", rho " << curvature << ": " << worst);
+        }
+}
+
 BOOST_AUTO_TEST_CASE(both_widths_and_every_length_give_the_same_bits)
 {
     if (!isoquant::column_kernels::fourDoublesAvailable())

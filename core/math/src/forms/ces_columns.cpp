@@ -5,6 +5,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 namespace isoquant {
 
@@ -45,11 +46,15 @@ void evaluateComposite(const Eigen::VectorXd& logRatio, double weight, double cu
     columns.byLogit.resize(n);
     columns.byWeight.resize(n);
     columns.byCurvature.resize(n);
-    // The packets take 1/(δ(1 − δ)) and 1/ρ once; a weight so near 0 or 1 that the first overflows
-    // (δ subnormal) goes through CesCompositeCurve's scalar forms, as δ = 0 or 1 does, and so does a
-    // ρ ≠ 0 whose reciprocal overflows. At ρ = 0 every u is 0 and the packets take the forms for u = 0.
-    if (weight > 0 && weight < 1 && std::isfinite(1 / (weight * (1 - weight))) &&
-        (curvature == 0 || std::isfinite(1 / curvature))) {
+    // A subnormal ρ is taken as 0: H and its derivatives differ from their ρ = 0 values by a
+    // relative O(ρ·d), below 1e-290, while u = −ρ·d would be subnormal too and carry only a few
+    // bits (1/ρ, which the packets take once, would overflow). At ρ = 0 every u is 0 and the
+    // packets take the forms for u = 0; 1/ρ² may overflow (|ρ| < 1.5e-154), but then every |u| is
+    // below the series limit and ∂H/∂ρ comes from the series.
+    if (std::fabs(curvature) < std::numeric_limits<double>::min()) curvature = 0;
+    // The packets take 1/(δ(1 − δ)) once; a weight so near 0 or 1 that it overflows (δ subnormal)
+    // goes through CesCompositeCurve's scalar forms, as δ = 0 or 1 does.
+    if (weight > 0 && weight < 1 && std::isfinite(1 / (weight * (1 - weight)))) {
         const ces_rows::Shape shape{weight,    1 - weight,     std::log(weight), std::log1p(-weight),
                                     curvature, -1 / curvature, 1 / (curvature * curvature)};
         const auto count = static_cast<std::size_t>(n);

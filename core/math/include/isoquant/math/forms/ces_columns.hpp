@@ -12,7 +12,8 @@
 // Each value is within a few units in the last place of the same formulas in long double
 // (tests/unit/test_ces_columns.cpp); CesCompositeCurve takes six scalar calls a row instead.
 // Where δ is 0 or 1, or so near that δ(1 − δ) is subnormal, the rows go through CesCompositeCurve
-// itself (its forms handle the infinite logs), as they do where ρ ≠ 0 is so small that 1/ρ overflows.
+// itself (its forms handle the infinite logs). A subnormal ρ is taken as 0 (the columns' values
+// differ from ρ = 0's by a relative O(ρ·d) < 1e-290).
 #pragma once
 
 #include "isoquant/math/numerics/column_kernels.hpp"
