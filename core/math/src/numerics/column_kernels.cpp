@@ -15,8 +15,8 @@ namespace {
 using Packet = Eigen::internal::packet_traits<double>::type;
 constexpr std::size_t packetSize = Eigen::internal::packet_traits<double>::size;
 
-// A packet a step; the last values (fewer than a packet) are padded with 1 (ln 1 = 0, exp 1 = e,
-// log1p 1 = ln 2: all harmless) and taken by the same packet kernel.
+// A packet a step; the last values (fewer than a packet) are padded with 1 (ln 1 = 0, exp 1 = e:
+// both harmless) and taken by the same packet kernel.
 template <typename Kernel> void eachPacket(const double* values, double* out, std::size_t count, Kernel kernel)
 {
     std::size_t i = 0;
@@ -32,7 +32,6 @@ template <typename Kernel> void eachPacket(const double* values, double* out, st
 
 Packet packetLog(const Packet& x) { return Eigen::internal::plog(x); }
 Packet packetExp(const Packet& x) { return Eigen::internal::pexp(x); }
-Packet packetLog1p(const Packet& x) { return log1p(x); }
 
 // eᶻ and eᶻ − 1 of a packet, stored; the last values padded likewise.
 void packetExpPairs(const double* values, double* exps, double* expm1s, std::size_t count)
@@ -57,12 +56,10 @@ using WideKernel = void (*)(const double*, double*, std::size_t);
 #if defined(ISOQUANT_HAVE_AVX2_KERNELS)
 constexpr WideKernel wideLogs = &avx2::logs;
 constexpr WideKernel wideExps = &avx2::exps;
-constexpr WideKernel wideLog1ps = &avx2::log1ps;
 constexpr auto wideExpPairs = &avx2::expsAndExpm1s;
 #else
 constexpr WideKernel wideLogs = nullptr;
 constexpr WideKernel wideExps = nullptr;
-constexpr WideKernel wideLog1ps = nullptr;
 constexpr void (*wideExpPairs)(const double*, double*, double*, std::size_t) = nullptr;
 #endif
 
@@ -101,11 +98,6 @@ void logs(const double* values, double* out, std::size_t count, Width width)
 void exps(const double* values, double* out, std::size_t count, Width width)
 {
     dispatch(values, out, count, width, wideExps, packetExp);
-}
-
-void log1ps(const double* values, double* out, std::size_t count, Width width)
-{
-    dispatch(values, out, count, width, wideLog1ps, packetLog1p);
 }
 
 void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count, Width width)

@@ -60,9 +60,4 @@ void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size
     if (i < count) step(i, Packet4d{});
 }
 
-void log1ps(const double* values, double* out, std::size_t count)
-{
-    eachPacket(values, out, count, [](const auto& x) { return log1p(x); });
-}
-
 } // namespace isoquant::column_kernels::avx2

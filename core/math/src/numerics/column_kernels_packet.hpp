@@ -1,8 +1,8 @@
-// expm1 and log1p of one packet of doubles, for both widths of the column kernels
-// (column_kernels.cpp with two doubles, column_kernels_avx2.cpp with four). Eigen 3.4 has packet
-// exp and log for doubles but takes expm1 and log1p one double at a time; these are Kahan's
-// corrections on top of Eigen's packet exp and log, the forms Eigen itself uses for floats
-// (generic_expm1, generic_plog1p), written here in an unnamed namespace so that each kernel file
+// expm1 of one packet of doubles, for both widths of the column kernels (column_kernels.cpp with
+// two doubles, column_kernels_avx2.cpp with four) and the ces rows. Eigen 3.4 has packet exp and
+// log for doubles but takes expm1 one double at a time; this is Kahan's correction on top of
+// Eigen's packet exp and log, the form Eigen itself uses for floats (generic_expm1), and a series
+// for |z| ≤ 1, written here in an unnamed namespace so that each kernel file
 // has its own copy (column_kernels_avx2.cpp may define no function shared with the rest of the
 // library). Separate multiplies and adds only, so both widths give the same bits.
 #pragma once
@@ -53,17 +53,6 @@ template <typename Packet> Packet expm1OnUnitInterval(const Packet& z)
     Packet odd = pset1<Packet>(inverseFactorials[15]);
     for (int j = 13; j >= 1; j -= 2) odd = padd(pmul(odd, square), pset1<Packet>(inverseFactorials[j]));
     return padd(z, pmul(square, padd(even, pmul(z, odd))));
-}
-
-// ln(1 + w) = w·ln(1 + w)/((1 + w) − 1) with 1 + w rounded, which cancels its rounding (Kahan),
-// except where 1 + w rounds to 1 (then w). For w > −1 finite. A few units in the last place.
-template <typename Packet> Packet log1p(const Packet& w)
-{
-    using namespace Eigen::internal;
-    const Packet one = pset1<Packet>(1.0);
-    const Packet sum = padd(w, one);
-    const Packet corrected = pmul(w, pdiv(plog(sum), psub(sum, one)));
-    return pselect(pcmp_eq(sum, one), w, corrected);
 }
 
 } // namespace

@@ -10,6 +10,5 @@ namespace isoquant::column_kernels::avx2 {
 void logs(const double* values, double* out, std::size_t count);
 void exps(const double* values, double* out, std::size_t count);
 void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count);
-void log1ps(const double* values, double* out, std::size_t count);
 
 } // namespace isoquant::column_kernels::avx2

@@ -23,10 +23,9 @@ bool fourDoublesAvailable();
 // tests: `fourDoubles` where the processor lacks AVX2 falls back to two.
 void logs(const double* values, double* out, std::size_t count, Width width = Width::automatic);
 void exps(const double* values, double* out, std::size_t count, Width width = Width::automatic);
-// out[i] = ln(1 + values[i]) for values[i] > −1; exps[i] = e^values[i] and expm1s[i] = e^values[i] − 1
-// from one exp. Kahan's corrections on the kernels' ln and exp (numerics/column_kernels_packet.hpp),
-// within 4 ulp; the same bits at both widths and positions, like ln and exp.
-void log1ps(const double* values, double* out, std::size_t count, Width width = Width::automatic);
+// exps[i] = e^values[i] and expm1s[i] = e^values[i] − 1 from one exp: Kahan's correction on the
+// kernels' exp (numerics/column_kernels_packet.hpp), within 4 ulp; the same bits at both widths
+// and positions, like ln and exp.
 void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count,
                    Width width = Width::automatic);
 
