@@ -54,8 +54,8 @@ struct CurvatureRows {
     // Work column of concentrated(), reused for every δ.
     mutable Eigen::ArrayXd column;
 
-    CurvatureRows(const CesLogs& searched, const Eigen::ArrayXd& centred, double rho)
-        : logs(searched), centredOutput(centred), outputSquares(centred.square().sum()), curvature(rho),
+    CurvatureRows(const CesLogs& searched, const Eigen::ArrayXd& centred, double squares, double rho)
+        : logs(searched), centredOutput(centred), outputSquares(squares), curvature(rho),
           column(searched.logRatio.size())
     {
         if (rho == 0) return;
@@ -119,9 +119,10 @@ ConcentratedFit concentrated(const CurvatureRows& rows, double weight)
 
 // Best δ for this ρ: the best logit of a coarse grid, refined by Brent's search between its
 // neighbours. The best point evaluated is kept as it is evaluated, not evaluated again.
-ConcentratedFit bestWeightFor(const CesLogs& logs, const Eigen::ArrayXd& centredOutput, double curvature)
+ConcentratedFit bestWeightFor(const CesLogs& logs, const Eigen::ArrayXd& centredOutput, double outputSquares,
+                              double curvature)
 {
-    const CurvatureRows rows(logs, centredOutput, curvature);
+    const CurvatureRows rows(logs, centredOutput, outputSquares, curvature);
     ConcentratedFit best;
     const auto sumOfSquares = [&](double logit) {
         ConcentratedFit fit = concentrated(rows, logistic(logit));
@@ -195,8 +196,10 @@ std::vector<Eigen::Vector4d> startValues(const CesLogs& logs, Eigen::Index searc
     if (const auto kmenta = kmentaStart(sample)) starts.push_back(*kmenta);
     const CesLogs searched = evenlySpacedRows(sample, gridRows);
     const Eigen::ArrayXd centredOutput = searched.logOutput.array() - searched.logOutput.mean();
+    const double outputSquares = centredOutput.square().sum();
     std::vector<ConcentratedFit> grid;
-    for (const double curvature : gridCurvatures) grid.push_back(bestWeightFor(searched, centredOutput, curvature));
+    for (const double curvature : gridCurvatures)
+        grid.push_back(bestWeightFor(searched, centredOutput, outputSquares, curvature));
     std::sort(grid.begin(), grid.end(),
               [](const ConcentratedFit& a, const ConcentratedFit& b) { return a.sumOfSquares < b.sumOfSquares; });
     for (std::size_t i = 0; i < std::min(gridStartsTried, grid.size()); ++i)
