@@ -1,6 +1,7 @@
 // Only in the benchmark extension: the add-in with two more cell functions, ISOQUANTFLOOR, which
 // receives PRODFIT's ranges and does nothing with them (the floor of any call over those ranges),
-// and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for the test of its release).
+// ISOQUANTFLOORCOLUMN, which returns its inputs' first column (the floor of any call whose result
+// is a column as long as its inputs), and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for the test of its release).
 #pragma once
 
 #include "production_functions.hxx"
@@ -19,6 +20,7 @@ public:
     {
     }
     double SAL_CALL benchFloor(const AnyTable& output, const AnyTable& inputs) override;
+    css::uno::Any SAL_CALL benchFloorColumn(const AnyTable& inputs) override;
     double SAL_CALL benchCacheBytes() override;
 };
 

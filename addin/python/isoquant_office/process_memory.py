@@ -27,3 +27,11 @@ def memory_mb(pid, field):
             if line.startswith(field + ":"):
                 return int(line.split()[1]) / 1024.0
     raise RuntimeError(field + " not found")
+
+
+def minor_faults(pid):
+    """The minor page faults of the process so far (/proc/<pid>/stat, field 10): each one a fresh
+    page the kernel had to supply."""
+    with open("/proc/%d/stat" % pid) as handle:
+        after_name = handle.read().rsplit(")", 1)[1].split()
+    return int(after_name[7])
