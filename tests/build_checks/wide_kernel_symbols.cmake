@@ -1,5 +1,6 @@
-# The AVX2 copies of the column kernels (core/math/src/numerics/column_kernels_avx2.cpp) and of the
-# CES composite's rows (core/math/src/forms/ces_rows_avx2.cpp) must define
+# The AVX2 copies of the column kernels (core/math/src/numerics/column_kernels_avx2.cpp), of the
+# normal equations' sums of products (numerics/column_products_avx2.cpp) and of the CES composite's
+# rows (core/math/src/forms/ces_rows_avx2.cpp) must define
 # nothing but its own functions: an inline function of Eigen or the standard library emitted there
 # would carry AVX2 code under a name the rest of the library shares, and the linker could keep that
 # copy for callers on processors without AVX2.
@@ -13,7 +14,7 @@ string(REPLACE "\n" ";" lines "${symbols}")
 set(own 0)
 foreach(line IN LISTS lines)
   if(line MATCHES "^[0-9a-f]+ [A-Za-z] (.*)$")
-    if(CMAKE_MATCH_1 MATCHES "^isoquant::(column_kernels|ces_rows)::avx2::")
+    if(CMAKE_MATCH_1 MATCHES "^isoquant::(column_kernels|column_products|ces_rows)::avx2::")
       math(EXPR own "${own} + 1")
     else()
       message(FATAL_ERROR "the AVX2 object defines a symbol that is not its own: ${CMAKE_MATCH_1}")

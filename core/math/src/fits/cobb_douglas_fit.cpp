@@ -34,11 +34,14 @@ public:
     {
         const Eigen::Index count = design.rows();
         design.col(0).setOnes();
-        if (first + count <= rowsKept_) {
+        if (first + count <= rowsKept_ || keepLogs(first, count)) {
             response = keptLogs_.col(0).segment(first, count);
             design.middleCols(1, slopes()) = keptLogs_.block(first, 1, count, slopes());
         } else {
-            takeLogs(first, design, response);
+            Eigen::MatrixXd logs(count, 1 + slopes());
+            takeLogs(first, logs);
+            response = logs.col(0);
+            design.middleCols(1, slopes()) = logs.rightCols(slopes());
         }
         // Without controls their matrix has no storage: a block of it would offset a null pointer.
         if (data_.controls.cols() > 0) design.rightCols(data_.controls.cols()) = data_.controls.middleRows(first, count);
@@ -48,6 +51,20 @@ public:
     std::optional<HeldColumns> heldColumns() const override
     {
         if (rowsKept_ < rows()) return std::nullopt;
+        return held();
+    }
+
+    std::optional<HeldColumns> holdRows(Eigen::Index first, Eigen::Index count) const override
+    {
+        if (first + count <= rowsKept_ || keepLogs(first, count)) return held();
+        return std::nullopt;
+    }
+
+private:
+    Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
+
+    HeldColumns held() const
+    {
         HeldColumns held;
         held.design.push_back(nullptr);
         for (Eigen::Index j = 0; j < slopes(); ++j) held.design.push_back(keptLogs_.col(1 + j).data());
@@ -56,19 +73,23 @@ public:
         return held;
     }
 
-private:
-    Eigen::Index slopes() const { return constantReturns_ ? data_.inputs.cols() - 1 : data_.inputs.cols(); }
-
-    // The logs go straight into the kept columns (each contiguous), then into the block.
-    void takeLogs(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> design, Eigen::Ref<Eigen::VectorXd> response) const
+    // Takes the logs of rows first … first + count − 1 into the kept columns, where the first pass
+    // has reached them (it takes the rows in order); false elsewhere.
+    bool keepLogs(Eigen::Index first, Eigen::Index count) const
     {
-        const Eigen::Index count = design.rows();
+        if (first != rowsKept_) return false;
+        if (first == 0) keptLogs_.resize(rows(), 1 + slopes());
+        takeLogs(first, keptLogs_.middleRows(first, count));
+        rowsKept_ = first + count;
+        return true;
+    }
+
+    // logs = [ln Y, ln x₁ … ] of rows first … first + logs.rows() − 1 (with constant returns imposed,
+    // each less ln x_k), each column contiguous.
+    void takeLogs(Eigen::Index first, Eigen::Ref<Eigen::MatrixXd> logs) const
+    {
+        const Eigen::Index count = logs.rows();
         const Eigen::Index k = data_.inputs.cols();
-        const bool keep = first == rowsKept_; // kept only as the first pass takes the rows in order
-        if (keep && first == 0) keptLogs_.resize(rows(), 1 + slopes());
-        Eigen::MatrixXd scratch;
-        if (!keep) scratch.resize(count, 1 + slopes());
-        auto logs = keep ? keptLogs_.middleRows(first, count) : scratch.middleRows(0, count);
         exactLogs(data_.output.data() + first, &logs(0, 0), count);
         for (Eigen::Index j = 0; j < slopes(); ++j) exactLogs(&data_.inputs(first, j), &logs(0, 1 + j), count);
         if (constantReturns_) {
@@ -76,9 +97,6 @@ private:
             exactLogs(&data_.inputs(first, k - 1), lastLog.data(), count);
             logs.colwise() -= lastLog;
         }
-        response = logs.col(0);
-        design.middleCols(1, slopes()) = logs.rightCols(slopes());
-        if (keep) rowsKept_ = first + count;
     }
 
     const ProductionData& data_;

@@ -1,10 +1,13 @@
 // The normal-equations route of the least-squares factor (least_squares_factor.hpp).
 #include "numerics/least_squares_factor.hpp"
 
+#include "isoquant/math/numerics/column_products.hpp"
+
 #include "isoquant/math/numerics/exact_elementwise.hpp"
 
 #include <Eigen/Cholesky>
 
+#include <array>
 #include <cmath>
 #include <limits>
 #include <stdexcept>
@@ -28,6 +31,40 @@ bool withinGramRange(double squaredNorm) { return squaredNorm >= std::ldexp(1.0,
 // holds the route when that limit is raised.
 constexpr double squaredConditionLimit = 1e-9;
 
+// The held columns at one block's first row, as the column_products kernels take them; a column of
+// ones (nullptr in HeldColumns) points to a block of ones.
+class HeldBlocks {
+public:
+    using Columns = std::array<const double*, column_products::maxColumns + 1>;
+
+    explicit HeldBlocks(Eigen::Index rowsPerBlock) : ones_(Eigen::VectorXd::Ones(rowsPerBlock)) {}
+
+    // The design's columns (at most maxColumns + 1), then the response.
+    Columns columnsWithResponse(const HeldColumns& held, Eigen::Index first) const
+    {
+        Columns columns{};
+        std::size_t j = 0;
+        for (; j < held.design.size(); ++j) columns[j] = held.design[j] == nullptr ? ones_.data() : held.design[j] + first;
+        columns[j] = held.response + first;
+        return columns;
+    }
+
+private:
+    Eigen::VectorXd ones_;
+};
+
+// gram's lower triangle += the products of `count` rows of columns (width = gram.rows()).
+void addHeldCrossProducts(const HeldBlocks::Columns& columns, Eigen::Index count, Eigen::MatrixXd& gram)
+{
+    constexpr int mostPairs = column_products::maxColumns * (column_products::maxColumns + 1) / 2;
+    double sums[mostPairs][column_products::lanes] = {};
+    const auto width = static_cast<int>(gram.rows());
+    column_products::addCrossProducts(columns.data(), width, static_cast<std::size_t>(count), sums);
+    int t = 0;
+    for (int j = 0; j < width; ++j)
+        for (int k = j; k < width; ++k, ++t) gram(k, j) += column_products::laneTotal(sums[t]);
+}
+
 } // namespace
 
 std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& rows, Eigen::Index rowsPerFill,
@@ -41,12 +78,24 @@ std::optional<DoubleRouteFactor> factorByNormalEquations(const RegressionRows& r
 
     // One pass: G = [X y]ᵀ[X y] and the response's moments. A value that is not finite makes its
     // column's diagonal entry so; so does a square that overflows.
-    Eigen::MatrixXd block(fillRows, width);
+    Eigen::MatrixXd block;
     Eigen::MatrixXd gram = Eigen::MatrixXd::Zero(width, width);
     DoubleRouteFactor result;
     double counted = 0;
+    const HeldBlocks heldBlocks(sumRows);
     for (Eigen::Index first = 0; first < n; first += fillRows) {
         const Eigen::Index filled = std::min(fillRows, n - first);
+        // Rows held in memory are summed where they are, a few columns at a time in one pass.
+        if (const std::optional<HeldColumns> held = width <= column_products::maxColumns ? rows.holdRows(first, filled)
+                                                                                         : std::nullopt) {
+            for (Eigen::Index sumFirst = first; sumFirst < first + filled; sumFirst += sumRows) {
+                const Eigen::Index count = std::min(sumRows, first + filled - sumFirst);
+                addToMoments(result.response, counted, Eigen::Map<const Eigen::VectorXd>(held->response + sumFirst, count));
+                addHeldCrossProducts(heldBlocks.columnsWithResponse(*held, sumFirst), count, gram);
+            }
+            continue;
+        }
+        block.resize(fillRows, width);
         rows.fill(first, block.topLeftCorner(filled, p), block.col(p).head(filled));
         for (Eigen::Index sumFirst = 0; sumFirst < filled; sumFirst += sumRows) {
             auto rowsOfBlock = block.middleRows(sumFirst, std::min(sumRows, filled - sumFirst));
@@ -120,8 +169,10 @@ double heldColumnDot(const HeldColumns& held, std::size_t j, Eigen::Index first,
 }
 
 // Xᵀr with r = y − X·b over held columns, in place (no block is copied, so the pass reads each value
-// once from memory), the residuals formed `rowsPerFill` rows at a time and summed `rowsPerSum` at a
-// time; visit(first, r) sees each summed block of residuals while it is in cache.
+// once from memory), summed `rowsPerSum` rows at a time; visit(first, r, Σr²) sees each block of
+// residuals while it is in cache. Up to maxColumns columns, one pass a block forms r, Xᵀr and Σr²
+// (column_products.hpp); wider designs form the residuals `rowsPerFill` rows at a time and then
+// each column's product.
 template <typename Visit>
 Eigen::VectorXd heldGradient(const HeldColumns& held, Eigen::Index rows, Eigen::Index rowsPerFill, Eigen::Index rowsPerSum,
                              const Eigen::VectorXd& coefficients, Visit&& visit)
@@ -130,16 +181,50 @@ Eigen::VectorXd heldGradient(const HeldColumns& held, Eigen::Index rows, Eigen::
     Eigen::VectorXd gradient = Eigen::VectorXd::Zero(p);
     const Eigen::Index fillRows = std::max<Eigen::Index>(1, std::min(rowsPerFill, rows));
     const Eigen::Index sumRows = std::max<Eigen::Index>(1, std::min(rowsPerSum, fillRows));
+    if (p <= column_products::maxColumns) {
+        const HeldBlocks blocks(sumRows);
+        Eigen::VectorXd residuals(sumRows);
+        for (Eigen::Index first = 0; first < rows; first += sumRows) {
+            const Eigen::Index count = std::min(sumRows, rows - first);
+            const HeldBlocks::Columns columns = blocks.columnsWithResponse(held, first);
+            double products[column_products::maxColumns][column_products::lanes] = {};
+            double squares[column_products::lanes] = {};
+            column_products::addResidualProducts(columns.data(), static_cast<int>(p), columns[static_cast<std::size_t>(p)],
+                                                 coefficients.data(), static_cast<std::size_t>(count), residuals.data(),
+                                                 products, squares);
+            for (Eigen::Index j = 0; j < p; ++j) gradient(j) += column_products::laneTotal(products[j]);
+            visit(first, residuals.head(count), column_products::laneTotal(squares));
+        }
+        return gradient;
+    }
     Eigen::VectorXd residuals(fillRows);
     forEachHeldBlock(held, rows, fillRows, coefficients, residuals, [&](Eigen::Index first, const auto& filled) {
         for (Eigen::Index sumFirst = 0; sumFirst < filled.size(); sumFirst += sumRows) {
             const auto blockResiduals = filled.segment(sumFirst, std::min(sumRows, filled.size() - sumFirst));
             for (Eigen::Index j = 0; j < p; ++j)
                 gradient(j) += heldColumnDot(held, static_cast<std::size_t>(j), first + sumFirst, blockResiduals);
-            visit(first + sumFirst, blockResiduals);
+            visit(first + sumFirst, blockResiduals, blockResiduals.squaredNorm());
         }
     });
     return gradient;
+}
+
+// Σ v and Σ xⱼ·v over the rows first … first + v.size() − 1 of the held design, added to total and
+// weighted (one pass up to maxColumns columns, column_products.hpp).
+void addHeldWeightedSums(const HeldColumns& held, const HeldBlocks& blocks, Eigen::Index first,
+                         const Eigen::Ref<const Eigen::VectorXd>& v, CompensatedSum& total, Eigen::VectorXd& weighted)
+{
+    const Eigen::Index p = weighted.size();
+    if (p > column_products::maxColumns) {
+        total.add(v.sum());
+        for (Eigen::Index j = 0; j < p; ++j) weighted(j) += heldColumnDot(held, static_cast<std::size_t>(j), first, v);
+        return;
+    }
+    double sums[column_products::maxColumns + 1][column_products::lanes] = {};
+    column_products::addWeightedSums(blocks.columnsWithResponse(held, first).data(), static_cast<int>(p), v.data(),
+                                     static_cast<std::size_t>(v.size()), sums);
+    total.add(column_products::laneTotal(sums[0]));
+    for (Eigen::Index j = 0; j < p; ++j) weighted(j) += column_products::laneTotal(sums[1 + j]);
 }
 
 struct RefinementStep {
@@ -166,7 +251,7 @@ void refineCoefficients(const RegressionRows& rows, Eigen::Index rowsPerFill, Ei
 {
     if (const std::optional<HeldColumns> held = rows.heldColumns()) {
         applyRefinement(factor, heldGradient(*held, rows.rows(), rowsPerFill, rowsPerBlock, factor.coefficients,
-                                             [](Eigen::Index, const auto&) {}));
+                                             [](Eigen::Index, const auto&, double) {}));
         return;
     }
     Eigen::VectorXd gradient = Eigen::VectorXd::Zero(rows.columns());
@@ -187,16 +272,17 @@ std::optional<ResidualSums> refineWithResidualSums(const HeldColumns& held, Eige
     CompensatedSum squares;
     CompensatedSum exps;
     Eigen::VectorXd weightedExps = Eigen::VectorXd::Zero(p); // Σ xᵢⱼ·e^{rᵢ}
-    Eigen::VectorXd blockExps(std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows)));
-    const Eigen::VectorXd gradient =
-        heldGradient(held, rows, rowsPerFill, rowsPerBlock, factor.coefficients, [&](Eigen::Index first, const auto& residuals) {
-            squares.add(residuals.squaredNorm());
+    const Eigen::Index blockRows = std::max<Eigen::Index>(1, std::min(rowsPerBlock, rows));
+    Eigen::VectorXd blockExps(blockRows);
+    const HeldBlocks blocks(blockRows);
+    const Eigen::VectorXd gradient = heldGradient(
+        held, rows, rowsPerFill, rowsPerBlock, factor.coefficients, [&](Eigen::Index first, const auto& residuals, double blockSquares) {
+            squares.add(blockSquares);
             if (!sumExps) return;
             auto blockOfExps = blockExps.head(residuals.size());
             blockOfExps = residuals;
             exactExpsInPlace(blockOfExps.data(), blockOfExps.size());
-            exps.add(blockOfExps.sum());
-            for (Eigen::Index j = 0; j < p; ++j) weightedExps(j) += heldColumnDot(held, static_cast<std::size_t>(j), first, blockOfExps);
+            addHeldWeightedSums(held, blocks, first, blockOfExps, exps, weightedExps);
         });
     const RefinementStep step = applyRefinement(factor, gradient);
     ResidualSums sums;

@@ -29,6 +29,14 @@ public:
                       Eigen::Ref<Eigen::VectorXd> response) const = 0;
     // The same rows as fill gives, held in memory, where they are (by default they are not).
     virtual std::optional<HeldColumns> heldColumns() const { return std::nullopt; }
+    // For a first pass that takes the rows in order, first … first + count − 1 next: makes them held
+    // and returns the held columns, valid for every row held so far, so that the pass reads them in
+    // place instead of a filled copy; nothing where they are not held (the pass then calls fill).
+    // By default: heldColumns().
+    virtual std::optional<HeldColumns> holdRows(Eigen::Index /*first*/, Eigen::Index /*count*/) const
+    {
+        return heldColumns();
+    }
 };
 
 // A design and response held in memory, as rows.
