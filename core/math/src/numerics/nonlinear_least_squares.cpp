@@ -183,9 +183,15 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
     Eigen::VectorXd parameters = start;
     Eigen::VectorXd residuals;
     Eigen::VectorXd nextResiduals; // the two residual buffers trade places at each step taken
+    // A point has settled when the step it would take is short (GaussNewtonOptions::settledLength).
+    const auto settled = [&](const GaussNewtonStep& from, double sumOfSquaresThere) {
+        return from.length <= options.settledLength * std::sqrt(sumOfSquaresThere / static_cast<double>(n - p));
+    };
     std::optional<GaussNewtonStep> step = stepAt(parameters, residuals);
     if (!step) return std::nullopt;
     double sumOfSquares = residuals.squaredNorm();
+    if (settled(*step, sumOfSquares))
+        return endedAt(std::move(parameters), std::move(residuals), NonlinearStatus::converged, "Gauss–Newton steps settled");
     for (int k = 0; k < options.maximumSteps; ++k) {
         Eigen::VectorXd next = parameters + step->direction;
         if (known && known(next))
@@ -194,8 +200,7 @@ std::optional<NonlinearLeastSquaresResult> minimizeByGaussNewton(const Nonlinear
         if (!following) return std::nullopt;
         const double nextSumOfSquares = nextResiduals.squaredNorm();
         if (nextSumOfSquares > sumOfSquares * (1 + options.sumOfSquaresSlack)) return std::nullopt;
-        const double deviation = std::sqrt(sumOfSquares / static_cast<double>(n - p));
-        if (step->length <= options.settledLength * deviation)
+        if (settled(*following, nextSumOfSquares))
             return endedAt(std::move(next), std::move(nextResiduals), NonlinearStatus::converged, "Gauss–Newton steps settled");
         if (!(following->length <= options.slowestShrink * step->length)) return std::nullopt; // stalled
         parameters = std::move(next);

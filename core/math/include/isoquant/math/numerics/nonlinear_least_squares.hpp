@@ -126,12 +126,14 @@ struct GaussNewtonOptions {
     // A step may raise the sum of squares by this relative amount at most (its rounding, near the
     // optimum); more means the linear model of r no longer holds over the step.
     double sumOfSquaresSlack = 1e-10;
-    // The run has settled once it has taken a step of at most this times s = √(RSS/(n − p)) in
-    // ‖J·Δ‖, a move of about this many standard errors; the point after that step is the result.
-    // Where each step shrinks the next by a factor of 100 or more, that point lies within 1e-12
-    // standard errors of the optimum, where the closing refinedByGaussNewton steps of a
-    // Levenberg–Marquardt run end too (at 1e-8 the estimates of the ces benchmark moved by 1e-11
-    // standard errors, 1.5e-13 relative, for one evaluation fewer) (common practice, no source).
+    // A point has settled, and is the result, where the step it would take next is at most this
+    // times s = √(RSS/(n − p)) in ‖J·Δ‖, a move of about this many standard errors. That step is
+    // known once the point is evaluated (the normal equations are formed with the residuals), so no
+    // evaluation is spent past it; and since every step taken was at most slowestShrink times the
+    // one before, the point lies within settledLength/(1 − slowestShrink) standard errors of the
+    // optimum the steps converge to (on the ces benchmark, where the last steps shrink by a factor
+    // of about 300, within 1e-11; before, the run took that step and one evaluation more, and its
+    // estimates moved by about 1e-13 relative) (common practice, no source).
     double settledLength = 1e-10;
     // Each step must be at most this fraction of the one before. Where the steps shrink more
     // slowly (a ridge of the sum of squares, far from a quadratic bowl) Gauss–Newton would need
@@ -142,7 +144,7 @@ struct GaussNewtonOptions {
 };
 
 // Gauss–Newton steps from a start already close to an optimum (the optimum of a sample of the
-// rows) until a step is shorter than settledLength; empty (and the caller runs Levenberg–Marquardt)
+// rows) until the point reached would take a step shorter than settledLength; empty (and the caller runs Levenberg–Marquardt)
 // where r or J is not finite, the scaled normal equations are too ill-conditioned, the sum of
 // squares rises, a step is not shorter than slowestShrink times the one before, or the steps have
 // not settled within maximumSteps. A step costs one residual and one Jacobian evaluation and a p × p
