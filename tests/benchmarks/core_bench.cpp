@@ -169,19 +169,35 @@ void printStreamingPasses(const isoquant::ProductionData& data, int runs)
     const double streamLogs =
         medianSeconds(runs, [&] { sink = data.output.array().log().sum() + data.inputs.array().log().sum(); });
     std::printf("stream_logs %ld %.6g %d\n", static_cast<long>(rows), streamLogs, runs);
-    // The same pass with the fit's own log kernels (numerics/column_kernels.hpp: four doubles a
-    // step where the processor has AVX2), each column into one reused buffer.
+}
+
+// The Cobb-Douglas fit, and the pass over the same numbers with the fit's own log kernels
+// (numerics/column_kernels.hpp: four doubles a step where the processor has AVX2; each column
+// into one reused buffer), timed in turn, one of each a round, so that a change of the machine's
+// pace during the run moves both medians alike (the target compares the two).
+isoquant::ProductionFit printFitAndKernelLogPass(const isoquant::ProductionData& data, int runs)
+{
+    const Eigen::Index rows = data.output.size();
     Eigen::VectorXd logs(rows);
     const auto sumOfLogs = [&logs, rows](const double* column) {
         isoquant::column_kernels::logs(column, logs.data(), static_cast<std::size_t>(rows));
         return logs.sum();
     };
-    const double streamKernelLogs = medianSeconds(runs, [&] {
-        double total = sumOfLogs(data.output.data());
-        for (Eigen::Index j = 0; j < data.inputs.cols(); ++j) total += sumOfLogs(data.inputs.col(j).data());
-        sink = total;
-    });
-    std::printf("stream_kernel_logs %ld %.6g %d\n", static_cast<long>(rows), streamKernelLogs, runs);
+    isoquant::ProductionFit fit;
+    std::vector<double> fitSeconds, passSeconds;
+    for (int run = 0; run < runs; ++run) {
+        fitSeconds.push_back(isoquant::benchmarks::secondsOf([&] { fit = isoquant::fitProduction(data, {}); }));
+        passSeconds.push_back(isoquant::benchmarks::secondsOf([&] {
+            double total = sumOfLogs(data.output.data());
+            for (Eigen::Index j = 0; j < data.inputs.cols(); ++j) total += sumOfLogs(data.inputs.col(j).data());
+            sink = total;
+        }));
+    }
+    std::printf("stream_kernel_logs %ld %.6g %d\n", static_cast<long>(rows), isoquant::benchmarks::median(passSeconds), runs);
+    std::printf("core_fit %ld %.6g %d elasticities", static_cast<long>(rows), isoquant::benchmarks::median(fitSeconds), runs);
+    for (Eigen::Index j = 1; j < fit.inference.estimates.size(); ++j) std::printf(" %.6f", fit.inference.estimates(j));
+    std::printf("\n");
+    return fit;
 }
 
 } // namespace
@@ -198,12 +214,7 @@ int main(int argc, char** argv)
         if (!rawFolder.empty()) writeRaw(data, rawFolder + "/cobb_douglas_" + std::to_string(rows) + ".f64");
 
         printStreamingPasses(data, runs);
-
-        isoquant::ProductionFit fit;
-        const double core = medianSeconds(runs, [&] { fit = isoquant::fitProduction(data, {}); });
-        std::printf("core_fit %ld %.6g %d elasticities", static_cast<long>(rows), core, runs);
-        for (Eigen::Index j = 1; j < fit.inference.estimates.size(); ++j) std::printf(" %.6f", fit.inference.estimates(j));
-        std::printf("\n");
+        const isoquant::ProductionFit fit = printFitAndKernelLogPass(data, runs);
 
         // The least-squares step alone on the log design, by each factorisation route.
         Eigen::MatrixXd design(rows, 4);
@@ -257,8 +268,13 @@ int main(int argc, char** argv)
         isoquant::ProductionFitOptions options;
         options.form = isoquant::ProductionForm::ces;
         isoquant::ProductionFit fit;
-        const double seconds = medianSeconds(runs, [&] { fit = isoquant::fitCes(data, options); });
-        std::printf("ces_fit 10000 %.6g %d evaluations %ld estimates", seconds, runs,
+        // A fit of about a millisecond: a median of `runs` of them spans a few milliseconds, which
+        // one hiccup of a shared machine can fill; cesRuns (run_benchmarks.py times scipy's fit as
+        // often) spans a fraction of a second.
+        constexpr int cesRuns = 101;
+        const int timedRuns = std::max(runs, cesRuns);
+        const double seconds = medianSeconds(timedRuns, [&] { fit = isoquant::fitCes(data, options); });
+        std::printf("ces_fit 10000 %.6g %d evaluations %ld estimates", seconds, timedRuns,
                     static_cast<long>(fit.ces->evaluations));
         for (Eigen::Index j = 0; j < fit.inference.estimates.size(); ++j) std::printf(" %.6f", fit.inference.estimates(j));
         std::printf("\n");
