@@ -23,6 +23,12 @@ Eigen::MatrixXd Technology::hessian(const Eigen::VectorXd& inputs) const
 double Technology::scaledExponential(double coefficient, long double logMagnitude)
 {
     if (coefficient == 0) return 0.0;
+    // Within |L| ≤ 4000, e^L and c·e^L (|c| from 5e-324 to 2e308) are normal long doubles, far from
+    // overflow and underflow (about e^±11356), so the product is formed directly: one extended log
+    // a value fewer, and the same extended precision before the one rounding to double.
+    constexpr long double directLimit = 4000;
+    if (std::fabs(logMagnitude) <= directLimit)
+        return static_cast<double>(static_cast<long double>(coefficient) * std::exp(logMagnitude));
     const long double magnitude = std::exp(std::log(std::fabs(static_cast<long double>(coefficient))) + logMagnitude);
     return std::copysign(static_cast<double>(magnitude), coefficient);
 }

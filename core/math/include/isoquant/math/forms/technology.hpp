@@ -34,8 +34,8 @@ public:
     Eigen::MatrixXd hessian(const Eigen::VectorXd& inputs) const;
 
 protected:
-    // c·exp(L) formed in logs (extended precision), so that it overflows or underflows only when
-    // the result does.
+    // c·exp(L) in extended precision, so that it overflows or underflows only when the result does
+    // (for |L| beyond the long double's safe range, formed in logs).
     static double scaledExponential(double coefficient, long double logMagnitude);
     // ∂²Y/∂xᵢ∂xⱼ = Y/(xᵢ·xⱼ)·(εᵢ·εⱼ + ∂εⱼ/∂ln xᵢ − [i = j]·εⱼ), from ln Y, the elasticities εᵢ, εⱼ
     // and the derivative of εⱼ by ln xᵢ.
