@@ -355,6 +355,40 @@ BOOST_AUTO_TEST_CASE(results_too_large_to_represent)
                "model: its returns to scale are too large to represent");
 }
 
+// From 100,000 rows a column is computed in two halves on two threads (production_functions.cpp):
+// the same numbers as rows taken one by one, and the first row too large to represent is named, as
+// if the rows were taken in order. Invented values: x from 1 to 2, 1e300 in the rows named.
+BOOST_AUTO_TEST_CASE(a_long_column_names_its_first_row_too_large_to_represent)
+{
+    const CellTable model = isoquant::testing::typedRange(
+        {{text("form"), text("cobb-douglas")}, {text("ln A"), 0.0}, {text("x"), 400.0}});
+    const std::size_t rows = 150000; // and a header row: data row i is sheet row i + 2
+    CellTable bundles(rows + 1, 1);
+    bundles.set(0, 0, "x");
+    for (std::size_t i = 0; i < rows; ++i) bundles.set(i + 1, 0, 1.0 + static_cast<double>(i) / rows);
+
+    const CellTable whole = isoquant::marginalProductColumn(model, bundles, 1.0);
+    BOOST_TEST_REQUIRE(whole.rows() == rows + 1);
+    std::size_t differing = 0;
+    for (std::size_t first = 0; first < rows; first += 50000) { // below the two-thread size: one thread
+        CellTable piece(50001, 1);
+        piece.set(0, 0, "x");
+        for (std::size_t i = 0; i < 50000; ++i) piece.set(i + 1, 0, bundles.number(first + i + 1, 0));
+        const CellTable part = isoquant::marginalProductColumn(model, piece, 1.0);
+        for (std::size_t i = 0; i < 50000; ++i)
+            differing += part.number(i + 1, 0) == whole.number(first + i + 1, 0) ? 0 : 1;
+    }
+    BOOST_TEST(differing == 0u);
+
+    bundles.set(120001, 0, 1e300); // data row 120,000: in the second half
+    bundles.set(130001, 0, 1e300);
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(model, bundles, 1.0); }) ==
+               "inputs: row 120002 gives a result too large to represent");
+    bundles.set(11, 0, 1e300); // data row 10: in the first half, named before the second half's
+    BOOST_TEST(messageOf([&] { isoquant::marginalProductColumn(model, bundles, 1.0); }) ==
+               "inputs: row 12 gives a result too large to represent");
+}
+
 BOOST_AUTO_TEST_SUITE_END()
 
 // The panel options are built on the cobb-douglas fit; the other forms refuse them, never ignore them.
