@@ -1,7 +1,8 @@
 // Only in the benchmark extension: the add-in with two more cell functions, ISOQUANTFLOOR, which
 // receives PRODFIT's ranges and does nothing with them (the floor of any call over those ranges),
 // ISOQUANTFLOORCOLUMN, which returns its inputs' first column (the floor of any call whose result
-// is a column as long as its inputs), and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for the test of its release).
+// is a column as long as its inputs), and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for
+// the test of its release).
 #pragma once
 
 #include "production_functions.hxx"

@@ -39,9 +39,11 @@ public:
 
     explicit HeldBlocks(Eigen::Index rowsPerBlock) : ones_(Eigen::VectorXd::Ones(rowsPerBlock)) {}
 
-    // The design's columns (at most maxColumns + 1), then the response.
+    // The design's columns (at most maxColumns), then the response.
     Columns columnsWithResponse(const HeldColumns& held, Eigen::Index first) const
     {
+        if (held.design.size() > static_cast<std::size_t>(column_products::maxColumns))
+            throw std::logic_error("HeldBlocks: more held columns than the kernels take");
         Columns columns{};
         std::size_t j = 0;
         for (; j < held.design.size(); ++j) columns[j] = held.design[j] == nullptr ? ones_.data() : held.design[j] + first;
