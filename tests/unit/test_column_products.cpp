@@ -16,7 +16,11 @@ namespace products = isoquant::column_products;
 using isoquant::column_kernels::Width;
 using Lanes = double[products::lanes];
 
-bool sameBits(const double* a, const double* b, std::size_t count) { return std::memcmp(a, b, count * sizeof(double)) == 0; }
+// (An empty vector's data() may be null, which memcmp may not be given even for no bytes.)
+bool sameBits(const double* a, const double* b, std::size_t count)
+{
+    return count == 0 || std::memcmp(a, b, count * sizeof(double)) == 0;
+}
 
 // Columns of `rows` values spread over several orders of magnitude and both signs (invented).
 std::vector<std::vector<double>> inventedColumns(int count, std::size_t rows, unsigned seed)
