@@ -1,8 +1,5 @@
 #include "benchmark_floor.hxx"
 
-#include "isoquant/sheet/arguments/argument_names.hpp"
-#include "call_guards.hxx"
-#include "cell_conversion.hxx"
 #include "function_arguments.hxx"
 
 namespace isoquant::addin {
@@ -15,6 +12,9 @@ std::vector<FunctionInfo> buildSpecificFunctions()
              {outputArgument, inputsArgument}},
             {"benchFloorColumn", "ISOQUANTFLOORCOLUMN",
              "Benchmark only: returns the first column of inputs as a column, with no model and no arithmetic.",
+             {inputsArgument}},
+            {"benchFloorNumbers", "ISOQUANTFLOORNUMBERS",
+             "Benchmark only: as ISOQUANTFLOORCOLUMN, with ranges taken as numbers (text and empty cells as 0).",
              {inputsArgument}},
             {"benchCacheBytes", "ISOQUANTCACHEBYTES", "Benchmark only: the bytes the fit cache holds now.", {}}};
 }
@@ -31,14 +31,28 @@ double BenchmarkProductionFunctions::benchFloor(const AnyTable& output, const An
 
 css::uno::Any BenchmarkProductionFunctions::benchFloorColumn(const AnyTable& inputs)
 {
-    // The same conversions as PRODMARGINAL's column (arguments to a CellTable, a column of numbers
-    // back), so that what an array formula of it costs is the add-in interface's share alone.
-    return guardedTable([&] {
-        const CellTable table = toCellTable(inputs, argument::inputs);
-        CellTable column(table.rows(), 1);
-        for (std::size_t row = 0; row < table.rows(); ++row) column.set(row, 0, table.at(row, 0));
-        return column;
-    });
+    // The least any function reading cells can do: each row's first cell tested for a number and
+    // read, and a column of numbers back (as PRODMARGINAL's goes back).
+    css::uno::Sequence<css::uno::Sequence<double>> column(inputs.getLength());
+    auto* rows = column.getArray();
+    for (sal_Int32 row = 0; row < inputs.getLength(); ++row) {
+        double number = 0;
+        if (inputs[row].getLength() > 0 && inputs[row][0].getValueTypeClass() == css::uno::TypeClass_DOUBLE)
+            number = *static_cast<const double*>(inputs[row][0].getValue());
+        rows[row] = css::uno::Sequence<double>(&number, 1);
+    }
+    return css::uno::Any(column);
+}
+
+css::uno::Sequence<css::uno::Sequence<double>>
+BenchmarkProductionFunctions::benchFloorNumbers(const css::uno::Sequence<css::uno::Sequence<double>>& inputs)
+{
+    css::uno::Sequence<css::uno::Sequence<double>> column(inputs.getLength());
+    auto* rows = column.getArray();
+    for (sal_Int32 row = 0; row < inputs.getLength(); ++row)
+        rows[row] = css::uno::Sequence<double>(inputs[row].getLength() > 0 ? &inputs[row][0] : nullptr,
+                                               inputs[row].getLength() > 0 ? 1 : 0);
+    return column;
 }
 
 double BenchmarkProductionFunctions::benchCacheBytes() { return static_cast<double>(fitCache().bytesHeld()); }

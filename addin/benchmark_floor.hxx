@@ -1,7 +1,8 @@
 // Only in the benchmark extension: the add-in with two more cell functions, ISOQUANTFLOOR, which
 // receives PRODFIT's ranges and does nothing with them (the floor of any call over those ranges),
 // ISOQUANTFLOORCOLUMN, which returns its inputs' first column (the floor of any call whose result
-// is a column as long as its inputs), and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for
+// is a column as long as its inputs), ISOQUANTFLOORNUMBERS, the same with ranges taken as numbers
+// (what that argument type would save), and ISOQUANTCACHEBYTES, the bytes the fit cache holds (for
 // the test of its release).
 #pragma once
 
@@ -22,6 +23,8 @@ public:
     }
     double SAL_CALL benchFloor(const AnyTable& output, const AnyTable& inputs) override;
     css::uno::Any SAL_CALL benchFloorColumn(const AnyTable& inputs) override;
+    css::uno::Sequence<css::uno::Sequence<double>> SAL_CALL
+    benchFloorNumbers(const css::uno::Sequence<css::uno::Sequence<double>>& inputs) override;
     double SAL_CALL benchCacheBytes() override;
 };
 
