@@ -86,11 +86,10 @@ def main():
             # Each round starts one side later, so that no side always follows the same one (the
             # office's memory grows with each million-row formula set and cleared, RESULTS.md).
             shift = (round_number - 1) % len(sides)
-            measured = {}
-            for name, measure in sides[shift:] + sides[:shift]:
-                measured[name] = measure()
+            order = sides[shift:] + sides[:shift]
+            measured = {name: measure() for name, measure in order}
             builtin_seconds = measured["built-in"][0]
-            print("round %d (order %s); load %s" % (round_number, ", ".join(name for name, _ in sides[shift:] + sides[:shift]),
+            print("round %d (order %s); load %s" % (round_number, ", ".join(name for name, _ in order),
                                                    open("/proc/loadavg").read().strip()))
             for name, _ in sides:
                 seconds, faults, values = measured[name]
