@@ -11,6 +11,7 @@
 #include <cstring>
 #include <limits>
 #include <random>
+#include <utility>
 #include <vector>
 
 namespace {
@@ -105,6 +106,70 @@ BOOST_AUTO_TEST_CASE(a_value_gets_the_same_bits_at_every_position_and_length)
                 const std::vector<double> logs = applied(&isoquant::column_kernels::logs, part, width);
                 for (std::size_t i = 0; i < length; ++i) BOOST_TEST(sameBits(logs[i], alone[first + i]));
             }
+    }
+}
+
+// logsOfNormals into a fresh column: its logs and its answer.
+std::pair<std::vector<double>, bool> logsOfNormals(const std::vector<double>& values, Width width)
+{
+    std::vector<double> out(values.size());
+    const bool normal = isoquant::column_kernels::logsOfNormals(values.data(), out.data(), values.size(), width);
+    return {out, normal};
+}
+
+BOOST_AUTO_TEST_CASE(logs_of_normals_are_the_kernels_logs_and_tell_any_value_below_the_normals)
+{
+    // The same bits as logs at both widths; true for every normal column (the smallest normal
+    // double included), and false once any value of the column, at any position and length (pairs
+    // of packets, a packet, the padded rest), is subnormal, zero, negative or NaN.
+    const std::vector<double> arguments = logArguments();
+    for (const Width width : {Width::twoDoubles, Width::fourDoubles}) {
+        const auto [all, allNormal] = logsOfNormals(arguments, width);
+        BOOST_TEST(allNormal);
+        const std::vector<double> expected = applied(&isoquant::column_kernels::logs, arguments, width);
+        std::size_t differing = 0;
+        for (std::size_t i = 0; i < arguments.size(); ++i) differing += sameBits(all[i], expected[i]) ? 0 : 1;
+        BOOST_TEST(differing == 0u);
+        BOOST_TEST(logsOfNormals({}, width).second);
+        for (std::size_t length = 1; length <= 19; ++length) {
+            const std::vector<double> normal(arguments.end() - static_cast<long>(length), arguments.end());
+            const auto [logs, isNormal] = logsOfNormals(normal, width);
+            BOOST_TEST(isNormal);
+            for (std::size_t i = 0; i < length; ++i) BOOST_TEST(sameBits(logs[i], expected[arguments.size() - length + i]));
+            for (const double below : {1e-310, 5e-324, 0.0, -2.0, std::numeric_limits<double>::quiet_NaN()})
+                for (std::size_t position = 0; position < length; ++position) {
+                    std::vector<double> column = normal;
+                    column[position] = below;
+                    BOOST_TEST(!logsOfNormals(column, width).second, "length " << length << ", position " << position
+                                                                             << ", value " << below);
+                }
+        }
+    }
+}
+
+BOOST_AUTO_TEST_CASE(exact_logs_apart_and_in_place_agree_around_a_subnormal)
+{
+    // exactLogs into another column checks the range inside the kernel; in place, before it. A
+    // subnormal anywhere sends the whole column to std::log either way (the reference, value by
+    // value); a normal column gets the kernel's bits either way.
+    const std::vector<double> arguments = logArguments();
+    const std::vector<double> column(arguments.begin(), arguments.begin() + 1001);
+    for (const std::size_t position : {std::size_t{0}, std::size_t{7}, std::size_t{8}, std::size_t{999}, std::size_t{1000}}) {
+        for (const bool subnormal : {false, true}) {
+            std::vector<double> values = column;
+            if (subnormal) values[position] = 3e-320;
+            std::vector<double> apart(values.size());
+            isoquant::exactLogs(values.data(), apart.data(), static_cast<Eigen::Index>(values.size()));
+            std::vector<double> inPlace = values;
+            isoquant::exactLogs(inPlace.data(), inPlace.data(), static_cast<Eigen::Index>(inPlace.size()));
+            const std::vector<double> kernel = applied(&isoquant::column_kernels::logs, values, Width::automatic);
+            std::size_t differing = 0;
+            for (std::size_t i = 0; i < values.size(); ++i) {
+                differing += sameBits(apart[i], inPlace[i]) ? 0 : 1;
+                differing += sameBits(apart[i], subnormal ? std::log(values[i]) : kernel[i]) ? 0 : 1;
+            }
+            BOOST_TEST(differing == 0u, "position " << position << (subnormal ? ", subnormal" : ", normal"));
+        }
     }
 }
 

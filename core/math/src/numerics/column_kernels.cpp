@@ -6,6 +6,7 @@
 #include <Eigen/Core>
 
 #include <algorithm>
+#include <limits>
 
 namespace isoquant::column_kernels {
 
@@ -55,10 +56,14 @@ void packetExpPairs(const double* values, double* exps, double* expm1s, std::siz
 using WideKernel = void (*)(const double*, double*, std::size_t);
 #if defined(ISOQUANT_HAVE_AVX2_KERNELS)
 constexpr WideKernel wideLogs = &avx2::logs;
+constexpr auto wideLogsOfNormals = &avx2::logsOfNormals;
+constexpr bool wideLogsOfNormalsBuilt = true;
 constexpr WideKernel wideExps = &avx2::exps;
 constexpr auto wideExpPairs = &avx2::expsAndExpm1s;
 #else
 constexpr WideKernel wideLogs = nullptr;
+constexpr bool (*wideLogsOfNormals)(const double*, double*, std::size_t) = nullptr;
+constexpr bool wideLogsOfNormalsBuilt = false;
 constexpr WideKernel wideExps = nullptr;
 constexpr void (*wideExpPairs)(const double*, double*, double*, std::size_t) = nullptr;
 #endif
@@ -93,6 +98,20 @@ bool fourDoublesAvailable()
 void logs(const double* values, double* out, std::size_t count, Width width)
 {
     dispatch(values, out, count, width, wideLogs, packetLog);
+}
+
+bool logsOfNormals(const double* values, double* out, std::size_t count, Width width)
+{
+    using namespace Eigen::internal;
+    const std::size_t done = wideShare(count, width, wideLogsOfNormalsBuilt);
+    const bool wideNormal = done == 0 || wideLogsOfNormals(values, out, done);
+    const Packet smallestNormal = pset1<Packet>(std::numeric_limits<double>::min());
+    Packet belowNormal = pzero(smallestNormal); // lanes where a value was below it, or NaN (padding is 1)
+    eachPacket(values + done, out + done, count - done, [&](const Packet& x) {
+        belowNormal = por(belowNormal, pcmp_lt_or_nan(x, smallestNormal));
+        return plog(x);
+    });
+    return wideNormal && predux(pand(belowNormal, pset1<Packet>(1.0))) == 0.0;
 }
 
 void exps(const double* values, double* out, std::size_t count, Width width)

@@ -10,6 +10,8 @@
 
 #include <Eigen/Core>
 
+#include <limits>
+
 #if !defined(__AVX2__) || defined(__FMA__)
 #error "column_kernels_avx2.cpp must be built with -mavx2 and without -mfma"
 #endif
@@ -37,6 +39,29 @@ void logs(const double* values, double* out, std::size_t count)
         using Eigen::internal::plog;
         return plog(x);
     });
+}
+
+bool logsOfNormals(const double* values, double* out, std::size_t count)
+{
+    namespace packets = Eigen::internal;
+    const Packet4d smallestNormal = packets::pset1<Packet4d>(std::numeric_limits<double>::min());
+    Packet4d belowNormal = packets::pzero(smallestNormal); // lanes where a value was below it, or NaN
+    const auto check = [&](const Packet4d& x) {
+        belowNormal = packets::por(belowNormal, packets::pcmp_lt_or_nan(x, smallestNormal));
+    };
+    std::size_t i = 0;
+    for (; i + 8 <= count; i += 8) {
+        const PacketPair x = packets::ploadu<PacketPair>(values + i);
+        check(x.low);
+        check(x.high);
+        pstoreu(out + i, plog(x));
+    }
+    if (i < count) {
+        const Packet4d x = packets::ploadu<Packet4d>(values + i);
+        check(x);
+        packets::pstoreu(out + i, packets::plog(x));
+    }
+    return !packets::predux_any(belowNormal);
 }
 
 void exps(const double* values, double* out, std::size_t count)

@@ -22,12 +22,17 @@ namespace isoquant {
 // ln of the smallest normal double, ln 2.2250738585072014e-308
 inline constexpr double logOfSmallestNormal = -708.39641853226410622;
 
-// out[i] = ln values[i] for a column held contiguously (out may be values), by the rule above.
+// out[i] = ln values[i] for a column held contiguously (out is values or does not overlap it), by
+// the rule above. Apart, the kernel checks the range as it goes and the rare column outside it is
+// taken again; in place, the range is checked first.
 inline void exactLogs(const double* values, double* out, Eigen::Index count)
 {
-    const Eigen::Map<const Eigen::ArrayXd> column(values, count);
-    if (count == 0 || column.minCoeff() >= std::numeric_limits<double>::min()) {
-        column_kernels::logs(values, out, static_cast<std::size_t>(count));
+    if (count == 0) return;
+    const auto size = static_cast<std::size_t>(count);
+    if (out != values) {
+        if (column_kernels::logsOfNormals(values, out, size)) return;
+    } else if (Eigen::Map<const Eigen::ArrayXd>(values, count).minCoeff() >= std::numeric_limits<double>::min()) {
+        column_kernels::logs(values, out, size);
         return;
     }
     for (Eigen::Index i = 0; i < count; ++i) out[i] = std::log(values[i]);
