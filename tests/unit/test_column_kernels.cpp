@@ -109,8 +109,8 @@ BOOST_AUTO_TEST_CASE(a_value_gets_the_same_bits_at_every_position_and_length)
     }
 }
 
-// logsOfNormals into a fresh column: its logs and its answer.
-std::pair<std::vector<double>, bool> logsOfNormals(const std::vector<double>& values, Width width)
+// column_kernels::logsOfNormals into a fresh column: its logs and its answer.
+std::pair<std::vector<double>, bool> checkedLogs(const std::vector<double>& values, Width width)
 {
     std::vector<double> out(values.size());
     const bool normal = isoquant::column_kernels::logsOfNormals(values.data(), out.data(), values.size(), width);
@@ -124,23 +124,23 @@ BOOST_AUTO_TEST_CASE(logs_of_normals_are_the_kernels_logs_and_tell_any_value_bel
     // of packets, a packet, the padded rest), is subnormal, zero, negative or NaN.
     const std::vector<double> arguments = logArguments();
     for (const Width width : {Width::twoDoubles, Width::fourDoubles}) {
-        const auto [all, allNormal] = logsOfNormals(arguments, width);
+        const auto [all, allNormal] = checkedLogs(arguments, width);
         BOOST_TEST(allNormal);
         const std::vector<double> expected = applied(&isoquant::column_kernels::logs, arguments, width);
         std::size_t differing = 0;
         for (std::size_t i = 0; i < arguments.size(); ++i) differing += sameBits(all[i], expected[i]) ? 0 : 1;
         BOOST_TEST(differing == 0u);
-        BOOST_TEST(logsOfNormals({}, width).second);
+        BOOST_TEST(checkedLogs({}, width).second);
         for (std::size_t length = 1; length <= 19; ++length) {
             const std::vector<double> normal(arguments.end() - static_cast<long>(length), arguments.end());
-            const auto [logs, isNormal] = logsOfNormals(normal, width);
+            const auto [logs, isNormal] = checkedLogs(normal, width);
             BOOST_TEST(isNormal);
             for (std::size_t i = 0; i < length; ++i) BOOST_TEST(sameBits(logs[i], expected[arguments.size() - length + i]));
             for (const double below : {1e-310, 5e-324, 0.0, -2.0, std::numeric_limits<double>::quiet_NaN()})
                 for (std::size_t position = 0; position < length; ++position) {
                     std::vector<double> column = normal;
                     column[position] = below;
-                    BOOST_TEST(!logsOfNormals(column, width).second, "length " << length << ", position " << position
+                    BOOST_TEST(!checkedLogs(column, width).second, "length " << length << ", position " << position
                                                                              << ", value " << below);
                 }
         }
