@@ -29,30 +29,38 @@ double BenchmarkProductionFunctions::benchFloor(const AnyTable& output, const An
     return static_cast<double>(output.getLength());
 }
 
+namespace {
+
+// A column of `rows` numbers, row r's being firstOf(r), as PRODMARGINAL's column goes back.
+template <typename FirstOf> css::uno::Sequence<css::uno::Sequence<double>> numberColumn(sal_Int32 rows, FirstOf firstOf)
+{
+    css::uno::Sequence<css::uno::Sequence<double>> column(rows);
+    auto* cells = column.getArray();
+    for (sal_Int32 row = 0; row < rows; ++row) {
+        const double number = firstOf(row);
+        cells[row] = css::uno::Sequence<double>(&number, 1);
+    }
+    return column;
+}
+
+} // namespace
+
 css::uno::Any BenchmarkProductionFunctions::benchFloorColumn(const AnyTable& inputs)
 {
-    // The least any function reading cells can do: each row's first cell tested for a number and
-    // read, and a column of numbers back (as PRODMARGINAL's goes back).
-    css::uno::Sequence<css::uno::Sequence<double>> column(inputs.getLength());
-    auto* rows = column.getArray();
-    for (sal_Int32 row = 0; row < inputs.getLength(); ++row) {
-        double number = 0;
-        if (inputs[row].getLength() > 0 && inputs[row][0].getValueTypeClass() == css::uno::TypeClass_DOUBLE)
-            number = *static_cast<const double*>(inputs[row][0].getValue());
-        rows[row] = css::uno::Sequence<double>(&number, 1);
-    }
-    return css::uno::Any(column);
+    // The least any function reading cells can do: each row's first cell tested for a number and read.
+    return css::uno::Any(numberColumn(inputs.getLength(), [&](sal_Int32 row) {
+        const auto& cells = inputs[row];
+        return cells.getLength() > 0 && cells[0].getValueTypeClass() == css::uno::TypeClass_DOUBLE
+                   ? *static_cast<const double*>(cells[0].getValue())
+                   : 0.0;
+    }));
 }
 
 css::uno::Sequence<css::uno::Sequence<double>>
 BenchmarkProductionFunctions::benchFloorNumbers(const css::uno::Sequence<css::uno::Sequence<double>>& inputs)
 {
-    css::uno::Sequence<css::uno::Sequence<double>> column(inputs.getLength());
-    auto* rows = column.getArray();
-    for (sal_Int32 row = 0; row < inputs.getLength(); ++row)
-        rows[row] = css::uno::Sequence<double>(inputs[row].getLength() > 0 ? &inputs[row][0] : nullptr,
-                                               inputs[row].getLength() > 0 ? 1 : 0);
-    return column;
+    return numberColumn(inputs.getLength(),
+                        [&](sal_Int32 row) { return inputs[row].getLength() > 0 ? inputs[row][0] : 0.0; });
 }
 
 double BenchmarkProductionFunctions::benchCacheBytes() { return static_cast<double>(fitCache().bytesHeld()); }

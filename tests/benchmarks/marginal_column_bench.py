@@ -37,20 +37,22 @@ def recalculations(doc, pid, runs):
     return statistics.median(seconds), ["%.2f s (%d)" % pair for pair in zip(seconds, faults)]
 
 
-def timed_array_formula(doc, pid, sheet, rows, formula, runs):
-    sheet.getCellRangeByPosition(5, 1, 5, rows).setArrayFormula(formula)
+def timed_and_cleared(doc, pid, sheet, rows, runs):
+    """Times the formulas now in column F, reads its first and last rows, and clears them."""
     seconds, faults = recalculations(doc, pid, runs)
     values = (sheet.getCellByPosition(5, 1).getValue(), sheet.getCellByPosition(5, rows).getValue())
     clear_formulas(sheet, rows + 1)
     return seconds, faults, values
+
+
+def timed_array_formula(doc, pid, sheet, rows, formula, runs):
+    sheet.getCellRangeByPosition(5, 1, 5, rows).setArrayFormula(formula)
+    return timed_and_cleared(doc, pid, sheet, rows, runs)
 
 
 def timed_filled_column(doc, pid, sheet, rows, runs):
     fill_down(doc, sheet, "F2", "=$Q$3*EXP($Q$2)*B2^$Q$3*C2^$Q$4*D2^$Q$5/B2", rows)
-    seconds, faults = recalculations(doc, pid, runs)
-    values = (sheet.getCellByPosition(5, 1).getValue(), sheet.getCellByPosition(5, rows).getValue())
-    clear_formulas(sheet, rows + 1)
-    return seconds, faults, values
+    return timed_and_cleared(doc, pid, sheet, rows, runs)
 
 
 def main():

@@ -55,15 +55,15 @@ void packetExpPairs(const double* values, double* exps, double* expm1s, std::siz
 
 using WideKernel = void (*)(const double*, double*, std::size_t);
 #if defined(ISOQUANT_HAVE_AVX2_KERNELS)
+constexpr bool wideKernelsBuilt = true;
 constexpr WideKernel wideLogs = &avx2::logs;
 constexpr auto wideLogsOfNormals = &avx2::logsOfNormals;
-constexpr bool wideLogsOfNormalsBuilt = true;
 constexpr WideKernel wideExps = &avx2::exps;
 constexpr auto wideExpPairs = &avx2::expsAndExpm1s;
 #else
+constexpr bool wideKernelsBuilt = false;
 constexpr WideKernel wideLogs = nullptr;
 constexpr bool (*wideLogsOfNormals)(const double*, double*, std::size_t) = nullptr;
-constexpr bool wideLogsOfNormalsBuilt = false;
 constexpr WideKernel wideExps = nullptr;
 constexpr void (*wideExpPairs)(const double*, double*, double*, std::size_t) = nullptr;
 #endif
@@ -103,7 +103,7 @@ void logs(const double* values, double* out, std::size_t count, Width width)
 bool logsOfNormals(const double* values, double* out, std::size_t count, Width width)
 {
     using namespace Eigen::internal;
-    const std::size_t done = wideShare(count, width, wideLogsOfNormalsBuilt);
+    const std::size_t done = wideShare(count, width, wideKernelsBuilt);
     const bool wideNormal = done == 0 || wideLogsOfNormals(values, out, done);
     const Packet smallestNormal = pset1<Packet>(std::numeric_limits<double>::min());
     Packet belowNormal = pzero(smallestNormal); // lanes where a value was below it, or NaN (padding is 1)
@@ -111,7 +111,7 @@ bool logsOfNormals(const double* values, double* out, std::size_t count, Width w
         belowNormal = por(belowNormal, pcmp_lt_or_nan(x, smallestNormal));
         return plog(x);
     });
-    return wideNormal && predux(pand(belowNormal, pset1<Packet>(1.0))) == 0.0;
+    return wideNormal && !predux_any(belowNormal);
 }
 
 void exps(const double* values, double* out, std::size_t count, Width width)
@@ -121,7 +121,7 @@ void exps(const double* values, double* out, std::size_t count, Width width)
 
 void expsAndExpm1s(const double* values, double* exps, double* expm1s, std::size_t count, Width width)
 {
-    const std::size_t done = wideShare(count, width, wideExpPairs != nullptr);
+    const std::size_t done = wideShare(count, width, wideKernelsBuilt);
     if (done > 0) wideExpPairs(values, exps, expm1s, done);
     packetExpPairs(values + done, exps + done, expm1s + done, count - done);
 }
